@@ -1,0 +1,35 @@
+import Link from "next/link";
+import { Wordmark } from "@/components/brand/wordmark";
+import { AppNav } from "@/components/shell/app-nav";
+import { can } from "@/lib/domain/permissions";
+import { ROLE_LABELS } from "@/lib/domain/roles";
+import { requireUser } from "@/lib/server/auth";
+
+export default async function AppLayout({ children }: { children: React.ReactNode }) {
+  // Convenience redirect only; every page, action and route checks again.
+  const viewer = await requireUser();
+  const links = [
+    { href: "/dashboard", label: "Projects" },
+    ...(can(viewer, "project:create") ? [{ href: "/projects/new", label: "New project" }] : []),
+    ...(can(viewer, "settings:view") ? [{ href: "/settings", label: "Settings" }] : []),
+  ];
+  return (
+    <div className="min-h-screen">
+      <header className="border-b border-paper-edge bg-paper-deep/60">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
+          <Link href="/dashboard" className="no-underline hover:no-underline" aria-label="Ohmstead projects">
+            <Wordmark />
+          </Link>
+          <AppNav links={links} />
+          <div className="ml-auto flex items-center gap-3 text-sm">
+            <span className="text-ink-soft" data-testid="viewer">
+              {viewer.name} · <span className="text-ink-faint">{ROLE_LABELS[viewer.role]}</span>
+            </span>
+            <Link href="/sign-out">Sign out</Link>
+          </div>
+        </div>
+      </header>
+      <main className="mx-auto max-w-6xl px-4 py-6">{children}</main>
+    </div>
+  );
+}

@@ -1,0 +1,81 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { StageBadge } from "@/components/ui/stage-badge";
+import { can } from "@/lib/domain/permissions";
+import { requireUser } from "@/lib/server/auth";
+import { listStageChanges } from "@/lib/server/data/projects";
+import { loadProjectOr404 } from "@/lib/server/pages";
+import { StageChangeForm } from "./_components/stage-change-form";
+import { StageTimeline } from "./_components/stage-timeline";
+
+export const metadata: Metadata = { title: "Project" };
+
+function Fact({ label, children }: { label: string; children: React.ReactNode }) {
+  return (
+    <div>
+      <dt className="text-xs uppercase tracking-wide text-ink-faint">{label}</dt>
+      <dd className="mt-0.5">{children ?? <span className="text-ink-faint">—</span>}</dd>
+    </div>
+  );
+}
+
+export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
+  const viewer = await requireUser();
+  const project = await loadProjectOr404(viewer, (await params).projectId);
+  const timeline = await listStageChanges({ viewer, projectId: project.id });
+  const amps = (v: number | null) => (v === null ? null : <span className="measure">{v} A</span>);
+  return (
+    <div className="space-y-6">
+      <div className="flex flex-wrap items-start justify-between gap-4">
+        <div>
+          <p className="measure text-sm text-ink-faint">Project No. {project.number}</p>
+          <h1>{project.customerName}</h1>
+          <p className="text-ink-soft">{project.address}</p>
+        </div>
+        {can(viewer, "project:edit") ? (
+          <Link href={`/projects/${project.id}/edit`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
+            Edit project
+          </Link>
+        ) : null}
+      </div>
+
+      <section className="panel flex flex-wrap items-center gap-x-8 gap-y-2" aria-label="Current stage">
+        <StageBadge stage={project.stage} />
+        <span className="text-sm text-ink-soft">
+          <span className="measure">{project.daysInStage}</span> day{project.daysInStage === 1 ? "" : "s"} in this stage
+        </span>
+        <span className="text-sm">
+          Next: <strong>{project.nextAction}</strong>
+        </span>
+      </section>
+
+      <div className="grid gap-6 lg:grid-cols-3">
+        <section className="panel lg:col-span-2" aria-labelledby="overview-heading">
+          <h2 id="overview-heading" className="mb-3">
+            Overview
+          </h2>
+          <dl className="grid gap-4 sm:grid-cols-2">
+            <Fact label="Customer contact">{[project.customerEmail, project.customerPhone].filter(Boolean).join(" · ") || null}</Fact>
+            <Fact label="AHJ">{project.jurisdiction ? `${project.jurisdiction.name} (NEC ${project.jurisdiction.necEdition})` : null}</Fact>
+            <Fact label="Utility">{project.utility?.name}</Fact>
+            <Fact label="Utility account / meter">
+              {project.utilityAccountNumber || project.meterNumber ? <span className="measure">{[project.utilityAccountNumber, project.meterNumber].filter(Boolean).join(" / ")}</span> : null}
+            </Fact>
+            <Fact label="Main breaker">{amps(project.mainBreakerA)}</Fact>
+            <Fact label="Busbar rating">{amps(project.busbarA)}</Fact>
+            <Fact label="Service">{project.serviceVoltageV ? <span className="measure">{project.serviceVoltageV} V, {project.servicePhases === 3 ? "three" : "single"} phase</span> : null}</Fact>
+            <Fact label="Coordinator / installer">
+              {project.coordinator?.name ?? "—"} / {project.installer?.name ?? "not assigned"}
+            </Fact>
+          </dl>
+        </section>
+
+        <section className="panel space-y-4" aria-labelledby="timeline-heading">
+          <h2 id="timeline-heading">Stage timeline</h2>
+          {can(viewer, "project:change-stage", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }) ? <StageChangeForm projectId={project.id} current={project.stage} /> : null}
+          <StageTimeline entries={timeline} />
+        </section>
+      </div>
+    </div>
+  );
+}

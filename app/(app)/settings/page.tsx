@@ -1,0 +1,30 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { can } from "@/lib/domain/permissions";
+import { requirePermission } from "@/lib/server/auth";
+
+export const metadata: Metadata = { title: "Settings" };
+
+export default async function SettingsPage() {
+  const viewer = await requirePermission("settings:view");
+  const sections = [
+    ...(can(viewer, "users:manage") ? [{ href: "/settings/users", title: "Users", text: "Invite people, change roles, deactivate accounts." }] : []),
+    { href: "/settings/jurisdictions", title: "Jurisdictions (AHJ)", text: "Adopted NEC edition and design temperatures of each authority." },
+    { href: "/settings/utilities", title: "Utilities", text: "Service voltages and notes of each utility." },
+  ];
+  return (
+    <div className="space-y-4">
+      <h1>Settings</h1>
+      <ul className="grid gap-4 sm:grid-cols-3">
+        {sections.map((s) => (
+          <li key={s.href} className="panel">
+            <Link href={s.href} className="font-semibold">
+              {s.title}
+            </Link>
+            <p className="mt-1 text-sm text-ink-soft">{s.text}</p>
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}

@@ -1,0 +1,53 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { isMailboxEnabled, listCaughtMessages } from "@/lib/server/services/mailbox";
+
+export const metadata: Metadata = { title: "Local mailbox", robots: { index: false } };
+export const dynamic = "force-dynamic";
+
+const URL_PATTERN = /(https?:\/\/[^\s<>"]+)/g;
+
+/** Plain text with its links made clickable. */
+function Linked({ text }: { text: string }) {
+  return (
+    <>
+      {text.split(URL_PATTERN).map((part, i) =>
+        i % 2 === 1 ? (
+          <a key={i} href={part}>
+            {part}
+          </a>
+        ) : (
+          <span key={i}>{part}</span>
+        ),
+      )}
+    </>
+  );
+}
+
+// Exists only while the local SMTP catcher runs (MAILBOX_URL set): a stand-in for everyone's inbox.
+export default async function MailboxPage() {
+  if (!isMailboxEnabled()) notFound();
+  const messages = await listCaughtMessages();
+  return (
+    <main className="mx-auto max-w-3xl space-y-4 px-4 py-8">
+      <div>
+        <h1>Local mailbox</h1>
+        <p className="text-sm text-ink-soft">Every e-mail the app sent while running with the local fakes. Nothing here left this machine.</p>
+      </div>
+      {messages.length === 0 ? <p className="text-ink-faint">No mail caught yet.</p> : null}
+      {messages.map((m) => (
+        <article key={m.id} className="panel" data-testid="caught-message">
+          <header className="mb-2 border-b border-paper-edge pb-2 text-sm">
+            <p className="font-semibold">{m.subject}</p>
+            <p className="text-ink-soft">
+              To <span className="measure">{m.to.join(", ")}</span> · from {m.from} · <time dateTime={m.receivedAt}>{new Date(m.receivedAt).toLocaleString("en-US")}</time>
+            </p>
+          </header>
+          <div className="whitespace-pre-wrap text-sm">
+            <Linked text={m.text} />
+          </div>
+        </article>
+      ))}
+    </main>
+  );
+}

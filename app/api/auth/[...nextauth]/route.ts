@@ -1,0 +1,6 @@
+import NextAuth from "next-auth";
+import { authOptions } from "@/lib/server/auth";
+
+// GET, POST /api/auth/* – next-auth's sign-in, session and sign-out endpoints
+const handler = NextAuth(authOptions);
+export { handler as GET, handler as POST };

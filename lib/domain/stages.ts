@@ -1,0 +1,53 @@
+/** The life of a project, in order. Keys are stored; labels are shown. */
+export const STAGES = [
+  "draft",
+  "design_checked",
+  "permit_filed",
+  "permit_issued",
+  "installed",
+  "inspection_passed",
+  "utility_filed",
+  "utility_approved",
+  "commissioned",
+  "pto_received",
+  "closed",
+] as const;
+
+export type Stage = (typeof STAGES)[number];
+
+export const STAGE_LABELS: Record<Stage, string> = {
+  draft: "Draft",
+  design_checked: "Design checked",
+  permit_filed: "Permit filed",
+  permit_issued: "Permit issued",
+  installed: "Installed",
+  inspection_passed: "Inspection passed",
+  utility_filed: "Utility filed",
+  utility_approved: "Utility approved",
+  commissioned: "Commissioned",
+  pto_received: "PTO received",
+  closed: "Closed",
+};
+
+/** What the office does next in each stage, shown on the dashboard. */
+export const NEXT_ACTION: Record<Stage, string> = {
+  draft: "Finish the design and run the review",
+  design_checked: "Assemble and file the permit packet",
+  permit_filed: "Follow up with the AHJ on plan review",
+  permit_issued: "Schedule the crew",
+  installed: "Book the AHJ inspection",
+  inspection_passed: "File the interconnection application",
+  utility_filed: "Follow up with the utility",
+  utility_approved: "Commission the system on site",
+  commissioned: "Send the certificate of completion, wait for PTO",
+  pto_received: "Hand over to the customer and close",
+  closed: "Nothing left to do",
+};
+
+export function isStage(value: string): value is Stage {
+  return (STAGES as readonly string[]).includes(value);
+}
+
+export function stageIndex(stage: Stage): number {
+  return STAGES.indexOf(stage);
+}

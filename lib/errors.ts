@@ -1,0 +1,26 @@
+export const ERROR_STATUS = {
+  UNAUTHORIZED: 401,
+  FORBIDDEN: 403,
+  NOT_FOUND: 404,
+  INVALID_INPUT: 422,
+  CONFLICT: 409,
+  LIMIT_EXCEEDED: 429,
+} as const;
+
+export type ErrorCode = keyof typeof ERROR_STATUS;
+
+/** An expected failure whose message may be shown to the user as it is. */
+export class AppError extends Error {
+  constructor(
+    public readonly code: ErrorCode,
+    message: string,
+    public readonly fieldErrors?: Record<string, string[]>,
+  ) {
+    super(message);
+    this.name = "AppError";
+  }
+}
+
+export function isAppError(error: unknown): error is AppError {
+  return error instanceof AppError;
+}

@@ -1,0 +1,209 @@
+import "server-only";
+import { literal, Op, type OrderItem, type Transaction, type WhereOptions } from "sequelize";
+import { Jurisdiction, Project, StageChange, User, Utility } from "@/models";
+import { can, type Viewer } from "@/lib/domain/permissions";
+import { NEXT_ACTION, STAGE_LABELS, STAGES, type Stage } from "@/lib/domain/stages";
+import { AppError } from "@/lib/errors";
+import type { ProjectListQuery, ProjectValues } from "@/lib/schemas/project";
+import { db } from "../db";
+import { diffFields, recordAudit } from "./audit";
+
+export type ProjectDto = {
+  id: string;
+  number: number;
+  customerName: string;
+  customerEmail: string | null;
+  customerPhone: string | null;
+  street: string;
+  city: string;
+  state: string;
+  postalCode: string;
+  address: string;
+  jurisdiction: { id: string; name: string; necEdition: number } | null;
+  utility: { id: string; name: string } | null;
+  utilityAccountNumber: string | null;
+  meterNumber: string | null;
+  mainBreakerA: number | null;
+  busbarA: number | null;
+  serviceVoltageV: number | null;
+  servicePhases: number | null;
+  stage: Stage;
+  stageLabel: string;
+  nextAction: string;
+  stageChangedAt: string;
+  daysInStage: number;
+  coordinator: { id: string; name: string } | null;
+  installer: { id: string; name: string } | null;
+  createdAt: string;
+  updatedAt: string;
+};
+
+const DAY_MS = 86_400_000;
+
+const INCLUDE = [
+  { model: Jurisdiction, as: "jurisdiction", attributes: ["id", "name", "necEdition"] },
+  { model: Utility, as: "utility", attributes: ["id", "name"] },
+  { model: User, as: "coordinator", attributes: ["id", "name"] },
+  { model: User, as: "installer", attributes: ["id", "name"] },
+];
+
+function toProjectDto(p: Project, now = Date.now()): ProjectDto {
+  return {
+    id: p.id,
+    number: p.number,
+    customerName: p.customerName,
+    customerEmail: p.customerEmail,
+    customerPhone: p.customerPhone,
+    street: p.street,
+    city: p.city,
+    state: p.state,
+    postalCode: p.postalCode,
+    address: `${p.street}, ${p.city}, ${p.state} ${p.postalCode}`,
+    jurisdiction: p.jurisdiction ? { id: p.jurisdiction.id, name: p.jurisdiction.name, necEdition: p.jurisdiction.necEdition } : null,
+    utility: p.utility ? { id: p.utility.id, name: p.utility.name } : null,
+    utilityAccountNumber: p.utilityAccountNumber,
+    meterNumber: p.meterNumber,
+    mainBreakerA: p.mainBreakerA,
+    busbarA: p.busbarA,
+    serviceVoltageV: p.serviceVoltageV,
+    servicePhases: p.servicePhases,
+    stage: p.stage as Stage,
+    stageLabel: STAGE_LABELS[p.stage as Stage],
+    nextAction: NEXT_ACTION[p.stage as Stage],
+    stageChangedAt: p.stageChangedAt.toISOString(),
+    daysInStage: Math.max(0, Math.floor((now - p.stageChangedAt.getTime()) / DAY_MS)),
+    coordinator: p.coordinator ? { id: p.coordinator.id, name: p.coordinator.name } : null,
+    installer: p.installer ? { id: p.installer.id, name: p.installer.name } : null,
+    createdAt: p.createdAt.toISOString(),
+    updatedAt: p.updatedAt.toISOString(),
+  };
+}
+
+/** The rows a viewer may see: their organization's, and for installers only those assigned to them. */
+function visibleTo(viewer: Viewer): WhereOptions<Project> {
+  return viewer.role === "installer" ? { organizationId: viewer.organizationId, installerId: viewer.id } : { organizationId: viewer.organizationId };
+}
+
+/** Stage sorts in pipeline order, days in stage by the date the stage began. */
+function orderFor({ sort, direction }: Pick<ProjectListQuery, "sort" | "direction">): OrderItem {
+  const dir = direction === "asc" ? "ASC" : "DESC";
+  if (sort === "stage") return [literal(`array_position(array[${STAGES.map((s) => `'${s}'`).join(",")}]::varchar[], "Project"."stage")`), dir];
+  if (sort === "daysInStage") return ["stageChangedAt", dir === "ASC" ? "DESC" : "ASC"];
+  return [sort, dir];
+}
+
+const escapeLike = (text: string) => text.replace(/[\\%_]/g, (c) => `\\${c}`);
+
+/** One page of the viewer's projects with search (customer, address, account number, project number) and stage filter. */
+export async function listProjects({ viewer, query }: { viewer: Viewer; query: ProjectListQuery }) {
+  db();
+  const where: WhereOptions<Project>[] = [visibleTo(viewer)];
+  if (query.stage) where.push({ stage: query.stage });
+  if (query.q) {
+    const like = `%${escapeLike(query.q)}%`;
+    const anyOf: WhereOptions<Project>[] = [
+      { customerName: { [Op.iLike]: like } },
+      { street: { [Op.iLike]: like } },
+      { city: { [Op.iLike]: like } },
+      { utilityAccountNumber: { [Op.iLike]: like } },
+    ];
+    if (/^\d{1,9}$/.test(query.q)) anyOf.push({ number: Number(query.q) });
+    where.push({ [Op.or]: anyOf });
+  }
+  const { rows, count } = await Project.findAndCountAll({
+    where: { [Op.and]: where },
+    include: INCLUDE,
+    order: [orderFor(query), ["number", "DESC"]],
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+    distinct: true,
+  });
+  const now = Date.now();
+  return { items: rows.map((r) => toProjectDto(r, now)), total: count, page: query.page, pageSize: query.pageSize, pageCount: Math.max(1, Math.ceil(count / query.pageSize)) };
+}
+
+async function findVisibleProject(viewer: Viewer, projectId: string, transaction?: Transaction) {
+  // A malformed id is just another project the viewer cannot see.
+  if (!/^[0-9a-f-]{36}$/i.test(projectId)) throw new AppError("NOT_FOUND", "No such project.");
+  const project = await Project.findOne({ where: { [Op.and]: [visibleTo(viewer), { id: projectId }] }, include: INCLUDE, transaction });
+  if (!project || !can(viewer, "project:view", project)) throw new AppError("NOT_FOUND", "No such project.");
+  return project;
+}
+
+/** One project the viewer may see; NOT_FOUND for missing and foreign ones alike. */
+export async function getProjectById({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<ProjectDto> {
+  db();
+  return toProjectDto(await findVisibleProject(viewer, projectId));
+}
+
+/** Refuses references to another organization's rows or to people in the wrong role. */
+async function assertReferences(viewer: Viewer, values: ProjectValues) {
+  const org = viewer.organizationId;
+  const fieldErrors: Record<string, string[]> = {};
+  const check = async (field: keyof ProjectValues, found: Promise<unknown>, message: string) => {
+    if (values[field] && !(await found)) fieldErrors[field] = [message];
+  };
+  await Promise.all([
+    check("jurisdictionId", Jurisdiction.findOne({ where: { id: values.jurisdictionId ?? "", organizationId: org } }), "Choose one of your jurisdictions"),
+    check("utilityId", Utility.findOne({ where: { id: values.utilityId ?? "", organizationId: org } }), "Choose one of your utilities"),
+    check("coordinatorId", User.findOne({ where: { id: values.coordinatorId ?? "", organizationId: org, role: { [Op.in]: ["admin", "coordinator"] }, isActive: true } }), "Choose an active coordinator"),
+    check("installerId", User.findOne({ where: { id: values.installerId ?? "", organizationId: org, role: "installer", isActive: true } }), "Choose an active installer"),
+  ]);
+  if (Object.keys(fieldErrors).length) throw new AppError("INVALID_INPUT", "Some choices are not valid.", fieldErrors);
+}
+
+export async function createProject({ viewer, values }: { viewer: Viewer; values: ProjectValues }): Promise<ProjectDto> {
+  const sequelize = db();
+  if (!can(viewer, "project:create")) throw new AppError("FORBIDDEN", "You cannot create projects.");
+  await assertReferences(viewer, values);
+  const id = await sequelize.transaction(async (transaction) => {
+    const project = await Project.create({ ...values, organizationId: viewer.organizationId, stage: "draft", stageChangedAt: new Date() }, { transaction });
+    await StageChange.create({ organizationId: viewer.organizationId, projectId: project.id, fromStage: null, toStage: "draft", changedById: viewer.id, note: "Project created" }, { transaction });
+    await recordAudit({ viewer, action: "project.created", entityType: "project", entityId: project.id, changes: diffFields({}, values) }, { transaction });
+    return project.id;
+  });
+  return getProjectById({ viewer, projectId: id });
+}
+
+export async function updateProject({ viewer, projectId, values }: { viewer: Viewer; projectId: string; values: ProjectValues }): Promise<ProjectDto> {
+  const sequelize = db();
+  await assertReferences(viewer, values);
+  await sequelize.transaction(async (transaction) => {
+    const project = await findVisibleProject(viewer, projectId, transaction);
+    if (!can(viewer, "project:edit", project)) throw new AppError("FORBIDDEN", "You cannot edit this project.");
+    const before = project.get({ plain: true }) as Record<string, unknown>;
+    await project.update(values, { transaction });
+    await recordAudit({ viewer, action: "project.updated", entityType: "project", entityId: project.id, changes: diffFields(before, values) }, { transaction });
+  });
+  return getProjectById({ viewer, projectId });
+}
+
+/** Moves a project to another stage; the stage change and its audit event commit together or not at all. */
+export async function changeProjectStage({ viewer, projectId, toStage, note }: { viewer: Viewer; projectId: string; toStage: Stage; note: string }): Promise<ProjectDto> {
+  const sequelize = db();
+  await sequelize.transaction(async (transaction) => {
+    const project = await findVisibleProject(viewer, projectId, transaction);
+    if (!can(viewer, "project:change-stage", project)) throw new AppError("FORBIDDEN", "You cannot change this project's stage.");
+    const fromStage = project.stage;
+    if (fromStage === toStage) throw new AppError("CONFLICT", `The project is already in “${STAGE_LABELS[toStage]}”.`);
+    const at = new Date();
+    await project.update({ stage: toStage, stageChangedAt: at }, { transaction });
+    await StageChange.create({ organizationId: viewer.organizationId, projectId, fromStage, toStage, changedById: viewer.id, note }, { transaction });
+    await recordAudit({ viewer, action: "project.stage-changed", entityType: "project", entityId: projectId, changes: { stage: { before: fromStage, after: toStage }, ...(note ? { note: { before: null, after: note } } : {}) } }, { transaction });
+  });
+  return getProjectById({ viewer, projectId });
+}
+
+export type StageChangeDto = { id: string; fromStage: Stage | null; toStage: Stage; toLabel: string; note: string; changedBy: string | null; createdAt: string };
+
+/** The project's stage timeline, oldest first. */
+export async function listStageChanges({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<StageChangeDto[]> {
+  db();
+  await findVisibleProject(viewer, projectId);
+  const rows = await StageChange.findAll({
+    where: { projectId, organizationId: viewer.organizationId },
+    include: [{ model: User, as: "changedBy", attributes: ["name"] }],
+    order: [["createdAt", "ASC"]],
+  });
+  return rows.map((r) => ({ id: r.id, fromStage: r.fromStage, toStage: r.toStage, toLabel: STAGE_LABELS[r.toStage], note: r.note, changedBy: r.changedBy?.name ?? null, createdAt: r.createdAt.toISOString() }));
+}

@@ -1,0 +1,50 @@
+import "server-only";
+import { randomUUID } from "node:crypto";
+import { NextResponse, type NextRequest } from "next/server";
+import { z } from "zod";
+import { can, type Permission, type Viewer } from "@/lib/domain/permissions";
+import { AppError, ERROR_STATUS, isAppError } from "@/lib/errors";
+import { fieldErrorsOf } from "./action";
+import { getViewer } from "./auth";
+
+/** The one mapping from thrown errors to JSON responses. */
+export function toErrorResponse(error: unknown): NextResponse {
+  if (error instanceof z.ZodError) {
+    return NextResponse.json({ error: { code: "INVALID_INPUT", message: "The request has invalid fields.", fieldErrors: fieldErrorsOf(error) } }, { status: 422 });
+  }
+  if (isAppError(error)) {
+    return NextResponse.json({ error: { code: error.code, message: error.message, ...(error.fieldErrors ? { fieldErrors: error.fieldErrors } : {}) } }, { status: ERROR_STATUS[error.code] });
+  }
+  const reference = randomUUID().slice(0, 8);
+  console.error(`[api ${reference}]`, error);
+  return NextResponse.json({ error: { code: "INTERNAL", message: `Unexpected error (reference ${reference}).` } }, { status: 500 });
+}
+
+const MAX_JSON_BYTES = 64 * 1024;
+
+/** Reads a JSON body, refusing oversize and malformed ones with a readable message. */
+export async function readJson(request: Request): Promise<unknown> {
+  const text = await request.text();
+  if (text.length > MAX_JSON_BYTES) throw new AppError("INVALID_INPUT", `The request body is larger than ${MAX_JSON_BYTES / 1024} KiB.`);
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new AppError("INVALID_INPUT", "The request body is not valid JSON.");
+  }
+}
+
+type Handler<P> = (request: NextRequest, context: { viewer: Viewer; params: P }) => Promise<Response>;
+
+/** Wraps a route handler: signed-in viewer with the permission, params resolved, errors mapped. */
+export function withAuth<P = Record<string, never>>(handler: Handler<P>, { permission }: { permission: Permission }) {
+  return async (request: NextRequest, context: { params: Promise<P> }) => {
+    try {
+      const viewer = await getViewer();
+      if (!viewer) throw new AppError("UNAUTHORIZED", "Sign in first.");
+      if (!can(viewer, permission)) throw new AppError("FORBIDDEN", "Your role does not allow this.");
+      return await handler(request, { viewer, params: await context.params });
+    } catch (error) {
+      return toErrorResponse(error);
+    }
+  };
+}

@@ -1,0 +1,12 @@
+import "server-only";
+import { createHash, randomBytes } from "node:crypto";
+
+/** A random URL-safe token of 256 bits; store only its hash. */
+export function newToken(): { token: string; tokenHash: string } {
+  const token = randomBytes(32).toString("base64url");
+  return { token, tokenHash: hashToken(token) };
+}
+
+export function hashToken(token: string): string {
+  return createHash("sha256").update(token).digest("hex");
+}

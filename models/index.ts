@@ -1,0 +1,29 @@
+import type { Sequelize } from "sequelize";
+import { AuditEvent } from "./audit-event";
+import { Invitation } from "./invitation";
+import { Jurisdiction } from "./jurisdiction";
+import { Organization } from "./organization";
+import { Project } from "./project";
+import { SignInAttempt } from "./sign-in-attempt";
+import { StageChange } from "./stage-change";
+import { User } from "./user";
+import { Utility } from "./utility";
+
+export { AuditEvent, Invitation, Jurisdiction, Organization, Project, SignInAttempt, StageChange, User, Utility };
+
+let initialized: Sequelize | null = null;
+
+/** Binds every model to one Sequelize instance and declares their associations. */
+export function initModels(sequelize: Sequelize) {
+  if (initialized === sequelize) return;
+  initialized = sequelize;
+  for (const model of [Organization, User, Invitation, SignInAttempt, Jurisdiction, Utility, Project, StageChange, AuditEvent]) {
+    model.initModel(sequelize);
+  }
+  Project.belongsTo(Jurisdiction, { as: "jurisdiction", foreignKey: "jurisdictionId" });
+  Project.belongsTo(Utility, { as: "utility", foreignKey: "utilityId" });
+  Project.belongsTo(User, { as: "coordinator", foreignKey: "coordinatorId" });
+  Project.belongsTo(User, { as: "installer", foreignKey: "installerId" });
+  StageChange.belongsTo(User, { as: "changedBy", foreignKey: "changedById" });
+  AuditEvent.belongsTo(User, { as: "actor", foreignKey: "actorId" });
+}

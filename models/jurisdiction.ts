@@ -1,0 +1,34 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import type { NecEdition } from "@/lib/domain/roles";
+
+/** An authority having jurisdiction (AHJ) and the site data its reviews need. */
+export class Jurisdiction extends Model<InferAttributes<Jurisdiction>, InferCreationAttributes<Jurisdiction>> {
+  declare id: CreationOptional<string>;
+  declare organizationId: string;
+  declare name: string;
+  declare state: string;
+  declare necEdition: NecEdition;
+  declare recordLowTempC: number;
+  declare highDesignTempC: number;
+  declare notes: string;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    Jurisdiction.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        organizationId: { type: DataTypes.UUID, allowNull: false },
+        name: { type: DataTypes.STRING(160), allowNull: false },
+        state: { type: DataTypes.STRING(2), allowNull: false },
+        necEdition: { type: DataTypes.INTEGER, allowNull: false },
+        recordLowTempC: { type: DataTypes.DOUBLE, allowNull: false },
+        highDesignTempC: { type: DataTypes.DOUBLE, allowNull: false },
+        notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "jurisdictions", underscored: true },
+    );
+  }
+}

@@ -1,0 +1,69 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
+import type { Stage } from "@/lib/domain/stages";
+import type { Jurisdiction } from "./jurisdiction";
+import type { Utility } from "./utility";
+import type { User } from "./user";
+
+export class Project extends Model<InferAttributes<Project>, InferCreationAttributes<Project>> {
+  declare id: CreationOptional<string>;
+  declare organizationId: string;
+  declare number: CreationOptional<number>;
+  declare customerName: string;
+  declare customerEmail: string | null;
+  declare customerPhone: string | null;
+  declare street: string;
+  declare city: string;
+  declare state: string;
+  declare postalCode: string;
+  declare jurisdictionId: string | null;
+  declare utilityId: string | null;
+  declare utilityAccountNumber: string | null;
+  declare meterNumber: string | null;
+  declare mainBreakerA: number | null;
+  declare busbarA: number | null;
+  declare serviceVoltageV: number | null;
+  declare servicePhases: number | null;
+  declare stage: CreationOptional<Stage>;
+  declare stageChangedAt: CreationOptional<Date>;
+  declare coordinatorId: string | null;
+  declare installerId: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  declare jurisdiction?: NonAttribute<Jurisdiction | null>;
+  declare utility?: NonAttribute<Utility | null>;
+  declare coordinator?: NonAttribute<User | null>;
+  declare installer?: NonAttribute<User | null>;
+
+  static initModel(sequelize: Sequelize) {
+    Project.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        organizationId: { type: DataTypes.UUID, allowNull: false },
+        number: { type: DataTypes.INTEGER, autoIncrement: true, allowNull: false },
+        customerName: { type: DataTypes.STRING(160), allowNull: false },
+        customerEmail: { type: DataTypes.STRING(254), allowNull: true },
+        customerPhone: { type: DataTypes.STRING(40), allowNull: true },
+        street: { type: DataTypes.STRING(200), allowNull: false },
+        city: { type: DataTypes.STRING(100), allowNull: false },
+        state: { type: DataTypes.STRING(2), allowNull: false },
+        postalCode: { type: DataTypes.STRING(10), allowNull: false },
+        jurisdictionId: { type: DataTypes.UUID, allowNull: true },
+        utilityId: { type: DataTypes.UUID, allowNull: true },
+        utilityAccountNumber: { type: DataTypes.STRING(40), allowNull: true },
+        meterNumber: { type: DataTypes.STRING(40), allowNull: true },
+        mainBreakerA: { type: DataTypes.INTEGER, allowNull: true },
+        busbarA: { type: DataTypes.INTEGER, allowNull: true },
+        serviceVoltageV: { type: DataTypes.INTEGER, allowNull: true },
+        servicePhases: { type: DataTypes.INTEGER, allowNull: true },
+        stage: { type: DataTypes.STRING(30), allowNull: false, defaultValue: "draft" },
+        stageChangedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+        coordinatorId: { type: DataTypes.UUID, allowNull: true },
+        installerId: { type: DataTypes.UUID, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "projects", underscored: true },
+    );
+  }
+}

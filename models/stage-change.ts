@@ -1,0 +1,32 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
+import type { Stage } from "@/lib/domain/stages";
+import type { User } from "./user";
+
+export class StageChange extends Model<InferAttributes<StageChange>, InferCreationAttributes<StageChange>> {
+  declare id: CreationOptional<string>;
+  declare organizationId: string;
+  declare projectId: string;
+  declare fromStage: Stage | null;
+  declare toStage: Stage;
+  declare changedById: string | null;
+  declare note: string;
+  declare createdAt: CreationOptional<Date>;
+
+  declare changedBy?: NonAttribute<User | null>;
+
+  static initModel(sequelize: Sequelize) {
+    StageChange.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        organizationId: { type: DataTypes.UUID, allowNull: false },
+        projectId: { type: DataTypes.UUID, allowNull: false },
+        fromStage: { type: DataTypes.STRING(30), allowNull: true },
+        toStage: { type: DataTypes.STRING(30), allowNull: false },
+        changedById: { type: DataTypes.UUID, allowNull: true },
+        note: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
+        createdAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "stage_changes", underscored: true, updatedAt: false },
+    );
+  }
+}

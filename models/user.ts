@@ -1,0 +1,33 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import type { Role } from "@/lib/domain/roles";
+
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<string>;
+  declare organizationId: string;
+  declare email: string;
+  declare name: string;
+  declare role: Role;
+  declare passwordHash: string | null;
+  declare isActive: CreationOptional<boolean>;
+  declare lastSignInAt: Date | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    User.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        organizationId: { type: DataTypes.UUID, allowNull: false },
+        email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        role: { type: DataTypes.STRING(20), allowNull: false },
+        passwordHash: { type: DataTypes.STRING(100), allowNull: true },
+        isActive: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        lastSignInAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "users", underscored: true },
+    );
+  }
+}

@@ -1,0 +1,27 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+
+/** An electric utility the organization files interconnection applications with. */
+export class Utility extends Model<InferAttributes<Utility>, InferCreationAttributes<Utility>> {
+  declare id: CreationOptional<string>;
+  declare organizationId: string;
+  declare name: string;
+  declare serviceVoltages: string[];
+  declare notes: string;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    Utility.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        organizationId: { type: DataTypes.UUID, allowNull: false },
+        name: { type: DataTypes.STRING(160), allowNull: false },
+        serviceVoltages: { type: DataTypes.ARRAY(DataTypes.STRING(40)), allowNull: false, defaultValue: [] },
+        notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "utilities", underscored: true },
+    );
+  }
+}

@@ -1,0 +1,91 @@
+// Migrating, seeding, building and serving the app as child processes.
+import { spawn, spawnSync } from "node:child_process";
+import { createHash } from "node:crypto";
+import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import { fail } from "./bootstrap.mjs";
+
+const bin = (root, name) => path.join(root, "node_modules", ".bin", name);
+
+export function runStep(root, label, command, args, env) {
+  const result = spawnSync(command, args, { cwd: root, stdio: "inherit", env: { ...process.env, ...env } });
+  if (result.status !== 0) fail(`${label} failed (exit ${result.status ?? result.signal}).`);
+}
+
+export function migrateAndSeed(root, env, { seed = true } = {}) {
+  runStep(root, "Migrations", bin(root, "tsx"), ["scripts/migrate.ts", "up"], env);
+  if (seed) runStep(root, "Demo seed", bin(root, "tsx"), ["scripts/seed.ts"], env);
+}
+
+const SOURCE_DIRS = ["app", "components", "lib", "models", "templates", "public"];
+const SOURCE_FILES = ["package-lock.json", "next.config.mjs", "tailwind.config.ts", "postcss.config.mjs", "tsconfig.json", "proxy.ts", "instrumentation.ts"];
+
+function sourceHash(root) {
+  const hash = createHash("sha256");
+  const visit = (rel) => {
+    const full = path.join(root, rel);
+    if (!existsSync(full)) return;
+    if (statSync(full).isDirectory()) {
+      for (const name of readdirSync(full).sort()) visit(path.join(rel, name));
+    } else {
+      hash.update(rel).update(readFileSync(full));
+    }
+  };
+  [...SOURCE_DIRS, ...SOURCE_FILES].forEach(visit);
+  return hash.digest("hex");
+}
+
+/** Runs `next build` only when the sources changed since the last build. */
+export function buildIfNeeded(root, env) {
+  const stamp = path.join(root, ".next", "ohmstead-source.sha256");
+  const want = sourceHash(root);
+  if (existsSync(stamp) && readFileSync(stamp, "utf8").trim() === want && existsSync(path.join(root, ".next", "BUILD_ID"))) {
+    console.log("• Build is up to date.");
+    return;
+  }
+  console.log("• Building the app (next build) …");
+  runStep(root, "next build", bin(root, "next"), ["build"], env);
+  writeFileSync(stamp, want + "\n");
+}
+
+/** Starts `next start` or `next dev` in its own process group so it can be stopped whole. */
+export function serveApp(root, env, { dev, port }) {
+  const args = dev ? ["dev", "-H", "127.0.0.1", "-p", String(port)] : ["start", "-H", "127.0.0.1", "-p", String(port)];
+  const child = spawn(bin(root, "next"), args, {
+    cwd: root,
+    env: { ...process.env, ...env, ...(dev ? { NODE_ENV: "development" } : {}) },
+    stdio: "inherit",
+    detached: true,
+  });
+  const stop = () =>
+    new Promise((resolve) => {
+      if (child.exitCode !== null || child.signalCode !== null) return resolve();
+      child.once("exit", () => resolve());
+      try {
+        process.kill(-child.pid, "SIGTERM");
+      } catch {
+        resolve();
+      }
+      setTimeout(() => {
+        try {
+          process.kill(-child.pid, "SIGKILL");
+        } catch {}
+      }, 5000).unref();
+    });
+  return { child, stop };
+}
+
+/** Waits until the app answers on its health route (any HTTP answer counts as started). */
+export async function waitForApp(url, child, timeoutMs = 120_000) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) fail("The app exited while starting.");
+    try {
+      await fetch(`${url}/api/health`);
+      return;
+    } catch {
+      await new Promise((r) => setTimeout(r, 300));
+    }
+  }
+  fail(`The app did not answer at ${url} within ${timeoutMs / 1000} s.`);
+}

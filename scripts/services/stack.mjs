@@ -1,0 +1,77 @@
+// Starts the local services one profile needs and returns the environment
+// the app and the scripts read. `dev` keeps its data between runs; `test`
+// uses its own ports and folders so both can run side by side.
+import { randomBytes } from "node:crypto";
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import { databaseUrl, ensureDatabase, startPostgres } from "./postgres.mjs";
+import { startMailCatcher } from "./mail-catcher.mjs";
+import { FAKE_ACCESS_KEY_ID, FAKE_SECRET_ACCESS_KEY, startStorageFake } from "../../storage-fake/server.mjs";
+
+export const PROFILES = {
+  dev: { app: 3000, postgres: 54329, storage: 4569, smtp: 2525, mailbox: 2526, database: "ohmstead" },
+  test: { app: 3100, postgres: 54339, storage: 4579, smtp: 2535, mailbox: 2536, database: "ohmstead_e2e" },
+};
+
+/** A local-only session secret kept in the git-ignored data folder. */
+function localSecret(dataRoot) {
+  const file = path.join(dataRoot, "auth-secret");
+  if (!existsSync(file)) writeFileSync(file, randomBytes(32).toString("base64url"), { mode: 0o600 });
+  return readFileSync(file, "utf8").trim();
+}
+
+export async function startStack({ root, profile, postgresBin, fresh = false }) {
+  const ports = PROFILES[profile];
+  const dataRoot = path.join(root, ".data", profile);
+  if (fresh) {
+    rmSync(path.join(dataRoot, "storage"), { recursive: true, force: true });
+    rmSync(path.join(dataRoot, "mail"), { recursive: true, force: true });
+  }
+  mkdirSync(dataRoot, { recursive: true });
+
+  const stops = [];
+  const stopAll = async () => {
+    for (const stop of stops.reverse()) {
+      try {
+        await stop();
+      } catch (error) {
+        console.error("stop failed:", error?.message ?? error);
+      }
+    }
+  };
+  try {
+    const postgres = await startPostgres({ bin: postgresBin, dataDir: path.join(dataRoot, "postgres"), port: ports.postgres });
+    stops.push(postgres.stop);
+    await ensureDatabase(ports.postgres, ports.database);
+
+    const bucket = "ohmstead-files";
+    const storage = await startStorageFake({ port: ports.storage, directory: path.join(dataRoot, "storage"), bucket });
+    stops.push(storage.stop);
+
+    const mail = await startMailCatcher({ smtpPort: ports.smtp, httpPort: ports.mailbox, directory: path.join(dataRoot, "mail") });
+    stops.push(mail.stop);
+
+    const appUrl = `http://127.0.0.1:${ports.app}`;
+    const env = {
+      NODE_ENV: "production",
+      NEXT_TELEMETRY_DISABLED: "1",
+      APP_URL: appUrl,
+      NEXTAUTH_URL: appUrl,
+      NEXTAUTH_SECRET: localSecret(dataRoot),
+      DATABASE_URL: databaseUrl(ports.postgres, ports.database),
+      S3_ENDPOINT: `http://127.0.0.1:${ports.storage}`,
+      S3_REGION: "us-east-1",
+      S3_BUCKET: bucket,
+      S3_ACCESS_KEY_ID: FAKE_ACCESS_KEY_ID,
+      S3_SECRET_ACCESS_KEY: FAKE_SECRET_ACCESS_KEY,
+      S3_FORCE_PATH_STYLE: "true",
+      SMTP_URL: `smtp://127.0.0.1:${ports.smtp}`,
+      MAIL_FROM: "Ohmstead <no-reply@ohmstead.local>",
+      MAILBOX_URL: `http://127.0.0.1:${ports.mailbox}`,
+    };
+    return { ports, env, stop: stopAll };
+  } catch (error) {
+    await stopAll();
+    throw error;
+  }
+}

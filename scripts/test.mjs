@@ -1,0 +1,69 @@
+// `npm test`: the same bootstrap as `npm start` for separate test services,
+// then every suite: unit, integration against a fresh PostgreSQL database,
+// end-to-end in Debian's Chromium against a production build.
+// Exits non-zero on the first failing suite.
+import path from "node:path";
+import { spawnSync } from "node:child_process";
+import { fileURLToPath } from "node:url";
+import { ensureNodeModules, ensurePostgresBinaries, ensureTestTools } from "./bootstrap.mjs";
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
+const only = process.argv.slice(2); // e.g. `npm test -- unit e2e`
+const wants = (suite) => only.length === 0 || only.includes(suite);
+
+ensureNodeModules(root);
+const postgresBin = ensurePostgresBinaries();
+ensureTestTools();
+
+const { startStack } = await import("./services/stack.mjs");
+const { recreateDatabase, databaseUrl } = await import("./services/postgres.mjs");
+const { migrateAndSeed, buildIfNeeded, serveApp, waitForApp } = await import("./app-process.mjs");
+
+const bin = (name) => path.join(root, "node_modules", ".bin", name);
+const results = [];
+let app;
+const stack = await startStack({ root, profile: "test", postgresBin, fresh: true });
+
+async function finish(code) {
+  await app?.stop();
+  await stack.stop();
+  console.log("\nSuites:");
+  for (const r of results) console.log(`  ${r.ok ? "✔" : "✖"} ${r.suite}`);
+  const passed = results.filter((r) => r.ok).length;
+  console.log(`\nsuites: ${passed} passed, ${results.length - passed} failed`);
+  process.exit(code);
+}
+process.on("SIGINT", () => finish(130));
+
+function suite(name, command, args, env) {
+  console.log(`\n━━ ${name} ━━`);
+  const result = spawnSync(command, args, { cwd: root, stdio: "inherit", env: { ...process.env, ...stack.env, ...env } });
+  const ok = result.status === 0;
+  results.push({ suite: name, ok });
+  return ok;
+}
+
+try {
+  if (wants("unit") && !suite("unit", bin("vitest"), ["run", "--project", "unit"], { NODE_ENV: "test" })) await finish(1);
+
+  if (wants("integration")) {
+    const database = "ohmstead_it";
+    await recreateDatabase(stack.ports.postgres, database);
+    const env = { NODE_ENV: "test", DATABASE_URL: databaseUrl(stack.ports.postgres, database) };
+    migrateAndSeed(root, env, { seed: false });
+    if (!suite("integration", bin("vitest"), ["run", "--project", "integration"], env)) await finish(1);
+  }
+
+  if (wants("e2e")) {
+    await recreateDatabase(stack.ports.postgres, stack.ports.database);
+    migrateAndSeed(root, stack.env);
+    buildIfNeeded(root, stack.env);
+    app = serveApp(root, stack.env, { dev: false, port: stack.ports.app });
+    await waitForApp(stack.env.APP_URL, app.child);
+    if (!suite("e2e", bin("playwright"), ["test"], { BASE_URL: stack.env.APP_URL, NODE_ENV: "test" })) await finish(1);
+  }
+  await finish(0);
+} catch (error) {
+  console.error(error);
+  await finish(1);
+}
