@@ -3,7 +3,7 @@
 // end-to-end in Debian's Chromium against a production build.
 // Exits non-zero on the first failing suite.
 import path from "node:path";
-import { spawnSync } from "node:child_process";
+import { spawn } from "node:child_process";
 import { fileURLToPath } from "node:url";
 import { ensureNodeModules, ensurePostgresBinaries, ensureTestTools } from "./bootstrap.mjs";
 
@@ -35,23 +35,25 @@ async function finish(code) {
 }
 process.on("SIGINT", () => finish(130));
 
-function suite(name, command, args, env) {
+/** Runs one suite without blocking this process, which also serves the storage and mail fakes. */
+async function suite(name, command, args, env) {
   console.log(`\n━━ ${name} ━━`);
-  const result = spawnSync(command, args, { cwd: root, stdio: "inherit", env: { ...process.env, ...stack.env, ...env } });
-  const ok = result.status === 0;
+  const child = spawn(command, args, { cwd: root, stdio: "inherit", env: { ...process.env, ...stack.env, ...env } });
+  const status = await new Promise((resolve) => child.on("exit", (code) => resolve(code)));
+  const ok = status === 0;
   results.push({ suite: name, ok });
   return ok;
 }
 
 try {
-  if (wants("unit") && !suite("unit", bin("vitest"), ["run", "--project", "unit"], { NODE_ENV: "test" })) await finish(1);
+  if (wants("unit") && !(await suite("unit", bin("vitest"), ["run", "--project", "unit"], { NODE_ENV: "test" }))) await finish(1);
 
   if (wants("integration")) {
     const database = "ohmstead_it";
     await recreateDatabase(stack.ports.postgres, database);
     const env = { NODE_ENV: "test", DATABASE_URL: databaseUrl(stack.ports.postgres, database) };
     migrateAndSeed(root, env, { seed: false });
-    if (!suite("integration", bin("vitest"), ["run", "--project", "integration"], env)) await finish(1);
+    if (!(await suite("integration", bin("vitest"), ["run", "--project", "integration"], env))) await finish(1);
   }
 
   if (wants("e2e")) {
@@ -60,7 +62,7 @@ try {
     buildIfNeeded(root, stack.env);
     app = serveApp(root, stack.env, { dev: false, port: stack.ports.app });
     await waitForApp(stack.env.APP_URL, app.child);
-    if (!suite("e2e", bin("playwright"), ["test"], { BASE_URL: stack.env.APP_URL, NODE_ENV: "test" })) await finish(1);
+    if (!(await suite("e2e", bin("playwright"), ["test"], { BASE_URL: stack.env.APP_URL, NODE_ENV: "test" }))) await finish(1);
   }
   await finish(0);
 } catch (error) {

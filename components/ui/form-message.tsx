@@ -2,7 +2,7 @@ export function FormMessage({ kind, children }: { kind: "error" | "info"; childr
   if (!children) return null;
   const tone = kind === "error" ? "border-result-fail/40 bg-result-fail/5 text-result-fail" : "border-paper-edge bg-paper-deep text-ink-soft";
   return (
-    <div role={kind === "error" ? "alert" : "status"} className={`rounded border px-3 py-2 text-sm ${tone}`}>
+    <div data-testid="form-message" role={kind === "error" ? "alert" : "status"} className={`rounded border px-3 py-2 text-sm ${tone}`}>
       {children}
     </div>
   );

@@ -140,14 +140,15 @@ export async function getProjectById({ viewer, projectId }: { viewer: Viewer; pr
 async function assertReferences(viewer: Viewer, values: ProjectValues) {
   const org = viewer.organizationId;
   const fieldErrors: Record<string, string[]> = {};
-  const check = async (field: keyof ProjectValues, found: Promise<unknown>, message: string) => {
-    if (values[field] && !(await found)) fieldErrors[field] = [message];
+  const check = async (field: keyof ProjectValues, find: (id: string) => Promise<unknown>, message: string) => {
+    const id = values[field];
+    if (typeof id === "string" && !(await find(id))) fieldErrors[field] = [message];
   };
   await Promise.all([
-    check("jurisdictionId", Jurisdiction.findOne({ where: { id: values.jurisdictionId ?? "", organizationId: org } }), "Choose one of your jurisdictions"),
-    check("utilityId", Utility.findOne({ where: { id: values.utilityId ?? "", organizationId: org } }), "Choose one of your utilities"),
-    check("coordinatorId", User.findOne({ where: { id: values.coordinatorId ?? "", organizationId: org, role: { [Op.in]: ["admin", "coordinator"] }, isActive: true } }), "Choose an active coordinator"),
-    check("installerId", User.findOne({ where: { id: values.installerId ?? "", organizationId: org, role: "installer", isActive: true } }), "Choose an active installer"),
+    check("jurisdictionId", (id) => Jurisdiction.findOne({ where: { id, organizationId: org } }), "Choose one of your jurisdictions"),
+    check("utilityId", (id) => Utility.findOne({ where: { id, organizationId: org } }), "Choose one of your utilities"),
+    check("coordinatorId", (id) => User.findOne({ where: { id, organizationId: org, role: { [Op.in]: ["admin", "coordinator"] }, isActive: true } }), "Choose an active coordinator"),
+    check("installerId", (id) => User.findOne({ where: { id, organizationId: org, role: "installer", isActive: true } }), "Choose an active installer"),
   ]);
   if (Object.keys(fieldErrors).length) throw new AppError("INVALID_INPUT", "Some choices are not valid.", fieldErrors);
 }

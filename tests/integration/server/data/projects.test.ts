@@ -1,0 +1,131 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { AuditEvent, StageChange } from "@/models";
+import { AppError } from "@/lib/errors";
+import { ProjectInput, ProjectListQuery } from "@/lib/schemas/project";
+import { changeProjectStage, createProject, getProjectById, listProjects, listStageChanges, updateProject } from "@/lib/server/data/projects";
+import { db } from "@/lib/server/db";
+import { closeDb } from "../../support/db";
+import { makeOrganization, makeProject, projectFormValues, type OrgFixture } from "../../support/fixtures";
+
+let acme: OrgFixture;
+let rival: OrgFixture;
+
+const query = (q: Partial<Record<string, unknown>> = {}) => ProjectListQuery.parse(q);
+const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+
+beforeAll(async () => {
+  acme = await makeOrganization("Acme");
+  rival = await makeOrganization("Rival");
+  await makeProject(acme, { customerName: "Hollis Brandt", utilityAccountNumber: "ZX-77001", stage: "permit_filed", installerId: acme.users.installer.id });
+  await makeProject(acme, { customerName: "Mira Stoneleigh", street: "9 Quarry Bend", stage: "draft" });
+  await makeProject(acme, { customerName: "Perrin 50%_Off", stage: "closed", installerId: acme.users.otherInstaller.id });
+  await makeProject(rival, { customerName: "Hollis Rival-Brandt" });
+});
+
+afterAll(async () => {
+  await closeDb();
+});
+
+describe("listProjects", () => {
+  it("shows only the viewer's organization", async () => {
+    const page = await listProjects({ viewer: acme.viewers.coordinator, query: query({ pageSize: 100 }) });
+    expect(page.total).toBe(3);
+    expect(page.items.every((p) => p.customerName !== "Hollis Rival-Brandt")).toBe(true);
+  });
+
+  it("shows installers only the projects assigned to them", async () => {
+    const page = await listProjects({ viewer: acme.viewers.installer, query: query() });
+    expect(page.items.map((p) => p.customerName)).toEqual(["Hollis Brandt"]);
+  });
+
+  it.each([
+    ["customer name", "stoneleigh", ["Mira Stoneleigh"]],
+    ["street", "quarry", ["Mira Stoneleigh"]],
+    ["utility account number", "zx-770", ["Hollis Brandt"]],
+    ["literal % and _", "50%_", ["Perrin 50%_Off"]],
+    ["nothing", "no such customer", []],
+  ])("searches by %s", async (_what, q, names) => {
+    const page = await listProjects({ viewer: acme.viewers.coordinator, query: query({ q }) });
+    expect(page.items.map((p) => p.customerName)).toEqual(names);
+  });
+
+  it("filters by stage and sorts stages in pipeline order", async () => {
+    const filtered = await listProjects({ viewer: acme.viewers.coordinator, query: query({ stage: "closed" }) });
+    expect(filtered.items.map((p) => p.stage)).toEqual(["closed"]);
+    const sorted = await listProjects({ viewer: acme.viewers.coordinator, query: query({ sort: "stage", direction: "asc" }) });
+    expect(sorted.items.map((p) => p.stage)).toEqual(["draft", "permit_filed", "closed"]);
+  });
+
+  it("pages", async () => {
+    const first = await listProjects({ viewer: acme.viewers.coordinator, query: query({ pageSize: 2, page: 1 }) });
+    const second = await listProjects({ viewer: acme.viewers.coordinator, query: query({ pageSize: 2, page: 2 }) });
+    expect(first.items).toHaveLength(2);
+    expect(second.items).toHaveLength(1);
+    expect(first.pageCount).toBe(2);
+    expect(new Set([...first.items, ...second.items].map((p) => p.id)).size).toBe(3);
+  });
+});
+
+describe("getProjectById", () => {
+  it("answers NOT_FOUND for another organization's project, an unassigned one, and a malformed id", async () => {
+    const foreign = await makeProject(rival);
+    const unassigned = await makeProject(acme);
+    expect(await code(getProjectById({ viewer: acme.viewers.admin, projectId: foreign.id }))).toBe("NOT_FOUND");
+    expect(await code(getProjectById({ viewer: acme.viewers.installer, projectId: unassigned.id }))).toBe("NOT_FOUND");
+    expect(await code(getProjectById({ viewer: acme.viewers.admin, projectId: "not-a-uuid" }))).toBe("NOT_FOUND");
+    expect((await getProjectById({ viewer: acme.viewers.coordinator, projectId: unassigned.id })).id).toBe(unassigned.id);
+  });
+});
+
+describe("createProject and updateProject", () => {
+  it("creates a draft with its first timeline entry and an audit event", async () => {
+    const values = ProjectInput.parse(projectFormValues(acme));
+    const project = await createProject({ viewer: acme.viewers.coordinator, values });
+    expect(project).toMatchObject({ stage: "draft", state: "CO", busbarA: 225, customerPhone: null, installer: null });
+    const timeline = await listStageChanges({ viewer: acme.viewers.coordinator, projectId: project.id });
+    expect(timeline.map((t) => t.toStage)).toEqual(["draft"]);
+    expect(await AuditEvent.count({ where: { entityId: project.id, action: "project.created" } })).toBe(1);
+  });
+
+  it("refuses another organization's jurisdiction and an installer in the coordinator field", async () => {
+    const values = ProjectInput.parse(projectFormValues(acme, { jurisdictionId: rival.jurisdiction.id, coordinatorId: acme.users.installer.id }));
+    const error = await createProject({ viewer: acme.viewers.coordinator, values }).catch((e) => e);
+    expect(error).toBeInstanceOf(AppError);
+    expect(error.code).toBe("INVALID_INPUT");
+    expect(Object.keys(error.fieldErrors).sort()).toEqual(["coordinatorId", "jurisdictionId"]);
+  });
+
+  it("records what changed on update", async () => {
+    const project = await createProject({ viewer: acme.viewers.coordinator, values: ProjectInput.parse(projectFormValues(acme)) });
+    await updateProject({ viewer: acme.viewers.coordinator, projectId: project.id, values: ProjectInput.parse(projectFormValues(acme, { mainBreakerA: "175" })) });
+    const event = await AuditEvent.findOne({ where: { entityId: project.id, action: "project.updated" } });
+    expect(event?.changes).toEqual({ mainBreakerA: { before: 200, after: 175 } });
+  });
+
+  it("does not let a rival update the project", async () => {
+    const project = await makeProject(acme);
+    const values = ProjectInput.parse(projectFormValues(rival));
+    expect(await code(updateProject({ viewer: rival.viewers.admin, projectId: project.id, values }))).toBe("NOT_FOUND");
+  });
+});
+
+describe("changeProjectStage", () => {
+  it("moves the stage and writes the timeline entry and the audit event together", async () => {
+    const project = await makeProject(acme, { stage: "design_checked" });
+    const moved = await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "permit_filed", note: "Filed at the counter" });
+    expect(moved.stage).toBe("permit_filed");
+    expect(moved.daysInStage).toBe(0);
+    const change = await StageChange.findOne({ where: { projectId: project.id, toStage: "permit_filed" } });
+    expect(change).toMatchObject({ fromStage: "design_checked", note: "Filed at the counter", changedById: acme.users.coordinator.id });
+    const audit = await AuditEvent.findOne({ where: { entityId: project.id, action: "project.stage-changed" } });
+    expect(audit?.changes.stage).toEqual({ before: "design_checked", after: "permit_filed" });
+  });
+
+  it("refuses installers and the same stage, and changes nothing", async () => {
+    const project = await makeProject(acme, { stage: "installed", installerId: acme.users.installer.id });
+    expect(await code(changeProjectStage({ viewer: acme.viewers.installer, projectId: project.id, toStage: "closed", note: "" }))).toBe("FORBIDDEN");
+    expect(await code(changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "installed", note: "" }))).toBe("CONFLICT");
+    expect(await StageChange.count({ where: { projectId: project.id } })).toBe(0);
+    expect((await getProjectById({ viewer: acme.viewers.coordinator, projectId: project.id })).stage).toBe("installed");
+  });
+});

@@ -1,0 +1,35 @@
+import { describe, expect, it } from "vitest";
+import { can, type Permission } from "@/lib/domain/permissions";
+import type { Role } from "@/lib/domain/roles";
+
+const viewer = (role: Role) => ({ id: "u1", organizationId: "org-a", role });
+
+describe("can", () => {
+  it.each<[Role, Permission, boolean]>([
+    ["admin", "users:manage", true],
+    ["coordinator", "users:manage", false],
+    ["installer", "users:manage", false],
+    ["coordinator", "project:create", true],
+    ["installer", "project:create", false],
+    ["installer", "project:edit", false],
+    ["installer", "project:change-stage", false],
+    ["installer", "settings:view", false],
+    ["coordinator", "settings:view", true],
+    ["installer", "project:view", true],
+  ])("%s → %s is %s", (role, permission, expected) => {
+    expect(can(viewer(role), permission)).toBe(expected);
+  });
+
+  it("refuses every role another organization's project", () => {
+    for (const role of ["admin", "coordinator", "installer"] as const) {
+      expect(can(viewer(role), "project:view", { organizationId: "org-b", installerId: "u1" })).toBe(false);
+    }
+  });
+
+  it("lets installers see only projects assigned to them", () => {
+    expect(can(viewer("installer"), "project:view", { organizationId: "org-a", installerId: "u1" })).toBe(true);
+    expect(can(viewer("installer"), "project:view", { organizationId: "org-a", installerId: "u2" })).toBe(false);
+    expect(can(viewer("installer"), "project:view", { organizationId: "org-a", installerId: null })).toBe(false);
+    expect(can(viewer("coordinator"), "project:view", { organizationId: "org-a", installerId: null })).toBe(true);
+  });
+});
