@@ -1,0 +1,90 @@
+import { DesignInputError, requireFinite, requirePositive, requireWholePositive } from "./errors";
+import { type Design, NEC_EDITIONS, type Site } from "./types";
+
+// Data-sheet names for the fields, so an error reads the way the entry form does.
+const NAMES: Record<string, string> = {
+  powerW: "rated power", vocV: "open-circuit voltage (Voc)", vmpV: "maximum-power voltage (Vmp)",
+  iscA: "short-circuit current (Isc)", impA: "maximum-power current (Imp)", lengthIn: "length", widthIn: "width",
+  weightLb: "weight", vocTempCoeff: "Voc temperature coefficient", vmpTempCoeff: "Vmp temperature coefficient",
+  pmaxTempCoeffPctPerC: "Pmax temperature coefficient", acPowerW: "AC power rating",
+  acOutputCurrentA: "continuous output current", acVoltageV: "AC voltage", maxDcInputV: "maximum DC input voltage",
+  mpptMinV: "MPPT minimum voltage", mpptMaxV: "MPPT maximum voltage", maxInputIscA: "maximum input short-circuit current",
+  regulatedStringV: "regulated string voltage", maxStringPowerW: "maximum power per string",
+  maxOutputCurrentA: "maximum output current", shutdownOutputV: "voltage in shutdown",
+};
+
+/** Site data every check depends on; throws DesignInputError naming the field. */
+export function validateSite(site: Site): void {
+  if (!NEC_EDITIONS.includes(site.necEdition)) {
+    throw new DesignInputError("site.necEdition", `NEC edition ${String(site.necEdition)} is not supported; choose 2017, 2020 or 2023.`);
+  }
+  requireFinite(site.recordLowTempC, "site.recordLowTempC", "The record low temperature");
+  requireFinite(site.highDesignTempC, "site.highDesignTempC", "The high design temperature");
+  if (site.recordLowTempC > site.highDesignTempC) {
+    throw new DesignInputError("site.recordLowTempC", "The record low temperature is above the high design temperature; check the two entries.");
+  }
+  if (site.peakSunHours !== undefined) requirePositive(site.peakSunHours, "site.peakSunHours", "Peak sun hours");
+}
+
+/**
+ * Design data that every check leans on (module, inverters, service, module count). Faults
+ * confined to one string, run or roof plane are left to that item's check, which reports them
+ * as a failed result instead of stopping the whole review.
+ */
+export function validateDesign(design: Design): void {
+  const m = design.module;
+  for (const key of ["powerW", "vocV", "vmpV", "iscA", "impA", "lengthIn", "widthIn", "weightLb"] as const) {
+    requirePositive(m[key], `module.${key}`, `The module's ${NAMES[key]}`);
+  }
+  for (const [key, value] of [
+    ["vocTempCoeff", m.vocTempCoeff?.value],
+    ["vmpTempCoeff", m.vmpTempCoeff?.value],
+    ["pmaxTempCoeffPctPerC", m.pmaxTempCoeffPctPerC],
+  ] as const) {
+    if (value !== undefined) requireFinite(value, `module.${key}`, `The module's ${NAMES[key]}`);
+  }
+  optionalPositive(m.maxSeriesFuseA, "module.maxSeriesFuseA", "The module's maximum series fuse");
+  if (m.vmpV > m.vocV || m.impA > m.iscA) {
+    throw new DesignInputError("module", "The module's Vmp and Imp must not exceed its Voc and Isc; check the data sheet entries.");
+  }
+  if (design.inverters.length === 0) throw new DesignInputError("inverters", "The design has no inverter.");
+  const ids = new Set<string>();
+  for (const inv of design.inverters) {
+    if (ids.has(inv.id)) throw new DesignInputError("inverters", `Two inverters share the id "${inv.id}".`);
+    ids.add(inv.id);
+    requireWholePositive(inv.quantity, `inverters.${inv.id}.quantity`, `The quantity of ${inv.model}`);
+    for (const key of ["acPowerW", "acOutputCurrentA", "acVoltageV", "maxDcInputV"] as const) {
+      requirePositive(inv[key], `inverters.${inv.id}.${key}`, `The ${inv.model}'s ${NAMES[key]}`);
+    }
+    for (const key of ["mpptMinV", "mpptMaxV", "maxInputIscA", "regulatedStringV", "maxStringPowerW"] as const) {
+      optionalPositive(inv[key], `inverters.${inv.id}.${key}`, `The ${inv.model}'s ${NAMES[key]}`);
+    }
+  }
+  const d = design.moduleLevelDevice;
+  if (d) {
+    requirePositive(d.maxInputV, "moduleLevelDevice.maxInputV", `The ${d.model}'s maximum input voltage`);
+    for (const key of ["maxInputIscA", "maxOutputCurrentA", "shutdownOutputV"] as const) {
+      optionalPositive(d[key], `moduleLevelDevice.${key}`, `The ${d.model}'s ${NAMES[key]}`);
+    }
+  }
+  optionalPositive(design.attachmentRatedLoadLb, "attachmentRatedLoadLb", "The attachment rating");
+  if (design.cellTempRiseC !== undefined) requireFinite(design.cellTempRiseC, "cellTempRiseC", "The cell temperature rise");
+  const hasStringInverter = design.inverters.some((i) => i.kind === "string");
+  if (hasStringInverter && design.strings.length === 0) {
+    throw new DesignInputError("strings", "The design has a string inverter but no strings.");
+  }
+  const s = design.service;
+  requirePositive(s.busbarA, "service.busbarA", "The busbar rating");
+  requirePositive(s.pvBreakerA, "service.pvBreakerA", "The PV breaker rating");
+  requirePositive(s.voltageV, "service.voltageV", "The service voltage");
+  if (s.mainBreakerA !== null) requirePositive(s.mainBreakerA, "service.mainBreakerA", "The main breaker rating");
+  for (const b of s.otherBreakersA ?? []) requirePositive(b, "service.otherBreakersA", "Each breaker rating on the bus");
+  optionalPositive(s.serviceConductorAmpacityA, "service.serviceConductorAmpacityA", "The service conductor ampacity");
+  if (design.roofPlanes.length === 0) throw new DesignInputError("roofPlanes", "The design has no modules: add a roof plane with its module count.");
+  const modules = design.roofPlanes.reduce((sum, p) => sum + p.moduleCount, 0);
+  if (!(modules > 0)) throw new DesignInputError("roofPlanes", "The design has zero modules; enter the module count of each roof plane.");
+}
+
+function optionalPositive(value: number | undefined, field: string, what: string): void {
+  if (value !== undefined) requirePositive(value, field, what);
+}

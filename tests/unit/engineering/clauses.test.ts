@@ -1,0 +1,38 @@
+import { describe, expect, test } from "vitest";
+import { CLAUSES, clause, clauses } from "@/lib/engineering";
+
+describe("clause numbering by NEC edition (REFERENCE.md; marked entries from memory)", () => {
+  test.each([
+    ["maxVoltage", 2017, "NEC 2017 690.7(A)"],
+    ["maxVoltage", 2023, "NEC 2023 690.7(A)"],
+    ["ampacityTable", 2017, "NEC 2017 Table 310.15(B)(16)"], // from memory
+    ["ampacityTable", 2020, "NEC 2020 Table 310.16"],
+    ["tempCorrection", 2017, "NEC 2017 Table 310.15(B)(2)(a)"],
+    ["tempCorrection", 2023, "NEC 2023 Table 310.15(B)(1)"],
+    ["rooftopAdder", 2017, "NEC 2017 310.15(B)(3)(c)"],
+    ["rooftopAdder", 2020, "NEC 2020 310.15(B)(2)"],
+    ["cccAdjustment", 2017, "NEC 2017 Table 310.15(B)(3)(a)"],
+    ["cccAdjustment", 2023, "NEC 2023 Table 310.15(C)(1)"],
+    ["supplySide", 2017, "NEC 2017 705.12(A)"],
+    ["supplySide", 2020, "NEC 2020 705.11"],
+    ["loadSide100", 2017, "NEC 2017 705.12(B)(2)(3)(a)"],
+    ["loadSide120", 2020, "NEC 2020 705.12(B)(3)(2)"],
+    ["loadSideSum", 2023, "NEC 2023 705.12(B)(3)"], // 2023 numbering from memory
+    ["acOcpd", 2017, "NEC 2017 690.9(B)"], // from memory
+    ["acOcpd", 2020, "NEC 2020 705.30(B)"], // REFERENCE.md: 2020 705.30
+    ["egcTable", 2020, "NEC 2020 Table 250.122"],
+  ] as const)("%s in %d → %s", (id, edition, expected) => {
+    expect(clause(id, edition)).toBe(expected);
+  });
+
+  test("several clauses of one edition read as one citation", () => {
+    expect(clauses(2020, "conductorSizing", "terminals")).toBe("NEC 2020 690.8(B), 110.14(C)");
+  });
+
+  test("every clause has a number for every supported edition", () => {
+    for (const byEdition of Object.values(CLAUSES)) {
+      expect(Object.keys(byEdition).sort()).toEqual(["2017", "2020", "2023"]);
+      for (const ref of Object.values(byEdition)) expect(ref).toMatch(/^(Table )?\d{3}\.\d+|^Chapter 9/);
+    }
+  });
+});
