@@ -2,6 +2,7 @@
 // Debian's server binaries on loopback. initdb refuses root, so as root the
 // cluster belongs to the `postgres` user.
 import { spawnSync } from "node:child_process";
+import { createHash } from "node:crypto";
 import { chmodSync, chownSync, existsSync, mkdirSync } from "node:fs";
 import path from "node:path";
 import pg from "pg";
@@ -23,8 +24,25 @@ function postgresIds() {
  * Starts (creating on first use) the cluster in `dataDir` on 127.0.0.1:`port`.
  * Returns a stop function, or a no-op when the cluster was already running.
  */
-export async function startPostgres({ bin, dataDir, port }) {
+/**
+ * As root the cluster belongs to `postgres`, which must be able to reach its
+ * folder. A checkout under a private home (such as /root) is out of its reach;
+ * the cluster then lives in postgres's own home, in a folder named after the checkout.
+ */
+function reachableDataDir(dataDir) {
+  if (!isRoot) return dataDir;
+  mkdirSync(path.dirname(dataDir), { recursive: true });
+  const probe = spawnSync("runuser", ["-u", "postgres", "--", "test", "-x", path.dirname(dataDir)]);
+  if (probe.status === 0) return dataDir;
+  const tag = createHash("sha256").update(dataDir).digest("hex").slice(0, 12);
+  const fallback = path.join("/var/lib/postgresql/ohmstead", tag);
+  console.log(`• The postgres user cannot reach ${path.dirname(dataDir)}; keeping this cluster in ${fallback}.`);
+  return fallback;
+}
+
+export async function startPostgres({ bin, dataDir: wanted, port }) {
   const pgCtl = path.join(bin, "pg_ctl");
+  const dataDir = reachableDataDir(wanted);
   if (!existsSync(path.join(dataDir, "PG_VERSION"))) {
     mkdirSync(dataDir, { recursive: true });
     if (isRoot) {
@@ -37,7 +55,7 @@ export async function startPostgres({ bin, dataDir, port }) {
   }
   const status = asOwner(pgCtl, ["-D", dataDir, "status"]);
   if (status.status === 0) {
-    return { port, stop: async () => {}, startedHere: false };
+    return { port, dataDir, stop: async () => {}, startedHere: false };
   }
   const options = `-p ${port} -h 127.0.0.1 -k ${dataDir}`;
   const start = asOwner(pgCtl, ["-D", dataDir, "-l", path.join(dataDir, "server.log"), "-o", options, "-w", "start"]);
@@ -46,6 +64,7 @@ export async function startPostgres({ bin, dataDir, port }) {
   }
   return {
     port,
+    dataDir,
     startedHere: true,
     stop: async () => {
       asOwner(pgCtl, ["-D", dataDir, "-m", "fast", "-w", "stop"]);
