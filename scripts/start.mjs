@@ -26,8 +26,7 @@ const shutdown = async (code = 0) => {
   await stack.stop();
   process.exit(code);
 };
-process.on("SIGINT", () => shutdown(0));
-process.on("SIGTERM", () => shutdown(0));
+for (const signal of ["SIGINT", "SIGTERM", "SIGHUP"]) process.on(signal, () => shutdown(0));
 
 try {
   migrateAndSeed(root, stack.env);

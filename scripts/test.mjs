@@ -33,7 +33,7 @@ async function finish(code) {
   console.log(`\nsuites: ${passed} passed, ${results.length - passed} failed`);
   process.exit(code);
 }
-process.on("SIGINT", () => finish(130));
+for (const signal of ["SIGINT", "SIGTERM", "SIGHUP"]) process.on(signal, () => finish(130));
 
 /** Runs one suite without blocking this process, which also serves the storage and mail fakes. */
 async function suite(name, command, args, env) {

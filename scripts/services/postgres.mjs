@@ -5,12 +5,14 @@ import { spawnSync } from "node:child_process";
 import { createHash } from "node:crypto";
 import { chmodSync, chownSync, existsSync, mkdirSync } from "node:fs";
 import path from "node:path";
+import net from "node:net";
 import pg from "pg";
 import { isRoot, fail } from "../bootstrap.mjs";
 
 function asOwner(command, args) {
   const full = isRoot ? ["runuser", ["-u", "postgres", "--", command, ...args]] : [command, args];
-  return spawnSync(full[0], full[1], { encoding: "utf8" });
+  // cwd "/" because the postgres user may not be allowed into the caller's folder.
+  return spawnSync(full[0], full[1], { encoding: "utf8", cwd: "/" });
 }
 
 function postgresIds() {
@@ -57,6 +59,9 @@ export async function startPostgres({ bin, dataDir: wanted, port }) {
   if (status.status === 0) {
     return { port, dataDir, stop: async () => {}, startedHere: false };
   }
+  if (await isPortTaken(port)) {
+    fail(`Port ${port} on 127.0.0.1 is taken by another program (perhaps a PostgreSQL left running by an earlier run).\n  Find it with: ss -ltnp 'sport = :${port}'`);
+  }
   const options = `-p ${port} -h 127.0.0.1 -k ${dataDir}`;
   const start = asOwner(pgCtl, ["-D", dataDir, "-l", path.join(dataDir, "server.log"), "-o", options, "-w", "start"]);
   if (start.status !== 0) {
@@ -99,5 +104,16 @@ export async function recreateDatabase(port, database) {
   await withAdmin(port, async (client) => {
     await client.query(`drop database if exists "${database}" with (force)`);
     await client.query(`create database "${database}"`);
+  });
+}
+
+function isPortTaken(port) {
+  return new Promise((resolve) => {
+    const socket = net.connect({ port, host: "127.0.0.1" });
+    socket.once("connect", () => {
+      socket.destroy();
+      resolve(true);
+    });
+    socket.once("error", () => resolve(false));
   });
 }
