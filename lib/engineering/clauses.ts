@@ -51,6 +51,25 @@ export function clause(id: ClauseId, edition: NecEdition): string {
   return `NEC ${edition} ${CLAUSES[id][edition]}`;
 }
 
+// Clauses that only some editions have: null where the edition has no such clause, so a
+// label or check tied to one appears only for the editions that require it.
+type SomeEditions = Readonly<Record<NecEdition, string | null>>;
+
+export const EDITION_ONLY_CLAUSES = {
+  // Marking at the point of interconnection: a power source, with its rated AC output current and
+  // nominal operating AC voltage. 2017 690.54. From memory, not confirmed: 2020 dropped 690.54 when
+  // the interactive-system rules moved to Article 705, leaving the values on the 705.12(C) marking.
+  interactivePointLabel: { 2017: "690.54", 2020: null, 2023: null },
+} as const satisfies Record<string, SomeEditions>;
+
+export type EditionOnlyClauseId = keyof typeof EDITION_ONLY_CLAUSES;
+
+/** "NEC 2017 690.54", or null where the edition has no such clause. */
+export function clauseInEdition(id: EditionOnlyClauseId, edition: NecEdition): string | null {
+  const ref: string | null = EDITION_ONLY_CLAUSES[id][edition];
+  return ref === null ? null : `NEC ${edition} ${ref}`;
+}
+
 /** Several clauses of one edition in one citation: "NEC 2020 690.8(B), 110.14(C)". */
 export function clauses(edition: NecEdition, ...ids: ClauseId[]): string {
   return `NEC ${edition} ${ids.map((id) => CLAUSES[id][edition]).join(", ")}`;
@@ -59,3 +78,7 @@ export function clauses(edition: NecEdition, ...ids: ClauseId[]): string {
 // Not NEC clauses: named so the result still says where its limit comes from.
 export const COMMON_PRACTICE = "common practice";
 export const STRUCTURAL_REVIEW = "IRC R324.4 (structural review by the AHJ)"; // from memory
+export const DESIGN_CONSISTENCY = "design consistency"; // the design's own entries disagree
+
+/** Every basis a result may cite instead of an NEC clause of the site's edition. */
+export const NON_CODE_BASES: readonly string[] = [COMMON_PRACTICE, STRUCTURAL_REVIEW, DESIGN_CONSISTENCY];

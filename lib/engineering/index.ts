@@ -1,7 +1,7 @@
 // The design review engine: pure functions over plain data, no I/O.
 export * from "./types";
 export { DesignInputError } from "./errors";
-export { CLAUSES, type ClauseId, clause, clauses } from "./clauses";
+export { CLAUSES, EDITION_ONLY_CLAUSES, NON_CODE_BASES, type ClauseId, type EditionOnlyClauseId, clause, clauseInEdition, clauses } from "./clauses";
 export { reviewDesign, type ReviewResult, type ReviewSummary } from "./review";
 export { validateDesign, validateSite } from "./validate";
 export { requiredLabels, type LabelFacts, type WarningLabel } from "./labels";

@@ -1,5 +1,5 @@
 import { fmt } from "./check-result";
-import { type ClauseId, clause } from "./clauses";
+import { type ClauseId, clause, clauseInEdition } from "./clauses";
 import type { LoadSideRule } from "./checks/busbar-rules";
 import type { RapidShutdownMethod } from "./checks/rapid-shutdown";
 import type { NecEdition } from "./types";
@@ -34,8 +34,10 @@ export interface LabelFacts {
 /** The warning labels a design needs, in our own plain words, with the computed values filled in. */
 export function requiredLabels(f: LabelFacts): WarningLabel[] {
   const labels: WarningLabel[] = [];
+  const addCited = (id: string, title: string, citation: string, placement: string, text: string, values: Record<string, number> = {}) =>
+    labels.push({ id, title, clause: citation, edition: f.edition, placement, text, values });
   const add = (id: string, title: string, clauseId: ClauseId, placement: string, text: string, values: Record<string, number> = {}) =>
-    labels.push({ id, title, clause: clause(clauseId, f.edition), edition: f.edition, placement, text, values });
+    addCited(id, title, clause(clauseId, f.edition), placement, text, values);
 
   if (f.maxDcVoltageV !== null) {
     // 2017 also asked for the maximum circuit current on this label; later editions ask for the voltage only (from memory).
@@ -47,6 +49,16 @@ export function requiredLabels(f: LabelFacts): WarningLabel[] {
   }
   add("pv-disconnect", "Solar system disconnect", "disconnectLabel", "On each PV system disconnect",
     `SOLAR PV SYSTEM DISCONNECT.${f.maxDcVoltageV !== null ? " Shock risk: the wires on both sides of this switch can stay live while it is off." : ""}`);
+  // The point of interconnection is marked as a power source with its rated AC output current and
+  // nominal operating AC voltage, on both load-side and supply-side connections. Only the editions
+  // that have the clause get the label (2017; see EDITION_ONLY_CLAUSES, from memory for 2020/2023).
+  const interactivePoint = clauseInEdition("interactivePointLabel", f.edition);
+  if (interactivePoint !== null) {
+    addCited("interactive-point", "Solar connection ratings", interactivePoint,
+      "At the disconnecting means where the solar system connects: the PV breaker, or the supply-side disconnect",
+      `SOLAR POWER SOURCE CONNECTED HERE. Rated output: ${fmt(f.inverterOutputA)} A AC at a nominal ${fmt(f.acVoltageV)} V.`,
+      { inverterOutputA: f.inverterOutputA, acVoltageV: f.acVoltageV });
+  }
   if (f.onBuilding && f.rapidShutdown !== "none") {
     add("rapid-shutdown", "Rapid shutdown", "rapidShutdownLabel", "At the service disconnect, or where the AHJ directs",
       "THIS SOLAR SYSTEM HAS RAPID SHUTDOWN. Turn the rapid shutdown switch OFF to shut down the solar wiring and lower the shock risk in the array.");

@@ -27,7 +27,8 @@ export function validateSite(site: Site): void {
 }
 
 /**
- * Design data that every check leans on (module, inverters, service, module count). Faults
+ * Design data that every check leans on (module, inverters, service, string lengths, module
+ * counts). Faults
  * confined to one string, run or roof plane are left to that item's check, which reports them
  * as a failed result instead of stopping the whole review.
  */
@@ -73,6 +74,11 @@ export function validateDesign(design: Design): void {
   if (hasStringInverter && design.strings.length === 0) {
     throw new DesignInputError("strings", "The design has a string inverter but no strings.");
   }
+  // A string's length is not confined to its own check: the runs, voltage-drop paths, rapid
+  // shutdown and module count all lean on it, and a zero or blank one turns them into NaN.
+  for (const s of design.strings) {
+    requireWholePositive(s.modulesInSeries, `strings.${s.id}.modulesInSeries`, `The number of modules in string ${s.id}`);
+  }
   const s = design.service;
   requirePositive(s.busbarA, "service.busbarA", "The busbar rating");
   requirePositive(s.pvBreakerA, "service.pvBreakerA", "The PV breaker rating");
@@ -81,6 +87,12 @@ export function validateDesign(design: Design): void {
   for (const b of s.otherBreakersA ?? []) requirePositive(b, "service.otherBreakersA", "Each breaker rating on the bus");
   optionalPositive(s.serviceConductorAmpacityA, "service.serviceConductorAmpacityA", "The service conductor ampacity");
   if (design.roofPlanes.length === 0) throw new DesignInputError("roofPlanes", "The design has no modules: add a roof plane with its module count.");
+  // The plane counts add up to the system's size, so a blank or fractional one spoils every rating.
+  for (const p of design.roofPlanes) {
+    if (!Number.isInteger(p.moduleCount) || p.moduleCount < 0) {
+      throw new DesignInputError(`roofPlanes.${p.id}.moduleCount`, `The number of modules on ${p.label} must be a whole number, zero or more.`);
+    }
+  }
   const modules = design.roofPlanes.reduce((sum, p) => sum + p.moduleCount, 0);
   if (!(modules > 0)) throw new DesignInputError("roofPlanes", "The design has zero modules; enter the module count of each roof plane.");
 }

@@ -1,6 +1,6 @@
 import { atMost, fmt, makeCheck } from "../check-result";
 import { clause } from "../clauses";
-import { DesignInputError, requireWholePositive } from "../errors";
+import { DesignInputError, requirePositive, requireWholePositive } from "../errors";
 import { TRADE_SIZES, allowedFillPercent, racewayAreaIn2, thhnAreaIn2 } from "../tables/conduit";
 import { sizeLabel } from "../tables/conductor-sizes";
 import type { CheckResult, ConductorRun, Raceway, Site } from "../types";
@@ -19,8 +19,10 @@ export function racewayFill(raceway: Raceway): RacewayFill {
   let conductorAreaIn2 = 0;
   for (const wire of raceway.wires) {
     const count = requireWholePositive(wire.count, "raceway.wires.count", "The number of wires");
+    // An entered area must be a real one: an infinite area would make the fill infinite too.
+    if (wire.areaIn2 !== undefined) requirePositive(wire.areaIn2, "raceway.wires.areaIn2", `The area of the ${sizeLabel(wire.size)} wire`);
     const area = wire.areaIn2 ?? thhnAreaIn2(wire.size);
-    if (area === null || !(area > 0)) {
+    if (area === null) {
       throw new DesignInputError("raceway.wires.areaIn2", `Enter the area of the ${sizeLabel(wire.size)} wire; our table holds THHN/THWN-2 areas up to 2 AWG only.`);
     }
     conductorCount += count;

@@ -1,5 +1,5 @@
 import { atMost, fmt, makeCheck } from "../check-result";
-import { COMMON_PRACTICE } from "../clauses";
+import { COMMON_PRACTICE, DESIGN_CONSISTENCY } from "../clauses";
 import { totalModuleCount } from "../design-lookup";
 import { requirePositive } from "../errors";
 import type { CheckResult, Design, Site } from "../types";
@@ -55,7 +55,7 @@ export function checkModuleCount(design: Design, site: Site): CheckResult[] {
       value: inStrings,
       limit: onRoof,
       unit: "modules",
-      clause: "design consistency",
+      clause: DESIGN_CONSISTENCY,
       edition: site.necEdition,
       message: ok
         ? `The strings hold all ${onRoof} modules on the roof planes.`

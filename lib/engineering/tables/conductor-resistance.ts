@@ -1,4 +1,4 @@
-import { DesignInputError } from "../errors";
+import { DesignInputError, requireFinite } from "../errors";
 import type { ConductorMaterial, Stranding } from "../types";
 import { type ConductorSize, isConductorSize } from "./conductor-sizes";
 
@@ -50,5 +50,11 @@ export function resistanceOhmPerKft(
     throw new DesignInputError("conductor.stranding", `Chapter 9 Table 8 lists ${size} AWG copper as stranded only.`);
   }
   if (conductorTempC === undefined) return r;
-  return r * (1 + RESISTANCE_TEMP_COEFF_PER_C[material] * (conductorTempC - 75));
+  requireFinite(conductorTempC, "conductor.conductorTempC", "The conductor temperature");
+  const corrected = r * (1 + RESISTANCE_TEMP_COEFF_PER_C[material] * (conductorTempC - 75));
+  // The linear correction goes negative far below any outdoor temperature; refuse rather than report a gain.
+  if (!(corrected > 0)) {
+    throw new DesignInputError("conductor.conductorTempC", `A conductor temperature of ${conductorTempC} °C is outside the range Table 8 can be corrected to.`);
+  }
+  return corrected;
 }

@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { CLAUSES, clause, clauses } from "@/lib/engineering";
+import { CLAUSES, EDITION_ONLY_CLAUSES, NON_CODE_BASES, clause, clauseInEdition, clauses } from "@/lib/engineering";
 
 describe("clause numbering by NEC edition (REFERENCE.md; marked entries from memory)", () => {
   test.each([
@@ -34,5 +34,25 @@ describe("clause numbering by NEC edition (REFERENCE.md; marked entries from mem
       expect(Object.keys(byEdition).sort()).toEqual(["2017", "2020", "2023"]);
       for (const ref of Object.values(byEdition)) expect(ref).toMatch(/^(Table )?\d{3}\.\d+|^Chapter 9/);
     }
+  });
+
+  // 690.54 for 2017; its absence from 2020 and 2023 is from memory, not confirmed.
+  test.each([
+    ["interactivePointLabel", 2017, "NEC 2017 690.54"],
+    ["interactivePointLabel", 2020, null],
+    ["interactivePointLabel", 2023, null],
+  ] as const)("edition-only clause %s in %d → %s", (id, edition, expected) => {
+    expect(clauseInEdition(id, edition)).toBe(expected);
+  });
+
+  test("edition-only clauses name every edition, with a number or null", () => {
+    for (const byEdition of Object.values(EDITION_ONLY_CLAUSES)) {
+      expect(Object.keys(byEdition).sort()).toEqual(["2017", "2020", "2023"]);
+      for (const ref of Object.values(byEdition)) if (ref !== null) expect(ref).toMatch(/^(Table )?\d{3}\.\d+/);
+    }
+  });
+
+  test("non-code bases never pass for an NEC citation", () => {
+    for (const basis of NON_CODE_BASES) expect(basis).not.toMatch(/^NEC /);
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, test } from "vitest";
-import { requiredLabels } from "@/lib/engineering";
+import { requiredLabels, reviewDesign } from "@/lib/engineering";
 import type { LabelFacts } from "@/lib/engineering";
+import { coldSite, microDesign, stringDesign } from "./fixtures";
 
 const facts: LabelFacts = {
   edition: 2020,
@@ -73,5 +74,42 @@ describe("required warning labels with computed values", () => {
     const l = label({ ...facts, serviceLocation: undefined, pvDisconnectLocation: undefined }, "power-source-directory");
     expect(l.text).toContain("see the site plan");
     expect(l.text).not.toMatch(/undefined|NaN/);
+  });
+});
+
+// Point of interconnection marked with the rated AC output current and nominal operating AC voltage:
+// NEC 2017 690.54. The 2020 and 2023 editions have no 690.54 (from memory, not confirmed); there the
+// load-side values ride on the 705.12(C) panel label above.
+describe("690.54 point-of-interconnection label", () => {
+  test.each([
+    [2017, "load-side", "NEC 2017 690.54"],
+    [2017, "supply-side", "NEC 2017 690.54"],
+    [2020, "load-side", null], // from memory
+    [2023, "supply-side", null], // from memory
+  ] as const)("NEC %d, %s connection → %s", (edition, connection, citation) => {
+    const f = { ...facts, edition, connection, loadSideRule: connection === "load-side" ? facts.loadSideRule : null };
+    const l = requiredLabels(f).find((x) => x.id === "interactive-point");
+    if (citation === null) {
+      expect(l).toBeUndefined();
+      return;
+    }
+    expect(l).toMatchObject({
+      clause: citation,
+      edition,
+      text: "SOLAR POWER SOURCE CONNECTED HERE. Rated output: 32 A AC at a nominal 240 V.",
+      values: { inverterOutputA: 32, acVoltageV: 240 },
+    });
+  });
+
+  test.each([
+    // one 32 A string inverter at 240 V
+    ["string inverter", stringDesign(), 32, 240, "32 A AC at a nominal 240 V"],
+    // 20 micro-inverters × 1.25 A = 25 A at 240 V
+    ["micro-inverters", microDesign(), 25, 240, "25 A AC at a nominal 240 V"],
+  ] as const)("a 2017 review of the %s design fills in %d A at %d V", (_what, design, currentA, voltageV, text) => {
+    const l = reviewDesign(design, { ...coldSite, necEdition: 2017 }).labels.find((x) => x.id === "interactive-point")!;
+    expect(l.values).toEqual({ inverterOutputA: currentA, acVoltageV: voltageV });
+    expect(l.text).toContain(text);
+    expect(l.placement).toMatch(/disconnecting means/);
   });
 });
