@@ -1,5 +1,5 @@
 import "server-only";
-import { GetObjectCommand, HeadBucketCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
 import { env } from "../env";
 
@@ -30,11 +30,20 @@ export async function getObjectBytes(key: string): Promise<Uint8Array> {
   return out.Body.transformToByteArray();
 }
 
+/** Removes an object; removing one that is already gone is not an error in S3. */
+export async function deleteObject(key: string) {
+  await s3().send(new DeleteObjectCommand({ Bucket: env().S3_BUCKET, Key: key }));
+}
+
 /** A short-lived download link; the caller has already checked who may have it. */
-export function presignedDownloadUrl(key: string, { expiresInSeconds = 300, fileName }: { expiresInSeconds?: number; fileName?: string } = {}) {
+export function presignedDownloadUrl(
+  key: string,
+  { expiresInSeconds = 300, fileName, inline = false }: { expiresInSeconds?: number; fileName?: string; inline?: boolean } = {},
+) {
+  const disposition = inline ? "inline" : "attachment";
   return getSignedUrl(
     s3(),
-    new GetObjectCommand({ Bucket: env().S3_BUCKET, Key: key, ...(fileName ? { ResponseContentDisposition: `attachment; filename="${fileName.replace(/"/g, "")}"` } : {}) }),
+    new GetObjectCommand({ Bucket: env().S3_BUCKET, Key: key, ...(fileName ? { ResponseContentDisposition: `${disposition}; filename="${fileName.replace(/"/g, "")}"` } : {}) }),
     { expiresIn: expiresInSeconds },
   );
 }

@@ -1,0 +1,30 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState, useTransition } from "react";
+import { Button } from "@/components/ui/button";
+import { setEquipmentArchivedAction } from "../actions";
+
+export function ArchiveButton({ equipmentId, isArchived, name }: { equipmentId: string; isArchived: boolean; name: string }) {
+  const router = useRouter();
+  const [message, setMessage] = useState<string>();
+  const [pending, startTransition] = useTransition();
+
+  function toggle() {
+    setMessage(undefined);
+    startTransition(async () => {
+      const result = await setEquipmentArchivedAction({ equipmentId, isArchived: !isArchived });
+      if (!result.ok) setMessage(result.message);
+      router.refresh();
+    });
+  }
+
+  return (
+    <>
+      <Button variant={isArchived ? "secondary" : "quiet"} disabled={pending} onClick={toggle} aria-label={`${isArchived ? "Restore" : "Archive"} ${name}`}>
+        {isArchived ? "Restore" : "Archive"}
+      </Button>
+      {message ? <span className="block text-xs text-result-fail" role="alert">{message}</span> : null}
+    </>
+  );
+}

@@ -1,0 +1,65 @@
+import type { EquipmentDto, EquipmentInput, EquipmentKind } from "@/lib/schemas/equipment";
+
+// What the form asks for each kind, in data-sheet order. Names are paths under `specs`.
+export type SpecField =
+  | { type: "number"; name: string; label: string; unit: string; hint?: string }
+  | { type: "select"; name: string; label: string; options: { value: string; label: string }[] }
+  | { type: "text"; name: string; label: string; hint?: string }
+  | { type: "checkbox"; name: string; label: string };
+
+const num = (name: string, label: string, unit: string, hint?: string): SpecField => ({ type: "number", name, label, unit, hint });
+const OPTIONAL = "Leave blank when the data sheet does not give it";
+
+export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
+  module: [
+    num("powerW", "Pmax", "W"),
+    num("vocV", "Voc", "V"),
+    num("vmpV", "Vmp", "V"),
+    num("iscA", "Isc", "A"),
+    num("impA", "Imp", "A"),
+    num("vocTempCoeff.value", "Voc temperature coefficient", "", "Negative, e.g. −0.27; blank to use the NEC table instead"),
+    { type: "select", name: "vocTempCoeff.unit", label: "Coefficient unit", options: [{ value: "%/C", label: "%/°C" }, { value: "V/C", label: "V/°C" }] },
+    num("pmaxTempCoeffPctPerC", "Pmax temperature coefficient", "%/°C", OPTIONAL),
+    num("maxSeriesFuseA", "Maximum series fuse", "A", OPTIONAL),
+    num("lengthIn", "Length", "in"),
+    num("widthIn", "Width", "in"),
+    num("weightLb", "Weight", "lb"),
+  ],
+  inverter: [
+    { type: "select", name: "inverterKind", label: "Type", options: [{ value: "string", label: "String inverter" }, { value: "micro", label: "Microinverter" }] },
+    num("acPowerW", "AC rated power", "W"),
+    num("acOutputCurrentA", "Maximum continuous output current", "A"),
+    num("acVoltageV", "Nominal AC voltage", "V"),
+    { type: "select", name: "phase", label: "Phases", options: [{ value: "1", label: "Single phase" }, { value: "3", label: "Three phase" }] },
+    num("maxDcInputV", "Maximum DC input voltage", "V"),
+    num("mpptMinV", "MPPT window minimum", "V", OPTIONAL),
+    num("mpptMaxV", "MPPT window maximum", "V", OPTIONAL),
+    num("maxInputIscA", "Maximum input current per MPPT", "A", OPTIONAL),
+    num("mpptCount", "Number of MPPTs", "", OPTIONAL),
+    num("regulatedStringV", "Regulated string voltage", "V", "Only for inverters fed by optimizers"),
+    num("maxStringPowerW", "Maximum power per string", "W", "Only for inverters fed by optimizers"),
+    { type: "text", name: "certification", label: "Certification", hint: "e.g. UL 1741 SB; IEEE 1547-2018 Category B" },
+    { type: "checkbox", name: "meetsRapidShutdownWithDevices", label: "Meets rapid shutdown (690.12) together with its module-level devices" },
+  ],
+  device: [
+    { type: "select", name: "deviceKind", label: "Type", options: [{ value: "optimizer", label: "DC optimizer" }, { value: "shutdown-device", label: "Rapid-shutdown device" }] },
+    num("ratedInputPowerW", "Rated input power", "W", OPTIONAL),
+    num("maxInputV", "Maximum input voltage", "V"),
+    num("maxInputIscA", "Maximum input current", "A", OPTIONAL),
+    num("maxOutputCurrentA", "Maximum output current", "A", OPTIONAL),
+    num("shutdownOutputV", "Voltage held while shut down", "V", "About 1 V per module is common practice"),
+  ],
+};
+
+const EMPTY_SPECS: Record<EquipmentKind, Record<string, unknown>> = {
+  module: { vocTempCoeff: { value: "", unit: "%/C" } },
+  inverter: { inverterKind: "string", phase: "1", certification: "", meetsRapidShutdownWithDevices: false },
+  device: { deviceKind: "optimizer" },
+};
+
+/** The form's starting values: blank for a new item, the stored figures for an edit. */
+export function formValuesOf(kind: EquipmentKind, item?: EquipmentDto): EquipmentInput {
+  if (!item) return { kind, maker: "", model: "", listing: "", specs: EMPTY_SPECS[kind] } as EquipmentInput;
+  const specs: Record<string, unknown> = { ...EMPTY_SPECS[kind], ...item.specs };
+  return { kind: item.kind, maker: item.maker, model: item.model, listing: item.listing, specs } as EquipmentInput;
+}

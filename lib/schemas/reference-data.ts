@@ -1,0 +1,43 @@
+import { z } from "zod";
+import { NEC_EDITIONS } from "@/lib/domain/roles";
+import { numberField, optionalText, requiredText, toNumber, whenValid } from "./fields";
+
+export const JurisdictionInput = z
+  .object({
+    name: requiredText("authority's name", 160),
+    state: z.string().trim().toUpperCase().regex(/^[A-Z]{2}$/, "Use the two-letter state code"),
+    necEdition: z.preprocess(toNumber, z.union(NEC_EDITIONS.map((e) => z.literal(e)), { error: `Choose the adopted NEC edition: ${NEC_EDITIONS.join(", ")}` })),
+    // ASHRAE extreme annual mean minimum design dry-bulb temperature of the nearest station.
+    recordLowTempC: numberField("Record low", { min: -60, max: 20, unit: "°C" }),
+    highDesignTempC: numberField("High design temperature", { min: 10, max: 60, unit: "°C" }),
+    notes: optionalText(2000),
+  })
+  .refine((j) => j.recordLowTempC < j.highDesignTempC, {
+    path: ["highDesignTempC"],
+    message: "The high design temperature must be above the record low",
+    when: whenValid("recordLowTempC", "highDesignTempC"),
+  });
+export type JurisdictionInput = z.input<typeof JurisdictionInput>;
+export type JurisdictionValues = z.output<typeof JurisdictionInput>;
+
+// A form sends service voltages as one per line; the API as a list.
+const serviceVoltages = z.preprocess(
+  (v) => (typeof v === "string" ? v.split(/\r?\n/) : v),
+  z
+    .array(z.string({ error: "Each service voltage is text" }).trim().max(40, "Each service voltage is at most 40 characters"), { error: "List the service voltages" })
+    .transform((list) => list.filter(Boolean))
+    .pipe(z.array(z.string()).min(1, "Enter at least one service voltage").max(8, "At most 8 service voltages")),
+);
+
+export const UtilityInput = z.object({
+  name: requiredText("utility's name", 160),
+  serviceVoltages,
+  // Free text as the utility words it, e.g. "IEEE 1547-2018 Category B, utility's default settings".
+  requiredGridProfile: optionalText(300),
+  notes: optionalText(2000),
+});
+export type UtilityInput = z.input<typeof UtilityInput>;
+export type UtilityValues = z.output<typeof UtilityInput>;
+
+export const UpdateJurisdictionInput = z.object({ jurisdictionId: z.string().uuid("Unknown jurisdiction") }).and(JurisdictionInput);
+export const UpdateUtilityInput = z.object({ utilityId: z.string().uuid("Unknown utility") }).and(UtilityInput);

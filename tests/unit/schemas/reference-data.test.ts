@@ -1,0 +1,40 @@
+import { describe, expect, it } from "vitest";
+import { JurisdictionInput, UtilityInput } from "@/lib/schemas/reference-data";
+
+type Parsed = { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } };
+const messages = (result: Parsed) => Object.fromEntries((result.error?.issues ?? []).map((i) => [i.path.join("."), i.message]));
+
+const jurisdiction = { name: "Town of Fenmoor Permits", state: "co", necEdition: "2020", recordLowTempC: "-21", highDesignTempC: "33", notes: "" };
+
+describe("JurisdictionInput", () => {
+  it("reads form strings", () => {
+    expect(JurisdictionInput.parse(jurisdiction)).toEqual({ name: "Town of Fenmoor Permits", state: "CO", necEdition: 2020, recordLowTempC: -21, highDesignTempC: 33, notes: "" });
+  });
+
+  it.each([
+    [{ name: "" }, "name", "Enter the authority's name"],
+    [{ state: "Colorado" }, "state", "Use the two-letter state code"],
+    [{ necEdition: "2014" }, "necEdition", "Choose the adopted NEC edition: 2017, 2020, 2023"],
+    [{ recordLowTempC: "" }, "recordLowTempC", "Record low is required"],
+    [{ recordLowTempC: "-80" }, "recordLowTempC", "Record low must be between -60 and 20 °C"],
+    [{ recordLowTempC: "15", highDesignTempC: "12" }, "highDesignTempC", "The high design temperature must be above the record low"],
+  ])("refuses %j with a readable message", (patch, path, message) => {
+    expect(messages(JurisdictionInput.safeParse({ ...jurisdiction, ...patch }))[path]).toBe(message);
+  });
+});
+
+describe("UtilityInput", () => {
+  it("takes service voltages one per line from a form and as a list from the API", () => {
+    const fromForm = UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: "120/240 V split-phase\n\n 120/208 V three-phase \n" });
+    expect(fromForm).toEqual({ name: "Fenmoor Power", serviceVoltages: ["120/240 V split-phase", "120/208 V three-phase"], requiredGridProfile: "", notes: "" });
+    expect(UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: ["120/240 V"], requiredGridProfile: "IEEE 1547-2018 Category B" }).requiredGridProfile).toBe("IEEE 1547-2018 Category B");
+  });
+
+  it.each([
+    [{ serviceVoltages: "" }, "serviceVoltages", "Enter at least one service voltage"],
+    [{ serviceVoltages: ["x".repeat(41)] }, "serviceVoltages.0", "Each service voltage is at most 40 characters"],
+    [{ requiredGridProfile: "x".repeat(301) }, "requiredGridProfile", "At most 300 characters"],
+  ])("refuses %j with a readable message", (patch, path, message) => {
+    expect(messages(UtilityInput.safeParse({ name: "Fenmoor Power", serviceVoltages: "120/240 V", ...patch }))[path]).toBe(message);
+  });
+});
