@@ -9,6 +9,8 @@ const nextConfig = {
   serverExternalPackages: ["sequelize", "pg", "pg-hstore"],
   // A lockfile in a parent folder would otherwise make Turbopack guess the workspace root.
   turbopack: { root },
+  // A second build folder lets a second test run build beside the first (see OHMSTEAD_PORT_OFFSET).
+  distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
   typedRoutes: false,
 };

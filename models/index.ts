@@ -1,5 +1,8 @@
 import type { Sequelize } from "sequelize";
+import { ApiToken } from "./api-token";
 import { AuditEvent } from "./audit-event";
+import { Design } from "./design";
+import { Equipment } from "./equipment";
 import { Invitation } from "./invitation";
 import { Jurisdiction } from "./jurisdiction";
 import { Organization } from "./organization";
@@ -9,7 +12,8 @@ import { StageChange } from "./stage-change";
 import { User } from "./user";
 import { Utility } from "./utility";
 
-export { AuditEvent, Invitation, Jurisdiction, Organization, Project, SignInAttempt, StageChange, User, Utility };
+export { AuditEvent, Design, Equipment, Invitation, Jurisdiction, Organization, Project, SignInAttempt, StageChange, User, Utility };
+export { ApiToken };
 
 let initialized: Sequelize | null = null;
 
@@ -17,7 +21,7 @@ let initialized: Sequelize | null = null;
 export function initModels(sequelize: Sequelize) {
   if (initialized === sequelize) return;
   initialized = sequelize;
-  for (const model of [Organization, User, Invitation, SignInAttempt, Jurisdiction, Utility, Project, StageChange, AuditEvent]) {
+  for (const model of [Organization, User, Invitation, SignInAttempt, Jurisdiction, Utility, Project, StageChange, AuditEvent, Equipment, Design]) {
     model.initModel(sequelize);
   }
   Project.belongsTo(Jurisdiction, { as: "jurisdiction", foreignKey: "jurisdictionId" });
@@ -26,4 +30,6 @@ export function initModels(sequelize: Sequelize) {
   Project.belongsTo(User, { as: "installer", foreignKey: "installerId" });
   StageChange.belongsTo(User, { as: "changedBy", foreignKey: "changedById" });
   AuditEvent.belongsTo(User, { as: "actor", foreignKey: "actorId" });
+  ApiToken.initModel(sequelize);
+  ApiToken.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
 }

@@ -37,9 +37,10 @@ function sourceHash(root) {
 
 /** Runs `next build` only when the sources changed since the last build. */
 export function buildIfNeeded(root, env) {
-  const stamp = path.join(root, ".next", "ohmstead-source.sha256");
+  const distDir = path.join(root, process.env.NEXT_DIST_DIR || ".next");
+  const stamp = path.join(distDir, "ohmstead-source.sha256");
   const want = sourceHash(root);
-  if (existsSync(stamp) && readFileSync(stamp, "utf8").trim() === want && existsSync(path.join(root, ".next", "BUILD_ID"))) {
+  if (existsSync(stamp) && readFileSync(stamp, "utf8").trim() === want && existsSync(path.join(distDir, "BUILD_ID"))) {
     console.log("• Build is up to date.");
     return;
   }

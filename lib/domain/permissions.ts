@@ -7,6 +7,7 @@ export type Viewer = {
   role: Role;
   name: string;
   email: string;
+  apiTokenId?: string; // set when an API token, not a person, is asking
 };
 
 export type Permission =
@@ -16,13 +17,21 @@ export type Permission =
   | "project:change-stage"
   | "settings:view"
   | "users:manage"
-  | "mailbox:view";
+  | "catalog:view"
+  | "catalog:edit"
+  | "reference:edit"
+  | "mailbox:view"
+  | "design:review"
+  | "api-tokens:manage";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
-  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "mailbox:view"],
-  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "mailbox:view"],
-  installer: ["project:view"],
+  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage"],
+  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "mailbox:view", "design:review"],
+  installer: ["project:view", "design:review"],
 };
+
+// An API token reads on its organization's behalf and never changes anything (README, "Design review API").
+export const API_TOKEN_GRANTS: readonly Permission[] = ["project:view", "catalog:view", "design:review"];
 
 type ProjectScope = { organizationId: string; installerId: string | null };
 
@@ -30,8 +39,9 @@ type ProjectScope = { organizationId: string; installerId: string | null };
  * The one permission rule. With a project, it also checks that the project is
  * the viewer's organization's and, for installers, assigned to them.
  */
-export function can(viewer: Pick<Viewer, "id" | "role" | "organizationId">, permission: Permission, project?: ProjectScope): boolean {
-  if (!GRANTS[viewer.role]?.includes(permission)) return false;
+export function can(viewer: Pick<Viewer, "id" | "role" | "organizationId" | "apiTokenId">, permission: Permission, project?: ProjectScope): boolean {
+  const grants = viewer.apiTokenId ? API_TOKEN_GRANTS : GRANTS[viewer.role];
+  if (!grants?.includes(permission)) return false;
   if (!project) return true;
   if (project.organizationId !== viewer.organizationId) return false;
   if (viewer.role === "installer") return project.installerId === viewer.id;

@@ -2,6 +2,8 @@ import bcrypt from "bcryptjs";
 import type { Sequelize, Transaction } from "sequelize";
 import { Jurisdiction, Organization, Project, StageChange, User, Utility } from "@/models";
 import { STAGES, type Stage } from "@/lib/domain/stages";
+import { seedDemoCatalog } from "./demo-catalog";
+import { seedDemoDesigns } from "./seed-demo-designs";
 import { CUSTOMERS, JURISDICTIONS, ORGANIZATIONS, STAGE_NOTES, STREETS, TOWNS, UTILITIES } from "./demo-scenario";
 import { DEMO_SIGN_INS } from "./demo-sign-ins.mjs";
 
@@ -27,6 +29,7 @@ async function seedOrganization(key: "main" | "other", projectCount: number, t: 
   for (const { key: k, ...j } of JURISDICTIONS) jurisdictions.set(k, await Jurisdiction.create({ organizationId, ...j }, { transaction: t }));
   const utilities = new Map<string, Utility>();
   for (const { key: k, ...u } of UTILITIES) utilities.set(k, await Utility.create({ organizationId, ...u }, { transaction: t }));
+  await seedDemoCatalog(organizationId, t);
 
   const coordinators = users.filter((u) => u.role === "coordinator");
   const installers = users.filter((u) => u.role === "installer");
@@ -83,6 +86,7 @@ async function seedOrganization(key: "main" | "other", projectCount: number, t: 
     );
     await project.update({ stageChangedAt: changes[changes.length - 1].createdAt }, { transaction: t, silent: true });
   }
+  await seedDemoDesigns(organizationId, t);
 }
 
 /** Seeds the invented demo scenario into an empty database; leaves a database with data untouched. */

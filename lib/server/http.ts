@@ -6,6 +6,7 @@ import { can, type Permission, type Viewer } from "@/lib/domain/permissions";
 import { AppError, ERROR_STATUS, isAppError } from "@/lib/errors";
 import { fieldErrorsOf } from "./action";
 import { getViewer } from "./auth";
+import { getViewerByApiToken } from "./data/api-tokens";
 
 /** The one mapping from thrown errors to JSON responses. */
 export function toErrorResponse(error: unknown): NextResponse {
@@ -33,15 +34,26 @@ export async function readJson(request: Request): Promise<unknown> {
   }
 }
 
+/** The viewer behind a request: an API token sent as `Authorization: Bearer …`, else the session. */
+async function requestViewer(request: NextRequest): Promise<Viewer | null> {
+  const header = request.headers.get("authorization");
+  if (header === null) return getViewer();
+  const token = /^Bearer +(\S+) *$/i.exec(header)?.[1];
+  if (!token) throw new AppError("UNAUTHORIZED", "Send the API token as: Authorization: Bearer <token>.");
+  const viewer = await getViewerByApiToken(token);
+  if (!viewer) throw new AppError("UNAUTHORIZED", "The API token is not valid or has been revoked.");
+  return viewer;
+}
+
 type Handler<P> = (request: NextRequest, context: { viewer: Viewer; params: P }) => Promise<Response>;
 
-/** Wraps a route handler: signed-in viewer with the permission, params resolved, errors mapped. */
+/** Wraps a route handler: signed-in viewer or API token with the permission, params resolved, errors mapped. */
 export function withAuth<P = Record<string, never>>(handler: Handler<P>, { permission }: { permission: Permission }) {
   return async (request: NextRequest, context: { params: Promise<P> }) => {
     try {
-      const viewer = await getViewer();
-      if (!viewer) throw new AppError("UNAUTHORIZED", "Sign in first.");
-      if (!can(viewer, permission)) throw new AppError("FORBIDDEN", "Your role does not allow this.");
+      const viewer = await requestViewer(request);
+      if (!viewer) throw new AppError("UNAUTHORIZED", "Sign in first, or send an API token.");
+      if (!can(viewer, permission)) throw new AppError("FORBIDDEN", viewer.apiTokenId ? "API tokens may only read projects and review designs." : "Your role does not allow this.");
       return await handler(request, { viewer, params: await context.params });
     } catch (error) {
       return toErrorResponse(error);

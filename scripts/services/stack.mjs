@@ -20,9 +20,21 @@ function localSecret(dataRoot) {
   return readFileSync(file, "utf8").trim();
 }
 
+/**
+ * OHMSTEAD_PORT_OFFSET shifts every port and gets its own data folder, so two
+ * checkouts or two people can run the same profile on one machine.
+ */
+function profileFor(profile) {
+  const offset = Number(process.env.OHMSTEAD_PORT_OFFSET ?? 0);
+  const base = PROFILES[profile];
+  if (!offset) return { ports: base, folder: profile };
+  const shifted = Object.fromEntries(Object.entries(base).map(([k, v]) => [k, typeof v === "number" ? v + offset : v]));
+  return { ports: shifted, folder: `${profile}-${offset}` };
+}
+
 export async function startStack({ root, profile, postgresBin, fresh = false }) {
-  const ports = PROFILES[profile];
-  const dataRoot = path.join(root, ".data", profile);
+  const { ports, folder } = profileFor(profile);
+  const dataRoot = path.join(root, ".data", folder);
   if (fresh) {
     rmSync(path.join(dataRoot, "storage"), { recursive: true, force: true });
     rmSync(path.join(dataRoot, "mail"), { recursive: true, force: true });
@@ -55,6 +67,7 @@ export async function startStack({ root, profile, postgresBin, fresh = false }) 
     const env = {
       NODE_ENV: "production",
       NEXT_TELEMETRY_DISABLED: "1",
+      ...(process.env.NEXT_DIST_DIR ? { NEXT_DIST_DIR: process.env.NEXT_DIST_DIR } : {}),
       APP_URL: appUrl,
       NEXTAUTH_URL: appUrl,
       NEXTAUTH_SECRET: localSecret(dataRoot),

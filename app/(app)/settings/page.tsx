@@ -9,8 +9,10 @@ export default async function SettingsPage() {
   const viewer = await requirePermission("settings:view");
   const sections = [
     ...(can(viewer, "users:manage") ? [{ href: "/settings/users", title: "Users", text: "Invite people, change roles, deactivate accounts." }] : []),
+    ...(can(viewer, "catalog:view") ? [{ href: "/settings/equipment", title: "Equipment catalog", text: "Modules, inverters and module-level devices with their data-sheet figures and PDFs." }] : []),
     { href: "/settings/jurisdictions", title: "Jurisdictions (AHJ)", text: "Adopted NEC edition and design temperatures of each authority." },
-    { href: "/settings/utilities", title: "Utilities", text: "Service voltages and notes of each utility." },
+    { href: "/settings/utilities", title: "Utilities", text: "Service voltages, required grid profile and notes of each utility." },
+    ...(can(viewer, "api-tokens:manage") ? [{ href: "/settings/api-tokens", title: "API tokens", text: "Keys for other programs to read projects and run design reviews." }] : []),
   ];
   return (
     <div className="space-y-4">

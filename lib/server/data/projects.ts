@@ -6,6 +6,7 @@ import { NEXT_ACTION, STAGE_LABELS, STAGES, type Stage } from "@/lib/domain/stag
 import { AppError } from "@/lib/errors";
 import type { ProjectListQuery, ProjectValues } from "@/lib/schemas/project";
 import { db } from "../db";
+import { isUuid } from "./ids";
 import { diffFields, recordAudit } from "./audit";
 
 export type ProjectDto = {
@@ -124,7 +125,7 @@ export async function listProjects({ viewer, query }: { viewer: Viewer; query: P
 
 async function findVisibleProject(viewer: Viewer, projectId: string, transaction?: Transaction) {
   // A malformed id is just another project the viewer cannot see.
-  if (!/^[0-9a-f-]{36}$/i.test(projectId)) throw new AppError("NOT_FOUND", "No such project.");
+  if (!isUuid(projectId)) throw new AppError("NOT_FOUND", "No such project.");
   const project = await Project.findOne({ where: { [Op.and]: [visibleTo(viewer), { id: projectId }] }, include: INCLUDE, transaction });
   if (!project || !can(viewer, "project:view", project)) throw new AppError("NOT_FOUND", "No such project.");
   return project;

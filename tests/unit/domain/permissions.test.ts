@@ -16,6 +16,15 @@ describe("can", () => {
     ["installer", "settings:view", false],
     ["coordinator", "settings:view", true],
     ["installer", "project:view", true],
+    ["admin", "catalog:view", true],
+    ["coordinator", "catalog:view", true],
+    ["installer", "catalog:view", false],
+    ["admin", "catalog:edit", true],
+    ["coordinator", "catalog:edit", false],
+    ["installer", "catalog:edit", false],
+    ["admin", "reference:edit", true],
+    ["coordinator", "reference:edit", false],
+    ["installer", "reference:edit", false],
   ])("%s → %s is %s", (role, permission, expected) => {
     expect(can(viewer(role), permission)).toBe(expected);
   });

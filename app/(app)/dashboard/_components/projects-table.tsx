@@ -134,7 +134,29 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
 
       {error ? <p role="alert" className="text-sm text-result-fail">{error.message}</p> : null}
 
-      <div className="overflow-x-auto rounded-md border border-paper-edge bg-white/70">
+      {/* Phones get cards; the table needs a wider screen. */}
+      <ul className="space-y-2 sm:hidden">
+        {(data?.items ?? []).map((p) => (
+          <li key={p.id} className="panel space-y-1 p-3" data-testid="project-card">
+            <div className="flex items-baseline justify-between gap-2">
+              <Link href={`/projects/${p.id}`} className="font-medium">
+                {p.customerName}
+              </Link>
+              <span className="measure text-xs text-ink-faint">No. {p.number}</span>
+            </div>
+            <p className="text-sm text-ink-soft">
+              {p.street}, {p.city}
+            </p>
+            <div className="flex items-center justify-between gap-2">
+              <StageBadge stage={p.stage} />
+              <span className="measure text-xs text-ink-faint">{p.daysInStage} d</span>
+            </div>
+            <p className="text-xs text-ink-faint">{p.nextAction}</p>
+          </li>
+        ))}
+      </ul>
+
+      <div className="hidden overflow-x-auto rounded-md border border-paper-edge bg-white/70 sm:block">
         <table className="w-full text-left text-sm" aria-busy={isLoading}>
           <thead className="border-b border-paper-edge bg-paper-deep/70 text-xs uppercase tracking-wide text-ink-soft">
             {table.getHeaderGroups().map((group) => (

@@ -1,8 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { CheckStatusChip } from "@/components/review/check-status";
 import { StageBadge } from "@/components/ui/stage-badge";
 import { can } from "@/lib/domain/permissions";
 import { requireUser } from "@/lib/server/auth";
+import { getDesignStatus } from "@/lib/server/data/designs";
 import { listStageChanges } from "@/lib/server/data/projects";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { StageChangeForm } from "./_components/stage-change-form";
@@ -22,7 +24,7 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
 export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
-  const timeline = await listStageChanges({ viewer, projectId: project.id });
+  const [timeline, design] = await Promise.all([listStageChanges({ viewer, projectId: project.id }), getDesignStatus({ viewer, projectId: project.id })]);
   const amps = (v: number | null) => (v === null ? null : <span className="measure">{v} A</span>);
   return (
     <div className="space-y-6">
@@ -32,11 +34,16 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           <h1>{project.customerName}</h1>
           <p className="text-ink-soft">{project.address}</p>
         </div>
+        <div className="flex gap-2">
+        <Link href={`/projects/${project.id}/design`} className="rounded bg-copper px-4 py-2 text-sm font-medium text-white no-underline hover:bg-copper-dark hover:no-underline">
+          Design and review
+        </Link>
         {can(viewer, "project:edit") ? (
           <Link href={`/projects/${project.id}/edit`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
             Edit project
           </Link>
         ) : null}
+        </div>
       </div>
 
       <section className="panel flex flex-wrap items-center gap-x-8 gap-y-2" aria-label="Current stage">
@@ -47,6 +54,28 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         <span className="text-sm">
           Next: <strong>{project.nextAction}</strong>
         </span>
+      </section>
+
+      <section className="panel flex flex-wrap items-center gap-3" aria-label="Design review" data-testid="design-status">
+        <h2 className="text-base">Design review</h2>
+        {!design ? (
+          <span className="text-sm text-ink-faint">No design yet.</span>
+        ) : design.reviewStatus === "incomplete" ? (
+          <span className="text-sm text-ink-soft">The design is not complete enough to check yet.</span>
+        ) : (
+          <>
+            <CheckStatusChip status={design.reviewStatus} />
+            {design.counts ? (
+              <span className="measure text-sm text-ink-soft">
+                {design.counts.fail} fail · {design.counts.warn} warn · {design.counts.pass} pass
+              </span>
+            ) : null}
+          </>
+        )}
+        {design ? <span className="text-xs text-ink-faint">revision {design.revision}</span> : null}
+        <Link href={`/projects/${project.id}/design`} className="ml-auto text-sm">
+          Open the design
+        </Link>
       </section>
 
       <div className="grid gap-6 lg:grid-cols-3">

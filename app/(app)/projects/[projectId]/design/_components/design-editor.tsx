@@ -1,0 +1,139 @@
+"use client";
+
+import { clsx } from "clsx";
+import { useEffect, useMemo, useRef, useState } from "react";
+import { FormProvider, useForm, useWatch } from "react-hook-form";
+import { Button } from "@/components/ui/button";
+import { runDesignReview } from "@/lib/design/run-review";
+import type { SiteConditions } from "@/lib/design/to-engine";
+import { DESIGN_STEPS, DesignInput, type DesignDraft, type DesignFormValues } from "@/lib/schemas/design";
+import type { EquipmentDto } from "@/lib/schemas/equipment";
+import { saveDesignAction } from "../actions";
+import { ArrayStep } from "./array-step";
+import { EquipmentStep } from "./equipment-step";
+import { ReviewPanel } from "./review-panel";
+import { ReviewStep } from "./review-step";
+import { RunsStep } from "./runs-step";
+import { ServiceStep } from "./service-step";
+import type { Issues } from "./design-fields";
+
+type SaveState = { kind: "idle" | "saving" | "saved" | "error"; text: string };
+const AUTOSAVE_MS = 1200;
+
+/** Whether a field path is marked dirty in react-hook-form's nested dirtyFields. */
+function isDirty(dirty: unknown, path: string): boolean {
+  let node = dirty;
+  for (const key of path.split(".")) {
+    if (node === true) return true;
+    if (!node || typeof node !== "object") return false;
+    node = (node as Record<string, unknown>)[key];
+  }
+  return Boolean(node);
+}
+
+export function DesignEditor(props: { projectId: string; initialDraft: DesignDraft; initialRevision: number; catalog: EquipmentDto[]; conditions: SiteConditions | null; readOnly: boolean }) {
+  const { projectId, catalog, conditions, readOnly } = props;
+  const form = useForm<DesignFormValues>({ defaultValues: props.initialDraft as DesignFormValues });
+  const values = useWatch({ control: form.control });
+  const [step, setStep] = useState(0);
+  const [visited, setVisited] = useState<Set<number>>(() => new Set(props.initialRevision > 0 ? [0, 1, 2, 3] : []));
+  const [save, setSave] = useState<SaveState>({ kind: "idle", text: props.initialRevision ? `Saved, revision ${props.initialRevision}` : "Not saved yet" });
+  const pending = useRef(false);
+
+  const outcome = useMemo(() => runDesignReview(values, catalog, conditions), [values, catalog, conditions]);
+  const { dirtyFields } = form.formState;
+  const issues: Issues = useMemo(() => {
+    const parsed = DesignInput.safeParse(values);
+    const out: Issues = {};
+    for (const issue of parsed.success ? [] : parsed.error.issues) {
+      const path = issue.path.join(".");
+      const stepIndex = DESIGN_STEPS.findIndex((s) => path.startsWith(s.key));
+      // A fresh form is not a list of errors: show a field's problem once it was typed in or its step was left.
+      if (!(path in out) && (visited.has(stepIndex) || isDirty(dirtyFields, path))) out[path] = issue.message;
+    }
+    return out;
+  }, [values, visited, dirtyFields]);
+
+  async function saveNow() {
+    if (readOnly) return;
+    pending.current = false;
+    setSave({ kind: "saving", text: "Saving…" });
+    const result = await saveDesignAction({ projectId, draft: form.getValues() as Record<string, unknown> });
+    if (result.ok) setSave({ kind: "saved", text: `Saved, revision ${result.data.revision}` });
+    else setSave({ kind: "error", text: `Not saved: ${result.message} Your input stays on this page.` });
+  }
+
+  // Save a moment after typing stops.
+  useEffect(() => {
+    if (readOnly || !form.formState.isDirty) return;
+    pending.current = true;
+    const timer = setTimeout(() => void saveNow(), AUTOSAVE_MS);
+    return () => clearTimeout(timer);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- values is the trigger
+  }, [values]);
+
+  useEffect(() => {
+    const warn = (event: BeforeUnloadEvent) => {
+      if (pending.current) event.preventDefault();
+    };
+    window.addEventListener("beforeunload", warn);
+    return () => window.removeEventListener("beforeunload", warn);
+  }, []);
+
+  const goTo = (next: number) => {
+    setVisited((v) => new Set(v).add(step));
+    setStep(next);
+  };
+
+  return (
+    <FormProvider {...form}>
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+        <div className="space-y-4">
+          <nav aria-label="Design steps" className="flex flex-wrap gap-1">
+            {DESIGN_STEPS.map((s, i) => (
+              <button key={s.key} type="button" onClick={() => goTo(i)} aria-current={i === step ? "step" : undefined} className={clsx("rounded px-3 py-1.5 text-sm", i === step ? "bg-copper text-white" : "bg-paper-deep text-ink-soft hover:bg-paper-edge")}>
+                <span className="measure">{i + 1}.</span> {s.title}
+              </button>
+            ))}
+          </nav>
+          <form onSubmit={(e) => e.preventDefault()} className="panel" noValidate>
+            <fieldset disabled={readOnly} className="space-y-4">
+              <h2>{DESIGN_STEPS[step].title}</h2>
+              {step === 0 ? <EquipmentStep catalog={catalog} issues={issues} /> : null}
+              {step === 1 ? <ArrayStep issues={issues} /> : null}
+              {step === 2 ? <ServiceStep issues={issues} /> : null}
+              {step === 3 ? <RunsStep issues={issues} /> : null}
+              {step === 4 ? <ReviewStep outcome={outcome} onGoToStep={goTo} /> : null}
+            </fieldset>
+          </form>
+          <div className="flex flex-wrap items-center gap-3">
+            <Button type="button" variant="secondary" disabled={step === 0} onClick={() => goTo(step - 1)}>
+              Back
+            </Button>
+            <Button type="button" disabled={step === DESIGN_STEPS.length - 1} onClick={() => goTo(step + 1)}>
+              Next
+            </Button>
+            {readOnly ? (
+              <span className="text-sm text-ink-faint">Read only: your role cannot change the design.</span>
+            ) : (
+              <>
+                <Button type="button" variant="quiet" onClick={() => void saveNow()}>
+                  Save now
+                </Button>
+                <span role="status" data-testid="save-state" className={clsx("text-sm", save.kind === "error" ? "text-result-fail" : "text-ink-faint")}>
+                  {save.text}
+                </span>
+              </>
+            )}
+          </div>
+        </div>
+        {step < DESIGN_STEPS.length - 1 ? (
+          <aside className="panel h-fit lg:sticky lg:top-4" aria-label="Live review">
+            <h2 className="mb-2">Live review</h2>
+            <ReviewPanel outcome={outcome} onGoToStep={goTo} />
+          </aside>
+        ) : null}
+      </div>
+    </FormProvider>
+  );
+}

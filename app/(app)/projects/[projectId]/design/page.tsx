@@ -1,0 +1,34 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { can } from "@/lib/domain/permissions";
+import { requireUser } from "@/lib/server/auth";
+import { getDesignForProject, getReviewContext } from "@/lib/server/data/designs";
+import { listEquipment } from "@/lib/server/data/equipment";
+import { loadProjectOr404 } from "@/lib/server/pages";
+import { DesignEditor } from "./_components/design-editor";
+
+export const metadata: Metadata = { title: "Design" };
+
+export default async function DesignPage({ params }: { params: Promise<{ projectId: string }> }) {
+  const viewer = await requireUser();
+  const project = await loadProjectOr404(viewer, (await params).projectId);
+  const design = await getDesignForProject({ viewer, projectId: project.id });
+  const [catalog, context] = await Promise.all([listEquipment({ viewer }), getReviewContext({ viewer, projectId: project.id, draft: design.draft })]);
+  // Items the design already uses stay choosable even when archived since.
+  const known = new Set(catalog.map((c) => c.id));
+  const choices = [...catalog, ...context.catalog.filter((c) => !known.has(c.id))];
+  return (
+    <div className="space-y-4">
+      <div>
+        <p className="text-sm text-ink-faint">
+          <Link href={`/projects/${project.id}`}>{project.customerName}</Link> · {project.address}
+        </p>
+        <h1>Design</h1>
+        <p className="text-sm text-ink-soft">
+          {project.jurisdiction ? `Checked against NEC ${project.jurisdiction.necEdition} as adopted by ${project.jurisdiction.name}.` : "Choose the project's AHJ to run the code checks."} Your input is saved as you go.
+        </p>
+      </div>
+      <DesignEditor projectId={project.id} initialDraft={design.draft} initialRevision={design.revision} catalog={choices} conditions={context.conditions} readOnly={!can(viewer, "project:edit")} />
+    </div>
+  );
+}

@@ -1,0 +1,147 @@
+import { z } from "zod";
+import { CONDUCTOR_SIZES } from "@/lib/engineering/tables/conductor-sizes";
+
+export const TRADE_SIZES = ["1/2", "3/4", "1", "1-1/4", "1-1/2", "2"] as const;
+export const RACEWAY_TYPES = ["none", "EMT", "PVC-40"] as const;
+export const SERVICE_VOLTAGES_V = ["120", "208", "240", "277", "480"] as const;
+
+const blankToUndefined = (v: unknown) => (v === "" || v === null ? undefined : v);
+
+function numberIn(label: string, min: number, max: number, unit = "", { integer = false } = {}) {
+  return z.coerce
+    .number({ error: `${label} must be a number` })
+    .refine((v) => Number.isFinite(v), `${label} must be a number`)
+    .refine((v) => !integer || Number.isInteger(v), `${label} must be a whole number`)
+    .refine((v) => v >= min && v <= max, `${label} must be between ${min} and ${max}${unit ? ` ${unit}` : ""}`);
+}
+const required = (label: string, min: number, max: number, unit = "", opts = {}) =>
+  z.preprocess(blankToUndefined, numberIn(label, min, max, unit, opts).optional()).refine((v) => v !== undefined, `Enter the ${label.toLowerCase()}`) as unknown as z.ZodType<number, string | number>;
+const optional = (label: string, min: number, max: number, unit = "", opts = {}) =>
+  z.preprocess(blankToUndefined, numberIn(label, min, max, unit, opts).optional()) as unknown as z.ZodType<number | undefined, string | number | undefined>;
+const choice = <const T extends readonly [string, ...string[]]>(values: T, label: string) => z.enum(values, { error: `Choose the ${label}` });
+const text = (label: string, max: number) => z.string().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
+const optionalText = (max: number) => z.string().trim().max(max, `At most ${max} characters`).optional();
+const catalogId = (label: string) => z.string({ error: `Choose a ${label}` }).uuid(`Choose a ${label}`);
+const lineId = z.string().min(1).max(20);
+const flag = z.boolean().optional();
+
+/** The design as the review needs it; parsed on the client as you type and again on the server. */
+export const DesignInput = z.object({
+  equipment: z.object({
+    moduleId: catalogId("PV module"),
+    inverters: z
+      .array(z.object({ lineId, equipmentId: catalogId("inverter"), quantity: required("Quantity", 1, 200, "", { integer: true }) }))
+      .min(1, "Add at least one inverter")
+      .max(6, "At most 6 inverter lines"),
+    deviceId: z.union([z.string().uuid("Choose a module-level device, or none"), z.literal("")]).optional().transform((v) => v || null),
+    listedRapidShutdownSystem: flag,
+  }),
+  array: z.object({
+    mount: choice(["roof", "ground"], "mounting"),
+    roofPlanes: z
+      .array(
+        z.object({
+          lineId,
+          label: text("plane name", 60),
+          tiltDeg: required("Tilt", 0, 90, "°"),
+          azimuthDeg: required("Azimuth", 0, 360, "°"),
+          moduleCount: required("Module count", 1, 500, "", { integer: true }),
+          attachmentCount: required("Attachment count", 1, 2000, "", { integer: true }),
+          rackingWeightLb: required("Racking weight", 0, 5000, "lb"),
+        }),
+      )
+      .min(1, "Add at least one roof plane or ground array")
+      .max(12, "At most 12 planes"),
+    strings: z
+      .array(
+        z.object({
+          lineId,
+          inverterLineId: z.string({ error: "Choose the inverter this string feeds" }).min(1, "Choose the inverter this string feeds").max(20),
+          mpptIndex: optional("MPPT input", 1, 12, "", { integer: true }),
+          modulesInSeries: required("Modules in series", 1, 40, "", { integer: true }),
+          parallelCount: required("Strings in parallel", 1, 8, "", { integer: true }),
+        }),
+      )
+      .max(24, "At most 24 string lines"),
+  }),
+  service: z.object({
+    voltageV: choice(SERVICE_VOLTAGES_V, "service voltage"),
+    phase: choice(["1", "3"], "number of phases"),
+    busbarA: required("Busbar rating", 20, 4000, "A", { integer: true }),
+    mainBreakerA: optional("Main breaker", 15, 4000, "A", { integer: true }),
+    connection: choice(["load-side", "supply-side"], "point of connection"),
+    pvBreakerA: required("PV breaker", 10, 1200, "A", { integer: true }),
+    pvBreakerAtOppositeEnd: flag,
+    otherBreakersA: z
+      .string()
+      .max(200)
+      .optional()
+      .transform((v, ctx) => {
+        const parts = (v ?? "").split(/[,\s]+/).filter(Boolean).map(Number);
+        if (parts.some((n) => !Number.isInteger(n) || n <= 0 || n > 1200)) {
+          ctx.addIssue({ code: "custom", message: "List the other breakers in whole amperes separated by commas, e.g. 20, 20, 30" });
+          return z.NEVER;
+        }
+        return parts;
+      }),
+    serviceLocation: optionalText(120),
+    pvDisconnectLocation: optionalText(120),
+  }),
+  runs: z
+    .array(
+      z.object({
+        lineId,
+        label: text("run name", 60),
+        circuit: z.string({ error: "Choose what this run carries" }).regex(/^(dc|ac):[\w.-]+$/, "Choose what this run carries"),
+        lengthFt: required("Length", 1, 2000, "ft"),
+        material: choice(["Cu", "Al"], "conductor material"),
+        size: choice(CONDUCTOR_SIZES, "conductor size"),
+        stranding: choice(["stranded", "solid"], "stranding"),
+        insulation: optionalText(30),
+        insulationTempC: choice(["75", "90"], "insulation temperature rating"),
+        terminalTempC: choice(["60", "75", "90"], "terminal temperature rating"),
+        ambientTempC: optional("Ambient temperature", -40, 70, "°C"),
+        onRoof: flag,
+        roofClearanceIn: optional("Height above the roof", 0, 36, "in"),
+        currentCarryingConductors: required("Current-carrying conductors", 1, 40, "", { integer: true }),
+        racewayType: choice(RACEWAY_TYPES, "conduit type"),
+        tradeSize: z.union([z.enum(TRADE_SIZES), z.literal("")]).optional(),
+        ocpdA: optional("Overcurrent device", 1, 1200, "A", { integer: true }),
+        egcSize: z.union([z.enum(CONDUCTOR_SIZES), z.literal("")]).optional(),
+      }),
+    )
+    .min(1, "Add at least one conductor run")
+    .max(20, "At most 20 conductor runs"),
+  site: z.object({
+    isDwelling: flag,
+    peakSunHours: optional("Peak sun hours", 1, 8, "h/day"),
+  }),
+});
+export type DesignInput = z.output<typeof DesignInput>;
+/** The editor's form values: what the inputs hold before parsing. */
+export type DesignFormValues = z.input<typeof DesignInput>;
+
+type Leaf = string | number | boolean | null | undefined;
+const LOOSE_LEAF = z.union([z.string().max(200), z.number(), z.boolean(), z.null()]).optional();
+
+/** The same shape with every leaf accepting whatever was typed: drafts are saved as they are. */
+function loosen(schema: z.ZodType): z.ZodType {
+  const def = (schema as unknown as { _zod: { def: { type: string; shape?: Record<string, z.ZodType>; element?: z.ZodType } } })._zod.def;
+  if (def.type === "object" && def.shape) return z.object(Object.fromEntries(Object.entries(def.shape).map(([k, v]) => [k, loosen(v)]))).partial();
+  if (def.type === "array" && def.element) return z.array(loosen(def.element)).max(50).optional();
+  return LOOSE_LEAF;
+}
+
+/** What the editor saves as you go: any partial input, never refused for being incomplete. */
+export const DesignDraft = loosen(DesignInput) as z.ZodType<DeepLoose<DesignFormValues>>;
+type DeepLoose<T> = T extends Leaf ? Leaf : T extends (infer U)[] ? DeepLoose<U>[] | undefined : { [K in keyof T]?: DeepLoose<T[K]> };
+export type DesignDraft = DeepLoose<DesignFormValues>;
+
+/** The editor's five steps; each but the last edits one top-level part of the design. */
+export const DESIGN_STEPS = [
+  { key: "equipment", title: "Equipment" },
+  { key: "array", title: "Arrays and strings" },
+  { key: "service", title: "Service and connection" },
+  { key: "runs", title: "Conductor runs" },
+  { key: "review", title: "Review" },
+] as const;

@@ -1,0 +1,32 @@
+import { Op, type Transaction } from "sequelize";
+import { Design, Equipment, Jurisdiction, Project } from "@/models";
+import { runDesignReview } from "@/lib/design/run-review";
+import type { NecEdition } from "@/lib/engineering";
+import type { EquipmentDto } from "@/lib/schemas/equipment";
+import { DESIGN_MODELS, demoDesign, type CatalogIds } from "./demo-designs";
+
+/** Gives every demo project past "Draft" a design, reviewed as the editor would on save. */
+export async function seedDemoDesigns(organizationId: string, transaction: Transaction) {
+  const items = await Equipment.findAll({ where: { organizationId }, transaction });
+  const catalog = items.map((e) => ({ id: e.id, kind: e.kind, maker: e.maker, model: e.model, listing: e.listing, specs: e.specs, isArchived: false, datasheet: null }) as EquipmentDto);
+  const ids = Object.fromEntries(Object.entries(DESIGN_MODELS).map(([key, model]) => [key, catalog.find((c) => c.model === model)?.id ?? ""])) as CatalogIds;
+  const jurisdictions = new Map((await Jurisdiction.findAll({ where: { organizationId }, transaction })).map((j) => [j.id, j]));
+  const projects = await Project.findAll({ where: { organizationId, stage: { [Op.ne]: "draft" } }, order: [["number", "ASC"]], transaction });
+
+  for (const [i, project] of projects.entries()) {
+    const draft = demoDesign(ids, { busbarA: project.busbarA ?? 200, mainBreakerA: project.mainBreakerA ?? 200 }, i);
+    const j = project.jurisdictionId ? jurisdictions.get(project.jurisdictionId) : undefined;
+    const outcome = runDesignReview(draft, catalog, j ? { recordLowTempC: j.recordLowTempC, highDesignTempC: j.highDesignTempC, necEdition: j.necEdition as NecEdition } : null);
+    await Design.create(
+      {
+        organizationId,
+        projectId: project.id,
+        draft: draft as unknown as Record<string, unknown>,
+        reviewStatus: outcome.status === "reviewed" ? outcome.review.summary.status : "incomplete",
+        reviewSummary: outcome.status === "reviewed" ? { ...outcome.review.summary } : null,
+        updatedById: project.coordinatorId,
+      },
+      { transaction },
+    );
+  }
+}

@@ -1,0 +1,95 @@
+import "server-only";
+import { Design, Jurisdiction, Project } from "@/models";
+import { newDesignDraft } from "@/lib/design/defaults";
+import { runDesignReview, type DesignReviewOutcome } from "@/lib/design/run-review";
+import type { SiteConditions } from "@/lib/design/to-engine";
+import { can, type Viewer } from "@/lib/domain/permissions";
+import { AppError } from "@/lib/errors";
+import type { NecEdition } from "@/lib/engineering";
+import { DesignDraft } from "@/lib/schemas/design";
+import type { EquipmentDto } from "@/lib/schemas/equipment";
+import { db } from "../db";
+import { isUuid } from "./ids";
+import { recordAudit } from "./audit";
+import { getEquipmentByIds } from "./equipment";
+import { getProjectById } from "./projects";
+
+export type DesignDto = { projectId: string; draft: DesignDraft; isSaved: boolean; revision: number; reviewStatus: string; updatedAt: string | null };
+
+async function siteConditions(viewer: Viewer, jurisdictionId: string | null): Promise<SiteConditions | null> {
+  if (!jurisdictionId) return null;
+  const j = await Jurisdiction.findOne({ where: { id: jurisdictionId, organizationId: viewer.organizationId } });
+  return j ? { recordLowTempC: j.recordLowTempC, highDesignTempC: j.highDesignTempC, necEdition: j.necEdition as NecEdition } : null;
+}
+
+/** Every catalog id the draft mentions, whatever its shape, for one lookup. */
+function referencedIds(draft: DesignDraft): string[] {
+  const e = draft.equipment ?? {};
+  const ids = [e.moduleId, e.deviceId, ...(e.inverters ?? []).map((l) => l?.equipmentId)];
+  return ids.filter((v): v is string => typeof v === "string" && isUuid(v));
+}
+
+/** The project's design, or a new draft prefilled from the project when none is saved. */
+export async function getDesignForProject({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<DesignDto> {
+  db();
+  const project = await getProjectById({ viewer, projectId });
+  const row = await Design.findOne({ where: { projectId, organizationId: viewer.organizationId } });
+  if (!row) return { projectId, draft: newDesignDraft(project) as DesignDraft, isSaved: false, revision: 0, reviewStatus: "incomplete", updatedAt: null };
+  return { projectId, draft: row.draft as DesignDraft, isSaved: true, revision: row.revision, reviewStatus: row.reviewStatus, updatedAt: row.updatedAt.toISOString() };
+}
+
+/** The catalog items and site conditions a review of this draft needs. */
+export async function getReviewContext({ viewer, projectId, draft }: { viewer: Viewer; projectId: string; draft: DesignDraft }) {
+  const project = await getProjectById({ viewer, projectId });
+  const [catalog, conditions] = await Promise.all([getEquipmentByIds({ viewer, ids: referencedIds(draft) }), siteConditions(viewer, project.jurisdiction?.id ?? null)]);
+  return { catalog: catalog as EquipmentDto[], conditions };
+}
+
+/** Reviews the saved design (or the new draft) exactly as the editor would. */
+export async function reviewProjectDesign({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<DesignReviewOutcome> {
+  const design = await getDesignForProject({ viewer, projectId });
+  const { catalog, conditions } = await getReviewContext({ viewer, projectId, draft: design.draft });
+  return runDesignReview(design.draft, catalog, conditions);
+}
+
+/**
+ * Saves the draft as typed (never refused for being incomplete), reviews it
+ * and keeps the outcome, so lists and packets know whether the design passes.
+ */
+export async function saveDesignDraft({ viewer, projectId, draft: raw }: { viewer: Viewer; projectId: string; draft: unknown }) {
+  const sequelize = db();
+  const parsed = DesignDraft.safeParse(raw);
+  if (!parsed.success) throw new AppError("INVALID_INPUT", "The design could not be read; nothing was saved.");
+  const draft = parsed.data;
+  const { catalog, conditions } = await getReviewContext({ viewer, projectId, draft });
+  const outcome = runDesignReview(draft, catalog, conditions);
+  const reviewStatus = outcome.status === "reviewed" ? outcome.review.summary.status : "incomplete";
+  const reviewSummary = outcome.status === "reviewed" ? { ...outcome.review.summary } : null;
+  const saved = await sequelize.transaction(async (transaction) => {
+    const project = await Project.findOne({ where: { id: projectId, organizationId: viewer.organizationId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!project || !can(viewer, "project:edit", project)) throw new AppError("NOT_FOUND", "No such project.");
+    const existing = await Design.findOne({ where: { projectId }, transaction });
+    const before = existing?.reviewStatus ?? null;
+    const row = existing
+      ? await existing.update({ draft: draft as Record<string, unknown>, reviewStatus, reviewSummary, revision: existing.revision + 1, updatedById: viewer.id }, { transaction })
+      : await Design.create({ organizationId: viewer.organizationId, projectId, draft: draft as Record<string, unknown>, reviewStatus, reviewSummary, updatedById: viewer.id }, { transaction });
+    // Autosave writes often; the trail records what matters: the review's outcome changing.
+    if (before !== reviewStatus) {
+      await recordAudit({ viewer, action: "design.review-changed", entityType: "project", entityId: projectId, changes: { reviewStatus: { before, after: reviewStatus } } }, { transaction });
+    }
+    return row;
+  });
+  return { revision: saved.revision, updatedAt: saved.updatedAt.toISOString(), outcome };
+}
+
+export type DesignStatusDto = { reviewStatus: "incomplete" | "pass" | "warn" | "fail"; revision: number; updatedAt: string; counts: { pass: number; warn: number; fail: number } | null } | null;
+
+/** The outcome of the saved design's last review, for the project page; null when nothing is saved. */
+export async function getDesignStatus({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<DesignStatusDto> {
+  db();
+  await getProjectById({ viewer, projectId });
+  const row = await Design.findOne({ where: { projectId, organizationId: viewer.organizationId } });
+  if (!row) return null;
+  const s = row.reviewSummary as { pass?: number; warn?: number; fail?: number } | null;
+  return { reviewStatus: row.reviewStatus, revision: row.revision, updatedAt: row.updatedAt.toISOString(), counts: s ? { pass: s.pass ?? 0, warn: s.warn ?? 0, fail: s.fail ?? 0 } : null };
+}

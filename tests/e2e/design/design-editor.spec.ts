@@ -1,0 +1,78 @@
+import { expect, test } from "@playwright/test";
+import { DEMO, listProjectsAs, pageFor, signIn } from "../support/session";
+
+test("coordinator builds a design step by step and fixes a failing check by its suggestion", async ({ page }) => {
+  await signIn(page, DEMO.coordinator);
+  // A draft project in Brackenford: NEC 2023, record low −24 °C, 100 A service.
+  const [project] = await listProjectsAs(page, { q: "Imogen Halvorsen" });
+  expect(project.stage).toBe("draft");
+  await page.goto(`/projects/${project.id}/design`);
+  const review = page.getByTestId("review-panel");
+  await expect(review).toHaveAttribute("data-review", "incomplete");
+
+  // 1. Equipment
+  await page.getByLabel("PV module").selectOption({ label: "Larkspur LK-405M-54H — 405 W" });
+  await page.getByLabel("Inverter line inv-1").selectOption({ label: "Quillon QS-7600 — string, 7600 W AC" });
+  await page.getByLabel("Module-level device").selectOption({ label: "Stavemoor SR-1 Shutdown Unit — shutdown device" });
+  await page.getByRole("button", { name: "Next", exact: true }).click();
+
+  // 2. Arrays and strings: one string of 15, one too many for −24 °C.
+  await page.getByLabel("Tilt").fill("22");
+  await page.getByLabel("Modules", { exact: true }).fill("15");
+  await page.getByLabel("Attachments").fill("20");
+  await page.getByLabel("Racking weight").fill("120");
+  await page.getByLabel("In series").fill("15");
+  await page.getByRole("button", { name: "Next", exact: true }).click();
+
+  // 3. Service: a bad entry is shown next to its field and kept; the 100 A panel takes a supply-side connection.
+  await page.getByLabel("PV breaker (or supply-side OCPD)").fill("forty");
+  await expect(page.getByRole("alert").filter({ hasText: "PV breaker must be a number" })).toBeVisible();
+  await page.getByLabel("PV breaker (or supply-side OCPD)").fill("40");
+  await page.getByLabel("Point of connection").selectOption("supply-side");
+  await page.getByRole("button", { name: "Next", exact: true }).click();
+
+  // 4. Conductor runs
+  await page.getByLabel("Length").nth(0).fill("60");
+  await page.getByLabel("Length").nth(1).fill("30");
+
+  // Coefficient method, NEC 2023 690.7(A)(1): 37.2 V × (1 + (−24 − 25)(−0.27 %/°C)) = 42.12 V per module;
+  // 15 × 42.12 = 631.8 V is above the 600 V dwelling limit, 14 × 42.12 = 589.7 V is within it.
+  const stringCheck = review.getByTestId("check").filter({ hasText: "String S1 maximum voltage" });
+  await expect(stringCheck).toHaveAttribute("data-status", "fail");
+  await expect(stringCheck).toContainText("NEC 2023 690.7(A)");
+  await expect(stringCheck).toContainText("Suggested: Use at most 14 modules in this string.");
+
+  // Follow the suggestion.
+  await page.getByRole("button", { name: /2\. Arrays and strings/ }).click();
+  await page.getByLabel("In series").fill("14");
+  await page.getByLabel("Modules", { exact: true }).fill("14");
+  await expect(review).toHaveAttribute("data-review", "pass");
+
+  await page.getByRole("button", { name: /5\. Review/ }).click();
+  const full = page.getByTestId("review-panel");
+  await expect(full.getByTestId("check").filter({ hasText: "String S1 maximum voltage" })).toHaveAttribute("data-status", "pass");
+  await expect(page.getByTestId("warning-label").first()).toBeVisible();
+  await expect(page.getByText("PV source circuits stay energized in daylight")).toBeVisible();
+  await expect(page.getByTestId("save-state")).toHaveText(/Saved, revision \d+/, { timeout: 15_000 });
+
+  // Reloading shows the same design: nothing typed was lost.
+  await page.reload();
+  await page.getByRole("button", { name: /2\. Arrays and strings/ }).click();
+  await expect(page.getByLabel("In series")).toHaveValue("14");
+  await page.getByRole("button", { name: /3\. Service/ }).click();
+  await expect(page.getByLabel("Point of connection")).toHaveValue("supply-side");
+
+  // The saved review is the one the server computes.
+  const saved = await (await page.request.get(`/api/v1/projects/${project.id}/review`)).json();
+  expect(JSON.stringify(saved)).toContain("pass");
+});
+
+test("installer sees an assigned project's design read-only", async ({ browser }) => {
+  const installer = await pageFor(browser, DEMO.installer);
+  const mine = (await listProjectsAs(installer)).find((p) => p.stage !== "draft");
+  await installer.goto(`/projects/${mine!.id}/design`);
+  await expect(installer.getByText("Read only: your role cannot change the design.")).toBeVisible();
+  await expect(installer.getByLabel("PV module")).toBeDisabled();
+  const put = await installer.request.put(`/api/v1/projects/${mine!.id}/design`, { data: {} });
+  expect(put.status()).toBe(403);
+});
