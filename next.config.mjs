@@ -6,7 +6,7 @@ const root = path.dirname(fileURLToPath(import.meta.url));
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize loads its dialect with a dynamic require that bundlers cannot follow.
-  serverExternalPackages: ["sequelize", "pg", "pg-hstore"],
+  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "pg-boss"],
   // A lockfile in a parent folder would otherwise make Turbopack guess the workspace root.
   turbopack: { root },
   // A second build folder lets a second test run build beside the first (see OHMSTEAD_PORT_OFFSET).

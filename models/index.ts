@@ -6,13 +6,14 @@ import { Equipment } from "./equipment";
 import { Invitation } from "./invitation";
 import { Jurisdiction } from "./jurisdiction";
 import { Organization } from "./organization";
+import { Packet } from "./packet";
 import { Project } from "./project";
 import { SignInAttempt } from "./sign-in-attempt";
 import { StageChange } from "./stage-change";
 import { User } from "./user";
 import { Utility } from "./utility";
 
-export { AuditEvent, Design, Equipment, Invitation, Jurisdiction, Organization, Project, SignInAttempt, StageChange, User, Utility };
+export { AuditEvent, Design, Equipment, Invitation, Jurisdiction, Organization, Packet, Project, SignInAttempt, StageChange, User, Utility };
 export { ApiToken };
 
 let initialized: Sequelize | null = null;
@@ -21,13 +22,14 @@ let initialized: Sequelize | null = null;
 export function initModels(sequelize: Sequelize) {
   if (initialized === sequelize) return;
   initialized = sequelize;
-  for (const model of [Organization, User, Invitation, SignInAttempt, Jurisdiction, Utility, Project, StageChange, AuditEvent, Equipment, Design]) {
+  for (const model of [Organization, User, Invitation, SignInAttempt, Jurisdiction, Utility, Project, StageChange, AuditEvent, Equipment, Design, Packet]) {
     model.initModel(sequelize);
   }
   Project.belongsTo(Jurisdiction, { as: "jurisdiction", foreignKey: "jurisdictionId" });
   Project.belongsTo(Utility, { as: "utility", foreignKey: "utilityId" });
   Project.belongsTo(User, { as: "coordinator", foreignKey: "coordinatorId" });
   Project.belongsTo(User, { as: "installer", foreignKey: "installerId" });
+  Packet.belongsTo(User, { as: "requestedBy", foreignKey: "requestedById" });
   StageChange.belongsTo(User, { as: "changedBy", foreignKey: "changedById" });
   AuditEvent.belongsTo(User, { as: "actor", foreignKey: "actorId" });
   ApiToken.initModel(sequelize);

@@ -1,5 +1,5 @@
 // Migrating, seeding, building and serving the app as child processes.
-import { spawn, spawnSync } from "node:child_process";
+import { spawn } from "node:child_process";
 import { createHash } from "node:crypto";
 import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
 import path from "node:path";
@@ -7,14 +7,19 @@ import { fail } from "./bootstrap.mjs";
 
 const bin = (root, name) => path.join(root, "node_modules", ".bin", name);
 
-export function runStep(root, label, command, args, env) {
-  const result = spawnSync(command, args, { cwd: root, stdio: "inherit", env: { ...process.env, ...env } });
-  if (result.status !== 0) fail(`${label} failed (exit ${result.status ?? result.signal}).`);
+/**
+ * Runs a child to completion without blocking this process, which also
+ * serves the storage and mail fakes the child may need.
+ */
+export async function runStep(root, label, command, args, env) {
+  const child = spawn(command, args, { cwd: root, stdio: "inherit", env: { ...process.env, ...env } });
+  const [code, signal] = await new Promise((resolve) => child.on("exit", (c, s) => resolve([c, s])));
+  if (code !== 0) fail(`${label} failed (exit ${code ?? signal}).`);
 }
 
-export function migrateAndSeed(root, env, { seed = true } = {}) {
-  runStep(root, "Migrations", bin(root, "tsx"), ["scripts/migrate.ts", "up"], env);
-  if (seed) runStep(root, "Demo seed", bin(root, "tsx"), ["scripts/seed.ts"], env);
+export async function migrateAndSeed(root, env, { seed = true } = {}) {
+  await runStep(root, "Migrations", bin(root, "tsx"), ["scripts/migrate.ts", "up"], env);
+  if (seed) await runStep(root, "Demo seed", bin(root, "tsx"), ["--import", "./scripts/server-only-hook.mjs", "scripts/seed.ts"], env);
 }
 
 const SOURCE_DIRS = ["app", "components", "lib", "models", "templates", "public"];
@@ -36,7 +41,7 @@ function sourceHash(root) {
 }
 
 /** Runs `next build` only when the sources changed since the last build. */
-export function buildIfNeeded(root, env) {
+export async function buildIfNeeded(root, env) {
   const distDir = path.join(root, process.env.NEXT_DIST_DIR || ".next");
   const stamp = path.join(distDir, "ohmstead-source.sha256");
   const want = sourceHash(root);
@@ -45,19 +50,23 @@ export function buildIfNeeded(root, env) {
     return;
   }
   console.log("• Building the app (next build) …");
-  runStep(root, "next build", bin(root, "next"), ["build"], env);
+  await runStep(root, "next build", bin(root, "next"), ["build"], env);
   writeFileSync(stamp, want + "\n");
 }
 
 /** Starts `next start` or `next dev` in its own process group so it can be stopped whole. */
 export function serveApp(root, env, { dev, port }) {
   const args = dev ? ["dev", "-H", "127.0.0.1", "-p", String(port)] : ["start", "-H", "127.0.0.1", "-p", String(port)];
-  const child = spawn(bin(root, "next"), args, {
-    cwd: root,
-    env: { ...process.env, ...env, ...(dev ? { NODE_ENV: "development" } : {}) },
-    stdio: "inherit",
-    detached: true,
-  });
+  return spawnGroup(root, bin(root, "next"), args, { ...env, ...(dev ? { NODE_ENV: "development" } : {}) });
+}
+
+/** Starts the background worker that generates packets. */
+export function startWorker(root, env) {
+  return spawnGroup(root, bin(root, "tsx"), ["--import", "./scripts/server-only-hook.mjs", "scripts/worker.ts"], env);
+}
+
+function spawnGroup(root, command, args, env) {
+  const child = spawn(command, args, { cwd: root, env: { ...process.env, ...env }, stdio: "inherit", detached: true });
   const stop = () =>
     new Promise((resolve) => {
       if (child.exitCode !== null || child.signalCode !== null) return resolve();

@@ -12,25 +12,28 @@ ensureNodeModules(root);
 const postgresBin = ensurePostgresBinaries();
 
 const { startStack } = await import("./services/stack.mjs");
-const { migrateAndSeed, buildIfNeeded, serveApp, waitForApp } = await import("./app-process.mjs");
+const { migrateAndSeed, buildIfNeeded, serveApp, startWorker, waitForApp } = await import("./app-process.mjs");
 const { DEMO_SIGN_INS } = await import("../lib/seed/demo-sign-ins.mjs");
 
 const stack = await startStack({ root, profile: "dev", postgresBin });
 let app;
+let worker;
 let stopping = false;
 const shutdown = async (code = 0) => {
   if (stopping) return;
   stopping = true;
   console.log("\n• Stopping …");
   await app?.stop();
+  await worker?.stop();
   await stack.stop();
   process.exit(code);
 };
 for (const signal of ["SIGINT", "SIGTERM", "SIGHUP"]) process.on(signal, () => shutdown(0));
 
 try {
-  migrateAndSeed(root, stack.env);
-  if (!dev) buildIfNeeded(root, stack.env);
+  await migrateAndSeed(root, stack.env);
+  if (!dev) await buildIfNeeded(root, stack.env);
+  worker = startWorker(root, stack.env);
   app = serveApp(root, stack.env, { dev, port: stack.ports.app });
   app.child.on("exit", (code) => {
     if (!stopping) shutdown(code ?? 1);

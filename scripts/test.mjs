@@ -17,15 +17,17 @@ ensureTestTools();
 
 const { startStack } = await import("./services/stack.mjs");
 const { recreateDatabase, databaseUrl } = await import("./services/postgres.mjs");
-const { migrateAndSeed, buildIfNeeded, serveApp, waitForApp } = await import("./app-process.mjs");
+const { migrateAndSeed, buildIfNeeded, serveApp, startWorker, waitForApp } = await import("./app-process.mjs");
 
 const bin = (name) => path.join(root, "node_modules", ".bin", name);
 const results = [];
 let app;
+let worker;
 const stack = await startStack({ root, profile: "test", postgresBin, fresh: true });
 
 async function finish(code) {
   await app?.stop();
+  await worker?.stop();
   await stack.stop();
   console.log("\nSuites:");
   for (const r of results) console.log(`  ${r.ok ? "✔" : "✖"} ${r.suite}`);
@@ -52,14 +54,15 @@ try {
     const database = "ohmstead_it";
     await recreateDatabase(stack.ports.postgres, database);
     const env = { NODE_ENV: "test", DATABASE_URL: databaseUrl(stack.ports.postgres, database) };
-    migrateAndSeed(root, env, { seed: false });
+    await migrateAndSeed(root, env, { seed: false });
     if (!(await suite("integration", bin("vitest"), ["run", "--project", "integration"], env))) await finish(1);
   }
 
   if (wants("e2e")) {
     await recreateDatabase(stack.ports.postgres, stack.ports.database);
-    migrateAndSeed(root, stack.env);
-    buildIfNeeded(root, stack.env);
+    await migrateAndSeed(root, stack.env);
+    await buildIfNeeded(root, stack.env);
+    worker = startWorker(root, stack.env);
     app = serveApp(root, stack.env, { dev: false, port: stack.ports.app });
     await waitForApp(stack.env.APP_URL, app.child);
     if (!(await suite("e2e", bin("playwright"), ["test"], { BASE_URL: stack.env.APP_URL, NODE_ENV: "test" }))) await finish(1);

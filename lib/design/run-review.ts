@@ -1,9 +1,9 @@
-import { DesignInputError, reviewDesign, type ReviewResult } from "@/lib/engineering";
+import { DesignInputError, reviewDesign, type Design, type ReviewResult, type Site } from "@/lib/engineering";
 import { DesignInput } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 import { toEngineInput, type DesignProblem, type SiteConditions } from "./to-engine";
 
-export type DesignReviewOutcome = { status: "incomplete"; problems: DesignProblem[] } | { status: "reviewed"; review: ReviewResult };
+export type DesignReviewOutcome = { status: "incomplete"; problems: DesignProblem[] } | { status: "reviewed"; review: ReviewResult; design: Design; site: Site };
 
 /**
  * From whatever the editor holds to a review: the problems that keep the
@@ -18,7 +18,7 @@ export function runDesignReview(draft: unknown, catalog: EquipmentDto[], conditi
   const input = toEngineInput(parsed.data, catalog, conditions);
   if (!input.ok) return { status: "incomplete", problems: input.problems };
   try {
-    return { status: "reviewed", review: reviewDesign(input.design, input.site) };
+    return { status: "reviewed", review: reviewDesign(input.design, input.site), design: input.design, site: input.site };
   } catch (error) {
     if (error instanceof DesignInputError) return { status: "incomplete", problems: [{ path: error.field ?? "", message: error.message }] };
     throw error;

@@ -2,11 +2,11 @@ import "server-only";
 import { Design, Jurisdiction, Project } from "@/models";
 import { newDesignDraft } from "@/lib/design/defaults";
 import { runDesignReview, type DesignReviewOutcome } from "@/lib/design/run-review";
-import type { SiteConditions } from "@/lib/design/to-engine";
+import { toEngineInput, type SiteConditions } from "@/lib/design/to-engine";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import type { NecEdition } from "@/lib/engineering";
-import { DesignDraft } from "@/lib/schemas/design";
+import { DesignDraft, DesignInput } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 import { db } from "../db";
 import { isUuid } from "./ids";
@@ -92,4 +92,14 @@ export async function getDesignStatus({ viewer, projectId }: { viewer: Viewer; p
   if (!row) return null;
   const s = row.reviewSummary as { pass?: number; warn?: number; fail?: number } | null;
   return { reviewStatus: row.reviewStatus, revision: row.revision, updatedAt: row.updatedAt.toISOString(), counts: s ? { pass: s.pass ?? 0, warn: s.warn ?? 0, fail: s.fail ?? 0 } : null };
+}
+
+/** The saved design as the review engine reads it, for drawing its single-line diagram; null while incomplete. */
+export async function getEngineDesign({ viewer, projectId }: { viewer: Viewer; projectId: string }) {
+  const design = await getDesignForProject({ viewer, projectId });
+  const { catalog, conditions } = await getReviewContext({ viewer, projectId, draft: design.draft });
+  const parsed = DesignInput.safeParse(design.draft);
+  if (!parsed.success || !conditions) return null;
+  const engine = toEngineInput(parsed.data, catalog, conditions);
+  return engine.ok ? { design: engine.design, site: engine.site } : null;
 }

@@ -38,6 +38,9 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         <Link href={`/projects/${project.id}/design`} className="rounded bg-copper px-4 py-2 text-sm font-medium text-white no-underline hover:bg-copper-dark hover:no-underline">
           Design and review
         </Link>
+        <Link href={`/projects/${project.id}/documents`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
+          Documents
+        </Link>
         {can(viewer, "project:edit") ? (
           <Link href={`/projects/${project.id}/edit`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
             Edit project

@@ -72,13 +72,21 @@ export function DesignEditor(props: { projectId: string; initialDraft: DesignDra
     // eslint-disable-next-line react-hooks/exhaustive-deps -- values is the trigger
   }, [values]);
 
+  // Leaving the page before the autosave fired still keeps what was typed: the
+  // last draft goes out with a keepalive request that outlives the page.
   useEffect(() => {
-    const warn = (event: BeforeUnloadEvent) => {
-      if (pending.current) event.preventDefault();
+    if (readOnly) return;
+    const flush = () => {
+      if (!pending.current) return;
+      pending.current = false;
+      void fetch(`/api/v1/projects/${projectId}/design`, { method: "PUT", keepalive: true, headers: { "content-type": "application/json" }, body: JSON.stringify(form.getValues()) });
     };
-    window.addEventListener("beforeunload", warn);
-    return () => window.removeEventListener("beforeunload", warn);
-  }, []);
+    window.addEventListener("pagehide", flush);
+    return () => {
+      window.removeEventListener("pagehide", flush);
+      flush(); // client-side navigation unmounts the editor
+    };
+  }, [form, projectId, readOnly]);
 
   const goTo = (next: number) => {
     setVisited((v) => new Set(v).add(step));

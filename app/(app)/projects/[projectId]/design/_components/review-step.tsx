@@ -1,6 +1,8 @@
 "use client";
 
 import { SafetyNote } from "@/components/review/safety-note";
+import { SingleLineSvg } from "@/components/sld/single-line-svg";
+import { layoutSingleLine } from "@/lib/sld";
 import type { DesignReviewOutcome } from "@/lib/design/run-review";
 import { ReviewPanel } from "./review-panel";
 
@@ -8,6 +10,14 @@ export function ReviewStep({ outcome, onGoToStep }: { outcome: DesignReviewOutco
   return (
     <div className="space-y-5">
       <ReviewPanel outcome={outcome} onGoToStep={onGoToStep} full />
+      {outcome.status === "reviewed" ? (
+        <section className="space-y-2">
+          <h3 className="font-semibold">Single-line diagram</h3>
+          <div className="overflow-x-auto rounded border border-paper-edge bg-white p-2">
+            <SingleLineSvg scene={layoutSingleLine(outcome.design, { necEdition: outcome.site.necEdition })} className="min-w-[900px]" />
+          </div>
+        </section>
+      ) : null}
       {outcome.status === "reviewed" && outcome.review.labels.length ? (
         <section className="space-y-2">
           <h3 className="font-semibold">Required warning labels</h3>

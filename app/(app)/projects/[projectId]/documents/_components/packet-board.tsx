@@ -1,0 +1,29 @@
+"use client";
+
+import useSWR from "swr";
+import { PACKET_KINDS } from "@/lib/packets/packet-input";
+import type { PacketDto } from "@/lib/server/data/packets";
+import { PacketCard } from "./packet-card";
+
+async function fetchPackets(url: string): Promise<PacketDto[]> {
+  const res = await fetch(url, { cache: "no-store" });
+  const body = await res.json().catch(() => null);
+  if (!res.ok) throw new Error(body?.error?.message ?? `The packets could not be loaded (${res.status}).`);
+  return body.items;
+}
+
+/** Both packets of a project; polls while a generation is queued or running. */
+export function PacketBoard({ projectId, initial, canGenerate, reviewStatus }: { projectId: string; initial: PacketDto[]; canGenerate: boolean; reviewStatus: string }) {
+  const { data, error, mutate } = useSWR(`/api/v1/projects/${projectId}/packets`, fetchPackets, {
+    fallbackData: initial,
+    refreshInterval: (latest) => (latest?.some((p) => p.status === "queued" || p.status === "running") ? 1000 : 0),
+  });
+  return (
+    <div className="grid gap-6 lg:grid-cols-2">
+      {error ? <p role="alert" className="text-sm text-result-fail">{error.message}</p> : null}
+      {PACKET_KINDS.map((kind) => (
+        <PacketCard key={kind} projectId={projectId} kind={kind} packets={(data ?? []).filter((p) => p.kind === kind)} canGenerate={canGenerate} reviewStatus={reviewStatus} onChange={() => mutate()} />
+      ))}
+    </div>
+  );
+}

@@ -1,0 +1,92 @@
+"use client";
+
+import { useState, useTransition } from "react";
+import { Button } from "@/components/ui/button";
+import { FormMessage } from "@/components/ui/form-message";
+import { PACKET_TITLES, type PacketKind } from "@/lib/packets/packet-input";
+import type { PacketDto } from "@/lib/server/data/packets";
+import { requestPacketAction, retryPacketAction } from "../actions";
+import { PacketRevision } from "./packet-revision";
+
+const PURPOSE: Record<PacketKind, string> = {
+  permit: "For the AHJ: cover, system summary, single-line diagram, calculations, labels, structural summary and the equipment data sheets. 11 × 17 in sheets.",
+  interconnection: "For the utility: application with account and meter, equipment and ratings, single-line diagram, signature blocks. Letter-size forms.",
+};
+
+export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus, onChange }: { projectId: string; kind: PacketKind; packets: PacketDto[]; canGenerate: boolean; reviewStatus: string; onChange: () => void }) {
+  const [reason, setReason] = useState("");
+  const [message, setMessage] = useState<string>();
+  const [pending, startTransition] = useTransition();
+  const inFlight = packets.find((p) => p.status === "queued" || p.status === "running");
+  const failed = packets.find((p) => p.status === "failed");
+  const ready = packets.filter((p) => p.status === "ready");
+  const next = (ready[0]?.revision ?? 0) + 1;
+  const needsReason = reviewStatus === "fail";
+
+  const run = (action: () => Promise<{ ok: boolean; message?: string }>) =>
+    startTransition(async () => {
+      setMessage(undefined);
+      const result = await action();
+      if (!result.ok) setMessage(result.message);
+      onChange();
+    });
+
+  return (
+    <section className="panel space-y-4" aria-labelledby={`${kind}-heading`} data-testid={`packet-${kind}`}>
+      <div>
+        <h2 id={`${kind}-heading`}>{PACKET_TITLES[kind]}</h2>
+        <p className="text-sm text-ink-soft">{PURPOSE[kind]}</p>
+      </div>
+      <FormMessage kind="error">{message}</FormMessage>
+
+      {inFlight ? (
+        <div className="space-y-1" data-testid="packet-progress">
+          <p className="text-sm">
+            Generating Rev {inFlight.revision}: {inFlight.step}
+          </p>
+          <div className="h-2 overflow-hidden rounded-full bg-paper-edge" role="progressbar" aria-label={`${PACKET_TITLES[kind]} progress`} aria-valuemin={0} aria-valuemax={100} aria-valuenow={inFlight.progress}>
+            <div className="h-full bg-copper transition-all" style={{ width: `${Math.max(4, inFlight.progress)}%` }} />
+          </div>
+        </div>
+      ) : null}
+
+      {failed && !inFlight ? (
+        <div className="space-y-2 rounded border border-result-fail/40 p-3 text-sm" data-testid="packet-failed">
+          <p className="text-result-fail">Rev {failed.revision} could not be made: {failed.error}</p>
+          {canGenerate ? (
+            <Button variant="secondary" disabled={pending} onClick={() => run(() => retryPacketAction({ packetId: failed.id }))}>
+              Retry
+            </Button>
+          ) : null}
+        </div>
+      ) : null}
+
+      {canGenerate && !inFlight ? (
+        <div className="space-y-2">
+          {needsReason ? (
+            <>
+              <label className="label" htmlFor={`${kind}-reason`}>
+                The design review has failing checks. Reason for generating anyway (printed on the cover)
+              </label>
+              <textarea id={`${kind}-reason`} className="input" rows={2} maxLength={1000} value={reason} onChange={(e) => setReason(e.target.value)} />
+            </>
+          ) : null}
+          <Button disabled={pending || reviewStatus === "incomplete" || (needsReason && !reason.trim())} onClick={() => run(() => requestPacketAction({ projectId, kind, overrideReason: reason || undefined }))}>
+            {pending ? "Queueing…" : `Generate Rev ${next}`}
+          </Button>
+          {reviewStatus === "incomplete" ? <p className="text-xs text-ink-faint">Complete the design first: packets are made from a reviewed design.</p> : null}
+        </div>
+      ) : null}
+
+      {ready.length ? (
+        <ol className="space-y-3">
+          {ready.map((p) => (
+            <PacketRevision key={p.id} packet={p} />
+          ))}
+        </ol>
+      ) : (
+        <p className="text-sm text-ink-faint">No revision yet.</p>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,39 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { can } from "@/lib/domain/permissions";
+import { requireUser } from "@/lib/server/auth";
+import { SingleLineSvg } from "@/components/sld/single-line-svg";
+import { layoutSingleLine } from "@/lib/sld";
+import { getDesignStatus, getEngineDesign } from "@/lib/server/data/designs";
+import { listPackets } from "@/lib/server/data/packets";
+import { loadProjectOr404 } from "@/lib/server/pages";
+import { PacketBoard } from "./_components/packet-board";
+
+export const metadata: Metadata = { title: "Documents" };
+
+export default async function DocumentsPage({ params }: { params: Promise<{ projectId: string }> }) {
+  const viewer = await requireUser();
+  const project = await loadProjectOr404(viewer, (await params).projectId);
+  const [packets, design, engine] = await Promise.all([listPackets({ viewer, projectId: project.id }), getDesignStatus({ viewer, projectId: project.id }), getEngineDesign({ viewer, projectId: project.id })]);
+  return (
+    <div className="space-y-4">
+      <div>
+        <p className="text-sm text-ink-faint">
+          <Link href={`/projects/${project.id}`}>{project.customerName}</Link> · {project.address}
+        </p>
+        <h1>Documents</h1>
+        <p className="text-sm text-ink-soft">Each packet is generated from the saved design and its review; every generation is a new revision with what changed since the last.</p>
+      </div>
+      {engine ? (
+        <section className="panel space-y-2" aria-labelledby="sld-heading">
+          <h2 id="sld-heading">Single-line diagram</h2>
+          <p className="text-xs text-ink-faint">Drawn from the saved design; the packets carry the same drawing.</p>
+          <div className="overflow-x-auto rounded border border-paper-edge bg-white p-2">
+            <SingleLineSvg scene={layoutSingleLine(engine.design, { necEdition: engine.site.necEdition })} className="min-w-[900px]" />
+          </div>
+        </section>
+      ) : null}
+      <PacketBoard projectId={project.id} initial={packets} canGenerate={can(viewer, "project:edit")} reviewStatus={design?.reviewStatus ?? "incomplete"} />
+    </div>
+  );
+}

@@ -1,0 +1,52 @@
+import type { Design, NecEdition, ReviewResult, Site } from "@/lib/engineering";
+import type { DesignInput } from "@/lib/schemas/design";
+import type { EquipmentDto } from "@/lib/schemas/equipment";
+
+export const PACKET_KINDS = ["permit", "interconnection"] as const;
+export type PacketKind = (typeof PACKET_KINDS)[number];
+
+export const PACKET_TITLES: Record<PacketKind, string> = {
+  permit: "Permit packet",
+  interconnection: "Interconnection packet",
+};
+
+/**
+ * Everything a packet shows, gathered once when generation is asked for, so
+ * the PDF always matches the design and review of that moment.
+ */
+export type PacketInput = {
+  kind: PacketKind;
+  revision: number;
+  generatedAt: string; // ISO date-time
+  preparedBy: { name: string; organizationName: string; licenseNumber: string | null; phone: string | null };
+  project: {
+    number: number;
+    customerName: string;
+    customerEmail: string | null;
+    customerPhone: string | null;
+    street: string;
+    city: string;
+    state: string;
+    postalCode: string;
+    utilityAccountNumber: string | null;
+    meterNumber: string | null;
+  };
+  jurisdiction: { name: string; state: string; necEdition: NecEdition; recordLowTempC: number; highDesignTempC: number };
+  utility: { name: string; requiredGridProfile: string } | null;
+  /** The editor's parsed design (tilt, azimuth, locations, line ids) and the engine's view of it. */
+  designInput: DesignInput;
+  design: Design;
+  site: Site;
+  equipment: {
+    module: Extract<EquipmentDto, { kind: "module" }>;
+    inverters: { lineId: string; quantity: number; item: Extract<EquipmentDto, { kind: "inverter" }> }[];
+    device: Extract<EquipmentDto, { kind: "device" }> | null;
+  };
+  review: ReviewResult;
+  /** Set when a coordinator generated the packet despite failing checks; printed on the cover. */
+  override: { reason: string; byName: string } | null;
+  /** What changed since the previous revision, in plain lines; empty for Rev 1. */
+  changes: string[];
+  /** Data sheets to append after the generated sheets, in this order (permit packet only); the key is the object in storage. */
+  datasheets: { title: string; fileName: string; objectKey?: string }[];
+};

@@ -1,0 +1,8 @@
+import { z } from "zod";
+import { PACKET_KINDS } from "@/lib/packets/packet-input";
+
+export const RequestPacketInput = z.object({
+  kind: z.enum(PACKET_KINDS, { error: "Choose the permit or the interconnection packet" }),
+  overrideReason: z.string().trim().max(1000, "At most 1000 characters").optional(),
+});
+export type RequestPacketInput = z.infer<typeof RequestPacketInput>;

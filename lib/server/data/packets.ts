@@ -1,0 +1,124 @@
+import "server-only";
+import { Op } from "sequelize";
+import { Packet, Project, User } from "@/models";
+import { can, type Viewer } from "@/lib/domain/permissions";
+import { AppError } from "@/lib/errors";
+import { describeChanges } from "@/lib/packets/changes";
+import type { PacketInput, PacketKind } from "@/lib/packets/packet-input";
+import type { PacketStatus } from "@/models/packet";
+import { db } from "../db";
+import { enqueuePacketJob } from "../services/jobs";
+import { recordAudit } from "./audit";
+import { isUuid } from "./ids";
+import { buildPacketInput } from "./packet-input";
+import { getProjectById } from "./projects";
+
+export type PacketDto = {
+  id: string;
+  kind: PacketKind;
+  revision: number;
+  status: PacketStatus;
+  progress: number;
+  step: string;
+  changes: string[];
+  overrideReason: string | null;
+  sizeBytes: number | null;
+  pageCount: number | null;
+  sha256: string | null;
+  error: string | null;
+  requestedBy: string | null;
+  readyAt: string | null;
+  createdAt: string;
+};
+
+function toPacketDto(p: Packet): PacketDto {
+  return {
+    id: p.id, kind: p.kind, revision: p.revision, status: p.status, progress: p.progress, step: p.step, changes: p.changes, overrideReason: p.overrideReason,
+    sizeBytes: p.sizeBytes, pageCount: p.pageCount, sha256: p.sha256, error: p.error, requestedBy: p.requestedBy?.name ?? null,
+    readyAt: p.readyAt?.toISOString() ?? null, createdAt: p.createdAt.toISOString(),
+  };
+}
+
+/** Every generation of the project's packets, newest first. */
+export async function listPackets({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<PacketDto[]> {
+  db();
+  await getProjectById({ viewer, projectId });
+  const rows = await Packet.findAll({ where: { projectId, organizationId: viewer.organizationId }, include: [{ model: User, as: "requestedBy", attributes: ["name"] }], order: [["revision", "DESC"], ["createdAt", "DESC"]] });
+  return rows.map(toPacketDto);
+}
+
+/**
+ * Asks for a new revision of a packet. A failing review needs a written
+ * reason, which is printed on the cover and kept in the audit trail. The
+ * revision number is the next after the last ready one; a failed attempt
+ * is replaced, so revisions stay consecutive.
+ */
+export async function requestPacket({ viewer, projectId, kind, overrideReason }: { viewer: Viewer; projectId: string; kind: PacketKind; overrideReason?: string | null }): Promise<PacketDto> {
+  const sequelize = db();
+  const project = await getProjectById({ viewer, projectId });
+  if (!can(viewer, "project:edit", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null })) throw new AppError("FORBIDDEN", "Your role cannot generate packets.");
+  const base = await buildPacketInput({ viewer, projectId, kind });
+  const failing = base.review.summary.status === "fail";
+  const reason = overrideReason?.trim() || null;
+  if (failing && !reason) {
+    throw new AppError("CONFLICT", "The design review has failing checks. Fix them first, or write why the packet must go out anyway.", { overrideReason: ["Write the reason for generating with failing checks"] });
+  }
+
+  const created = await sequelize.transaction(async (transaction) => {
+    // One generation at a time per project: the lock orders concurrent requests.
+    await Project.findOne({ where: { id: projectId, organizationId: viewer.organizationId }, transaction, lock: transaction.LOCK.UPDATE });
+    const inFlight = await Packet.findOne({ where: { projectId, kind, status: { [Op.in]: ["queued", "running"] } }, transaction });
+    if (inFlight) throw new AppError("CONFLICT", `Revision ${inFlight.revision} of this packet is still being generated.`);
+    await Packet.destroy({ where: { projectId, kind, status: "failed" }, transaction });
+    const previous = await Packet.findOne({ where: { projectId, kind, status: "ready" }, order: [["revision", "DESC"]], transaction });
+    const revision = (previous?.revision ?? 0) + 1;
+    const override = failing ? { reason: reason!, byName: viewer.name } : null;
+    const changes = describeChanges(previous ? (previous.input as unknown as PacketInput) : null, base as PacketInput);
+    const input: PacketInput = { ...base, revision, changes, override };
+    const row = await Packet.create({ organizationId: viewer.organizationId, projectId, kind, revision, input: input as unknown as Record<string, unknown>, changes, overrideReason: override?.reason ?? null, requestedById: viewer.id, step: "Waiting for a worker" }, { transaction });
+    await recordAudit(
+      { viewer, action: override ? "packet.requested-with-override" : "packet.requested", entityType: "project", entityId: projectId, changes: { [`${kind} packet`]: { before: previous ? `Rev ${previous.revision}` : null, after: `Rev ${revision}` }, ...(override ? { overrideReason: { before: null, after: override.reason } } : {}) } },
+      { transaction },
+    );
+    return row;
+  });
+  await enqueueOrFail(created);
+  return toPacketDto(created);
+}
+
+async function enqueueOrFail(packet: Packet) {
+  try {
+    await enqueuePacketJob(packet.id);
+  } catch (error) {
+    console.error("could not queue packet", error);
+    await packet.update({ status: "failed", error: "The job queue could not be reached. Try again in a moment." });
+  }
+}
+
+async function findVisiblePacket(viewer: Viewer, packetId: string) {
+  if (!isUuid(packetId)) throw new AppError("NOT_FOUND", "No such packet.");
+  const packet = await Packet.findOne({ where: { id: packetId, organizationId: viewer.organizationId } });
+  if (!packet) throw new AppError("NOT_FOUND", "No such packet.");
+  await getProjectById({ viewer, projectId: packet.projectId }); // installers: only their projects
+  return packet;
+}
+
+/** Puts a failed generation back in the queue, unchanged. */
+export async function retryPacket({ viewer, packetId }: { viewer: Viewer; packetId: string }): Promise<PacketDto> {
+  db();
+  const packet = await findVisiblePacket(viewer, packetId);
+  if (!can(viewer, "project:edit")) throw new AppError("FORBIDDEN", "Your role cannot generate packets.");
+  if (packet.status !== "failed") throw new AppError("CONFLICT", "Only a failed generation can be retried.");
+  await packet.update({ status: "queued", progress: 0, step: "Waiting for a worker", error: null });
+  await enqueueOrFail(packet);
+  return toPacketDto(packet);
+}
+
+/** Where a ready packet's PDF is stored and the file name to download it as. */
+export async function getPacketFile({ viewer, packetId }: { viewer: Viewer; packetId: string }) {
+  db();
+  const packet = await findVisiblePacket(viewer, packetId);
+  if (packet.status !== "ready" || !packet.objectKey) throw new AppError("NOT_FOUND", "This packet is not ready.");
+  const input = packet.input as unknown as PacketInput;
+  return { key: packet.objectKey, fileName: `ohmstead-${input.project.number}-${packet.kind}-rev${packet.revision}.pdf`, sizeBytes: packet.sizeBytes };
+}

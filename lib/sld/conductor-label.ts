@@ -1,0 +1,64 @@
+// The words written along a conductor run, the way a plan reviewer reads
+// them: what the run is, then "count × size material insulation, raceway; EGC".
+import { sizeLabel, type ConductorRun, type Design } from "@/lib/engineering";
+import { runInverterUnits } from "@/lib/engineering/design-lookup";
+import { textWidthPt } from "./scene";
+import type { SceneBuilder } from "./scene-builder";
+import { SIZE } from "./style";
+
+/** Circuit conductors the run carries: two per DC string; the phase conductors of the AC output. */
+export function circuitConductorCount(design: Design, run: ConductorRun): number {
+  if (run.circuit.kind === "dc-strings") return 2 * Math.max(1, run.circuit.stringIds.length);
+  const phase = safely(() => runInverterUnits(design, run)[0]?.inverter.phase) ?? design.service.phase;
+  return phase === 3 ? 3 : 2;
+}
+
+/**
+ * The conductors in two halves that read as one: "2 × 10 AWG Cu PV wire" and
+ * "free air; EGC 10 AWG Cu", or "… THWN-2" and "in 3/4 in EMT; EGC 10 AWG Cu".
+ */
+export function conductorSpec(design: Design, run: ConductorRun): [string, string] {
+  const c = run.conductor;
+  const insulation = c.insulation ?? `${c.insulationTempC} °C insulation`;
+  const wires = `${circuitConductorCount(design, run)} × ${sizeLabel(c.size)} ${c.material} ${insulation}`;
+  const raceway = run.raceway ? `in ${run.raceway.tradeSize} in ${run.raceway.type}` : "free air";
+  const egc = run.egc ? `; EGC ${sizeLabel(run.egc.size)} ${run.egc.material}` : "; no EGC entered";
+  return [wires, `${raceway}${egc}`];
+}
+
+/** e.g. "Inverter to service panel, 28 ft" with the run's own protective device, if any. */
+export function runTitle(run: ConductorRun): string {
+  const ocpd = run.ocpdA ? `, ${run.ocpdA} A ${run.ocpdIsFuse ? "fuse" : "breaker"}` : "";
+  return `${run.label}, ${formatFt(run.lengthFt)} ft${ocpd}`;
+}
+
+/** The three lines written above a run's wire. */
+export function runLabelLines(design: Design, run: ConductorRun | undefined): RunLabel {
+  if (!run) return ["No conductor run entered", "add it to the design", ""];
+  return [runTitle(run), ...conductorSpec(design, run)];
+}
+
+export type RunLabel = [title: string, wires: string, racewayAndEgc: string];
+
+/** Above a wire: the run's name and length, then its conductors on two lines. */
+export function drawRunLabel(b: SceneBuilder, x: number, wireY: number, [title, ...spec]: RunLabel): void {
+  b.text(x, wireY - 23, title, { size: SIZE.label });
+  b.textLines(x, wireY - 14, spec.filter(Boolean), 8.5, { size: SIZE.spec, mono: true, tone: "soft" });
+}
+
+export function runLabelWidth([title, ...spec]: RunLabel): number {
+  return Math.max(textWidthPt(title, SIZE.label), ...spec.map((line) => textWidthPt(line, SIZE.spec, { mono: true })));
+}
+
+function formatFt(ft: number): string {
+  return Number.isInteger(ft) ? String(ft) : ft.toFixed(1);
+}
+
+// A design under edit may point at a missing inverter; the label still draws.
+function safely<T>(fn: () => T): T | undefined {
+  try {
+    return fn();
+  } catch {
+    return undefined;
+  }
+}

@@ -1,0 +1,114 @@
+import { createHash } from "node:crypto";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { AuditEvent, Equipment, Packet } from "@/models";
+import { AppError } from "@/lib/errors";
+import { seedDemoCatalog } from "@/lib/seed/demo-catalog";
+import { DESIGN_MODELS, demoDesign, type CatalogIds } from "@/lib/seed/demo-designs";
+import { saveDesignDraft } from "@/lib/server/data/designs";
+import { getPacketFile, listPackets, requestPacket, retryPacket } from "@/lib/server/data/packets";
+import { db } from "@/lib/server/db";
+import { generatePacket } from "@/lib/server/services/packet-generation";
+import { getObjectBytes } from "@/lib/server/services/storage";
+import { closeDb } from "../../support/db";
+import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
+
+// The queue is exercised end to end by the e2e suite; here jobs run in-process.
+vi.mock("@/lib/server/services/jobs", () => ({ enqueuePacketJob: vi.fn(async () => undefined), PACKET_QUEUE: "packet-generate" }));
+
+let org: OrgFixture;
+let rival: OrgFixture;
+let ids: CatalogIds;
+const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+
+beforeAll(async () => {
+  org = await makeOrganization("Packets");
+  rival = await makeOrganization("Rival packets");
+  await db().transaction((t) => seedDemoCatalog(org.organization.id, t));
+  const items = await Equipment.findAll({ where: { organizationId: org.organization.id } });
+  ids = Object.fromEntries(Object.entries(DESIGN_MODELS).map(([k, model]) => [k, items.find((i) => i.model === model)!.id])) as CatalogIds;
+});
+
+afterAll(async () => {
+  await closeDb();
+});
+
+async function projectWithDesign(modulesInSeries = "11") {
+  const project = await makeProject(org, { busbarA: 200, mainBreakerA: 200, utilityAccountNumber: "BL-5550001", meterNumber: "M5550001" });
+  const draft = demoDesign(ids, { busbarA: 200, mainBreakerA: 200 }, 0);
+  draft.array.strings[0].modulesInSeries = modulesInSeries;
+  await saveDesignDraft({ viewer: org.viewers.coordinator, projectId: project.id, draft });
+  return project;
+}
+
+describe("packets", () => {
+  it("generates Rev 1, stores it in S3 with a checksum that matches, then Rev 2 with its change list", async () => {
+    const project = await projectWithDesign();
+    const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" });
+    expect(queued).toMatchObject({ revision: 1, status: "queued", changes: [] });
+    expect(await code(requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" }))).toBe("CONFLICT"); // one at a time
+
+    await generatePacket(queued.id);
+    const [rev1] = await listPackets({ viewer: org.viewers.coordinator, projectId: project.id });
+    expect(rev1).toMatchObject({ revision: 1, status: "ready", progress: 100 });
+    expect(rev1.pageCount).toBeGreaterThan(4);
+    const file = await getPacketFile({ viewer: org.viewers.coordinator, packetId: rev1.id });
+    const bytes = await getObjectBytes(file.key);
+    expect(createHash("sha256").update(bytes).digest("hex")).toBe(rev1.sha256);
+    expect(Buffer.from(bytes.slice(0, 5)).toString()).toBe("%PDF-");
+    expect(file.fileName).toMatch(/-permit-rev1\.pdf$/);
+
+    // A change to the design shows in Rev 2's change list.
+    const draft = demoDesign(ids, { busbarA: 200, mainBreakerA: 200 }, 0);
+    draft.service.pvBreakerA = "45";
+    await saveDesignDraft({ viewer: org.viewers.coordinator, projectId: project.id, draft });
+    const second = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" });
+    expect(second.revision).toBe(2);
+    expect(second.changes).toContain("PV breaker (A): 40 → 45");
+    await generatePacket(second.id);
+    expect((await listPackets({ viewer: org.viewers.coordinator, projectId: project.id })).map((p) => [p.revision, p.status])).toEqual([
+      [2, "ready"],
+      [1, "ready"],
+    ]);
+    expect(await AuditEvent.count({ where: { entityId: project.id, action: "packet.generated" } })).toBe(2);
+  });
+
+  it("refuses a failing design unless a reason is written, and prints and records the reason", async () => {
+    const project = await projectWithDesign("15"); // 15 × 42.5 V at −20 °C is above 600 V
+    const refused = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "interconnection" }).catch((e) => e);
+    expect(refused.code).toBe("CONFLICT");
+    expect(refused.fieldErrors.overrideReason).toBeDefined();
+    const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "interconnection", overrideReason: "AHJ accepted the engineer's letter for the string length" });
+    const row = await Packet.findByPk(queued.id);
+    expect((row!.input as { override: { reason: string } }).override.reason).toBe("AHJ accepted the engineer's letter for the string length");
+    const audit = await AuditEvent.findOne({ where: { entityId: project.id, action: "packet.requested-with-override" } });
+    expect(audit?.changes.overrideReason?.after).toBe("AHJ accepted the engineer's letter for the string length");
+  });
+
+  it("marks a generation that cannot finish as failed, keeps no object, and can retry it", async () => {
+    const project = await projectWithDesign();
+    const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" });
+    // A data sheet that is not in storage makes the generation fail part way.
+    const row = await Packet.findByPk(queued.id);
+    const input = row!.input as { datasheets: unknown[] };
+    await row!.update({ input: { ...input, datasheets: [{ title: "Missing", fileName: "missing.pdf", objectKey: "orgs/none/missing.pdf" }] } });
+    await generatePacket(queued.id);
+    const [failed] = await listPackets({ viewer: org.viewers.coordinator, projectId: project.id });
+    expect(failed).toMatchObject({ status: "failed", sha256: null });
+    expect(await code(getPacketFile({ viewer: org.viewers.coordinator, packetId: failed.id }))).toBe("NOT_FOUND");
+
+    await row!.update({ input });
+    await retryPacket({ viewer: org.viewers.coordinator, packetId: failed.id });
+    await generatePacket(failed.id);
+    expect((await listPackets({ viewer: org.viewers.coordinator, projectId: project.id }))[0]).toMatchObject({ revision: 1, status: "ready" });
+  });
+
+  it("keeps packets inside the organization and away from installers and unfinished designs", async () => {
+    const project = await projectWithDesign();
+    const queued = await requestPacket({ viewer: org.viewers.admin, projectId: project.id, kind: "interconnection" });
+    expect(await code(listPackets({ viewer: rival.viewers.admin, projectId: project.id }))).toBe("NOT_FOUND");
+    expect(await code(getPacketFile({ viewer: rival.viewers.admin, packetId: queued.id }))).toBe("NOT_FOUND");
+    expect(await code(requestPacket({ viewer: org.viewers.installer, projectId: project.id, kind: "permit" }))).toBe("NOT_FOUND");
+    const empty = await makeProject(org);
+    expect(await code(requestPacket({ viewer: org.viewers.coordinator, projectId: empty.id, kind: "permit" }))).toBe("CONFLICT");
+  });
+});

@@ -1,0 +1,124 @@
+import { describe, expect, test } from "vitest";
+import type { Design } from "@/lib/engineering";
+import { layoutSingleLine, type SldScene, type SldText } from "@/lib/sld";
+import { manyStrings, microBranches, microFixture, optimizerFixture, stringFixture, supplySideFixture, twoInverters } from "./sld-designs";
+
+const texts = (scene: SldScene) => scene.items.filter((i): i is SldText => i.kind === "text").map((t) => t.text);
+const moduleSymbols = (scene: SldScene) => scene.items.filter((i) => i.kind === "rect" && i.width === 22 && i.height === 16).length;
+
+// The agreed estimate: chars × size × 0.55 wide, from the cap line to the descenders.
+function estimatedBox(t: SldText) {
+  const width = t.text.length * t.size * 0.55;
+  const minX = t.anchor === "start" ? t.x : t.anchor === "middle" ? t.x - width / 2 : t.x - width;
+  return { minX, maxX: minX + width, minY: t.y - t.size * 0.75, maxY: t.y + t.size * 0.25 };
+}
+
+function overlappingTexts(scene: SldScene): string[] {
+  const boxes = scene.items.filter((i): i is SldText => i.kind === "text").map((t) => ({ t, box: estimatedBox(t) }));
+  const clashes: string[] = [];
+  boxes.forEach((a, i) =>
+    boxes.slice(i + 1).forEach((b) => {
+      const apart = a.box.maxX <= b.box.minX || b.box.maxX <= a.box.minX || a.box.maxY <= b.box.minY || b.box.maxY <= a.box.minY;
+      if (!apart) clashes.push(`"${a.t.text}" × "${b.t.text}"`);
+    }),
+  );
+  return clashes;
+}
+
+function textsOutside(scene: SldScene): string[] {
+  return scene.items
+    .filter((i): i is SldText => i.kind === "text")
+    .filter((t) => {
+      const b = estimatedBox(t);
+      return b.minX < 0 || b.minY < 0 || b.maxX > scene.width || b.maxY > scene.height;
+    })
+    .map((t) => t.text);
+}
+
+describe("single-line layout: what it says", () => {
+  test("string inverter with shutdown devices: ratings, counts and conductor labels from the design", () => {
+    const scene = layoutSingleLine(stringFixture(), { necEdition: 2023 });
+    const all = texts(scene);
+    expect(scene.unit).toBe("pt");
+    expect(all).toEqual(expect.arrayContaining(["40 A PV breaker", "200 A", "busbar", "main", "× 11", "INVERTER", "RAPID SHUTDOWN INITIATOR", "AC DISCONNECT", "UTILITY METER", "kWh", "UTILITY GRID"]));
+    expect(all.filter((t) => t === "200 A")).toHaveLength(2); // busbar and main
+    expect(all.filter((t) => t === "× 11")).toHaveLength(2);
+    expect(all).toEqual(expect.arrayContaining(["String S1 to inverter, 62 ft", "2 × 10 AWG Cu PV wire", "free air; EGC 10 AWG Cu"]));
+    expect(all).toEqual(expect.arrayContaining(["Inverter to service panel, 28 ft", "2 × 8 AWG Cu THWN-2", "in 3/4 in EMT; EGC 10 AWG Cu"]));
+    expect(all).toContain("Stavemoor SR-1 Shutdown Unit");
+    expect(all).toContain("DC disconnect integral (dashed)");
+    expect(all.join(" ")).toMatch(/NEC 2023/);
+    expect(all.join(" ")).toMatch(/690\.12/);
+    expect(scene.description).toMatch(/40 A PV breaker on a 200 A busbar/);
+  });
+
+  test("optimizer strings: the optimizer is named and the fixed string voltage shown", () => {
+    const all = texts(layoutSingleLine(optimizerFixture()));
+    expect(all).toEqual(expect.arrayContaining(["× 10", "35 A PV breaker", "DC optimizer on each module:", "Calderby CB-P450 Optimizer", "Fixed string voltage 380 V"]));
+  });
+
+  test("microinverters: branch circuits with unit counts and breakers meet in a combiner", () => {
+    const all = texts(layoutSingleLine(microFixture()));
+    expect(all).toEqual(expect.arrayContaining(["Branch 1: 8 microinverters", "Branch 2: 8 microinverters", "× 8", "AC COMBINER", "Joins 2 branch circuits", "30 A PV breaker", "150 A"]));
+    expect(all.filter((t) => t === "20 A")).toHaveLength(2);
+    expect(all).toEqual(expect.arrayContaining(["Branch 1 on the roof, 35 ft, 20 A breaker", "2 × 12 AWG Cu THWN-2", "free air; EGC 12 AWG Cu", "2 × 10 AWG Cu THWN-2"]));
+    // The AC disconnect is the initiator; there is no separate one.
+    expect(all).not.toContain("RAPID SHUTDOWN INITIATOR");
+    expect(all).toContain("Also the rapid shutdown");
+  });
+
+  test("supply-side connection: a fused disconnect tapped ahead of the main, no PV breaker", () => {
+    const all = texts(layoutSingleLine(supplySideFixture()));
+    expect(all).toEqual(expect.arrayContaining(["FUSED PV DISCONNECT", "40 A fuses", "Supply-side connection (705.11)", "100 A"]));
+    expect(all.some((t) => t.includes("PV breaker"))).toBe(false);
+  });
+
+  test("a 14-module string is drawn as three module symbols marked × 14", () => {
+    const scene = layoutSingleLine(manyStrings(stringFixture(), 4, 14));
+    expect(moduleSymbols(scene)).toBe(4 * 3);
+    expect(texts(scene).filter((t) => t === "× 14")).toHaveLength(4);
+  });
+
+  test("strings sharing a run get one label with four conductors", () => {
+    const all = texts(layoutSingleLine(manyStrings(stringFixture(), 6)));
+    expect(all).toEqual(expect.arrayContaining(["Strings S5 + S6 to inverter, 60 ft", "4 × 10 AWG Cu PV wire"]));
+  });
+
+  test("heading and notes can be left to the page around the diagram", () => {
+    const scene = layoutSingleLine(stringFixture(), { heading: false, notes: false });
+    expect(texts(scene)).not.toContain("NOTES");
+    expect(texts(scene)).not.toContain("SINGLE-LINE DIAGRAM");
+  });
+});
+
+describe("single-line layout: readable at every size", () => {
+  const cases: [string, Design][] = [
+    ...[1, 2, 3, 4, 5, 6].map((n): [string, Design] => [`${n} string(s), shutdown devices`, manyStrings(stringFixture(), n, 14)]),
+    ...[1, 2, 3, 4, 5, 6].map((n): [string, Design] => [`${n} optimizer string(s)`, manyStrings(optimizerFixture(), n, 10)]),
+    ...[1, 2, 3].map((n): [string, Design] => [`${n} microinverter branch(es)`, microBranches(n)]),
+    ["two inverters into a combiner", twoInverters()],
+    ["supply-side connection", supplySideFixture()],
+    ["the microinverter fixture", microFixture()],
+  ];
+
+  test.each(cases)("%s: no text overlaps another, all inside the scene", (_, design) => {
+    for (const scene of [layoutSingleLine(design, { necEdition: 2020 }), layoutSingleLine(design, { heading: false, notes: false })]) {
+      expect(overlappingTexts(scene)).toEqual([]);
+      expect(textsOutside(scene)).toEqual([]);
+    }
+  });
+
+  test("the overlap check itself catches a label dropped onto another", () => {
+    const scene = layoutSingleLine(stringFixture());
+    const label = scene.items.find((i): i is SldText => i.kind === "text" && i.text === "40 A PV breaker")!;
+    const clash = { ...scene, items: [...scene.items, { ...label, text: "stray", x: label.x + 3, y: label.y + 2 }] };
+    expect(overlappingTexts(clash)).toEqual(['"40 A PV breaker" × "stray"']);
+  });
+
+  test("the diagram grows downward with more strings, not sideways", () => {
+    const one = layoutSingleLine(manyStrings(stringFixture(), 1));
+    const six = layoutSingleLine(manyStrings(stringFixture(), 6));
+    expect(six.height).toBeGreaterThan(one.height + 200);
+    expect(six.width).toBeLessThan(one.width * 1.1);
+  });
+});
