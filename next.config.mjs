@@ -12,6 +12,10 @@ const nextConfig = {
   // A second build folder lets a second test run build beside the first (see OHMSTEAD_PORT_OFFSET).
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
+  // Inspector links are private by their token: keep every page under them out of search indexes.
+  async headers() {
+    return [{ source: "/share/:path*", headers: [{ key: "X-Robots-Tag", value: "noindex, nofollow" }] }];
+  },
   typedRoutes: false,
 };
 

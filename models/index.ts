@@ -6,8 +6,13 @@ import { Equipment } from "./equipment";
 import { Invitation } from "./invitation";
 import { Jurisdiction } from "./jurisdiction";
 import { Organization } from "./organization";
+import { OutboxMessage } from "./outbox-message";
 import { Packet } from "./packet";
 import { Project } from "./project";
+import { ShareLink } from "./share-link";
+import { ShareLinkAccess } from "./share-link-access";
+import { ShareLinkMiss } from "./share-link-miss";
+import { ShareLinkPacket } from "./share-link-packet";
 import { SignInAttempt } from "./sign-in-attempt";
 import { StageChange } from "./stage-change";
 import { User } from "./user";
@@ -15,6 +20,8 @@ import { Utility } from "./utility";
 
 export { AuditEvent, Design, Equipment, Invitation, Jurisdiction, Organization, Packet, Project, SignInAttempt, StageChange, User, Utility };
 export { ApiToken };
+export { ShareLink, ShareLinkAccess, ShareLinkMiss, ShareLinkPacket };
+export { OutboxMessage };
 
 let initialized: Sequelize | null = null;
 
@@ -34,4 +41,10 @@ export function initModels(sequelize: Sequelize) {
   AuditEvent.belongsTo(User, { as: "actor", foreignKey: "actorId" });
   ApiToken.initModel(sequelize);
   ApiToken.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
+  OutboxMessage.initModel(sequelize);
+  for (const model of [ShareLink, ShareLinkPacket, ShareLinkAccess, ShareLinkMiss]) model.initModel(sequelize);
+  ShareLink.belongsToMany(Packet, { through: ShareLinkPacket, as: "packets", foreignKey: "shareLinkId", otherKey: "packetId" });
+  Packet.belongsToMany(ShareLink, { through: ShareLinkPacket, as: "shareLinks", foreignKey: "packetId", otherKey: "shareLinkId" });
+  ShareLink.hasMany(ShareLinkAccess, { as: "accesses", foreignKey: "shareLinkId" });
+  ShareLink.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
 }

@@ -1,8 +1,9 @@
 // The background worker: takes packet generations from the PostgreSQL-backed
-// queue. Run beside the app (npm start and npm test start one); in production
+// queue and sends the e-mail outbox. Run beside the app (npm start and npm test start one); in production
 // run as many as needed with `npm run worker`.
 import PgBoss from "pg-boss";
 import { PACKET_QUEUE, type PacketJob } from "@/lib/server/services/jobs";
+import { deliverDueMail } from "@/lib/server/services/outbox";
 import { generatePacket } from "@/lib/server/services/packet-generation";
 
 const url = process.env.DATABASE_URL;
@@ -20,11 +21,29 @@ await boss.work<PacketJob>(PACKET_QUEUE, { pollingIntervalSeconds: 0.5, batchSiz
 });
 console.log("• Packet worker is taking jobs.");
 
+// The outbox is polled rather than queued in pg-boss: a row committed with the change is the job,
+// and a short cadence keeps mail within a couple of seconds of the change.
+const MAIL_INTERVAL_MS = 1_500;
 let stopping = false;
+let mailRound: Promise<void> = Promise.resolve();
+async function deliverMailLoop() {
+  if (stopping) return;
+  mailRound = deliverDueMail({ limit: 20 })
+    .then(({ failed }) => {
+      if (failed) console.error(`outbox: ${failed} message(s) gave up after their last retry`);
+    })
+    .catch((error) => console.error("outbox delivery error", error));
+  await mailRound;
+  if (!stopping) setTimeout(deliverMailLoop, MAIL_INTERVAL_MS);
+}
+void deliverMailLoop();
+console.log("• Mail worker is sending the outbox.");
+
 for (const signal of ["SIGINT", "SIGTERM"] as const) {
   process.on(signal, async () => {
     if (stopping) return;
     stopping = true;
+    await mailRound; // let a message in flight be marked, so it is not sent again
     await boss.stop({ graceful: true, timeout: 15_000 });
     process.exit(0);
   });

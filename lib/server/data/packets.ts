@@ -39,10 +39,22 @@ function toPacketDto(p: Packet): PacketDto {
   };
 }
 
+// Far longer than any generation takes; a row still in flight after this was abandoned.
+const STALE_AFTER_MS = 10 * 60_000;
+
+/** A worker that stopped mid-job leaves its row in flight; after a while it counts as failed, so it can be retried. */
+async function failAbandoned(projectId: string) {
+  await Packet.update(
+    { status: "failed", progress: 0, step: "Failed", error: "The generation stopped without finishing (the worker may have restarted). Retry it." },
+    { where: { projectId, status: { [Op.in]: ["queued", "running"] }, updatedAt: { [Op.lt]: new Date(Date.now() - STALE_AFTER_MS) } } },
+  );
+}
+
 /** Every generation of the project's packets, newest first. */
 export async function listPackets({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<PacketDto[]> {
   db();
   await getProjectById({ viewer, projectId });
+  await failAbandoned(projectId);
   const rows = await Packet.findAll({ where: { projectId, organizationId: viewer.organizationId }, include: [{ model: User, as: "requestedBy", attributes: ["name"] }], order: [["revision", "DESC"], ["createdAt", "DESC"]] });
   return rows.map(toPacketDto);
 }
@@ -57,6 +69,7 @@ export async function requestPacket({ viewer, projectId, kind, overrideReason }:
   const sequelize = db();
   const project = await getProjectById({ viewer, projectId });
   if (!can(viewer, "project:edit", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null })) throw new AppError("FORBIDDEN", "Your role cannot generate packets.");
+  await failAbandoned(projectId);
   const base = await buildPacketInput({ viewer, projectId, kind });
   const failing = base.review.summary.status === "fail";
   const reason = overrideReason?.trim() || null;

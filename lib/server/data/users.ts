@@ -1,12 +1,15 @@
 import "server-only";
-import { Op } from "sequelize";
+import { Op, type Transaction } from "sequelize";
 import { Invitation, Organization, User } from "@/models";
 import type { Viewer } from "@/lib/domain/permissions";
 import type { Role } from "@/lib/domain/roles";
 import { AppError } from "@/lib/errors";
 import type { InviteUserInput } from "@/lib/schemas/user";
+import { invitationEmail } from "@/templates/email/invitation";
 import { db } from "../db";
+import { env } from "../env";
 import { hashPassword, verifyPassword } from "../passwords";
+import { enqueueMail } from "../services/outbox";
 import { hashToken, newToken } from "../tokens";
 import { recordAudit } from "./audit";
 import { assertSignInAllowed, clearAccountFailures, recordSignInFailure } from "./sign-in-throttle";
@@ -64,7 +67,15 @@ async function getUserInOrganization(viewer: Viewer, userId: string) {
   return user;
 }
 
-/** Adds a user without a password and a one-time invitation; returns the token for the e-mail. */
+/** Queues the set-password e-mail in the transaction that creates the invitation, so both exist or neither. */
+async function enqueueInvitationEmail({ viewer, user, token }: { viewer: Viewer; user: User; token: string }, transaction: Transaction) {
+  const organization = await Organization.findByPk(viewer.organizationId, { transaction });
+  const url = `${env().APP_URL}/invitation/${token}`;
+  const mail = invitationEmail({ name: user.name, organizationName: organization?.name ?? "", inviterName: viewer.name, url, days: INVITATION_DAYS });
+  await enqueueMail({ to: user.email, organizationId: viewer.organizationId, ...mail }, { transaction });
+}
+
+/** Adds a user without a password and a one-time invitation, and queues the invitation e-mail; returns the token for tests. */
 export async function inviteUser({ viewer, input }: { viewer: Viewer; input: InviteUserInput }) {
   const sequelize = db();
   const existing = await User.findOne({ where: { email: input.email } });
@@ -77,10 +88,10 @@ export async function inviteUser({ viewer, input }: { viewer: Viewer; input: Inv
       { transaction },
     );
     await recordAudit({ viewer, action: "user.invited", entityType: "user", entityId: created.id, changes: { email: { before: null, after: created.email }, role: { before: null, after: created.role } } }, { transaction });
+    await enqueueInvitationEmail({ viewer, user: created, token }, transaction);
     return created;
   });
-  const organization = await Organization.findByPk(viewer.organizationId);
-  return { user: toUserDto(user), token, organizationName: organization?.name ?? "" };
+  return { user: toUserDto(user), token };
 }
 
 export async function updateUserRole({ viewer, userId, role }: { viewer: Viewer; userId: string; role: Role }) {
@@ -139,7 +150,7 @@ export async function acceptInvitation({ token, password }: { token: string; pas
   });
 }
 
-/** A fresh one-time link for a user who has not set a password yet; older links stop working. */
+/** A fresh one-time link, queued by e-mail, for a user who has not set a password yet; older links stop working. */
 export async function renewInvitation({ viewer, userId }: { viewer: Viewer; userId: string }) {
   const sequelize = db();
   const { token, tokenHash } = newToken();
@@ -149,8 +160,8 @@ export async function renewInvitation({ viewer, userId }: { viewer: Viewer; user
     await Invitation.update({ usedAt: new Date() }, { where: { userId, usedAt: null }, transaction });
     await Invitation.create({ organizationId: viewer.organizationId, userId, tokenHash, expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000), usedAt: null, createdById: viewer.id }, { transaction });
     await recordAudit({ viewer, action: "user.invitation-renewed", entityType: "user", entityId: userId }, { transaction });
+    await enqueueInvitationEmail({ viewer, user: found, token }, transaction);
     return found;
   });
-  const organization = await Organization.findByPk(viewer.organizationId);
-  return { user: toUserDto(user), token, organizationName: organization?.name ?? "" };
+  return { user: toUserDto(user), token };
 }

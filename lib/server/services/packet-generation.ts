@@ -2,7 +2,7 @@ import "server-only";
 import { createHash, randomUUID } from "node:crypto";
 import { AuditEvent, Packet } from "@/models";
 import { appendPdfs } from "@/lib/packets/merge-datasheets";
-import type { PacketInput } from "@/lib/packets/packet-input";
+import { PACKET_TITLES, type PacketInput } from "@/lib/packets/packet-input";
 import { renderPacketPdf } from "@/lib/packets/render-packet";
 import { db } from "../db";
 import { deleteObject, getObjectBytes, putObject } from "./storage";
@@ -30,7 +30,7 @@ export async function generatePacket(packetId: string): Promise<void> {
     await step(55, "Adding the data sheets");
     const extras = [];
     for (const sheet of input.datasheets) if (sheet.objectKey) extras.push({ title: sheet.title, bytes: await getObjectBytes(sheet.objectKey) });
-    const merged = await appendPdfs(sheets, extras);
+    const merged = await appendPdfs(sheets, extras, { footer: `Attachment to project ${input.project.number}, ${PACKET_TITLES[packet.kind].toLowerCase()} Rev ${packet.revision}` });
 
     await step(75, "Storing the PDF");
     const checksum = sha256(merged.bytes);
@@ -41,7 +41,8 @@ export async function generatePacket(packetId: string): Promise<void> {
     await step(90, "Checking the stored copy");
     if (sha256(await getObjectBytes(key)) !== checksum) throw new Error("The stored copy does not match the generated PDF.");
 
-    await packet.update({ status: "ready", progress: 100, step: "Ready", objectKey: key, sha256: checksum, sizeBytes: merged.bytes.length, pageCount: merged.pageCount, readyAt: new Date() });
+    const left = merged.skipped.length ? ` (${merged.skipped.map((x) => x.title).join(", ")}: data sheet unreadable, left out)` : "";
+    await packet.update({ status: "ready", progress: 100, step: `Ready${left}`.slice(0, 80), objectKey: key, sha256: checksum, sizeBytes: merged.bytes.length, pageCount: merged.pageCount, readyAt: new Date() });
     await AuditEvent.create({
       organizationId: packet.organizationId, actorId: packet.requestedById, action: "packet.generated", entityType: "project", entityId: packet.projectId,
       changes: { [`${packet.kind} packet`]: { before: null, after: `Rev ${packet.revision}, ${merged.pageCount} pages, SHA-256 ${checksum.slice(0, 12)}…` } },

@@ -3,15 +3,10 @@ import { mkdtempSync, readFileSync, statSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { expect, test, type Page } from "@playwright/test";
+import { generatePacket } from "../support/packets";
 import { DEMO, listProjectsAs, signIn } from "../support/session";
 
-async function generate(page: Page, kind: "permit" | "interconnection", revision: number) {
-  const card = page.getByTestId(`packet-${kind}`);
-  await card.getByRole("button", { name: `Generate Rev ${revision}` }).click();
-  await expect(card.getByRole("progressbar")).toBeVisible();
-  await expect(card.getByTestId("packet-revision").filter({ hasText: `Rev ${revision}` })).toBeVisible({ timeout: 60_000 });
-  return card;
-}
+const generate = generatePacket;
 
 async function download(page: Page, card: ReturnType<Page["getByTestId"]>, revision: number) {
   const [file] = await Promise.all([page.waitForEvent("download"), card.getByTestId("packet-revision").filter({ hasText: `Rev ${revision}` }).getByRole("link", { name: "Download PDF" }).click()]);

@@ -40,6 +40,16 @@ describe("appending data sheets", () => {
     expect(await countPages(merged.bytes)).toBe(2);
   });
 
+  test("marks each appended page with the packet it belongs to", async () => {
+    const base = await smallPdf(["Generated sheet"]);
+    const sheet = await smallPdf(["Inverter data sheet p1", "Inverter data sheet p2"]);
+    const merged = await appendPdfs(base, [{ title: "Quillon QS-7600", bytes: sheet }], { footer: "Attachment to project 1042, permit packet Rev 2" });
+    const texts = await pageTexts(merged.bytes);
+    expect(texts[0]).not.toContain("Attachment");
+    expect(texts[1]).toContain("Attachment to project 1042, permit packet Rev 2 · Quillon QS-7600 · page 1 of 2");
+    expect(texts[2]).toContain("page 2 of 2");
+  });
+
   test("with nothing readable to add, the base comes back unchanged", async () => {
     const base = await smallPdf(["Only sheet"]);
     const merged = await appendPdfs(base, [{ title: "Empty", bytes: new Uint8Array() }]);

@@ -4,20 +4,17 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { defineAction } from "@/lib/server/action";
 import { inviteUser, renewInvitation, setUserActive, updateUserRole } from "@/lib/server/data/users";
-import { sendInvitationEmail } from "@/lib/server/services/invitations";
 import { ChangeRoleInput, InviteUserInput, SetActiveInput } from "@/lib/schemas/user";
 
 export const inviteUserAction = defineAction({ schema: InviteUserInput, permission: "users:manage" }, async (input, { viewer }) => {
-  const invited = await inviteUser({ viewer, input });
-  const { emailSent } = await sendInvitationEmail({ viewer, ...invited });
+  const { user } = await inviteUser({ viewer, input });
   revalidatePath("/settings/users");
-  return { email: invited.user.email, emailSent };
+  return { email: user.email };
 });
 
 export const renewInvitationAction = defineAction({ schema: z.object({ userId: z.string().uuid() }), permission: "users:manage" }, async ({ userId }, { viewer }) => {
-  const renewed = await renewInvitation({ viewer, userId });
-  const { emailSent } = await sendInvitationEmail({ viewer, ...renewed });
-  return { email: renewed.user.email, emailSent };
+  const { user } = await renewInvitation({ viewer, userId });
+  return { email: user.email };
 });
 
 export const changeRoleAction = defineAction({ schema: ChangeRoleInput, permission: "users:manage" }, async ({ userId, role }, { viewer }) => {

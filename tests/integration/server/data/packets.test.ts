@@ -102,6 +102,16 @@ describe("packets", () => {
     expect((await listPackets({ viewer: org.viewers.coordinator, projectId: project.id }))[0]).toMatchObject({ revision: 1, status: "ready" });
   });
 
+  it("counts a generation abandoned by its worker as failed, so it can be retried", async () => {
+    const project = await projectWithDesign();
+    const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" });
+    await db().query(`update packets set status = 'running', updated_at = now() - interval '11 minutes' where id = :id`, { replacements: { id: queued.id } });
+    const [row] = await listPackets({ viewer: org.viewers.coordinator, projectId: project.id });
+    expect(row).toMatchObject({ status: "failed" });
+    expect(row.error).toMatch(/Retry/);
+    expect((await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" })).revision).toBe(1);
+  });
+
   it("keeps packets inside the organization and away from installers and unfinished designs", async () => {
     const project = await projectWithDesign();
     const queued = await requestPacket({ viewer: org.viewers.admin, projectId: project.id, kind: "interconnection" });

@@ -6,8 +6,10 @@ import { SingleLineSvg } from "@/components/sld/single-line-svg";
 import { layoutSingleLine } from "@/lib/sld";
 import { getDesignStatus, getEngineDesign } from "@/lib/server/data/designs";
 import { listPackets } from "@/lib/server/data/packets";
+import { listShareLinks, revisionLabel } from "@/lib/server/data/share-links";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { PacketBoard } from "./_components/packet-board";
+import { SharePanel } from "./_components/share-panel";
 
 export const metadata: Metadata = { title: "Documents" };
 
@@ -15,6 +17,9 @@ export default async function DocumentsPage({ params }: { params: Promise<{ proj
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
   const [packets, design, engine] = await Promise.all([listPackets({ viewer, projectId: project.id }), getDesignStatus({ viewer, projectId: project.id }), getEngineDesign({ viewer, projectId: project.id })]);
+  const canShare = can(viewer, "project:edit");
+  const shareLinks = canShare ? await listShareLinks({ viewer, projectId: project.id }) : [];
+  const shareable = packets.filter((p) => p.status === "ready").map((p) => ({ packetId: p.id, label: revisionLabel(p) }));
   return (
     <div className="space-y-4">
       <div>
@@ -34,6 +39,7 @@ export default async function DocumentsPage({ params }: { params: Promise<{ proj
         </section>
       ) : null}
       <PacketBoard projectId={project.id} initial={packets} canGenerate={can(viewer, "project:edit")} reviewStatus={design?.reviewStatus ?? "incomplete"} />
+      {canShare ? <SharePanel projectId={project.id} revisions={shareable} links={shareLinks} /> : null}
     </div>
   );
 }

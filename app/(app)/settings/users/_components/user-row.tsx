@@ -51,7 +51,7 @@ export function UserRow({ user, isSelf }: { user: UserDto; isSelf: boolean }) {
       </td>
       <td className="space-x-2 whitespace-nowrap px-3 py-2 text-right">
         {user.status === "invited" ? (
-          <Button variant="quiet" disabled={pending} onClick={() => run(() => renewInvitationAction({ userId: user.id }), "New link sent.")}>
+          <Button variant="quiet" disabled={pending} onClick={() => run(() => renewInvitationAction({ userId: user.id }), "New link queued.")}>
             Send a new link
           </Button>
         ) : null}

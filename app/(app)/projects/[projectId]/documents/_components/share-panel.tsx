@@ -1,0 +1,23 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import type { ShareLinkDto } from "@/lib/server/data/share-links";
+import { ShareLinkForm, type ShareableRevision } from "./share-link-form";
+import { ShareLinkList } from "./share-link-list";
+
+/** Coordinators hand chosen revisions to an AHJ inspector through a read-only link. */
+export function SharePanel({ projectId, revisions, links }: { projectId: string; revisions: ShareableRevision[]; links: ShareLinkDto[] }) {
+  const router = useRouter();
+  const refresh = () => router.refresh();
+  return (
+    <section className="panel space-y-4" aria-labelledby="share-heading" data-testid="share-panel">
+      <div>
+        <h2 id="share-heading">Share with an inspector</h2>
+        <p className="text-sm text-ink-soft">The inspector gets a read-only page with the project summary, the single-line diagram and the chosen PDFs, without an account. Every view and download is logged below.</p>
+      </div>
+      <ShareLinkForm projectId={projectId} revisions={revisions} onCreated={refresh} />
+      <h3 className="text-sm font-semibold">Links</h3>
+      <ShareLinkList links={links} onChange={refresh} />
+    </section>
+  );
+}
