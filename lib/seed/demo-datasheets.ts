@@ -4,7 +4,7 @@ import { PDFDocument, StandardFonts, rgb } from "pdf-lib";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 
 const LABELS: Record<string, string> = {
-  powerW: "Rated power Pmax (W, STC)", vocV: "Open-circuit voltage Voc (V)", vmpV: "Voltage at Pmax Vmp (V)", iscA: "Short-circuit current Isc (A)", impA: "Current at Pmax Imp (A)",
+  powerW: "Rated power Pmax (W, STC)", vocV: "Open-circuit voltage Voc (V)", vmpV: "Voltage at Pmax Vmp (V)", iscA: "Short-circuit current Isc (A)", impA: "Current at Pmax Imp (A)", vocTempCoeff: "Voc temperature coefficient",
   pmaxTempCoeffPctPerC: "Pmax temperature coefficient (%/°C)", maxSeriesFuseA: "Maximum series fuse (A)", lengthIn: "Length (in)", widthIn: "Width (in)", weightLb: "Weight (lb)",
   inverterKind: "Type", acPowerW: "Rated AC power (W)", acOutputCurrentA: "Maximum continuous output current (A)", acVoltageV: "Nominal AC voltage (V)", phase: "Phases",
   maxDcInputV: "Maximum DC input voltage (V)", mpptMinV: "MPPT window minimum (V)", mpptMaxV: "MPPT window maximum (V)", maxInputIscA: "Maximum input current per MPPT (A)", mpptCount: "Number of MPPTs",
@@ -40,7 +40,9 @@ export async function demoDatasheetPdf(item: Pick<EquipmentDto, "kind" | "maker"
     page.drawLine({ start: { x: 48, y: y - 6 }, end: { x: 564, y: y - 6 }, thickness: 0.5, color: rgb(0.85, 0.82, 0.75) });
     y -= 24;
   };
-  for (const [key, value] of Object.entries(item.specs)) if (value !== undefined && value !== "") row(LABELS[key] ?? key, text(value));
+  // In the order a data sheet reads, whatever order the stored specs come back in.
+  const specs = item.specs as Record<string, unknown>;
+  for (const key of Object.keys(LABELS)) if (specs[key] !== undefined && specs[key] !== "") row(LABELS[key], text(specs[key]));
   if (item.listing) row("Listing", item.listing);
   return pdf.save();
 }
