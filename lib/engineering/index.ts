@@ -44,3 +44,4 @@ export { CONDUCTOR_SIZES, isConductorSize, sizeLabel } from "./tables/conductor-
 export { STANDARD_OCPD_RATINGS_A, nextStandardRatingA } from "./tables/standard-ocpd-ratings";
 export { tableAmpacityA } from "./tables/ampacity";
 export { vocCorrectionFactor } from "./tables/voc-correction";
+export * from "./commissioning";
