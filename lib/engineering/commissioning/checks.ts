@@ -41,6 +41,20 @@ function build(kind: CommissioningKind, reading: ReadingState, input: CheckInput
   return { ...makeCheck(input), kind, reading };
 }
 
+const ENTER_AGAIN = "Enter the voltage as read on the meter, in volts.";
+
+/** A reading not taken yet warns (the record can be saved and resumed); one that is not a number fails. */
+function unrecorded(kind: CommissioningKind, state: Exclude<ReadingState, "recorded">, base: Omit<CheckInput, "status" | "value" | "limit" | "message" | "fix">, text: { missing: string; invalid: string; fix?: string; limit?: number }): CommissioningCheck {
+  return build(kind, state, {
+    ...base,
+    status: state === "missing" ? "warn" : "fail",
+    value: null,
+    limit: text.limit ?? null,
+    message: state === "missing" ? text.missing : text.invalid,
+    fix: state === "missing" ? undefined : text.fix,
+  });
+}
+
 /** Lower case, letters and digits only: "IEEE 1547-2018" and "ieee1547 2018" are the same profile. */
 export function normalizeProfile(text: string | null | undefined): string {
   return (text ?? "").normalize("NFKC").toLowerCase().replace(/[^\p{L}\p{N}]+/gu, "");
@@ -87,17 +101,7 @@ export function checkAcVoltage(record: Pick<CommissioningRecord, "edition" | "no
   const rangeBText = `${fmt(rangeB.lowV)}–${fmt(rangeB.highV)} V`;
   const base = { id: "ac-voltage", title: "AC voltage at the point of connection", unit: "V", clause: ANSI_C84_1_BASIS, edition: record.edition };
   if (state !== "recorded") {
-    return build("ac-voltage", state, {
-      ...base,
-      status: state === "missing" ? "warn" : "fail",
-      value: null,
-      limit: null,
-      message:
-        state === "missing"
-          ? `Not recorded yet: measure the AC voltage at the point of connection (expected ${rangeAText} on a ${nominalV} V service).`
-          : "The AC voltage reading must be a number of zero or more.",
-      fix: state === "missing" ? undefined : "Enter the voltage as read on the meter, in volts.",
-    });
+    return unrecorded("ac-voltage", state, base, { missing: `Not recorded yet: measure the AC voltage at the point of connection (expected ${rangeAText} on a ${nominalV} V service).`, invalid: "The AC voltage reading must be a number of zero or more.", fix: ENTER_AGAIN });
   }
   const reading = v as number;
   const high = reading > nominalV;
@@ -164,17 +168,7 @@ export function checkShutdownString(s: ShutdownStringReading, edition: NecEditio
   };
   const state = readingState(s.measuredV);
   if (state !== "recorded") {
-    return build("string-shutdown", state, {
-      ...base,
-      status: state === "missing" ? "warn" : "fail",
-      value: null,
-      limit: null,
-      message:
-        state === "missing"
-          ? `Not recorded yet: with the array shut down, string ${s.id}'s ${plural(s.devicesInSeries, "device")} should read about ${windowText}.`
-          : `String ${s.id}'s reading must be a number of zero or more.`,
-      fix: state === "missing" ? undefined : "Enter the voltage as read on the meter, in volts.",
-    });
+    return unrecorded("string-shutdown", state, base, { missing: `Not recorded yet: with the array shut down, string ${s.id}'s ${plural(s.devicesInSeries, "device")} should read about ${windowText}.`, invalid: `String ${s.id}'s reading must be a number of zero or more.`, fix: ENTER_AGAIN });
   }
   const v = s.measuredV as number;
   const overCode = !atMost(v, codeLimitV);
@@ -206,16 +200,11 @@ export function checkModulesReporting(record: Pick<CommissioningRecord, "edition
   const n = record.modulesReporting;
   const state: ReadingState = n === null || n === undefined ? "missing" : Number.isInteger(n) && n >= 0 ? "recorded" : "invalid";
   if (state !== "recorded") {
-    return build("modules-reporting", state, {
-      ...base,
-      status: state === "missing" ? "warn" : "fail",
-      value: null,
+    return unrecorded("modules-reporting", state, base, {
+      missing: `Not recorded yet: count the modules reporting in the monitoring app (${installed} installed).`,
+      invalid: "The number of modules reporting must be a whole number of zero or more.",
+      fix: "Enter the count shown in the monitoring app.",
       limit: installed,
-      message:
-        state === "missing"
-          ? `Not recorded yet: count the modules reporting in the monitoring app (${installed} installed).`
-          : "The number of modules reporting must be a whole number of zero or more.",
-      fix: state === "missing" ? undefined : "Enter the count shown in the monitoring app.",
     });
   }
   const reporting = n as number;
@@ -320,13 +309,11 @@ export function checkRapidShutdownTest(test: RapidShutdownTestReading | undefine
     const base = { id: kind, title: `Rapid shutdown test: ${what}`, unit, clause: cite, edition };
     const state = readingState(value);
     if (state !== "recorded") {
-      return build(kind, state, {
-        ...base,
-        status: state === "missing" ? "warn" : "fail",
-        value: null,
+      return unrecorded(kind, state, base, {
+        missing: `Not recorded yet: the ${what} in the rapid shutdown test.`,
+        invalid: `The ${what} must be a number of zero or more.`,
+        fix: `Enter the ${what} in ${unit === "V" ? "volts" : "seconds"}.`,
         limit,
-        message: state === "missing" ? `Not recorded yet: the ${what} in the rapid shutdown test.` : `The ${what} must be a number of zero or more.`,
-        fix: state === "missing" ? undefined : `Enter the ${what} in ${unit === "V" ? "volts" : "seconds"}.`,
       });
     }
     const v = value as number;

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { ProjectSubpageHeader } from "@/components/projects/project-subpage-header";
 import { can } from "@/lib/domain/permissions";
 import { requireUser } from "@/lib/server/auth";
 import { getDesignForProject, getReviewContext } from "@/lib/server/data/designs";
@@ -19,15 +19,9 @@ export default async function DesignPage({ params }: { params: Promise<{ project
   const choices = [...catalog, ...context.catalog.filter((c) => !known.has(c.id))];
   return (
     <div className="space-y-4">
-      <div>
-        <p className="text-sm text-ink-faint">
-          <Link href={`/projects/${project.id}`}>{project.customerName}</Link> · {project.address}
-        </p>
-        <h1>Design</h1>
-        <p className="text-sm text-ink-soft">
-          {project.jurisdiction ? `Checked against NEC ${project.jurisdiction.necEdition} as adopted by ${project.jurisdiction.name}.` : "Choose the project's AHJ to run the code checks."} Your input is saved as you go.
-        </p>
-      </div>
+      <ProjectSubpageHeader project={project} title="Design">
+        {project.jurisdiction ? `Checked against NEC ${project.jurisdiction.necEdition} as adopted by ${project.jurisdiction.name}.` : "Choose the project's AHJ to run the code checks."} Your input is saved as you go.
+      </ProjectSubpageHeader>
       <DesignEditor projectId={project.id} initialDraft={design.draft} initialRevision={design.revision} catalog={choices} conditions={context.conditions} readOnly={!can(viewer, "project:edit")} />
     </div>
   );

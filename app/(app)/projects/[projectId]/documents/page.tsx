@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { ProjectSubpageHeader } from "@/components/projects/project-subpage-header";
 import { can } from "@/lib/domain/permissions";
 import { requireUser } from "@/lib/server/auth";
 import { SingleLineSvg } from "@/components/sld/single-line-svg";
@@ -22,13 +22,9 @@ export default async function DocumentsPage({ params }: { params: Promise<{ proj
   const shareable = packets.filter((p) => p.status === "ready").map((p) => ({ packetId: p.id, label: revisionLabel(p) }));
   return (
     <div className="space-y-4">
-      <div>
-        <p className="text-sm text-ink-faint">
-          <Link href={`/projects/${project.id}`}>{project.customerName}</Link> · {project.address}
-        </p>
-        <h1>Documents</h1>
-        <p className="text-sm text-ink-soft">Each packet is generated from the saved design and its review; every generation is a new revision with what changed since the last.</p>
-      </div>
+      <ProjectSubpageHeader project={project} title="Documents">
+        Each packet is generated from the saved design and its review; every generation is a new revision with what changed since the last.
+      </ProjectSubpageHeader>
       {engine ? (
         <section className="panel space-y-2" aria-labelledby="sld-heading">
           <h2 id="sld-heading">Single-line diagram</h2>
