@@ -160,6 +160,8 @@ async function liveLinkByToken(token: string, client: ClientInfo) {
   const link = /^[A-Za-z0-9_-]{16,100}$/.test(token) ? await ShareLink.findOne({ where: { tokenHash: hashToken(token) } }) : null;
   if (!link) {
     await ShareLinkMiss.create({ address });
+    // Misses only matter inside the window; older rows from any address can go.
+    await ShareLinkMiss.destroy({ where: { createdAt: { [Op.lt]: since } } });
     throw new AppError("NOT_FOUND", "This link does not exist. Check that it was copied whole.");
   }
   const status = statusOf(link);

@@ -3,6 +3,7 @@ import { OutboxMessage, Packet, ShareLink, ShareLinkAccess, ShareLinkMiss, type 
 import { AppError } from "@/lib/errors";
 import { createShareLink, getSharedPacketFile, listShareLinks, openShareLink, revokeShareLink, SHARE_THROTTLE } from "@/lib/server/data/share-links";
 import { hashToken } from "@/lib/server/tokens";
+import { db } from "@/lib/server/db";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
 
@@ -101,5 +102,12 @@ describe("share links", () => {
     expect(await code(openShareLink("guess-guess-guess-guess-last", guesser))).toBe("LIMIT_EXCEEDED");
     expect(await code(openShareLink(tokenOf(url), guesser))).toBe("LIMIT_EXCEEDED");
     expect(await code(openShareLink(tokenOf(url), client("192.0.2.44")))).toBe("resolved"); // others are not affected
+  });
+
+  it("forgets misses older than the throttle window", async () => {
+    const old = await ShareLinkMiss.create({ address: "198.51.100.200" });
+    await db().query(`update share_link_misses set created_at = now() - interval '${SHARE_THROTTLE.windowMinutes + 1} minutes' where id = :id`, { replacements: { id: old.id } });
+    expect(await code(openShareLink("guess-guess-guess-guess-x", client("198.51.100.201")))).toBe("NOT_FOUND");
+    expect(await ShareLinkMiss.findByPk(old.id)).toBeNull();
   });
 });
