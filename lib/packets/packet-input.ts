@@ -1,6 +1,7 @@
 import type { Design, NecEdition, ReviewResult, Site } from "@/lib/engineering";
 import type { DesignInput } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
+import type { ProjectDto } from "@/lib/server/data/projects";
 
 export const PACKET_KINDS = ["permit", "interconnection"] as const;
 export type PacketKind = (typeof PACKET_KINDS)[number];
@@ -19,18 +20,7 @@ export type PacketInput = {
   revision: number;
   generatedAt: string; // ISO date-time
   preparedBy: { name: string; organizationName: string; licenseNumber: string | null; phone: string | null };
-  project: {
-    number: number;
-    customerName: string;
-    customerEmail: string | null;
-    customerPhone: string | null;
-    street: string;
-    city: string;
-    state: string;
-    postalCode: string;
-    utilityAccountNumber: string | null;
-    meterNumber: string | null;
-  };
+  project: Pick<ProjectDto, "number" | "customerName" | "customerEmail" | "customerPhone" | "street" | "city" | "state" | "postalCode" | "utilityAccountNumber" | "meterNumber">;
   jurisdiction: { name: string; state: string; necEdition: NecEdition; recordLowTempC: number; highDesignTempC: number };
   utility: { name: string; requiredGridProfile: string } | null;
   /** The editor's parsed design (tilt, azimuth, locations, line ids) and the engine's view of it. */

@@ -5,15 +5,14 @@ import { reviewDocumentOrThrow } from "@/lib/design/document-review";
 import { draftToDocument } from "@/lib/design/draft-to-document";
 import type { ReviewJson } from "@/lib/design/review-json";
 import type { Viewer } from "@/lib/domain/permissions";
-import { getDesignForProject, getReviewContext } from "./designs";
+import { getDesignWithContext } from "./designs";
 
 /**
  * The project's saved design as a public design document; NOT_FOUND for projects the
  * viewer cannot see, INVALID_INPUT naming the editor's fields when the design is incomplete.
  */
 export async function getProjectDesignDocument({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<DesignDocument> {
-  const design = await getDesignForProject({ viewer, projectId });
-  const { catalog, conditions } = await getReviewContext({ viewer, projectId, draft: design.draft });
+  const { design, catalog, conditions } = await getDesignWithContext({ viewer, projectId });
   const out = draftToDocument(design.draft, catalog, conditions);
   if (!out.ok) throw problemsError("The saved design is incomplete; finish it in the design editor.", out.problems);
   return out.document;

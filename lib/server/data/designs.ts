@@ -12,7 +12,7 @@ import { db } from "../db";
 import { isUuid } from "./ids";
 import { recordAudit } from "./audit";
 import { getEquipmentByIds } from "./equipment";
-import { getProjectById } from "./projects";
+import { getProjectById, type ProjectDto } from "./projects";
 
 export type DesignDto = { projectId: string; draft: DesignDraft; isSaved: boolean; revision: number; reviewStatus: string; updatedAt: string | null };
 
@@ -29,26 +29,40 @@ function referencedIds(draft: DesignDraft): string[] {
   return ids.filter((v): v is string => typeof v === "string" && isUuid(v));
 }
 
-/** The project's design, or a new draft prefilled from the project when none is saved. */
-export async function getDesignForProject({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<DesignDto> {
-  db();
-  const project = await getProjectById({ viewer, projectId });
-  const row = await Design.findOne({ where: { projectId, organizationId: viewer.organizationId } });
-  if (!row) return { projectId, draft: newDesignDraft(project) as DesignDraft, isSaved: false, revision: 0, reviewStatus: "incomplete", updatedAt: null };
-  return { projectId, draft: row.draft as DesignDraft, isSaved: true, revision: row.revision, reviewStatus: row.reviewStatus, updatedAt: row.updatedAt.toISOString() };
+async function savedOrNewDesign(viewer: Viewer, project: ProjectDto): Promise<DesignDto> {
+  const row = await Design.findOne({ where: { projectId: project.id, organizationId: viewer.organizationId } });
+  if (!row) return { projectId: project.id, draft: newDesignDraft(project) as DesignDraft, isSaved: false, revision: 0, reviewStatus: "incomplete", updatedAt: null };
+  return { projectId: project.id, draft: row.draft as DesignDraft, isSaved: true, revision: row.revision, reviewStatus: row.reviewStatus, updatedAt: row.updatedAt.toISOString() };
 }
 
-/** The catalog items and site conditions a review of this draft needs. */
-export async function getReviewContext({ viewer, projectId, draft }: { viewer: Viewer; projectId: string; draft: DesignDraft }) {
-  const project = await getProjectById({ viewer, projectId });
+async function contextFor(viewer: Viewer, project: ProjectDto, draft: DesignDraft) {
   const [catalog, conditions] = await Promise.all([getEquipmentByIds({ viewer, ids: referencedIds(draft) }), siteConditions(viewer, project.jurisdiction?.id ?? null)]);
   return { catalog: catalog as EquipmentDto[], conditions };
 }
 
+/** The project's design, or a new draft prefilled from the project when none is saved. */
+export async function getDesignForProject({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<DesignDto> {
+  db();
+  return savedOrNewDesign(viewer, await getProjectById({ viewer, projectId }));
+}
+
+/** The catalog items and site conditions a review of this draft needs. */
+export async function getReviewContext({ viewer, projectId, draft }: { viewer: Viewer; projectId: string; draft: DesignDraft }) {
+  db();
+  return contextFor(viewer, await getProjectById({ viewer, projectId }), draft);
+}
+
+/** The project, its saved design and what a review of it needs, reading the project once. */
+export async function getDesignWithContext({ viewer, projectId }: { viewer: Viewer; projectId: string }) {
+  db();
+  const project = await getProjectById({ viewer, projectId });
+  const design = await savedOrNewDesign(viewer, project);
+  return { project, design, ...(await contextFor(viewer, project, design.draft)) };
+}
+
 /** Reviews the saved design (or the new draft) exactly as the editor would. */
 export async function reviewProjectDesign({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<DesignReviewOutcome> {
-  const design = await getDesignForProject({ viewer, projectId });
-  const { catalog, conditions } = await getReviewContext({ viewer, projectId, draft: design.draft });
+  const { design, catalog, conditions } = await getDesignWithContext({ viewer, projectId });
   return runDesignReview(design.draft, catalog, conditions);
 }
 
@@ -96,8 +110,7 @@ export async function getDesignStatus({ viewer, projectId }: { viewer: Viewer; p
 
 /** The saved design as the review engine reads it, for drawing its single-line diagram; null while incomplete. */
 export async function getEngineDesign({ viewer, projectId }: { viewer: Viewer; projectId: string }) {
-  const design = await getDesignForProject({ viewer, projectId });
-  const { catalog, conditions } = await getReviewContext({ viewer, projectId, draft: design.draft });
+  const { design, catalog, conditions } = await getDesignWithContext({ viewer, projectId });
   const parsed = DesignInput.safeParse(design.draft);
   if (!parsed.success || !conditions) return null;
   const engine = toEngineInput(parsed.data, catalog, conditions);

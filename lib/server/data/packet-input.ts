@@ -8,9 +8,8 @@ import { AppError } from "@/lib/errors";
 import type { PacketInput, PacketKind } from "@/lib/packets/packet-input";
 import { DesignInput } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
-import { getDesignForProject, getReviewContext } from "./designs";
+import { getDesignWithContext } from "./designs";
 import { getDatasheetLocation } from "./equipment";
-import { getProjectById } from "./projects";
 
 type Pick3<K extends EquipmentDto["kind"]> = Extract<EquipmentDto, { kind: K }>;
 
@@ -19,9 +18,7 @@ type Pick3<K extends EquipmentDto["kind"]> = Extract<EquipmentDto, { kind: K }>;
  * fresh review of it. Throws CONFLICT when the design cannot be reviewed yet.
  */
 export async function buildPacketInput({ viewer, projectId, kind }: { viewer: Viewer; projectId: string; kind: PacketKind }): Promise<Omit<PacketInput, "revision" | "changes" | "override">> {
-  const project = await getProjectById({ viewer, projectId });
-  const design = await getDesignForProject({ viewer, projectId });
-  const { catalog, conditions } = await getReviewContext({ viewer, projectId, draft: design.draft });
+  const { project, design, catalog, conditions } = await getDesignWithContext({ viewer, projectId });
   const outcome = runDesignReview(design.draft, catalog, conditions);
   if (outcome.status !== "reviewed" || !conditions) {
     const first = outcome.status === "incomplete" ? outcome.problems[0]?.message : undefined;

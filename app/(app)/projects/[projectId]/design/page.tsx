@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { ProjectSubpageHeader } from "@/components/projects/project-subpage-header";
 import { can } from "@/lib/domain/permissions";
 import { requireUser } from "@/lib/server/auth";
-import { getDesignForProject, getReviewContext } from "@/lib/server/data/designs";
+import { getDesignWithContext } from "@/lib/server/data/designs";
 import { listEquipment } from "@/lib/server/data/equipment";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { DesignEditor } from "./_components/design-editor";
@@ -12,8 +12,8 @@ export const metadata: Metadata = { title: "Design" };
 export default async function DesignPage({ params }: { params: Promise<{ projectId: string }> }) {
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
-  const design = await getDesignForProject({ viewer, projectId: project.id });
-  const [catalog, context] = await Promise.all([listEquipment({ viewer }), getReviewContext({ viewer, projectId: project.id, draft: design.draft })]);
+  const [catalog, context] = await Promise.all([listEquipment({ viewer }), getDesignWithContext({ viewer, projectId: project.id })]);
+  const { design } = context;
   // Items the design already uses stay choosable even when archived since.
   const known = new Set(catalog.map((c) => c.id));
   const choices = [...catalog, ...context.catalog.filter((c) => !known.has(c.id))];
