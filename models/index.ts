@@ -1,6 +1,7 @@
 import type { Sequelize } from "sequelize";
 import { ApiToken } from "./api-token";
 import { AuditEvent } from "./audit-event";
+import { CommissioningRecord } from "./commissioning-record";
 import { Design } from "./design";
 import { Equipment } from "./equipment";
 import { Invitation } from "./invitation";
@@ -9,6 +10,7 @@ import { Organization } from "./organization";
 import { OutboxMessage } from "./outbox-message";
 import { Packet } from "./packet";
 import { Project } from "./project";
+import { ProjectFile } from "./project-file";
 import { ShareLink } from "./share-link";
 import { ShareLinkAccess } from "./share-link-access";
 import { ShareLinkMiss } from "./share-link-miss";
@@ -22,6 +24,7 @@ export { AuditEvent, Design, Equipment, Invitation, Jurisdiction, Organization, 
 export { ApiToken };
 export { ShareLink, ShareLinkAccess, ShareLinkMiss, ShareLinkPacket };
 export { OutboxMessage };
+export { CommissioningRecord, ProjectFile };
 
 let initialized: Sequelize | null = null;
 
@@ -47,4 +50,7 @@ export function initModels(sequelize: Sequelize) {
   Packet.belongsToMany(ShareLink, { through: ShareLinkPacket, as: "shareLinks", foreignKey: "packetId", otherKey: "shareLinkId" });
   ShareLink.hasMany(ShareLinkAccess, { as: "accesses", foreignKey: "shareLinkId" });
   ShareLink.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
+  CommissioningRecord.initModel(sequelize);
+  ProjectFile.initModel(sequelize);
+  ProjectFile.belongsTo(User, { as: "uploadedBy", foreignKey: "uploadedById" });
 }

@@ -22,12 +22,13 @@ export type Permission =
   | "reference:edit"
   | "mailbox:view"
   | "design:review"
-  | "api-tokens:manage";
+  | "api-tokens:manage"
+  | "field:record";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
-  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage"],
-  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "mailbox:view", "design:review"],
-  installer: ["project:view", "design:review"],
+  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage", "field:record"],
+  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "mailbox:view", "design:review", "field:record"],
+  installer: ["project:view", "design:review", "field:record"],
 };
 
 // An API token reads on its organization's behalf and never changes anything (README, "Design review API").

@@ -60,3 +60,18 @@ export function withAuth<P = Record<string, never>>(handler: Handler<P>, { permi
     }
   };
 }
+
+/**
+ * Headers for sending stored bytes as a download, never shown inline: an uploaded file is
+ * only ever handed back as an attachment of the type its bytes were judged to be.
+ */
+export function attachmentHeaders({ fileName, contentType, length }: { fileName: string; contentType: string; length: number }): Record<string, string> {
+  const ascii = fileName.replace(/[^\x20-\x7e]|["\\]/g, "_");
+  return {
+    "content-type": contentType,
+    "content-length": String(length),
+    "content-disposition": `attachment; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(fileName)}`,
+    "x-content-type-options": "nosniff",
+    "cache-control": "private, no-store",
+  };
+}

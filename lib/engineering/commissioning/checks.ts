@@ -74,9 +74,10 @@ export function checkGridProfile(record: Pick<CommissioningRecord, "edition" | "
     });
   }
   if (set === "") {
+    // Like every reading not taken yet, this warns: the record can be saved and finished later.
     return build("grid-profile", reading, {
       ...base,
-      status: "fail",
+      status: "warn",
       message: `The grid profile set on the inverter is not recorded; the utility requires "${record.requiredGridProfile!.trim()}".`,
       fix: "Read the grid profile from the inverter's settings screen or app and enter it.",
     });

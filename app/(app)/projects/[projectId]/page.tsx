@@ -34,12 +34,15 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           <h1>{project.customerName}</h1>
           <p className="text-ink-soft">{project.address}</p>
         </div>
-        <div className="flex gap-2">
+        <div className="flex flex-wrap gap-2">
         <Link href={`/projects/${project.id}/design`} className="rounded bg-copper px-4 py-2 text-sm font-medium text-white no-underline hover:bg-copper-dark hover:no-underline">
           Design and review
         </Link>
         <Link href={`/projects/${project.id}/documents`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
           Documents
+        </Link>
+        <Link href={`/projects/${project.id}/field`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
+          Field record
         </Link>
         {can(viewer, "project:edit") ? (
           <Link href={`/projects/${project.id}/edit`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">

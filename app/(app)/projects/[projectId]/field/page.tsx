@@ -1,0 +1,67 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { ProjectSubpageHeader } from "@/components/projects/project-subpage-header";
+import { can } from "@/lib/domain/permissions";
+import { isAppError } from "@/lib/errors";
+import { requireUser } from "@/lib/server/auth";
+import { getCommissioning } from "@/lib/server/data/commissioning";
+import { listProjectFiles } from "@/lib/server/data/project-files";
+import { loadProjectOr404 } from "@/lib/server/pages";
+import { CommissioningForm } from "./_components/commissioning-form";
+import { FieldCautions } from "./_components/field-cautions";
+import { FieldUploads } from "./_components/field-uploads";
+
+export const metadata: Metadata = { title: "Field record" };
+
+async function loadCommissioning(...args: Parameters<typeof getCommissioning>) {
+  try {
+    return { ok: true as const, data: await getCommissioning(...args) };
+  } catch (error) {
+    if (isAppError(error) && error.code === "CONFLICT") return { ok: false as const, message: error.message };
+    throw error;
+  }
+}
+
+export default async function FieldPage({ params }: { params: Promise<{ projectId: string }> }) {
+  const viewer = await requireUser();
+  const project = await loadProjectOr404(viewer, (await params).projectId);
+  const [commissioning, files] = await Promise.all([loadCommissioning({ viewer, projectId: project.id }), listProjectFiles({ viewer, projectId: project.id })]);
+  const mayRecord = can(viewer, "field:record", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null });
+  return (
+    <div className="mx-auto max-w-3xl space-y-5">
+      <ProjectSubpageHeader project={project} title="Field record">
+        Commissioning readings checked against the approved design as you type, the certificate of completion to sign, and photos from site.
+      </ProjectSubpageHeader>
+      <FieldCautions />
+      {commissioning.ok ? (
+        <>
+          <CommissioningForm
+            projectId={project.id}
+            facts={commissioning.data.facts}
+            initialReadings={commissioning.data.readings}
+            initialStatus={commissioning.data.status}
+            initialUpdatedAt={commissioning.data.updatedAt}
+            readOnly={!mayRecord}
+          />
+          <section className="panel space-y-3" aria-labelledby="documents-heading">
+            <h2 id="documents-heading">Certificate and report</h2>
+            <p className="text-sm text-ink-soft">Both print the readings as last saved. Sign the certificate on site, then upload it below.</p>
+            <div className="flex flex-wrap gap-2">
+              <a className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline" href={`/api/v1/projects/${project.id}/commissioning/certificate`} download>
+                Certificate of completion (PDF)
+              </a>
+              <a className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline" href={`/api/v1/projects/${project.id}/commissioning/report`} download>
+                Commissioning report (PDF)
+              </a>
+            </div>
+          </section>
+        </>
+      ) : (
+        <p className="panel text-sm text-ink-soft" data-testid="no-design">
+          {commissioning.message} <Link href={`/projects/${project.id}/design`}>Open the design</Link>
+        </p>
+      )}
+      <FieldUploads projectId={project.id} initialFiles={files} mayUpload={mayRecord} />
+    </div>
+  );
+}

@@ -1,0 +1,102 @@
+import "server-only";
+import { createHash, randomUUID } from "node:crypto";
+import { Op } from "sequelize";
+import { CommissioningRecord, ProjectFile, User } from "@/models";
+import { can, type Viewer } from "@/lib/domain/permissions";
+import { AppError } from "@/lib/errors";
+import { ALLOWED_TYPES, MAX_UPLOAD_BYTES, allowedTypesText, displayFileName, tooLargeMessage } from "@/lib/field/upload-rules";
+import { PROJECT_FILE_KINDS, type ProjectFileKind } from "@/models/project-file";
+import { completionReceivedEmail } from "@/templates/email/completion-received";
+import { db } from "../db";
+import { env } from "../env";
+import { enqueueMail } from "../services/outbox";
+import { sniffMimeType } from "../services/file-sniffing";
+import { deleteObject, putObject } from "../services/storage";
+import { recordAudit } from "./audit";
+import { isUuid } from "./ids";
+import { getProjectById } from "./projects";
+
+export type ProjectFileDto = { id: string; kind: ProjectFileKind; fileName: string; contentType: string; sizeBytes: number; uploadedBy: string | null; createdAt: string };
+
+const toDto = (f: ProjectFile): ProjectFileDto => ({ id: f.id, kind: f.kind, fileName: f.fileName, contentType: f.contentType, sizeBytes: f.sizeBytes, uploadedBy: f.uploadedBy?.name ?? null, createdAt: f.createdAt.toISOString() });
+
+export function isProjectFileKind(value: unknown): value is ProjectFileKind {
+  return typeof value === "string" && (PROJECT_FILE_KINDS as readonly string[]).includes(value);
+}
+
+/** Refuses a file whose bytes are not an allowed type, whatever its name says. */
+async function judgeFile(kind: ProjectFileKind, bytes: Uint8Array): Promise<string> {
+  if (bytes.length === 0) throw new AppError("INVALID_INPUT", "The file is empty.");
+  if (bytes.length > MAX_UPLOAD_BYTES) throw new AppError("TOO_LARGE", tooLargeMessage(bytes.length));
+  const mime = await sniffMimeType(bytes);
+  if (!mime || !(mime in ALLOWED_TYPES[kind])) {
+    throw new AppError("UNSUPPORTED_TYPE", `This file's contents are not ${allowedTypesText(kind)} (the type is read from the file itself, not its name). Nothing was saved.`);
+  }
+  return mime;
+}
+
+/**
+ * Stores one upload under a key the server makes, then records it. A signed completion form also
+ * puts a notice to the project's coordinator in the outbox, in the same transaction as the record.
+ */
+export async function uploadProjectFile({ viewer, projectId, kind, fileName, bytes }: { viewer: Viewer; projectId: string; kind: ProjectFileKind; fileName: string; bytes: Uint8Array }): Promise<ProjectFileDto> {
+  const sequelize = db();
+  const project = await getProjectById({ viewer, projectId });
+  if (!can(viewer, "field:record", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null })) throw new AppError("NOT_FOUND", "No such project.");
+  const contentType = await judgeFile(kind, bytes);
+  const name = displayFileName(fileName, contentType);
+  const objectKey = `projects/${projectId}/field/${randomUUID()}.${name.split(".").pop()}`;
+  await putObject({ key: objectKey, body: bytes, contentType });
+  try {
+    const id = await sequelize.transaction(async (transaction) => {
+      const row = await ProjectFile.create(
+        { organizationId: viewer.organizationId, projectId, kind, objectKey, fileName: name, contentType, sizeBytes: bytes.length, sha256: createHash("sha256").update(bytes).digest("hex"), uploadedById: viewer.id },
+        { transaction },
+      );
+      await recordAudit({ viewer, action: "file.uploaded", entityType: "project", entityId: projectId, changes: { file: { before: null, after: `${kind}: ${name}` } } }, { transaction });
+      if (kind === "signed-completion") {
+        const to = await coordinatorAddress(viewer, project.coordinator?.id ?? null);
+        const record = await CommissioningRecord.findOne({ where: { projectId }, transaction });
+        const mail = completionReceivedEmail({
+          installerName: viewer.name,
+          projectNumber: project.number,
+          siteAddress: project.address,
+          fileName: name,
+          commissioning: record?.status === "complete" ? "complete, every check passed." : "still open: some readings fail or are missing.",
+          url: `${env().APP_URL}/projects/${projectId}/field`,
+        });
+        if (to) await enqueueMail({ to, ...mail, organizationId: viewer.organizationId }, { transaction });
+      }
+      return row.id;
+    });
+    return toDto((await ProjectFile.findByPk(id, { include: [{ model: User, as: "uploadedBy", attributes: ["name"] }] }))!);
+  } catch (error) {
+    await deleteObject(objectKey).catch(() => undefined);
+    throw error;
+  }
+}
+
+/** The project's coordinator, or else the organization's first active admin, so a notice always has someone to go to. */
+async function coordinatorAddress(viewer: Viewer, coordinatorId: string | null): Promise<string | null> {
+  const where = coordinatorId ? { id: coordinatorId, organizationId: viewer.organizationId, isActive: true } : { organizationId: viewer.organizationId, role: "admin", isActive: true };
+  const user = (await User.findOne({ where, order: [["createdAt", "ASC"]] })) ?? (await User.findOne({ where: { organizationId: viewer.organizationId, role: { [Op.in]: ["admin", "coordinator"] }, isActive: true }, order: [["createdAt", "ASC"]] }));
+  return user?.email ?? null;
+}
+
+export async function listProjectFiles({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<ProjectFileDto[]> {
+  db();
+  await getProjectById({ viewer, projectId });
+  const rows = await ProjectFile.findAll({ where: { projectId, organizationId: viewer.organizationId }, include: [{ model: User, as: "uploadedBy", attributes: ["name"] }], order: [["createdAt", "DESC"]] });
+  return rows.map(toDto);
+}
+
+/** Where an uploaded file is kept, for a viewer who may see the project; NOT_FOUND otherwise. */
+export async function getProjectFileLocation({ viewer, projectId, fileId }: { viewer: Viewer; projectId: string; fileId: string }) {
+  db();
+  await getProjectById({ viewer, projectId });
+  if (!isUuid(fileId)) throw new AppError("NOT_FOUND", "No such file.");
+  const row = await ProjectFile.findOne({ where: { id: fileId, projectId, organizationId: viewer.organizationId } });
+  if (!row) throw new AppError("NOT_FOUND", "No such file.");
+  return { key: row.objectKey, fileName: row.fileName, contentType: row.contentType };
+}
+
