@@ -1,15 +1,20 @@
-import { readFileSync } from "node:fs";
+import { existsSync, readFileSync } from "node:fs";
+import path from "node:path";
 import { createRequire } from "node:module";
 import { Font } from "@react-pdf/renderer";
 import { woffToSfnt } from "./woff-to-sfnt";
 
 // The PDF fonts ship with the app as npm packages. @react-pdf cannot read woff2, so the
-// static .woff files are registered; paths are resolved through Node so the same code
-// works under tsx, vitest and a packet worker, wherever node_modules sits.
-const require = createRequire(import.meta.url);
+// static .woff files are registered. They are looked up in the project's node_modules (the
+// working directory of the app, the worker and the tests), else through Node's resolution;
+// the lookup is built at run time because the app's bundler cannot follow a computed require.
+const nodeRequire = createRequire(import.meta.url);
+function fontPath(pkg: string, file: string): string {
+  const local = path.join(process.cwd(), "node_modules", pkg, "files", file);
+  return existsSync(local) ? local : nodeRequire.resolve([pkg, "files", file].join("/"));
+}
 // Registered as data URLs of the unwrapped TrueType bytes: see woff-to-sfnt.ts for why.
-const fontFile = (pkg: string, file: string) =>
-  `data:font/ttf;base64,${Buffer.from(woffToSfnt(readFileSync(require.resolve(`${pkg}/files/${file}`)))).toString("base64")}`;
+const fontFile = (pkg: string, file: string) => `data:font/ttf;base64,${Buffer.from(woffToSfnt(readFileSync(fontPath(pkg, file)))).toString("base64")}`;
 
 /** Text face. */
 export const TEXT_FONT = "Inter";

@@ -18,10 +18,11 @@ const s = StyleSheet.create({
 
 type SheetProps = { input: PacketInput; sheet: SheetInfo; subtitle?: string; children: ReactNode };
 
-function Heading({ sheet, subtitle, form }: { sheet: SheetInfo; subtitle?: string; form: boolean }) {
+/** A sheet's or document's title over a copper rule, with an optional note on the right. */
+export function SheetHeading({ title, subtitle, form }: { title: string; subtitle?: string; form: boolean }) {
   return (
     <View style={s.heading} wrap={false}>
-      <Text style={form ? s.formTitle : s.title}>{sheet.title}</Text>
+      <Text style={form ? s.formTitle : s.title}>{title}</Text>
       {subtitle ? <Text style={s.subtitle}>{subtitle}</Text> : null}
     </View>
   );
@@ -33,7 +34,7 @@ export function PlanSheet({ input, sheet, subtitle, children }: SheetProps) {
     <Page size={PLAN_PAGE.size} orientation={PLAN_PAGE.orientation} style={[base.page, s.planPage]}>
       <View style={s.frame}>
         <View style={s.planBody}>
-          <Heading sheet={sheet} subtitle={subtitle} form={false} />
+          <SheetHeading title={sheet.title} subtitle={subtitle} form={false} />
           {children}
         </View>
         <TitleBlock input={input} sheet={sheet} />
@@ -47,7 +48,7 @@ export function FormSheet({ input, sheet, subtitle, children }: SheetProps) {
   return (
     <Page size={FORM_PAGE.size} orientation={FORM_PAGE.orientation} style={[base.page, s.formPage]}>
       <View style={s.formBody}>
-        <Heading sheet={sheet} subtitle={subtitle} form />
+        <SheetHeading title={sheet.title} subtitle={subtitle} form />
         {children}
       </View>
       <TitleBlock input={input} sheet={sheet} compact />

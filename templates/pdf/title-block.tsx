@@ -32,6 +32,50 @@ function Cell({ label, flex, compact, children }: { label: string; flex: number;
   );
 }
 
+/** One cell of a title band: a caps label, a bold first line and plain lines (text nodes) under it. */
+export type TitleCell = { label: string; flex: number; main: string; lines: ReactNode[] };
+
+/**
+ * How the last cell counts: a packet names its sheet ("Sheet 2 of 4"); a flowing document
+ * numbers its pages ("Page 2 of 3").
+ */
+export type TitleCount = { sheet: SheetInfo } | { page: number; total: number };
+
+/** `caution` runs under the cells; leave it out where the page prints the cautions in full. */
+type TitleBandProps = { cells: TitleCell[]; count: TitleCount; caution?: string; compact?: boolean };
+
+function CountCell({ count, compact }: { count: TitleCount; compact: boolean }) {
+  const [number, words] = "sheet" in count ? [count.sheet.number, `Sheet ${count.sheet.number} of ${count.sheet.total}`] : [count.page, `Page ${count.page} of ${count.total}`];
+  return (
+    <View style={compact ? [s.cell, s.compactCell, s.sheetCell] : [s.cell, s.sheetCell, { flex: 0.9 }]}>
+      <Text style={s.sheetNumber}>{number}</Text>
+      <Text style={[s.value, base.strong]}>{words}</Text>
+    </View>
+  );
+}
+
+/** The title band from plain fields: packets fill it from their input, other documents from theirs. */
+export function TitleBand({ cells, count, caution, compact = false }: TitleBandProps) {
+  return (
+    <View style={s.block} wrap={false}>
+      <View style={s.cells}>
+        {cells.map((cell) => (
+          <Cell key={cell.label} label={cell.label} flex={cell.flex} compact={compact}>
+            <Text style={s.main}>{cell.main}</Text>
+            {cell.lines.map((line, i) => (
+              <Text key={i} style={s.value}>
+                {line}
+              </Text>
+            ))}
+          </Cell>
+        ))}
+        <CountCell count={count} compact={compact} />
+      </View>
+      {caution ? <Text style={s.caution}>{caution}</Text> : null}
+    </View>
+  );
+}
+
 /**
  * Ohmstead's title block: a band across the foot of every sheet. Plan sheets show it as one
  * row; letter pages (compact) as two rows of three cells.
@@ -39,36 +83,12 @@ function Cell({ label, flex, compact, children }: { label: string; flex: number;
 export function TitleBlock({ input, sheet, compact = false }: { input: PacketInput; sheet: SheetInfo; compact?: boolean }) {
   const p = input.preparedBy;
   const person = [p.name, p.licenseNumber ? `License ${p.licenseNumber}` : null].filter(Boolean).join(" · ");
-  return (
-    <View style={s.block} wrap={false}>
-      <View style={s.cells}>
-        <Cell label="Project" flex={2.3} compact={compact}>
-          <Text style={s.main}>{projectLabel(input)}</Text>
-          <Text style={s.value}>{siteAddress(input)}</Text>
-        </Cell>
-        <Cell label="Authority having jurisdiction" flex={1.7} compact={compact}>
-          <Text style={s.main}>{input.jurisdiction.name}</Text>
-          <Text style={s.value}>NEC {input.jurisdiction.necEdition} as adopted</Text>
-        </Cell>
-        <Cell label="Prepared by" flex={2} compact={compact}>
-          <Text style={s.main}>{p.organizationName}</Text>
-          <Text style={s.value}>{person}</Text>
-          {p.phone ? <Text style={s.value}>{p.phone}</Text> : null}
-        </Cell>
-        <Cell label="Document" flex={1.6} compact={compact}>
-          <Text style={s.main}>{PACKET_TITLES[input.kind]}</Text>
-          <Text style={s.value}>{sheet.title}</Text>
-        </Cell>
-        <Cell label="Revision" flex={0.9} compact={compact}>
-          <Text style={s.main}>{revisionLabel(input.revision)}</Text>
-          <Text style={s.value}>Issued {packetDate(input.generatedAt)}</Text>
-        </Cell>
-        <View style={compact ? [s.cell, s.compactCell, s.sheetCell] : [s.cell, s.sheetCell, { flex: 0.9 }]}>
-          <Text style={s.sheetNumber}>{sheet.number}</Text>
-          <Text style={[s.value, base.strong]}>{`Sheet ${sheet.number} of ${sheet.total}`}</Text>
-        </View>
-      </View>
-      <Text style={s.caution}>{SHEET_CAUTION}</Text>
-    </View>
-  );
+  const cells: TitleCell[] = [
+    { label: "Project", flex: 2.3, main: projectLabel(input), lines: [siteAddress(input)] },
+    { label: "Authority having jurisdiction", flex: 1.7, main: input.jurisdiction.name, lines: [`NEC ${input.jurisdiction.necEdition} as adopted`] },
+    { label: "Prepared by", flex: 2, main: p.organizationName, lines: p.phone ? [person, p.phone] : [person] },
+    { label: "Document", flex: 1.6, main: PACKET_TITLES[input.kind], lines: [sheet.title] },
+    { label: "Revision", flex: 0.9, main: revisionLabel(input.revision), lines: [<>Issued {packetDate(input.generatedAt)}</>] },
+  ];
+  return <TitleBand cells={cells} count={{ sheet }} caution={SHEET_CAUTION} compact={compact} />;
 }

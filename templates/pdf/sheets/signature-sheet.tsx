@@ -2,40 +2,28 @@ import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { PacketInput } from "@/lib/packets/packet-input";
 import { NumberedList, Section } from "../blocks";
 import { FormSheet } from "../sheet-page";
+import { SignatureLine, SignatureRow } from "../signature-line";
 import { COLORS, base } from "../styles";
 import type { SheetInfo } from "../title-block";
 
 const s = StyleSheet.create({
   block: { marginTop: 14, padding: 10, borderWidth: 0.8, borderColor: COLORS.rule },
   blockTitle: { fontSize: 10, fontWeight: 700, marginBottom: 2 },
-  lineRow: { flexDirection: "row", marginTop: 22 },
-  line: { flex: 1, marginRight: 14 },
-  rule: { borderBottomWidth: 0.8, borderBottomColor: COLORS.ink, height: 14 },
-  prefill: { fontSize: 9, paddingBottom: 2 },
 });
-
-function SignatureLine({ caption, flex = 1, prefill }: { caption: string; flex?: number; prefill?: string }) {
-  return (
-    <View style={[s.line, { flex }]}>
-      <View style={s.rule}>{prefill ? <Text style={s.prefill}>{prefill}</Text> : null}</View>
-      <Text style={[base.caps, { marginTop: 2 }]}>{caption}</Text>
-    </View>
-  );
-}
 
 function SignatureBlock({ title, who, name }: { title: string; who: string; name: string }) {
   return (
     <View style={s.block} wrap={false}>
       <Text style={s.blockTitle}>{title}</Text>
       <Text style={[base.soft, { fontSize: 8 }]}>{who}</Text>
-      <View style={s.lineRow}>
+      <SignatureRow>
         <SignatureLine caption="Signature" flex={2} />
         <SignatureLine caption="Date" />
-      </View>
-      <View style={s.lineRow}>
+      </SignatureRow>
+      <SignatureRow>
         <SignatureLine caption="Printed name" flex={2} prefill={name} />
         <SignatureLine caption="Title or role" />
-      </View>
+      </SignatureRow>
     </View>
   );
 }

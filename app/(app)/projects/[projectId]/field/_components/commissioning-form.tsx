@@ -5,7 +5,7 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import { useForm, useWatch, type UseFormRegisterReturn } from "react-hook-form";
 import { CheckStatusChip } from "@/components/review/check-status";
 import { Button } from "@/components/ui/button";
-import { checkCommissioning, commissioningComplete, type CommissioningCheck } from "@/lib/engineering/commissioning";
+import { checkCommissioning, commissioningComplete, shutdownWindow, type CommissioningCheck } from "@/lib/engineering/commissioning";
 import { toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
 import { CommissioningReadings } from "@/lib/schemas/commissioning";
 import { saveCommissioningAction } from "../actions";
@@ -21,6 +21,7 @@ type FormValues = {
 };
 
 const text = (v: number | string | null) => (v === null ? "" : String(v));
+const fmtV = (v: number) => v.toLocaleString("en-US", { maximumFractionDigits: 1 });
 
 function toFormValues(r: CommissioningReadings): FormValues {
   return {
@@ -112,7 +113,7 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
 
       <fieldset disabled={readOnly} className="space-y-4">
         <Reading title="Grid profile set on the inverter" hint={facts.requiredGridProfile ? `The utility requires: ${facts.requiredGridProfile}` : "The utility's required profile is not on file; ask the office."} result={byId("grid-profile")} error={errors.gridProfileSet}>
-          <input id="gridProfileSet" className="input text-base" autoComplete="off" {...reg("gridProfileSet")} />
+          <input id="gridProfileSet" data-required={facts.requiredGridProfile ?? ""} className="input text-base" autoComplete="off" {...reg("gridProfileSet")} />
         </Reading>
 
         <Reading title="AC voltage at the point of connection" hint={`Nominal service ${facts.nominalServiceV} V.`} result={byId("ac-voltage")} error={errors.acVoltageV} unit="V">
@@ -125,23 +126,28 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
               <h3 id="strings-heading">String voltages with the array shut down</h3>
               <p className="text-xs text-ink-soft">Open the shutdown switch and wait for the inverter to report a safe DC voltage before you measure each string at the inverter.</p>
             </div>
-            {values.strings.map((s, i) => (
-              <Reading key={s.id} title={`String ${s.id}`} result={byId(`string-shutdown:${s.id}`)} error={errors[`strings.${i}.measuredV`]} unit="V" bare>
-                <input id={`strings.${i}.measuredV`} className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg(`strings.${i}.measuredV`)} />
-              </Reading>
-            ))}
+            {values.strings.map((s, i) => {
+              const fact = facts.strings.find((f) => f.id === s.id);
+              const window = fact ? shutdownWindow(fact.devicesInSeries, fact.perDeviceV) : null;
+              const hint = fact && window ? `${fact.devicesInSeries} devices in series: expect about ${fmtV(window.expectedV)} to ${fmtV(window.highV)} V.` : undefined;
+              return (
+                <Reading key={s.id} title={`String ${s.id}`} hint={hint} result={byId(`string-shutdown:${s.id}`)} error={errors[`strings.${i}.measuredV`]} unit="V" bare>
+                  <input id={`strings.${i}.measuredV`} data-expected-v={window?.expectedV} className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg(`strings.${i}.measuredV`)} />
+                </Reading>
+              );
+            })}
           </section>
         ) : null}
 
         <Reading title="Modules reporting" hint={`${facts.modulesInstalled} modules installed. Every one must report before the record is complete.`} result={byId("modules-reporting")} error={errors.modulesReporting} unit="modules">
-          <input id="modulesReporting" className="input measure text-base" inputMode="numeric" autoComplete="off" {...reg("modulesReporting")} />
+          <input id="modulesReporting" data-installed={facts.modulesInstalled} className="input measure text-base" inputMode="numeric" autoComplete="off" {...reg("modulesReporting")} />
         </Reading>
 
         <section className="panel space-y-3" aria-labelledby="first-power-heading">
           <h3 id="first-power-heading">First power</h3>
           <div className="grid gap-3 sm:grid-cols-2">
             <LabelledInput label="AC output" htmlFor="firstPowerW" unit="W" error={errors.firstPowerW}>
-              <input id="firstPowerW" className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg("firstPowerW")} />
+              <input id="firstPowerW" data-rating-w={facts.acRatingW} className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg("firstPowerW")} />
             </LabelledInput>
             <LabelledInput label="Time of day (24-hour)" htmlFor="firstPowerTime" error={errors.firstPowerTime}>
               <input id="firstPowerTime" type="time" className="input measure text-base" {...reg("firstPowerTime")} />

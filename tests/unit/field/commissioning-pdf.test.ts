@@ -1,0 +1,262 @@
+import { beforeAll, describe, expect, test } from "vitest";
+import { checkCommissioning, commissioningComplete } from "@/lib/engineering/commissioning";
+import type { CommissioningDocumentInput } from "@/lib/field/commissioning-document-input";
+import { renderCommissioningPdf } from "@/lib/field/render-commissioning-pdf";
+import { completionSummary } from "@/templates/pdf/commissioning-pdf-facts";
+import { commissioningFixture, commissioningRecord } from "@/tests/support/commissioning-fixture";
+import { NO_PDFTOPPM, blankPagePng, firstPagePng, hasPdftoppm, pngSize } from "../packets/first-page-png";
+import { countWord, pageSizes, pageTexts } from "../packets/read-pdf";
+
+const LETTER = { width: 612, height: 792 };
+const TABLE_HEAD = "# WHAT WAS CHECKED, AND THE FINDING READING EXPECTED RESULT BASIS";
+
+async function render(input: CommissioningDocumentInput) {
+  const bytes = await renderCommissioningPdf(input);
+  return { bytes, pages: await pageTexts(bytes) };
+}
+
+function expectCautions(text: string) {
+  expect(text).toContain("PV circuits are energized whenever light reaches the modules");
+  expect(text).toContain("Inverter capacitors hold a charge after shutdown. Keep clear of the inverter's terminals until the inverter reports a safe DC voltage");
+  expect(text).toContain("the NEC edition and local amendments the AHJ enforces, and licensed practice");
+  expect(text).toContain("permission to operate (PTO)");
+}
+
+describe("commissioning report", () => {
+  let open: { bytes: Uint8Array; pages: string[] };
+  let complete: { bytes: Uint8Array; pages: string[] };
+  beforeAll(async () => {
+    open = await render(commissioningFixture({ kind: "report" }));
+    complete = await render(commissioningFixture({ kind: "report", scenario: "complete" }));
+  }, 30_000);
+
+  test("letter portrait, numbered page by page in a footer with the project", async () => {
+    expect(await pageSizes(open.bytes)).toEqual([LETTER, LETTER]);
+    open.pages.forEach((text, i) => {
+      expect(text).toContain(`Page ${i + 1} of 2`);
+      expect(text).toContain("Project 1042 · Imogen Halvorsen");
+      expect(text).toContain("Commissioning report Readings and results");
+      expect(text).toContain("Caution: PV conductors are energized whenever light reaches the modules, and inverter capacitors hold a charge after shutdown.");
+    });
+  });
+
+  test("the header gives the project and the system", () => {
+    const first = open.pages[0]!;
+    expect(first).toContain("Commissioning report Grid-tied PV system · Project 1042");
+    expect(first).toContain("120 Larkin Mill Rd, Brackenford, CO 80913");
+    expect(first).toContain("City of Brackenford Building Division");
+    expect(first).toContain("Brackenford Municipal Light & Power");
+    expect(first).toContain("BL-4410000 · meter M72000000");
+    expect(first).toContain("DC RATING (STC) 8.91 kW AC RATING 7.6 kW SERVICE 240 V nominal");
+    expect(first).toContain("22 × Larkspur LK-405M-54H (405 W)");
+    expect(first).toContain("1 × Quillon QS-7600 (7,600 W AC)");
+    expect(first).toContain("22 × Stavemoor SR-1 Shutdown Unit");
+    expect(first).toContain("NEC 2023 as adopted");
+  });
+
+  test("the completion status names the failing and missing readings, with the times", () => {
+    const first = open.pages[0]!;
+    expect(first).toContain("Open: 2 failing and 2 not recorded yet. 1 reading to review.");
+    expect(first).toContain("Failing: String B voltage with the array shut down; Modules reporting.");
+    expect(first).toContain("Not recorded yet: First power reading; Rapid shutdown test: time to reach it.");
+    expect(first).toContain("To review: AC voltage at the point of connection.");
+    expect(first).toContain("LAST RECORDED 2026-12-02 20:14 UTC MARKED COMPLETE Not yet");
+    expect(first).toContain("Dana Okafor (dana@quillmoor.example)");
+
+    const done = complete.pages.join(" ");
+    expect(done).toContain("Complete: all 8 readings recorded, none failing.");
+    expect(done).toContain("MARKED COMPLETE 2026-12-02 20:20 UTC");
+    expect(done).not.toContain("Not recorded");
+  });
+
+  test("every reading is in the table with its value, expected range, result and basis", () => {
+    const all = open.pages.join(" ");
+    const input = commissioningFixture({ kind: "report" });
+    for (const r of input.results) expect(all).toContain(r.title);
+    expect(all).toContain("IEEE 1547-2018 category B, utility default settings IEEE 1547-2018 Category B, utility default settings PASS utility interconnection requirement");
+    expect(all).toContain("253.1 V 228–252 V on 240 V; 220–254 V at times REVIEW ANSI C84.1");
+    expect(all).toContain("11.2 V 11–12.1 V for 11 devices; 30 V at most PASS NEC 2023 690.12(B)(1); common practice 1 V per device");
+    expect(all).toContain("38.6 V 11–12.1 V for 11 devices; 30 V at most FAIL NEC 2023 690.12(B)(1)");
+    expect(all).toContain("21 of 22 All 22 installed FAIL common practice");
+    expect(all).toContain("Not recorded Above 0, up to 7,980 W REVIEW common practice");
+    expect(all).toContain("0.8 V 30 V at most PASS NEC 2023 690.12(B)(1)");
+    expect(all).toContain("Not recorded 30 s at most REVIEW NEC 2023 690.12(B)(1)");
+    // Results are printed as words (with a drawn mark), not by colour alone.
+    expect(countWord(all, "PASS")).toBe(3);
+    expect(countWord(all, "REVIEW")).toBe(3);
+    expect(countWord(all, "FAIL")).toBe(2);
+
+    const done = complete.pages.join(" ");
+    expect(done).toContain("243.6 V 228–252 V on 240 V");
+    expect(done).toContain("5,168 W at 12:40");
+    expect(done).toContain("22 of 22");
+    expect(done).toContain("14 s 30 s at most PASS");
+    expect(countWord(done, "PASS")).toBe(8);
+  });
+
+  test("anything not passing carries its finding and what to do; passing rows stay short", () => {
+    const all = open.pages.join(" ");
+    expect(all).toContain("String B read 38.6 V with the array shut down: above the 30 V allowed on wiring that leaves the array.");
+    expect(all).toContain("To do: Do not touch the string's conductors.");
+    expect(all).toContain("21 of 22 modules are reporting; all must report before the record can be completed.");
+    expect(all).toContain("To do: Measure again under load");
+    expect(all).not.toContain("String A read 11.2 V");
+  });
+
+  test("prints the cautions in full", () => {
+    expectCautions(open.pages.join(" "));
+  });
+
+  test("twelve strings continue onto further pages with the table head repeated and no row cut", async () => {
+    const input = commissioningFixture({ kind: "report", strings: 12 });
+    const { bytes, pages } = await render(input);
+    expect(pages.length).toBeGreaterThanOrEqual(2);
+    expect((await pageSizes(bytes)).every((p) => p.width === LETTER.width && p.height === LETTER.height)).toBe(true);
+    pages.forEach((text, i) => {
+      expect(text).toContain(`Page ${i + 1} of ${pages.length}`);
+      expect(text).toContain("Project 1042");
+      // Every page holds readings, and each opens its share of the table with the column heads.
+      expect(text).toContain(TABLE_HEAD);
+    });
+    const ids = "ABCDEFGHIJKL".split("");
+    for (const [i, id] of ids.entries()) {
+      // Rows are numbered after the grid profile and AC voltage rows; the completion panel may name a string too.
+      const title = `${i + 3} String ${id} voltage with the array shut down`;
+      const holding = pages.filter((p) => p.includes(title));
+      expect(holding, title).toHaveLength(1);
+      // The whole row (title, reading, expected, result, basis) sits on one page.
+      const reading = input.record.strings[i]!.measuredV!;
+      expect(holding[0]).toMatch(new RegExp(`${title}.*?${String(reading).replace(".", "\\.")} V 8–9 V for 8 devices; 30 V at most (PASS|FAIL) NEC 2023 690\\.12\\(B\\)\\(1\\)`));
+    }
+    expect(pages.slice(1).every((p) => p.startsWith(TABLE_HEAD))).toBe(true);
+  }, 30_000);
+
+  test.skipIf(!hasPdftoppm)(`page 1 renders to a PNG far from blank${hasPdftoppm ? "" : ` (${NO_PDFTOPPM})`}`, async () => {
+    const png = firstPagePng(open.bytes);
+    expect(pngSize(png)).toEqual({ width: 340, height: 440 });
+    expect(png.length).toBeGreaterThan(10 * (await blankPagePng(612, 792)).length);
+  });
+});
+
+describe("certificate of completion", () => {
+  let open: { bytes: Uint8Array; pages: string[] };
+  let complete: { bytes: Uint8Array; pages: string[] };
+  beforeAll(async () => {
+    open = await render(commissioningFixture({ kind: "certificate" }));
+    complete = await render(commissioningFixture({ kind: "certificate", scenario: "complete" }));
+  }, 30_000);
+
+  test("one letter page, numbered, with the project in the footer", async () => {
+    expect(await pageSizes(open.bytes)).toEqual([LETTER]);
+    expect(await pageSizes(complete.bytes)).toEqual([LETTER]);
+    expect(open.pages[0]).toContain("Page 1 of 1");
+    expect(open.pages[0]).toContain("Certificate of completion For signature and upload");
+  });
+
+  test("pre-filled with the project, site, system, jurisdiction and utility", () => {
+    const text = complete.pages[0]!;
+    expect(text).toContain("Project 1042 · Imogen Halvorsen");
+    expect(text).toContain("SITE ADDRESS 120 Larkin Mill Rd, Brackenford, CO 80913");
+    expect(text).toContain("City of Brackenford Building Division");
+    expect(text).toContain("Brackenford Municipal Light & Power");
+    expect(text).toContain("8.91 kW DC (STC) · 7.6 kW AC");
+    expect(text).toContain("22 × Larkspur LK-405M-54H (405 W)");
+    expect(text).toContain("1 × Quillon QS-7600 (7,600 W AC)");
+    expect(text).toContain("RAPID SHUTDOWN EQUIPMENT 22 × Stavemoor SR-1 Shutdown Unit");
+  });
+
+  test("the installer's statement names the approved design, the NEC edition the AHJ enforces and the manufacturers' instructions", () => {
+    const text = complete.pages[0]!;
+    expect(text).toContain(
+      "I state that the grid-tied PV system described above was installed and commissioned according to the approved design, the NEC 2023 with the local amendments enforced by City of Brackenford Building Division, and the manufacturers' installation instructions;",
+    );
+    expect(text).toContain("until Brackenford Municipal Light & Power grants permission to operate");
+  });
+
+  test("sums up the commissioning result", () => {
+    expect(complete.pages[0]).toContain("COMPLETE Complete: all 8 readings recorded, none failing. Marked complete 2026-12-02 20:20 UTC");
+    expect(complete.pages[0]).not.toContain("Do not sign");
+    const text = open.pages[0]!;
+    expect(text).toContain("OPEN Open: 2 failing and 2 not recorded yet.");
+    expect(text).toContain("Failing: String B voltage with the array shut down; Modules reporting.");
+    expect(text).toContain("Not recorded yet: First power reading; Rapid shutdown test: time to reach it.");
+    expect(text).toContain("Do not sign until every reading is recorded and none fails");
+  });
+
+  test("blank lines for the installer and the customer's acknowledgement", () => {
+    const text = complete.pages[0]!;
+    expect(text).toContain("Installer For Quillmoor Solar Electric, contractor license EC-40718 (demo) PRINTED NAME LICENSE NO. SIGNATURE DATE");
+    expect(text).toContain("Customer's acknowledgement");
+    expect(text).toMatch(/grants permission to operate\. PRINTED NAME SIGNATURE DATE/);
+    expect(text.match(/SIGNATURE DATE/g)).toHaveLength(2);
+  });
+
+  test("prints the cautions", () => {
+    expectCautions(open.pages[0]!);
+  });
+
+  test.skipIf(!hasPdftoppm)(`renders to a PNG far from blank${hasPdftoppm ? "" : ` (${NO_PDFTOPPM})`}`, async () => {
+    const png = firstPagePng(open.bytes);
+    expect(pngSize(png)).toEqual({ width: 340, height: 440 });
+    expect(png.length).toBeGreaterThan(10 * (await blankPagePng(612, 792)).length);
+  });
+});
+
+describe("commissioning summary", () => {
+  test("a reading both failing and not recorded counts once, as failing", () => {
+    // Required profile not on file and none read from the inverter: the result fails while its reading is missing.
+    const record = { ...commissioningRecord({ scenario: "complete" }), requiredGridProfile: null, gridProfileSet: null };
+    const results = checkCommissioning(record);
+    const completion = { complete: false, failing: ["grid-profile"], missing: ["grid-profile"] };
+    const summary = completionSummary({ ...commissioningFixture({ scenario: "complete" }), record, results, completion });
+    expect(summary).toMatchObject({ complete: false, status: "fail", word: "Open", failing: ["Grid profile on the inverter"], notRecorded: [] });
+    expect(summary.sentence).toBe("Open: 1 failing.");
+  });
+
+  test("a required reading with no result at all is named by its kind", () => {
+    const input = commissioningFixture({ scenario: "complete" });
+    const results = input.results.filter((r) => r.kind !== "first-power");
+    const summary = completionSummary({ ...input, results, completion: commissioningComplete(results) });
+    expect(summary.notRecorded).toEqual(["First power reading"]);
+  });
+
+  test("only missing readings leave the record open for review, not failing", () => {
+    const summary = completionSummary(commissioningFixture({ scenario: "complete", strings: 2 }));
+    expect(summary.status).toBe("pass");
+    const record = { ...commissioningRecord({ scenario: "complete" }), firstPowerW: null, firstPowerTime: null };
+    const results = checkCommissioning(record);
+    const open = completionSummary({ ...commissioningFixture({ scenario: "complete" }), record, results, completion: commissioningComplete(results) });
+    expect(open).toMatchObject({ status: "warn", word: "Open", notRecorded: ["First power reading"] });
+    expect(open.sentence).toBe("Open: 1 not recorded yet.");
+  });
+
+  test("typed text the fonts cannot draw is spelled out", async () => {
+    const input = commissioningFixture({ kind: "report", scenario: "complete" });
+    input.system.shutdownSummary = "22 × Stavemoor SR-1 (≤ 1 V shut down)";
+    const text = (await pageTexts(await renderCommissioningPdf(input))).join(" ");
+    expect(text).toContain("22 × Stavemoor SR-1 (<= 1 V shut down)");
+  });
+
+  test("facts left empty print as such, on both documents", async () => {
+    const sparse = (kind: "report" | "certificate"): CommissioningDocumentInput => {
+      const input = commissioningFixture({ kind, scenario: "open" });
+      return {
+        ...input,
+        organization: { name: "Quillmoor Solar Electric", licenseNumber: null, phone: null },
+        project: { ...input.project, jurisdictionName: null, utilityName: null, utilityAccountNumber: null, meterNumber: null },
+        system: { ...input.system, shutdownSummary: null },
+        installer: null,
+        recordUpdatedAt: null,
+      };
+    };
+    const report = (await render(sparse("report"))).pages.join(" ");
+    expect(report).toContain("AUTHORIT Y HAVING JURISDICTION Not set UTILIT Y Not set UTILIT Y ACCOUNT AND METER Not entered");
+    expect(report).toContain("RAPID SHUTDOWN EQUIPMENT None listed separately");
+    expect(report).toContain("READINGS BY Not assigned LAST RECORDED Nothing recorded yet");
+    const certificate = await render(sparse("certificate"));
+    expect(certificate.pages).toHaveLength(1);
+    expect(certificate.pages[0]).toContain("Installer For Quillmoor Solar Electric PRINTED NAME");
+    expect(certificate.pages[0]).toContain("local amendments enforced by the authority having jurisdiction");
+    expect(certificate.pages[0]).toContain("until the utility grants permission to operate");
+  }, 30_000);
+});
