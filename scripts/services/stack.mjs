@@ -7,10 +7,11 @@ import path from "node:path";
 import { databaseUrl, ensureDatabase, startPostgres } from "./postgres.mjs";
 import { startMailCatcher } from "./mail-catcher.mjs";
 import { FAKE_ACCESS_KEY_ID, FAKE_SECRET_ACCESS_KEY, startStorageFake } from "../../storage-fake/server.mjs";
+import { FAKE_STRIPE_SECRET_KEY, FAKE_STRIPE_WEBHOOK_SECRET, startPaymentsFake } from "../../payments-fake/server.mjs";
 
 export const PROFILES = {
-  dev: { app: 3000, postgres: 54329, storage: 4569, smtp: 2525, mailbox: 2526, database: "ohmstead" },
-  test: { app: 3100, postgres: 54339, storage: 4579, smtp: 2535, mailbox: 2536, database: "ohmstead_e2e" },
+  dev: { app: 3000, postgres: 54329, storage: 4569, payments: 4589, smtp: 2525, mailbox: 2526, database: "ohmstead" },
+  test: { app: 3100, postgres: 54339, storage: 4579, payments: 4599, smtp: 2535, mailbox: 2536, database: "ohmstead_e2e" },
 };
 
 /** A local-only session secret kept in the git-ignored data folder. */
@@ -38,6 +39,7 @@ export async function startStack({ root, profile, postgresBin, fresh = false }) 
   if (fresh) {
     rmSync(path.join(dataRoot, "storage"), { recursive: true, force: true });
     rmSync(path.join(dataRoot, "mail"), { recursive: true, force: true });
+    rmSync(path.join(dataRoot, "payments"), { recursive: true, force: true });
   }
   mkdirSync(dataRoot, { recursive: true });
 
@@ -60,10 +62,14 @@ export async function startStack({ root, profile, postgresBin, fresh = false }) 
     const storage = await startStorageFake({ port: ports.storage, directory: path.join(dataRoot, "storage"), bucket });
     stops.push(storage.stop);
 
+    const appUrl = `http://127.0.0.1:${ports.app}`;
+    // Webhooks go to the app as Stripe would send them; until the app is up the fake retries, then resends after a restart.
+    const payments = await startPaymentsFake({ port: ports.payments, directory: path.join(dataRoot, "payments"), webhookUrl: `${appUrl}/api/webhooks/stripe` });
+    stops.push(payments.stop);
+
     const mail = await startMailCatcher({ smtpPort: ports.smtp, httpPort: ports.mailbox, directory: path.join(dataRoot, "mail") });
     stops.push(mail.stop);
 
-    const appUrl = `http://127.0.0.1:${ports.app}`;
     const env = {
       NODE_ENV: "production",
       NEXT_TELEMETRY_DISABLED: "1",
@@ -81,6 +87,10 @@ export async function startStack({ root, profile, postgresBin, fresh = false }) 
       SMTP_URL: `smtp://127.0.0.1:${ports.smtp}`,
       MAIL_FROM: "Ohmstead <no-reply@ohmstead.local>",
       MAILBOX_URL: `http://127.0.0.1:${ports.mailbox}`,
+      // The local test-mode payments fake and its keys (not secrets); real keys work with STRIPE_API_URL unset.
+      STRIPE_SECRET_KEY: FAKE_STRIPE_SECRET_KEY,
+      STRIPE_WEBHOOK_SECRET: FAKE_STRIPE_WEBHOOK_SECRET,
+      STRIPE_API_URL: payments.url,
     };
     return { ports, env, stop: stopAll };
   } catch (error) {
