@@ -2,7 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePermission } from "@/lib/server/auth";
 import { orNotFoundPage } from "@/lib/server/pages";
+import { getFeeSchedule } from "@/lib/server/data/fee-schedules";
 import { getJurisdictionById } from "@/lib/server/data/reference-data";
+import { FeeScheduleEditor } from "@/components/fees/fee-schedule-editor";
 import { JurisdictionForm } from "../_components/jurisdiction-form";
 
 export const metadata: Metadata = { title: "Edit jurisdiction" };
@@ -10,6 +12,7 @@ export const metadata: Metadata = { title: "Edit jurisdiction" };
 export default async function EditJurisdictionPage({ params }: { params: Promise<{ jurisdictionId: string }> }) {
   const viewer = await requirePermission("reference:edit");
   const j = await orNotFoundPage(getJurisdictionById({ viewer, jurisdictionId: (await params).jurisdictionId }));
+  const feeLines = await getFeeSchedule({ viewer, authorityKind: "jurisdiction", authorityId: j.id });
   const initial = { name: j.name, state: j.state, necEdition: String(j.necEdition), recordLowTempC: String(j.recordLowTempC), highDesignTempC: String(j.highDesignTempC), notes: j.notes };
   return (
     <div className="mx-auto max-w-3xl space-y-4">
@@ -19,6 +22,11 @@ export default async function EditJurisdictionPage({ params }: { params: Promise
       <h1>{j.name}</h1>
       <section className="panel">
         <JurisdictionForm jurisdictionId={j.id} initial={initial} />
+      </section>
+      <section className="panel space-y-3" aria-labelledby="fee-schedule-title">
+        <h2 id="fee-schedule-title">Fee schedule</h2>
+        <p className="text-sm text-ink-soft">The permit fees this AHJ charges, worked out for each project from its reviewed design and declared valuation; lines sharing a name are versions of one fee, told apart by the day each takes effect.</p>
+        <FeeScheduleEditor authorityKind="jurisdiction" authorityId={j.id} authorityName={j.name} initialLines={feeLines} />
       </section>
     </div>
   );

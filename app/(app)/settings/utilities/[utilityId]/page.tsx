@@ -2,7 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePermission } from "@/lib/server/auth";
 import { orNotFoundPage } from "@/lib/server/pages";
+import { getFeeSchedule } from "@/lib/server/data/fee-schedules";
 import { getUtilityById } from "@/lib/server/data/reference-data";
+import { FeeScheduleEditor } from "@/components/fees/fee-schedule-editor";
 import { UtilityForm } from "../_components/utility-form";
 
 export const metadata: Metadata = { title: "Edit utility" };
@@ -10,6 +12,7 @@ export const metadata: Metadata = { title: "Edit utility" };
 export default async function EditUtilityPage({ params }: { params: Promise<{ utilityId: string }> }) {
   const viewer = await requirePermission("reference:edit");
   const u = await orNotFoundPage(getUtilityById({ viewer, utilityId: (await params).utilityId }));
+  const feeLines = await getFeeSchedule({ viewer, authorityKind: "utility", authorityId: u.id });
   const initial = { name: u.name, serviceVoltages: u.serviceVoltages.join("\n"), requiredGridProfile: u.requiredGridProfile, notes: u.notes };
   return (
     <div className="mx-auto max-w-3xl space-y-4">
@@ -19,6 +22,11 @@ export default async function EditUtilityPage({ params }: { params: Promise<{ ut
       <h1>{u.name}</h1>
       <section className="panel">
         <UtilityForm utilityId={u.id} initial={initial} />
+      </section>
+      <section className="panel space-y-3" aria-labelledby="fee-schedule-title">
+        <h2 id="fee-schedule-title">Fee schedule</h2>
+        <p className="text-sm text-ink-soft">The interconnection fees this utility charges, worked out for each project from its reviewed design and declared valuation; lines sharing a name are versions of one fee, told apart by the day each takes effect.</p>
+        <FeeScheduleEditor authorityKind="utility" authorityId={u.id} authorityName={u.name} initialLines={feeLines} />
       </section>
     </div>
   );
