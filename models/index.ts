@@ -4,13 +4,18 @@ import { AuditEvent } from "./audit-event";
 import { CommissioningRecord } from "./commissioning-record";
 import { Design } from "./design";
 import { Equipment } from "./equipment";
+import { FeeSchedule } from "./fee-schedule";
 import { Invitation } from "./invitation";
 import { Jurisdiction } from "./jurisdiction";
 import { Organization } from "./organization";
 import { OutboxMessage } from "./outbox-message";
 import { Packet } from "./packet";
+import { Payment } from "./payment";
+import { PaymentLine } from "./payment-line";
+import { ProcessorEvent } from "./processor-event";
 import { Project } from "./project";
 import { ProjectFile } from "./project-file";
+import { Refund } from "./refund";
 import { ShareLink } from "./share-link";
 import { ShareLinkAccess } from "./share-link-access";
 import { ShareLinkMiss } from "./share-link-miss";
@@ -25,6 +30,7 @@ export { ApiToken };
 export { ShareLink, ShareLinkAccess, ShareLinkMiss, ShareLinkPacket };
 export { OutboxMessage };
 export { CommissioningRecord, ProjectFile };
+export { FeeSchedule, Payment, PaymentLine, ProcessorEvent, Refund };
 
 let initialized: Sequelize | null = null;
 
@@ -53,4 +59,9 @@ export function initModels(sequelize: Sequelize) {
   CommissioningRecord.initModel(sequelize);
   ProjectFile.initModel(sequelize);
   ProjectFile.belongsTo(User, { as: "uploadedBy", foreignKey: "uploadedById" });
+  for (const model of [FeeSchedule, Payment, PaymentLine, Refund, ProcessorEvent]) model.initModel(sequelize);
+  Payment.hasMany(PaymentLine, { as: "lines", foreignKey: "paymentId" });
+  Payment.hasMany(Refund, { as: "refunds", foreignKey: "paymentId" });
+  Payment.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
+  Refund.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
 }

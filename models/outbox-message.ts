@@ -1,6 +1,8 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
 export type OutboxStatus = "queued" | "sent" | "failed";
+/** A stored file sent along with the message; the worker reads it from storage when it sends. */
+export type OutboxAttachment = { fileName: string; objectKey: string; contentType: string };
 
 /** One e-mail waiting for, or done with, delivery by the worker. */
 export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCreationAttributes<OutboxMessage>> {
@@ -10,6 +12,7 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
   declare subject: string;
   declare textBody: string;
   declare htmlBody: string;
+  declare attachments: CreationOptional<OutboxAttachment[]>;
   declare status: CreationOptional<OutboxStatus>;
   declare attempts: CreationOptional<number>;
   declare nextAttemptAt: CreationOptional<Date>;
@@ -28,6 +31,7 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
         subject: { type: DataTypes.STRING(300), allowNull: false },
         textBody: { type: DataTypes.TEXT, allowNull: false },
         htmlBody: { type: DataTypes.TEXT, allowNull: false },
+        attachments: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         status: { type: DataTypes.STRING(10), allowNull: false, defaultValue: "queued" },
         attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         nextAttemptAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },

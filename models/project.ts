@@ -27,6 +27,7 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
   declare stageChangedAt: CreationOptional<Date>;
   declare coordinatorId: string | null;
   declare installerId: string | null;
+  declare declaredValuationCents: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -60,6 +61,15 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
         stageChangedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
         coordinatorId: { type: DataTypes.UUID, allowNull: true },
         installerId: { type: DataTypes.UUID, allowNull: true },
+        declaredValuationCents: {
+          type: DataTypes.BIGINT,
+          allowNull: true,
+          // pg returns BIGINT as a string; cents below 2^53 are exact as numbers.
+          get() {
+            const v = this.getDataValue("declaredValuationCents") as unknown;
+            return v === null || v === undefined ? null : Number(v);
+          },
+        },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

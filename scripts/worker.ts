@@ -1,10 +1,12 @@
 // The background worker: takes packet generations from the PostgreSQL-backed
-// queue and sends the e-mail outbox. Run beside the app (npm start and npm test start one); in production
+// queue, sends the e-mail outbox, issues payment receipts and reconciles checkouts. Run beside the app (npm start and npm test start one); in production
 // run as many as needed with `npm run worker`.
 import PgBoss from "pg-boss";
 import { PACKET_QUEUE, type PacketJob } from "@/lib/server/services/jobs";
 import { deliverDueMail } from "@/lib/server/services/outbox";
 import { generatePacket } from "@/lib/server/services/packet-generation";
+import { reconcilePendingPayments } from "@/lib/server/data/payments";
+import { issueDueReceipts } from "@/lib/server/services/receipts";
 
 const url = process.env.DATABASE_URL;
 if (!url) {
@@ -39,11 +41,31 @@ async function deliverMailLoop() {
 void deliverMailLoop();
 console.log("• Mail worker is sending the outbox.");
 
+// Payments: receipts for newly paid payments, and a look at the processor for checkouts whose
+// webhook never came (a crash between charge and webhook), so no payment stays unrecorded.
+const RECEIPT_INTERVAL_MS = 2_000;
+const RECONCILE_EVERY = 15; // receipt rounds, about 30 s
+let paymentRound: Promise<void> = Promise.resolve();
+let rounds = 0;
+async function paymentsLoop() {
+  if (stopping) return;
+  const reconcile = rounds++ % RECONCILE_EVERY === 0 && Boolean(process.env.STRIPE_SECRET_KEY);
+  paymentRound = (async () => {
+    if (reconcile) await reconcilePendingPayments({ olderThanMs: 60_000 }).catch((error) => console.error("payment reconciliation error", error));
+    await issueDueReceipts().catch((error) => console.error("receipt error", error));
+  })();
+  await paymentRound;
+  if (!stopping) setTimeout(paymentsLoop, RECEIPT_INTERVAL_MS);
+}
+void paymentsLoop();
+console.log("• Payments worker is issuing receipts and reconciling checkouts.");
+
 for (const signal of ["SIGINT", "SIGTERM"] as const) {
   process.on(signal, async () => {
     if (stopping) return;
     stopping = true;
     await mailRound; // let a message in flight be marked, so it is not sent again
+    await paymentRound;
     await boss.stop({ graceful: true, timeout: 15_000 });
     process.exit(0);
   });

@@ -16,6 +16,11 @@ const EnvSchema = z.object({
   MAIL_FROM: z.string({ error: "MAIL_FROM is required" }).min(3),
   // Set only when the local fakes run: it turns the mailbox page on.
   MAILBOX_URL: url("MAILBOX_URL").optional(),
+  // Fees: a Stripe secret key and the webhook endpoint's signing secret (the local fake's are not secrets).
+  // STRIPE_API_URL points the SDK at the local fake; leave it unset to talk to Stripe itself.
+  STRIPE_SECRET_KEY: z.string().regex(/^(sk|rk)_(test|live)_\w+$/, "STRIPE_SECRET_KEY must look like sk_test_…").optional(),
+  STRIPE_WEBHOOK_SECRET: z.string().regex(/^whsec_\w+$/, "STRIPE_WEBHOOK_SECRET must look like whsec_…").optional(),
+  STRIPE_API_URL: url("STRIPE_API_URL").optional(),
 });
 
 export type Env = z.infer<typeof EnvSchema>;

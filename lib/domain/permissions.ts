@@ -23,11 +23,13 @@ export type Permission =
   | "mailbox:view"
   | "design:review"
   | "api-tokens:manage"
-  | "field:record";
+  | "field:record"
+  | "fees:pay"
+  | "fees:refund";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
-  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage", "field:record"],
-  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "mailbox:view", "design:review", "field:record"],
+  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage", "field:record", "fees:pay", "fees:refund"],
+  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "mailbox:view", "design:review", "field:record", "fees:pay"],
   installer: ["project:view", "design:review", "field:record"],
 };
 

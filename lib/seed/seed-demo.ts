@@ -1,8 +1,9 @@
 import bcrypt from "bcryptjs";
 import type { Sequelize, Transaction } from "sequelize";
-import { Jurisdiction, Organization, Project, StageChange, User, Utility } from "@/models";
+import { FeeSchedule, Jurisdiction, Organization, Project, StageChange, User, Utility } from "@/models";
 import { STAGES, type Stage } from "@/lib/domain/stages";
 import { seedDemoCatalog } from "./demo-catalog";
+import { DEMO_JURISDICTION_FEES, DEMO_UTILITY_FEES } from "./demo-fees";
 import { seedDemoDesigns } from "./seed-demo-designs";
 import { CUSTOMERS, JURISDICTIONS, ORGANIZATIONS, STAGE_NOTES, STREETS, TOWNS, UTILITIES } from "./demo-scenario";
 import { DEMO_SIGN_INS } from "./demo-sign-ins.mjs";
@@ -29,6 +30,8 @@ async function seedOrganization(key: "main" | "other", projectCount: number, t: 
   for (const { key: k, ...j } of JURISDICTIONS) jurisdictions.set(k, await Jurisdiction.create({ organizationId, ...j }, { transaction: t }));
   const utilities = new Map<string, Utility>();
   for (const { key: k, ...u } of UTILITIES) utilities.set(k, await Utility.create({ organizationId, ...u }, { transaction: t }));
+  for (const [k, j] of jurisdictions) await FeeSchedule.create({ organizationId, authorityKind: "jurisdiction", authorityId: j.id, lines: DEMO_JURISDICTION_FEES[k] ?? [], updatedById: null }, { transaction: t });
+  for (const [k, u] of utilities) await FeeSchedule.create({ organizationId, authorityKind: "utility", authorityId: u.id, lines: DEMO_UTILITY_FEES[k] ?? [], updatedById: null }, { transaction: t });
   await seedDemoCatalog(organizationId, t);
 
   const coordinators = users.filter((u) => u.role === "coordinator");
@@ -70,6 +73,8 @@ async function seedOrganization(key: "main" | "other", projectCount: number, t: 
         stageChangedAt: createdAt,
         coordinatorId: coordinator?.id ?? null,
         installerId: installer?.id ?? null,
+        // Every other project has its valuation declared; the rest show the fee that waits for it.
+        declaredValuationCents: i % 2 === 0 ? (18_000 + ((i * 1_337) % 14_000)) * 100 : null,
         createdAt,
         updatedAt: createdAt,
       },

@@ -33,6 +33,8 @@ export async function startMailCatcher({ smtpPort, httpPort, directory }) {
             subject: mail.subject ?? "",
             text: mail.text ?? "",
             html: typeof mail.html === "string" ? mail.html : "",
+            // Names, types and sizes only: enough to see that a receipt was attached.
+            attachments: (mail.attachments ?? []).map((a) => ({ fileName: a.filename ?? "", contentType: a.contentType, sizeBytes: a.size })),
           };
           writeFileSync(path.join(directory, `${id}.json`), JSON.stringify(message));
           callback();

@@ -46,6 +46,15 @@ export default async function MailboxPage() {
           <div className="whitespace-pre-wrap text-sm">
             <Linked text={m.text} />
           </div>
+          {m.attachments?.length ? (
+            <ul className="mt-2 border-t border-paper-edge pt-2 text-sm text-ink-soft" aria-label="Attachments">
+              {m.attachments.map((a, i) => (
+                <li key={i}>
+                  Attached: <span className="measure">{a.fileName}</span> ({a.contentType}, {Math.max(1, Math.round(a.sizeBytes / 1024))} KB)
+                </li>
+              ))}
+            </ul>
+          ) : null}
         </article>
       ))}
     </main>

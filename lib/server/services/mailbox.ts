@@ -1,7 +1,16 @@
 import "server-only";
 import { env } from "../env";
 
-export type CaughtMessage = { id: string; receivedAt: string; from: string; to: string[]; subject: string; text: string; html: string };
+export type CaughtMessage = {
+  id: string;
+  receivedAt: string;
+  from: string;
+  to: string[];
+  subject: string;
+  text: string;
+  html: string;
+  attachments?: { fileName: string; contentType: string; sizeBytes: number }[];
+};
 
 /** True only when the local SMTP catcher runs beside the app. */
 export function isMailboxEnabled(): boolean {

@@ -2,11 +2,13 @@ import "server-only";
 import type { Transporter } from "nodemailer";
 import { Op, type Transaction } from "sequelize";
 import { OutboxMessage } from "@/models";
+import type { OutboxAttachment } from "@/models/outbox-message";
 import { afterFailedAttempt } from "@/lib/domain/mail-retry";
 import { db } from "../db";
 import { sendMail } from "./mail";
+import { getObjectBytes } from "./storage";
 
-export type QueuedMail = { to: string; subject: string; text: string; html: string; organizationId?: string | null };
+export type QueuedMail = { to: string; subject: string; text: string; html: string; organizationId?: string | null; attachments?: OutboxAttachment[] };
 export type DeliveryReport = { sent: number; retried: number; failed: number };
 
 /**
@@ -16,7 +18,7 @@ export type DeliveryReport = { sent: number; retried: number; failed: number };
 export async function enqueueMail(mail: QueuedMail, { transaction }: { transaction?: Transaction } = {}): Promise<{ id: string }> {
   db();
   const row = await OutboxMessage.create(
-    { organizationId: mail.organizationId ?? null, toAddress: mail.to, subject: mail.subject, textBody: mail.text, htmlBody: mail.html, nextAttemptAt: new Date() },
+    { organizationId: mail.organizationId ?? null, toAddress: mail.to, subject: mail.subject, textBody: mail.text, htmlBody: mail.html, attachments: mail.attachments ?? [], nextAttemptAt: new Date() },
     { transaction },
   );
   return { id: row.id };
@@ -51,7 +53,9 @@ async function deliverOne(transaction: Transaction, transport: Transporter | und
   const attempts = row.attempts + 1;
   try {
     // A Message-ID fixed per row lets a receiving server spot the rare resend after a lost commit.
-    const { response } = await sendMail({ to: row.toAddress, subject: row.subject, text: row.textBody, html: row.htmlBody, messageId: `<${row.id}@outbox.ohmstead>` }, transport);
+    // Attachments are read from storage at send time, so the outbox row stays small; a storage failure retries like SMTP's.
+    const attachments = await Promise.all((row.attachments ?? []).map(async (a) => ({ filename: a.fileName, contentType: a.contentType, content: Buffer.from(await getObjectBytes(a.objectKey)) })));
+    const { response } = await sendMail({ to: row.toAddress, subject: row.subject, text: row.textBody, html: row.htmlBody, attachments, messageId: `<${row.id}@outbox.ohmstead>` }, transport);
     await row.update({ status: "sent", attempts, smtpResponse: response, sentAt: new Date(), lastError: null }, { transaction });
     return "sent";
   } catch (error) {

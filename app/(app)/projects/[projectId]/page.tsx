@@ -44,6 +44,9 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         <Link href={`/projects/${project.id}/field`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
           Field record
         </Link>
+        <Link href={`/projects/${project.id}/fees`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
+          Fees
+        </Link>
         {can(viewer, "project:edit") ? (
           <Link href={`/projects/${project.id}/edit`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
             Edit project

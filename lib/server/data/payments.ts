@@ -1,0 +1,148 @@
+import "server-only";
+import { Op, type Transaction } from "sequelize";
+import type Stripe from "stripe";
+import { Payment, PaymentLine, Refund } from "@/models";
+import { can, type Viewer } from "@/lib/domain/permissions";
+import { AppError } from "@/lib/errors";
+import { formatUsd } from "@/lib/fees";
+import { db } from "../db";
+import { env } from "../env";
+import { stripe } from "../services/payments";
+import { recordAudit } from "./audit";
+import { isUuid } from "./ids";
+import { applySessionState } from "./payment-events";
+import { getProjectFees, PAYMENT_INCLUDE, toPaymentDto, type PaymentDto } from "./project-fees";
+import { getProjectById } from "./projects";
+
+/** Ends an unfinished checkout that holds some of the same lines, so one fee is never being paid twice. */
+async function releasePending(payment: Payment) {
+  if (!payment.checkoutSessionId) {
+    await payment.update({ status: "expired" });
+    return;
+  }
+  const session = await stripe().checkout.sessions.retrieve(payment.checkoutSessionId);
+  const settled = session.status === "open" ? await stripe().checkout.sessions.expire(session.id) : session;
+  await applySessionState(settled);
+}
+
+/**
+ * Starts paying the chosen unpaid lines. The amount is worked out here, from the schedules and the
+ * design, in integer cents; the browser only names the lines. Returns the hosted checkout page.
+ */
+export async function startPayment({ viewer, projectId, feeKeys }: { viewer: Viewer; projectId: string; feeKeys: string[] }): Promise<{ paymentId: string; checkoutUrl: string }> {
+  const sequelize = db();
+  const project = await getProjectById({ viewer, projectId });
+  if (!can(viewer, "fees:pay")) throw new AppError("FORBIDDEN", "Your role cannot pay fees.");
+  let fees = await getProjectFees({ viewer, projectId });
+  const stale = fees.payments.filter((p) => p.status === "pending" && fees.lines.some((l) => feeKeys.includes(l.feeKey) && l.paymentId === p.id));
+  if (stale.length) {
+    for (const p of await Payment.findAll({ where: { id: stale.map((s) => s.id) } })) await releasePending(p);
+    fees = await getProjectFees({ viewer, projectId });
+  }
+  const chosen = fees.lines.filter((l) => feeKeys.includes(l.feeKey));
+  if (chosen.length !== new Set(feeKeys).size) throw new AppError("CONFLICT", "Some of the chosen fees no longer apply to this project. Reload the page.");
+  const blocked = chosen.find((l) => l.state !== "unpaid" || l.problem || l.amountCents <= 0);
+  if (blocked) throw new AppError("CONFLICT", blocked.state === "paid" ? `${blocked.name} is already paid.` : blocked.problem ? `${blocked.name}: ${blocked.problem}` : `${blocked.name} has nothing to pay.`);
+  const amountCents = chosen.reduce((sum, l) => sum + l.amountCents, 0);
+
+  const payment = await sequelize.transaction(async (transaction) => {
+    const created = await Payment.create({ organizationId: viewer.organizationId, projectId, amountCents, createdById: viewer.id }, { transaction });
+    await PaymentLine.bulkCreate(chosen.map((l) => ({ paymentId: created.id, feeKey: l.feeKey, authority: l.authority, name: l.name, arithmetic: l.arithmetic, amountCents: l.amountCents })), { transaction });
+    await recordAudit({ viewer, action: "payment.started", entityType: "project", entityId: projectId, changes: { payment: { before: null, after: `${formatUsd(amountCents)} for ${chosen.map((l) => l.name).join(", ")}` } } }, { transaction });
+    return created;
+  });
+
+  const base = `${env().APP_URL}/projects/${projectId}/fees`;
+  try {
+    const session = await stripe().checkout.sessions.create(
+      {
+        mode: "payment",
+        line_items: chosen.map((l) => ({ quantity: 1, price_data: { currency: "usd", unit_amount: l.amountCents, product_data: { name: `${l.authority}: ${l.name}` } } })),
+        success_url: `${base}?checkout=done`,
+        cancel_url: `${base}?checkout=cancelled`,
+        client_reference_id: payment.id,
+        customer_email: viewer.email,
+        metadata: { paymentId: payment.id, projectId, projectNumber: String(project.number) },
+        payment_intent_data: { metadata: { paymentId: payment.id, projectId }, description: `Project ${project.number} fees` },
+      },
+      { idempotencyKey: `checkout-${payment.id}` },
+    );
+    await payment.update({ checkoutSessionId: session.id });
+    return { paymentId: payment.id, checkoutUrl: session.url! };
+  } catch (error) {
+    await payment.update({ status: "expired", failureMessage: "The payment page could not be opened." });
+    console.error("checkout session", error);
+    throw new AppError("CONFLICT", "The payment service did not answer. Nothing was charged; try again in a minute.");
+  }
+}
+
+/** Returns money on a paid payment, all of it or part; recorded from the processor's answer. */
+export async function refundPayment({ viewer, paymentId, amountCents, reason }: { viewer: Viewer; paymentId: string; amountCents: number; reason: string }): Promise<PaymentDto> {
+  const sequelize = db();
+  if (!can(viewer, "fees:refund")) throw new AppError("FORBIDDEN", "Only an admin can refund.");
+  const payment = isUuid(paymentId) ? await Payment.findOne({ where: { id: paymentId, organizationId: viewer.organizationId } }) : null;
+  if (!payment) throw new AppError("NOT_FOUND", "No such payment.");
+  await getProjectById({ viewer, projectId: payment.projectId });
+  const left = payment.amountCents - payment.refundedCents;
+  if (payment.status !== "paid" && payment.status !== "partially_refunded") throw new AppError("CONFLICT", "Only a paid payment can be refunded.");
+  if (!Number.isInteger(amountCents) || amountCents <= 0 || amountCents > left) {
+    throw new AppError("INVALID_INPUT", `Refund between $0.01 and ${formatUsd(left)}.`, { amount: [`At most ${formatUsd(left)}`] });
+  }
+  const refund = await stripe().refunds.create(
+    { payment_intent: payment.paymentIntentId!, amount: amountCents, reason: "requested_by_customer", metadata: { paymentId: payment.id, note: reason.slice(0, 450) } },
+    { idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${amountCents}` },
+  );
+  await sequelize.transaction(async (transaction) => {
+    await recordRefund(payment.id, refund, { reason, createdById: viewer.id }, transaction);
+    await recordAudit({ viewer, action: "payment.refunded", entityType: "project", entityId: payment.projectId, changes: { refund: { before: null, after: `${formatUsd(amountCents)}: ${reason}` } } }, { transaction });
+  });
+  return toPaymentDto((await Payment.findByPk(payment.id, { include: PAYMENT_INCLUDE }))!);
+}
+
+/** Records a refund once, by the processor's id, and brings the payment's refunded total and status along. */
+export async function recordRefund(paymentId: string, refund: Pick<Stripe.Refund, "id" | "amount" | "status">, extra: { reason: string | null; createdById: string | null }, transaction: Transaction) {
+  if (refund.status === "failed" || refund.status === "canceled") return;
+  const payment = await Payment.findByPk(paymentId, { transaction, lock: transaction.LOCK.UPDATE });
+  if (!payment) return;
+  const [row, created] = await Refund.findOrCreate({ where: { processorRefundId: refund.id }, defaults: { paymentId, processorRefundId: refund.id, amountCents: refund.amount, reason: extra.reason, createdById: extra.createdById }, transaction });
+  // The webhook may have recorded it first; the admin's own call then adds who asked and why.
+  if (!created && extra.createdById && !row.createdById) await row.update({ reason: extra.reason, createdById: extra.createdById }, { transaction });
+  const total = (await Refund.sum("amountCents", { where: { paymentId }, transaction })) ?? 0;
+  await settleRefunded(payment, total, transaction);
+}
+
+/** Refunded totals only grow; the status follows the total. */
+export async function settleRefunded(payment: Payment, refundedCents: number, transaction: Transaction) {
+  const total = Math.min(payment.amountCents, Math.max(payment.refundedCents, refundedCents));
+  const status = total === 0 ? payment.status : total >= payment.amountCents ? "refunded" : "partially_refunded";
+  await payment.update({ refundedCents: total, status }, { transaction });
+}
+
+/** Pending payments older than `olderThanMs` whose webhook never came: asks the processor and applies what it says. */
+export async function reconcilePendingPayments({ olderThanMs = 60_000 }: { olderThanMs?: number } = {}): Promise<number> {
+  db();
+  const pending = await Payment.findAll({ where: { status: "pending", checkoutSessionId: { [Op.ne]: null }, updatedAt: { [Op.lt]: new Date(Date.now() - olderThanMs) } }, limit: 50 });
+  let changed = 0;
+  for (const payment of pending) {
+    const session = await stripe().checkout.sessions.retrieve(payment.checkoutSessionId!, { expand: ["payment_intent.latest_charge"] });
+    if (await applySessionState(session)) {
+      changed++;
+    } else {
+      // Still open at the processor: look again after the next interval, not on every pass.
+      payment.changed("updatedAt", true);
+      await payment.save();
+    }
+  }
+  return changed;
+}
+
+
+/** Where a payment's receipt is kept, for a viewer who may see its project. */
+export async function getReceiptLocation({ viewer, paymentId }: { viewer: Viewer; paymentId: string }) {
+  db();
+  const payment = isUuid(paymentId) ? await Payment.findOne({ where: { id: paymentId, organizationId: viewer.organizationId } }) : null;
+  if (!payment) throw new AppError("NOT_FOUND", "No such payment.");
+  await getProjectById({ viewer, projectId: payment.projectId });
+  if (!payment.receiptKey) throw new AppError("NOT_FOUND", "The receipt is not issued yet.");
+  return { key: payment.receiptKey, fileName: `${payment.receiptNumber}.pdf` };
+}

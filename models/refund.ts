@@ -1,0 +1,30 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
+import type { User } from "./user";
+
+/** Money returned on a payment, full or partial, by its id at the processor. */
+export class Refund extends Model<InferAttributes<Refund>, InferCreationAttributes<Refund>> {
+  declare id: CreationOptional<string>;
+  declare paymentId: string;
+  declare processorRefundId: string;
+  declare amountCents: number;
+  declare reason: string | null;
+  declare createdById: string | null;
+  declare createdAt: CreationOptional<Date>;
+
+  declare createdBy?: NonAttribute<User | null>;
+
+  static initModel(sequelize: Sequelize) {
+    Refund.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        paymentId: { type: DataTypes.UUID, allowNull: false },
+        processorRefundId: { type: DataTypes.STRING(255), allowNull: false, unique: true },
+        amountCents: { type: DataTypes.INTEGER, allowNull: false },
+        reason: { type: DataTypes.TEXT, allowNull: true },
+        createdById: { type: DataTypes.UUID, allowNull: true },
+        createdAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "refunds", underscored: true, updatedAt: false },
+    );
+  }
+}

@@ -1,0 +1,80 @@
+import { expect, test, type Page } from "@playwright/test";
+import { DEMO, listProjectsAs, pageFor, signIn } from "../support/session";
+
+// The local test-mode payments page: the SDK's hosted checkout, served by payments-fake/.
+async function payByCard(page: Page, card: string) {
+  await expect(page.getByRole("region", { name: "Test mode" })).toBeVisible();
+  await page.getByLabel("Card number").fill(card);
+  await page.getByLabel("Expiry date").fill("12 / 34");
+  await page.getByLabel("CVC").fill("123");
+  await page.getByRole("button", { name: /^Pay / }).click();
+}
+
+test("coordinator pays fees: a declined card leaves them unpaid, the succeeding card marks them paid and the receipt arrives; an admin refunds part", async ({ page, browser }) => {
+  test.setTimeout(180_000);
+  await signIn(page, DEMO.coordinator);
+  // A Brackenford project: its AHJ's invented schedule has a size bracket and a share of the valuation.
+  const candidates = (await listProjectsAs(page)) as (Awaited<ReturnType<typeof listProjectsAs>>[number] & { jurisdiction: { name: string } | null })[];
+  const project = candidates.find((p) => p.jurisdiction?.name.startsWith("City of Brackenford") && ["design_checked", "permit_filed", "permit_issued"].includes(p.stage));
+  expect(project).toBeDefined();
+  await page.goto(`/projects/${project!.id}`);
+  await page.getByRole("link", { name: "Fees", exact: true }).click();
+  await expect(page.getByRole("heading", { name: "Fees" })).toBeVisible();
+
+  // Declare the valuation so the percentage line can be worked out.
+  await page.getByLabel("Declared project valuation ($)").fill("24,500");
+  await page.getByRole("button", { name: "Save valuation" }).click();
+  const lines = page.getByTestId("fee-line");
+  await expect(lines.filter({ hasText: "%" }).first()).toBeVisible();
+  await expect(lines.first().getByRole("list", { name: /Working for/ })).toBeVisible();
+  const count = await lines.count();
+  expect(count).toBeGreaterThan(1);
+
+  // A declined card: the page says so, the office sees why, and nothing is paid.
+  await page.getByRole("button", { name: /^Pay \$[\d,.]+ by card$/ }).click();
+  await payByCard(page, "4000 0000 0000 0002");
+  await expect(page.getByRole("alert")).toContainText("declined");
+  await page.getByRole("link", { name: "Cancel and go back" }).click();
+  await expect(page).toHaveURL(/\/fees\?checkout=cancelled$/);
+  await expect(async () => {
+    await page.reload();
+    await expect(page.getByTestId("payment-failure").first()).toContainText("Your card was declined.", { timeout: 2_000 });
+  }).toPass({ timeout: 30_000 });
+  for (const state of await page.getByTestId("fee-line-state").allTextContents()) expect(state).toBe("Unpaid");
+
+  // The succeeding card: back on the fees page, the webhook marks every line paid.
+  await page.getByRole("button", { name: /^Pay \$[\d,.]+ by card$/ }).click();
+  await payByCard(page, "4242 4242 4242 4242");
+  await expect(page).toHaveURL(/\/fees\?checkout=done$/);
+  await expect(async () => {
+    await page.reload();
+    await expect(page.getByTestId("fee-line-state").filter({ hasText: "Paid" })).toHaveCount(count, { timeout: 2_000 });
+  }).toPass({ timeout: 45_000 });
+  const paid = page.getByTestId("payment").filter({ has: page.getByTestId("payment-status").filter({ hasText: /^Paid$/ }) });
+  await expect(paid).toContainText("visa •••• 4242");
+
+  // The receipt reaches the mailbox and the page.
+  const mailbox = await browser.newPage();
+  await mailbox.goto("/mailbox");
+  const receipt = mailbox.getByTestId("caught-message").filter({ hasText: /Receipt R-\d{4}-/ }).filter({ hasText: DEMO.coordinator });
+  await expect(async () => {
+    await mailbox.reload();
+    await expect(receipt.first()).toBeVisible({ timeout: 2_000 });
+  }).toPass({ timeout: 30_000 });
+  await expect(receipt.first().getByRole("list", { name: "Attachments" })).toContainText(/Attached: R-\d{4}-[\w-]+\.pdf \(application\/pdf/);
+  await page.reload();
+  const receiptLink = paid.getByRole("link", { name: /^Receipt R-/ });
+  const response = await page.request.get((await receiptLink.getAttribute("href"))!);
+  expect(response.headers()["content-type"]).toBe("application/pdf");
+
+  // An admin refunds part of it; the refund is recorded and shown.
+  const admin = await pageFor(browser, DEMO.admin);
+  await admin.goto(`/projects/${project!.id}/fees`);
+  const payment = admin.getByTestId("payment").filter({ hasText: "visa •••• 4242" });
+  await payment.getByRole("button", { name: "Refund…" }).click();
+  await payment.getByLabel("Refund amount ($)").fill("10.00");
+  await payment.getByLabel("Reason").fill("Plan review fee waived by the AHJ");
+  await payment.getByRole("button", { name: "Refund", exact: true }).click();
+  await expect(payment.getByTestId("refunds")).toContainText("Refunded $10.00");
+  await expect(payment.getByTestId("payment-status")).toHaveText("Partly refunded");
+});
