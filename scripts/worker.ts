@@ -5,6 +5,7 @@ import PgBoss from "pg-boss";
 import { PACKET_QUEUE, type PacketJob } from "@/lib/server/services/jobs";
 import { deliverDueMail } from "@/lib/server/services/outbox";
 import { generatePacket } from "@/lib/server/services/packet-generation";
+import { failAbandonedPackets } from "@/lib/server/data/packets";
 import { reconcilePendingPayments } from "@/lib/server/data/payments";
 import { issueDueReceipts } from "@/lib/server/services/receipts";
 
@@ -41,8 +42,9 @@ async function deliverMailLoop() {
 void deliverMailLoop();
 console.log("• Mail worker is sending the outbox.");
 
-// Payments: receipts for newly paid payments, and a look at the processor for checkouts whose
-// webhook never came (a crash between charge and webhook), so no payment stays unrecorded.
+// Maintenance: receipts for newly paid payments, a look at the processor for checkouts whose
+// webhook never came (a crash between charge and webhook), so no payment stays unrecorded, and
+// packet generations a worker abandoned marked failed so they can be retried.
 const RECEIPT_INTERVAL_MS = 2_000;
 const RECONCILE_EVERY = 15; // receipt rounds, about 30 s
 let paymentRound: Promise<void> = Promise.resolve();
@@ -52,6 +54,7 @@ async function paymentsLoop() {
   const reconcile = rounds++ % RECONCILE_EVERY === 0 && Boolean(process.env.STRIPE_SECRET_KEY);
   paymentRound = (async () => {
     if (reconcile) await reconcilePendingPayments({ olderThanMs: 60_000 }).catch((error) => console.error("payment reconciliation error", error));
+    if (rounds % RECONCILE_EVERY === 1) await failAbandonedPackets().catch((error) => console.error("packet maintenance error", error));
     await issueDueReceipts().catch((error) => console.error("receipt error", error));
   })();
   await paymentRound;

@@ -1,5 +1,5 @@
 import "server-only";
-import { CommissioningRecord, Organization, Project, User } from "@/models";
+import { CommissioningRecord, Organization, Project, ProjectFile, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { checkCommissioning, commissioningComplete, type CommissioningCheck, type CommissioningCompletion, type CommissioningRecord as RecordFacts } from "@/lib/engineering/commissioning";
 import { AppError, isAppError } from "@/lib/errors";
@@ -11,6 +11,7 @@ import type { CommissioningStatus } from "@/models/commissioning-record";
 import { db } from "../db";
 import { recordAudit } from "./audit";
 import { buildPacketInput } from "./packet-input";
+import { getProjectById } from "./projects";
 
 export type CommissioningDto = {
   projectId: string;
@@ -148,4 +149,17 @@ export async function buildCommissioningDocumentInput({ viewer, projectId, kind 
     recordUpdatedAt: dto.updatedAt,
     completedAt: dto.completedAt,
   };
+}
+
+export type FieldSummaryDto = { status: CommissioningStatus | "not-started"; completedAt: string | null; signedForms: number; photos: number };
+
+/** What the project page shows of the field work, without reviewing the design again. */
+export async function getFieldSummary({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<FieldSummaryDto> {
+  db();
+  await getProjectById({ viewer, projectId });
+  const where = { projectId, organizationId: viewer.organizationId };
+  const record = await CommissioningRecord.findOne({ where, attributes: ["status", "completedAt"] });
+  const signedForms = await ProjectFile.count({ where: { ...where, kind: "signed-completion" } });
+  const photos = await ProjectFile.count({ where: { ...where, kind: "site-photo" } });
+  return { status: record?.status ?? "not-started", completedAt: record?.completedAt?.toISOString() ?? null, signedForms, photos };
 }

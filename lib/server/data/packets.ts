@@ -31,30 +31,35 @@ export type PacketDto = {
   createdAt: string;
 };
 
+// Far longer than any generation takes; a row still in flight after this was abandoned.
+const STALE_AFTER_MS = 10 * 60_000;
+const ABANDONED = { status: "failed" as const, progress: 0, step: "Failed", error: "The generation stopped without finishing (the worker may have restarted). Retry it." };
+const isAbandoned = (p: Packet) => (p.status === "queued" || p.status === "running") && p.updatedAt.getTime() < Date.now() - STALE_AFTER_MS;
+
 function toPacketDto(p: Packet): PacketDto {
+  // Shown as failed as soon as it is stale, even before the worker's maintenance writes it so.
+  const { status, progress, step, error } = isAbandoned(p) ? ABANDONED : p;
   return {
-    id: p.id, kind: p.kind, revision: p.revision, status: p.status, progress: p.progress, step: p.step, changes: p.changes, overrideReason: p.overrideReason,
-    sizeBytes: p.sizeBytes, pageCount: p.pageCount, sha256: p.sha256, error: p.error, requestedBy: p.requestedBy?.name ?? null,
+    id: p.id, kind: p.kind, revision: p.revision, status, progress, step, changes: p.changes, overrideReason: p.overrideReason,
+    sizeBytes: p.sizeBytes, pageCount: p.pageCount, sha256: p.sha256, error, requestedBy: p.requestedBy?.name ?? null,
     readyAt: p.readyAt?.toISOString() ?? null, createdAt: p.createdAt.toISOString(),
   };
 }
 
-// Far longer than any generation takes; a row still in flight after this was abandoned.
-const STALE_AFTER_MS = 10 * 60_000;
-
-/** A worker that stopped mid-job leaves its row in flight; after a while it counts as failed, so it can be retried. */
-async function failAbandoned(projectId: string) {
-  await Packet.update(
-    { status: "failed", progress: 0, step: "Failed", error: "The generation stopped without finishing (the worker may have restarted). Retry it." },
-    { where: { projectId, status: { [Op.in]: ["queued", "running"] }, updatedAt: { [Op.lt]: new Date(Date.now() - STALE_AFTER_MS) } } },
-  );
+/**
+ * A worker that stopped mid-job leaves its row in flight; after a while it counts as failed, so it can be
+ * retried. The worker runs this for every project now and then; asking for a packet runs it for its project.
+ */
+export async function failAbandonedPackets({ projectId }: { projectId?: string } = {}): Promise<number> {
+  db();
+  const [count] = await Packet.update(ABANDONED, { where: { ...(projectId ? { projectId } : {}), status: { [Op.in]: ["queued", "running"] }, updatedAt: { [Op.lt]: new Date(Date.now() - STALE_AFTER_MS) } } });
+  return count;
 }
 
 /** Every generation of the project's packets, newest first. */
 export async function listPackets({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<PacketDto[]> {
   db();
   await getProjectById({ viewer, projectId });
-  await failAbandoned(projectId);
   const rows = await Packet.findAll({ where: { projectId, organizationId: viewer.organizationId }, include: [{ model: User, as: "requestedBy", attributes: ["name"] }], order: [["revision", "DESC"], ["createdAt", "DESC"]] });
   return rows.map(toPacketDto);
 }
@@ -69,7 +74,7 @@ export async function requestPacket({ viewer, projectId, kind, overrideReason }:
   const sequelize = db();
   const project = await getProjectById({ viewer, projectId });
   if (!can(viewer, "project:edit", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null })) throw new AppError("FORBIDDEN", "Your role cannot generate packets.");
-  await failAbandoned(projectId);
+  await failAbandonedPackets({ projectId });
   const base = await buildPacketInput({ viewer, projectId, kind });
   const failing = base.review.summary.status === "fail";
   const reason = overrideReason?.trim() || null;
@@ -121,8 +126,10 @@ export async function retryPacket({ viewer, packetId }: { viewer: Viewer; packet
   db();
   const packet = await findVisiblePacket(viewer, packetId);
   if (!can(viewer, "project:edit")) throw new AppError("FORBIDDEN", "Your role cannot generate packets.");
-  if (packet.status !== "failed") throw new AppError("CONFLICT", "Only a failed generation can be retried.");
-  await packet.update({ status: "queued", progress: 0, step: "Waiting for a worker", error: null });
+  if (packet.status !== "failed" && !isAbandoned(packet)) throw new AppError("CONFLICT", "Only a failed generation can be retried.");
+  packet.set({ status: "queued", progress: 0, step: "Waiting for a worker", error: null });
+  packet.changed("updatedAt", true); // an abandoned row may already hold these values; the new time makes it fresh
+  await packet.save();
   await enqueueOrFail(packet);
   return toPacketDto(packet);
 }

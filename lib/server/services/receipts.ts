@@ -27,13 +27,12 @@ export async function issueDueReceipts({ limit = 10 }: { limit?: number } = {}):
     const done = await db().transaction(async (transaction) => {
       const payment = await Payment.findOne({ where: { status: { [Op.in]: RECEIPTED }, receiptKey: null }, order: [["paidAt", "ASC"]], lock: transaction.LOCK.UPDATE, skipLocked: true, transaction });
       if (!payment) return false;
-      const [project, organization, payer, lines, refunds] = await Promise.all([
-        Project.findByPk(payment.projectId, { transaction }),
-        Organization.findByPk(payment.organizationId, { transaction }),
-        payment.createdById ? User.findByPk(payment.createdById, { transaction }) : null,
-        PaymentLine.findAll({ where: { paymentId: payment.id }, transaction }),
-        Refund.findAll({ where: { paymentId: payment.id }, order: [["createdAt", "ASC"]], transaction }),
-      ]);
+      // One after another: a transaction has one connection, which runs one query at a time.
+      const project = await Project.findByPk(payment.projectId, { transaction });
+      const organization = await Organization.findByPk(payment.organizationId, { transaction });
+      const payer = payment.createdById ? await User.findByPk(payment.createdById, { transaction }) : null;
+      const lines = await PaymentLine.findAll({ where: { paymentId: payment.id }, transaction });
+      const refunds = await Refund.findAll({ where: { paymentId: payment.id }, order: [["createdAt", "ASC"]], transaction });
       const receiptNumber = receiptNumberFor(payment, project!.number);
       const input: ReceiptInput = {
         receiptNumber,

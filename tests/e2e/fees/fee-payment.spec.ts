@@ -78,3 +78,25 @@ test("coordinator pays fees: a declined card leaves them unpaid, the succeeding 
   await expect(payment.getByTestId("refunds")).toContainText("Refunded $10.00");
   await expect(payment.getByTestId("payment-status")).toHaveText("Partly refunded");
 });
+
+test("coordinator pays with the card that asks for extra authentication, completes it, and the fees are paid", async ({ page }) => {
+  test.setTimeout(120_000);
+  await signIn(page, DEMO.coordinator);
+  // A Quillan Springs project: its invented schedule needs no valuation.
+  const candidates = (await listProjectsAs(page)) as (Awaited<ReturnType<typeof listProjectsAs>>[number] & { jurisdiction: { name: string } | null })[];
+  const project = candidates.find((p) => p.jurisdiction?.name.startsWith("Town of Quillan Springs") && p.stage !== "draft");
+  expect(project).toBeDefined();
+  await page.goto(`/projects/${project!.id}/fees`);
+  const lines = page.getByTestId("fee-line");
+  const count = await lines.count();
+  expect(count).toBeGreaterThan(0);
+
+  await page.getByRole("button", { name: /^Pay \$[\d,.]+ by card$/ }).click();
+  await payByCard(page, "4000 0025 0000 3155");
+  await page.getByRole("button", { name: "Complete authentication" }).click();
+  await expect(page).toHaveURL(/\/fees\?checkout=done$/);
+  await expect(async () => {
+    await page.reload();
+    await expect(page.getByTestId("fee-line-state").filter({ hasText: "Paid" })).toHaveCount(count, { timeout: 2_000 });
+  }).toPass({ timeout: 45_000 });
+});

@@ -19,7 +19,7 @@ test("installer on a phone records commissioning, corrects a failing reading, up
   const project = mine[0];
 
   await phone.goto(`/projects/${project.id}`);
-  await phone.getByRole("link", { name: "Field record" }).click();
+  await phone.getByRole("link", { name: "Field record", exact: true }).click();
   await expect(phone.getByRole("heading", { name: "Field record" })).toBeVisible();
   await expect(phone.getByTestId("field-cautions")).toContainText("Inverter capacitors hold a charge after shutdown");
   // Nothing spills sideways on a phone.
@@ -97,4 +97,13 @@ test("installer on a phone records commissioning, corrects a failing reading, up
   expect(response.headers()["content-type"]).toBe("application/pdf");
   expect(response.headers()["content-disposition"]).toMatch(/^attachment;/);
   expect(response.headers()["x-content-type-options"]).toBe("nosniff");
+
+  // The project page shows the field work done, and the coordinator moves the project on.
+  await office.goto(`/projects/${project.id}`);
+  const field = office.getByTestId("field-status");
+  await expect(field).toContainText("Commissioning: complete");
+  await expect(field).toContainText("Signed completion form: received");
+  await office.getByLabel("Move to stage").selectOption({ label: "Commissioned" });
+  await office.getByRole("button", { name: "Change stage" }).click();
+  await expect(office.getByRole("region", { name: "Current stage" })).toContainText("Commissioned");
 });

@@ -4,6 +4,7 @@ import { CheckStatusChip } from "@/components/review/check-status";
 import { StageBadge } from "@/components/ui/stage-badge";
 import { can } from "@/lib/domain/permissions";
 import { requireUser } from "@/lib/server/auth";
+import { getFieldSummary } from "@/lib/server/data/commissioning";
 import { getDesignStatus } from "@/lib/server/data/designs";
 import { listStageChanges } from "@/lib/server/data/projects";
 import { loadProjectOr404 } from "@/lib/server/pages";
@@ -24,7 +25,7 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
 export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
-  const [timeline, design] = await Promise.all([listStageChanges({ viewer, projectId: project.id }), getDesignStatus({ viewer, projectId: project.id })]);
+  const [timeline, design, field] = await Promise.all([listStageChanges({ viewer, projectId: project.id }), getDesignStatus({ viewer, projectId: project.id }), getFieldSummary({ viewer, projectId: project.id })]);
   const amps = (v: number | null) => (v === null ? null : <span className="measure">{v} A</span>);
   return (
     <div className="space-y-6">
@@ -84,6 +85,23 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         {design ? <span className="text-xs text-ink-faint">revision {design.revision}</span> : null}
         <Link href={`/projects/${project.id}/design`} className="ml-auto text-sm">
           Open the design
+        </Link>
+      </section>
+
+      <section className="panel flex flex-wrap items-center gap-x-4 gap-y-2" aria-label="Field work" data-testid="field-status">
+        <h2 className="text-base">Field work</h2>
+        <span className="text-sm text-ink-soft">
+          Commissioning:{" "}
+          <strong>{field.status === "complete" ? `complete${field.completedAt ? ` (${new Date(field.completedAt).toLocaleDateString("en-US", { dateStyle: "medium" })})` : ""}` : field.status === "open" ? "started, not complete" : "not started"}</strong>
+        </span>
+        <span className="text-sm text-ink-soft">
+          Signed completion form: <strong>{field.signedForms ? "received" : "not yet"}</strong>
+        </span>
+        <span className="measure text-sm text-ink-faint">
+          {field.photos} site photo{field.photos === 1 ? "" : "s"}
+        </span>
+        <Link href={`/projects/${project.id}/field`} className="ml-auto text-sm">
+          Open the field record
         </Link>
       </section>
 

@@ -5,7 +5,7 @@ import { AppError } from "@/lib/errors";
 import { seedDemoCatalog } from "@/lib/seed/demo-catalog";
 import { DESIGN_MODELS, demoDesign, type CatalogIds } from "@/lib/seed/demo-designs";
 import { saveDesignDraft } from "@/lib/server/data/designs";
-import { getPacketFile, listPackets, requestPacket, retryPacket } from "@/lib/server/data/packets";
+import { failAbandonedPackets, getPacketFile, listPackets, requestPacket, retryPacket } from "@/lib/server/data/packets";
 import { db } from "@/lib/server/db";
 import { generatePacket } from "@/lib/server/services/packet-generation";
 import { getObjectBytes } from "@/lib/server/services/storage";
@@ -106,10 +106,23 @@ describe("packets", () => {
     const project = await projectWithDesign();
     const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" });
     await db().query(`update packets set status = 'running', updated_at = now() - interval '11 minutes' where id = :id`, { replacements: { id: queued.id } });
+    // Shown as failed at once; listing never writes, the worker's maintenance does.
     const [row] = await listPackets({ viewer: org.viewers.coordinator, projectId: project.id });
     expect(row).toMatchObject({ status: "failed" });
     expect(row.error).toMatch(/Retry/);
+    expect((await Packet.findByPk(queued.id))!.status).toBe("running");
+    expect(await failAbandonedPackets()).toBeGreaterThanOrEqual(1);
+    expect((await Packet.findByPk(queued.id))!.status).toBe("failed");
     expect((await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" })).revision).toBe(1);
+  });
+
+  it("retries an abandoned generation even before maintenance marked it failed", async () => {
+    const project = await projectWithDesign();
+    const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" });
+    await db().query(`update packets set status = 'queued', updated_at = now() - interval '11 minutes' where id = :id`, { replacements: { id: queued.id } });
+    const retried = await retryPacket({ viewer: org.viewers.coordinator, packetId: queued.id });
+    expect(retried.status).toBe("queued");
+    expect((await listPackets({ viewer: org.viewers.coordinator, projectId: project.id }))[0].status).toBe("queued");
   });
 
   it("keeps packets inside the organization and away from installers and unfinished designs", async () => {
