@@ -8,3 +8,16 @@ export function receiptEmail({ receiptNumber, projectNumber, siteAddress, total,
   });
   return { subject, ...body };
 }
+
+/** To whoever paid, when an admin returns some or all of a payment. */
+export function refundEmail({ receiptNumber, projectNumber, siteAddress, refunded, remaining, reason }: { receiptNumber: string | null; projectNumber: number; siteAddress: string; refunded: string; remaining: string; reason: string }) {
+  const subject = `Refund of ${refunded} for project ${projectNumber}`;
+  const body = renderEmail({
+    paragraphs: [
+      `${refunded} of the fees paid for the PV system at ${siteAddress}${receiptNumber ? ` (receipt ${receiptNumber})` : ""} is being returned to the card that paid.`,
+      `Reason: ${reason}`,
+      `Still paid after this refund: ${remaining}. Card refunds usually take several business days to appear.`,
+    ],
+  });
+  return { subject, ...body };
+}

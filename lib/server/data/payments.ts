@@ -1,12 +1,14 @@
 import "server-only";
 import { Op, type Transaction } from "sequelize";
 import type Stripe from "stripe";
-import { Payment, PaymentLine, Refund } from "@/models";
+import { Payment, PaymentLine, Project, Refund, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import { formatUsd } from "@/lib/fees";
+import { refundEmail } from "@/templates/email/payment-receipt";
 import { db } from "../db";
 import { env } from "../env";
+import { enqueueMail } from "../services/outbox";
 import { stripe } from "../services/payments";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
@@ -95,6 +97,13 @@ export async function refundPayment({ viewer, paymentId, amountCents, reason }: 
   await sequelize.transaction(async (transaction) => {
     await recordRefund(payment.id, refund, { reason, createdById: viewer.id }, transaction);
     await recordAudit({ viewer, action: "payment.refunded", entityType: "project", entityId: payment.projectId, changes: { refund: { before: null, after: `${formatUsd(amountCents)}: ${reason}` } } }, { transaction });
+    const payer = payment.createdById ? await User.findByPk(payment.createdById, { transaction }) : null;
+    const project = await Project.findByPk(payment.projectId, { transaction });
+    const after = await Payment.findByPk(payment.id, { transaction });
+    if (payer?.email && project && after) {
+      const mail = refundEmail({ receiptNumber: payment.receiptNumber, projectNumber: project.number, siteAddress: `${project.street}, ${project.city}, ${project.state} ${project.postalCode}`, refunded: formatUsd(amountCents), remaining: formatUsd(after.amountCents - after.refundedCents), reason });
+      await enqueueMail({ to: payer.email, ...mail, organizationId: payment.organizationId }, { transaction });
+    }
   });
   return toPaymentDto((await Payment.findByPk(payment.id, { include: PAYMENT_INCLUDE }))!);
 }

@@ -1,44 +1,38 @@
 "use client";
 
-import { useState, useTransition } from "react";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm, useWatch } from "react-hook-form";
+import { useActionSubmit } from "@/components/forms/use-action-submit";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { SHARE_LINK_DAYS } from "@/lib/schemas/share-link";
+import { CreateShareLinkInput, SHARE_LINK_DAYS } from "@/lib/schemas/share-link";
 import { createShareLinkAction } from "../share-actions";
 
 export type ShareableRevision = { packetId: string; label: string };
 
+type Values = { packetIds: string[]; recipientEmail: string; expiresInDays: string; note: string };
+const EMPTY: Values = { packetIds: [], recipientEmail: "", expiresInDays: String(SHARE_LINK_DAYS.default), note: "" };
+
 /** Chooses ready revisions and makes a link; the link is shown here once and never again. */
 export function ShareLinkForm({ projectId, revisions, onCreated }: { projectId: string; revisions: ShareableRevision[]; onCreated: () => void }) {
-  const [chosen, setChosen] = useState<string[]>([]);
-  const [recipientEmail, setRecipientEmail] = useState("");
-  const [expiresInDays, setExpiresInDays] = useState(String(SHARE_LINK_DAYS.default));
-  const [note, setNote] = useState("");
-  const [errors, setErrors] = useState<Record<string, string[]>>({});
-  const [message, setMessage] = useState<string>();
+  // The shared schema checks the form here and again in the action; a refusal keeps what was typed.
+  const form = useForm<Values, unknown, CreateShareLinkInput>({ resolver: zodResolver(CreateShareLinkInput) as never, defaultValues: EMPTY });
+  const chosen = useWatch({ control: form.control, name: "packetIds" }) ?? [];
   const [created, setCreated] = useState<{ url: string; recipient: string | null }>();
-  const [pending, startTransition] = useTransition();
-
-  const toggle = (id: string) => setChosen((c) => (c.includes(id) ? c.filter((x) => x !== id) : [...c, id]));
-  const submit = (event: React.FormEvent) => {
-    event.preventDefault();
-    startTransition(async () => {
-      setMessage(undefined);
-      const result = await createShareLinkAction({ projectId, packetIds: chosen, recipientEmail, expiresInDays: Number(expiresInDays), note });
-      if (!result.ok) {
-        setErrors(result.fieldErrors ?? {});
-        setMessage(result.message);
-        return;
-      }
-      setErrors({});
-      setCreated({ url: result.data.url, recipient: result.data.link.recipientEmail });
-      setChosen([]);
-      setNote("");
-      setRecipientEmail("");
+  const { submit, message } = useActionSubmit(
+    form,
+    (raw) => createShareLinkAction({ projectId, ...raw, expiresInDays: Number(raw.expiresInDays) }),
+    (data) => {
+      setCreated({ url: data.url, recipient: data.link.recipientEmail });
+      form.reset({ ...EMPTY, expiresInDays: form.getValues("expiresInDays") });
       onCreated();
-    });
-  };
+    },
+  );
+  const errors = form.formState.errors;
+  // A list of checkboxes kept as one array field, so a single revision still sends a list.
+  const toggle = (id: string) => form.setValue("packetIds", chosen.includes(id) ? chosen.filter((x) => x !== id) : [...chosen, id], { shouldValidate: form.formState.isSubmitted });
 
   if (revisions.length === 0) return <p className="text-sm text-ink-faint">Generate a packet first: only ready revisions can be shared.</p>;
   return (
@@ -51,22 +45,22 @@ export function ShareLinkForm({ projectId, revisions, onCreated }: { projectId: 
             {r.label}
           </label>
         ))}
-        {errors.packetIds ? <p className="text-sm text-result-fail" role="alert">{errors.packetIds[0]}</p> : null}
+        {errors.packetIds ? <p className="text-sm text-result-fail" role="alert">{errors.packetIds.message}</p> : null}
       </fieldset>
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field label="Inspector's e-mail (optional)" htmlFor="share-recipient" error={errors.recipientEmail?.[0]} hint="We e-mail the link when you fill this in.">
-          <input id="share-recipient" className="input" type="email" value={recipientEmail} onChange={(e) => setRecipientEmail(e.target.value)} />
+        <Field label="Inspector's e-mail (optional)" htmlFor="share-recipient" error={errors.recipientEmail?.message} hint="We e-mail the link when you fill this in.">
+          <input id="share-recipient" className="input" type="email" {...form.register("recipientEmail")} />
         </Field>
-        <Field label="Days until the link expires" htmlFor="share-days" error={errors.expiresInDays?.[0]} hint={`${SHARE_LINK_DAYS.min} to ${SHARE_LINK_DAYS.max} days`}>
-          <input id="share-days" className="input" type="number" min={SHARE_LINK_DAYS.min} max={SHARE_LINK_DAYS.max} value={expiresInDays} onChange={(e) => setExpiresInDays(e.target.value)} />
+        <Field label="Days until the link expires" htmlFor="share-days" error={errors.expiresInDays?.message} hint={`${SHARE_LINK_DAYS.min} to ${SHARE_LINK_DAYS.max} days`}>
+          <input id="share-days" className="input" type="number" min={SHARE_LINK_DAYS.min} max={SHARE_LINK_DAYS.max} {...form.register("expiresInDays")} />
         </Field>
       </div>
-      <Field label="Note for the inspector (optional)" htmlFor="share-note" error={errors.note?.[0]}>
-        <textarea id="share-note" className="input" rows={2} maxLength={1000} value={note} onChange={(e) => setNote(e.target.value)} />
+      <Field label="Note for the inspector (optional)" htmlFor="share-note" error={errors.note?.message}>
+        <textarea id="share-note" className="input" rows={2} maxLength={1000} {...form.register("note")} />
       </Field>
       <FormMessage kind="error">{message}</FormMessage>
-      <Button type="submit" disabled={pending || chosen.length === 0}>
-        {pending ? "Creating…" : "Create link"}
+      <Button type="submit" disabled={form.formState.isSubmitting || chosen.length === 0}>
+        {form.formState.isSubmitting ? "Creating…" : "Create link"}
       </Button>
       {created ? (
         <div className="space-y-1 rounded border border-copper/40 p-3" data-testid="new-share-link">
