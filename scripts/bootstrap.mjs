@@ -31,7 +31,7 @@ export function ensureNodeModules(root) {
   writeFileSync(stamp, want + "\n");
 }
 
-function aptInstall(packages, why) {
+export function aptInstall(packages, why) {
   if (!isRoot) {
     fail(`${why}\n  Install it once with:\n\n    sudo apt-get update && sudo apt-get install -y ${packages.join(" ")}\n\n  then run the command again.`);
   }

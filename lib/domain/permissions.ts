@@ -25,10 +25,11 @@ export type Permission =
   | "api-tokens:manage"
   | "field:record"
   | "fees:pay"
-  | "fees:refund";
+  | "fees:refund"
+  | "organization:edit";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
-  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage", "field:record", "fees:pay", "fees:refund"],
+  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage", "field:record", "fees:pay", "fees:refund", "organization:edit"],
   coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "mailbox:view", "design:review", "field:record", "fees:pay"],
   installer: ["project:view", "design:review", "field:record"],
 };

@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { StageBadge } from "@/components/ui/stage-badge";
-import { STAGES, STAGE_LABELS } from "@/lib/domain/stages";
+import { STAGES, STAGE_LABELS, stageIndex } from "@/lib/domain/stages";
 import type { ProjectDto } from "@/lib/server/data/projects";
 
 type Page = { items: ProjectDto[]; total: number; page: number; pageSize: number; pageCount: number };
@@ -152,6 +152,12 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
               <span className="measure text-xs text-ink-faint">{p.daysInStage} d</span>
             </div>
             <p className="text-xs text-ink-faint">{p.nextAction}</p>
+            {/* On site the crew goes straight to the readings and uploads. */}
+            {stageIndex(p.stage) >= stageIndex("permit_issued") ? (
+              <Link href={`/projects/${p.id}/field`} className="inline-block pt-1 text-sm">
+                Field record
+              </Link>
+            ) : null}
           </li>
         ))}
       </ul>

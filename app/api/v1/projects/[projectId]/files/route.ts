@@ -13,8 +13,11 @@ export const GET = withAuth<{ projectId: string }>(async (_request, { viewer, pa
 // POST /api/v1/projects/:projectId/files – multipart: kind (signed-completion | site-photo) and one file
 export const POST = withAuth<{ projectId: string }>(
   async (request, { viewer, params }) => {
-    const declared = Number(request.headers.get("content-length") ?? 0);
-    if (declared > MAX_UPLOAD_BYTES + FORM_OVERHEAD_BYTES) throw new AppError("TOO_LARGE", tooLargeMessage(declared));
+    // The body is read whole, so its size must be known and bounded before reading it.
+    const length = request.headers.get("content-length");
+    if (length === null) throw new AppError("INVALID_INPUT", "Send the upload with a Content-Length header.");
+    const declared = Number(length);
+    if (!Number.isFinite(declared) || declared > MAX_UPLOAD_BYTES + FORM_OVERHEAD_BYTES) throw new AppError("TOO_LARGE", tooLargeMessage(declared));
     const form = await request.formData().catch(() => {
       throw new AppError("INVALID_INPUT", "Send the file as multipart/form-data with the fields kind and file.");
     });
