@@ -5,6 +5,7 @@ export class Organization extends Model<InferAttributes<Organization>, InferCrea
   declare name: string;
   declare licenseNumber: string | null;
   declare phone: string | null;
+  declare timeZone: CreationOptional<string>; // IANA name, one of lib/domain/time-zones
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -15,6 +16,7 @@ export class Organization extends Model<InferAttributes<Organization>, InferCrea
         name: { type: DataTypes.STRING(200), allowNull: false },
         licenseNumber: { type: DataTypes.STRING(60), allowNull: true },
         phone: { type: DataTypes.STRING(40), allowNull: true },
+        timeZone: { type: DataTypes.STRING(60), allowNull: false, defaultValue: "America/New_York" },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -2,7 +2,7 @@
 export type ReceiptInput = {
   receiptNumber: string; // e.g. "R-2026-000123"
   issuedAt: string; // ISO date-time of the payment
-  organization: { name: string; phone: string | null };
+  organization: { name: string; phone: string | null; timeZone: string }; // IANA zone the dates print in
   project: { number: number; customerName: string; address: string };
   paidBy: { name: string; email: string };
   lines: { name: string; authority: string; arithmetic: string[]; amountCents: number }[];

@@ -10,7 +10,7 @@ export type CommissioningDocumentKind = (typeof COMMISSIONING_DOCUMENT_KINDS)[nu
 export type CommissioningDocumentInput = {
   kind: CommissioningDocumentKind;
   generatedAt: string; // ISO date-time
-  organization: { name: string; licenseNumber: string | null; phone: string | null };
+  organization: { name: string; licenseNumber: string | null; phone: string | null; timeZone: string }; // IANA zone the times print in
   project: {
     number: number;
     customerName: string;

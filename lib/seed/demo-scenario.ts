@@ -3,8 +3,8 @@
 import type { NecEdition } from "@/lib/domain/roles";
 
 export const ORGANIZATIONS = {
-  main: { name: "Quillmoor Solar Electric", licenseNumber: "EC-40718 (demo)", phone: "(555) 014-2210" },
-  other: { name: "Harrowgate Sunworks", licenseNumber: "EC-51302 (demo)", phone: "(555) 019-8834" },
+  main: { name: "Quillmoor Solar Electric", licenseNumber: "EC-40718 (demo)", phone: "(555) 014-2210", timeZone: "America/Denver" },
+  other: { name: "Harrowgate Sunworks", licenseNumber: "EC-51302 (demo)", phone: "(555) 019-8834", timeZone: "America/Denver" },
 } as const;
 
 export const JURISDICTIONS: { key: string; name: string; state: string; necEdition: NecEdition; recordLowTempC: number; highDesignTempC: number; notes: string }[] = [

@@ -1,3 +1,4 @@
+import { localDateTime } from "@/lib/domain/time-zones";
 import {
   DEFAULT_SHUTDOWN_V_PER_DEVICE,
   FIRST_POWER_MAX_FRACTION,
@@ -35,10 +36,9 @@ export const COMMISSIONING_BAND_CAUTION =
   "Caution: PV conductors are energized whenever light reaches the modules, and inverter capacitors hold a charge after shutdown. Qualified persons only; follow the manufacturers' instructions " +
   "and the NEC edition and local amendments the AHJ enforces.";
 
-/** An ISO time as a date and 24-hour time in UTC, e.g. "2026-11-20 16:30 UTC". */
-export function documentTime(iso: string): string {
-  const d = new Date(iso);
-  return `${packetDate(iso)} ${String(d.getUTCHours()).padStart(2, "0")}:${String(d.getUTCMinutes()).padStart(2, "0")} UTC`;
+/** An ISO time as a local date and 24-hour time in the organization's zone, e.g. "2026-11-20 09:30 MST". */
+export function documentTime(iso: string, timeZone: string): string {
+  return localDateTime(iso, timeZone);
 }
 
 export function commissioningProjectLabel(input: CommissioningDocumentInput): string {

@@ -104,16 +104,16 @@ export function CommissioningReport({ input }: { input: CommissioningDocumentInp
         <CompletionPanel input={input} />
         <View style={s.row}>
           <Field label="Readings by" value={input.installer ? `${input.installer.name} (${input.installer.email})` : "Not assigned"} style={s.wide} />
-          <Field label="Last recorded" value={input.recordUpdatedAt ? documentTime(input.recordUpdatedAt) : "Nothing recorded yet"} style={s.cell} />
-          <Field label="Marked complete" value={input.completedAt ? documentTime(input.completedAt) : "Not yet"} style={s.cell} />
+          <Field label="Last recorded" value={input.recordUpdatedAt ? documentTime(input.recordUpdatedAt, input.organization.timeZone) : "Nothing recorded yet"} style={s.cell} />
+          <Field label="Marked complete" value={input.completedAt ? documentTime(input.completedAt, input.organization.timeZone) : "Not yet"} style={s.cell} />
         </View>
       </Section>
       <Text style={base.sectionTitle} minPresenceAhead={90}>
         3  Readings
       </Text>
       <Text style={s.legend}>
-        Pass: within what was expected. Review: recorded outside the usual range, or not recorded yet. Fail: must be put right before the record can be completed. Times are UTC except the
-        first power time, which is local as entered.
+        Pass: within what was expected. Review: recorded outside the usual range, or not recorded yet. Fail: must be put right before the record can be completed. Times are local to the
+        organization's time zone; the first power time is as entered on site.
       </Text>
       <View>
         <View fixed>

@@ -49,7 +49,7 @@ export function CompletionCertificate({ input }: { input: CommissioningDocumentI
   const summary = completionSummary(input);
   const org = input.organization;
   const footnote = summary.complete
-    ? `Marked complete ${input.completedAt ? documentTime(input.completedAt) : "(time not recorded)"}; the readings are in the commissioning report.`
+    ? `Marked complete ${input.completedAt ? documentTime(input.completedAt, input.organization.timeZone) : "(time not recorded)"}; the readings are in the commissioning report.`
     : "Do not sign until every reading is recorded and none fails; the commissioning report says what to do for each.";
   return (
     <CommissioningDocument input={input} subtitle={`Grid-tied PV system · Project ${p.number}`} documentLine="For signature and upload" bandCaution={false}>

@@ -67,7 +67,7 @@ export function PaymentReceipt({ input }: { input: ReceiptInput }) {
     <Document title={`Payment receipt ${input.receiptNumber}, project ${p.number}`} author={input.organization.name} creator="Ohmstead" producer="Ohmstead">
       <LetterPage
         title="Payment receipt"
-        subtitle={`Receipt ${input.receiptNumber} · ${receiptDate(input.issuedAt)}`}
+        subtitle={`Receipt ${input.receiptNumber} · ${receiptDate(input.issuedAt, input.organization.timeZone)}`}
         footer={({ pageNumber, totalPages }) => (
           <View style={s.footer}>
             <Text style={s.footerText}>{footerText}</Text>
@@ -79,7 +79,7 @@ export function PaymentReceipt({ input }: { input: ReceiptInput }) {
           <View style={s.parties}>
             <View style={s.row}>
               <Field label="Receipt number" value={input.receiptNumber} mono style={s.cell} />
-              <Field label="Date paid" value={receiptDate(input.issuedAt)} style={s.cell} />
+              <Field label="Date paid" value={receiptDate(input.issuedAt, input.organization.timeZone)} style={s.cell} />
             </View>
             <View style={s.row}>
               <Field label="Organization" value={[orNotRecorded(input.organization.name), input.organization.phone?.trim()].filter(Boolean).join("\n")} style={s.cell} />
@@ -114,7 +114,7 @@ export function PaymentReceipt({ input }: { input: ReceiptInput }) {
         <Section title="Payment">
           <View style={s.row}>
             <Field label="Method" value={methodText(input.method)} style={s.cell} />
-            <Field label="Paid at" value={receiptDateTime(input.issuedAt)} style={s.cell} />
+            <Field label="Paid at" value={receiptDateTime(input.issuedAt, input.organization.timeZone)} style={s.cell} />
           </View>
           <Field label="Processor reference" value={input.processorReference} mono />
         </Section>
@@ -124,7 +124,7 @@ export function PaymentReceipt({ input }: { input: ReceiptInput }) {
             <Section title="Refunds">
               <Table
                 columns={[
-                  { header: "Date", width: 1.4, render: (r: RefundLine) => receiptDate(r.createdAt) },
+                  { header: "Date", width: 1.4, render: (r: RefundLine) => receiptDate(r.createdAt, input.organization.timeZone) },
                   { header: "Reason", width: 3.8, render: (r: RefundLine) => refundReason(r.reason) },
                   { header: "Amount", width: 1.2, render: (r: RefundLine) => deduction(r.amountCents), mono: true, align: "right" },
                 ]}

@@ -1,20 +1,18 @@
+import { localDateTime, localLongDate } from "@/lib/domain/time-zones";
 import { formatUsd } from "@/lib/fees";
 import type { ReceiptInput } from "@/lib/fees/receipt-input";
 
 // The words and figures the payment receipt prints, computed from the receipt input so the
 // template only lays them out and the tests can check the same strings.
 
-const LONG_DATE = new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC" });
-
-/** "December 3, 2026" (UTC). */
-export function receiptDate(iso: string): string {
-  return LONG_DATE.format(new Date(iso));
+/** "December 3, 2026" in the organization's zone. */
+export function receiptDate(iso: string, timeZone: string): string {
+  return localLongDate(iso, timeZone);
 }
 
-/** "December 3, 2026, 18:05 UTC". */
-export function receiptDateTime(iso: string): string {
-  const d = new Date(iso);
-  return `${receiptDate(iso)}, ${String(d.getUTCHours()).padStart(2, "0")}:${String(d.getUTCMinutes()).padStart(2, "0")} UTC`;
+/** "December 3, 2026, 11:05 MST" in the organization's zone. */
+export function receiptDateTime(iso: string, timeZone: string): string {
+  return `${receiptDate(iso, timeZone)}, ${localDateTime(iso, timeZone).split(" ").slice(1).join(" ")}`;
 }
 
 /** Amounts as the receipt prints them: "$1,234.50". */

@@ -60,7 +60,7 @@ export function commissioningFixture({
   return {
     kind,
     generatedAt: "2026-12-03T18:05:00.000Z",
-    organization: { name: "Quillmoor Solar Electric", licenseNumber: "EC-40718 (demo)", phone: "(555) 014-2210" },
+    organization: { name: "Quillmoor Solar Electric", licenseNumber: "EC-40718 (demo)", phone: "(555) 014-2210", timeZone: "America/Denver" },
     project: {
       number: 1042,
       customerName: "Imogen Halvorsen",

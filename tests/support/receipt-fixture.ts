@@ -38,7 +38,7 @@ export function receiptFixture({ refunds = "none", lines = RECEIPT_LINES }: { re
   return {
     receiptNumber: "R-2026-1042-3F9A2C",
     issuedAt: "2026-12-03T18:05:00.000Z",
-    organization: { name: "Quillmoor Solar Electric", phone: "(555) 014-2210" },
+    organization: { name: "Quillmoor Solar Electric", phone: "(555) 014-2210", timeZone: "America/Denver" },
     project: { number: 1042, customerName: "Imogen Halvorsen", address: "120 Larkin Mill Rd, Brackenford, CO 80913" },
     paidBy: { name: "Dana Okafor", email: "dana@quillmoor.example" },
     lines,

@@ -1,6 +1,7 @@
 import "server-only";
 import { CommissioningRecord, Organization, Project, ProjectFile, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
+import { DEFAULT_TIME_ZONE } from "@/lib/domain/time-zones";
 import { checkCommissioning, commissioningComplete, type CommissioningCheck, type CommissioningCompletion, type CommissioningRecord as RecordFacts } from "@/lib/engineering/commissioning";
 import { AppError, isAppError } from "@/lib/errors";
 import { commissioningFacts, emptyReadings, toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
@@ -124,7 +125,7 @@ export async function buildCommissioningDocumentInput({ viewer, projectId, kind 
   return {
     kind,
     generatedAt: new Date().toISOString(),
-    organization: { name: organization?.name ?? "", licenseNumber: organization?.licenseNumber ?? null, phone: organization?.phone ?? null },
+    organization: { name: organization?.name ?? "", licenseNumber: organization?.licenseNumber ?? null, phone: organization?.phone ?? null, timeZone: organization?.timeZone ?? DEFAULT_TIME_ZONE },
     project: {
       number: input.project.number,
       customerName: input.project.customerName,

@@ -1,6 +1,7 @@
 import "server-only";
 import { Op } from "sequelize";
 import { Organization, Payment, PaymentLine, Project, Refund, User } from "@/models";
+import { DEFAULT_TIME_ZONE } from "@/lib/domain/time-zones";
 import type { ReceiptInput } from "@/lib/fees/receipt-input";
 import { renderReceiptPdf } from "@/lib/fees/render-receipt";
 import { formatUsd } from "@/lib/fees";
@@ -37,7 +38,7 @@ export async function issueDueReceipts({ limit = 10 }: { limit?: number } = {}):
       const input: ReceiptInput = {
         receiptNumber,
         issuedAt: (payment.paidAt ?? new Date()).toISOString(),
-        organization: { name: organization?.name ?? "", phone: organization?.phone ?? null },
+        organization: { name: organization?.name ?? "", phone: organization?.phone ?? null, timeZone: organization?.timeZone ?? DEFAULT_TIME_ZONE },
         project: { number: project!.number, customerName: project!.customerName, address: `${project!.street}, ${project!.city}, ${project!.state} ${project!.postalCode}` },
         paidBy: { name: payer?.name ?? "", email: payer?.email ?? "" },
         lines: lines.map((l) => ({ name: l.name, authority: l.authority, arithmetic: l.arithmetic, amountCents: l.amountCents })),

@@ -51,7 +51,7 @@ describe("payment receipt", () => {
   test("the payment method and the processor's reference", () => {
     const text = paid.pages[0]!;
     expect(text).toContain("METHOD Corvel •••• 4417");
-    expect(text).toContain("PAID AT December 3, 2026, 18:05 UTC");
+    expect(text).toContain("PAID AT December 3, 2026, 11:05 MST");
     expect(text).toContain("PROCESSOR REFERENCE pay_0000demo7Q2k9LmX4v");
   });
 
@@ -83,7 +83,7 @@ describe("payment receipt", () => {
   });
 
   test("a payer, phone or card the records lack prints as such", async () => {
-    const input = { ...receiptFixture(), organization: { name: "Quillmoor Solar Electric", phone: null }, paidBy: { name: "", email: "" }, method: { brand: null, last4: null } };
+    const input = { ...receiptFixture(), organization: { name: "Quillmoor Solar Electric", phone: null, timeZone: "America/Denver" }, paidBy: { name: "", email: "" }, method: { brand: null, last4: null } };
     const text = (await render(input)).pages[0]!;
     expect(text).toContain("ORGANIZATION Quillmoor Solar Electric PAID BY Not recorded PROJECT 1042");
     expect(text).toContain("METHOD Card (details not reported by the processor)");

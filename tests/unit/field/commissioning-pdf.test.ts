@@ -60,12 +60,12 @@ describe("commissioning report", () => {
     expect(first).toContain("Failing: String B voltage with the array shut down; Modules reporting.");
     expect(first).toContain("Not recorded yet: First power reading; Rapid shutdown test: time to reach it.");
     expect(first).toContain("To review: AC voltage at the point of connection.");
-    expect(first).toContain("LAST RECORDED 2026-12-02 20:14 UTC MARKED COMPLETE Not yet");
+    expect(first).toContain("LAST RECORDED 2026-12-02 13:14 MST MARKED COMPLETE Not yet");
     expect(first).toContain("Dana Okafor (dana@quillmoor.example)");
 
     const done = complete.pages.join(" ");
     expect(done).toContain("Complete: all 8 readings recorded, none failing.");
-    expect(done).toContain("MARKED COMPLETE 2026-12-02 20:20 UTC");
+    expect(done).toContain("MARKED COMPLETE 2026-12-02 13:20 MST");
     expect(done).not.toContain("Not recorded");
   });
 
@@ -174,7 +174,7 @@ describe("certificate of completion", () => {
   });
 
   test("sums up the commissioning result", () => {
-    expect(complete.pages[0]).toContain("COMPLETE Complete: all 8 readings recorded, none failing. Marked complete 2026-12-02 20:20 UTC");
+    expect(complete.pages[0]).toContain("COMPLETE Complete: all 8 readings recorded, none failing. Marked complete 2026-12-02 13:20 MST");
     expect(complete.pages[0]).not.toContain("Do not sign");
     const text = open.pages[0]!;
     expect(text).toContain("OPEN Open: 2 failing and 2 not recorded yet.");
@@ -242,7 +242,7 @@ describe("commissioning summary", () => {
       const input = commissioningFixture({ kind, scenario: "open" });
       return {
         ...input,
-        organization: { name: "Quillmoor Solar Electric", licenseNumber: null, phone: null },
+        organization: { name: "Quillmoor Solar Electric", licenseNumber: null, phone: null, timeZone: "America/Denver" },
         project: { ...input.project, jurisdictionName: null, utilityName: null, utilityAccountNumber: null, meterNumber: null },
         system: { ...input.system, shutdownSummary: null },
         installer: null,

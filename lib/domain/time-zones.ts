@@ -1,0 +1,29 @@
+/** The time zones of the United States, as IANA names; documents print local times in the organization's zone. */
+export const US_TIME_ZONES = [
+  { id: "America/New_York", label: "Eastern" },
+  { id: "America/Chicago", label: "Central" },
+  { id: "America/Denver", label: "Mountain" },
+  { id: "America/Phoenix", label: "Mountain, no daylight saving (Arizona)" },
+  { id: "America/Los_Angeles", label: "Pacific" },
+  { id: "America/Anchorage", label: "Alaska" },
+  { id: "Pacific/Honolulu", label: "Hawaii" },
+  { id: "America/Puerto_Rico", label: "Atlantic (Puerto Rico, U.S. Virgin Islands)" },
+] as const;
+
+export type UsTimeZone = (typeof US_TIME_ZONES)[number]["id"];
+export const DEFAULT_TIME_ZONE: UsTimeZone = "America/New_York";
+
+/** "2026-11-20 09:30 MST": a calendar date and 24-hour time in the zone, with its abbreviation. */
+export function localDateTime(iso: string, timeZone: string): string {
+  const parts = Object.fromEntries(
+    new Intl.DateTimeFormat("en-US", { timeZone, year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", hourCycle: "h23", timeZoneName: "short" })
+      .formatToParts(new Date(iso))
+      .map((p) => [p.type, p.value]),
+  );
+  return `${parts.year}-${parts.month}-${parts.day} ${parts.hour}:${parts.minute} ${parts.timeZoneName}`;
+}
+
+/** "December 3, 2026" in the zone. */
+export function localLongDate(iso: string, timeZone: string): string {
+  return new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone }).format(new Date(iso));
+}

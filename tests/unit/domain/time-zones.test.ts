@@ -1,0 +1,22 @@
+import { expect, test } from "vitest";
+import { US_TIME_ZONES, localDateTime, localLongDate } from "@/lib/domain/time-zones";
+
+// Offsets from the IANA tz database as shipped with Node's ICU (from memory: MST = UTC−7, MDT = UTC−6, HST = UTC−10).
+test.each([
+  ["2026-12-02T01:12:00Z", "America/Denver", "2026-12-01 18:12 MST"],
+  ["2026-07-01T18:05:00Z", "America/Denver", "2026-07-01 12:05 MDT"],
+  ["2026-07-01T18:05:00Z", "America/Phoenix", "2026-07-01 11:05 MST"],
+  ["2026-12-02T01:12:00Z", "Pacific/Honolulu", "2026-12-01 15:12 HST"],
+])("%s in %s → %s", (iso, zone, expected) => {
+  expect(localDateTime(iso, zone)).toBe(expected);
+});
+
+test("the long date follows the zone across midnight", () => {
+  expect(localLongDate("2026-12-02T01:12:00Z", "America/Denver")).toBe("December 1, 2026");
+  expect(localLongDate("2026-12-02T01:12:00Z", "America/New_York")).toBe("December 1, 2026");
+  expect(localLongDate("2026-12-02T06:00:00Z", "America/New_York")).toBe("December 2, 2026");
+});
+
+test("every listed zone is one Node knows", () => {
+  for (const { id } of US_TIME_ZONES) expect(() => localDateTime("2026-01-01T00:00:00Z", id)).not.toThrow();
+});
