@@ -25,6 +25,17 @@ describe("can", () => {
     ["admin", "reference:edit", true],
     ["coordinator", "reference:edit", false],
     ["installer", "reference:edit", false],
+    ["installer", "field:record", true],
+    ["coordinator", "field:record", true],
+    ["admin", "fees:pay", true],
+    ["coordinator", "fees:pay", true],
+    ["installer", "fees:pay", false],
+    ["admin", "fees:refund", true],
+    ["coordinator", "fees:refund", false],
+    ["installer", "fees:refund", false],
+    ["admin", "organization:edit", true],
+    ["coordinator", "organization:edit", false],
+    ["installer", "organization:edit", false],
   ])("%s → %s is %s", (role, permission, expected) => {
     expect(can(viewer(role), permission)).toBe(expected);
   });
@@ -40,5 +51,16 @@ describe("can", () => {
     expect(can(viewer("installer"), "project:view", { organizationId: "org-a", installerId: "u2" })).toBe(false);
     expect(can(viewer("installer"), "project:view", { organizationId: "org-a", installerId: null })).toBe(false);
     expect(can(viewer("coordinator"), "project:view", { organizationId: "org-a", installerId: null })).toBe(true);
+  });
+
+  it("lets only the assigned installer record field work on a project", () => {
+    expect(can(viewer("installer"), "field:record", { organizationId: "org-a", installerId: "u1" })).toBe(true);
+    expect(can(viewer("installer"), "field:record", { organizationId: "org-a", installerId: "u2" })).toBe(false);
+    expect(can(viewer("coordinator"), "field:record", { organizationId: "org-b", installerId: "u1" })).toBe(false);
+  });
+
+  it("gives API tokens no write, payment or field permission", () => {
+    const token = { ...viewer("admin"), apiTokenId: "t1" };
+    for (const permission of ["field:record", "fees:pay", "fees:refund", "organization:edit", "project:edit"] as const) expect(can(token, permission)).toBe(false);
   });
 });
