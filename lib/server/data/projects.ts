@@ -5,7 +5,10 @@ import { can, type Viewer } from "@/lib/domain/permissions";
 import { NEXT_ACTION, STAGE_LABELS, STAGES, type Stage } from "@/lib/domain/stages";
 import { AppError } from "@/lib/errors";
 import type { ProjectListQuery, ProjectValues } from "@/lib/schemas/project";
+import { stageChangedEmail } from "@/templates/email/stage-changed";
 import { db } from "../db";
+import { env } from "../env";
+import { enqueueMail } from "../services/outbox";
 import { isUuid } from "./ids";
 import { diffFields, recordAudit } from "./audit";
 
@@ -192,6 +195,23 @@ export async function changeProjectStage({ viewer, projectId, toStage, note }: {
     await project.update({ stage: toStage, stageChangedAt: at }, { transaction });
     await StageChange.create({ organizationId: viewer.organizationId, projectId, fromStage, toStage, changedById: viewer.id, note }, { transaction });
     await recordAudit({ viewer, action: "project.stage-changed", entityType: "project", entityId: projectId, changes: { stage: { before: fromStage, after: toStage }, ...(note ? { note: { before: null, after: note } } : {}) } }, { transaction });
+    // The coordinator and installer hear of it, unless they made the change themselves.
+    const people = [project.coordinatorId, project.installerId].filter((id): id is string => Boolean(id) && id !== viewer.id);
+    const recipients = people.length ? await User.findAll({ where: { id: people, organizationId: viewer.organizationId, isActive: true }, transaction }) : [];
+    for (const person of recipients) {
+      const mail = stageChangedEmail({
+        changedBy: viewer.name,
+        projectNumber: project.number,
+        customerName: project.customerName,
+        siteAddress: `${project.street}, ${project.city}, ${project.state} ${project.postalCode}`,
+        fromLabel: STAGE_LABELS[fromStage as Stage],
+        toLabel: STAGE_LABELS[toStage],
+        nextAction: NEXT_ACTION[toStage],
+        note,
+        url: `${env().APP_URL}/projects/${projectId}`,
+      });
+      await enqueueMail({ to: person.email, ...mail, organizationId: viewer.organizationId }, { transaction });
+    }
   });
   return getProjectById({ viewer, projectId });
 }

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { AuditEvent, StageChange } from "@/models";
+import { Op } from "sequelize";
+import { AuditEvent, OutboxMessage, Project, StageChange } from "@/models";
 import { AppError } from "@/lib/errors";
 import { ProjectInput, ProjectListQuery } from "@/lib/schemas/project";
 import { changeProjectStage, createProject, getProjectById, listProjects, listStageChanges, updateProject } from "@/lib/server/data/projects";
@@ -119,6 +120,20 @@ describe("changeProjectStage", () => {
     expect(change).toMatchObject({ fromStage: "design_checked", note: "Filed at the counter", changedById: acme.users.coordinator.id });
     const audit = await AuditEvent.findOne({ where: { entityId: project.id, action: "project.stage-changed" } });
     expect(audit?.changes.stage).toEqual({ before: "design_checked", after: "permit_filed" });
+  });
+
+  it("e-mails the installer and the coordinator through the outbox, but not whoever made the change", async () => {
+    const project = await makeProject(acme, { stage: "utility_approved", installerId: acme.users.installer.id });
+    await changeProjectStage({ viewer: acme.viewers.admin, projectId: project.id, toStage: "commissioned", note: "Commissioning record complete" });
+    const number = (await Project.findByPk(project.id))!.number;
+    const sent = await OutboxMessage.findAll({ where: { subject: { [Op.like]: `Project ${number} is now “Commissioned”%` } } });
+    expect(sent.map((m) => m.toAddress).sort()).toEqual([acme.users.coordinator.email, acme.users.installer.email].sort());
+    expect(sent[0].textBody).toContain("Note: Commissioning record complete");
+    expect(sent[0].textBody).toContain(`/projects/${project.id}`);
+
+    await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "pto_received", note: "" });
+    const second = await OutboxMessage.findAll({ where: { subject: { [Op.like]: `Project ${number} is now “PTO received”%` } } });
+    expect(second.map((m) => m.toAddress)).toEqual([acme.users.installer.email]);
   });
 
   it("refuses installers and the same stage, and changes nothing", async () => {
