@@ -11,7 +11,8 @@ export type FeeScheduleFormValues = z.output<typeof FeeScheduleForm>;
 export type FeeBasisInput = FeeLineInput["basis"];
 
 /** Today as the project fees page reads it (UTC), so the preview and a project agree on which lines apply. */
-export const todayIso = () => new Date().toISOString().slice(0, 10);
+// The admin's own calendar day, as the browser knows it (en-CA prints YYYY-MM-DD).
+export const todayIso = () => new Date().toLocaleDateString("en-CA");
 
 /** A fresh id for a new line; `randomUUID` needs a secure context, so a plain-http intranet still gets one. */
 export function newLineId(): string {

@@ -27,3 +27,8 @@ export function localDateTime(iso: string, timeZone: string): string {
 export function localLongDate(iso: string, timeZone: string): string {
   return new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone }).format(new Date(iso));
 }
+
+/** The calendar day (YYYY-MM-DD) it is in the zone at that instant: fee schedules take effect by local day. */
+export function localIsoDate(iso: string, timeZone: string): string {
+  return new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(iso));
+}

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { US_TIME_ZONES, localDateTime, localLongDate } from "@/lib/domain/time-zones";
+import { US_TIME_ZONES, localDateTime, localIsoDate, localLongDate } from "@/lib/domain/time-zones";
 
 // Offsets from the IANA tz database as shipped with Node's ICU (from memory: MST = UTC−7, MDT = UTC−6, HST = UTC−10).
 test.each([
@@ -19,4 +19,12 @@ test("the long date follows the zone across midnight", () => {
 
 test("every listed zone is one Node knows", () => {
   for (const { id } of US_TIME_ZONES) expect(() => localDateTime("2026-01-01T00:00:00Z", id)).not.toThrow();
+});
+
+test.each([
+  ["2026-07-01T05:30:00Z", "America/Denver", "2026-06-30"], // still June 30 in Colorado: a fee taking effect July 1 does not apply yet
+  ["2026-07-01T06:30:00Z", "America/Denver", "2026-07-01"],
+  ["2026-07-01T03:59:00Z", "America/New_York", "2026-06-30"],
+])("local day of %s in %s is %s", (iso, zone, expected) => {
+  expect(localIsoDate(iso, zone)).toBe(expected);
 });
