@@ -87,7 +87,7 @@ export async function startReceiver(secret: string = FAKE_STRIPE_WEBHOOK_SECRET)
     rejected,
     answerNext: (...statuses) => planned.push(...statuses),
     types: () => deliveries.map((d) => d.event.type),
-    waitFor: (check, what, timeoutMs = 5000) => waitFor(check, what, timeoutMs),
+    waitFor: (check, what, timeoutMs = 15_000) => waitFor(check, what, timeoutMs),
     close: () =>
       new Promise<void>((resolve) => {
         server.close(() => resolve());
@@ -96,7 +96,8 @@ export async function startReceiver(secret: string = FAKE_STRIPE_WEBHOOK_SECRET)
   };
 }
 
-export async function waitFor(check: () => boolean, what: string, timeoutMs = 5000): Promise<void> {
+// Generous: the suite shares two cores with everything else a test run does.
+export async function waitFor(check: () => boolean, what: string, timeoutMs = 15_000): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   while (!check()) {
     if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
