@@ -67,6 +67,8 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
   const [status, setStatus] = useState(props.initialStatus);
   const [save, setSave] = useState<SaveState>({ kind: "idle", text: savedText(props.initialUpdatedAt) });
   const typed = useRef(false);
+  const autosave = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
+  const latest = useRef(0); // only the newest save's answer is shown
 
   const { errors, results, completion } = useMemo(() => {
     const live = liveReadings(values);
@@ -77,9 +79,13 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
 
   async function saveNow(complete = false) {
     if (readOnly) return;
+    // An explicit save supersedes the autosave waiting to fire, so its answer is the one shown.
+    clearTimeout(autosave.current);
     typed.current = false;
     setSave({ kind: "saving", text: "Saving…" });
+    const mine = ++latest.current;
     const result = await saveCommissioningAction({ projectId, readings: form.getValues(), complete });
+    if (mine !== latest.current) return;
     if (!result.ok) {
       setSave({ kind: "error", text: `Not saved: ${result.message} Your readings stay on this page.` });
       return;
@@ -92,8 +98,8 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
   // Save a moment after typing stops, so a dropped signal on site loses at most the last few seconds.
   useEffect(() => {
     if (readOnly || !typed.current) return;
-    const timer = setTimeout(() => void saveNow(), AUTOSAVE_MS);
-    return () => clearTimeout(timer);
+    autosave.current = setTimeout(() => void saveNow(), AUTOSAVE_MS);
+    return () => clearTimeout(autosave.current);
     // eslint-disable-next-line react-hooks/exhaustive-deps -- values is the trigger
   }, [values]);
 
