@@ -1,16 +1,23 @@
 import { Op, type Transaction } from "sequelize";
-import { Design, Equipment, Jurisdiction, Project } from "@/models";
+import { CommissioningRecord, Design, Equipment, Jurisdiction, Project, Utility } from "@/models";
+import { STAGES, stageIndex } from "@/lib/domain/stages";
+import { commissioningFacts } from "@/lib/field/commissioning-facts";
 import { runDesignReview } from "@/lib/design/run-review";
 import type { NecEdition } from "@/lib/engineering";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
+import { passingDemoReadings } from "./demo-commissioning";
 import { DESIGN_MODELS, demoDesign, type CatalogIds } from "./demo-designs";
 
-/** Gives every demo project past "Draft" a design, reviewed as the editor would on save. */
+/**
+ * Gives every demo project past "Draft" a design, reviewed as the editor would on save, and every
+ * project already commissioned a complete commissioning record worked out from that design.
+ */
 export async function seedDemoDesigns(organizationId: string, transaction: Transaction) {
   const items = await Equipment.findAll({ where: { organizationId }, transaction });
   const catalog = items.map((e) => ({ id: e.id, kind: e.kind, maker: e.maker, model: e.model, listing: e.listing, specs: e.specs, isArchived: false, datasheet: null }) as EquipmentDto);
   const ids = Object.fromEntries(Object.entries(DESIGN_MODELS).map(([key, model]) => [key, catalog.find((c) => c.model === model)?.id ?? ""])) as CatalogIds;
   const jurisdictions = new Map((await Jurisdiction.findAll({ where: { organizationId }, transaction })).map((j) => [j.id, j]));
+  const utilities = new Map((await Utility.findAll({ where: { organizationId }, transaction })).map((u) => [u.id, u]));
   const projects = await Project.findAll({ where: { organizationId, stage: { [Op.ne]: "draft" } }, order: [["number", "ASC"]], transaction });
 
   for (const [i, project] of projects.entries()) {
@@ -28,5 +35,15 @@ export async function seedDemoDesigns(organizationId: string, transaction: Trans
       },
       { transaction },
     );
+    if (outcome.status === "reviewed" && j && stageIndex(project.stage) >= STAGES.indexOf("commissioned")) {
+      const { ratings } = outcome.review.summary;
+      const requiredGridProfile = (project.utilityId ? utilities.get(project.utilityId)?.requiredGridProfile : null) ?? null;
+      const facts = commissioningFacts({ design: outcome.design, edition: j.necEdition as NecEdition, requiredGridProfile, moduleCount: ratings.moduleCount, acKw: ratings.acKw });
+      const readings = passingDemoReadings(facts, i);
+      await CommissioningRecord.create(
+        { organizationId, projectId: project.id, readings: readings as unknown as Record<string, unknown>, status: "complete", completedAt: project.stageChangedAt, completedById: project.installerId, updatedById: project.installerId },
+        { transaction },
+      );
+    }
   }
 }

@@ -1,6 +1,6 @@
 import "server-only";
 import { literal, Op, type OrderItem, type Transaction, type WhereOptions } from "sequelize";
-import { Jurisdiction, Project, StageChange, User, Utility } from "@/models";
+import { CommissioningRecord, Jurisdiction, Project, ProjectFile, StageChange, User, Utility } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { NEXT_ACTION, STAGE_LABELS, STAGES, type Stage } from "@/lib/domain/stages";
 import { AppError } from "@/lib/errors";
@@ -183,6 +183,14 @@ export async function updateProject({ viewer, projectId, values }: { viewer: Vie
   return getProjectById({ viewer, projectId });
 }
 
+/** What the field record still lacks before a project counts as commissioned, or null when nothing does. */
+async function fieldWorkMissing(projectId: string, transaction: Transaction): Promise<string | null> {
+  const record = await CommissioningRecord.findOne({ where: { projectId }, attributes: ["status"], transaction });
+  if (record?.status !== "complete") return "The commissioning record is not complete.";
+  const signed = await ProjectFile.count({ where: { projectId, kind: "signed-completion" }, transaction });
+  return signed ? null : "No signed certificate of completion has been uploaded.";
+}
+
 /** Moves a project to another stage; the stage change and its audit event commit together or not at all. */
 export async function changeProjectStage({ viewer, projectId, toStage, note }: { viewer: Viewer; projectId: string; toStage: Stage; note: string }): Promise<ProjectDto> {
   const sequelize = db();
@@ -191,6 +199,10 @@ export async function changeProjectStage({ viewer, projectId, toStage, note }: {
     if (!can(viewer, "project:change-stage", project)) throw new AppError("FORBIDDEN", "You cannot change this project's stage.");
     const fromStage = project.stage;
     if (fromStage === toStage) throw new AppError("CONFLICT", `The project is already in “${STAGE_LABELS[toStage]}”.`);
+    if (toStage === "commissioned" && !note.trim()) {
+      const missing = await fieldWorkMissing(projectId, transaction);
+      if (missing) throw new AppError("CONFLICT", `${missing} Move it anyway only with a note saying why.`, { note: [`Say why: ${missing.toLowerCase()}`] });
+    }
     const at = new Date();
     await project.update({ stage: toStage, stageChangedAt: at }, { transaction });
     await StageChange.create({ organizationId: viewer.organizationId, projectId, fromStage, toStage, changedById: viewer.id, note }, { transaction });

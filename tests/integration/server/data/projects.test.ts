@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { Op } from "sequelize";
-import { AuditEvent, OutboxMessage, Project, StageChange } from "@/models";
+import { AuditEvent, CommissioningRecord, OutboxMessage, Project, StageChange } from "@/models";
 import { AppError } from "@/lib/errors";
 import { ProjectInput, ProjectListQuery } from "@/lib/schemas/project";
 import { changeProjectStage, createProject, getProjectById, listProjects, listStageChanges, updateProject } from "@/lib/server/data/projects";
@@ -120,6 +120,22 @@ describe("changeProjectStage", () => {
     expect(change).toMatchObject({ fromStage: "design_checked", note: "Filed at the counter", changedById: acme.users.coordinator.id });
     const audit = await AuditEvent.findOne({ where: { entityId: project.id, action: "project.stage-changed" } });
     expect(audit?.changes.stage).toEqual({ before: "design_checked", after: "permit_filed" });
+  });
+
+  it("asks for a note to mark a project commissioned while its field record is open or the signed form is missing", async () => {
+    const project = await makeProject(acme, { stage: "utility_approved", installerId: acme.users.installer.id });
+    const refused = await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "commissioned", note: "" }).catch((e) => e);
+    expect(refused).toMatchObject({ code: "CONFLICT" });
+    expect(refused.message).toMatch(/commissioning record is not complete/);
+    expect(refused.fieldErrors.note[0]).toMatch(/^Say why/);
+    expect((await getProjectById({ viewer: acme.viewers.coordinator, projectId: project.id })).stage).toBe("utility_approved");
+
+    await CommissioningRecord.create({ organizationId: acme.organization.id, projectId: project.id, readings: {}, status: "complete", updatedById: null });
+    const unsigned = await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "commissioned", note: "" }).catch((e) => e);
+    expect(unsigned.message).toMatch(/No signed certificate/);
+
+    const moved = await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "commissioned", note: "Signed form on paper in the office file" });
+    expect(moved.stage).toBe("commissioned");
   });
 
   it("e-mails the installer and the coordinator through the outbox, but not whoever made the change", async () => {
