@@ -3,11 +3,14 @@ import { Wordmark } from "@/components/brand/wordmark";
 import { AppNav } from "@/components/shell/app-nav";
 import { can } from "@/lib/domain/permissions";
 import { ROLE_LABELS } from "@/lib/domain/roles";
+import { TimeZoneProvider } from "@/components/time/local-time";
 import { requireUser } from "@/lib/server/auth";
+import { getOrganization } from "@/lib/server/data/organizations";
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   // Convenience redirect only; every page, action and route checks again.
   const viewer = await requireUser();
+  const { timeZone } = await getOrganization({ viewer });
   const links = [
     { href: "/dashboard", label: "Projects" },
     ...(can(viewer, "project:create") ? [{ href: "/projects/new", label: "New project" }] : []),
@@ -29,7 +32,9 @@ export default async function AppLayout({ children }: { children: React.ReactNod
           </div>
         </div>
       </header>
-      <main className="mx-auto max-w-6xl px-4 py-6">{children}</main>
+      <main className="mx-auto max-w-6xl px-4 py-6">
+        <TimeZoneProvider timeZone={timeZone}>{children}</TimeZoneProvider>
+      </main>
     </div>
   );
 }

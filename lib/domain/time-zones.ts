@@ -32,3 +32,15 @@ export function localLongDate(iso: string, timeZone: string): string {
 export function localIsoDate(iso: string, timeZone: string): string {
   return new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(iso));
 }
+
+const STYLES = {
+  datetime: { dateStyle: "medium", timeStyle: "short" },
+  date: { dateStyle: "medium" },
+  time: { hour: "numeric", minute: "2-digit" },
+} as const satisfies Record<string, Intl.DateTimeFormatOptions>;
+export type TimeStyle = keyof typeof STYLES;
+
+/** "Nov 15, 2026, 5:11 PM" in the zone: the same on the server and in any browser, so pages hydrate cleanly. */
+export function formatInZone(iso: string, timeZone: string, style: TimeStyle = "datetime"): string {
+  return new Intl.DateTimeFormat("en-US", { ...STYLES[style], timeZone }).format(new Date(iso));
+}

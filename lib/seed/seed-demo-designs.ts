@@ -1,5 +1,5 @@
 import { Op, type Transaction } from "sequelize";
-import { CommissioningRecord, Design, Equipment, Jurisdiction, Project, Utility } from "@/models";
+import { CommissioningRecord, Design, Equipment, Jurisdiction, Project, StageChange, Utility } from "@/models";
 import { STAGES, stageIndex } from "@/lib/domain/stages";
 import { commissioningFacts } from "@/lib/field/commissioning-facts";
 import { runDesignReview } from "@/lib/design/run-review";
@@ -40,9 +40,12 @@ export async function seedDemoDesigns(organizationId: string, transaction: Trans
       const requiredGridProfile = (project.utilityId ? utilities.get(project.utilityId)?.requiredGridProfile : null) ?? null;
       const facts = commissioningFacts({ design: outcome.design, edition: j.necEdition as NecEdition, requiredGridProfile, moduleCount: ratings.moduleCount, acKw: ratings.acKw });
       const readings = passingDemoReadings(facts, i);
+      // Completed on the day the timeline says the project was commissioned.
+      const commissioned = await StageChange.findOne({ where: { projectId: project.id, toStage: "commissioned" }, transaction });
+      const completedAt = commissioned?.createdAt ?? project.stageChangedAt;
       await CommissioningRecord.create(
-        { organizationId, projectId: project.id, readings: readings as unknown as Record<string, unknown>, status: "complete", completedAt: project.stageChangedAt, completedById: project.installerId, updatedById: project.installerId },
-        { transaction },
+        { organizationId, projectId: project.id, readings: readings as unknown as Record<string, unknown>, status: "complete", completedAt, completedById: project.installerId, updatedById: project.installerId, createdAt: completedAt, updatedAt: completedAt },
+        { transaction, silent: true },
       );
     }
   }

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { US_TIME_ZONES, localDateTime, localIsoDate, localLongDate } from "@/lib/domain/time-zones";
+import { US_TIME_ZONES, formatInZone, localDateTime, localIsoDate, localLongDate } from "@/lib/domain/time-zones";
 
 // Offsets from the IANA tz database as shipped with Node's ICU (from memory: MST = UTC−7, MDT = UTC−6, HST = UTC−10).
 test.each([
@@ -27,4 +27,13 @@ test.each([
   ["2026-07-01T03:59:00Z", "America/New_York", "2026-06-30"],
 ])("local day of %s in %s is %s", (iso, zone, expected) => {
   expect(localIsoDate(iso, zone)).toBe(expected);
+});
+
+test.each([
+  ["datetime", "Nov 15, 2026, 5:11 PM"],
+  ["date", "Nov 15, 2026"],
+  ["time", "5:11 PM"],
+] as const)("screens show %s in the organization's zone, whatever the machine's", (style, expected) => {
+  // 2026-11-16T00:11Z is still the evening of November 15 in Colorado (MST, UTC−7).
+  expect(formatInZone("2026-11-16T00:11:00Z", "America/Denver", style)).toBe(expected);
 });

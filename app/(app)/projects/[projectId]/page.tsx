@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { CheckStatusChip } from "@/components/review/check-status";
+import { LocalTime } from "@/components/time/local-time";
 import { StageBadge } from "@/components/ui/stage-badge";
 import { can } from "@/lib/domain/permissions";
 import { requireUser } from "@/lib/server/auth";
@@ -92,7 +93,15 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         <h2 className="text-base">Field work</h2>
         <span className="text-sm text-ink-soft">
           Commissioning:{" "}
-          <strong>{field.status === "complete" ? `complete${field.completedAt ? ` (${new Date(field.completedAt).toLocaleDateString("en-US", { dateStyle: "medium" })})` : ""}` : field.status === "open" ? "started, not complete" : "not started"}</strong>
+          <strong>{field.status === "complete" ? (
+              <>
+                complete{field.completedAt ? <> (<LocalTime iso={field.completedAt} style="date" />)</> : null}
+              </>
+            ) : field.status === "open" ? (
+              "started, not complete"
+            ) : (
+              "not started"
+            )}</strong>
         </span>
         <span className="text-sm text-ink-soft">
           Signed completion form: <strong>{field.signedForms ? "received" : "not yet"}</strong>

@@ -3,12 +3,12 @@ import { requirePermission } from "@/lib/server/auth";
 import { listApiTokens } from "@/lib/server/data/api-tokens";
 import { CreateTokenForm } from "./_components/create-token-form";
 import { RevokeTokenButton } from "./_components/revoke-token-button";
+import { LocalTime } from "@/components/time/local-time";
 import { DataTable } from "@/components/ui/data-table";
 
 export const metadata: Metadata = { title: "API tokens" };
 
-const dateFormat = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "America/Denver" });
-const when = (iso: string | null) => (iso ? dateFormat.format(new Date(iso)) : "Never");
+const when = (iso: string | null) => (iso ? <LocalTime iso={iso} /> : "Never");
 
 export default async function ApiTokensPage() {
   const viewer = await requirePermission("api-tokens:manage");

@@ -1,6 +1,5 @@
+import { LocalTime } from "@/components/time/local-time";
 import type { StageChangeDto } from "@/lib/server/data/projects";
-
-const dateFormat = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "America/Denver" });
 
 export function StageTimeline({ entries }: { entries: StageChangeDto[] }) {
   return (
@@ -10,7 +9,7 @@ export function StageTimeline({ entries }: { entries: StageChangeDto[] }) {
           <span className="absolute -left-[1.32rem] top-1.5 h-2.5 w-2.5 rounded-full border-2 border-copper bg-paper" aria-hidden />
           <p className="text-sm font-medium">{entry.toLabel}</p>
           <p className="text-xs text-ink-faint">
-            <time dateTime={entry.createdAt}>{dateFormat.format(new Date(entry.createdAt))}</time>
+            <LocalTime iso={entry.createdAt} />
             {entry.changedBy ? ` · ${entry.changedBy}` : ""}
           </p>
           {entry.note ? <p className="mt-1 text-sm text-ink-soft">{entry.note}</p> : null}

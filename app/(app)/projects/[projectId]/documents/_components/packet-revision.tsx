@@ -1,6 +1,6 @@
+import { LocalTime } from "@/components/time/local-time";
 import type { PacketDto } from "@/lib/server/data/packets";
 
-const date = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "America/Denver" });
 const size = (bytes: number | null) => (bytes === null ? "" : bytes > 1_000_000 ? `${(bytes / 1_000_000).toFixed(1)} MB` : `${Math.round(bytes / 1000)} kB`);
 
 export function PacketRevision({ packet }: { packet: PacketDto }) {
@@ -13,7 +13,7 @@ export function PacketRevision({ packet }: { packet: PacketDto }) {
         </a>
       </div>
       <p className="measure text-xs text-ink-faint">
-        {packet.readyAt ? date.format(new Date(packet.readyAt)) : ""} · {packet.pageCount} pages · {size(packet.sizeBytes)} · SHA-256 {packet.sha256?.slice(0, 12)}…{packet.requestedBy ? ` · ${packet.requestedBy}` : ""}
+        {packet.readyAt ? <LocalTime iso={packet.readyAt} /> : ""} · {packet.pageCount} pages · {size(packet.sizeBytes)} · SHA-256 {packet.sha256?.slice(0, 12)}…{packet.requestedBy ? ` · ${packet.requestedBy}` : ""}
       </p>
       {packet.overrideReason ? <p className="mt-1 text-sm text-result-warn">Generated with failing checks: {packet.overrideReason}</p> : null}
       {packet.changes.length ? (

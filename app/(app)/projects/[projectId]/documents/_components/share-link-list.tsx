@@ -1,13 +1,14 @@
 "use client";
 
 import { useState, useTransition } from "react";
+import { LocalTime } from "@/components/time/local-time";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import type { ShareLinkDto, ShareLinkStatus } from "@/lib/server/data/share-links";
 import { revokeShareLinkAction } from "../share-actions";
 
 const STATUS_WORDS: Record<ShareLinkStatus, string> = { active: "Active", expired: "Expired", revoked: "Revoked" };
-const when = (iso: string) => iso.slice(0, 16).replace("T", " ") + " UTC";
+const when = (iso: string) => <LocalTime iso={iso} />;
 
 /** The project's links with their state and who opened them. */
 export function ShareLinkList({ links, onChange }: { links: ShareLinkDto[]; onChange: () => void }) {

@@ -2,6 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
+import { LocalTime } from "@/components/time/local-time";
 import { Button } from "@/components/ui/button";
 import { centsToDollarsText, formatUsd } from "@/lib/fees/money";
 import type { PaymentDto } from "@/lib/server/data/project-fees";
@@ -9,7 +10,7 @@ import { refundPaymentAction } from "../actions";
 
 const STATUS_TEXT: Record<PaymentDto["status"], string> = { pending: "Waiting for payment", paid: "Paid", expired: "Not completed", partially_refunded: "Partly refunded", refunded: "Refunded" };
 
-const when = (iso: string) => new Date(iso).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" });
+const when = (iso: string) => <LocalTime iso={iso} />;
 
 export function PaymentHistory({ payments, canRefund }: { payments: PaymentDto[]; canRefund: boolean }) {
   if (payments.length === 0) return null;

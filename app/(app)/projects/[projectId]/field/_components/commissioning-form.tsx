@@ -4,9 +4,11 @@ import { clsx } from "clsx";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { useForm, useWatch, type UseFormRegisterReturn } from "react-hook-form";
 import { CheckStatusChip } from "@/components/review/check-status";
+import { useTimeZone } from "@/components/time/local-time";
 import { Button } from "@/components/ui/button";
 import { checkCommissioning, commissioningComplete, shutdownWindow, type CommissioningCheck } from "@/lib/engineering/commissioning";
 import { toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
+import { formatInZone } from "@/lib/domain/time-zones";
 import { CommissioningReadings } from "@/lib/schemas/commissioning";
 import { saveCommissioningAction } from "../actions";
 
@@ -56,8 +58,8 @@ function liveReadings(values: FormValues): { readings: CommissioningReadings; er
 type SaveState = { kind: "idle" | "saving" | "saved" | "error" | "refused"; text: string };
 const AUTOSAVE_MS = 1500;
 
-function savedText(updatedAt: string | null) {
-  return updatedAt ? `Saved ${new Date(updatedAt).toLocaleTimeString("en-US", { hour: "numeric", minute: "2-digit" })}` : "Not saved yet";
+function savedText(updatedAt: string | null, timeZone: string) {
+  return updatedAt ? `Saved ${formatInZone(updatedAt, timeZone, "time")}` : "Not saved yet";
 }
 
 export function CommissioningForm(props: { projectId: string; facts: CommissioningFacts; initialReadings: CommissioningReadings; initialStatus: "open" | "complete"; initialUpdatedAt: string | null; readOnly: boolean }) {
@@ -65,7 +67,8 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
   const form = useForm<FormValues>({ defaultValues: toFormValues(props.initialReadings) });
   const values = useWatch({ control: form.control }) as FormValues;
   const [status, setStatus] = useState(props.initialStatus);
-  const [save, setSave] = useState<SaveState>({ kind: "idle", text: savedText(props.initialUpdatedAt) });
+  const timeZone = useTimeZone();
+  const [save, setSave] = useState<SaveState>({ kind: "idle", text: savedText(props.initialUpdatedAt, timeZone) });
   const typed = useRef(false);
   const autosave = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
   const latest = useRef(0); // only the newest save's answer is shown
@@ -92,7 +95,7 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
     }
     setStatus(result.data.status);
     if (result.data.completeRefused) setSave({ kind: "refused", text: result.data.completeRefused });
-    else setSave({ kind: "saved", text: result.data.status === "complete" && complete ? "Saved and marked complete." : savedText(result.data.updatedAt) });
+    else setSave({ kind: "saved", text: result.data.status === "complete" && complete ? "Saved and marked complete." : savedText(result.data.updatedAt, timeZone) });
   }
 
   // Save a moment after typing stops, so a dropped signal on site loses at most the last few seconds.

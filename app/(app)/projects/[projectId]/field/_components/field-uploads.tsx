@@ -3,6 +3,7 @@
 import { clsx } from "clsx";
 import { useRef, useState } from "react";
 import { useDropzone, type FileRejection } from "react-dropzone";
+import { LocalTime } from "@/components/time/local-time";
 import { ALLOWED_TYPES, KIND_LABELS, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, allowedTypesText, tooLargeMessage } from "@/lib/field/upload-rules";
 import type { ProjectFileDto } from "@/lib/server/data/project-files";
 import type { ProjectFileKind } from "@/models/project-file";
@@ -84,7 +85,7 @@ export function FieldUploads({ projectId, initialFiles, mayUpload }: { projectId
                 </a>
                 <span className="text-ink-soft">{KIND_LABELS[f.kind]}</span>
                 <span className="measure text-xs text-ink-faint">
-                  {sizeText(f.sizeBytes)} · {f.uploadedBy ?? "someone"} · {new Date(f.createdAt).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })}
+                  {sizeText(f.sizeBytes)} · {f.uploadedBy ?? "someone"} · <LocalTime iso={f.createdAt} />
                 </span>
               </li>
             ))}
