@@ -46,29 +46,32 @@ console.log("• Mail worker is sending the outbox.");
 // webhook never came (a crash between charge and webhook), so no payment stays unrecorded, and
 // packet generations a worker abandoned marked failed so they can be retried.
 const RECEIPT_INTERVAL_MS = 2_000;
-const RECONCILE_EVERY = 15; // receipt rounds, about 30 s
-let paymentRound: Promise<void> = Promise.resolve();
+const SLOW_CHECKS_EVERY = 15; // rounds, about 30 s
+let maintenanceRound: Promise<void> = Promise.resolve();
 let rounds = 0;
-async function paymentsLoop() {
+const logged = (what: string) => (error: unknown) => console.error(`${what} error`, error);
+async function maintenanceLoop() {
   if (stopping) return;
-  const reconcile = rounds++ % RECONCILE_EVERY === 0 && Boolean(process.env.STRIPE_SECRET_KEY);
-  paymentRound = (async () => {
-    if (reconcile) await reconcilePendingPayments({ olderThanMs: 60_000 }).catch((error) => console.error("payment reconciliation error", error));
-    if (rounds % RECONCILE_EVERY === 1) await failAbandonedPackets().catch((error) => console.error("packet maintenance error", error));
-    await issueDueReceipts().catch((error) => console.error("receipt error", error));
+  const slowChecks = rounds++ % SLOW_CHECKS_EVERY === 0;
+  maintenanceRound = (async () => {
+    if (slowChecks) {
+      if (process.env.STRIPE_SECRET_KEY) await reconcilePendingPayments({ olderThanMs: 60_000 }).catch(logged("payment reconciliation"));
+      await failAbandonedPackets().catch(logged("packet maintenance"));
+    }
+    await issueDueReceipts().catch(logged("receipt"));
   })();
-  await paymentRound;
-  if (!stopping) setTimeout(paymentsLoop, RECEIPT_INTERVAL_MS);
+  await maintenanceRound;
+  if (!stopping) setTimeout(maintenanceLoop, RECEIPT_INTERVAL_MS);
 }
-void paymentsLoop();
-console.log("• Payments worker is issuing receipts and reconciling checkouts.");
+void maintenanceLoop();
+console.log("• Maintenance: receipts, checkout reconciliation, abandoned packet generations.");
 
 for (const signal of ["SIGINT", "SIGTERM"] as const) {
   process.on(signal, async () => {
     if (stopping) return;
     stopping = true;
     await mailRound; // let a message in flight be marked, so it is not sent again
-    await paymentRound;
+    await maintenanceRound;
     await boss.stop({ graceful: true, timeout: 15_000 });
     process.exit(0);
   });

@@ -7,13 +7,13 @@ import { saveFeeScheduleAction } from "@/app/(app)/settings/fee-schedule-actions
 import { useActionSubmit } from "@/components/forms/use-action-submit";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
-import type { FeeLine } from "@/lib/fees";
+import type { FeeAuthorityKind, FeeLine } from "@/lib/fees";
 import { feeLineToFormValues } from "@/lib/schemas/fee-schedule";
 import { FeeLineFields } from "./fee-line-fields";
 import { FeePreview } from "./fee-preview";
 import { FeeScheduleForm, newFeeLine, type FeeScheduleFormInput, type FeeScheduleFormValues } from "./fee-schedule-form";
 
-type Props = { authorityKind: "jurisdiction" | "utility"; authorityId: string; authorityName: string; initialLines: FeeLine[] };
+type Props = { authorityKind: FeeAuthorityKind; authorityId: string; authorityName: string; initialLines: FeeLine[] };
 
 /**
  * An AHJ's or a utility's fee schedule, line by line, with a preview of what it charges.

@@ -10,8 +10,7 @@ export type FeeScheduleFormInput = z.input<typeof FeeScheduleForm>;
 export type FeeScheduleFormValues = z.output<typeof FeeScheduleForm>;
 export type FeeBasisInput = FeeLineInput["basis"];
 
-/** Today as the project fees page reads it (UTC), so the preview and a project agree on which lines apply. */
-// The admin's own calendar day, as the browser knows it (en-CA prints YYYY-MM-DD).
+/** The admin's own calendar day, as the browser knows it (en-CA prints YYYY-MM-DD); the preview's date can be changed. */
 export const todayIso = () => new Date().toLocaleDateString("en-CA");
 
 /** A fresh id for a new line; `randomUUID` needs a secure context, so a plain-http intranet still gets one. */

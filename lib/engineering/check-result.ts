@@ -1,4 +1,4 @@
-import type { CheckResult, CheckStatus, NecEdition } from "./types";
+import type { CheckResult, CheckStatus } from "./types";
 
 // Floating-point products such as 1.25 × 32 or 1.2 × 225 must count as "at the limit".
 const EPSILON = 1e-9;

@@ -1,6 +1,10 @@
 // Fee schedules as stored: one row per schedule (an AHJ's or a utility's), its lines as JSON.
 // Money is always integer cents; sizes are kW with at most three decimals (whole watts).
 
+/** Who charges a fee: the AHJ (permit) or the utility (interconnection); each keeps one schedule. */
+export const FEE_AUTHORITY_KINDS = ["jurisdiction", "utility"] as const;
+export type FeeAuthorityKind = (typeof FEE_AUTHORITY_KINDS)[number];
+
 /** Which size of the system a size-based fee reads: module nameplate (DC) or inverter output (AC). */
 export type SizeRating = "dc" | "ac";
 export const SIZE_RATINGS = ["dc", "ac"] as const satisfies readonly SizeRating[];

@@ -12,7 +12,7 @@ import {
   type CommissioningRecord,
 } from "@/lib/engineering";
 import type { CommissioningDocumentInput, CommissioningDocumentKind } from "@/lib/field/commissioning-document-input";
-import { formatNumber, formatQuantity, packetDate } from "@/lib/packets/pdf-facts";
+import { formatNumber, formatQuantity } from "@/lib/packets/pdf-facts";
 
 // The words and figures the certificate of completion and the commissioning report print,
 // computed from the document input so the templates only lay them out and the tests can

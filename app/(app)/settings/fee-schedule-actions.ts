@@ -4,10 +4,11 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { defineAction } from "@/lib/server/action";
 import { saveFeeSchedule } from "@/lib/server/data/fee-schedules";
+import { FEE_AUTHORITY_KINDS } from "@/lib/fees/types";
 import { FeeScheduleInput } from "@/lib/schemas/fee-schedule";
 
 const SaveFeeScheduleInput = z.object({
-  authorityKind: z.enum(["jurisdiction", "utility"]),
+  authorityKind: z.enum(FEE_AUTHORITY_KINDS),
   authorityId: z.string().uuid(),
   lines: FeeScheduleInput,
 });

@@ -1,7 +1,6 @@
 import "server-only";
-import { CommissioningRecord, Organization, Project, ProjectFile, User } from "@/models";
+import { CommissioningRecord, Project, ProjectFile, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
-import { DEFAULT_TIME_ZONE } from "@/lib/domain/time-zones";
 import { checkCommissioning, commissioningComplete, type CommissioningCheck, type CommissioningCompletion, type CommissioningRecord as RecordFacts } from "@/lib/engineering/commissioning";
 import { AppError, isAppError } from "@/lib/errors";
 import { commissioningFacts, emptyReadings, toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
@@ -11,6 +10,7 @@ import { CommissioningReadings, SaveCommissioningInput } from "@/lib/schemas/com
 import type { CommissioningStatus } from "@/models/commissioning-record";
 import { db } from "../db";
 import { recordAudit } from "./audit";
+import { getOrganization } from "./organizations";
 import { buildPacketInput } from "./packet-input";
 import { getProjectById } from "./projects";
 
@@ -118,14 +118,14 @@ function refusal({ failing, missing }: CommissioningCompletion): string {
 export async function buildCommissioningDocumentInput({ viewer, projectId, kind }: { viewer: Viewer; projectId: string; kind: CommissioningDocumentKind }): Promise<CommissioningDocumentInput> {
   const dto = await getCommissioning({ viewer, projectId });
   const { input } = dto.context;
-  const [organization, installer] = await Promise.all([Organization.findByPk(viewer.organizationId), Project.findOne({ where: { id: projectId, organizationId: viewer.organizationId }, include: [{ model: User, as: "installer", attributes: ["name", "email"] }] })]);
+  const [organization, installer] = await Promise.all([getOrganization({ viewer }), Project.findOne({ where: { id: projectId, organizationId: viewer.organizationId }, include: [{ model: User, as: "installer", attributes: ["name", "email"] }] })]);
   const { ratings } = input.review.summary;
   const m = input.equipment.module;
   const device = input.equipment.device;
   return {
     kind,
     generatedAt: new Date().toISOString(),
-    organization: { name: organization?.name ?? "", licenseNumber: organization?.licenseNumber ?? null, phone: organization?.phone ?? null, timeZone: organization?.timeZone ?? DEFAULT_TIME_ZONE },
+    organization: { name: organization.name, licenseNumber: organization.licenseNumber, phone: organization.phone, timeZone: organization.timeZone },
     project: {
       number: input.project.number,
       customerName: input.project.customerName,

@@ -3,7 +3,7 @@ import { FeeSchedule, Jurisdiction, Utility } from "@/models";
 import type { Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import { assertValidFeeLines, FeeScheduleError, type FeeLine } from "@/lib/fees";
-import type { FeeAuthorityKind } from "@/models/fee-schedule";
+import type { FeeAuthorityKind } from "@/lib/fees/types";
 import { db } from "../db";
 import { diffFields, recordAudit } from "./audit";
 import { isUuid } from "./ids";

@@ -1,4 +1,5 @@
 import "server-only";
+import { cache } from "react";
 import { Organization } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
@@ -10,12 +11,17 @@ export type OrganizationDto = { id: string; name: string; licenseNumber: string 
 
 const toDto = ({ id, name, licenseNumber, phone, timeZone }: Organization): OrganizationDto => ({ id, name, licenseNumber, phone, timeZone });
 
-/** The viewer's own organization. */
-export async function getOrganization({ viewer }: { viewer: Viewer }): Promise<OrganizationDto> {
+// Read once per request: the app layout (for the time zone) and the page both ask for it.
+const loadOrganization = cache(async (organizationId: string): Promise<OrganizationDto> => {
   db();
-  const row = await Organization.findByPk(viewer.organizationId);
+  const row = await Organization.findByPk(organizationId);
   if (!row) throw new AppError("NOT_FOUND", "No such organization.");
   return toDto(row);
+});
+
+/** The viewer's own organization. */
+export function getOrganization({ viewer }: { viewer: Viewer }): Promise<OrganizationDto> {
+  return loadOrganization(viewer.organizationId);
 }
 
 /** Changes the company's printed details; the audit trail keeps what changed. */

@@ -3,6 +3,7 @@ import type { Transaction } from "sequelize";
 import type Stripe from "stripe";
 import { Payment, ProcessorEvent } from "@/models";
 import { db } from "../db";
+import { isUuid } from "./ids";
 import { recordRefund, settleRefunded } from "./payments";
 
 export type EventOutcome = "applied" | "duplicate" | "ignored";
@@ -11,7 +12,8 @@ const idOf = (v: string | { id: string } | null | undefined) => (typeof v === "s
 
 /** The payment an object belongs to: by our id in its metadata, else by the processor's ids we stored. */
 async function findPayment(transaction: Transaction, { paymentId, sessionId, paymentIntentId }: { paymentId?: string | null; sessionId?: string | null; paymentIntentId?: string | null }) {
-  const where = paymentId ? { id: paymentId } : sessionId ? { checkoutSessionId: sessionId } : paymentIntentId ? { paymentIntentId } : null;
+  // Metadata can come from payments Ohmstead did not start; an id that is not ours is simply not found.
+  const where = paymentId && isUuid(paymentId) ? { id: paymentId } : sessionId ? { checkoutSessionId: sessionId } : paymentIntentId ? { paymentIntentId } : null;
   if (!where) return null;
   return Payment.findOne({ where, transaction, lock: transaction.LOCK.UPDATE });
 }

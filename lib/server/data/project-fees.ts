@@ -1,8 +1,8 @@
 import "server-only";
-import { Organization, Payment, PaymentLine, Project, Refund, User } from "@/models";
+import { Payment, PaymentLine, Project, Refund, User } from "@/models";
 import { runDesignReview } from "@/lib/design/run-review";
 import { can, type Viewer } from "@/lib/domain/permissions";
-import { DEFAULT_TIME_ZONE, localIsoDate } from "@/lib/domain/time-zones";
+import { localIsoDate } from "@/lib/domain/time-zones";
 import { AppError } from "@/lib/errors";
 import { computeFees, feeNameKey } from "@/lib/fees";
 import type { PaymentStatus } from "@/models/payment";
@@ -10,6 +10,7 @@ import { db } from "../db";
 import { getDesignWithContext } from "./designs";
 import { recordAudit } from "./audit";
 import { schedulesForProject } from "./fee-schedules";
+import { getOrganization } from "./organizations";
 
 export type FeeLineState = "unpaid" | "in-progress" | "paid";
 
@@ -89,10 +90,8 @@ export async function getProjectFees({ viewer, projectId }: { viewer: Viewer; pr
   const { project, design, catalog, conditions } = await getDesignWithContext({ viewer, projectId });
   const outcome = runDesignReview(design.draft, catalog, conditions);
   const sizes = outcome.status === "reviewed" ? { dcKw: outcome.review.summary.ratings.dcKw, acKw: outcome.review.summary.ratings.acKw } : null;
-  const row = await Project.findOne({ where: { id: projectId, organizationId: viewer.organizationId }, attributes: ["id", "declaredValuationCents"] });
-  const valuationCents = row?.declaredValuationCents ?? null;
-  const organization = await Organization.findByPk(viewer.organizationId, { attributes: ["timeZone"] });
-  const asOf = localIsoDate(new Date().toISOString(), organization?.timeZone ?? DEFAULT_TIME_ZONE);
+  const valuationCents = project.declaredValuationCents;
+  const asOf = localIsoDate(new Date().toISOString(), (await getOrganization({ viewer })).timeZone);
 
   const schedules = await schedulesForProject(viewer, project);
   const payments = await Payment.findAll({ where: { projectId, organizationId: viewer.organizationId }, include: PAYMENT_INCLUDE, order: [["createdAt", "DESC"]] });

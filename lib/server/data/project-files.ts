@@ -1,6 +1,6 @@
 import "server-only";
 import { createHash, randomUUID } from "node:crypto";
-import { Op } from "sequelize";
+import type { Transaction } from "sequelize";
 import { CommissioningRecord, ProjectFile, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
@@ -55,7 +55,7 @@ export async function uploadProjectFile({ viewer, projectId, kind, fileName, byt
       );
       await recordAudit({ viewer, action: "file.uploaded", entityType: "project", entityId: projectId, changes: { file: { before: null, after: `${kind}: ${name}` } } }, { transaction });
       if (kind === "signed-completion") {
-        const to = await coordinatorAddress(viewer, project.coordinator?.id ?? null);
+        const to = await coordinatorAddress(viewer, project.coordinator?.id ?? null, transaction);
         const record = await CommissioningRecord.findOne({ where: { projectId }, transaction });
         const mail = completionReceivedEmail({
           installerName: viewer.name,
@@ -76,11 +76,12 @@ export async function uploadProjectFile({ viewer, projectId, kind, fileName, byt
   }
 }
 
-/** The project's coordinator, or else the organization's first active admin, so a notice always has someone to go to. */
-async function coordinatorAddress(viewer: Viewer, coordinatorId: string | null): Promise<string | null> {
-  const where = coordinatorId ? { id: coordinatorId, organizationId: viewer.organizationId, isActive: true } : { organizationId: viewer.organizationId, role: "admin", isActive: true };
-  const user = (await User.findOne({ where, order: [["createdAt", "ASC"]] })) ?? (await User.findOne({ where: { organizationId: viewer.organizationId, role: { [Op.in]: ["admin", "coordinator"] }, isActive: true }, order: [["createdAt", "ASC"]] }));
-  return user?.email ?? null;
+/** The project's coordinator, or else the organization's longest-standing active admin, so a notice always has someone to go to. */
+async function coordinatorAddress(viewer: Viewer, coordinatorId: string | null, transaction: Transaction): Promise<string | null> {
+  const active = { organizationId: viewer.organizationId, isActive: true };
+  const coordinator = coordinatorId ? await User.findOne({ where: { ...active, id: coordinatorId }, transaction }) : null;
+  const admin = coordinator ? null : await User.findOne({ where: { ...active, role: "admin" }, order: [["createdAt", "ASC"]], transaction });
+  return (coordinator ?? admin)?.email ?? null;
 }
 
 export async function listProjectFiles({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<ProjectFileDto[]> {

@@ -38,6 +38,7 @@ export type ProjectDto = {
   daysInStage: number;
   coordinator: { id: string; name: string } | null;
   installer: { id: string; name: string } | null;
+  declaredValuationCents: number | null; // the owner's declared value of the work; percentage fees read it
   createdAt: string;
   updatedAt: string;
 };
@@ -78,6 +79,7 @@ function toProjectDto(p: Project, now = Date.now()): ProjectDto {
     daysInStage: Math.max(0, Math.floor((now - p.stageChangedAt.getTime()) / DAY_MS)),
     coordinator: p.coordinator ? { id: p.coordinator.id, name: p.coordinator.name } : null,
     installer: p.installer ? { id: p.installer.id, name: p.installer.name } : null,
+    declaredValuationCents: p.declaredValuationCents ?? null,
     createdAt: p.createdAt.toISOString(),
     updatedAt: p.updatedAt.toISOString(),
   };

@@ -1,29 +1,25 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { isAppError } from "@/lib/errors";
 import { applyProcessorEvent } from "@/lib/server/data/payment-events";
 import { toErrorResponse } from "@/lib/server/http";
 import { verifyWebhook } from "@/lib/server/services/payments";
 
+// Events are a few kilobytes; anything far larger is not one.
 const MAX_EVENT_BYTES = 512 * 1024;
+const refuse = (status: 400 | 413, message: string) => NextResponse.json({ error: { code: status === 400 ? "INVALID_INPUT" : "TOO_LARGE", message } }, { status });
 
 // POST /api/webhooks/stripe – signed events from the payment processor; no session, the signature is the check
 export async function POST(request: NextRequest) {
-  // Events are a few kilobytes; anything far larger is not one, and is refused before it is read.
-  if (Number(request.headers.get("content-length") ?? 0) > MAX_EVENT_BYTES) return NextResponse.json({ error: { code: "TOO_LARGE", message: "Event too large." } }, { status: 413 });
-  let event;
+  if (Number(request.headers.get("content-length") ?? 0) > MAX_EVENT_BYTES) return refuse(413, "Event too large.");
+  // The signature covers the exact bytes sent, so the body is read as text before anything parses it.
+  const payload = await request.text();
+  if (payload.length > MAX_EVENT_BYTES) return refuse(413, "Event too large.");
   try {
-    // The signature covers the exact bytes sent, so the body is read as text before anything parses it.
-    const payload = await request.text();
-    if (payload.length > MAX_EVENT_BYTES) return NextResponse.json({ error: { code: "TOO_LARGE", message: "Event too large." } }, { status: 413 });
-    event = verifyWebhook(payload, request.headers.get("stripe-signature"));
+    const event = verifyWebhook(payload, request.headers.get("stripe-signature"));
+    // A 5xx from here makes the processor deliver the event again later; nothing was committed.
+    return NextResponse.json({ received: true, outcome: await applyProcessorEvent(event) });
   } catch (error) {
-    const response = toErrorResponse(error);
-    return response.status === 422 ? NextResponse.json(await response.json(), { status: 400 }) : response;
-  }
-  try {
-    const outcome = await applyProcessorEvent(event);
-    return NextResponse.json({ received: true, outcome });
-  } catch (error) {
-    // A 5xx makes the processor deliver the event again later; nothing was committed.
+    if (isAppError(error) && error.code === "INVALID_INPUT") return refuse(400, error.message);
     return toErrorResponse(error);
   }
 }

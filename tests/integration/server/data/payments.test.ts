@@ -179,6 +179,12 @@ describe("fees and payments", () => {
     expect(second.paymentId).not.toBe(paymentId);
   });
 
+  it("ignores a signed event for a payment Ohmstead did not start, even with odd metadata", async () => {
+    const event = { id: `evt_foreign_${Date.now()}`, object: "event", type: "checkout.session.completed", created: 1, livemode: false, api_version: null, pending_webhooks: 1, request: { id: null, idempotency_key: null }, data: { object: { id: "cs_test_not_ours", object: "checkout.session", payment_status: "paid", payment_intent: "pi_not_ours", metadata: { paymentId: "order-42" } } } } as unknown as Stripe.Event;
+    expect(await deliver(event)).toEqual({ status: 200, body: { received: true, outcome: "ignored" } });
+    expect(await deliver(event)).toEqual({ status: 200, body: { received: true, outcome: "duplicate" } });
+  });
+
   it("reconciles a payment whose webhook never arrived by asking the processor", async () => {
     const project = await projectWithDesign();
     const fees = await getProjectFees({ viewer: org.viewers.coordinator, projectId: project.id });

@@ -4,7 +4,6 @@ import { AuditEvent, CommissioningRecord, OutboxMessage, Project, StageChange } 
 import { AppError } from "@/lib/errors";
 import { ProjectInput, ProjectListQuery } from "@/lib/schemas/project";
 import { changeProjectStage, createProject, getProjectById, listProjects, listStageChanges, updateProject } from "@/lib/server/data/projects";
-import { db } from "@/lib/server/db";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, projectFormValues, type OrgFixture } from "../../support/fixtures";
 

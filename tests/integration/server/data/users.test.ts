@@ -4,7 +4,6 @@ import { AppError } from "@/lib/errors";
 import { InviteUserInput } from "@/lib/schemas/user";
 import { THROTTLE } from "@/lib/server/data/sign-in-throttle";
 import { acceptInvitation, authenticate, getInvitationByToken, inviteUser, listUsers, setUserActive, updateUserRole } from "@/lib/server/data/users";
-import { db } from "@/lib/server/db";
 import { closeDb } from "../../support/db";
 import { hashToken } from "@/lib/server/tokens";
 import { FIXTURE_PASSWORD, makeOrganization, type OrgFixture } from "../../support/fixtures";

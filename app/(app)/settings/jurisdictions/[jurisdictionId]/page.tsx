@@ -4,7 +4,7 @@ import { requirePermission } from "@/lib/server/auth";
 import { orNotFoundPage } from "@/lib/server/pages";
 import { getFeeSchedule } from "@/lib/server/data/fee-schedules";
 import { getJurisdictionById } from "@/lib/server/data/reference-data";
-import { FeeScheduleEditor } from "@/components/fees/fee-schedule-editor";
+import { FeeSchedulePanel } from "@/components/fees/fee-schedule-panel";
 import { JurisdictionForm } from "../_components/jurisdiction-form";
 
 export const metadata: Metadata = { title: "Edit jurisdiction" };
@@ -23,11 +23,7 @@ export default async function EditJurisdictionPage({ params }: { params: Promise
       <section className="panel">
         <JurisdictionForm jurisdictionId={j.id} initial={initial} />
       </section>
-      <section className="panel space-y-3" aria-labelledby="fee-schedule-title">
-        <h2 id="fee-schedule-title">Fee schedule</h2>
-        <p className="text-sm text-ink-soft">The permit fees this AHJ charges, worked out for each project from its reviewed design and declared valuation; lines sharing a name are versions of one fee, told apart by the day each takes effect.</p>
-        <FeeScheduleEditor authorityKind="jurisdiction" authorityId={j.id} authorityName={j.name} initialLines={feeLines} />
-      </section>
+      <FeeSchedulePanel authorityKind="jurisdiction" authorityId={j.id} authorityName={j.name} initialLines={feeLines} />
     </div>
   );
 }

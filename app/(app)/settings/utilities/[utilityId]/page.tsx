@@ -4,7 +4,7 @@ import { requirePermission } from "@/lib/server/auth";
 import { orNotFoundPage } from "@/lib/server/pages";
 import { getFeeSchedule } from "@/lib/server/data/fee-schedules";
 import { getUtilityById } from "@/lib/server/data/reference-data";
-import { FeeScheduleEditor } from "@/components/fees/fee-schedule-editor";
+import { FeeSchedulePanel } from "@/components/fees/fee-schedule-panel";
 import { UtilityForm } from "../_components/utility-form";
 
 export const metadata: Metadata = { title: "Edit utility" };
@@ -23,11 +23,7 @@ export default async function EditUtilityPage({ params }: { params: Promise<{ ut
       <section className="panel">
         <UtilityForm utilityId={u.id} initial={initial} />
       </section>
-      <section className="panel space-y-3" aria-labelledby="fee-schedule-title">
-        <h2 id="fee-schedule-title">Fee schedule</h2>
-        <p className="text-sm text-ink-soft">The interconnection fees this utility charges, worked out for each project from its reviewed design and declared valuation; lines sharing a name are versions of one fee, told apart by the day each takes effect.</p>
-        <FeeScheduleEditor authorityKind="utility" authorityId={u.id} authorityName={u.name} initialLines={feeLines} />
-      </section>
+      <FeeSchedulePanel authorityKind="utility" authorityId={u.id} authorityName={u.name} initialLines={feeLines} />
     </div>
   );
 }

@@ -121,11 +121,11 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
       </div>
 
       <fieldset disabled={readOnly} className="space-y-4">
-        <Reading title="Grid profile set on the inverter" hint={facts.requiredGridProfile ? `The utility requires: ${facts.requiredGridProfile}` : "The utility's required profile is not on file; ask the office."} result={byId("grid-profile")} error={errors.gridProfileSet}>
+        <Reading title="Grid profile set on the inverter" inputId="gridProfileSet" hint={facts.requiredGridProfile ? `The utility requires: ${facts.requiredGridProfile}` : "The utility's required profile is not on file; ask the office."} result={byId("grid-profile")} error={errors.gridProfileSet}>
           <input id="gridProfileSet" data-required={facts.requiredGridProfile ?? ""} className="input text-base" autoComplete="off" {...reg("gridProfileSet")} />
         </Reading>
 
-        <Reading title="AC voltage at the point of connection" hint={`Nominal service ${facts.nominalServiceV} V.`} result={byId("ac-voltage")} error={errors.acVoltageV} unit="V">
+        <Reading title="AC voltage at the point of connection" inputId="acVoltageV" hint={`Nominal service ${facts.nominalServiceV} V.`} result={byId("ac-voltage")} error={errors.acVoltageV} unit="V">
           <input id="acVoltageV" className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg("acVoltageV")} />
         </Reading>
 
@@ -140,7 +140,7 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
               const window = fact ? shutdownWindow(fact.devicesInSeries, fact.perDeviceV) : null;
               const hint = fact && window ? `${fact.devicesInSeries} devices in series: expect about ${fmtV(window.expectedV)} to ${fmtV(window.highV)} V.` : undefined;
               return (
-                <Reading key={s.id} title={`String ${s.id}`} hint={hint} result={byId(`string-shutdown:${s.id}`)} error={errors[`strings.${i}.measuredV`]} unit="V" bare>
+                <Reading key={s.id} title={`String ${s.id}`} inputId={`strings.${i}.measuredV`} hint={hint} result={byId(`string-shutdown:${s.id}`)} error={errors[`strings.${i}.measuredV`]} unit="V" bare>
                   <input id={`strings.${i}.measuredV`} data-expected-v={window?.expectedV} className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg(`strings.${i}.measuredV`)} />
                 </Reading>
               );
@@ -148,7 +148,7 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
           </section>
         ) : null}
 
-        <Reading title="Modules reporting" hint={`${facts.modulesInstalled} modules installed. Every one must report before the record is complete.`} result={byId("modules-reporting")} error={errors.modulesReporting} unit="modules">
+        <Reading title="Modules reporting" inputId="modulesReporting" hint={`${facts.modulesInstalled} modules installed. Every one must report before the record is complete.`} result={byId("modules-reporting")} error={errors.modulesReporting} unit="modules">
           <input id="modulesReporting" data-installed={facts.modulesInstalled} className="input measure text-base" inputMode="numeric" autoComplete="off" {...reg("modulesReporting")} />
         </Reading>
 
@@ -226,11 +226,10 @@ function LabelledInput({ label, htmlFor, unit, error, children }: { label: strin
 }
 
 /** One reading with its check right under it: the result word, what was found, and what to do. */
-function Reading({ title, hint, unit, result, error, bare, children }: { title: string; hint?: string; unit?: string; result?: CommissioningCheck; error?: string; bare?: boolean; children: React.ReactNode }) {
-  const id = (children as { props?: { id?: string } })?.props?.id ?? title;
+function Reading({ title, inputId, hint, unit, result, error, bare, children }: { title: string; inputId: string; hint?: string; unit?: string; result?: CommissioningCheck; error?: string; bare?: boolean; children: React.ReactNode }) {
   return (
     <section className={clsx("space-y-2", !bare && "panel")} aria-label={title}>
-      <LabelledInput label={title} htmlFor={id} unit={unit} error={error}>
+      <LabelledInput label={title} htmlFor={inputId} unit={unit} error={error}>
         {children}
       </LabelledInput>
       {hint ? <p className="text-xs text-ink-soft">{hint}</p> : null}
