@@ -1,5 +1,5 @@
 import type { z } from "zod";
-import { AppError } from "@/lib/errors";
+import { AppError, groupFieldErrors } from "@/lib/errors";
 import type { DesignProblem } from "./to-engine";
 
 const IDENTIFIER = /^[A-Za-z_$][\w$]*$/;
@@ -25,7 +25,5 @@ export function problemsOfZod(error: z.ZodError): DesignProblem[] {
 
 /** A 422 naming every problem by its path, in the shape every API error has. */
 export function problemsError(message: string, problems: DesignProblem[]): AppError {
-  const fieldErrors: Record<string, string[]> = {};
-  for (const p of problems) (fieldErrors[p.path] ??= []).push(p.message);
-  return new AppError("INVALID_INPUT", message, fieldErrors);
+  return new AppError("INVALID_INPUT", message, groupFieldErrors(problems.map((p) => [p.path, p.message] as const)));
 }

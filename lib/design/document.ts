@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { CONDUCTOR_SIZES, type ConductorSize, sizeLabel } from "@/lib/engineering/tables/conductor-sizes";
 import { TRADE_SIZES } from "@/lib/engineering/tables/conduit";
-import { numberField, optionalNumberField, type Range } from "@/lib/schemas/fields";
+import { numberField, optionalNumberField, safeString, type Range } from "@/lib/schemas/fields";
 
 // The public design document of POST /api/v1/design-review: plain JSON, units in
 // the field names. Beyond the fields every integration needs, it carries optional
@@ -13,8 +13,8 @@ const num = numberField;
 const optNum = optionalNumberField;
 const whole = (label: string, range: Range) => num(label, range).refine(Number.isInteger, `${label} must be a whole number`);
 const optWhole = (label: string, range: Range) => optNum(label, range).refine((v) => v === undefined || Number.isInteger(v), `${label} must be a whole number`);
-const id = z.string({ error: "Give an id (text of 1 to 40 characters)" }).trim().min(1, "The id must not be blank").max(40, "Ids are at most 40 characters");
-const text = (max: number) => z.string({ error: "Must be text" }).trim().max(max, `At most ${max} characters`).optional();
+const id = safeString({ error: "Give an id (text of 1 to 40 characters)" }).trim().min(1, "The id must not be blank").max(40, "Ids are at most 40 characters");
+const text = (max: number) => safeString({ error: "Must be text" }).trim().max(max, `At most ${max} characters`).optional();
 const flag = (label: string) => z.boolean({ error: `${label} must be true or false` }).optional();
 const oneOf = <const T extends readonly [string, ...string[]]>(values: T) => z.enum(values, { error: `Use one of: ${values.map((v) => `"${v}"`).join(", ")}` });
 const oneOfNumbers = <const T extends readonly [number, ...number[]]>(values: T) =>

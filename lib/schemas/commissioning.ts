@@ -1,11 +1,12 @@
 import { z } from "zod";
+import { safeString } from "./fields";
 
 /**
  * A meter reading as typed on a phone: empty means "not taken yet" (null), anything else must be a
  * number. Negative or implausible numbers pass through so the checks can flag them with a reason.
  */
 const reading = z
-  .union([z.number(), z.string(), z.null()])
+  .union([z.number(), safeString(), z.null()])
   .optional()
   .transform((value, ctx): number | null => {
     if (value === null || value === undefined) return null;
@@ -33,7 +34,7 @@ export const CommissioningReadings = z.object({
     .transform((v) => (v ? v : null)),
   acVoltageV: reading,
   strings: z
-    .array(z.object({ id: z.string().trim().min(1).max(80), measuredV: reading }))
+    .array(z.object({ id: safeString().trim().min(1).max(80), measuredV: reading }))
     .max(200, "At most 200 strings")
     .default([]),
   modulesReporting: wholeReading,
@@ -52,7 +53,7 @@ export type CommissioningReadingsInput = z.input<typeof CommissioningReadings>;
 export type CommissioningReadings = z.output<typeof CommissioningReadings>;
 
 export const SaveCommissioningInput = z.object({
-  projectId: z.string().uuid("Unknown project"),
+  projectId: safeString().uuid("Unknown project"),
   readings: CommissioningReadings,
   /** Ask to mark the record complete; refused (and the readings still saved) while anything fails or is missing. */
   complete: z.boolean().default(false),

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { safeString } from "./fields";
 import { CONDUCTOR_SIZES } from "@/lib/engineering/tables/conductor-sizes";
 
 export const TRADE_SIZES = ["1/2", "3/4", "1", "1-1/4", "1-1/2", "2"] as const;
@@ -19,10 +20,10 @@ const required = (label: string, min: number, max: number, unit = "", opts = {})
 const optional = (label: string, min: number, max: number, unit = "", opts = {}) =>
   z.preprocess(blankToUndefined, numberIn(label, min, max, unit, opts).optional()) as unknown as z.ZodType<number | undefined, string | number | undefined>;
 const choice = <const T extends readonly [string, ...string[]]>(values: T, label: string) => z.enum(values, { error: `Choose the ${label}` });
-const text = (label: string, max: number) => z.string().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
-const optionalText = (max: number) => z.string().trim().max(max, `At most ${max} characters`).optional();
-const catalogId = (label: string) => z.string({ error: `Choose a ${label}` }).uuid(`Choose a ${label}`);
-const lineId = z.string().min(1).max(20);
+const text = (label: string, max: number) => safeString().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
+const optionalText = (max: number) => safeString().trim().max(max, `At most ${max} characters`).optional();
+const catalogId = (label: string) => safeString({ error: `Choose a ${label}` }).uuid(`Choose a ${label}`);
+const lineId = safeString().min(1).max(20);
 const flag = z.boolean().optional();
 
 /** The design as the review needs it; parsed on the client as you type and again on the server. */
@@ -33,7 +34,7 @@ export const DesignInput = z.object({
       .array(z.object({ lineId, equipmentId: catalogId("inverter"), quantity: required("Quantity", 1, 200, "", { integer: true }) }))
       .min(1, "Add at least one inverter")
       .max(6, "At most 6 inverter lines"),
-    deviceId: z.union([z.string().uuid("Choose a module-level device, or none"), z.literal("")]).optional().transform((v) => v || null),
+    deviceId: z.union([safeString().uuid("Choose a module-level device, or none"), z.literal("")]).optional().transform((v) => v || null),
     listedRapidShutdownSystem: flag,
   }),
   array: z.object({
@@ -56,7 +57,7 @@ export const DesignInput = z.object({
       .array(
         z.object({
           lineId,
-          inverterLineId: z.string({ error: "Choose the inverter this string feeds" }).min(1, "Choose the inverter this string feeds").max(20),
+          inverterLineId: safeString({ error: "Choose the inverter this string feeds" }).min(1, "Choose the inverter this string feeds").max(20),
           mpptIndex: optional("MPPT input", 1, 12, "", { integer: true }),
           modulesInSeries: required("Modules in series", 1, 40, "", { integer: true }),
           parallelCount: required("Strings in parallel", 1, 8, "", { integer: true }),
@@ -92,7 +93,7 @@ export const DesignInput = z.object({
       z.object({
         lineId,
         label: text("run name", 60),
-        circuit: z.string({ error: "Choose what this run carries" }).regex(/^(dc|ac):[\w.-]+$/, "Choose what this run carries"),
+        circuit: safeString({ error: "Choose what this run carries" }).regex(/^(dc|ac):[\w.-]+$/, "Choose what this run carries"),
         lengthFt: required("Length", 1, 2000, "ft"),
         material: choice(["Cu", "Al"], "conductor material"),
         size: choice(CONDUCTOR_SIZES, "conductor size"),
@@ -122,7 +123,7 @@ export type DesignInput = z.output<typeof DesignInput>;
 export type DesignFormValues = z.input<typeof DesignInput>;
 
 type Leaf = string | number | boolean | null | undefined;
-const LOOSE_LEAF = z.union([z.string().max(200), z.number(), z.boolean(), z.null()]).optional();
+const LOOSE_LEAF = z.union([safeString().max(200), z.number(), z.boolean(), z.null()]).optional();
 
 /** The same shape with every leaf accepting whatever was typed: drafts are saved as they are. */
 function loosen(schema: z.ZodType): z.ZodType {

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { blankToUndefined, numberField, optionalNumberField, optionalText, requiredText, toNumber, whenValid } from "./fields";
+import { blankToUndefined, numberField, optionalNumberField, optionalText, requiredText, safeString, toNumber, whenValid } from "./fields";
 
 // Catalog items as the office enters them from data sheets.
 
@@ -117,7 +117,7 @@ export type EquipmentInput = z.input<typeof EquipmentInput>;
 export type EquipmentValues = z.output<typeof EquipmentInput>;
 
 /** An edit: the item's id beside its fields, so field errors keep the form's own paths. */
-export const UpdateEquipmentInput = z.object({ equipmentId: z.string().uuid("Unknown catalog item") }).and(EquipmentInput);
+export const UpdateEquipmentInput = z.object({ equipmentId: safeString().uuid("Unknown catalog item") }).and(EquipmentInput);
 
 /** A catalog item as the app shows it and the design review reads it. */
 export type EquipmentDto =
@@ -141,7 +141,7 @@ export const EquipmentListQuery = z.object({
   includeArchived: z.enum(["true", "false"], { error: "includeArchived must be true or false" }).default("false").transform((v) => v === "true"),
 });
 
-export const SetArchivedInput = z.object({ equipmentId: z.string().uuid("Unknown catalog item"), isArchived: z.boolean({ error: "isArchived must be true or false" }) });
+export const SetArchivedInput = z.object({ equipmentId: safeString().uuid("Unknown catalog item"), isArchived: z.boolean({ error: "isArchived must be true or false" }) });
 
 /** Data sheets: PDFs only, small enough to merge into a permit packet. */
 export const DATASHEET_MAX_BYTES = 20 * 1024 * 1024;

@@ -14,7 +14,7 @@ import {
   type FeeBasis,
   type FeeLine,
 } from "@/lib/fees";
-import { requiredText, whenValid } from "./fields";
+import { requiredText, safeString, whenValid } from "./fields";
 
 // Money is typed in dollars, as a schedule prints it ("150.00", "$1,250", "0.5"): that is what an
 // admin copies, and asking for cents invites slips by a factor of 100. The schema turns the text
@@ -46,12 +46,12 @@ function dollarsToCents(label: string, value: string | number, ctx: z.Refinement
 }
 
 const money = (label: string) =>
-  z.union([z.string(), z.number()], { error: `Enter the ${label}` }).transform((value, ctx) => dollarsToCents(label, value, ctx));
+  z.union([safeString(), z.number()], { error: `Enter the ${label}` }).transform((value, ctx) => dollarsToCents(label, value, ctx));
 
 /** Blank means "none": no minimum, no maximum. */
 const optionalMoney = (label: string) =>
   z
-    .union([z.string(), z.number(), z.null()], { error: `Enter the ${label} in dollars and cents, or leave it blank` })
+    .union([safeString(), z.number(), z.null()], { error: `Enter the ${label} in dollars and cents, or leave it blank` })
     .optional()
     .transform((value, ctx) => (isBlank(value) ? null : dollarsToCents(label, value!, ctx)));
 
@@ -64,7 +64,7 @@ const date = (label: string) =>
 
 const optionalDate = (label: string) =>
   z
-    .union([z.string(), z.null()], { error: `Enter the ${label} as YYYY-MM-DD, or leave it blank` })
+    .union([safeString(), z.null()], { error: `Enter the ${label} as YYYY-MM-DD, or leave it blank` })
     .optional()
     .transform((value, ctx) => {
       if (isBlank(value)) return null;
@@ -76,7 +76,7 @@ const optionalDate = (label: string) =>
 
 /** A tier's upper edge in kW; blank for the open-ended last tier. */
 const upToKw = z
-  .union([z.string(), z.number(), z.null()], { error: "Enter the tier's upper size in kW, or leave the last one blank" })
+  .union([safeString(), z.number(), z.null()], { error: "Enter the tier's upper size in kW, or leave the last one blank" })
   .optional()
   .transform((value, ctx) => {
     if (isBlank(value)) return null;
@@ -94,7 +94,7 @@ const upToKw = z
   });
 
 /** The stored percent: no spaces or % sign, no needless zeros ("01.50 %" → "1.5"). */
-const ratePercent = z.union([z.string(), z.number()], { error: "Enter the percent, e.g. 1.25" }).transform((value, ctx) => {
+const ratePercent = z.union([safeString(), z.number()], { error: "Enter the percent, e.g. 1.25" }).transform((value, ctx) => {
   const text = asText(value).replace(/\s*%$/, "");
   const [whole = "", decimals = ""] = text.split(".");
   const significant = decimals.replace(/0+$/, "");
@@ -152,7 +152,7 @@ function toStoredBasis(basis: z.output<typeof BasisInput>): FeeBasis {
 /** One fee line as the schedule form submits it; parses to the line as stored (`FeeLine`). */
 export const FeeLineInput = z
   .object({
-    id: z.string({ error: "The line needs an id" }).trim().min(1, "The line needs an id").max(64, "A line id is at most 64 characters"),
+    id: safeString({ error: "The line needs an id" }).trim().min(1, "The line needs an id").max(64, "A line id is at most 64 characters"),
     name: requiredText("fee's name", 120),
     effectiveFrom: date("date the fee takes effect"),
     effectiveUntil: optionalDate("end date"),

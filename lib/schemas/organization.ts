@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { safeString } from "./fields";
 import { US_TIME_ZONES } from "@/lib/domain/time-zones";
 
 const optional = (max: number) =>
@@ -10,7 +11,7 @@ const optional = (max: number) =>
 
 /** The company's details as packets, field reports and receipts print them. */
 export const OrganizationInput = z.object({
-  name: z.string().trim().min(2, "Enter the company's name").max(200, "At most 200 characters"),
+  name: safeString().trim().min(2, "Enter the company's name").max(200, "At most 200 characters"),
   licenseNumber: optional(60),
   phone: optional(40),
   timeZone: z.enum(US_TIME_ZONES.map((t) => t.id) as [string, ...string[]], { error: "Choose one of the listed time zones" }),

@@ -1,8 +1,9 @@
 import { z } from "zod";
+import { safeString } from "./fields";
 import { PACKET_KINDS } from "@/lib/packets/packet-input";
 
 export const RequestPacketInput = z.object({
   kind: z.enum(PACKET_KINDS, { error: "Choose the permit or the interconnection packet" }),
-  overrideReason: z.string().trim().max(1000, "At most 1000 characters").optional(),
+  overrideReason: safeString().trim().max(1000, "At most 1000 characters").optional(),
 });
 export type RequestPacketInput = z.infer<typeof RequestPacketInput>;

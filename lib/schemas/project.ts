@@ -1,7 +1,8 @@
 import { z } from "zod";
+import { safeString } from "./fields";
 import { STAGES } from "@/lib/domain/stages";
 
-const text = (label: string, max: number) => z.string().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
+const text = (label: string, max: number) => safeString().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
 const optionalText = (max: number) =>
   z
     .string()
@@ -12,13 +13,13 @@ const optionalText = (max: number) =>
     .optional()
     .transform((v) => v ?? null);
 const optionalId = z
-  .union([z.string().uuid("Unknown choice"), z.literal(""), z.null()])
+  .union([safeString().uuid("Unknown choice"), z.literal(""), z.null()])
   .optional()
   .transform((v) => (v ? v : null));
 // Form fields arrive as strings; the API may send numbers. Empty means "not known yet".
 const optionalAmps = (label: string) =>
   z
-    .union([z.number(), z.string().trim()])
+    .union([z.number(), safeString().trim()])
     .optional()
     .nullable()
     .transform((v, ctx) => {
@@ -37,14 +38,14 @@ export const ProjectInput = z
   .object({
     customerName: text("customer's name", 160),
     customerEmail: z
-      .union([z.string().trim().toLowerCase().email("Enter a valid e-mail address").max(254), z.literal("")])
+      .union([safeString().trim().toLowerCase().email("Enter a valid e-mail address").max(254), z.literal("")])
       .optional()
       .transform((v) => v || null),
     customerPhone: optionalText(40),
     street: text("street address", 200),
     city: text("city", 100),
-    state: z.string().trim().toUpperCase().regex(/^[A-Z]{2}$/, "Use the two-letter state code"),
-    postalCode: z.string().trim().regex(/^\d{5}(-\d{4})?$/, "Use a 5-digit ZIP code"),
+    state: safeString().trim().toUpperCase().regex(/^[A-Z]{2}$/, "Use the two-letter state code"),
+    postalCode: safeString().trim().regex(/^\d{5}(-\d{4})?$/, "Use a 5-digit ZIP code"),
     jurisdictionId: optionalId,
     utilityId: optionalId,
     utilityAccountNumber: optionalText(40),
@@ -52,7 +53,7 @@ export const ProjectInput = z
     mainBreakerA: optionalAmps("Main breaker"),
     busbarA: optionalAmps("Busbar rating"),
     serviceVoltageV: z
-      .union([z.number(), z.string().trim()])
+      .union([z.number(), safeString().trim()])
       .optional()
       .nullable()
       .transform((v, ctx) => {
@@ -83,9 +84,9 @@ export type ProjectValues = z.output<typeof ProjectInput>;
 export const StageSchema = z.enum(STAGES, { error: `Unknown stage; use one of: ${STAGES.join(", ")}` });
 
 export const ChangeStageInput = z.object({
-  projectId: z.string().uuid("Unknown project"),
+  projectId: safeString().uuid("Unknown project"),
   toStage: StageSchema,
-  note: z.string().trim().max(2000, "At most 2000 characters").default(""),
+  note: safeString().trim().max(2000, "At most 2000 characters").default(""),
 });
 export type ChangeStageInput = z.input<typeof ChangeStageInput>;
 
@@ -96,7 +97,7 @@ export const ProjectListQuery = z.object({
   pageSize: z.coerce.number({ error: "pageSize must be a number" }).int().min(1).max(100, "pageSize is at most 100").default(20),
   sort: z.enum(PROJECT_SORTS, { error: `sort must be one of: ${PROJECT_SORTS.join(", ")}` }).default("number"),
   direction: z.enum(["asc", "desc"], { error: "direction must be asc or desc" }).default("desc"),
-  q: z.string().trim().max(100, "Search text is at most 100 characters").default(""),
+  q: safeString().trim().max(100, "Search text is at most 100 characters").default(""),
   stage: z.union([StageSchema, z.literal("")]).default(""),
 });
 export type ProjectListQuery = z.infer<typeof ProjectListQuery>;

@@ -1,11 +1,11 @@
 import { z } from "zod";
 import { NEC_EDITIONS } from "@/lib/domain/roles";
-import { numberField, optionalText, requiredText, toNumber, whenValid } from "./fields";
+import { numberField, optionalText, requiredText, safeString, toNumber, whenValid } from "./fields";
 
 export const JurisdictionInput = z
   .object({
     name: requiredText("authority's name", 160),
-    state: z.string().trim().toUpperCase().regex(/^[A-Z]{2}$/, "Use the two-letter state code"),
+    state: safeString().trim().toUpperCase().regex(/^[A-Z]{2}$/, "Use the two-letter state code"),
     necEdition: z.preprocess(toNumber, z.union(NEC_EDITIONS.map((e) => z.literal(e)), { error: `Choose the adopted NEC edition: ${NEC_EDITIONS.join(", ")}` })),
     // ASHRAE extreme annual mean minimum design dry-bulb temperature of the nearest station.
     recordLowTempC: numberField("Record low", { min: -60, max: 20, unit: "°C" }),
@@ -24,9 +24,9 @@ export type JurisdictionValues = z.output<typeof JurisdictionInput>;
 const serviceVoltages = z.preprocess(
   (v) => (typeof v === "string" ? v.split(/\r?\n/) : v),
   z
-    .array(z.string({ error: "Each service voltage is text" }).trim().max(40, "Each service voltage is at most 40 characters"), { error: "List the service voltages" })
+    .array(safeString({ error: "Each service voltage is text" }).trim().max(40, "Each service voltage is at most 40 characters"), { error: "List the service voltages" })
     .transform((list) => list.filter(Boolean))
-    .pipe(z.array(z.string()).min(1, "Enter at least one service voltage").max(8, "At most 8 service voltages")),
+    .pipe(z.array(safeString()).min(1, "Enter at least one service voltage").max(8, "At most 8 service voltages")),
 );
 
 export const UtilityInput = z.object({
@@ -39,5 +39,5 @@ export const UtilityInput = z.object({
 export type UtilityInput = z.input<typeof UtilityInput>;
 export type UtilityValues = z.output<typeof UtilityInput>;
 
-export const UpdateJurisdictionInput = z.object({ jurisdictionId: z.string().uuid("Unknown jurisdiction") }).and(JurisdictionInput);
-export const UpdateUtilityInput = z.object({ utilityId: z.string().uuid("Unknown utility") }).and(UtilityInput);
+export const UpdateJurisdictionInput = z.object({ jurisdictionId: safeString().uuid("Unknown jurisdiction") }).and(JurisdictionInput);
+export const UpdateUtilityInput = z.object({ utilityId: safeString().uuid("Unknown utility") }).and(UtilityInput);

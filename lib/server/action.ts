@@ -2,19 +2,15 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { z } from "zod";
 import { can, type Permission, type Viewer } from "@/lib/domain/permissions";
-import { isAppError, type ErrorCode } from "@/lib/errors";
+import { groupFieldErrors, isAppError, type ErrorCode } from "@/lib/errors";
+import { findUnstorableInput } from "@/lib/schemas/fields";
 import { getViewer } from "./auth";
 
 export type ActionResult<T> = { ok: true; data: T } | { ok: false; code: ErrorCode | "INTERNAL"; message: string; fieldErrors?: Record<string, string[]> };
 
 /** zod issues as { "field.path": ["message", …] } for form.setError. */
 export function fieldErrorsOf(error: z.ZodError): Record<string, string[]> {
-  const out: Record<string, string[]> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.join(".") || "_form";
-    (out[key] ??= []).push(issue.message);
-  }
-  return out;
+  return groupFieldErrors(error.issues.map((issue) => [issue.path.join(".") || "_form", issue.message] as const));
 }
 
 /**
@@ -32,9 +28,12 @@ export function defineAction<S extends z.ZodType, T>(
       if (!viewer) return { ok: false, code: "UNAUTHORIZED", message: "Your session has ended. Sign in again." };
       if (!can(viewer, permission)) return { ok: false, code: "FORBIDDEN", message: "Your role does not allow this." };
     }
-    const parsed = schema.safeParse(raw);
-    if (!parsed.success) return { ok: false, code: "INVALID_INPUT", message: "Check the highlighted fields.", fieldErrors: fieldErrorsOf(parsed.error) };
     try {
+      // Parsing is inside the try: a schema that throws on hostile input is still answered, never a 500.
+      const unstorable = findUnstorableInput(raw);
+      if (unstorable) return { ok: false, code: "INVALID_INPUT", message: "Check the highlighted fields.", fieldErrors: { [unstorable.path]: [unstorable.message] } };
+      const parsed = schema.safeParse(raw);
+      if (!parsed.success) return { ok: false, code: "INVALID_INPUT", message: "Check the highlighted fields.", fieldErrors: fieldErrorsOf(parsed.error) };
       return { ok: true, data: await handler(parsed.data, { viewer: viewer as Viewer }) };
     } catch (error) {
       if (isAppError(error)) return { ok: false, code: error.code, message: error.message, fieldErrors: error.fieldErrors };

@@ -1,5 +1,5 @@
 import fc from "fast-check";
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, test } from "vitest";
 import type { DesignDocumentInput } from "@/lib/design/document";
 import { reviewDocument, reviewDocumentOrThrow } from "@/lib/design/document-review";
 import type { ReviewJson } from "@/lib/design/review-json";
@@ -145,5 +145,23 @@ describe("reviewDocument never throws for any JSON", () => {
       }),
       { numRuns: 1500 },
     );
+  });
+});
+
+describe("keys named like Object's own properties", () => {
+  // Defect: a document with a key such as "constructor" crashed the problem collector (a 500 from the API).
+  test.each(["constructor", "__proto__", "toString", "hasOwnProperty", "valueOf"])("%s is named as an unknown field, not a crash", (key) => {
+    const body = JSON.parse(`{"${key}": 1, "codeEdition": "2020"}`);
+    let thrown: unknown;
+    try {
+      reviewDocumentOrThrow(body);
+    } catch (error) {
+      thrown = error;
+    }
+    expect(thrown).toBeInstanceOf(AppError);
+    const fieldErrors = (thrown as AppError).fieldErrors!;
+    expect(Object.prototype.hasOwnProperty.call(fieldErrors, key)).toBe(true);
+    expect(fieldErrors[key]).toEqual(["Unknown field; check its spelling against the document format"]);
+    expect(JSON.parse(JSON.stringify(fieldErrors))[key]).toBeDefined();
   });
 });
