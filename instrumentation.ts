@@ -2,7 +2,8 @@
 // message naming each variable, rather than failing on the first request.
 export async function register() {
   if (process.env.NEXT_RUNTIME === "nodejs") {
-    const { exitOnBadEnv } = await import("@/lib/config/exit-on-bad-env");
+    const { exitOnBadEnv, exitOutsideFrontDoor } = await import("@/lib/config/exit-on-bad-env");
     exitOnBadEnv();
+    exitOutsideFrontDoor();
   }
 }

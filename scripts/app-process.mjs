@@ -54,10 +54,10 @@ export async function buildIfNeeded(root, env) {
   writeFileSync(stamp, want + "\n");
 }
 
-/** Starts `next start` or `next dev` in its own process group so it can be stopped whole. */
+/** Starts the app through scripts/serve.mjs (built, or with hot reload) in its own process group so it can be stopped whole. */
 export function serveApp(root, env, { dev, port }) {
-  const args = dev ? ["dev", "-H", "127.0.0.1", "-p", String(port)] : ["start", "-H", "127.0.0.1", "-p", String(port)];
-  return spawnGroup(root, bin(root, "next"), args, { ...env, ...(dev ? { NODE_ENV: "development" } : {}) });
+  const args = ["scripts/serve.mjs", "--host", "127.0.0.1", "--port", String(port), ...(dev ? ["--dev"] : [])];
+  return spawnGroup(root, process.execPath, args, { ...env, ...(dev ? { NODE_ENV: "development" } : {}) });
 }
 
 /** Starts the background worker that generates packets. */

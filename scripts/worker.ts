@@ -7,6 +7,7 @@ import { deliverDueMail } from "@/lib/server/services/outbox";
 import { generatePacket } from "@/lib/server/services/packet-generation";
 import { failAbandonedPackets } from "@/lib/server/data/packets";
 import { reconcilePendingPayments } from "@/lib/server/data/payments";
+import { pruneSignInAttempts } from "@/lib/server/data/sign-in-throttle";
 import { issueDueReceipts } from "@/lib/server/services/receipts";
 
 const url = process.env.DATABASE_URL;
@@ -44,7 +45,8 @@ console.log("• Mail worker is sending the outbox.");
 
 // Maintenance: receipts for newly paid payments, a look at the processor for checkouts whose
 // webhook never came (a crash between charge and webhook), so no payment stays unrecorded, and
-// packet generations a worker abandoned marked failed so they can be retried.
+// packet generations a worker abandoned marked failed so they can be retried, and sign-in failures
+// old enough that no throttle counts them forgotten.
 const RECEIPT_INTERVAL_MS = 2_000;
 const SLOW_CHECKS_EVERY = 15; // rounds, about 30 s
 let maintenanceRound: Promise<void> = Promise.resolve();
@@ -57,6 +59,7 @@ async function maintenanceLoop() {
     if (slowChecks) {
       if (process.env.STRIPE_SECRET_KEY) await reconcilePendingPayments({ olderThanMs: 60_000 }).catch(logged("payment reconciliation"));
       await failAbandonedPackets().catch(logged("packet maintenance"));
+      await pruneSignInAttempts().catch(logged("sign-in attempt pruning"));
     }
     await issueDueReceipts().catch(logged("receipt"));
   })();

@@ -9,3 +9,14 @@ export function exitOnBadEnv() {
     process.exit(1);
   }
 }
+
+/**
+ * Stops a server started without scripts/serve.mjs (plain `next start`): only that script decides each
+ * client's address from the connection, and throttles and access logs would otherwise believe the
+ * X-Forwarded-For a client writes.
+ */
+export function exitOutsideFrontDoor() {
+  if (process.env.OHMSTEAD_FRONT_DOOR === "1") return;
+  console.error("\nStart Ohmstead with `npm run serve` (scripts/serve.mjs), not `next start`: it takes each client's address from the connection or from TRUSTED_PROXY_HOPS proxies (see README.md, \"Configuration for production\").\n");
+  process.exit(1);
+}

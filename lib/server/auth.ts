@@ -7,18 +7,13 @@ import { z } from "zod";
 import { can, type Permission, type Viewer } from "@/lib/domain/permissions";
 import type { Role } from "@/lib/domain/roles";
 import { isAppError } from "@/lib/errors";
+import { clientAddress } from "./client-address";
 import { authenticate, getActiveViewer } from "./data/users";
 
 const CredentialsInput = z.object({
   email: z.string().trim().toLowerCase().email().max(254),
   password: z.string().min(1).max(200),
 });
-
-function clientAddress(headers: Record<string, unknown> | undefined): string {
-  const forwarded = headers?.["x-forwarded-for"];
-  const first = typeof forwarded === "string" ? forwarded.split(",")[0]?.trim() : "";
-  return first || "unknown";
-}
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: "jwt", maxAge: 12 * 60 * 60 },

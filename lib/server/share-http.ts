@@ -1,12 +1,12 @@
 import "server-only";
 import { ERROR_STATUS, isAppError } from "@/lib/errors";
 import { escapeHtml } from "@/templates/email/layout";
+import { clientAddress } from "./client-address";
 import type { ClientInfo } from "./data/share-links";
 
-/** Who opened a share link, as the access log records it (the proxy in front sets x-forwarded-for). */
+/** Who opened a share link, as the access log records it. */
 export function clientOf(headers: Headers): ClientInfo {
-  const forwarded = headers.get("x-forwarded-for")?.split(",")[0]?.trim();
-  return { address: forwarded || "unknown", userAgent: headers.get("user-agent") ?? "" };
+  return { address: clientAddress(headers), userAgent: headers.get("user-agent") ?? "" };
 }
 
 // Inspector pages must never be indexed, whatever answers them.
