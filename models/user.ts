@@ -18,7 +18,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
       {
         id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
         organizationId: { type: DataTypes.UUID, allowNull: false },
-        email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
+        // Unique per organization; one active account with a password per address (migration 20261205001000).
+        email: { type: DataTypes.STRING(254), allowNull: false },
         name: { type: DataTypes.STRING(120), allowNull: false },
         role: { type: DataTypes.STRING(20), allowNull: false },
         passwordHash: { type: DataTypes.STRING(100), allowNull: true },
@@ -27,7 +28,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "users", underscored: true },
+      { sequelize, modelName: "User", tableName: "users", underscored: true },
     );
   }
 }

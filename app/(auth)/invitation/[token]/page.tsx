@@ -19,6 +19,19 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
       </>
     );
   }
+  if (invitation.clash) {
+    return (
+      <>
+        <h1 className="mb-2 text-xl">This address already has an account</h1>
+        <p className="text-sm text-ink-soft" data-testid="invitation-clash">
+          {invitation.clash}
+        </p>
+        <p className="mt-4 text-sm">
+          <Link href="/sign-in">Go to sign-in</Link>
+        </p>
+      </>
+    );
+  }
   return (
     <>
       <h1 className="mb-1 text-xl">Welcome, {invitation.name}</h1>
