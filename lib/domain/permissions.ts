@@ -30,7 +30,7 @@ export type Permission =
 
 const GRANTS: Record<Role, readonly Permission[]> = {
   admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage", "field:record", "fees:pay", "fees:refund", "organization:edit"],
-  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "mailbox:view", "design:review", "field:record", "fees:pay"],
+  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "design:review", "field:record", "fees:pay"],
   installer: ["project:view", "design:review", "field:record"],
 };
 

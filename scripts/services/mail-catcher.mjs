@@ -27,6 +27,8 @@ export async function startMailCatcher({ smtpPort, httpPort, directory }) {
           const id = `${Date.now()}-${randomUUID().slice(0, 8)}`;
           const message = {
             id,
+            // The app's Message-ID names its outbox row, which tells the mailbox page whose mail it is.
+            messageId: mail.messageId ?? "",
             receivedAt: new Date().toISOString(),
             from: mail.from?.text ?? "",
             to: session.envelope.rcptTo.map((r) => r.address),

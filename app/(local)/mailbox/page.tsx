@@ -1,6 +1,10 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { isMailboxEnabled, listCaughtMessages } from "@/lib/server/services/mailbox";
+import { requirePermission } from "@/lib/server/auth";
+import { formatInZone } from "@/lib/domain/time-zones";
+import { listOrganizationMail } from "@/lib/server/data/mailbox";
+import { getOrganization } from "@/lib/server/data/organizations";
+import { isMailboxEnabled } from "@/lib/server/services/mailbox";
 
 export const metadata: Metadata = { title: "Local mailbox", robots: { index: false } };
 export const dynamic = "force-dynamic";
@@ -24,15 +28,17 @@ function Linked({ text }: { text: string }) {
   );
 }
 
-// Exists only while the local SMTP catcher runs (MAILBOX_URL set): a stand-in for everyone's inbox.
+// Exists only while the local SMTP catcher runs (MAILBOX_URL set): a stand-in for the inboxes of the
+// people an organization writes to, shown to that organization's admins only.
 export default async function MailboxPage() {
   if (!isMailboxEnabled()) notFound();
-  const messages = await listCaughtMessages();
+  const viewer = await requirePermission("mailbox:view");
+  const [messages, organization] = await Promise.all([listOrganizationMail({ viewer }), getOrganization({ viewer })]);
   return (
     <main className="mx-auto max-w-3xl space-y-4 px-4 py-8">
       <div>
         <h1>Local mailbox</h1>
-        <p className="text-sm text-ink-soft">Every e-mail the app sent while running with the local fakes. Nothing here left this machine.</p>
+        <p className="text-sm text-ink-soft">Every e-mail your organization sent while running with the local fakes. Nothing here left this machine.</p>
       </div>
       {messages.length === 0 ? <p className="text-ink-faint">No mail caught yet.</p> : null}
       {messages.map((m) => (
@@ -40,7 +46,7 @@ export default async function MailboxPage() {
           <header className="mb-2 border-b border-paper-edge pb-2 text-sm">
             <p className="font-semibold">{m.subject}</p>
             <p className="text-ink-soft">
-              To <span className="measure">{m.to.join(", ")}</span> · from {m.from} · <time dateTime={m.receivedAt}>{new Date(m.receivedAt).toLocaleString("en-US")}</time>
+              To <span className="measure">{m.to.join(", ")}</span> · from {m.from} · <time dateTime={m.receivedAt}>{formatInZone(m.receivedAt, organization.timeZone, "datetime")}</time>
             </p>
           </header>
           <div className="whitespace-pre-wrap text-sm">

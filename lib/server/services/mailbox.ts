@@ -3,6 +3,7 @@ import { env } from "../env";
 
 export type CaughtMessage = {
   id: string;
+  messageId?: string;
   receivedAt: string;
   from: string;
   to: string[];
@@ -17,6 +18,12 @@ export function isMailboxEnabled(): boolean {
   return Boolean(env().MAILBOX_URL);
 }
 
+/** The outbox row a caught message was sent from, read from the Message-ID the outbox gives each row. */
+export function outboxIdOf(message: CaughtMessage): string | null {
+  return /^<([0-9a-f-]{36})@outbox\.ohmstead>$/i.exec(message.messageId ?? "")?.[1] ?? null;
+}
+
+/** Every message the local catcher holds, newest first; callers show only the viewer's organization's. */
 export async function listCaughtMessages(): Promise<CaughtMessage[]> {
   const base = env().MAILBOX_URL;
   if (!base) return [];

@@ -1,6 +1,6 @@
 import { expect, test } from "@playwright/test";
 import { generatePacket } from "../support/packets";
-import { DEMO, listProjectsAs, signIn } from "../support/session";
+import { DEMO, listProjectsAs, mailboxFor, signIn } from "../support/session";
 
 test("coordinator shares a permit packet with an inspector, who opens and downloads it without an account, until the link is revoked", async ({ page, browser }) => {
   test.setTimeout(180_000);
@@ -30,18 +30,17 @@ test("coordinator shares a permit packet with an inspector, who opens and downlo
   await expect(link.getByTestId("share-link-status")).toHaveText("Active");
 
   // The inspector: the mailbox holds the message; the link opens in a browser with no session.
-  const context = await browser.newContext();
-  const guest = await context.newPage();
-  await guest.goto("/mailbox");
+  const inbox = await mailboxFor(browser);
   await expect(async () => {
-    await guest.reload();
-    await expect(guest.getByTestId("caught-message").filter({ hasText: inspector }).first()).toBeVisible({ timeout: 2_000 });
+    await inbox.reload();
+    await expect(inbox.getByTestId("caught-message").filter({ hasText: inspector }).first()).toBeVisible({ timeout: 2_000 });
   }).toPass({ timeout: 30_000 });
-  const message = guest.getByTestId("caught-message").filter({ hasText: inspector }).first();
+  const message = inbox.getByTestId("caught-message").filter({ hasText: inspector }).first();
   await expect(message).toContainText("Rough-in inspection on Thursday.");
   const mailedUrl = await message.getByRole("link", { name: /\/share\// }).first().getAttribute("href");
   expect(mailedUrl).toBe(shownUrl);
-  await context.clearCookies();
+  const context = await browser.newContext();
+  const guest = await context.newPage();
   const path = new URL(mailedUrl!).pathname;
 
   const opened = await guest.goto(path);

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from "@playwright/test";
-import { DEMO, listProjectsAs, pageFor, signIn } from "../support/session";
+import { DEMO, listProjectsAs, mailboxFor, pageFor, signIn } from "../support/session";
 
 // The local test-mode payments page: the SDK's hosted checkout, served by payments-fake/.
 async function payByCard(page: Page, card: string) {
@@ -54,8 +54,7 @@ test("coordinator pays fees: a declined card leaves them unpaid, the succeeding 
   await expect(paid).toContainText("visa •••• 4242");
 
   // The receipt reaches the mailbox and the page.
-  const mailbox = await browser.newPage();
-  await mailbox.goto("/mailbox");
+  const mailbox = await mailboxFor(browser);
   const receipt = mailbox.getByTestId("caught-message").filter({ hasText: /Receipt R-\d{4}-/ }).filter({ hasText: DEMO.coordinator });
   await expect(async () => {
     await mailbox.reload();

@@ -1,6 +1,6 @@
 import { expect, test, type Locator } from "@playwright/test";
 import { PDFDocument } from "pdf-lib";
-import { DEMO, listProjectsAs, pageFor } from "../support/session";
+import { DEMO, listProjectsAs, mailboxFor, pageFor } from "../support/session";
 
 // A phone held upright: the field record is laid out for this first.
 test.use({ viewport: { width: 390, height: 844 }, hasTouch: true });
@@ -79,13 +79,13 @@ test("installer on a phone records commissioning, corrects a failing reading, up
   await expect(phone.getByTestId("uploaded-files")).toContainText("signed-certificate.pdf");
 
   // The coordinator's notice arrives through the outbox.
-  const office = await pageFor(browser, DEMO.coordinator);
-  await office.goto("/mailbox");
-  const notice = office.getByTestId("caught-message").filter({ hasText: "Signed completion form received" }).filter({ hasText: "signed-certificate.pdf" });
+  const inbox = await mailboxFor(browser);
+  const notice = inbox.getByTestId("caught-message").filter({ hasText: "Signed completion form received" }).filter({ hasText: "signed-certificate.pdf" });
   await expect(async () => {
-    await office.reload();
+    await inbox.reload();
     await expect(notice.first()).toBeVisible({ timeout: 2_000 });
   }).toPass({ timeout: 30_000 });
+  const office = await pageFor(browser, DEMO.coordinator);
   const link = await notice.first().getByRole("link", { name: /\/field$/ }).first().getAttribute("href");
   expect(new URL(link!).pathname).toBe(`/projects/${project.id}/field`);
 

@@ -33,3 +33,10 @@ export async function listProjectsAs(page: Page, params: Record<string, string> 
   expect(res.status()).toBe(200);
   return (await res.json()).items;
 }
+
+/** The local mailbox as the first company's admin sees it: only mail that company sent. */
+export async function mailboxFor(browser: Browser, email: string = DEMO.admin) {
+  const page = await pageFor(browser, email);
+  await page.goto("/mailbox");
+  return page;
+}
