@@ -1,6 +1,8 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
 import type { User } from "./user";
 
+export type RefundStatus = "pending" | "succeeded" | "failed";
+
 /** Money returned on a payment, full or partial, by its id at the processor. */
 export class Refund extends Model<InferAttributes<Refund>, InferCreationAttributes<Refund>> {
   declare id: CreationOptional<string>;
@@ -8,6 +10,8 @@ export class Refund extends Model<InferAttributes<Refund>, InferCreationAttribut
   declare processorRefundId: string;
   declare amountCents: number;
   declare reason: string | null;
+  /** pending or succeeded count as returned; failed (the processor could not return it) does not. */
+  declare status: CreationOptional<RefundStatus>;
   declare createdById: string | null;
   declare createdAt: CreationOptional<Date>;
 
@@ -21,10 +25,11 @@ export class Refund extends Model<InferAttributes<Refund>, InferCreationAttribut
         processorRefundId: { type: DataTypes.STRING(255), allowNull: false, unique: true },
         amountCents: { type: DataTypes.INTEGER, allowNull: false },
         reason: { type: DataTypes.TEXT, allowNull: true },
+        status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: "succeeded" },
         createdById: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "refunds", underscored: true, updatedAt: false },
+      { sequelize, modelName: "Refund", tableName: "refunds", underscored: true, updatedAt: false },
     );
   }
 }

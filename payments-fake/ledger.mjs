@@ -708,4 +708,25 @@ export class Ledger {
     this.emit("charge.refunded", this.present(charge), context, previous);
     return refund;
   }
+
+  /**
+   * A refund the card network sends back after it had succeeded (a closed card account, say): the
+   * money stays with the merchant. Emits what Stripe documents for it: refund.failed and refund.updated.
+   */
+  failRefund(refundId, failureReason = "expired_or_canceled_card") {
+    const refund = this.store.refunds[refundId];
+    if (!refund) throw missing("refund", refundId, "refund");
+    if (refund.status === "failed") return refund;
+    const charge = this.store.charges[refund.charge];
+    const previous = { status: refund.status, failure_reason: null };
+    refund.status = "failed";
+    refund.failure_reason = failureReason;
+    charge.amount_refunded -= refund.amount;
+    charge.refunded = false;
+    this.store.save();
+    const context = { requestId: null, idempotencyKey: null, apiVersion: null };
+    this.emit("refund.failed", this.present(refund), context, previous);
+    this.emit("refund.updated", this.present(refund), context, previous);
+    return refund;
+  }
 }

@@ -347,6 +347,10 @@ export async function startPaymentsFake({
       }
       return attemptJson(res, () => ledger.authenticate(match[1], body.result));
     }
+    if (req.method === "POST" && (match = path.match(/^\/_fake\/refunds\/([\w-]+)\/fail$/))) {
+      const body = await readJson(req);
+      return sendJson(res, 200, ledger.present(ledger.failRefund(match[1], body.failure_reason)));
+    }
     if (req.method === "GET" && path === "/_fake/events") {
       const type = url.searchParams.get("type");
       const data = store.events.filter((entry) => !type || entry.event.type === type);

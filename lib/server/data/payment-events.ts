@@ -4,7 +4,7 @@ import type Stripe from "stripe";
 import { Payment, ProcessorEvent } from "@/models";
 import { db } from "../db";
 import { isUuid } from "./ids";
-import { recordRefund, settleRefunded } from "./payments";
+import { recordRefund } from "./payments";
 
 export type EventOutcome = "applied" | "duplicate" | "ignored";
 
@@ -97,13 +97,14 @@ export async function applyProcessorEvent(event: Stripe.Event): Promise<EventOut
         const charge = event.data.object;
         const payment = await findPayment(transaction, { paymentId: charge.metadata?.paymentId, paymentIntentId: idOf(charge.payment_intent) });
         if (!payment) return "ignored";
-        // A refund proves the charge went through, even if its success event has not arrived yet.
+        // A refund proves the charge went through, even if its success event has not arrived yet. The
+        // amounts come from the refund events, one per refund, so a refund that fails later stops counting.
         await markPaid(payment, { paymentIntentId: idOf(charge.payment_intent), card: cardOf(charge) }, transaction);
-        await settleRefunded(payment, charge.amount_refunded, transaction);
         return "applied";
       }
       case "refund.created":
-      case "refund.updated": {
+      case "refund.updated":
+      case "refund.failed": {
         const refund = event.data.object;
         const payment = await findPayment(transaction, { paymentId: refund.metadata?.paymentId, paymentIntentId: idOf(refund.payment_intent) });
         if (!payment) return "ignored";

@@ -2,6 +2,7 @@ import "server-only";
 import { Op, type Transaction } from "sequelize";
 import type Stripe from "stripe";
 import { Payment, PaymentLine, Project, Refund, User } from "@/models";
+import type { RefundStatus } from "@/models/refund";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import { formatUsd } from "@/lib/fees";
@@ -78,7 +79,20 @@ export async function startPayment({ viewer, projectId, feeKeys }: { viewer: Vie
   }
 }
 
-/** Returns money on a paid payment, all of it or part; recorded from the processor's answer. */
+/** The processor's refusal, in its own words, for the admin to read. */
+function refusalOf(error: unknown): AppError {
+  const message = error instanceof Error && error.message ? error.message : "no reason given";
+  const declined = typeof error === "object" && error !== null && "type" in error && String((error as { type: unknown }).type).startsWith("Stripe") && (error as { type: string }).type !== "StripeConnectionError";
+  if (declined) return new AppError("CONFLICT", `The payment service refused the refund: ${message}`);
+  console.error("refund", error);
+  return new AppError("CONFLICT", "The payment service did not answer. Nothing was refunded; try again in a minute.");
+}
+
+/**
+ * Returns money on a paid payment, all of it or part; recorded from the processor's answer. Two admins
+ * pressing Refund at once make one refund (the same idempotency key), and only the request that
+ * records it audits it and e-mails the payer.
+ */
 export async function refundPayment({ viewer, paymentId, amountCents, reason }: { viewer: Viewer; paymentId: string; amountCents: number; reason: string }): Promise<PaymentDto> {
   const sequelize = db();
   if (!can(viewer, "fees:refund")) throw new AppError("FORBIDDEN", "Only an admin can refund.");
@@ -90,12 +104,20 @@ export async function refundPayment({ viewer, paymentId, amountCents, reason }: 
   if (!Number.isInteger(amountCents) || amountCents <= 0 || amountCents > left) {
     throw new AppError("INVALID_INPUT", `Refund between $0.01 and ${formatUsd(left)}.`, { amount: [`At most ${formatUsd(left)}`] });
   }
-  const refund = await stripe().refunds.create(
-    { payment_intent: payment.paymentIntentId!, amount: amountCents, reason: "requested_by_customer", metadata: { paymentId: payment.id, note: reason.slice(0, 450) } },
-    { idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${amountCents}` },
-  );
+  const refund = await stripe()
+    .refunds.create(
+      { payment_intent: payment.paymentIntentId!, amount: amountCents, reason: "requested_by_customer", metadata: { paymentId: payment.id, note: reason.slice(0, 450) } },
+      { idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${amountCents}` },
+    )
+    .catch((error: unknown) => {
+      throw refusalOf(error);
+    });
+  if (refund.status === "failed" || refund.status === "canceled") {
+    throw new AppError("CONFLICT", `The payment service could not return the money${refund.failure_reason ? ` (${refund.failure_reason.replace(/_/g, " ")})` : ""}. Nothing was refunded.`);
+  }
   await sequelize.transaction(async (transaction) => {
-    await recordRefund(payment.id, refund, { reason, createdById: viewer.id }, transaction);
+    const { attributed } = await recordRefund(payment.id, refund, { reason, createdById: viewer.id }, transaction);
+    if (!attributed) return;
     await recordAudit({ viewer, action: "payment.refunded", entityType: "project", entityId: payment.projectId, changes: { refund: { before: null, after: `${formatUsd(amountCents)}: ${reason}` } } }, { transaction });
     const payer = payment.createdById ? await User.findByPk(payment.createdById, { transaction }) : null;
     const project = await Project.findByPk(payment.projectId, { transaction });
@@ -108,23 +130,35 @@ export async function refundPayment({ viewer, paymentId, amountCents, reason }: 
   return toPaymentDto((await Payment.findByPk(payment.id, { include: PAYMENT_INCLUDE }))!);
 }
 
-/** Records a refund once, by the processor's id, and brings the payment's refunded total and status along. */
-export async function recordRefund(paymentId: string, refund: Pick<Stripe.Refund, "id" | "amount" | "status">, extra: { reason: string | null; createdById: string | null }, transaction: Transaction) {
-  if (refund.status === "failed" || refund.status === "canceled") return;
+const refundStatusOf = (status: string | null): RefundStatus => (status === "failed" || status === "canceled" ? "failed" : status === "succeeded" ? "succeeded" : "pending");
+
+/**
+ * Records a refund once, by the processor's id, and brings the payment's refunded total and status
+ * along. Failed is final: a late "succeeded" never revives it. `attributed` is true for the one call
+ * that first records who asked for the refund, whichever of the admin's request and the webhook came first.
+ */
+export async function recordRefund(paymentId: string, refund: Pick<Stripe.Refund, "id" | "amount" | "status">, extra: { reason: string | null; createdById: string | null }, transaction: Transaction): Promise<{ attributed: boolean }> {
   const payment = await Payment.findByPk(paymentId, { transaction, lock: transaction.LOCK.UPDATE });
-  if (!payment) return;
-  const [row, created] = await Refund.findOrCreate({ where: { processorRefundId: refund.id }, defaults: { paymentId, processorRefundId: refund.id, amountCents: refund.amount, reason: extra.reason, createdById: extra.createdById }, transaction });
+  if (!payment) return { attributed: false };
+  const status = refundStatusOf(refund.status);
+  const [row, created] = await Refund.findOrCreate({ where: { processorRefundId: refund.id }, defaults: { paymentId, processorRefundId: refund.id, amountCents: refund.amount, reason: extra.reason, createdById: extra.createdById, status }, transaction });
+  const changes: Partial<Refund> = {};
+  if (!created && row.status !== "failed" && status !== row.status && (status === "failed" || row.status === "pending")) changes.status = status;
+  const attributed = Boolean(extra.createdById) && (created || !row.createdById);
   // The webhook may have recorded it first; the admin's own call then adds who asked and why.
-  if (!created && extra.createdById && !row.createdById) await row.update({ reason: extra.reason, createdById: extra.createdById }, { transaction });
-  const total = (await Refund.sum("amountCents", { where: { paymentId }, transaction })) ?? 0;
-  await settleRefunded(payment, total, transaction);
+  if (!created && attributed) Object.assign(changes, { reason: extra.reason, createdById: extra.createdById });
+  if (Object.keys(changes).length) await row.update(changes, { transaction });
+  await settleRefunded(payment, transaction);
+  return { attributed };
 }
 
-/** Refunded totals only grow; the status follows the total. */
-export async function settleRefunded(payment: Payment, refundedCents: number, transaction: Transaction) {
-  const total = Math.min(payment.amountCents, Math.max(payment.refundedCents, refundedCents));
-  const status = total === 0 ? payment.status : total >= payment.amountCents ? "refunded" : "partially_refunded";
-  await payment.update({ refundedCents: total, status }, { transaction });
+/** The refunded total is the sum of the refunds that were not refused; the status follows it, back to paid if none stands. */
+export async function settleRefunded(payment: Payment, transaction: Transaction) {
+  const counted = (await Refund.sum("amountCents", { where: { paymentId: payment.id, status: { [Op.ne]: "failed" } }, transaction })) ?? 0;
+  const total = Math.min(payment.amountCents, counted);
+  const holdsMoney = payment.status === "paid" || payment.status === "partially_refunded" || payment.status === "refunded";
+  const status = !holdsMoney ? payment.status : total === 0 ? "paid" : total >= payment.amountCents ? "refunded" : "partially_refunded";
+  if (total !== payment.refundedCents || status !== payment.status) await payment.update({ refundedCents: total, status }, { transaction });
 }
 
 /** Pending payments older than `olderThanMs` whose webhook never came: asks the processor and applies what it says. */

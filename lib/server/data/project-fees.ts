@@ -39,7 +39,7 @@ export type PaymentDto = {
   createdAt: string;
   createdBy: string | null;
   lines: { name: string; authority: string; amountCents: number }[];
-  refunds: { id: string; amountCents: number; reason: string | null; createdAt: string; createdBy: string | null }[];
+  refunds: { id: string; amountCents: number; reason: string | null; createdAt: string; createdBy: string | null; failed: boolean }[];
 };
 
 export type ProjectFeesDto = {
@@ -70,7 +70,7 @@ export function toPaymentDto(p: Payment): PaymentDto {
     createdAt: p.createdAt.toISOString(),
     createdBy: p.createdBy?.name ?? null,
     lines: (p.lines ?? []).map((l) => ({ name: l.name, authority: l.authority, amountCents: l.amountCents })),
-    refunds: (p.refunds ?? []).map((r) => ({ id: r.id, amountCents: r.amountCents, reason: r.reason, createdAt: r.createdAt.toISOString(), createdBy: r.createdBy?.name ?? null })),
+    refunds: (p.refunds ?? []).map((r) => ({ id: r.id, amountCents: r.amountCents, reason: r.reason, createdAt: r.createdAt.toISOString(), createdBy: r.createdBy?.name ?? null, failed: r.status === "failed" })),
   };
 }
 

@@ -3,7 +3,7 @@ import { Op } from "sequelize";
 import Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { POST as webhook } from "@/app/api/webhooks/stripe/route";
-import { Equipment, FeeSchedule, OutboxMessage, Payment, ProcessorEvent, Project, Refund } from "@/models";
+import { AuditEvent, Equipment, FeeSchedule, OutboxMessage, Payment, ProcessorEvent, Project, Refund } from "@/models";
 import { AppError } from "@/lib/errors";
 import { formatUsd, type FeeLine } from "@/lib/fees";
 import { seedDemoCatalog } from "@/lib/seed/demo-catalog";
@@ -194,5 +194,63 @@ describe("fees and payments", () => {
     expect((await Payment.findByPk(paymentId))!.status).toBe("pending"); // no webhook delivered: the "crash"
     await reconcilePendingPayments({ olderThanMs: 0 });
     expect((await Payment.findByPk(paymentId))!).toMatchObject({ status: "paid", cardLast4: "4242" });
+  });
+});
+
+describe("refunds under pressure", () => {
+  async function paidPayment() {
+    const project = await projectWithDesign();
+    const fees = await getProjectFees({ viewer: org.viewers.coordinator, projectId: project.id });
+    const keys = fees.lines.filter((l) => !l.problem).map((l) => l.feeKey);
+    const { paymentId } = await startPayment({ viewer: org.viewers.coordinator, projectId: project.id, feeKeys: keys });
+    const payment = (await Payment.findByPk(paymentId))!;
+    await fake(`/_fake/checkout/sessions/${payment.checkoutSessionId}/pay`, { card: CARDS.ok });
+    const session = (await eventsFor(payment.checkoutSessionId!)).find((e) => e.type === "checkout.session.completed")!;
+    const intentId = (session.data.object as Stripe.Checkout.Session).payment_intent as string;
+    for (const event of await eventsFor(payment.checkoutSessionId!, intentId)) await deliver(event);
+    return (await Payment.findByPk(paymentId))!;
+  }
+  const refundMail = async (projectId: string) => {
+    const number = (await Project.findByPk(projectId))!.number;
+    return OutboxMessage.count({ where: { subject: { [Op.like]: `Refund of % for project ${number}` } } });
+  };
+  const audits = (projectId: string) => AuditEvent.count({ where: { action: "payment.refunded", entityId: projectId } });
+
+  it("makes one refund, one e-mail and one audit entry from concurrent requests", async () => {
+    // Defect: five admins' clicks made one refund at the processor but five e-mails and five audit rows.
+    const payment = await paidPayment();
+    const mailBefore = await refundMail(payment.projectId);
+    const results = await Promise.all(Array.from({ length: 5 }, () => code(refundPayment({ viewer: org.viewers.admin, paymentId: payment.id, amountCents: 10_00, reason: "Fee waived" }))));
+    expect(results.filter((r) => r === "resolved").length).toBeGreaterThanOrEqual(1);
+    expect(await Refund.count({ where: { paymentId: payment.id } })).toBe(1);
+    expect((await Payment.findByPk(payment.id))!.refundedCents).toBe(10_00);
+    expect((await refundMail(payment.projectId)) - mailBefore).toBe(1);
+    expect(await audits(payment.projectId)).toBe(1);
+  });
+
+  it("shows the processor's reason when it refuses a refund", async () => {
+    const payment = await paidPayment();
+    // Refunded in full at the processor, outside Ohmstead: its next refund is refused.
+    await fetch(`${FAKE}/v1/refunds`, { method: "POST", headers: { authorization: `Bearer ${process.env.STRIPE_SECRET_KEY}`, "content-type": "application/x-www-form-urlencoded" }, body: `payment_intent=${payment.paymentIntentId}` });
+    const refused = await refundPayment({ viewer: org.viewers.admin, paymentId: payment.id, amountCents: 5_00, reason: "Second thoughts" }).catch((e: AppError) => e);
+    expect(refused).toMatchObject({ code: "CONFLICT" });
+    expect((refused as AppError).message).toMatch(/^The payment service refused the refund: .*already been refunded/);
+  });
+
+  it("stops counting a refund the processor later marks failed", async () => {
+    const payment = await paidPayment();
+    const after = await refundPayment({ viewer: org.viewers.admin, paymentId: payment.id, amountCents: payment.amountCents, reason: "Project cancelled" });
+    expect(after).toMatchObject({ status: "refunded", refundedCents: payment.amountCents });
+    const refund = (await Refund.findOne({ where: { paymentId: payment.id } }))!;
+    await fake(`/_fake/refunds/${refund.processorRefundId}/fail`, {});
+    const events = (await eventsFor(payment.checkoutSessionId!, payment.paymentIntentId)).filter((e) => e.type.startsWith("refund."));
+    expect(events.map((e) => e.type)).toEqual(expect.arrayContaining(["refund.failed", "refund.updated"]));
+    // Delivered in any order, with the earlier charge.refunded last: the failure stands.
+    for (const event of [...events].reverse()) await deliver(event);
+    for (const event of (await eventsFor(payment.checkoutSessionId!, payment.paymentIntentId)).filter((e) => e.type === "charge.refunded")) await deliver(event);
+    expect((await Payment.findByPk(payment.id))!).toMatchObject({ status: "paid", refundedCents: 0 });
+    expect((await Refund.findByPk(refund.id))!.status).toBe("failed");
+    const fees = await getProjectFees({ viewer: org.viewers.admin, projectId: payment.projectId });
+    expect(fees.payments.find((p) => p.id === payment.id)!.refunds[0]!.failed).toBe(true);
   });
 });

@@ -44,10 +44,11 @@ export function PaymentHistory({ payments, canRefund }: { payments: PaymentDto[]
             {p.refunds.length ? (
               <ul className="text-sm text-ink-soft" data-testid="refunds">
                 {p.refunds.map((r) => (
-                  <li key={r.id}>
+                  <li key={r.id} data-failed={r.failed || undefined}>
                     Refunded <span className="measure">{formatUsd(r.amountCents)}</span> on {when(r.createdAt)}
                     {r.createdBy ? ` by ${r.createdBy}` : ""}
                     {r.reason ? `: ${r.reason}` : ""}
+                    {r.failed ? " — the processor could not return this money, so it is not counted as refunded" : null}
                   </li>
                 ))}
               </ul>
