@@ -27,7 +27,7 @@ export class ApiToken extends Model<InferAttributes<ApiToken>, InferCreationAttr
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "api_tokens", underscored: true },
+      { sequelize, modelName: "ApiToken", tableName: "api_tokens", underscored: true },
     );
   }
 }

@@ -27,7 +27,7 @@ export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreation
         changes: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "audit_events", underscored: true, updatedAt: false },
+      { sequelize, modelName: "AuditEvent", tableName: "audit_events", underscored: true, updatedAt: false },
     );
   }
 }

@@ -29,7 +29,7 @@ export class CommissioningRecord extends Model<InferAttributes<CommissioningReco
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "commissioning_records", underscored: true },
+      { sequelize, modelName: "CommissioningRecord", tableName: "commissioning_records", underscored: true },
     );
   }
 }

@@ -29,7 +29,7 @@ export class Design extends Model<InferAttributes<Design>, InferCreationAttribut
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "designs", underscored: true },
+      { sequelize, modelName: "Design", tableName: "designs", underscored: true },
     );
   }
 }

@@ -37,7 +37,7 @@ export class Equipment extends Model<InferAttributes<Equipment>, InferCreationAt
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "equipment", underscored: true },
+      { sequelize, modelName: "Equipment", tableName: "equipment", underscored: true },
     );
   }
 }

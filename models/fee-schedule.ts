@@ -25,7 +25,7 @@ export class FeeSchedule extends Model<InferAttributes<FeeSchedule>, InferCreati
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "fee_schedules", underscored: true },
+      { sequelize, modelName: "FeeSchedule", tableName: "fee_schedules", underscored: true },
     );
   }
 }

@@ -28,7 +28,7 @@ export class Jurisdiction extends Model<InferAttributes<Jurisdiction>, InferCrea
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "jurisdictions", underscored: true },
+      { sequelize, modelName: "Jurisdiction", tableName: "jurisdictions", underscored: true },
     );
   }
 }

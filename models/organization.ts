@@ -20,7 +20,7 @@ export class Organization extends Model<InferAttributes<Organization>, InferCrea
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "organizations", underscored: true },
+      { sequelize, modelName: "Organization", tableName: "organizations", underscored: true },
     );
   }
 }

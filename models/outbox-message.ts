@@ -41,7 +41,7 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "outbox_messages", underscored: true },
+      { sequelize, modelName: "OutboxMessage", tableName: "outbox_messages", underscored: true },
     );
   }
 }

@@ -55,7 +55,7 @@ export class Packet extends Model<InferAttributes<Packet>, InferCreationAttribut
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "packets", underscored: true },
+      { sequelize, modelName: "Packet", tableName: "packets", underscored: true },
     );
   }
 }

@@ -21,7 +21,7 @@ export class PaymentLine extends Model<InferAttributes<PaymentLine>, InferCreati
         arithmetic: { type: DataTypes.JSONB, allowNull: false },
         amountCents: { type: DataTypes.INTEGER, allowNull: false },
       },
-      { sequelize, tableName: "payment_lines", underscored: true, timestamps: false },
+      { sequelize, modelName: "PaymentLine", tableName: "payment_lines", underscored: true, timestamps: false },
     );
   }
 }

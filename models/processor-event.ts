@@ -13,7 +13,7 @@ export class ProcessorEvent extends Model<InferAttributes<ProcessorEvent>, Infer
         type: { type: DataTypes.STRING(100), allowNull: false },
         receivedAt: { type: DataTypes.DATE, allowNull: false },
       },
-      { sequelize, tableName: "processor_events", underscored: true, timestamps: false },
+      { sequelize, modelName: "ProcessorEvent", tableName: "processor_events", underscored: true, timestamps: false },
     );
   }
 }

@@ -35,7 +35,7 @@ export class ProjectFile extends Model<InferAttributes<ProjectFile>, InferCreati
         uploadedById: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "project_files", underscored: true, updatedAt: false },
+      { sequelize, modelName: "ProjectFile", tableName: "project_files", underscored: true, updatedAt: false },
     );
   }
 }

@@ -73,7 +73,7 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "projects", underscored: true },
+      { sequelize, modelName: "Project", tableName: "projects", underscored: true },
     );
   }
 }

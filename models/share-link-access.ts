@@ -23,7 +23,7 @@ export class ShareLinkAccess extends Model<InferAttributes<ShareLinkAccess>, Inf
         userAgent: { type: DataTypes.STRING(500), allowNull: false, defaultValue: "" },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "share_link_accesses", underscored: true, updatedAt: false },
+      { sequelize, modelName: "ShareLinkAccess", tableName: "share_link_accesses", underscored: true, updatedAt: false },
     );
   }
 }

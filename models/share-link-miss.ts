@@ -13,7 +13,7 @@ export class ShareLinkMiss extends Model<InferAttributes<ShareLinkMiss>, InferCr
         address: { type: DataTypes.STRING(100), allowNull: false },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "share_link_misses", underscored: true, updatedAt: false },
+      { sequelize, modelName: "ShareLinkMiss", tableName: "share_link_misses", underscored: true, updatedAt: false },
     );
   }
 }

@@ -11,7 +11,7 @@ export class ShareLinkPacket extends Model<InferAttributes<ShareLinkPacket>, Inf
         shareLinkId: { type: DataTypes.UUID, primaryKey: true },
         packetId: { type: DataTypes.UUID, primaryKey: true },
       },
-      { sequelize, tableName: "share_link_packets", underscored: true, timestamps: false },
+      { sequelize, modelName: "ShareLinkPacket", tableName: "share_link_packets", underscored: true, timestamps: false },
     );
   }
 }

@@ -36,7 +36,7 @@ export class ShareLink extends Model<InferAttributes<ShareLink>, InferCreationAt
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "share_links", underscored: true },
+      { sequelize, modelName: "ShareLink", tableName: "share_links", underscored: true },
     );
   }
 }

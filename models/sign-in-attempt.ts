@@ -13,7 +13,7 @@ export class SignInAttempt extends Model<InferAttributes<SignInAttempt>, InferCr
         key: { type: DataTypes.STRING(300), allowNull: false },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "sign_in_attempts", underscored: true, updatedAt: false },
+      { sequelize, modelName: "SignInAttempt", tableName: "sign_in_attempts", underscored: true, updatedAt: false },
     );
   }
 }

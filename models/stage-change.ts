@@ -26,7 +26,7 @@ export class StageChange extends Model<InferAttributes<StageChange>, InferCreati
         note: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "stage_changes", underscored: true, updatedAt: false },
+      { sequelize, modelName: "StageChange", tableName: "stage_changes", underscored: true, updatedAt: false },
     );
   }
 }

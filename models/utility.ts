@@ -24,7 +24,7 @@ export class Utility extends Model<InferAttributes<Utility>, InferCreationAttrib
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "utilities", underscored: true },
+      { sequelize, modelName: "Utility", tableName: "utilities", underscored: true },
     );
   }
 }

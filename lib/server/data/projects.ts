@@ -90,7 +90,10 @@ function visibleTo(viewer: Viewer): WhereOptions<Project> {
   return viewer.role === "installer" ? { organizationId: viewer.organizationId, installerId: viewer.id } : { organizationId: viewer.organizationId };
 }
 
-/** Stage sorts in pipeline order, days in stage by the date the stage began. */
+/**
+ * Stage sorts in pipeline order, days in stage by the date the stage began. The literal names the
+ * model's alias, which every model fixes with `modelName` so a minified build cannot rename it.
+ */
 function orderFor({ sort, direction }: Pick<ProjectListQuery, "sort" | "direction">): OrderItem {
   const dir = direction === "asc" ? "ASC" : "DESC";
   if (sort === "stage") return [literal(`array_position(array[${STAGES.map((s) => `'${s}'`).join(",")}]::varchar[], "Project"."stage")`), dir];
