@@ -12,9 +12,29 @@ const nextConfig = {
   // A second build folder lets a second test run build beside the first (see OHMSTEAD_PORT_OFFSET).
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
-  // Inspector links are private by their token: keep every page under them out of search indexes.
+  // Headers on every answer; pages also get a Content-Security-Policy with a per-request nonce from proxy.ts.
   async headers() {
-    return [{ source: "/share/:path*", headers: [{ key: "X-Robots-Tag", value: "noindex, nofollow" }] }];
+    const everywhere = [
+      { key: "X-Content-Type-Options", value: "nosniff" },
+      { key: "Referrer-Policy", value: "same-origin" },
+      { key: "X-Frame-Options", value: "DENY" },
+      { key: "Permissions-Policy", value: "camera=(), microphone=(), geolocation=(), payment=(), usb=()" },
+    ];
+    return [
+      { source: "/:path*", headers: everywhere },
+      // JSON and files are never documents to run: nothing in them may load or be framed.
+      { source: "/api/:path*", headers: [{ key: "Content-Security-Policy", value: "default-src 'none'; frame-ancestors 'none'" }] },
+      // The field record scans barcodes and takes photos with the phone's camera; nowhere else may use it.
+      { source: "/projects/:projectId/field", headers: [{ key: "Permissions-Policy", value: "camera=(self), microphone=(), geolocation=(), payment=(), usb=()" }] },
+      // Inspector links are private by their token: keep them out of search indexes and out of Referer headers.
+      {
+        source: "/share/:path*",
+        headers: [
+          { key: "X-Robots-Tag", value: "noindex, nofollow" },
+          { key: "Referrer-Policy", value: "no-referrer" },
+        ],
+      },
+    ];
   },
   typedRoutes: false,
 };

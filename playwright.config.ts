@@ -1,5 +1,7 @@
 import { defineConfig } from "@playwright/test";
 
+const baseURL = process.env.BASE_URL ?? "http://127.0.0.1:3100";
+
 // Driven by `npm test`, which starts the services and `next start` first and passes BASE_URL.
 export default defineConfig({
   testDir: "tests/e2e",
@@ -12,7 +14,10 @@ export default defineConfig({
   reporter: [["list"]],
   outputDir: ".data/test/playwright",
   use: {
-    baseURL: process.env.BASE_URL ?? "http://127.0.0.1:3100",
+    baseURL,
+    // A browser sends its page's Origin with every write; the tests' scripted requests do the same,
+    // since the app refuses cookie-carried writes from anywhere else.
+    extraHTTPHeaders: { origin: baseURL },
     trace: "retain-on-failure",
     screenshot: "only-on-failure",
     launchOptions: {

@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
+import { connection } from "next/server";
 import "./globals.css";
 
 const text = localFont({ src: "./fonts/inter-latin-wght-normal.woff2", variable: "--font-text", weight: "100 900", display: "swap" });
@@ -19,7 +20,9 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#f7f3ea" };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page is rendered per request, so that Next.js can put the request's CSP nonce (proxy.ts) on its scripts.
+  await connection();
   return (
     <html lang="en-US" className={`${text.variable} ${measure.variable}`}>
       <body>{children}</body>

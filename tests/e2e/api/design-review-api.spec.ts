@@ -48,10 +48,13 @@ test("admin's API token reviews an exported design exactly as the project's revi
   expect(unknownRef.status).toBe(422);
   expect(unknownRef.body.error.fieldErrors["strings[0].inverterId"][0]).toContain("no-such-inverter");
 
-  // Odd bodies are refused, never a server error.
+  // Odd bodies are refused, never a server error: JSON that is not a design is 422, text that is not JSON 400.
   for (const body of [null, [], "design", 42, {}, { codeEdition: "2020", modules: "x" }]) {
-    expect((await json(request, "post", "/api/v1/design-review", token, body)).status, JSON.stringify(body)).toBe(422);
+    const res = await request.post("/api/v1/design-review", { headers: { ...bearer(token), "content-type": "application/json" }, data: Buffer.from(JSON.stringify(body)) });
+    expect(res.status(), JSON.stringify(body)).toBe(422);
   }
+  const notJson = await request.post("/api/v1/design-review", { headers: { ...bearer(token), "content-type": "application/json" }, data: Buffer.from("design") });
+  expect(notJson.status()).toBe(400);
 
   // The token only reads.
   expect((await json(request, "put", `/api/v1/projects/${project.id}/design`, token, {})).status).toBe(403);

@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { isAppError } from "@/lib/errors";
 import { applyProcessorEvent } from "@/lib/server/data/payment-events";
-import { toErrorResponse } from "@/lib/server/http";
+import { readBodyBounded, toErrorResponse } from "@/lib/server/http";
 import { verifyWebhook } from "@/lib/server/services/payments";
 
 // Events are a few kilobytes; anything far larger is not one.
@@ -10,10 +10,10 @@ const refuse = (status: 400 | 413, message: string) => NextResponse.json({ error
 
 // POST /api/webhooks/stripe – signed events from the payment processor; no session, the signature is the check
 export async function POST(request: NextRequest) {
-  if (Number(request.headers.get("content-length") ?? 0) > MAX_EVENT_BYTES) return refuse(413, "Event too large.");
   // The signature covers the exact bytes sent, so the body is read as text before anything parses it.
-  const payload = await request.text();
-  if (payload.length > MAX_EVENT_BYTES) return refuse(413, "Event too large.");
+  const bytes = await readBodyBounded(request, MAX_EVENT_BYTES).catch(() => null);
+  if (bytes === null) return refuse(413, "Event too large.");
+  const payload = new TextDecoder().decode(bytes);
   try {
     const event = verifyWebhook(payload, request.headers.get("stripe-signature"));
     // A 5xx from here makes the processor deliver the event again later; nothing was committed.

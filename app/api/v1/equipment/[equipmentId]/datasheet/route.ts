@@ -30,5 +30,5 @@ export const POST = withAuth<Params>(
     const equipment = await attachDatasheet({ viewer, equipmentId: params.equipmentId, fileName: file.name, bytes: new Uint8Array(await file.arrayBuffer()) });
     return NextResponse.json(equipment, { status: 201 });
   },
-  { permission: "catalog:edit" },
+  { permission: "catalog:edit", body: "multipart" },
 );

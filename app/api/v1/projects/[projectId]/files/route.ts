@@ -29,5 +29,5 @@ export const POST = withAuth<{ projectId: string }>(
     const saved = await uploadProjectFile({ viewer, projectId: params.projectId, kind, fileName: file.name, bytes: new Uint8Array(await file.arrayBuffer()) });
     return NextResponse.json({ file: saved }, { status: 201 });
   },
-  { permission: "field:record" },
+  { permission: "field:record", body: "multipart" },
 );
