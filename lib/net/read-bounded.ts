@@ -12,7 +12,9 @@ export async function readBounded(body: ReadableStream<Uint8Array> | null, maxBy
     if (done) break;
     total += value.byteLength;
     if (total > maxBytes) {
-      await reader.cancel().catch(() => {});
+      // Not awaited: cancelling one branch of a teed body (the proxy reads a clone) settles only
+      // when the other branch is cancelled too.
+      reader.cancel().catch(() => {});
       return null;
     }
     chunks.push(value);
