@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { contentSecurityPolicy } from "@/lib/net/content-security-policy";
+import { actionBodyProblem } from "@/lib/net/action-body";
 import { readBounded } from "@/lib/net/read-bounded";
 import { isSameOrigin } from "@/lib/net/same-origin";
 import { env } from "@/lib/server/env";
@@ -24,7 +25,7 @@ function hasBrokenEscape(pathname: string): boolean {
 /**
  * Server actions are public POST endpoints that the framework parses before any of our code runs; a
  * foreign origin, an oversize body or a body that is not what the client library sends would end
- * there as a 500. They are answered here with 403, 413, 415 and 400 instead.
+ * there as a 500. They are answered here with 403, 413, 415 and 400 instead (lib/net/action-body.ts).
  */
 async function screenAction(request: NextRequest): Promise<NextResponse | null> {
   const appUrl = env().APP_URL;
@@ -32,17 +33,21 @@ async function screenAction(request: NextRequest): Promise<NextResponse | null> 
   if (!isSameOrigin(request.headers.get("origin"), { appUrl, host })) return plain(403, "This request came from another site and was refused.");
   const declared = request.headers.get("content-length");
   if (declared !== null && !(Number(declared) <= ACTION_BODY_LIMIT_BYTES)) return plain(413, "The request is larger than 1 MB.");
+  // The client library sends plain arguments as JSON in text/plain; multipart replies carry files and
+  // streams, which no Ohmstead action takes.
   const type = (request.headers.get("content-type") ?? "").split(";")[0]!.trim().toLowerCase();
-  if (type !== "text/plain" && type !== "multipart/form-data" && type !== "application/x-www-form-urlencoded") return plain(415, "Send the form as the page does.");
+  if (type !== "text/plain") return plain(415, "Send the form as the page does.");
   // A copy of the body: the framework still reads the request's own.
   const bytes = await readBounded(request.clone().body, ACTION_BODY_LIMIT_BYTES);
   if (bytes === null) return plain(413, "The request is larger than 1 MB.");
+  let text: string;
   try {
-    if (type === "text/plain") JSON.parse(new TextDecoder("utf-8", { fatal: true }).decode(bytes));
-    else await new Request(request.url, { method: "POST", headers: { "content-type": request.headers.get("content-type")! }, body: new Blob([bytes as Uint8Array<ArrayBuffer>]) }).formData();
+    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
   } catch {
-    return plain(400, "The request body could not be read.");
+    return plain(400, "The request body is not UTF-8 text.");
   }
+  const problem = actionBodyProblem(text);
+  if (problem) return plain(400, problem);
   return null;
 }
 

@@ -177,10 +177,11 @@ export async function createProject({ viewer, values }: { viewer: Viewer; values
 
 export async function updateProject({ viewer, projectId, values }: { viewer: Viewer; projectId: string; values: ProjectValues }): Promise<ProjectDto> {
   const sequelize = db();
-  await assertReferences(viewer, values);
   await sequelize.transaction(async (transaction) => {
+    // Who may edit is decided before what they sent is judged, so a stranger learns nothing from the answer.
     const project = await findVisibleProject(viewer, projectId, transaction);
     if (!can(viewer, "project:edit", project)) throw new AppError("FORBIDDEN", "You cannot edit this project.");
+    await assertReferences(viewer, values);
     const before = project.get({ plain: true }) as Record<string, unknown>;
     await project.update(values, { transaction });
     await recordAudit({ viewer, action: "project.updated", entityType: "project", entityId: project.id, changes: diffFields(before, values) }, { transaction });

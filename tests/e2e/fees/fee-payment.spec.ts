@@ -1,14 +1,6 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
+import { payByCard } from "../support/api";
 import { DEMO, listProjectsAs, mailboxFor, pageFor, signIn } from "../support/session";
-
-// The local test-mode payments page: the SDK's hosted checkout, served by payments-fake/.
-async function payByCard(page: Page, card: string) {
-  await expect(page.getByRole("region", { name: "Test mode" })).toBeVisible();
-  await page.getByLabel("Card number").fill(card);
-  await page.getByLabel("Expiry date").fill("12 / 34");
-  await page.getByLabel("CVC").fill("123");
-  await page.getByRole("button", { name: /^Pay / }).click();
-}
 
 test("coordinator pays fees: a declined card leaves them unpaid, the succeeding card marks them paid and the receipt arrives; an admin refunds part", async ({ page, browser }) => {
   test.setTimeout(180_000);
