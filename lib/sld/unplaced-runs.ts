@@ -18,7 +18,7 @@ export function drawUnplacedRuns(b: SceneBuilder, design: Design, model: Circuit
   b.text(x, top, "RUNS NOT CONNECTED ON THIS DRAWING", { size: SIZE.title, weight: "bold" });
   b.text(x, top + 10, "Each names a string or inverter the design does not have; correct the run in the design.", { size: SIZE.label, tone: "soft" });
   model.unplaced.forEach((run, i) => {
-    const wireY = top + 10 + 30 + i * ENTRY_H;
+    const wireY = top + 10 + 38 + i * ENTRY_H;
     const lines = runLabelLines(design, run);
     b.line(x, wireY, x + runLabelWidth(lines) + 10, wireY, { dash: [3, 2] });
     drawRunLabel(b, x, wireY, lines, model.numbers.get(run));
