@@ -6,8 +6,8 @@ export class Utility extends Model<InferAttributes<Utility>, InferCreationAttrib
   declare organizationId: string;
   declare name: string;
   declare serviceVoltages: string[];
-  // The grid-support settings the utility asks for at commissioning, as the utility words them.
-  declare requiredGridProfile: CreationOptional<string>;
+  // The grid profiles the utility accepts at commissioning, each as the utility words it.
+  declare acceptedGridProfiles: CreationOptional<string[]>;
   declare notes: string;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -19,7 +19,7 @@ export class Utility extends Model<InferAttributes<Utility>, InferCreationAttrib
         organizationId: { type: DataTypes.UUID, allowNull: false },
         name: { type: DataTypes.STRING(160), allowNull: false },
         serviceVoltages: { type: DataTypes.ARRAY(DataTypes.STRING(40)), allowNull: false, defaultValue: [] },
-        requiredGridProfile: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
+        acceptedGridProfiles: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -22,7 +22,7 @@ export type PacketInput = {
   preparedBy: { name: string; organizationName: string; licenseNumber: string | null; phone: string | null };
   project: Pick<ProjectDto, "number" | "customerName" | "customerEmail" | "customerPhone" | "street" | "city" | "state" | "postalCode" | "utilityAccountNumber" | "meterNumber">;
   jurisdiction: { name: string; state: string; necEdition: NecEdition; recordLowTempC: number; highDesignTempC: number };
-  utility: { name: string; requiredGridProfile: string } | null;
+  utility: { name: string; acceptedGridProfiles: string[] } | null;
   /** The editor's parsed design (tilt, azimuth, locations, line ids) and the engine's view of it. */
   designInput: DesignInput;
   design: Design;

@@ -177,11 +177,11 @@ export function equipmentSchedule(input: PacketInput): EquipmentRow[] {
   return rows;
 }
 
-export type ConductorRow = { label: string; carries: string; conductors: string; raceway: string; egc: string; lengthFt: string; ocpd: string };
+export type ConductorRow = { number: string; label: string; carries: string; conductors: string; raceway: string; egc: string; lengthFt: string; ocpd: string };
 
-/** The conductor runs as the summary sheet lists them. */
+/** The conductor runs as the summary sheet lists them, numbered in the design's order as the single-line diagram tags them. */
 export function conductorSchedule(input: PacketInput): ConductorRow[] {
-  return input.designInput.runs.map((r) => {
+  return input.designInput.runs.map((r, i) => {
     const [kind, ref] = r.circuit.split(":");
     const line = input.equipment.inverters.find((l) => l.lineId === ref);
     const carries =
@@ -189,6 +189,7 @@ export function conductorSchedule(input: PacketInput): ConductorRow[] {
       : ref === "all" ? "All inverter output"
       : line ? `Output of ${line.quantity} × ${line.item.model}` : `Output of ${ref}`;
     return {
+      number: String(i + 1),
       label: r.label,
       carries,
       conductors: `${r.currentCarryingConductors} × ${sizeLabel(r.size)} ${r.material}${r.insulation ? ` ${r.insulation}` : ""}, ${r.insulationTempC} °C`,

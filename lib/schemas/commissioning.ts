@@ -3,7 +3,8 @@ import { safeString } from "./fields";
 
 /**
  * A meter reading as typed on a phone: empty means "not taken yet" (null), anything else must be a
- * number. Negative or implausible numbers pass through so the checks can flag them with a reason.
+ * number. Negative or implausible numbers pass through so the checks can flag them with a reason
+ * (a negative Voc is a reversed string; a temperature may be below zero).
  */
 const reading = z
   .union([z.number(), safeString(), z.null()])
@@ -23,24 +24,48 @@ const reading = z
 const wholeReading = reading.refine((v) => v === null || Number.isInteger(v), "Enter a whole number");
 
 export const BOUNDARIES = ["outside", "inside"] as const;
+export const POLARITIES = ["correct", "reversed"] as const;
+export const TEMPERATURE_SOURCES = ["module", "ambient"] as const;
 
-/** What the installer records on site; the facts they are checked against come from the design. */
-export const CommissioningReadings = z.object({
-  gridProfileSet: z
-    .string()
+/** Typed or scanned text: trimmed, empty means not recorded (null). */
+const text = (max: number) =>
+  safeString()
     .trim()
-    .max(300, "At most 300 characters")
+    .max(max, `At most ${max} characters`)
     .nullish()
-    .transform((v) => (v ? v : null)),
+    .transform((v) => (v ? v : null));
+
+/** One string's readings: the tests before energizing, the devices the inverter found on it, its voltage with the array shut down. */
+const StringReadings = z.object({
+  id: safeString().trim().min(1).max(80),
+  polarity: z.enum(POLARITIES, { error: "Choose correct or reversed" }).nullish().transform((v) => v ?? null),
+  vocV: reading,
+  insulationMohm: reading,
+  devicesFound: wholeReading,
+  measuredV: reading,
+});
+
+/** One inverter unit: the serial on its label, the serial on its activation card, activation done. */
+const InverterReadings = z.object({
+  id: safeString().trim().min(1).max(80),
+  serial: text(80),
+  cardSerial: text(80),
+  activated: z.boolean().default(false),
+});
+
+/** What the installer records on site, in the order of the work; the facts they are checked against come from the design. */
+export const CommissioningReadings = z.object({
+  vocTemperature: z
+    .object({ tempC: reading, source: z.enum(TEMPERATURE_SOURCES, { error: "Choose where the temperature was read" }).default("module") })
+    .default({ tempC: null, source: "module" }),
+  strings: z.array(StringReadings).max(200, "At most 200 strings").default([]),
+  inverters: z.array(InverterReadings).max(50, "At most 50 inverters").default([]),
+  gridProfileSet: text(300),
+  devicesFound: wholeReading,
   acVoltageV: reading,
-  strings: z
-    .array(z.object({ id: safeString().trim().min(1).max(80), measuredV: reading }))
-    .max(200, "At most 200 strings")
-    .default([]),
   modulesReporting: wholeReading,
   firstPowerW: reading,
-  firstPowerTime: z
-    .string()
+  firstPowerTime: safeString()
     .trim()
     .nullish()
     .transform((v) => (v ? v : null))

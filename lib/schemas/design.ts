@@ -73,8 +73,7 @@ export const DesignInput = z.object({
     connection: choice(["load-side", "supply-side"], "point of connection"),
     pvBreakerA: required("PV breaker", 10, 1200, "A", { integer: true }),
     pvBreakerAtOppositeEnd: flag,
-    otherBreakersA: z
-      .string()
+    otherBreakersA: safeString()
       .max(200)
       .optional()
       .transform((v, ctx) => {

@@ -57,6 +57,8 @@ export const InverterSpecs = z
     maxStringPowerW: optionalNumberField("Maximum power per string", { min: 100, max: 20_000, unit: "W" }),
     certification: optionalText(120),
     meetsRapidShutdownWithDevices: booleanish.default(false),
+    // Module-level monitoring: each microinverter reports to a gateway, so the crew can count them found and reporting.
+    reportsPerModule: booleanish.optional(),
   })
   .refine((s) => s.mpptMinV === undefined || s.mpptMaxV === undefined || s.mpptMinV < s.mpptMaxV, {
     path: ["mpptMaxV"],
@@ -94,6 +96,8 @@ export const DeviceSpecs = z.object({
   maxInputIscA: optionalNumberField("Maximum input current", { min: 0.1, max: 30, unit: "A" }),
   maxOutputCurrentA: optionalNumberField("Maximum output current", { min: 0.1, max: 30, unit: "A" }),
   shutdownOutputV: optionalNumberField("Voltage held while shut down", { min: 0, max: 30, unit: "V" }),
+  // Module-level monitoring: each device reports to the inverter, so the crew can count them paired and reporting.
+  reportsPerModule: booleanish.optional(),
 });
 export type DeviceSpecs = z.output<typeof DeviceSpecs>;
 
@@ -145,8 +149,7 @@ export const SetArchivedInput = z.object({ equipmentId: safeString().uuid("Unkno
 
 /** Data sheets: PDFs only, small enough to merge into a permit packet. */
 export const DATASHEET_MAX_BYTES = 20 * 1024 * 1024;
-export const DatasheetFileName = z
-  .string()
+export const DatasheetFileName = safeString()
   .trim()
   .min(1, "The file needs a name")
   .max(200, "The file name is longer than 200 characters")

@@ -56,8 +56,7 @@ const optionalMoney = (label: string) =>
     .transform((value, ctx) => (isBlank(value) ? null : dollarsToCents(label, value!, ctx)));
 
 const date = (label: string) =>
-  z
-    .string({ error: `Enter the ${label}` })
+  safeString({ error: `Enter the ${label}` })
     .trim()
     .min(1, { error: `Enter the ${label}`, abort: true })
     .refine(isIsoDate, `Enter the ${label} as YYYY-MM-DD, e.g. 2026-07-01`);

@@ -3,8 +3,7 @@ import { safeString } from "./fields";
 import { US_TIME_ZONES } from "@/lib/domain/time-zones";
 
 const optional = (max: number) =>
-  z
-    .string()
+  safeString()
     .trim()
     .max(max, `At most ${max} characters`)
     .transform((v) => (v === "" ? null : v));

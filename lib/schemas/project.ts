@@ -4,8 +4,7 @@ import { STAGES } from "@/lib/domain/stages";
 
 const text = (label: string, max: number) => safeString().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
 const optionalText = (max: number) =>
-  z
-    .string()
+  safeString()
     .trim()
     .max(max, `At most ${max} characters`)
     .transform((v) => (v === "" ? null : v))

@@ -29,11 +29,19 @@ const serviceVoltages = z.preprocess(
     .pipe(z.array(safeString()).min(1, "Enter at least one service voltage").max(8, "At most 8 service voltages")),
 );
 
+// Each as the utility words it, e.g. "IEEE 1547-2018 Category B, utility's default settings"; a form sends one per line.
+const acceptedGridProfiles = z.preprocess(
+  (v) => (typeof v === "string" ? v.split(/\r?\n/) : (v ?? [])),
+  z
+    .array(safeString({ error: "Each grid profile is text" }).trim().max(300, "Each grid profile is at most 300 characters"), { error: "List the accepted grid profiles" })
+    .transform((list) => [...new Set(list.filter(Boolean))])
+    .pipe(z.array(safeString()).max(12, "At most 12 grid profiles")),
+);
+
 export const UtilityInput = z.object({
   name: requiredText("utility's name", 160),
   serviceVoltages,
-  // Free text as the utility words it, e.g. "IEEE 1547-2018 Category B, utility's default settings".
-  requiredGridProfile: optionalText(300),
+  acceptedGridProfiles,
   notes: optionalText(2000),
 });
 export type UtilityInput = z.input<typeof UtilityInput>;

@@ -6,8 +6,7 @@ export const SHARE_LINK_DAYS = { default: 30, min: 1, max: 365 } as const;
 /** What a coordinator fills in to share packet revisions with an inspector. */
 export const CreateShareLinkInput = z.object({
   packetIds: z.array(safeString().uuid("Unknown packet")).min(1, "Choose at least one revision").max(20, "At most 20 revisions per link"),
-  recipientEmail: z
-    .string()
+  recipientEmail: safeString()
     .trim()
     .toLowerCase()
     .max(254, "At most 254 characters")

@@ -51,12 +51,12 @@ export const DEMO_CATALOG: EquipmentInput[] = [
     kind: "inverter", maker: "Pellinore", model: "PM-320 Micro", listing: UL_INVERTER,
     specs: {
       inverterKind: "micro", acPowerW: 320, acOutputCurrentA: 1.33, acVoltageV: 240, phase: 1, maxDcInputV: 60, mpptMinV: 27, mpptMaxV: 45, maxInputIscA: 14, mpptCount: 1,
-      certification: "UL 1741 SB; IEEE 1547-2018 Category B", meetsRapidShutdownWithDevices: true,
+      certification: "UL 1741 SB; IEEE 1547-2018 Category B", meetsRapidShutdownWithDevices: true, reportsPerModule: true,
     },
   },
   {
     kind: "device", maker: "Calderby", model: "CB-P450 Optimizer", listing: "UL 1741; UL 3741 PV hazard control with CB-6000R",
-    specs: { deviceKind: "optimizer", ratedInputPowerW: 450, maxInputV: 60, maxInputIscA: 15, maxOutputCurrentA: 15, shutdownOutputV: 1 },
+    specs: { deviceKind: "optimizer", ratedInputPowerW: 450, maxInputV: 60, maxInputIscA: 15, maxOutputCurrentA: 15, shutdownOutputV: 1, reportsPerModule: true },
   },
   {
     kind: "device", maker: "Stavemoor", model: "SR-1 Shutdown Unit", listing: "UL 1741 PVRSE",

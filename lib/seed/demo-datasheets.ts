@@ -8,7 +8,7 @@ const LABELS: Record<string, string> = {
   pmaxTempCoeffPctPerC: "Pmax temperature coefficient (%/°C)", maxSeriesFuseA: "Maximum series fuse (A)", lengthIn: "Length (in)", widthIn: "Width (in)", weightLb: "Weight (lb)",
   inverterKind: "Type", acPowerW: "Rated AC power (W)", acOutputCurrentA: "Maximum continuous output current (A)", acVoltageV: "Nominal AC voltage (V)", phase: "Phases",
   maxDcInputV: "Maximum DC input voltage (V)", mpptMinV: "MPPT window minimum (V)", mpptMaxV: "MPPT window maximum (V)", maxInputIscA: "Maximum input current per MPPT (A)", mpptCount: "Number of MPPTs",
-  regulatedStringV: "Regulated string voltage (V)", maxStringPowerW: "Maximum power per string (W)", certification: "Certification", meetsRapidShutdownWithDevices: "Rapid shutdown with matching devices",
+  regulatedStringV: "Regulated string voltage (V)", maxStringPowerW: "Maximum power per string (W)", certification: "Certification", meetsRapidShutdownWithDevices: "Rapid shutdown with matching devices", reportsPerModule: "Module-level monitoring",
   deviceKind: "Type", ratedInputPowerW: "Rated input power (W)", maxInputV: "Maximum input voltage (V)", maxOutputCurrentA: "Maximum output current (A)", shutdownOutputV: "Output while shut down (V)",
 };
 

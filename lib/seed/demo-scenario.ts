@@ -14,8 +14,8 @@ export const JURISDICTIONS: { key: string; name: string; state: string; necEditi
 ];
 
 export const UTILITIES = [
-  { key: "bmlp", name: "Brackenford Municipal Light & Power", serviceVoltages: ["120/240 V split-phase", "120/208 V three-phase"], requiredGridProfile: "IEEE 1547-2018 Category B, utility's default settings", notes: "Requires a visible, lockable AC disconnect within 10 ft of the meter." },
-  { key: "highmesa", name: "High Mesa Rural Electric Cooperative", serviceVoltages: ["120/240 V split-phase", "277/480 V three-phase"], requiredGridProfile: "IEEE 1547-2018 Category B, abnormal performance Category II; volt-var on, power factor 1.0 by default", notes: "Witness test may be requested for systems above 25 kW AC." },
+  { key: "bmlp", name: "Brackenford Municipal Light & Power", serviceVoltages: ["120/240 V split-phase", "120/208 V three-phase"], acceptedGridProfiles: ["IEEE 1547-2018 Category B, utility's default settings", "IEEE 1547-2018 Category B, volt-watt on"], notes: "Requires a visible, lockable AC disconnect within 10 ft of the meter." },
+  { key: "highmesa", name: "High Mesa Rural Electric Cooperative", serviceVoltages: ["120/240 V split-phase", "277/480 V three-phase"], acceptedGridProfiles: ["IEEE 1547-2018 Category B, abnormal performance Category II; volt-var on, power factor 1.0 by default"], notes: "Witness test may be requested for systems above 25 kW AC." },
 ];
 
 export const STREETS = [

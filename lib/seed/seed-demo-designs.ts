@@ -1,11 +1,11 @@
 import { Op, type Transaction } from "sequelize";
 import { CommissioningRecord, Design, Equipment, Jurisdiction, Project, StageChange, Utility } from "@/models";
 import { STAGES, stageIndex } from "@/lib/domain/stages";
-import { commissioningFacts } from "@/lib/field/commissioning-facts";
+import { commissioningFacts, moduleMonitoringOf } from "@/lib/field/commissioning-facts";
 import { runDesignReview } from "@/lib/design/run-review";
 import type { NecEdition } from "@/lib/engineering";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
-import { passingDemoReadings } from "./demo-commissioning";
+import { demoEquipment, passingDemoReadings } from "./demo-commissioning";
 import { DESIGN_MODELS, demoDesign, type CatalogIds } from "./demo-designs";
 
 /**
@@ -37,8 +37,9 @@ export async function seedDemoDesigns(organizationId: string, transaction: Trans
     );
     if (outcome.status === "reviewed" && j && stageIndex(project.stage) >= STAGES.indexOf("commissioned")) {
       const { ratings } = outcome.review.summary;
-      const requiredGridProfile = (project.utilityId ? utilities.get(project.utilityId)?.requiredGridProfile : null) ?? null;
-      const facts = commissioningFacts({ design: outcome.design, edition: j.necEdition as NecEdition, requiredGridProfile, moduleCount: ratings.moduleCount, acKw: ratings.acKw });
+      const acceptedGridProfiles = (project.utilityId ? utilities.get(project.utilityId)?.acceptedGridProfiles : null) ?? [];
+      const moduleMonitoring = moduleMonitoringOf(demoEquipment(draft, catalog));
+      const facts = commissioningFacts({ design: outcome.design, edition: j.necEdition as NecEdition, acceptedGridProfiles, moduleCount: ratings.moduleCount, acKw: ratings.acKw, moduleMonitoring });
       const readings = passingDemoReadings(facts, i);
       // Completed on the day the timeline says the project was commissioned.
       const commissioned = await StageChange.findOne({ where: { projectId: project.id, toStage: "commissioned" }, transaction });

@@ -32,22 +32,38 @@ export function runTitle(run: ConductorRun): string {
   return `${run.label}, ${formatFt(run.lengthFt)} ft${ocpd}`;
 }
 
+export type RunLabel = [title: string, wires: string, racewayAndEgc: string];
+
+/** Written where a circuit has no run in the design yet. */
+export const NO_RUN_LABEL: RunLabel = ["No conductor run entered", "add it to the design", ""];
+
 /** The three lines written above a run's wire. */
 export function runLabelLines(design: Design, run: ConductorRun | undefined): RunLabel {
-  if (!run) return ["No conductor run entered", "add it to the design", ""];
+  if (!run) return NO_RUN_LABEL;
   return [runTitle(run), ...conductorSpec(design, run)];
 }
 
-export type RunLabel = [title: string, wires: string, racewayAndEgc: string];
+/** Room the run's number tag takes before its words. */
+export const TAG_W = 16;
+const TAG_R = 6;
 
-/** Above a wire: the run's name and length, then its conductors on two lines. */
-export function drawRunLabel(b: SceneBuilder, x: number, wireY: number, [title, ...spec]: RunLabel): void {
-  b.text(x, wireY - 23, title, { size: SIZE.label });
-  b.textLines(x, wireY - 14, spec.filter(Boolean), 8.5, { size: SIZE.spec, mono: true, tone: "soft" });
+/** The run's number from the conductor schedule, in a small circle sitting on its wire. */
+export function drawRunTag(b: SceneBuilder, cx: number, wireY: number, number: number): void {
+  b.circle(cx, wireY, TAG_R, { fill: "white", strokeWidth: 0.9 });
+  b.text(cx, wireY + 2.3, String(number), { size: SIZE.spec, anchor: "middle", weight: "bold" });
 }
 
+/** Above a wire: the run's name and length, then its conductors on two lines; the number tag on the wire in front. */
+export function drawRunLabel(b: SceneBuilder, x: number, wireY: number, [title, ...spec]: RunLabel, number?: number): void {
+  if (number !== undefined) drawRunTag(b, x + TAG_R, wireY, number);
+  const tx = x + TAG_W;
+  b.text(tx, wireY - 23, title, { size: SIZE.label });
+  b.textLines(tx, wireY - 14, spec.filter(Boolean), 8.5, { size: SIZE.spec, mono: true, tone: "soft" });
+}
+
+/** The label's width, its tag included. */
 export function runLabelWidth([title, ...spec]: RunLabel): number {
-  return Math.max(textWidthPt(title, SIZE.label), ...spec.map((line) => textWidthPt(line, SIZE.spec, { mono: true })));
+  return TAG_W + Math.max(textWidthPt(title, SIZE.label), ...spec.map((line) => textWidthPt(line, SIZE.spec, { mono: true })));
 }
 
 function formatFt(ft: number): string {

@@ -6,7 +6,8 @@ import { drawRunLabel, runLabelLines, runLabelWidth } from "./conductor-label";
 import { textWidthPt } from "./scene";
 import type { SceneBuilder } from "./scene-builder";
 import { LINE_GAP, SIZE, wrapWords } from "./style";
-import { breakerH, breakerV, fuseH, groundSymbol, initiatorSymbol, junctionDot, meterSymbol, switchH, utilitySymbol } from "./symbols";
+import { BOX_GAP, boxLabel, type BoxCounter } from "./run-columns";
+import { breakerH, breakerV, fuseH, groundSymbol, initiatorSymbol, junctionBox, junctionDot, meterSymbol, switchH, utilitySymbol } from "./symbols";
 
 export interface ServiceInput {
   design: Design;
@@ -16,6 +17,9 @@ export interface ServiceInput {
   startX: number;
   /** Collector body the initiator signals; null for microinverters (the disconnect is the initiator). */
   initiatorTarget: { right: number } | null;
+  /** The conductor schedule's run numbers, and the next junction box number. */
+  numbers: Map<ConductorRun, number>;
+  boxes: BoxCounter;
 }
 
 const PANEL_W = 150;
@@ -31,10 +35,11 @@ export function layoutService(b: SceneBuilder, input: ServiceInput): void {
   const beforeDisconnect = runs.length > 1 ? runs.slice(0, -1) : runs;
   const afterDisconnect = runs.length > 1 ? runs.slice(-1) : [];
 
-  let x = runColumns(b, design, beforeDisconnect.length ? beforeDisconnect : [undefined], input.startX, y);
+  const columns = { numbers: input.numbers, boxes: input.boxes };
+  let x = runColumns(b, design, beforeDisconnect.length ? beforeDisconnect : [undefined], input.startX, y, columns);
   b.line(from.x, y, input.startX, y);
   x = disconnectColumn(b, design, x, y, input.initiatorTarget);
-  x = afterDisconnect.length ? runColumns(b, design, afterDisconnect, x, y) : lineTo(b, x, x + 24, y);
+  x = afterDisconnect.length ? runColumns(b, design, afterDisconnect, x, y, columns) : lineTo(b, x, x + 24, y);
 
   const supplySide = design.service.connection === "supply-side";
   const serviceY = y - SERVICE_RISE;
@@ -58,15 +63,20 @@ function lineTo(b: SceneBuilder, x1: number, x2: number, y: number): number {
   return x2;
 }
 
-/** One labelled column per run, in series; returns the x after the last. */
-function runColumns(b: SceneBuilder, design: Design, runs: (ConductorRun | undefined)[], x: number, y: number): number {
+/** One labelled column per run, in series, with a junction box between two runs; returns the x after the last. */
+function runColumns(b: SceneBuilder, design: Design, runs: (ConductorRun | undefined)[], x: number, y: number, { numbers, boxes }: Pick<ServiceInput, "numbers" | "boxes">): number {
   runs.forEach((run, i) => {
     const lines = runLabelLines(design, run);
     const width = runLabelWidth(lines) + 28;
-    drawRunLabel(b, x + 12, y, lines);
     b.line(x, y, x + width, y);
-    if (i < runs.length - 1) junctionDot(b, x + width, y);
+    drawRunLabel(b, x + 12, y, lines, run ? numbers.get(run) : undefined);
     x += width;
+    if (i < runs.length - 1) {
+      b.line(x, y, x + BOX_GAP, y);
+      junctionBox(b, x + BOX_GAP / 2, y - 8, y + 8);
+      b.text(x + BOX_GAP / 2, y + 17, boxLabel(boxes), { size: SIZE.spec, anchor: "middle", weight: "bold" });
+      x += BOX_GAP;
+    }
   });
   return x;
 }

@@ -6,6 +6,7 @@ import { readCircuits, type CircuitModel } from "./circuit-model";
 import { layoutService } from "./layout-service";
 import { layoutSources } from "./layout-sources";
 import { diagramNotes } from "./notes";
+import { drawUnplacedRuns } from "./unplaced-runs";
 import { itemsBounds, type SldScene } from "./scene";
 import { SceneBuilder } from "./scene-builder";
 import { LINE_GAP, SIZE, formatKw, wrapWords } from "./style";
@@ -28,7 +29,8 @@ const TWO_COLUMNS_FROM_W = 900;
 export function layoutSingleLine(design: Design, options: SingleLineOptions = {}): SldScene {
   const model = readCircuits(design);
   const diagram = new SceneBuilder();
-  const sources = layoutSources(diagram, design, model);
+  const boxes = { next: 1 };
+  const sources = layoutSources(diagram, design, model, boxes);
   const microOnly = model.groups.every((g) => g.kind === "micro");
   if (sources.output) {
     layoutService(diagram, {
@@ -37,8 +39,11 @@ export function layoutSingleLine(design: Design, options: SingleLineOptions = {}
       from: sources.output,
       startX: sources.nextX,
       initiatorTarget: microOnly ? null : { right: sources.collector.right },
+      numbers: model.numbers,
+      boxes,
     });
   }
+  drawUnplacedRuns(diagram, design, model);
   const drawn = itemsBounds(diagram.build());
   const withNotes = options.notes !== false;
   const headingH = options.heading === false ? 0 : HEADING_H;

@@ -4,15 +4,15 @@
 // no label can run into its neighbour.
 import type { Design } from "@/lib/engineering";
 import { arrayHeaderHeight, arrayHeaderLines, arrayHeaderWidth, chainWidth, drawArrayBox, drawChain, rowCount, rowDevice, rowLabel, ROW_ABOVE, ROW_BELOW, ROW_H } from "./array-rows";
-import type { BranchRow, CircuitModel, SourceGroup, StringRow } from "./circuit-model";
+import type { CircuitModel, SourceGroup, SourceRow } from "./circuit-model";
 import { COMBINER_W, INVERTER_BOX_W, MIN_BODY_H, captionHeight, captionWidth, combinerCaption, drawCaption, drawCombiner, drawInverter, inverterCaption, type Caption } from "./collectors";
-import { drawRunLabel, runLabelLines, runLabelWidth } from "./conductor-label";
+import { NO_RUN_LABEL as NO_RUN } from "./conductor-label";
+import { drawRunColumns, planColumns, runLabels, type BoxCounter } from "./run-columns";
 import { textWidthPt } from "./scene";
 import type { SceneBuilder } from "./scene-builder";
 import { SIZE } from "./style";
-import { junctionDot } from "./symbols";
 
-type Row = StringRow | BranchRow;
+type Row = SourceRow;
 type StringGroup = Extract<SourceGroup, { kind: "string-inverter" }>;
 type Span = { top: number; bottom: number };
 
@@ -33,7 +33,7 @@ function expand(span: Span, minHeight: number): Span {
   return { top: span.top - grow, bottom: span.bottom + grow };
 }
 
-export function layoutSources(b: SceneBuilder, design: Design, model: CircuitModel): SourcesLayout {
+export function layoutSources(b: SceneBuilder, design: Design, model: CircuitModel, boxes: BoxCounter): SourcesLayout {
   const headerLines = arrayHeaderLines(design, model);
   const stringGroups = model.groups.filter((g): g is StringGroup => g.kind === "string-inverter");
   const captions = new Map<SourceGroup, Caption>(stringGroups.map((g, i) => [g, inverterCaption(g.inverter, stringGroups.length > 1 ? i + 1 : null)]));
@@ -58,36 +58,34 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
   const rows = model.groups.flatMap((g) => g.rows as Row[]);
   if (rows.length === 0 && stringGroups.length === 0) return { output: null, nextX: 0, collector: { top: 0, bottom: 0, right: 0 } };
 
-  // Columns, left to right.
+  // Columns, left to right: the array, the runs along the rows, the inverters.
   const arrayInner = Math.max(arrayHeaderWidth(headerLines), ...rows.map((r) => Math.max(textWidthPt(rowLabel(r), SIZE.label), chainWidth(rowCount(r), rowDevice(design, r)))));
   const arrayRight = ROW_X + arrayInner + 12;
-  const labelled = rows.filter((r, i) => !r.run || rows.findIndex((o) => o.run === r.run) === i);
-  const runLabels = new Map(labelled.map((r) => [r, runLabelLines(design, r.run)]));
-  const labelX = arrayRight + 16;
-  const invX = labelX + Math.max(60, ...[...runLabels.values()].map(runLabelWidth)) + 14;
+  const labels = runLabels(design, rows.flatMap((r) => r.runs));
+  const plan = planColumns(rows.map((r) => r.runs), labels, arrayRight + 16, NO_RUN);
+  const invX = plan.end;
   const invRight = stringGroups.length ? invX + Math.max(INVERTER_BOX_W, ...[...captions.values()].map(captionWidth)) + 20 : invX;
 
   drawArrayBox(b, 0, 0, arrayRight, lastRowY + ROW_BELOW + 6, headerLines);
   for (const row of rows) b.text(ROW_X, rowY.get(row)! - 24, rowLabel(row), { size: SIZE.label });
 
-  // String rows end at their inverter; strings sharing a run join first.
+  // Feeds into the combiner (each string inverter's output runs, then each branch) decide where rows end.
+  const outputLabels = runLabels(design, stringGroups.flatMap((g) => g.outputRuns));
+  const feedPlan = model.hasCombiner && stringGroups.length ? planColumns(stringGroups.map((g) => g.outputRuns), outputLabels, invRight, NO_RUN) : null;
+  const combX = feedPlan ? feedPlan.end : invRight;
+
+  // Every string keeps its own wire to its own inverter input; branches run on to the combiner.
+  for (const row of rows) {
+    const ry = rowY.get(row)!;
+    const end = drawChain(b, ROW_X, ry, rowCount(row), rowDevice(design, row));
+    b.line(end, ry, row.kind === "string" ? invX : combX, ry);
+  }
+  drawRunColumns(b, rows.map((r) => ({ y: rowY.get(r)!, runs: r.runs })), plan, labels, model.numbers, boxes, NO_RUN);
+
   const inverterOut = new Map<SourceGroup, { x: number; y: number }>();
   for (const group of stringGroups) {
-    const inputs: number[] = [];
-    for (const row of group.rows) {
-      const ry = rowY.get(row)!;
-      const end = drawChain(b, ROW_X, ry, rowCount(row), rowDevice(design, row));
-      const head = group.rows.find((o) => o.run !== undefined && o.run === row.run) ?? row;
-      if (head === row) {
-        b.line(end, ry, invX, ry);
-        inputs.push(ry);
-        drawRunLabel(b, labelX, ry, runLabels.get(row)!);
-      } else {
-        joinToHead(b, end, ry, arrayRight + 8, rowY.get(head)!);
-      }
-    }
     const body = bodies.get(group)!;
-    inverterOut.set(group, drawInverter(b, invX, body.top, body.bottom - body.top, inputs));
+    inverterOut.set(group, drawInverter(b, invX, body.top, body.bottom - body.top, group.rows.map((r) => rowY.get(r)!)));
     drawCaption(b, invX, body.bottom, captions.get(group)!);
   }
 
@@ -98,24 +96,15 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
   }
 
   // Feeds into the combiner: each string inverter's output, each microinverter branch.
-  const feedLabels = stringGroups.map((g) => runLabelLines(design, g.outputRun));
-  const feedLabelX = invRight;
-  const combX = stringGroups.length ? feedLabelX + Math.max(...feedLabels.map(runLabelWidth)) + 14 : invRight;
   const feeds: { y: number; ocpdA?: number }[] = [];
-  stringGroups.forEach((g, i) => {
+  stringGroups.forEach((g) => {
     const out = inverterOut.get(g)!;
     b.line(out.x, out.y, combX, out.y);
-    drawRunLabel(b, feedLabelX, out.y, feedLabels[i]);
-    feeds.push({ y: out.y, ocpdA: g.outputRun?.ocpdA });
+    feeds.push({ y: out.y, ocpdA: g.outputRuns[g.outputRuns.length - 1]?.ocpdA });
   });
+  if (feedPlan) drawRunColumns(b, stringGroups.map((g) => ({ y: inverterOut.get(g)!.y, runs: g.outputRuns })), feedPlan, outputLabels, model.numbers, boxes, NO_RUN);
   const branches = model.groups.flatMap((g) => (g.kind === "micro" ? g.rows : []));
-  for (const row of branches) {
-    const ry = rowY.get(row)!;
-    const end = drawChain(b, ROW_X, ry, row.units, "micro");
-    b.line(end, ry, combX, ry);
-    drawRunLabel(b, labelX, ry, runLabels.get(row)!);
-    feeds.push({ y: ry, ocpdA: row.run?.ocpdA });
-  }
+  for (const row of branches) feeds.push({ y: rowY.get(row)!, ocpdA: row.runs.find((r) => r.ocpdA)?.ocpdA });
   const body = expand({ top: Math.min(...feeds.map((f) => f.y)) - ROW_ABOVE, bottom: Math.max(...feeds.map((f) => f.y)) + ROW_BELOW }, MIN_BODY_H);
   const outY = (body.top + body.bottom) / 2;
   const output = drawCombiner(b, combX, body.top, body.bottom - body.top, feeds, outY);
@@ -124,12 +113,4 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
   const caption = combinerCaption(feeds.length, microUnits, microW);
   drawCaption(b, combX, body.bottom, caption);
   return { output, nextX: combX + Math.max(COMBINER_W, captionWidth(caption)) + 20, collector: { ...body, right: output.x } };
-}
-
-// A string whose run it shares with the string above: wire to a junction, then up.
-function joinToHead(b: SceneBuilder, fromX: number, y: number, joinX: number, headY: number): void {
-  b.line(fromX, y, joinX, y);
-  b.line(joinX, y, joinX, headY);
-  junctionDot(b, joinX, headY);
-  junctionDot(b, joinX, y);
 }

@@ -20,6 +20,7 @@ export function diagramNotes(design: Design, necEdition?: NecEdition): string[] 
     "Module frames and racking are bonded; the equipment grounding conductor runs with the circuit conductors.",
     "Warning labels and placards per the label sheet, with the values computed there.",
     "PV source circuits are energized whenever light reaches the modules, and the inverter holds a charge after it stops. Work on them only as local codes and licensed practice allow.",
+    "Circled numbers are the run numbers of the conductor schedule. JB1, JB2, …: junction boxes where one run meets the next. A slim outline around several wires: separate circuits in one raceway.",
     "Not to scale. Conductor counts exclude the equipment grounding conductor.",
   ];
 }

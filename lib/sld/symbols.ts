@@ -165,3 +165,26 @@ export function initiatorSymbol(b: SceneBuilder, cx: number, cy: number): void {
   b.rect(cx - 13, cy - 9, 26, 18, { fill: "white", strokeWidth: 1 });
   switchH(b, cx - 11, cx + 11, cy + 3);
 }
+
+export const JUNCTION_BOX_W = 12;
+
+/** Junction box where one run's conductors meet the next run's: a box across the wires it holds. */
+export function junctionBox(b: SceneBuilder, cx: number, top: number, bottom: number): void {
+  b.rect(cx - JUNCTION_BOX_W / 2, top, JUNCTION_BOX_W, bottom - top, { fill: "white", strokeWidth: 1.1 });
+  b.line(cx - JUNCTION_BOX_W / 2, top + 3, cx + JUNCTION_BOX_W / 2, top + 3, { strokeWidth: 0.5 });
+}
+
+/** One raceway holding several circuits: a slim outline around the wires where they run together. */
+export function racewayMark(b: SceneBuilder, cx: number, top: number, bottom: number): void {
+  const r = 4;
+  b.path(
+    [
+      { op: "M", x: cx - r, y: top },
+      { op: "A", r, sweep: 1, x: cx + r, y: top },
+      { op: "L", x: cx + r, y: bottom },
+      { op: "A", r, sweep: 1, x: cx - r, y: bottom },
+      { op: "Z" },
+    ],
+    { strokeWidth: 0.8 },
+  );
+}

@@ -88,7 +88,20 @@ function TitleList({ label, titles }: { label: string; titles: string[] }) {
 }
 
 /** The commissioning result: a mark and word, one sentence, and the readings holding it open. */
-export function CompletionPanel({ input, summary = completionSummary(input), footnote }: { input: CommissioningDocumentInput; summary?: CompletionSummary; footnote?: string }) {
+export function CompletionPanel({
+  input,
+  summary = completionSummary(input),
+  details,
+  footnote,
+  listReview = true,
+}: {
+  input: CommissioningDocumentInput;
+  summary?: CompletionSummary;
+  details?: ReactNode;
+  footnote?: string;
+  /** List the readings to review (the report does; the certificate leaves them to the report). */
+  listReview?: boolean;
+}) {
   const color = STATUS_COLORS[summary.status];
   return (
     <View style={[s.panel, { borderColor: color }]} wrap={false}>
@@ -99,7 +112,9 @@ export function CompletionPanel({ input, summary = completionSummary(input), foo
         <Text style={s.panelSentence}>{summary.sentence}</Text>
         <TitleList label="Failing" titles={summary.failing} />
         <TitleList label="Not recorded yet" titles={summary.notRecorded} />
-        <TitleList label="To review" titles={summary.toReview} />
+        <TitleList label="Waiting" titles={summary.waiting} />
+        {listReview ? <TitleList label="To review" titles={summary.toReview} /> : null}
+        {details}
         {footnote ? <Text style={[s.listLine, { marginTop: 4 }]}>{footnote}</Text> : null}
       </View>
     </View>

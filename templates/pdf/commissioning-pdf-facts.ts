@@ -4,14 +4,18 @@ import {
   FIRST_POWER_MAX_FRACTION,
   INSIDE_BOUNDARY_MAX_V,
   OUTSIDE_BOUNDARY_MAX_V,
+  insulationRequirement,
+  normalizeSerial,
   serviceVoltageRanges,
   shutdownWindow,
+  stringVocWindow,
   type CheckStatus,
   type CommissioningCheck,
   type CommissioningKind,
   type CommissioningRecord,
 } from "@/lib/engineering";
 import type { CommissioningDocumentInput, CommissioningDocumentKind } from "@/lib/field/commissioning-document-input";
+import { openCountsInWords } from "@/lib/field/completion-words";
 import { formatNumber, formatQuantity } from "@/lib/packets/pdf-facts";
 
 // The words and figures the certificate of completion and the commissioning report print,
@@ -47,6 +51,12 @@ export function commissioningProjectLabel(input: CommissioningDocumentInput): st
 
 // Titles for required readings that have no result at all (the completion lists their kind).
 const KIND_TITLES: Record<CommissioningKind, string> = {
+  "string-polarity": "String polarity",
+  "string-voc": "String open-circuit voltage",
+  "string-insulation": "String insulation resistance",
+  "inverter-serial": "Inverter serial against its activation card",
+  "inverter-activation": "Inverter activated",
+  "device-pairing": "Module-level devices found",
   "grid-profile": "Grid profile on the inverter",
   "ac-voltage": "AC voltage at the point of connection",
   "string-shutdown": "String voltage with the array shut down",
@@ -69,7 +79,8 @@ export type CompletionSummary = {
   sentence: string;
   failing: string[]; // titles
   notRecorded: string[]; // titles of readings not recorded that are not already failing
-  toReview: string[]; // titles of recorded readings that warn
+  waiting: string[]; // titles of readings recorded but not through yet (devices still being found)
+  toReview: string[]; // titles of recorded readings that warn and do not hold the record open
 };
 
 const count = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
@@ -84,7 +95,8 @@ export function completionSummary(input: CommissioningDocumentInput): Completion
   const missingIds = [...new Set(completion.missing)].filter((id) => !failingIds.includes(id));
   const failing = failingIds.map((id) => titleOf(input, id));
   const notRecorded = missingIds.map((id) => titleOf(input, id));
-  const toReview = input.results.filter((r) => r.status === "warn" && r.reading === "recorded").map((r) => r.title);
+  const waiting = [...new Set(completion.waiting)].map((id) => titleOf(input, id));
+  const toReview = input.results.filter((r) => r.status === "warn" && r.reading === "recorded" && !r.waiting).map((r) => r.title);
   const reviewNote = toReview.length ? ` ${count(toReview.length, "reading")} to review.` : "";
   if (completion.complete) {
     return {
@@ -94,17 +106,19 @@ export function completionSummary(input: CommissioningDocumentInput): Completion
       sentence: `Complete: all ${count(input.results.length, "reading")} recorded, none failing.${reviewNote}`,
       failing,
       notRecorded,
+      waiting,
       toReview,
     };
   }
-  const parts = [failing.length ? `${failing.length} failing` : null, notRecorded.length ? `${notRecorded.length} not recorded yet` : null].filter(Boolean);
+  const joined = openCountsInWords({ failing: failing.length, notRecorded: notRecorded.length, waiting: waiting.length });
   return {
     complete: false,
     status: failing.length ? "fail" : "warn",
     word: "Open",
-    sentence: `Open: ${parts.join(" and ") || "not marked complete"}.${reviewNote}`,
+    sentence: `Open: ${joined || "not marked complete"}.${reviewNote}`,
     failing,
     notRecorded,
+    waiting,
     toReview,
   };
 }
@@ -125,8 +139,25 @@ function notValid(raw: unknown, unit: string): string {
   return typeof raw === "number" && Number.isFinite(raw) ? `Not valid (${formatNumber(raw)}${unit ? ` ${unit}` : ""})` : "Not valid";
 }
 
+/** The part of an id after the kind: "S1" of "string-voc:S1", "inv-1" of "inverter-serial:inv-1". */
+const subjectOf = (check: CommissioningCheck) => check.id.slice(check.id.indexOf(":") + 1);
+
 function stringOf(record: CommissioningRecord, check: CommissioningCheck) {
-  return record.strings.find((s) => `string-shutdown:${s.id}` === check.id);
+  return record.strings.find((s) => s.id === subjectOf(check));
+}
+const stringTestOf = (record: CommissioningRecord, check: CommissioningCheck) => record.stringTests?.find((s) => s.id === subjectOf(check));
+const unitOf = (record: CommissioningRecord, check: CommissioningCheck) => record.inverters?.find((u) => u.id === subjectOf(check));
+
+function pairingOf(record: CommissioningRecord, check: CommissioningCheck): { installed: number; found?: number | null } | undefined {
+  const p = record.pairing;
+  if (!p) return undefined;
+  return check.id === "device-pairing" ? p : p.strings.find((s) => s.id === subjectOf(check));
+}
+
+function temperatureText(record: CommissioningRecord): string {
+  const t = record.vocTemperature;
+  if (t?.tempC === null || t?.tempC === undefined || !Number.isFinite(t.tempC)) return "";
+  return ` at ${formatNumber(t.tempC)} °C (${t.source === "ambient" ? "air" : "module"})`;
 }
 
 function readingText(check: CommissioningCheck, record: CommissioningRecord): string {
@@ -134,6 +165,24 @@ function readingText(check: CommissioningCheck, record: CommissioningRecord): st
   switch (check.kind) {
     case "grid-profile":
       return check.reading === "recorded" ? (record.gridProfileSet ?? "").trim() : NOT_RECORDED;
+    case "string-polarity": {
+      const p = stringTestOf(record, check)?.polarity;
+      return p === "correct" ? "Correct" : p === "reversed" ? "Reversed" : NOT_RECORDED;
+    }
+    case "inverter-serial": {
+      const u = unitOf(record, check);
+      const serial = normalizeSerial(u?.serial) || "not recorded";
+      const card = normalizeSerial(u?.cardSerial) || "not recorded";
+      return `Unit ${serial}; card ${card}`;
+    }
+    case "inverter-activation":
+      return check.status === "pass" ? "Done" : "Not yet";
+    case "device-pairing": {
+      const p = pairingOf(record, check);
+      if (check.reading === "missing") return NOT_RECORDED;
+      if (check.reading === "invalid") return notValid(p?.found, "");
+      return `${formatQuantity(check.value, "")} of ${p?.installed ?? "?"}`;
+    }
     case "first-power": {
       const w = record.firstPowerW;
       const time = record.firstPowerTime?.trim() ?? "";
@@ -144,12 +193,18 @@ function readingText(check: CommissioningCheck, record: CommissioningRecord): st
     case "modules-reporting":
       if (check.reading !== "recorded") return check.reading === "missing" ? NOT_RECORDED : notValid(record.modulesReporting, "");
       return `${formatQuantity(check.value, "")} of ${record.modulesInstalled}`;
+    case "string-voc": {
+      const v = stringTestOf(record, check)?.vocV;
+      if (typeof v !== "number" || !Number.isFinite(v)) return v === null || v === undefined ? NOT_RECORDED : "Not valid";
+      return `${formatQuantity(v, "V")}${temperatureText(record)}`;
+    }
     default: {
       if (check.reading === "missing") return NOT_RECORDED;
       if (check.reading === "invalid") {
         const raw =
           check.kind === "ac-voltage" ? record.acVoltageV
           : check.kind === "string-shutdown" ? stringOf(record, check)?.measuredV
+          : check.kind === "string-insulation" ? stringTestOf(record, check)?.insulationMohm
           : check.kind === "rapid-shutdown-voltage" ? record.rapidShutdownTest?.measuredV
           : check.kind === "rapid-shutdown-time" ? record.rapidShutdownTest?.seconds
           : null;
@@ -168,8 +223,32 @@ function expectedText(check: CommissioningCheck, record: CommissioningRecord): s
   const fallback = check.limit === null ? "—" : `Limit ${formatQuantity(check.limit, check.unit)}`;
   try {
     switch (check.kind) {
+      case "string-polarity":
+        return "+ to +, − to −";
+      case "string-voc": {
+        const s = stringTestOf(record, check);
+        const t = record.vocTemperature;
+        if (!s) return fallback;
+        if (t?.tempC === null || t?.tempC === undefined || !Number.isFinite(t.tempC)) return `${count(s.modulesInSeries, "module")}, corrected to the temperature read`;
+        const w = stringVocWindow(s, { tempC: t.tempC, source: t.source });
+        return `${formatNumber(Math.round(w.lowV * 10) / 10)}–${formatNumber(Math.round(w.highV * 10) / 10)} V for ${count(s.modulesInSeries, "module")}`;
+      }
+      case "string-insulation": {
+        const s = stringTestOf(record, check);
+        if (!s) return fallback;
+        const { testV, minMohm } = insulationRequirement(s.modulesInSeries * s.moduleVocV);
+        return `At least ${formatNumber(minMohm)} MΩ at a ${testV} V test`;
+      }
+      case "inverter-serial":
+        return "The same serial on the unit and its card";
+      case "inverter-activation":
+        return "Done";
+      case "device-pairing": {
+        const p = pairingOf(record, check);
+        return p ? `All ${p.installed} installed` : fallback;
+      }
       case "grid-profile":
-        return record.requiredGridProfile?.trim() || "Not on file";
+        return record.acceptedGridProfiles.map((p) => p.trim()).filter(Boolean).join(" or ") || "Not on file";
       case "ac-voltage": {
         const { nominalV, rangeA, rangeB } = serviceVoltageRanges(record.nominalServiceV);
         return `${range(rangeA.lowV, rangeA.highV, "V")} on ${nominalV} V; ${range(rangeB.lowV, rangeB.highV, "V")} at times`;
@@ -177,9 +256,9 @@ function expectedText(check: CommissioningCheck, record: CommissioningRecord): s
       case "string-shutdown": {
         const s = stringOf(record, check);
         if (!s) return fallback;
-        const { expectedV, highV } = shutdownWindow(s.devicesInSeries, s.perDeviceV ?? DEFAULT_SHUTDOWN_V_PER_DEVICE);
+        const { lowV, highV } = shutdownWindow(s.devicesInSeries, s.perDeviceV ?? DEFAULT_SHUTDOWN_V_PER_DEVICE);
         const codeV = (s.wiringLeavesArray ?? true) ? OUTSIDE_BOUNDARY_MAX_V : INSIDE_BOUNDARY_MAX_V;
-        return `${range(expectedV, highV, "V")} for ${count(s.devicesInSeries, "device")}; ${codeV} V at most`;
+        return `${range(lowV, highV, "V")} for ${count(s.devicesInSeries, "device")}; ${codeV} V at most`;
       }
       case "modules-reporting":
         return `All ${record.modulesInstalled} installed`;
@@ -208,4 +287,39 @@ export function readingRows(input: CommissioningDocumentInput): ReadingRow[] {
 /** Headline system facts, as both documents print them. */
 export function systemRatingText(input: CommissioningDocumentInput): { dc: string; ac: string } {
   return { dc: formatQuantity(input.system.dcKw, "kW"), ac: formatQuantity(input.system.acKw, "kW") };
+}
+
+/** The readings the certificate names in brief, each as a label and a value. */
+export function certificateReadings(input: CommissioningDocumentInput): { label: string; value: string }[] {
+  const { record, results } = input;
+  const result = (id: string) => results.find((r) => r.id === id);
+  const lines: { label: string; value: string }[] = [];
+  if (record.inverters?.length) {
+    lines.push({
+      label: "Inverter serial",
+      value: record.inverters
+        .map((u) => {
+          const serial = normalizeSerial(u.serial) || "not recorded";
+          const matched = result(`inverter-serial:${u.id}`)?.status === "pass";
+          return `${serial}${matched ? ", card matches" : ", card not checked"}${u.activated ? ", activated" : ""}`;
+        })
+        .join("; "),
+    });
+  }
+  lines.push({ label: "Grid profile", value: record.gridProfileSet?.trim() || "Not recorded" });
+  if (record.pairing) {
+    const found = record.pairing.found;
+    lines.push({ label: `${record.pairing.word[0]!.toUpperCase()}${record.pairing.word.slice(1)} found`, value: typeof found === "number" ? `${found} of ${record.pairing.installed}` : "Not recorded" });
+  }
+  const tests = record.stringTests ?? [];
+  if (tests.length) {
+    const ids = results.filter((r) => r.kind === "string-polarity" || r.kind === "string-voc" || r.kind === "string-insulation");
+    const passing = ids.filter((r) => r.status === "pass").length;
+    lines.push({ label: "String tests", value: `${count(tests.length, "string")}: ${passing} of ${ids.length} results pass` });
+  }
+  lines.push({
+    label: "Modules reporting",
+    value: record.moduleMonitoring ? (typeof record.modulesReporting === "number" ? `${record.modulesReporting} of ${record.modulesInstalled}` : "Not recorded") : "No module-level monitoring",
+  });
+  return lines;
 }

@@ -80,7 +80,7 @@ export function CommissioningReport({ input }: { input: CommissioningDocumentInp
     <CommissioningDocument input={input} subtitle={`Grid-tied PV system · Project ${p.number}`} documentLine="Readings and results">
       <Text style={s.intro}>
         The installer's readings at start-up, each beside what the approved design, the NEC {input.record.edition} and the utility's requirements lead one to expect. A reading not yet taken can be
-        added later; the record is complete only when every reading is in and none fails.
+        added later; the record is complete only when every reading is in, none fails and none is still waiting.
       </Text>
       <Section title="1  Project and system">
         <View style={s.row}>
@@ -112,7 +112,7 @@ export function CommissioningReport({ input }: { input: CommissioningDocumentInp
         3  Readings
       </Text>
       <Text style={s.legend}>
-        Pass: within what was expected. Review: recorded outside the usual range, or not recorded yet. Fail: must be put right before the record can be completed. Times are local to the
+        Pass: within what was expected. Review: recorded outside the usual range, not recorded yet, or waiting (devices still being found). Fail: must be put right before the record can be completed. Times are local to the
         organization's time zone; the first power time is as entered on site.
       </Text>
       <View>

@@ -1,7 +1,7 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { CommissioningDocumentInput } from "@/lib/field/commissioning-document-input";
 import { Field, Section } from "./blocks";
-import { completionSummary, documentTime, systemRatingText } from "./commissioning-pdf-facts";
+import { certificateReadings, completionSummary, documentTime, systemRatingText } from "./commissioning-pdf-facts";
 import { CautionNotice, CommissioningDocument, CompletionPanel, EquipmentRow } from "./commissioning-parts";
 import { SignatureLine, SignatureRow } from "./signature-line";
 import { COLORS } from "./styles";
@@ -14,7 +14,9 @@ const s = StyleSheet.create({
   row: { flexDirection: "row", marginHorizontal: -5 },
   cell: { flex: 1, marginHorizontal: 5 },
   wide: { flex: 2, marginHorizontal: 5 },
-  statement: { fontSize: 8.3, lineHeight: 1.4, marginBottom: 2 },
+  readings: { fontSize: 8, lineHeight: 1.35, marginTop: 4, color: COLORS.ink },
+  readingLabel: { fontWeight: 600 },
+  statement: { fontSize: 8, lineHeight: 1.35, marginBottom: 2 },
   signatures: { flexDirection: "row", marginHorizontal: -5 },
   block: { flex: 1, marginHorizontal: 5, padding: 8, paddingTop: 7, borderWidth: 0.8, borderColor: COLORS.rule },
   blockTitle: { fontSize: 9.5, fontWeight: 700, marginBottom: 2 },
@@ -22,7 +24,7 @@ const s = StyleSheet.create({
 });
 
 // Room above each signature line: a little under the packets' signature sheet, to keep the certificate on one page.
-const LINE_SPACE_PT = 18;
+const LINE_SPACE_PT = 14;
 
 /** The statement the installer signs, in full. */
 export function installerStatement(input: CommissioningDocumentInput): string {
@@ -47,6 +49,7 @@ export function CompletionCertificate({ input }: { input: CommissioningDocumentI
   const sys = input.system;
   const ratings = systemRatingText(input);
   const summary = completionSummary(input);
+  const readings = certificateReadings(input); // the key readings, in one paragraph to keep the certificate on one page
   const org = input.organization;
   const footnote = summary.complete
     ? `Marked complete ${input.completedAt ? documentTime(input.completedAt, input.organization.timeZone) : "(time not recorded)"}; the readings are in the commissioning report.`
@@ -66,7 +69,23 @@ export function CompletionCertificate({ input }: { input: CommissioningDocumentI
         <EquipmentRow system={sys} rowStyle={s.row} cellStyle={s.cell} />
       </Section>
       <Section title="2  Commissioning result">
-        <CompletionPanel input={input} summary={summary} footnote={footnote} />
+        <CompletionPanel
+          input={input}
+          summary={summary}
+          footnote={footnote}
+          listReview={false}
+          details={
+            <Text style={s.readings}>
+              {readings.map((r, i) => (
+                <Text key={r.label}>
+                  {i > 0 ? " · " : ""}
+                  <Text style={s.readingLabel}>{r.label}: </Text>
+                  {r.value}
+                </Text>
+              ))}
+            </Text>
+          }
+        />
       </Section>
       <Section title="3  Statement and signatures">
         <Text style={s.statement}>{installerStatement(input)}</Text>
@@ -96,7 +115,7 @@ export function CompletionCertificate({ input }: { input: CommissioningDocumentI
           </View>
         </View>
       </Section>
-      <CautionNotice fontSize={7} columns={2} />
+      <CautionNotice fontSize={6.5} columns={2} />
     </CommissioningDocument>
   );
 }

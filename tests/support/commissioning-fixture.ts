@@ -10,9 +10,10 @@ const stringId = (i: number) => String.fromCharCode(65 + i);
 
 /**
  * "complete": every reading in and passing.
- * "open": string B reads 38.6 V shut down (fails), 21 of 22 modules report (fails), the AC
- * voltage sits in the occasional range (review), and the first power reading and the rapid
- * shutdown time are not recorded yet.
+ * "open": string B reads 38.6 V shut down (fails), the activation card names another serial
+ * (fails), the AC voltage sits in the occasional range (review), and the first power reading and
+ * the rapid shutdown time are not recorded yet. With `monitoring`, the devices report: in the open
+ * record 20 of 22 have been found so far (waiting) and 21 of 22 modules report (fails).
  */
 export type CommissioningScenario = "complete" | "open";
 
@@ -23,25 +24,36 @@ function systemSize(strings: number) {
     : { modulesPerString: 8, nominalServiceV: 208, acV: { open: 219.4, complete: 210.2 }, acRatingW: 34200, inverters: "3 × Quillon QS-11400 (11,400 W AC)" };
 }
 
-export function commissioningRecord({ scenario = "open", strings = 2 }: { scenario?: CommissioningScenario; strings?: number } = {}): CommissioningRecord {
+// The demo module (Larkspur LK-405M-54H): Voc 37.2 V, −0.27 %/°C. At a 45 °C module, 11 in series:
+// 11 × 37.2 × (1 + 20 × −0.0027) = 387.1 V (8 in series: 281.5 V).
+const MODULE_TEMP_C = 45;
+const stringVocAt45 = (modules: number) => Math.round(modules * 37.2 * (1 + (20 * -0.27) / 100) * 10) / 10;
+
+export function commissioningRecord({ scenario = "open", strings = 2, monitoring = false }: { scenario?: CommissioningScenario; strings?: number; monitoring?: boolean } = {}): CommissioningRecord {
   const open = scenario === "open";
   const size = systemSize(strings);
   const modulesPerString = size.modulesPerString;
   const modules = strings * modulesPerString;
+  const ids = Array.from({ length: strings }, (_, i) => stringId(i));
   return {
     edition: 2023,
-    requiredGridProfile: REQUIRED_PROFILE,
+    stringTests: ids.map((id) => ({ id, modulesInSeries: modulesPerString, moduleVocV: 37.2, vocTempCoeff: { value: -0.27, unit: "%/C" }, vocApplies: true, polarity: "correct", vocV: stringVocAt45(modulesPerString) - 0.6, insulationMohm: 220 })),
+    vocTemperature: { tempC: MODULE_TEMP_C, source: "module" },
+    inverters: [{ id: "inv-1", label: "Inverter", model: "Quillon QS-7600", serial: "QN0730411", cardSerial: open ? "QN0730412" : "qn-0730411", activated: !open }],
+    acceptedGridProfiles: [REQUIRED_PROFILE, "IEEE 1547-2018 Category B, volt-watt on"],
     gridProfileSet: "IEEE 1547-2018 category B, utility default settings",
+    pairing: monitoring ? { word: "optimizers", installed: modules, found: open ? modules - 2 : modules, strings: ids.map((id) => ({ id, installed: modulesPerString, found: null })) } : null,
     nominalServiceV: size.nominalServiceV,
     acVoltageV: size.acV[scenario],
-    strings: Array.from({ length: strings }, (_, i) => ({
-      id: stringId(i),
+    strings: ids.map((id, i) => ({
+      id,
       devicesInSeries: modulesPerString,
       wiringLeavesArray: true,
       measuredV: open && i === 1 ? 38.6 : (modulesPerString * 10 + 2 + (i % 5)) / 10,
     })),
+    moduleMonitoring: monitoring,
     modulesInstalled: modules,
-    modulesReporting: open ? modules - 1 : modules,
+    modulesReporting: monitoring ? (open ? modules - 1 : modules) : null,
     acRatingW: size.acRatingW,
     firstPowerW: open ? null : Math.round(size.acRatingW * 0.68),
     firstPowerTime: open ? null : "12:40",
@@ -53,8 +65,9 @@ export function commissioningFixture({
   kind = "report",
   scenario = "open",
   strings = 2,
-}: { kind?: CommissioningDocumentKind; scenario?: CommissioningScenario; strings?: number } = {}): CommissioningDocumentInput {
-  const record = commissioningRecord({ scenario, strings });
+  monitoring = false,
+}: { kind?: CommissioningDocumentKind; scenario?: CommissioningScenario; strings?: number; monitoring?: boolean } = {}): CommissioningDocumentInput {
+  const record = commissioningRecord({ scenario, strings, monitoring });
   const results = checkCommissioning(record);
   const completion = commissioningComplete(results);
   return {

@@ -33,7 +33,7 @@ export function packetFixture({ kind = "permit", variant = 0, busbarA = 200, mai
       street: "120 Larkin Mill Rd", city: "Brackenford", state: "CO", postalCode: "80913", utilityAccountNumber: "BL-4410000", meterNumber: "M72000000",
     },
     jurisdiction: JURISDICTION,
-    utility: { name: "Brackenford Municipal Light & Power", requiredGridProfile: "IEEE 1547-2018 Category B, the utility's default settings" },
+    utility: { name: "Brackenford Municipal Light & Power", acceptedGridProfiles: ["IEEE 1547-2018 Category B, the utility's default settings"] },
     designInput,
     design: engine.design,
     site: engine.site,

@@ -1,27 +1,16 @@
-import { atLeast, atMost, fmt, makeCheck, plural } from "../check-result";
-import { COMMON_PRACTICE, clause } from "../clauses";
+import { atLeast, atMost, fmt, plural } from "../check-result";
+import { clause } from "../clauses";
 import { requirePositive, requireWholePositive } from "../errors";
-import { DEFAULT_SHUTDOWN_V_PER_DEVICE, INSIDE_BOUNDARY_MAX_V, OUTSIDE_BOUNDARY_MAX_V, shutdownStringVoltageV } from "../checks/rapid-shutdown";
-import type { CheckInput } from "../check-result";
-import type { Design, NecEdition } from "../types";
+import { INSIDE_BOUNDARY_MAX_V, OUTSIDE_BOUNDARY_MAX_V } from "../checks/rapid-shutdown";
+import type { NecEdition } from "../types";
+import { ENTER_AGAIN, build, countState, readingState, unrecorded, type Reading } from "./reading";
 import { serviceVoltageRanges } from "./service-voltage";
-import type {
-  ArrayBoundary,
-  CommissioningCheck,
-  CommissioningKind,
-  CommissioningRecord,
-  RapidShutdownTestReading,
-  ReadingState,
-  ShutdownStringReading,
-} from "./types";
+import type { ArrayBoundary, CommissioningCheck, CommissioningRecord, RapidShutdownTestReading, ReadingState } from "./types";
 
-// Bases cited by results that are not NEC clauses.
-export const ANSI_C84_1_BASIS = "ANSI C84.1 Range A/B (from memory)";
-export const UTILITY_PROFILE_BASIS = "utility interconnection requirement";
-
-// Shut-down string window: expected to expected + max(1 V, 10 %) (common practice).
-export const SHUTDOWN_TOLERANCE_MIN_V = 1;
-export const SHUTDOWN_TOLERANCE_FRACTION = 0.1;
+// Bases the results cite where no NEC clause sets the limit; screens and documents print them.
+// ANSI C84.1's Range A and B values are from memory (REFERENCE.md).
+export const ANSI_C84_1_BASIS = "ANSI C84.1 Range A and Range B";
+export const MODULE_COUNT_BASIS = "the design's module count";
 // 690.12(B): the reduced voltage must be reached within 30 s (REFERENCE.md).
 export const RAPID_SHUTDOWN_MAX_SECONDS = 30;
 // First power: at most 5 % over the AC rating (meter error); below 10 % of it at midday warns (common practice).
@@ -29,69 +18,6 @@ export const FIRST_POWER_MAX_FRACTION = 1.05;
 export const MIDDAY_LOW_FRACTION = 0.1;
 export const MIDDAY_START_MINUTES = 10 * 60;
 export const MIDDAY_END_MINUTES = 14 * 60;
-
-type Reading = number | null | undefined;
-
-function readingState(value: Reading): ReadingState {
-  if (value === null || value === undefined) return "missing";
-  return Number.isFinite(value) && value >= 0 ? "recorded" : "invalid";
-}
-
-function build(kind: CommissioningKind, reading: ReadingState, input: CheckInput): CommissioningCheck {
-  return { ...makeCheck(input), kind, reading };
-}
-
-const ENTER_AGAIN = "Enter the voltage as read on the meter, in volts.";
-
-/** A reading not taken yet warns (the record can be saved and resumed); one that is not a number fails. */
-function unrecorded(kind: CommissioningKind, state: Exclude<ReadingState, "recorded">, base: Omit<CheckInput, "status" | "value" | "limit" | "message" | "fix">, text: { missing: string; invalid: string; fix?: string; limit?: number }): CommissioningCheck {
-  return build(kind, state, {
-    ...base,
-    status: state === "missing" ? "warn" : "fail",
-    value: null,
-    limit: text.limit ?? null,
-    message: state === "missing" ? text.missing : text.invalid,
-    fix: state === "missing" ? undefined : text.fix,
-  });
-}
-
-/** Lower case, letters and digits only: "IEEE 1547-2018" and "ieee1547 2018" are the same profile. */
-export function normalizeProfile(text: string | null | undefined): string {
-  return (text ?? "").normalize("NFKC").toLowerCase().replace(/[^\p{L}\p{N}]+/gu, "");
-}
-
-export function checkGridProfile(record: Pick<CommissioningRecord, "edition" | "requiredGridProfile" | "gridProfileSet">): CommissioningCheck {
-  const base = { id: "grid-profile", title: "Grid profile on the inverter", value: null, limit: null, unit: "", clause: UTILITY_PROFILE_BASIS, edition: record.edition };
-  const required = normalizeProfile(record.requiredGridProfile);
-  const set = normalizeProfile(record.gridProfileSet);
-  const reading: ReadingState = set === "" ? "missing" : "recorded";
-  if (required === "") {
-    return build("grid-profile", reading, {
-      ...base,
-      status: "fail",
-      message: "The profile the utility requires is not on file, so the inverter's setting cannot be checked.",
-      fix: "Enter the grid profile named in the utility's interconnection approval.",
-    });
-  }
-  if (set === "") {
-    // Like every reading not taken yet, this warns: the record can be saved and finished later.
-    return build("grid-profile", reading, {
-      ...base,
-      status: "warn",
-      message: `The grid profile set on the inverter is not recorded; the utility requires "${record.requiredGridProfile!.trim()}".`,
-      fix: "Read the grid profile from the inverter's settings screen or app and enter it.",
-    });
-  }
-  const ok = set === required;
-  return build("grid-profile", reading, {
-    ...base,
-    status: ok ? "pass" : "fail",
-    message: ok
-      ? `The inverter is set to "${record.gridProfileSet!.trim()}", the profile the utility requires.`
-      : `The inverter is set to "${record.gridProfileSet!.trim()}", but the utility requires "${record.requiredGridProfile!.trim()}".`,
-    fix: ok ? undefined : `Change the inverter's grid profile to "${record.requiredGridProfile!.trim()}" and read it back.`,
-  });
-}
 
 /** AC voltage at the point of connection against ANSI C84.1 (from memory): Range A passes, Range B warns, beyond fails. */
 export function checkAcVoltage(record: Pick<CommissioningRecord, "edition" | "nominalServiceV" | "acVoltageV">): CommissioningCheck {
@@ -128,78 +54,12 @@ export function checkAcVoltage(record: Pick<CommissioningRecord, "edition" | "no
   });
 }
 
-export interface ShutdownWindow {
-  expectedV: number;
-  highV: number;
-}
-
-/** Expected shut-down string voltage: devices × volts each (default 1 V), up to + max(1 V, 10 %) (common practice). */
-export function shutdownWindow(devicesInSeries: number, perDeviceV: number = DEFAULT_SHUTDOWN_V_PER_DEVICE): ShutdownWindow {
-  requireWholePositive(devicesInSeries, "strings", "The number of devices in series");
-  requirePositive(perDeviceV, "strings", "The voltage each device holds when shut down");
-  const expectedV = devicesInSeries * perDeviceV;
-  return { expectedV, highV: expectedV + Math.max(SHUTDOWN_TOLERANCE_MIN_V, SHUTDOWN_TOLERANCE_FRACTION * expectedV) };
-}
-
-/** One empty reading per string of a design, with the shut-down voltage the design expects. */
-export function shutdownReadingsFromDesign(design: Design): ShutdownStringReading[] {
-  return design.strings.map((s) => ({
-    id: s.id,
-    devicesInSeries: s.modulesInSeries,
-    perDeviceV: shutdownStringVoltageV(design, s) / s.modulesInSeries,
-    wiringLeavesArray: true,
-    measuredV: null,
-  }));
-}
-
-/** A string's voltage with the array shut down, against the design and the 690.12 limit where its wiring runs. */
-export function checkShutdownString(s: ShutdownStringReading, edition: NecEdition): CommissioningCheck {
-  const perDeviceV = s.perDeviceV ?? DEFAULT_SHUTDOWN_V_PER_DEVICE;
-  const { expectedV, highV } = shutdownWindow(s.devicesInSeries, perDeviceV);
-  const outside = s.wiringLeavesArray ?? true;
-  const codeLimitV = outside ? OUTSIDE_BOUNDARY_MAX_V : INSIDE_BOUNDARY_MAX_V;
-  const where = outside ? "wiring that leaves the array" : "wiring kept within the array";
-  const windowText = `${fmt(expectedV)}–${fmt(highV)} V`;
-  const base = {
-    id: `string-shutdown:${s.id}`,
-    title: `String ${s.id} voltage with the array shut down`,
-    unit: "V",
-    clause: `${clause(outside ? "rapidShutdownOutside" : "rapidShutdownInside", edition)}; ${COMMON_PRACTICE} ${fmt(perDeviceV)} V per device`,
-    edition,
-  };
-  const state = readingState(s.measuredV);
-  if (state !== "recorded") {
-    return unrecorded("string-shutdown", state, base, { missing: `Not recorded yet: with the array shut down, string ${s.id}'s ${plural(s.devicesInSeries, "device")} should read about ${windowText}.`, invalid: `String ${s.id}'s reading must be a number of zero or more.`, fix: ENTER_AGAIN });
-  }
-  const v = s.measuredV as number;
-  const overCode = !atMost(v, codeLimitV);
-  const inWindow = atLeast(v, expectedV) && atMost(v, highV);
-  const said = `String ${s.id} read ${fmt(v)} V with the array shut down`;
-  return build("string-shutdown", "recorded", {
-    ...base,
-    status: overCode ? "fail" : inWindow ? "pass" : "warn",
-    value: v,
-    limit: overCode ? codeLimitV : highV,
-    message: overCode
-      ? `${said}: above the ${codeLimitV} V allowed on ${where}. At least one device may not have shut down.`
-      : inWindow
-        ? `${said}: as expected for ${plural(s.devicesInSeries, "device")} (${windowText}).`
-        : v < expectedV
-          ? `${said}: less than the ${windowText} expected for ${plural(s.devicesInSeries, "device")}; the string may be open or the meter on another string.`
-          : `${said}: more than the ${windowText} expected for ${plural(s.devicesInSeries, "device")}, though within ${codeLimitV} V.`,
-    fix: overCode
-      ? "Do not touch the string's conductors. Confirm the shutdown switch is off, find the device that did not shut down, and replace it."
-      : inWindow
-        ? undefined
-        : "Check the meter leads are on this string and count its devices against the design; check the device's shut-down voltage in its data sheet.",
-  });
-}
-
+/** Every module installed reports in the monitoring (common practice); asked only where the system has module-level monitoring. */
 export function checkModulesReporting(record: Pick<CommissioningRecord, "edition" | "modulesInstalled" | "modulesReporting">): CommissioningCheck {
   const installed = requireWholePositive(record.modulesInstalled, "modulesInstalled", "The number of modules installed");
-  const base = { id: "modules-reporting", title: "Modules reporting", unit: "modules", clause: COMMON_PRACTICE, edition: record.edition };
+  const base = { id: "modules-reporting", title: "Modules reporting", unit: "modules", clause: MODULE_COUNT_BASIS, edition: record.edition };
   const n = record.modulesReporting;
-  const state: ReadingState = n === null || n === undefined ? "missing" : Number.isInteger(n) && n >= 0 ? "recorded" : "invalid";
+  const state: ReadingState = countState(n);
   if (state !== "recorded") {
     return unrecorded("modules-reporting", state, base, {
       missing: `Not recorded yet: count the modules reporting in the monitoring app (${installed} installed).`,
@@ -238,7 +98,7 @@ export function parseTimeOfDay(text: string): number | null {
 export function checkFirstPower(record: Pick<CommissioningRecord, "edition" | "acRatingW" | "firstPowerW" | "firstPowerTime">): CommissioningCheck {
   const ratingW = requirePositive(record.acRatingW, "acRatingW", "The system's AC rating");
   const maxW = FIRST_POWER_MAX_FRACTION * ratingW;
-  const base = { id: "first-power", title: "First power reading", unit: "W", clause: `${COMMON_PRACTICE} (AC rating ${fmt(ratingW)} W)`, edition: record.edition };
+  const base = { id: "first-power", title: "First power reading", unit: "W", clause: `the system's AC rating (${fmt(ratingW)} W)`, edition: record.edition };
   const w = record.firstPowerW;
   const time = record.firstPowerTime?.trim() ?? "";
   const powerState: ReadingState = w === null || w === undefined ? "missing" : Number.isFinite(w) ? "recorded" : "invalid";

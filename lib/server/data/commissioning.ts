@@ -3,8 +3,9 @@ import { CommissioningRecord, Project, ProjectFile, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { checkCommissioning, commissioningComplete, type CommissioningCheck, type CommissioningCompletion, type CommissioningRecord as RecordFacts } from "@/lib/engineering/commissioning";
 import { AppError, isAppError } from "@/lib/errors";
-import { commissioningFacts, emptyReadings, toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
+import { commissioningFacts, emptyReadings, moduleMonitoringOf, toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
 import type { CommissioningDocumentInput, CommissioningDocumentKind } from "@/lib/field/commissioning-document-input";
+import { openCountsInWords } from "@/lib/field/completion-words";
 import type { PacketInput } from "@/lib/packets/packet-input";
 import { CommissioningReadings, SaveCommissioningInput } from "@/lib/schemas/commissioning";
 import type { CommissioningStatus } from "@/models/commissioning-record";
@@ -38,7 +39,14 @@ export async function getCommissioningContext({ viewer, projectId }: { viewer: V
     throw error;
   }
   const { ratings } = input.review.summary;
-  const facts = commissioningFacts({ design: input.design, edition: input.site.necEdition, requiredGridProfile: input.utility?.requiredGridProfile ?? null, moduleCount: ratings.moduleCount, acKw: ratings.acKw });
+  const facts = commissioningFacts({
+    design: input.design,
+    edition: input.site.necEdition,
+    acceptedGridProfiles: input.utility?.acceptedGridProfiles ?? [],
+    moduleCount: ratings.moduleCount,
+    acKw: ratings.acKw,
+    moduleMonitoring: moduleMonitoringOf(input.equipment),
+  });
   return { input, facts };
 }
 
@@ -109,9 +117,9 @@ export async function saveCommissioning({ viewer, input }: { viewer: Viewer; inp
   return { ...toDto(projectId, facts, readings, row), completeRefused: refused };
 }
 
-function refusal({ failing, missing }: CommissioningCompletion): string {
-  const parts = [failing.length ? `${failing.length} failing` : "", missing.length ? `${missing.length} not recorded` : ""].filter(Boolean);
-  return `Saved, but not marked complete: ${parts.join(" and ")}. Correct or record them, then mark it complete.`;
+function refusal({ failing, missing, waiting }: CommissioningCompletion): string {
+  const open = openCountsInWords({ failing: failing.length, notRecorded: missing.length, waiting: waiting.length });
+  return `Saved, but not marked complete: ${open}. Correct, record or wait for them, then mark it complete.`;
 }
 
 /** What the certificate of completion and the commissioning report print, from the saved record and the current design. */

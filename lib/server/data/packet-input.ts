@@ -59,7 +59,7 @@ export async function buildPacketInput({ viewer, projectId, kind }: { viewer: Vi
       city: project.city, state: project.state, postalCode: project.postalCode, utilityAccountNumber: project.utilityAccountNumber, meterNumber: project.meterNumber,
     },
     jurisdiction: { name: jurisdiction!.name, state: jurisdiction!.state, necEdition: jurisdiction!.necEdition as NecEdition, recordLowTempC: jurisdiction!.recordLowTempC, highDesignTempC: jurisdiction!.highDesignTempC },
-    utility: utility ? { name: utility.name, requiredGridProfile: utility.requiredGridProfile } : null,
+    utility: utility ? { name: utility.name, acceptedGridProfiles: utility.acceptedGridProfiles } : null,
     designInput,
     design: engine.design,
     site: engine.site,

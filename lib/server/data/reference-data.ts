@@ -10,10 +10,10 @@ import { writeWithAudit } from "./audited-write";
 import { isUuid } from "./ids";
 
 export type JurisdictionDto = { id: string; name: string; state: string; necEdition: number; recordLowTempC: number; highDesignTempC: number; notes: string };
-export type UtilityDto = { id: string; name: string; serviceVoltages: string[]; requiredGridProfile: string; notes: string };
+export type UtilityDto = { id: string; name: string; serviceVoltages: string[]; acceptedGridProfiles: string[]; notes: string };
 
 const toJurisdictionDto = ({ id, name, state, necEdition, recordLowTempC, highDesignTempC, notes }: Jurisdiction): JurisdictionDto => ({ id, name, state, necEdition, recordLowTempC, highDesignTempC, notes });
-const toUtilityDto = ({ id, name, serviceVoltages, requiredGridProfile, notes }: Utility): UtilityDto => ({ id, name, serviceVoltages, requiredGridProfile, notes });
+const toUtilityDto = ({ id, name, serviceVoltages, acceptedGridProfiles, notes }: Utility): UtilityDto => ({ id, name, serviceVoltages, acceptedGridProfiles, notes });
 
 /** Where-clause of one row of the viewer's organization, locked when read inside a write. */
 const ownRow = (viewer: Viewer, id: string, transaction?: Transaction) => ({ where: { id, organizationId: viewer.organizationId }, transaction, lock: transaction?.LOCK.UPDATE });
@@ -89,7 +89,7 @@ export async function createUtility({ viewer, values }: { viewer: Viewer; values
   return toUtilityDto(row);
 }
 
-/** Changes a utility's service voltages, required grid profile or notes (admins). */
+/** Changes a utility's service voltages, accepted grid profiles or notes (admins). */
 export async function updateUtility({ viewer, utilityId, values }: { viewer: Viewer; utilityId: string; values: UtilityValues }): Promise<UtilityDto> {
   assertCanEdit(viewer);
   const row = await writeWithAudit({ viewer, action: "utility.updated", entityType: "utility" }, async (transaction) => {

@@ -118,9 +118,9 @@ export function FacilitySheet({ input, sheet, singleLineSheet }: Sheet & { singl
         </View>
       </Section>
       <Section title="7  Certification and grid profile">
-        <Field label="Grid profile the utility requires" value={input.utility?.requiredGridProfile ?? "Ask the utility: no profile on file"} />
+        <Field label="Grid profiles the utility accepts" value={input.utility?.acceptedGridProfiles.length ? input.utility.acceptedGridProfiles.join("; ") : "Ask the utility: no profile on file"} />
         <Text style={s.note}>
-          Certification as the inverter maker states it (above); UL 1741 with IEEE 1547.1 testing is the usual basis. The installer sets the grid profile the utility requires at
+          Certification as the inverter maker states it (above); UL 1741 with IEEE 1547.1 testing is the usual basis. The installer sets a grid profile the utility accepts at
           commissioning and records it in the commissioning report; the utility's settings win over any default.
         </Text>
       </Section>

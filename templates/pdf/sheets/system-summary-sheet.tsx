@@ -68,6 +68,7 @@ export function SystemSummarySheet({ input, sheet }: { input: PacketInput; sheet
           <Section title="Conductor schedule">
             <Table
               columns={[
+                { header: "No.", width: 0.35, render: (r: ConductorRow) => r.number, mono: true, align: "right" },
                 { header: "Run", width: 2, render: (r: ConductorRow) => r.label },
                 { header: "Carries", width: 1.4, render: (r: ConductorRow) => r.carries },
                 { header: "Conductors", width: 2.6, render: (r: ConductorRow) => r.conductors },

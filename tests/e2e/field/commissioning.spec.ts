@@ -1,63 +1,153 @@
-import { expect, test, type Locator } from "@playwright/test";
+import { expect, test, type Locator, type Page } from "@playwright/test";
+import { BarcodeFormat, QRCodeWriter } from "@zxing/library";
 import { PDFDocument } from "pdf-lib";
 import { DEMO, listProjectsAs, mailboxFor, pageFor } from "../support/session";
 
 // A phone held upright: the field record is laid out for this first.
 test.use({ viewport: { width: 390, height: 844 }, hasTouch: true });
 
-/** Types a reading and waits for its check to settle on a status. */
+/** Types a reading and leaves the field, as a thumb on a phone does. */
 async function enter(input: Locator, value: string) {
   await input.fill(value);
   await input.blur();
 }
 
-test("installer on a phone records commissioning, corrects a failing reading, uploads the signed form; a renamed executable is refused; the coordinator is notified", async ({ browser }) => {
-  test.setTimeout(180_000);
+const byId = (page: Page, id: string) => page.locator(`[id="${id}"]`);
+
+// Stages where the crew is on site and the demo record is not yet complete.
+const ON_SITE = ["permit_issued", "installed", "inspection_passed", "utility_filed", "utility_approved"];
+
+/** The installer's first project at one of `stages` whose field record shows (or lacks) the devices-found step. */
+async function fieldProject(phone: Page, { stages, pairing }: { stages: string[]; pairing: boolean }) {
+  const mine = (await listProjectsAs(phone)).filter((p) => stages.includes(p.stage));
+  for (const project of mine) {
+    await phone.goto(`/projects/${project.id}/field`);
+    await expect(phone.getByTestId("commissioning-status")).toBeVisible();
+    const hasPairing = (await phone.getByTestId("step-pairing").count()) > 0;
+    const hasStrings = (await phone.getByTestId("step-before-energizing").count()) > 0;
+    if (hasPairing === pairing && hasStrings) return project;
+  }
+  throw new Error(`No demo project for the installer at ${stages.join("/")} with${pairing ? "" : "out"} module-level devices that report`);
+}
+
+/** A QR code of `text` as an SVG picture, as a phone photo of a serial label would show it. */
+function qrSvg(text: string): Buffer {
+  const matrix = new QRCodeWriter().encode(text, BarcodeFormat.QR_CODE, 33, 33, new Map());
+  const cell = 8;
+  const size = matrix.getWidth() * cell;
+  const squares: string[] = [];
+  for (let y = 0; y < matrix.getHeight(); y++) for (let x = 0; x < matrix.getWidth(); x++) if (matrix.get(x, y)) squares.push(`<rect x="${x * cell}" y="${y * cell}" width="${cell}" height="${cell}"/>`);
+  return Buffer.from(`<svg xmlns="http://www.w3.org/2000/svg" width="${size}" height="${size}" viewBox="0 0 ${size} ${size}"><rect width="100%" height="100%" fill="#fff"/><g fill="#000">${squares.join("")}</g></svg>`);
+}
+
+/** Polarity, Voc at the temperature typed, and insulation for every string, from what the page expects. */
+async function testStringsBeforeEnergizing(phone: Page) {
+  const step = phone.getByTestId("step-before-energizing");
+  if ((await step.getByLabel("Temperature during the Voc tests (°C)").count()) > 0) await enter(step.getByLabel("Temperature during the Voc tests (°C)"), "41");
+  for (const group of await step.locator("fieldset[data-testid^=string-tests-]").all()) {
+    await group.getByLabel("Correct (+ to +)").check();
+    const voc = group.locator("input[id$='.vocV']");
+    if ((await voc.count()) > 0) {
+      await expect(voc).toHaveAttribute("data-expected-v", /\d/);
+      await enter(voc, (Math.round(Number(await voc.getAttribute("data-expected-v")) * 10) / 10 - 1.5).toFixed(1));
+    }
+    await enter(group.locator("input[id$='.insulationMohm']"), "240");
+  }
+  await expect(step.locator("[data-testid^=result-string-][data-status=pass]")).toHaveCount(await step.locator("[data-testid^=result-string-]").count());
+}
+
+async function shutDownStrings(phone: Page, belowExpectedV: number) {
+  const strings = phone.getByTestId("step-shutdown").locator("input[data-expected-v]");
+  for (let i = 0; i < (await strings.count()); i++) {
+    const expectedV = Number(await strings.nth(i).getAttribute("data-expected-v"));
+    await enter(strings.nth(i), (expectedV - belowExpectedV).toFixed(1));
+  }
+}
+
+async function acSideAndRapidShutdown(phone: Page) {
+  await enter(phone.getByLabel("AC voltage (V)"), "241");
+  const power = phone.locator("#firstPowerW");
+  await enter(power, String(Math.round(Number(await power.getAttribute("data-rating-w")) * 0.62)));
+  await phone.locator("#firstPowerTime").fill("12:40");
+  await enter(byId(phone, "rapidShutdown.measuredV"), "11");
+  await enter(byId(phone, "rapidShutdown.seconds"), "8");
+}
+
+test("installer on a phone records commissioning in the order of the work: strings tested, the serial read from its barcode and checked against the card, the grid profile chosen from the utility's list, completed without module-level monitoring; then uploads the signed form and the coordinator is notified", async ({ browser }) => {
+  test.setTimeout(240_000);
   const phone = await pageFor(browser, DEMO.installer);
-  const mine = (await listProjectsAs(phone)).filter((p) => p.stage === "utility_approved");
-  expect(mine.length).toBeGreaterThan(0);
-  const project = mine[0];
+  const project = await fieldProject(phone, { stages: ["utility_approved"], pairing: false });
 
   await phone.goto(`/projects/${project.id}`);
   await phone.getByRole("link", { name: "Field record", exact: true }).click();
   await expect(phone.getByRole("heading", { name: "Field record" })).toBeVisible();
   await expect(phone.getByTestId("field-cautions")).toContainText("Inverter capacitors hold a charge after shutdown");
+  // The steps follow the work at the inverter.
+  await expect(phone.locator("[data-testid^=step-] h3")).toHaveText([
+    /Before energizing: string tests/,
+    /At the inverter: serial, activation card, activation/,
+    /Grid profile/,
+    /String voltages with the array shut down/,
+    /AC voltage at the point of connection/,
+    /First power/,
+    /Rapid shutdown test/,
+  ]);
   // Nothing spills sideways on a phone.
   expect(await phone.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
 
-  const profile = phone.locator("#gridProfileSet");
-  await enter(profile, (await profile.getAttribute("data-required"))!);
-  await expect(phone.getByTestId("result-grid-profile")).toHaveAttribute("data-status", "pass");
+  await testStringsBeforeEnergizing(phone);
+
+  // The unit's serial, read from a photo of its barcode; the card in the box is for another unit.
+  const unit = phone.getByTestId("step-inverter").locator("fieldset").first();
+  await unit.getByLabel("Photo of the barcode of Inverter's label").setInputFiles({ name: "label.svg", mimeType: "image/svg+xml", buffer: qrSvg("S/N: QN0730499") });
+  await expect(unit.locator("input[id$='.serial']")).toHaveValue("QN0730499");
+  await enter(unit.locator("input[id$='.cardSerial']"), "QN0730498");
+  const serial = phone.locator("[data-testid^=result-inverter-serial]");
+  await expect(serial).toHaveAttribute("data-status", "fail");
+  await expect(serial).toContainText("the card belongs to another unit");
+  await enter(unit.locator("input[id$='.cardSerial']"), "qn-0730499");
+  await expect(serial).toHaveAttribute("data-status", "pass");
+  await unit.getByLabel(/Activated with this card's key/).check();
+  await expect(phone.locator("[data-testid^=result-inverter-activation]")).toHaveAttribute("data-status", "pass");
+
+  // A profile typed as the inverter words it is compared loosely; then one chosen from the utility's list.
+  const choice = phone.getByLabel("Profile set on the inverter");
+  const accepted = (await choice.locator("option").allTextContents()).filter((o) => o !== "Choose…" && !o.startsWith("Other"));
+  expect(accepted.length).toBeGreaterThan(0);
+  await choice.selectOption({ label: "Other: type it as the inverter shows it" });
+  await enter(phone.getByLabel("Profile as the inverter shows it"), `${accepted[0]!.toUpperCase().replace("CATEGORY", "Cat.")} default`);
+  const profile = phone.getByTestId("result-grid-profile");
+  await expect(profile).toHaveAttribute("data-status", "pass");
+  await expect(profile).toContainText("names the accepted profile");
+  await enter(phone.getByLabel("Profile as the inverter shows it"), "IEEE 1547-2003");
+  await expect(profile).toHaveAttribute("data-status", "fail");
+  await choice.selectOption({ label: accepted[0]! });
+  await expect(profile).toHaveAttribute("data-status", "pass");
+
+  await shutDownStrings(phone, 0.2);
+  await expect(phone.locator("[data-testid^=result-string-shutdown][data-status=pass]")).toHaveCount(await phone.locator("[data-testid^=result-string-shutdown]").count());
 
   // One failing value: flagged with its reason, then corrected.
-  await enter(phone.locator("#acVoltageV"), "262");
+  await enter(phone.getByLabel("AC voltage (V)"), "262");
   const ac = phone.getByTestId("result-ac-voltage");
   await expect(ac).toHaveAttribute("data-status", "fail");
   await expect(ac).toContainText("262");
-  await enter(phone.locator("#acVoltageV"), "241");
+  await acSideAndRapidShutdown(phone);
   await expect(ac).toHaveAttribute("data-status", "pass");
 
-  const strings = phone.locator("input[data-expected-v]");
-  for (let i = 0; i < (await strings.count()); i++) {
-    const expectedV = Number(await strings.nth(i).getAttribute("data-expected-v"));
-    await enter(strings.nth(i), String(expectedV + 0.4));
-  }
-  const modules = phone.locator("#modulesReporting");
-  await enter(modules, (await modules.getAttribute("data-installed"))!);
-  const power = phone.locator("#firstPowerW");
-  await enter(power, String(Math.round(Number(await power.getAttribute("data-rating-w")) * 0.62)));
-  await phone.locator("#firstPowerTime").fill("12:40");
-  await enter(phone.locator("#rapidShutdown\\.measuredV"), "11");
-  await enter(phone.locator("#rapidShutdown\\.seconds"), "8");
+  // No module-level monitoring: nothing to count, and the record completes honestly without it.
+  await expect(phone.getByTestId("no-module-monitoring")).toBeVisible();
+  await expect(phone.locator("#modulesReporting")).toHaveCount(0);
   await expect(phone.getByTestId("completion-counts")).toHaveText("0 failing · 0 to record");
-
   await phone.getByRole("button", { name: "Mark complete" }).click();
   await expect(phone.getByTestId("save-state")).toHaveText("Saved and marked complete.");
   await expect(phone.getByTestId("commissioning-status")).toContainText("Complete");
 
   // Resumed later, the readings are there.
   await phone.reload();
-  await expect(phone.locator("#acVoltageV")).toHaveValue("241");
+  await expect(phone.getByLabel("AC voltage (V)")).toHaveValue("241");
+  await expect(phone.getByTestId("step-inverter").locator("input[id$='.serial']").first()).toHaveValue("QN0730499");
+  await expect(phone.getByLabel("Profile set on the inverter")).toHaveValue(accepted[0]!);
   await expect(phone.getByTestId("commissioning-status")).toContainText("Complete");
 
   // The pre-filled certificate downloads as a PDF.
@@ -106,4 +196,65 @@ test("installer on a phone records commissioning, corrects a failing reading, up
   await office.getByLabel("Move to stage").selectOption({ label: "Commissioned" });
   await office.getByRole("button", { name: "Change stage" }).click();
   await expect(office.getByRole("region", { name: "Current stage" })).toContainText("Commissioned");
+});
+
+test("installer on a phone with optimizers that report: devices found short of installed wait and hold the record open, a shut-down reading a little under the expected voltage passes, and every module must report", async ({ browser }) => {
+  test.setTimeout(180_000);
+  const phone = await pageFor(browser, DEMO.installer);
+  await fieldProject(phone, { stages: ON_SITE, pairing: true });
+  await expect(phone.locator("[data-testid^=step-] h3")).toHaveText([
+    /Before energizing: string tests/,
+    /At the inverter/,
+    /Grid profile/,
+    /Module-level optimizers found/,
+    /String voltages with the array shut down/,
+    /AC voltage/,
+    /First power/,
+    /Modules reporting/,
+    /Rapid shutdown test/,
+  ]);
+  // Optimizer strings show no Voc before the inverter runs: polarity and insulation only.
+  await expect(phone.getByTestId("step-before-energizing").locator("input[id$='.vocV']")).toHaveCount(0);
+  await testStringsBeforeEnergizing(phone);
+
+  const unit = phone.getByTestId("step-inverter").locator("fieldset").first();
+  await enter(unit.locator("input[id$='.serial']"), "CB6-2041177");
+  await enter(unit.locator("input[id$='.cardSerial']"), "CB62041177");
+  await unit.getByLabel(/Activated with this card's key/).check();
+  const choice = phone.getByLabel("Profile set on the inverter");
+  await choice.selectOption({ index: 1 });
+
+  // Devices found: fewer than installed is not a pass; it waits, and completion is refused.
+  const found = phone.locator("#devicesFound");
+  const installed = Number(await found.getAttribute("data-installed"));
+  await enter(found, String(installed - 2));
+  const pairing = phone.getByTestId("result-device-pairing");
+  await expect(pairing).toHaveAttribute("data-status", "warn");
+  await expect(pairing).toHaveAttribute("data-waiting", "true");
+  await expect(pairing).toContainText(`${installed - 2} of ${installed} optimizers in the system found`);
+  await expect(pairing).toContainText("Not a pass: wait a few minutes");
+
+  // Each string of 10 optimizers at 1 V reads about 10 V; 0.4 V under is normal (a two-sided window), 1.5 V under is not.
+  const first = phone.getByTestId("step-shutdown").locator("input[data-expected-v]").first();
+  const expectedV = Number(await first.getAttribute("data-expected-v"));
+  await enter(first, (expectedV - 1.5).toFixed(1));
+  await expect(phone.locator("[data-testid^=result-string-shutdown]").first()).toHaveAttribute("data-status", "fail");
+  await shutDownStrings(phone, 0.4);
+  await expect(phone.locator("[data-testid^=result-string-shutdown][data-status=pass]")).toHaveCount(await phone.locator("[data-testid^=result-string-shutdown]").count());
+
+  await acSideAndRapidShutdown(phone);
+  const modules = phone.locator("#modulesReporting");
+  await enter(modules, (await modules.getAttribute("data-installed"))!);
+  await expect(phone.getByTestId("completion-counts")).toHaveText("0 failing · 0 to record · 1 waiting");
+  await phone.getByRole("button", { name: "Mark complete" }).click();
+  await expect(phone.getByTestId("save-state")).toContainText("not marked complete: 1 waiting");
+  await expect(phone.getByTestId("commissioning-status")).toContainText("Open");
+
+  // The rest are found after a rescan: now it completes.
+  await enter(found, String(installed));
+  await expect(pairing).toHaveAttribute("data-status", "pass");
+  await expect(phone.getByTestId("completion-counts")).toHaveText("0 failing · 0 to record");
+  await phone.getByRole("button", { name: "Mark complete" }).click();
+  await expect(phone.getByTestId("save-state")).toHaveText("Saved and marked complete.");
+  expect(await phone.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
 });

@@ -1,7 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { DEMO, pageFor } from "../support/session";
 
-test("admin adds a jurisdiction and a utility with its grid profile, and a coordinator reads them", async ({ browser }) => {
+test("admin adds a jurisdiction and a utility with its accepted grid profiles, and a coordinator reads them", async ({ browser }) => {
   const tag = Date.now().toString(36);
   const admin = await pageFor(browser, DEMO.admin);
 
@@ -24,18 +24,19 @@ test("admin adds a jurisdiction and a utility with its grid profile, and a coord
   await admin.goto("/settings/utilities");
   await admin.getByLabel("Utility", { exact: true }).fill(`Ivel Valley Power ${tag}`);
   await admin.getByLabel("Service voltages").fill("120/240 V split-phase\n120/208 V three-phase");
-  await admin.getByLabel("Required grid profile").fill("IEEE 1547-2018 Category B, utility's default settings");
+  await admin.getByLabel("Accepted grid profiles").fill("IEEE 1547-2018 Category B, utility's default settings");
   await admin.getByRole("button", { name: "Add utility" }).click();
   await admin.getByRole("link", { name: `Edit Ivel Valley Power ${tag}` }).click();
   await expect(admin.getByLabel("Service voltages")).toHaveValue("120/240 V split-phase\n120/208 V three-phase");
-  await admin.getByLabel("Required grid profile").fill("IEEE 1547-2018 Category B, volt-var on");
+  await expect(admin.getByLabel("Accepted grid profiles")).toHaveValue("IEEE 1547-2018 Category B, utility's default settings");
+  await admin.getByLabel("Accepted grid profiles").fill("IEEE 1547-2018 Category B, utility's default settings\n\nIEEE 1547-2018 Category B, volt-var on");
   await admin.getByRole("button", { name: "Save changes" }).click();
   await expect(admin).toHaveURL(/\/settings\/utilities$/);
 
   const coordinator = await pageFor(browser, DEMO.coordinator);
   await coordinator.goto("/settings/utilities");
   const card = coordinator.getByRole("listitem").filter({ hasText: `Ivel Valley Power ${tag}` });
-  await expect(card).toContainText("IEEE 1547-2018 Category B, volt-var on");
+  await expect(card.getByRole("listitem")).toHaveText(["IEEE 1547-2018 Category B, utility's default settings", "IEEE 1547-2018 Category B, volt-var on"]);
   await expect(coordinator.getByRole("link", { name: `Edit Ivel Valley Power ${tag}` })).toHaveCount(0);
   await expect(coordinator.getByRole("button", { name: "Add utility" })).toHaveCount(0);
   await coordinator.goto("/settings/jurisdictions");

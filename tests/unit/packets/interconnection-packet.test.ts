@@ -59,7 +59,7 @@ describe("interconnection packet", () => {
     expect(facility).toContain("MODULE MAKER AND MODEL Larkspur LK-405M-54H MODULE COUNT 22 MODULE RATING 405 W (STC)");
     expect(facility).toContain("DC RATING (STC) 8.91 kW AC RATING 7.6 kW AC OUTPUT CURRENT 32 A");
     expect(facility).toContain("PHASE Single-phase NOMINAL AC VOLTAGE 240 V");
-    expect(facility).toContain("REQUIRES IEEE 1547-2018 Category B, the utility's default settings");
+    expect(facility).toContain("ACCEPTS IEEE 1547-2018 Category B, the utility's default settings");
     expect(facility).toContain("PV SYSTEM DISCONNECT LOCATION Within 10 ft of the meter");
     expect(facility).toContain("ENERGY STORAGE None EXPORT Yes: surplus energy flows to the grid (net)");
   });

@@ -119,6 +119,16 @@ describe("permit packet, string inverter with shutdown devices, Rev 1", () => {
     expect(sld!.text).toContain("QS-7600");
   });
 
+  test("the conductor schedule numbers every run as the diagram tags it", () => {
+    const [summary] = sheetTexts(r, "system-summary");
+    const [sld] = sheetTexts(r, "single-line");
+    r.input.designInput.runs.forEach((run, i) => {
+      expect(summary!.text).toContain(`${i + 1} ${run.label}`);
+      // On the drawing the tag's number comes before the run's title.
+      expect(sld!.text).toMatch(new RegExp(`${i + 1}\\s+${run.label}, \\d+ ft`));
+    });
+  });
+
   test("the label sheet prints each label's computed values", () => {
     expectLabelsMatchReview(r);
     const [labels] = sheetTexts(r, "labels");

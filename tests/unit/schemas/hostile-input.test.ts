@@ -1,3 +1,4 @@
+import { readdirSync, readFileSync } from "node:fs";
 import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { z } from "zod";
@@ -108,4 +109,10 @@ describe("text PostgreSQL cannot store is a field error, not a server error", ()
     expect(findUnstorableInput(deep(100_000))?.message).toMatch(/nested more than/);
     expect(findUnstorableInput(deep(MAX_INPUT_DEPTH - 1))).toBeNull();
   });
+});
+
+test("every input schema builds its strings on safeString, so none lets unstorable text through", () => {
+  const files = [...readdirSync("lib/schemas").filter((f) => f.endsWith(".ts") && f !== "fields.ts").map((f) => `lib/schemas/${f}`), "lib/design/document.ts"];
+  const offenders = files.filter((file) => /\bz\s*\.\s*string\s*\(/.test(readFileSync(file, "utf8")));
+  expect(offenders).toEqual([]);
 });

@@ -26,14 +26,20 @@ describe("JurisdictionInput", () => {
 describe("UtilityInput", () => {
   it("takes service voltages one per line from a form and as a list from the API", () => {
     const fromForm = UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: "120/240 V split-phase\n\n 120/208 V three-phase \n" });
-    expect(fromForm).toEqual({ name: "Fenmoor Power", serviceVoltages: ["120/240 V split-phase", "120/208 V three-phase"], requiredGridProfile: "", notes: "" });
-    expect(UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: ["120/240 V"], requiredGridProfile: "IEEE 1547-2018 Category B" }).requiredGridProfile).toBe("IEEE 1547-2018 Category B");
+    expect(fromForm).toEqual({ name: "Fenmoor Power", serviceVoltages: ["120/240 V split-phase", "120/208 V three-phase"], acceptedGridProfiles: [], notes: "" });
+    expect(UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: ["120/240 V"], acceptedGridProfiles: ["IEEE 1547-2018 Category B"] }).acceptedGridProfiles).toEqual(["IEEE 1547-2018 Category B"]);
+  });
+
+  it("takes accepted grid profiles one per line from a form, blank lines and repeats dropped", () => {
+    const parsed = UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: "120/240 V", acceptedGridProfiles: " IEEE 1547-2018 Category B \n\nRule 21, volt-var on\nIEEE 1547-2018 Category B" });
+    expect(parsed.acceptedGridProfiles).toEqual(["IEEE 1547-2018 Category B", "Rule 21, volt-var on"]);
   });
 
   it.each([
     [{ serviceVoltages: "" }, "serviceVoltages", "Enter at least one service voltage"],
     [{ serviceVoltages: ["x".repeat(41)] }, "serviceVoltages.0", "Each service voltage is at most 40 characters"],
-    [{ requiredGridProfile: "x".repeat(301) }, "requiredGridProfile", "At most 300 characters"],
+    [{ acceptedGridProfiles: ["x".repeat(301)] }, "acceptedGridProfiles.0", "Each grid profile is at most 300 characters"],
+    [{ acceptedGridProfiles: Array.from({ length: 13 }, (_, i) => `Profile ${i}`) }, "acceptedGridProfiles", "At most 12 grid profiles"],
   ])("refuses %j with a readable message", (patch, path, message) => {
     expect(messages(UtilityInput.safeParse({ name: "Fenmoor Power", serviceVoltages: "120/240 V", ...patch }))[path]).toBe(message);
   });

@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { runDesignReview } from "@/lib/design/run-review";
 import { checkCommissioning, commissioningComplete } from "@/lib/engineering/commissioning";
-import { commissioningFacts, toCommissioningRecord } from "@/lib/field/commissioning-facts";
+import { commissioningFacts, moduleMonitoringOf, toCommissioningRecord } from "@/lib/field/commissioning-facts";
 import { DEMO_CATALOG } from "@/lib/seed/demo-catalog";
-import { passingDemoReadings } from "@/lib/seed/demo-commissioning";
+import { demoEquipment, passingDemoReadings } from "@/lib/seed/demo-commissioning";
 import { DESIGN_MODELS, demoDesign, type CatalogIds } from "@/lib/seed/demo-designs";
 import { JURISDICTIONS, UTILITIES } from "@/lib/seed/demo-scenario";
 import { EquipmentInput, type EquipmentDto } from "@/lib/schemas/equipment";
@@ -13,15 +13,29 @@ const ids = Object.fromEntries(Object.entries(DESIGN_MODELS).map(([k, model]) =>
 const services = [100, 150, 200].flatMap((mainBreakerA) => [0, 1].map((variant) => ({ mainBreakerA, variant })));
 
 describe("demo commissioning readings (invented)", () => {
+  it("module-level monitoring follows the demo catalog: optimizers and microinverters report, shutdown units do not", () => {
+    const monitoring = [0, 1].map((variant) => moduleMonitoringOf(demoEquipment(demoDesign(ids, { busbarA: 200, mainBreakerA: 200 }, variant), catalog)));
+    expect(monitoring).toEqual([false, true]); // variant 0: string inverter with shutdown units; 1: optimizers
+    expect(moduleMonitoringOf(demoEquipment(demoDesign(ids, { busbarA: 150, mainBreakerA: 150 }, 0), catalog))).toBe(true); // microinverters
+  });
+
   it.each(services.flatMap((s) => JURISDICTIONS.map((j) => ({ ...s, j }))))("pass every check: $mainBreakerA A service, variant $variant, $j.name", ({ mainBreakerA, variant, j }) => {
-    const outcome = runDesignReview(demoDesign(ids, { busbarA: mainBreakerA, mainBreakerA }, variant), catalog, { recordLowTempC: j.recordLowTempC, highDesignTempC: j.highDesignTempC, necEdition: j.necEdition });
+    const draft = demoDesign(ids, { busbarA: mainBreakerA, mainBreakerA }, variant);
+    const outcome = runDesignReview(draft, catalog, { recordLowTempC: j.recordLowTempC, highDesignTempC: j.highDesignTempC, necEdition: j.necEdition });
+    const moduleMonitoring = moduleMonitoringOf(demoEquipment(draft, catalog));
     if (outcome.status !== "reviewed") throw new Error("demo design did not review");
     const { ratings } = outcome.review.summary;
     for (const [seed, utility] of Array.from({ length: 28 }, (_, i) => [i, UTILITIES[i % UTILITIES.length]] as const)) {
-      const facts = commissioningFacts({ design: outcome.design, edition: j.necEdition, requiredGridProfile: utility.requiredGridProfile, moduleCount: ratings.moduleCount, acKw: ratings.acKw });
+      const facts = commissioningFacts({ design: outcome.design, edition: j.necEdition, acceptedGridProfiles: utility.acceptedGridProfiles, moduleCount: ratings.moduleCount, acKw: ratings.acKw, moduleMonitoring });
       const results = checkCommissioning(toCommissioningRecord(facts, passingDemoReadings(facts, seed)));
       expect(results.filter((r) => r.status !== "pass").map((r) => `${r.id}: ${r.message}`)).toEqual([]);
       expect(commissioningComplete(results).complete).toBe(true);
+      // The new readings are all there: strings tested before energizing, the serial against its card, devices found.
+      const kinds = new Set(results.map((r) => r.kind));
+      if (facts.stringTests.length) expect([...kinds]).toEqual(expect.arrayContaining(["string-polarity", "string-insulation", "inverter-serial", "inverter-activation"]));
+      if (facts.stringTests.some((s) => s.vocApplies)) expect(kinds.has("string-voc")).toBe(true);
+      expect(kinds.has("device-pairing")).toBe(moduleMonitoring);
+      expect(kinds.has("modules-reporting")).toBe(moduleMonitoring);
     }
   });
 });

@@ -1,7 +1,8 @@
 import { describe, expect, test } from "vitest";
 import type { Design } from "@/lib/engineering";
 import { layoutSingleLine, type SldScene, type SldText } from "@/lib/sld";
-import { manyStrings, microBranches, microFixture, optimizerFixture, stringFixture, supplySideFixture, twoInverters } from "./sld-designs";
+import { runTitle } from "@/lib/sld/conductor-label";
+import { manyRuns, manyStrings, microBranches, microFixture, microThroughBoxes, optimizerFixture, strayRun, stringFixture, supplySideFixture, throughJunctionBox, twoInverters } from "./sld-designs";
 
 const texts = (scene: SldScene) => scene.items.filter((i): i is SldText => i.kind === "text").map((t) => t.text);
 const moduleSymbols = (scene: SldScene) => scene.items.filter((i) => i.kind === "rect" && i.width === 22 && i.height === 16).length;
@@ -91,6 +92,69 @@ describe("single-line layout: what it says", () => {
   });
 });
 
+/** The run's title on the drawing, and the number tag on the wire in front of it (runTitle's words). */
+function numberedTitles(scene: SldScene): { number: string; title: string }[] {
+  const all = scene.items.filter((i): i is SldText => i.kind === "text");
+  return all
+    .filter((t) => /, \d+(\.\d)? ft/.test(t.text))
+    .map((title) => {
+      // drawRunLabel: tag centre 10 pt left of the words, its number 25.3 pt below the title's baseline.
+      const tag = all.find((t) => t.anchor === "middle" && Math.abs(t.x - (title.x - 10)) < 0.02 && Math.abs(t.y - (title.y + 25.3)) < 0.02);
+      return { number: tag?.text ?? "", title: title.text };
+    });
+}
+
+// Designs whose circuits pass through more than one run, or that name a run the drawing cannot connect.
+const MULTI_RUN: [string, Design][] = [
+  ["two runs per string through a junction box", throughJunctionBox()],
+  ["ten runs, three junction boxes on the DC side", manyRuns()],
+  ["microinverter branches through roof boxes", microThroughBoxes()],
+  ["a run naming a string that is gone", strayRun()],
+];
+
+describe("single-line layout: every run of the conductor schedule, numbered as the schedule numbers it", () => {
+  const cases: [string, Design][] = [
+    ["one run per string", stringFixture()],
+    ["two inverters into a combiner", twoInverters()],
+    ["optimizer strings", optimizerFixture()],
+    ["supply-side connection", supplySideFixture()],
+    ...MULTI_RUN,
+  ];
+
+  test.each(cases)("%s: each run appears once with its schedule number", (_, design) => {
+    const scene = layoutSingleLine(design, { necEdition: 2023 });
+    const expected = design.runs.map((run, i) => ({ number: String(i + 1), title: runTitle(run) }));
+    expect(numberedTitles(scene).sort((a, b) => Number(a.number) - Number(b.number))).toEqual(expected);
+  });
+
+  test("two runs per string: both strings enter one junction box, then share one conduit to the inverter", () => {
+    const scene = layoutSingleLine(throughJunctionBox());
+    const all = texts(scene);
+    expect(all.filter((t) => /^JB\d+$/.test(t))).toEqual(["JB1"]);
+    expect(all).toEqual(expect.arrayContaining(["Junction box to inverter, 48 ft", "4 × 10 AWG Cu THWN-2", "in 3/4 in EMT; EGC 10 AWG Cu"]));
+    // The shared conduit carries two separate circuits: no junction dot joins the strings on the DC side.
+    const inverterLeft = scene.items.find((i) => i.kind === "rect" && i.dash?.join() === "4,2.5")!;
+    const dots = scene.items.filter((i) => i.kind === "circle" && i.fill === "ink" && inverterLeft.kind === "rect" && i.cx < inverterLeft.x);
+    expect(dots).toEqual([]);
+    expect(scene.items.filter((i) => i.kind === "path" && / A 4 4 /.test(i.d))).toHaveLength(1); // the raceway outline
+  });
+
+  test("many runs: a junction box wherever a run meets the next, on both sides of the inverter", () => {
+    const all = texts(layoutSingleLine(manyRuns()));
+    expect(all.filter((t) => /^JB\d+$/.test(t))).toEqual(["JB1", "JB2", "JB3", "JB4"]);
+  });
+
+  test("a run the drawing cannot connect is listed under it with its number, not dropped", () => {
+    const all = texts(layoutSingleLine(strayRun()));
+    expect(all).toContain("RUNS NOT CONNECTED ON THIS DRAWING");
+    expect(all).toContain("String S9 to inverter, 20 ft");
+  });
+
+  test("the notes explain the numbers and the boxes", () => {
+    expect(texts(layoutSingleLine(throughJunctionBox())).join(" ")).toMatch(/Circled numbers are the run numbers of the conductor schedule/);
+  });
+});
+
 describe("single-line layout: readable at every size", () => {
   const cases: [string, Design][] = [
     ...[1, 2, 3, 4, 5, 6].map((n): [string, Design] => [`${n} string(s), shutdown devices`, manyStrings(stringFixture(), n, 14)]),
@@ -99,6 +163,7 @@ describe("single-line layout: readable at every size", () => {
     ["two inverters into a combiner", twoInverters()],
     ["supply-side connection", supplySideFixture()],
     ["the microinverter fixture", microFixture()],
+    ...MULTI_RUN,
   ];
 
   test.each(cases)("%s: no text overlaps another, all inside the scene", (_, design) => {

@@ -60,3 +60,61 @@ export function twoInverters(): Design {
   ];
   return { ...base, inverters, strings, runs, roofPlanes: [{ ...base.roofPlanes[0], moduleCount: 34 }] };
 }
+
+const conduitRun = (id: string, label: string, stringIds: string[], lengthFt: number): ConductorRun => ({
+  ...dcRun(id, stringIds, lengthFt),
+  label,
+  conductor: { size: "10", material: "Cu", insulationTempC: 90, insulation: "THWN-2" },
+  roofClearanceIn: undefined,
+  raceway: { type: "EMT", tradeSize: "3/4", wires: [{ size: "10", count: 2 * stringIds.length }, { size: "10", count: 1 }] },
+});
+
+/**
+ * Two runs per string: each string in PV wire to a roof junction box, then both in one
+ * conduit to the inverter; on the AC side the inverter to the disconnect, then on to the panel.
+ */
+export function throughJunctionBox(): Design {
+  const base = stringFixture();
+  const home = base.runs[base.runs.length - 1];
+  const runs: ConductorRun[] = [
+    { ...dcRun("dc-1", ["S1"], 30), label: "String S1 to roof junction box" },
+    { ...dcRun("dc-2", ["S2"], 34), label: "String S2 to roof junction box" },
+    conduitRun("dc-3", "Junction box to inverter", ["S1", "S2"], 48),
+    { ...home, id: "ac-1", label: "Inverter to AC disconnect", lengthFt: 6 },
+    { ...home, id: "ac-2", label: "AC disconnect to service panel", lengthFt: 22 },
+  ];
+  return { ...base, runs };
+}
+
+/**
+ * Many runs: four strings, the first two through a roof junction box into a shared conduit,
+ * the other two each in its own conduit after a box; three AC runs in series.
+ */
+export function manyRuns(): Design {
+  const base = manyStrings(stringFixture(), 4, 12);
+  const home = base.runs[base.runs.length - 1];
+  const runs: ConductorRun[] = [
+    ...["S1", "S2", "S3", "S4"].map((id, i) => ({ ...dcRun(`roof-${i + 1}`, [id], 25 + i), label: `String ${id} on the roof` })),
+    conduitRun("attic-1", "Box 1 to inverter", ["S1", "S2"], 52),
+    conduitRun("attic-2", "Box 2 to inverter, S3", ["S3"], 55),
+    conduitRun("attic-3", "Box 2 to inverter, S4", ["S4"], 56),
+    { ...home, id: "ac-1", label: "Inverter to junction box", lengthFt: 4 },
+    { ...home, id: "ac-2", label: "Junction box to AC disconnect", lengthFt: 12 },
+    { ...home, id: "ac-3", label: "AC disconnect to service panel", lengthFt: 18 },
+  ];
+  return { ...base, runs };
+}
+
+/** Microinverter branches that each run to a roof junction box, then on to the combiner. */
+export function microThroughBoxes(): Design {
+  const base = microBranches(2);
+  const [b1, b2, home] = base.runs;
+  const onward = (run: ConductorRun, n: number): ConductorRun => ({ ...run, id: `${run.id}-on`, label: `Box to combiner, branch ${n}`, lengthFt: 30, ocpdA: undefined, roofClearanceIn: undefined });
+  return { ...base, runs: [b1, b2, onward(b1, 1), onward(b2, 2), home] };
+}
+
+/** A run naming a string the design no longer has, as a design under edit may. */
+export function strayRun(): Design {
+  const base = stringFixture();
+  return { ...base, runs: [...base.runs, { ...dcRun("dc-9", ["S9"], 20), label: "String S9 to inverter" }] };
+}

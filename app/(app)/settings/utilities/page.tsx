@@ -22,10 +22,18 @@ export default async function UtilitiesPage() {
               {canEdit ? <Link href={`/settings/utilities/${u.id}`} aria-label={`Edit ${u.name}`}>Edit</Link> : null}
             </div>
             <p className="measure mt-1 text-sm">{u.serviceVoltages.join(" · ")}</p>
-            <p className="mt-2 text-sm">
-              <span className="text-ink-faint">Required grid profile: </span>
-              {u.requiredGridProfile || <span className="text-ink-faint">not recorded</span>}
-            </p>
+            <div className="mt-2 text-sm">
+              <span className="text-ink-faint">Accepted grid profiles: </span>
+              {u.acceptedGridProfiles.length ? (
+                <ul className="list-disc pl-5">
+                  {u.acceptedGridProfiles.map((p) => (
+                    <li key={p}>{p}</li>
+                  ))}
+                </ul>
+              ) : (
+                <span className="text-ink-faint">not recorded</span>
+              )}
+            </div>
             <p className="mt-2 text-sm text-ink-soft">{u.notes}</p>
           </li>
         ))}

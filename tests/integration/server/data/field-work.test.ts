@@ -22,7 +22,7 @@ const code = async (promise: Promise<unknown>) => promise.then(() => "resolved",
 beforeAll(async () => {
   org = await makeOrganization("Field");
   rival = await makeOrganization("Rival field");
-  await org.utility.update({ requiredGridProfile: PROFILE });
+  await org.utility.update({ acceptedGridProfiles: [PROFILE, "IEEE 1547-2018 Category B, volt-watt on"] });
   await db().transaction((t) => seedDemoCatalog(org.organization.id, t));
   const items = await Equipment.findAll({ where: { organizationId: org.organization.id } });
   ids = Object.fromEntries(Object.entries(DESIGN_MODELS).map(([k, model]) => [k, items.find((i) => i.model === model)!.id])) as CatalogIds;
@@ -32,19 +32,40 @@ afterAll(async () => {
   await closeDb();
 });
 
-/** A project assigned to the fixture installer, with the demo string design (2 strings of 11 behind shutdown devices). */
-async function assignedProject() {
+/**
+ * A project assigned to the fixture installer, with a demo design: variant 0 is a string inverter with
+ * 2 strings of 11 behind shutdown devices that do not report; variant 1 has 2 strings of 10 optimizers that do.
+ */
+async function assignedProject(variant = 0) {
   const project = await makeProject(org, { installerId: org.users.installer.id, busbarA: 200, mainBreakerA: 200 });
-  await saveDesignDraft({ viewer: org.viewers.coordinator, projectId: project.id, draft: demoDesign(ids, { busbarA: 200, mainBreakerA: 200 }, 0) });
+  await saveDesignDraft({ viewer: org.viewers.coordinator, projectId: project.id, draft: demoDesign(ids, { busbarA: 200, mainBreakerA: 200 }, variant) });
   return project;
 }
 
-function passingReadings(facts: Awaited<ReturnType<typeof getCommissioning>>["facts"]) {
+type Facts = Awaited<ReturnType<typeof getCommissioning>>["facts"];
+
+// At a 40 °C module, 11 × 37.2 × (1 + 15 × −0.0027) = 392.8 V (the demo module's data sheet, 690.7(A)(1) arithmetic).
+function passingReadings(facts: Facts) {
+  const ids = [...new Set([...facts.stringTests.map((s) => s.id), ...facts.strings.map((s) => s.id)])];
   return {
-    gridProfileSet: "ieee 1547-2018 category b",
+    vocTemperature: { tempC: "40", source: "module" as const },
+    strings: ids.map((id) => {
+      const tested = facts.stringTests.find((s) => s.id === id);
+      const shutDown = facts.strings.find((s) => s.id === id);
+      return {
+        id,
+        polarity: "correct" as const,
+        vocV: tested?.vocApplies ? String(Math.round(tested.modulesInSeries * 37.2 * (1 - 0.0405) * 10) / 10) : "",
+        insulationMohm: "250",
+        devicesFound: "",
+        measuredV: shutDown ? String(shutDown.devicesInSeries * (shutDown.perDeviceV ?? 1) - 0.3) : "",
+      };
+    }),
+    inverters: facts.inverters.map((u) => ({ id: u.id, serial: "QN0730411", cardSerial: "qn-0730411", activated: true })),
+    gridProfileSet: "IEEE 1547-2018 Cat B default", // typed as "other": compared loosely with the accepted profile
+    devicesFound: facts.pairing ? String(facts.pairing.installed) : "",
     acVoltageV: "242",
-    strings: facts.strings.map((s) => ({ id: s.id, measuredV: String(s.devicesInSeries * (s.perDeviceV ?? 1)) })),
-    modulesReporting: String(facts.modulesInstalled),
+    modulesReporting: facts.moduleMonitoring ? String(facts.modulesInstalled) : "",
     firstPowerW: String(Math.round(facts.acRatingW * 0.6)),
     firstPowerTime: "12:30",
     rapidShutdown: { boundary: "outside" as const, measuredV: "12", seconds: "9" },
@@ -65,11 +86,16 @@ describe("commissioning record", () => {
     const project = await assignedProject();
     const record = await getCommissioning({ viewer: org.viewers.installer, projectId: project.id });
     expect(record.status).toBe("open");
-    expect(record.facts).toMatchObject({ requiredGridProfile: PROFILE, nominalServiceV: 240, modulesInstalled: 22 });
+    expect(record.facts).toMatchObject({ acceptedGridProfiles: [PROFILE, "IEEE 1547-2018 Category B, volt-watt on"], nominalServiceV: 240, modulesInstalled: 22, moduleMonitoring: false, pairing: null });
     expect(record.facts.strings.map((s) => [s.id, s.devicesInSeries])).toEqual([
       ["S1", 11],
       ["S2", 11],
     ]);
+    expect(record.facts.stringTests.map((s) => [s.id, s.modulesInSeries, s.vocApplies])).toEqual([
+      ["S1", 11, true],
+      ["S2", 11, true],
+    ]);
+    expect(record.facts.inverters).toEqual([{ id: "inv-1", label: "Inverter", model: "Quillon QS-7600" }]);
     expect(record.completion.complete).toBe(false);
     expect(record.results.every((r) => r.reading === "missing")).toBe(true);
   });
@@ -94,6 +120,9 @@ describe("commissioning record", () => {
     const resumed = await getCommissioning({ viewer: org.viewers.installer, projectId: project.id });
     expect(resumed.readings.acVoltageV).toBe(262);
     expect(resumed.readings.rapidShutdown).toEqual({ boundary: "outside", measuredV: 12, seconds: 9 });
+    expect(resumed.readings.inverters).toEqual([{ id: "inv-1", serial: "QN0730411", cardSerial: "qn-0730411", activated: true }]);
+    expect(resumed.readings.strings[0]).toMatchObject({ id: "S1", polarity: "correct", insulationMohm: 250 });
+    expect(resumed.readings.vocTemperature).toEqual({ tempC: 40, source: "module" });
 
     const done = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: { ...readings, acVoltageV: "241" }, complete: true } });
     expect(done.completeRefused).toBeNull();
@@ -102,9 +131,46 @@ describe("commissioning record", () => {
     expect(await AuditEvent.count({ where: { entityId: project.id, action: "commissioning.completed" } })).toBe(1);
 
     // A later change that fails reopens the record.
-    const reopened = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: { ...readings, modulesReporting: "20" } } });
+    const reopened = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: { ...readings, acVoltageV: "200" } } });
     expect(reopened.status).toBe("open");
     expect(await AuditEvent.count({ where: { entityId: project.id, action: "commissioning.reopened" } })).toBe(1);
+  });
+
+  it("completes without a modules-reporting count where the system has no module-level monitoring", async () => {
+    const project = await assignedProject(0);
+    const { facts } = await getCommissioning({ viewer: org.viewers.installer, projectId: project.id });
+    const done = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: passingReadings(facts), complete: true } });
+    expect(done.status).toBe("complete");
+    expect(done.results.some((r) => r.kind === "modules-reporting" || r.kind === "device-pairing")).toBe(false);
+    expect(done.results.find((r) => r.id === "grid-profile")).toMatchObject({ status: "pass" });
+    expect(done.results.filter((r) => r.kind === "string-voc").map((r) => r.status)).toEqual(["pass", "pass"]);
+  });
+
+  it("refuses to complete while the activation card names another serial or the strings fail their tests", async () => {
+    const project = await assignedProject(0);
+    const { facts } = await getCommissioning({ viewer: org.viewers.installer, projectId: project.id });
+    const good = passingReadings(facts);
+    const wrongCard = { ...good, inverters: [{ ...good.inverters[0]!, cardSerial: "QN0730412" }] };
+    const refused = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: wrongCard, complete: true } });
+    expect(refused).toMatchObject({ status: "open", completion: { failing: ["inverter-serial:inv-1"] } });
+    const wet = { ...good, strings: good.strings.map((s, i) => (i === 0 ? { ...s, insulationMohm: "0.4", polarity: "reversed" as const } : s)) };
+    const alsoRefused = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: wet, complete: true } });
+    expect(alsoRefused.completion.failing).toEqual(["string-polarity:S1", "string-insulation:S1"]);
+    expect((await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: good, complete: true } })).status).toBe("complete");
+  });
+
+  it("with devices that report: a shortfall of devices found waits, then completes once all are found and every module reports", async () => {
+    const project = await assignedProject(1);
+    const { facts } = await getCommissioning({ viewer: org.viewers.installer, projectId: project.id });
+    expect(facts).toMatchObject({ moduleMonitoring: true, pairing: { word: "optimizers", installed: 20 } });
+    expect(facts.stringTests.every((s) => !s.vocApplies)).toBe(true); // optimizer strings: no Voc test
+    const good = passingReadings(facts);
+    const waiting = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: { ...good, devicesFound: "18" }, complete: true } });
+    expect(waiting).toMatchObject({ status: "open", completion: { failing: [], missing: [], waiting: ["device-pairing"] } });
+    expect(waiting.completeRefused).toMatch(/1 waiting/);
+    const done = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: good, complete: true } });
+    expect(done.status).toBe("complete");
+    expect(done.results.find((r) => r.id === "modules-reporting")).toMatchObject({ status: "pass", value: 20 });
   });
 
   it("rejects a reading that is not a number with the field named, saving nothing", async () => {
@@ -121,6 +187,8 @@ describe("commissioning record", () => {
     const input = await buildCommissioningDocumentInput({ viewer: org.viewers.installer, projectId: project.id, kind: "certificate" });
     expect(input.installer).toMatchObject({ name: "Ivo Installer" });
     expect(input.system.moduleSummary).toMatch(/^22 × /);
+    expect(input.record.inverters).toEqual([{ id: "inv-1", label: "Inverter", model: "Quillon QS-7600", serial: "QN0730411", cardSerial: "qn-0730411", activated: true }]);
+    expect(input.record.stringTests?.map((s) => s.insulationMohm)).toEqual([250, 250]);
     expect(input.completion.complete).toBe(true);
     expect(input.completedAt).not.toBeNull();
   });

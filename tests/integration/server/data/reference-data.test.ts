@@ -11,7 +11,7 @@ let rival: OrgFixture;
 
 const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
 const jurisdiction = (patch: Record<string, unknown> = {}) => JurisdictionInput.parse({ name: "Fenmoor Building Office", state: "CO", necEdition: "2023", recordLowTempC: "-23", highDesignTempC: "34", ...patch });
-const utility = (patch: Record<string, unknown> = {}) => UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: "120/240 V split-phase", requiredGridProfile: "IEEE 1547-2018 Category B", ...patch });
+const utility = (patch: Record<string, unknown> = {}) => UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: "120/240 V split-phase", acceptedGridProfiles: "IEEE 1547-2018 Category B", ...patch });
 
 beforeAll(async () => {
   acme = await makeOrganization("Acme");
@@ -41,11 +41,11 @@ describe("jurisdictions", () => {
 });
 
 describe("utilities", () => {
-  it("admins add and edit them, required grid profile included", async () => {
+  it("admins add and edit them, accepted grid profiles included", async () => {
     const created = await createUtility({ viewer: acme.viewers.admin, values: utility() });
-    expect(created).toMatchObject({ serviceVoltages: ["120/240 V split-phase"], requiredGridProfile: "IEEE 1547-2018 Category B" });
-    await updateUtility({ viewer: acme.viewers.admin, utilityId: created.id, values: utility({ requiredGridProfile: "IEEE 1547-2018 Category B, utility's default settings" }) });
-    expect((await getUtilityById({ viewer: acme.viewers.coordinator, utilityId: created.id })).requiredGridProfile).toBe("IEEE 1547-2018 Category B, utility's default settings");
+    expect(created).toMatchObject({ serviceVoltages: ["120/240 V split-phase"], acceptedGridProfiles: ["IEEE 1547-2018 Category B"] });
+    await updateUtility({ viewer: acme.viewers.admin, utilityId: created.id, values: utility({ acceptedGridProfiles: "IEEE 1547-2018 Category B, utility's default settings\nIEEE 1547-2018 Category B, volt-watt on" }) });
+    expect((await getUtilityById({ viewer: acme.viewers.coordinator, utilityId: created.id })).acceptedGridProfiles).toEqual(["IEEE 1547-2018 Category B, utility's default settings", "IEEE 1547-2018 Category B, volt-watt on"]);
     expect((await listUtilities({ viewer: rival.viewers.admin })).some((u) => u.id === created.id)).toBe(false);
   });
 

@@ -37,7 +37,7 @@ describe("AC voltage at the point of connection vs ANSI C84.1 (from memory)", ()
   ])("%d V service reading %d V → %s (limit %d V)", (nominal, reading, status, limit) => {
     const r = at(nominal, reading);
     expect(r).toMatchObject({ status, value: reading, limit, unit: "V", kind: "ac-voltage", reading: "recorded" });
-    expect(r.clause).toBe("ANSI C84.1 Range A/B (from memory)");
+    expect(r.clause).toBe("ANSI C84.1 Range A and Range B");
   });
 
   test("a reading outside Range B says what to do", () => {

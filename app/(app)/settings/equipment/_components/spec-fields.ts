@@ -40,6 +40,7 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
     num("maxStringPowerW", "Maximum power per string", "W", "Only for inverters fed by optimizers"),
     { type: "text", name: "certification", label: "Certification", hint: "e.g. UL 1741 SB; IEEE 1547-2018 Category B" },
     { type: "checkbox", name: "meetsRapidShutdownWithDevices", label: "Meets rapid shutdown (690.12) together with its module-level devices" },
+    { type: "checkbox", name: "reportsPerModule", label: "Microinverters only: each unit reports to a gateway (module-level monitoring)" },
   ],
   device: [
     { type: "select", name: "deviceKind", label: "Type", options: [{ value: "optimizer", label: "DC optimizer" }, { value: "shutdown-device", label: "Rapid-shutdown device" }] },
@@ -47,14 +48,15 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
     num("maxInputV", "Maximum input voltage", "V"),
     num("maxInputIscA", "Maximum input current", "A", OPTIONAL),
     num("maxOutputCurrentA", "Maximum output current", "A", OPTIONAL),
-    num("shutdownOutputV", "Voltage held while shut down", "V", "About 1 V per module is common practice"),
+    num("shutdownOutputV", "Voltage held while shut down", "V", "About 1 V per module is usual"),
+    { type: "checkbox", name: "reportsPerModule", label: "Each device reports to the inverter (module-level monitoring)" },
   ],
 };
 
 const EMPTY_SPECS: Record<EquipmentKind, Record<string, unknown>> = {
   module: { vocTempCoeff: { value: "", unit: "%/C" } },
-  inverter: { inverterKind: "string", phase: "1", certification: "", meetsRapidShutdownWithDevices: false },
-  device: { deviceKind: "optimizer" },
+  inverter: { inverterKind: "string", phase: "1", certification: "", meetsRapidShutdownWithDevices: false, reportsPerModule: false },
+  device: { deviceKind: "optimizer", reportsPerModule: false },
 };
 
 /** The form's starting values: blank for a new item, the stored figures for an edit. */

@@ -13,7 +13,7 @@ export default async function EditUtilityPage({ params }: { params: Promise<{ ut
   const viewer = await requirePermission("reference:edit");
   const u = await orNotFoundPage(getUtilityById({ viewer, utilityId: (await params).utilityId }));
   const feeLines = await getFeeSchedule({ viewer, authorityKind: "utility", authorityId: u.id });
-  const initial = { name: u.name, serviceVoltages: u.serviceVoltages.join("\n"), requiredGridProfile: u.requiredGridProfile, notes: u.notes };
+  const initial = { name: u.name, serviceVoltages: u.serviceVoltages.join("\n"), acceptedGridProfiles: u.acceptedGridProfiles.join("\n"), notes: u.notes };
   return (
     <div className="mx-auto max-w-3xl space-y-4">
       <p className="text-sm">

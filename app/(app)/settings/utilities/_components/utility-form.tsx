@@ -10,9 +10,9 @@ import { FormMessage } from "@/components/ui/form-message";
 import { UtilityInput, type UtilityValues } from "@/lib/schemas/reference-data";
 import { createUtilityAction, updateUtilityAction } from "../actions";
 
-const EMPTY: UtilityInput = { name: "", serviceVoltages: "", requiredGridProfile: "", notes: "" };
+const EMPTY: UtilityInput = { name: "", serviceVoltages: "", acceptedGridProfiles: "", notes: "" };
 
-/** Adds a utility (no id) or edits one; service voltages are typed one per line. */
+/** Adds a utility (no id) or edits one; service voltages and accepted grid profiles are typed one per line. */
 export function UtilityForm({ utilityId, initial = EMPTY }: { utilityId?: string; initial?: UtilityInput }) {
   const router = useRouter();
   const form = useForm<UtilityInput, unknown, UtilityValues>({ resolver: zodResolver(UtilityInput), defaultValues: initial });
@@ -38,8 +38,13 @@ export function UtilityForm({ utilityId, initial = EMPTY }: { utilityId?: string
           <textarea id="utility-serviceVoltages" rows={2} className="input" aria-invalid={Boolean(errors.serviceVoltages)} {...form.register("serviceVoltages")} />
         </Field>
       </div>
-      <Field label="Required grid profile" htmlFor="utility-requiredGridProfile" error={errors.requiredGridProfile?.message} hint="As the utility words it, e.g. IEEE 1547-2018 Category B, utility's default settings">
-        <input id="utility-requiredGridProfile" className="input" {...form.register("requiredGridProfile")} />
+      <Field
+        label="Accepted grid profiles"
+        htmlFor="utility-acceptedGridProfiles"
+        error={errors.acceptedGridProfiles?.message}
+        hint="One per line, as the utility words each, e.g. IEEE 1547-2018 Category B, utility's default settings. The crew chooses from these on site."
+      >
+        <textarea id="utility-acceptedGridProfiles" rows={3} className="input" aria-invalid={Boolean(errors.acceptedGridProfiles)} {...form.register("acceptedGridProfiles")} />
       </Field>
       <Field label="Notes" htmlFor="utility-notes" error={errors.notes?.message}>
         <textarea id="utility-notes" rows={2} className="input" {...form.register("notes")} />

@@ -2,58 +2,21 @@
 
 import { clsx } from "clsx";
 import { useEffect, useMemo, useRef, useState } from "react";
-import { useForm, useWatch, type UseFormRegisterReturn } from "react-hook-form";
-import { CheckStatusChip } from "@/components/review/check-status";
+import { useForm, useWatch, type Path, type UseFormRegisterReturn } from "react-hook-form";
 import { useTimeZone } from "@/components/time/local-time";
 import { Button } from "@/components/ui/button";
-import { checkCommissioning, commissioningComplete, shutdownWindow, type CommissioningCheck } from "@/lib/engineering/commissioning";
+import { checkCommissioning, commissioningComplete, shutdownWindow } from "@/lib/engineering/commissioning";
 import { toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
 import { formatInZone } from "@/lib/domain/time-zones";
-import { CommissioningReadings } from "@/lib/schemas/commissioning";
+import type { CommissioningReadings } from "@/lib/schemas/commissioning";
 import { saveCommissioningAction } from "../actions";
-
-type FormValues = {
-  gridProfileSet: string;
-  acVoltageV: string;
-  strings: { id: string; measuredV: string }[];
-  modulesReporting: string;
-  firstPowerW: string;
-  firstPowerTime: string;
-  rapidShutdown: { boundary: "outside" | "inside"; measuredV: string; seconds: string };
-};
-
-const text = (v: number | string | null) => (v === null ? "" : String(v));
-const fmtV = (v: number) => v.toLocaleString("en-US", { maximumFractionDigits: 1 });
-
-function toFormValues(r: CommissioningReadings): FormValues {
-  return {
-    gridProfileSet: text(r.gridProfileSet),
-    acVoltageV: text(r.acVoltageV),
-    strings: r.strings.map((s) => ({ id: s.id, measuredV: text(s.measuredV) })),
-    modulesReporting: text(r.modulesReporting),
-    firstPowerW: text(r.firstPowerW),
-    firstPowerTime: text(r.firstPowerTime),
-    rapidShutdown: { boundary: r.rapidShutdown.boundary, measuredV: text(r.rapidShutdown.measuredV), seconds: text(r.rapidShutdown.seconds) },
-  };
-}
-
-/** The typed values as readings; a field that is not a number is left out of the checks and its problem shown beside it. */
-function liveReadings(values: FormValues): { readings: CommissioningReadings; errors: Record<string, string> } {
-  const errors: Record<string, string> = {};
-  const copy = structuredClone(values) as Record<string, unknown>;
-  let parsed = CommissioningReadings.safeParse(copy);
-  for (let i = 0; i < 3 && !parsed.success; i++) {
-    for (const issue of parsed.error.issues) {
-      const path = issue.path.map(String);
-      errors[path.join(".")] ??= issue.message;
-      let node = copy as Record<string, unknown>;
-      for (const key of path.slice(0, -1)) node = node[key] as Record<string, unknown>;
-      node[path[path.length - 1]] = "";
-    }
-    parsed = CommissioningReadings.safeParse(copy);
-  }
-  return { readings: parsed.success ? parsed.data : CommissioningReadings.parse({}), errors };
-}
+import { BeforeEnergizingStep } from "./before-energizing-step";
+import { liveReadings, toFormValues, toReadingsInput, type FormValues } from "./form-values";
+import { GridProfileStep } from "./grid-profile-step";
+import { InverterStep } from "./inverter-step";
+import { PairingStep } from "./pairing-step";
+import { LabelledInput, Reading, ResultLine, Step } from "./reading-parts";
+import { fmtV, type StepProps } from "./step-props";
 
 type SaveState = { kind: "idle" | "saving" | "saved" | "error" | "refused"; text: string };
 const AUTOSAVE_MS = 1500;
@@ -64,7 +27,7 @@ function savedText(updatedAt: string | null, timeZone: string) {
 
 export function CommissioningForm(props: { projectId: string; facts: CommissioningFacts; initialReadings: CommissioningReadings; initialStatus: "open" | "complete"; initialUpdatedAt: string | null; readOnly: boolean }) {
   const { projectId, facts, readOnly } = props;
-  const form = useForm<FormValues>({ defaultValues: toFormValues(props.initialReadings) });
+  const form = useForm<FormValues>({ defaultValues: toFormValues(props.initialReadings, facts.acceptedGridProfiles) });
   const values = useWatch({ control: form.control }) as FormValues;
   const [status, setStatus] = useState(props.initialStatus);
   const timeZone = useTimeZone();
@@ -87,7 +50,7 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
     typed.current = false;
     setSave({ kind: "saving", text: "Saving…" });
     const mine = ++latest.current;
-    const result = await saveCommissioningAction({ projectId, readings: form.getValues(), complete });
+    const result = await saveCommissioningAction({ projectId, readings: toReadingsInput(form.getValues()), complete });
     if (mine !== latest.current) return;
     if (!result.ok) {
       setSave({ kind: "error", text: `Not saved: ${result.message} Your readings stay on this page.` });
@@ -106,7 +69,14 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
     // eslint-disable-next-line react-hooks/exhaustive-deps -- values is the trigger
   }, [values]);
 
-  const reg = (name: Parameters<typeof form.register>[0]): UseFormRegisterReturn => form.register(name, { onChange: () => (typed.current = true) });
+  const reg = (name: Path<FormValues>): UseFormRegisterReturn => form.register(name, { onChange: () => (typed.current = true) });
+  const setValue: StepProps["setValue"] = (name, value, options) => {
+    typed.current = true;
+    form.setValue(name, value, options);
+  };
+  // Steps appear in the order of the work; each gets the next number.
+  let step = 0;
+  const props_ = (): StepProps => ({ number: ++step, facts, values, errors, byId, reg, setValue });
 
   return (
     <form onSubmit={(e) => e.preventDefault()} noValidate className="space-y-4" aria-label="Commissioning record">
@@ -116,44 +86,39 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
           {status === "complete" ? "Complete" : "Open"}
         </span>
         <span className="measure text-sm text-ink-soft" data-testid="completion-counts">
-          {completion.failing.length} failing · {completion.missing.length} to record
+          {completion.failing.length} failing · {completion.missing.length} to record{completion.waiting.length ? ` · ${completion.waiting.length} waiting` : ""}
         </span>
       </div>
 
       <fieldset disabled={readOnly} className="space-y-4">
-        <Reading title="Grid profile set on the inverter" inputId="gridProfileSet" hint={facts.requiredGridProfile ? `The utility requires: ${facts.requiredGridProfile}` : "The utility's required profile is not on file; ask the office."} result={byId("grid-profile")} error={errors.gridProfileSet}>
-          <input id="gridProfileSet" data-required={facts.requiredGridProfile ?? ""} className="input text-base" autoComplete="off" {...reg("gridProfileSet")} />
-        </Reading>
+        {facts.stringTests.length ? <BeforeEnergizingStep {...props_()} /> : null}
+        {facts.inverters.length ? <InverterStep {...props_()} /> : null}
+        <GridProfileStep {...props_()} />
+        {facts.pairing ? <PairingStep {...props_()} /> : null}
 
-        <Reading title="AC voltage at the point of connection" inputId="acVoltageV" hint={`Nominal service ${facts.nominalServiceV} V.`} result={byId("ac-voltage")} error={errors.acVoltageV} unit="V">
-          <input id="acVoltageV" className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg("acVoltageV")} />
-        </Reading>
-
-        {values.strings.length > 0 ? (
-          <section className="panel space-y-3" aria-labelledby="strings-heading">
-            <div>
-              <h3 id="strings-heading">String voltages with the array shut down</h3>
-              <p className="text-xs text-ink-soft">Open the shutdown switch and wait for the inverter to report a safe DC voltage before you measure each string at the inverter.</p>
-            </div>
-            {values.strings.map((s, i) => {
-              const fact = facts.strings.find((f) => f.id === s.id);
-              const window = fact ? shutdownWindow(fact.devicesInSeries, fact.perDeviceV) : null;
-              const hint = fact && window ? `${fact.devicesInSeries} devices in series: expect about ${fmtV(window.expectedV)} to ${fmtV(window.highV)} V.` : undefined;
+        {facts.strings.length > 0 ? (
+          <Step id="shutdown" number={++step} title="String voltages with the array shut down" intro={<p>Operate the rapid shutdown initiator and wait for the inverter to report a safe DC voltage, then measure each string at the inverter.</p>}>
+            {facts.strings.map((fact) => {
+              const i = values.strings.findIndex((s) => s.id === fact.id);
+              if (i < 0) return null;
+              const window = shutdownWindow(fact.devicesInSeries, fact.perDeviceV);
+              const hint = `${fact.devicesInSeries} devices × ${fmtV(fact.perDeviceV ?? 1)} V: expect about ${fmtV(window.expectedV)} V (${fmtV(window.lowV)} to ${fmtV(window.highV)} V).`;
               return (
-                <Reading key={s.id} title={`String ${s.id}`} inputId={`strings.${i}.measuredV`} hint={hint} result={byId(`string-shutdown:${s.id}`)} error={errors[`strings.${i}.measuredV`]} unit="V" bare>
-                  <input id={`strings.${i}.measuredV`} data-expected-v={window?.expectedV} className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg(`strings.${i}.measuredV`)} />
+                <Reading key={fact.id} title={`String ${fact.id}`} inputId={`strings.${i}.measuredV`} hint={hint} result={byId(`string-shutdown:${fact.id}`)} error={errors[`strings.${i}.measuredV`]} unit="V" bare>
+                  <input id={`strings.${i}.measuredV`} data-expected-v={window.expectedV} className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg(`strings.${i}.measuredV`)} />
                 </Reading>
               );
             })}
-          </section>
+          </Step>
         ) : null}
 
-        <Reading title="Modules reporting" inputId="modulesReporting" hint={`${facts.modulesInstalled} modules installed. Every one must report before the record is complete.`} result={byId("modules-reporting")} error={errors.modulesReporting} unit="modules">
-          <input id="modulesReporting" data-installed={facts.modulesInstalled} className="input measure text-base" inputMode="numeric" autoComplete="off" {...reg("modulesReporting")} />
-        </Reading>
+        <Step id="ac-voltage" number={++step} title="AC voltage at the point of connection" intro={<p>Measure at the PV breaker or the supply-side connection, before the inverter starts exporting.</p>}>
+          <Reading title="AC voltage" inputId="acVoltageV" hint={`Nominal service ${facts.nominalServiceV} V.`} result={byId("ac-voltage")} error={errors.acVoltageV} unit="V" bare>
+            <input id="acVoltageV" className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg("acVoltageV")} />
+          </Reading>
+        </Step>
 
-        <section className="panel space-y-3" aria-labelledby="first-power-heading">
-          <h3 id="first-power-heading">First power</h3>
+        <Step id="first-power" number={++step} title="First power">
           <div className="grid gap-3 sm:grid-cols-2">
             <LabelledInput label="AC output" htmlFor="firstPowerW" unit="W" error={errors.firstPowerW}>
               <input id="firstPowerW" data-rating-w={facts.acRatingW} className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg("firstPowerW")} />
@@ -163,13 +128,21 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
             </LabelledInput>
           </div>
           <ResultLine result={byId("first-power")} />
-        </section>
+        </Step>
 
-        <section className="panel space-y-3" aria-labelledby="rsd-heading">
-          <div>
-            <h3 id="rsd-heading">Rapid shutdown test</h3>
-            <p className="text-xs text-ink-soft">Operate the rapid shutdown initiator, then read the voltage on the PV conductors and how long it took to fall.</p>
-          </div>
+        {facts.moduleMonitoring ? (
+          <Step id="modules-reporting" number={++step} title="Modules reporting">
+            <Reading title="Modules reporting in the monitoring" inputId="modulesReporting" hint={`${facts.modulesInstalled} modules installed. Every one must report before the record is complete.`} result={byId("modules-reporting")} error={errors.modulesReporting} unit="modules" bare>
+              <input id="modulesReporting" data-installed={facts.modulesInstalled} className="input measure text-base" inputMode="numeric" autoComplete="off" {...reg("modulesReporting")} />
+            </Reading>
+          </Step>
+        ) : (
+          <p className="px-1 text-sm text-ink-soft" data-testid="no-module-monitoring">
+            This system has no module-level monitoring, so there is no count of modules reporting to record.
+          </p>
+        )}
+
+        <Step id="rapid-shutdown" number={++step} title="Rapid shutdown test" intro={<p>Operate the rapid shutdown initiator, then read the voltage on the PV conductors and how long it took to fall.</p>}>
           <LabelledInput label="Where the conductors were read" htmlFor="rapidShutdown.boundary">
             <select id="rapidShutdown.boundary" className="input text-base" {...reg("rapidShutdown.boundary")}>
               <option value="outside">Outside the array boundary (30 V limit)</option>
@@ -186,7 +159,7 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
           </div>
           <ResultLine result={byId("rapid-shutdown-voltage")} />
           <ResultLine result={byId("rapid-shutdown-time")} />
-        </section>
+        </Step>
       </fieldset>
 
       {readOnly ? (
@@ -205,49 +178,5 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
         </div>
       )}
     </form>
-  );
-}
-
-function LabelledInput({ label, htmlFor, unit, error, children }: { label: string; htmlFor: string; unit?: string; error?: string; children: React.ReactNode }) {
-  return (
-    <div>
-      <label className="label" htmlFor={htmlFor}>
-        {label}
-        {unit ? <span className="text-ink-faint"> ({unit})</span> : null}
-      </label>
-      {children}
-      {error ? (
-        <p className="mt-1 text-sm text-result-fail" role="alert">
-          {error}
-        </p>
-      ) : null}
-    </div>
-  );
-}
-
-/** One reading with its check right under it: the result word, what was found, and what to do. */
-function Reading({ title, inputId, hint, unit, result, error, bare, children }: { title: string; inputId: string; hint?: string; unit?: string; result?: CommissioningCheck; error?: string; bare?: boolean; children: React.ReactNode }) {
-  return (
-    <section className={clsx("space-y-2", !bare && "panel")} aria-label={title}>
-      <LabelledInput label={title} htmlFor={inputId} unit={unit} error={error}>
-        {children}
-      </LabelledInput>
-      {hint ? <p className="text-xs text-ink-soft">{hint}</p> : null}
-      <ResultLine result={result} />
-    </section>
-  );
-}
-
-function ResultLine({ result }: { result?: CommissioningCheck }) {
-  if (!result) return null;
-  return (
-    <div className="flex items-start gap-2" data-testid={`result-${result.id}`} data-status={result.status} data-reading={result.reading}>
-      <CheckStatusChip status={result.status} />
-      <div className="min-w-0 text-sm">
-        <p className="text-ink-soft">{result.message}</p>
-        {result.fix ? <p className="text-copper-dark">What to do: {result.fix}</p> : null}
-        <p className="text-xs text-ink-faint">{result.clause}</p>
-      </div>
-    </div>
   );
 }

@@ -1,0 +1,72 @@
+import { CommissioningReadings, type CommissioningReadingsInput } from "@/lib/schemas/commissioning";
+
+// The field record as the form holds it (every input a string) and back to readings.
+
+/** The grid profile select's value for a profile typed by hand. */
+export const OTHER_PROFILE = "__other__";
+
+export type FormValues = {
+  vocTemperature: { tempC: string; source: "module" | "ambient" };
+  strings: { id: string; polarity: "" | "correct" | "reversed"; vocV: string; insulationMohm: string; devicesFound: string; measuredV: string }[];
+  inverters: { id: string; serial: string; cardSerial: string; activated: boolean }[];
+  gridProfileChoice: string;
+  gridProfileOther: string;
+  devicesFound: string;
+  acVoltageV: string;
+  modulesReporting: string;
+  firstPowerW: string;
+  firstPowerTime: string;
+  rapidShutdown: { boundary: "outside" | "inside"; measuredV: string; seconds: string };
+};
+
+const text = (v: number | string | null) => (v === null ? "" : String(v));
+
+export function toFormValues(r: CommissioningReadings, acceptedGridProfiles: readonly string[]): FormValues {
+  const set = r.gridProfileSet ?? "";
+  const listed = acceptedGridProfiles.includes(set);
+  return {
+    vocTemperature: { tempC: text(r.vocTemperature.tempC), source: r.vocTemperature.source },
+    strings: r.strings.map((s) => ({ id: s.id, polarity: s.polarity ?? "", vocV: text(s.vocV), insulationMohm: text(s.insulationMohm), devicesFound: text(s.devicesFound), measuredV: text(s.measuredV) })),
+    inverters: r.inverters.map((u) => ({ id: u.id, serial: u.serial ?? "", cardSerial: u.cardSerial ?? "", activated: u.activated })),
+    gridProfileChoice: set === "" ? "" : listed ? set : OTHER_PROFILE,
+    gridProfileOther: set !== "" && !listed ? set : "",
+    devicesFound: text(r.devicesFound),
+    acVoltageV: text(r.acVoltageV),
+    modulesReporting: text(r.modulesReporting),
+    firstPowerW: text(r.firstPowerW),
+    firstPowerTime: text(r.firstPowerTime),
+    rapidShutdown: { boundary: r.rapidShutdown.boundary, measuredV: text(r.rapidShutdown.measuredV), seconds: text(r.rapidShutdown.seconds) },
+  };
+}
+
+/** What the form sends: the chosen profile or the typed one, a polarity not chosen as none. */
+export function toReadingsInput(v: FormValues): CommissioningReadingsInput {
+  const { gridProfileChoice, gridProfileOther, strings, ...rest } = v;
+  return {
+    ...rest,
+    strings: strings.map((s) => ({ ...s, polarity: s.polarity === "" ? null : s.polarity })),
+    gridProfileSet: gridProfileChoice === OTHER_PROFILE ? gridProfileOther : gridProfileChoice,
+  };
+}
+
+// Form paths whose reading lives under another name.
+const FORM_PATH: Record<string, string> = { gridProfileSet: "gridProfileOther" };
+
+/** The typed values as readings; a field that is not a number is left out of the checks and its problem shown beside it. */
+export function liveReadings(values: FormValues): { readings: CommissioningReadings; errors: Record<string, string> } {
+  const errors: Record<string, string> = {};
+  const copy = structuredClone(toReadingsInput(values)) as Record<string, unknown>;
+  let parsed = CommissioningReadings.safeParse(copy);
+  for (let i = 0; i < 3 && !parsed.success; i++) {
+    for (const issue of parsed.error.issues) {
+      const path = issue.path.map(String);
+      const key = path.join(".");
+      errors[FORM_PATH[key] ?? key] ??= issue.message;
+      let node = copy as Record<string, unknown>;
+      for (const part of path.slice(0, -1)) node = node[part] as Record<string, unknown>;
+      node[path[path.length - 1]] = "";
+    }
+    parsed = CommissioningReadings.safeParse(copy);
+  }
+  return { readings: parsed.success ? parsed.data : CommissioningReadings.parse({}), errors };
+}
