@@ -122,7 +122,7 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
   // Catalog and authority records, with their current values as valid bodies for writes.
   const equipment = (await ok(await admin.get("/api/v1/equipment"), "equipment")).items[0];
   const [jurisdiction] = await query<Record<string, unknown>>("select id, name, state, nec_edition as \"necEdition\", record_low_temp_c as \"recordLowTempC\", high_design_temp_c as \"highDesignTempC\", coalesce(notes, '') as notes from jurisdictions where id = $1", [source.jurisdiction.id]);
-  const [utility] = await query<Record<string, unknown>>("select id, name, service_voltages as \"serviceVoltages\", coalesce(required_grid_profile, '') as \"requiredGridProfile\", coalesce(notes, '') as notes from utilities where id = $1", [source.utility.id]);
+  const [utility] = await query<Record<string, unknown>>("select id, name, service_voltages as \"serviceVoltages\", accepted_grid_profiles as \"acceptedGridProfiles\", coalesce(notes, '') as notes from utilities where id = $1", [source.utility.id]);
   const [user] = await query<{ name: string; email: string }>("select name, email from users where id = $1", [userId]);
 
   for (const client of [coordinator, admin, crew]) await client.dispose();
@@ -145,7 +145,7 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
       draft,
       equipment: { kind: equipment.kind, maker: equipment.maker, model: equipment.model, listing: equipment.listing ?? "", specs: equipment.specs },
       jurisdiction: { name: jurisdiction!.name, state: jurisdiction!.state, necEdition: jurisdiction!.necEdition, recordLowTempC: Number(jurisdiction!.recordLowTempC), highDesignTempC: Number(jurisdiction!.highDesignTempC), notes: jurisdiction!.notes },
-      utility: { name: utility!.name, serviceVoltages: utility!.serviceVoltages, requiredGridProfile: utility!.requiredGridProfile, notes: utility!.notes },
+      utility: { name: utility!.name, serviceVoltages: utility!.serviceVoltages, acceptedGridProfiles: utility!.acceptedGridProfiles, notes: utility!.notes },
     },
   };
 }
