@@ -27,6 +27,18 @@ export default defineConfig({
           hookTimeout: 60_000,
         },
       },
+      {
+        resolve: { alias },
+        test: {
+          name: "system",
+          include: ["tests/system/**/*.test.ts"],
+          environment: "node",
+          // Each file starts its own app servers, workers and services on the system profile's ports.
+          fileParallelism: false,
+          testTimeout: 300_000,
+          hookTimeout: 300_000,
+        },
+      },
     ],
   },
 });

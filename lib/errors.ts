@@ -9,6 +9,7 @@ export const ERROR_STATUS = {
   TOO_LARGE: 413,
   UNSUPPORTED_TYPE: 415,
   LIMIT_EXCEEDED: 429,
+  UNAVAILABLE: 503,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_STATUS;

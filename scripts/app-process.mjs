@@ -55,18 +55,18 @@ export async function buildIfNeeded(root, env) {
 }
 
 /** Starts the app through scripts/serve.mjs (built, or with hot reload) in its own process group so it can be stopped whole. */
-export function serveApp(root, env, { dev, port }) {
+export function serveApp(root, env, { dev, port, stdio = "inherit" }) {
   const args = ["scripts/serve.mjs", "--host", "127.0.0.1", "--port", String(port), ...(dev ? ["--dev"] : [])];
-  return spawnGroup(root, process.execPath, args, { ...env, ...(dev ? { NODE_ENV: "development" } : {}) });
+  return spawnGroup(root, process.execPath, args, { ...env, ...(dev ? { NODE_ENV: "development" } : {}) }, stdio);
 }
 
 /** Starts the background worker that generates packets. */
-export function startWorker(root, env) {
-  return spawnGroup(root, bin(root, "tsx"), ["--import", "./scripts/server-only-hook.mjs", "scripts/worker.ts"], env);
+export function startWorker(root, env, { stdio = "inherit" } = {}) {
+  return spawnGroup(root, bin(root, "tsx"), ["--import", "./scripts/server-only-hook.mjs", "scripts/worker.ts"], env, stdio);
 }
 
-function spawnGroup(root, command, args, env) {
-  const child = spawn(command, args, { cwd: root, env: { ...process.env, ...env }, stdio: "inherit", detached: true });
+function spawnGroup(root, command, args, env, stdio = "inherit") {
+  const child = spawn(command, args, { cwd: root, env: { ...process.env, ...env }, stdio, detached: true });
   const stop = () =>
     new Promise((resolve) => {
       if (child.exitCode !== null || child.signalCode !== null) return resolve();

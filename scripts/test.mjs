@@ -1,6 +1,7 @@
 // `npm test`: the same bootstrap as `npm start` for separate test services,
 // then every suite: unit, integration against a fresh PostgreSQL database,
-// end-to-end in Debian's Chromium against a production build.
+// end-to-end in Debian's Chromium against a production build, and system
+// (two app servers and two workers, database and storage faults).
 // Exits non-zero on the first failing suite.
 import path from "node:path";
 import { spawn } from "node:child_process";
@@ -66,6 +67,15 @@ try {
     app = serveApp(root, stack.env, { dev: false, port: stack.ports.app });
     await waitForApp(stack.env.APP_URL, app.child);
     if (!(await suite("e2e", bin("playwright"), ["test"], { BASE_URL: stack.env.APP_URL, NODE_ENV: "test" }))) await finish(1);
+    await app.stop();
+    await worker.stop();
+    app = worker = undefined;
+  }
+
+  if (wants("system")) {
+    // Two app servers and two workers on their own services (the system profile), with faults injected.
+    await buildIfNeeded(root, stack.env);
+    if (!(await suite("system", bin("vitest"), ["run", "--project", "system"], { NODE_ENV: "test" }))) await finish(1);
   }
   await finish(0);
 } catch (error) {

@@ -16,10 +16,24 @@ if (!url) {
   process.exit(1);
 }
 
-const boss = new PgBoss({ connectionString: url });
-boss.on("error", (error) => console.error("worker queue error", error));
-await boss.start();
-await boss.createQueue(PACKET_QUEUE);
+/** The queue, started once the database answers: a worker started during an outage waits for it rather than exiting. */
+async function startQueue(): Promise<PgBoss> {
+  for (let attempt = 1; ; attempt++) {
+    const boss = new PgBoss({ connectionString: url });
+    boss.on("error", (error) => console.error("worker queue error", error));
+    try {
+      await boss.start();
+      await boss.createQueue(PACKET_QUEUE);
+      return boss;
+    } catch (error) {
+      if (attempt === 1) console.error("• The database is not answering; the worker keeps trying.", error instanceof Error ? error.message : error);
+      await boss.stop({ graceful: false }).catch(() => undefined);
+      await new Promise((resolve) => setTimeout(resolve, Math.min(30_000, 1_000 * attempt)));
+    }
+  }
+}
+
+const boss = await startQueue();
 await boss.work<PacketJob>(PACKET_QUEUE, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => {
   await generatePacket(job.data.packetId);
 });

@@ -5,6 +5,7 @@ import { can, type Permission, type Viewer } from "@/lib/domain/permissions";
 import { groupFieldErrors, isAppError, type ErrorCode } from "@/lib/errors";
 import { findUnstorableInput } from "@/lib/schemas/fields";
 import { getViewer } from "./auth";
+import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "./db-unavailable";
 
 export type ActionResult<T> = { ok: true; data: T } | { ok: false; code: ErrorCode | "INTERNAL"; message: string; fieldErrors?: Record<string, string[]> };
 
@@ -23,12 +24,12 @@ export function defineAction<S extends z.ZodType, T>(
   handler: (input: z.output<S>, context: { viewer: Viewer }) => Promise<T>,
 ) {
   return async (raw: z.input<S>): Promise<ActionResult<T>> => {
-    const viewer = await getViewer();
-    if (permission !== null) {
-      if (!viewer) return { ok: false, code: "UNAUTHORIZED", message: "Your session has ended. Sign in again." };
-      if (!can(viewer, permission)) return { ok: false, code: "FORBIDDEN", message: "Your role does not allow this." };
-    }
     try {
+      const viewer = await getViewer();
+      if (permission !== null) {
+        if (!viewer) return { ok: false, code: "UNAUTHORIZED", message: "Your session has ended. Sign in again." };
+        if (!can(viewer, permission)) return { ok: false, code: "FORBIDDEN", message: "Your role does not allow this." };
+      }
       // Parsing is inside the try: a schema that throws on hostile input is still answered, never a 500.
       const unstorable = findUnstorableInput(raw);
       if (unstorable) return { ok: false, code: "INVALID_INPUT", message: "Check the highlighted fields.", fieldErrors: { [unstorable.path]: [unstorable.message] } };
@@ -37,6 +38,7 @@ export function defineAction<S extends z.ZodType, T>(
       return { ok: true, data: await handler(parsed.data, { viewer: viewer as Viewer }) };
     } catch (error) {
       if (isAppError(error)) return { ok: false, code: error.code, message: error.message, fieldErrors: error.fieldErrors };
+      if (isDatabaseUnavailable(error)) return { ok: false, code: "UNAVAILABLE", message: DATABASE_UNAVAILABLE_MESSAGE };
       const reference = randomUUID().slice(0, 8);
       console.error(`[action ${reference}]`, error);
       return { ok: false, code: "INTERNAL", message: `Something went wrong on our side (reference ${reference}). Nothing was saved.` };

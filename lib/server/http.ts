@@ -9,6 +9,7 @@ import { readBounded } from "@/lib/net/read-bounded";
 import { isSameOrigin } from "@/lib/net/same-origin";
 import { fieldErrorsOf } from "./action";
 import { getViewer } from "./auth";
+import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "./db-unavailable";
 import { env } from "./env";
 import { getViewerByApiToken } from "./data/api-tokens";
 
@@ -19,6 +20,9 @@ export function toErrorResponse(error: unknown): NextResponse {
   }
   if (isAppError(error)) {
     return NextResponse.json({ error: { code: error.code, message: error.message, ...(error.fieldErrors ? { fieldErrors: error.fieldErrors } : {}) } }, { status: ERROR_STATUS[error.code] });
+  }
+  if (isDatabaseUnavailable(error)) {
+    return NextResponse.json({ error: { code: "UNAVAILABLE", message: DATABASE_UNAVAILABLE_MESSAGE } }, { status: 503, headers: { "retry-after": "30" } });
   }
   const reference = randomUUID().slice(0, 8);
   console.error(`[api ${reference}]`, error);

@@ -12,6 +12,8 @@ import { FAKE_STRIPE_SECRET_KEY, FAKE_STRIPE_WEBHOOK_SECRET, startPaymentsFake }
 export const PROFILES = {
   dev: { app: 3000, postgres: 54329, storage: 4569, payments: 4589, smtp: 2525, mailbox: 2526, database: "ohmstead" },
   test: { app: 3100, postgres: 54339, storage: 4579, payments: 4599, smtp: 2535, mailbox: 2536, database: "ohmstead_e2e" },
+  // Several app servers and workers against one database and storage (tests/system, npm run bench:load); app servers take app, app + 1, …
+  system: { app: 3200, postgres: 54359, storage: 4609, payments: 4619, smtp: 2545, mailbox: 2546, database: "ohmstead_system" },
 };
 
 /** A local-only session secret kept in the git-ignored data folder. */
@@ -54,13 +56,15 @@ export async function startStack({ root, profile, postgresBin, fresh = false }) 
     }
   };
   try {
-    const postgres = await startPostgres({ bin: postgresBin, dataDir: path.join(dataRoot, "postgres"), port: ports.postgres });
-    stops.push(postgres.stop);
+    const postgresOptions = { bin: postgresBin, dataDir: path.join(dataRoot, "postgres"), port: ports.postgres };
+    let postgres = await startPostgres(postgresOptions);
+    stops.push(() => postgres.stop());
     await ensureDatabase(ports.postgres, ports.database);
 
     const bucket = "ohmstead-files";
-    const storage = await startStorageFake({ port: ports.storage, directory: path.join(dataRoot, "storage"), bucket });
-    stops.push(storage.stop);
+    const storageOptions = { port: ports.storage, directory: path.join(dataRoot, "storage"), bucket };
+    let storage = await startStorageFake(storageOptions);
+    stops.push(() => storage?.stop());
 
     const appUrl = `http://127.0.0.1:${ports.app}`;
     // Webhooks go to the app as Stripe would send them; until the app is up the fake retries, then resends after a restart.
@@ -92,7 +96,18 @@ export async function startStack({ root, profile, postgresBin, fresh = false }) 
       STRIPE_WEBHOOK_SECRET: FAKE_STRIPE_WEBHOOK_SECRET,
       STRIPE_API_URL: payments.url,
     };
-    return { ports, env, stop: stopAll };
+    // Fault tests stop and start the database and the storage under a running app.
+    const services = {
+      postgres: { stop: () => postgres.stop(), start: async () => void (postgres = await startPostgres(postgresOptions)) },
+      storage: {
+        stop: async () => {
+          await storage?.stop();
+          storage = null;
+        },
+        start: async () => void (storage = await startStorageFake(storageOptions)),
+      },
+    };
+    return { ports, env, services, dataRoot, stop: stopAll };
   } catch (error) {
     await stopAll();
     throw error;
