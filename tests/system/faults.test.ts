@@ -1,7 +1,7 @@
 import { chromium } from "@playwright/test";
-import pg from "pg";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startCluster } from "../../scripts/services/cluster.mjs";
+import { query } from "../support/sql";
 import { AppClient, eventually } from "./support/http-client";
 
 // Faults injected under a running app server and worker: the database stopped and started, the
@@ -13,15 +13,7 @@ let cluster: Cluster;
 let office: AppClient;
 const report: string[] = [];
 
-async function sql<T>(text: string, params: unknown[] = []): Promise<T[]> {
-  const client = new pg.Client({ connectionString: cluster.env.DATABASE_URL });
-  await client.connect();
-  try {
-    return (await client.query(text, params)).rows as T[];
-  } finally {
-    await client.end();
-  }
-}
+const sql = <T = Record<string, unknown>>(text: string, params: unknown[] = []) => query<T>(cluster.env.DATABASE_URL, text, params);
 
 /** What a signed-in browser shows at a path: the page's visible text once it has settled. */
 async function shownInBrowser(path: string): Promise<string> {

@@ -1,7 +1,7 @@
-import pg from "pg";
 import Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startCluster } from "../../scripts/services/cluster.mjs";
+import { query } from "../support/sql";
 import { AppClient, eventually } from "./support/http-client";
 
 // Two app servers and two workers against one database and one storage, as behind a load balancer:
@@ -13,15 +13,7 @@ let cluster: Cluster;
 let servers: AppClient[];
 const report: string[] = [];
 
-async function sql<T = Record<string, unknown>>(text: string, params: unknown[] = []): Promise<T[]> {
-  const client = new pg.Client({ connectionString: cluster.env.DATABASE_URL });
-  await client.connect();
-  try {
-    return (await client.query(text, params)).rows as T[];
-  } finally {
-    await client.end();
-  }
-}
+const sql = <T = Record<string, unknown>>(text: string, params: unknown[] = []) => query<T>(cluster.env.DATABASE_URL, text, params);
 
 beforeAll(async () => {
   cluster = await startCluster({ apps: 2, workers: 2 });

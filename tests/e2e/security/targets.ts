@@ -1,4 +1,4 @@
-import pg from "pg";
+import { query as queryDatabase } from "../../support/sql";
 import { expect, type APIRequestContext, type Browser } from "@playwright/test";
 import { DEMO } from "../support/session";
 import { actionIds, callAction, clientFor, payByCard } from "../support/api";
@@ -26,15 +26,7 @@ export type Targets = {
   bodies: { project: Record<string, unknown>; draft: unknown; equipment: Record<string, unknown>; jurisdiction: Record<string, unknown>; utility: Record<string, unknown> };
 };
 
-async function query<T>(sql: string, params: unknown[] = []): Promise<T[]> {
-  const client = new pg.Client({ connectionString: process.env.DATABASE_URL });
-  await client.connect();
-  try {
-    return (await client.query(sql, params)).rows as T[];
-  } finally {
-    await client.end();
-  }
-}
+const query = <T>(sql: string, params: unknown[] = []) => queryDatabase<T>(process.env.DATABASE_URL!, sql, params);
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- fixture answers are read field by field
 const ok = async (res: Awaited<ReturnType<APIRequestContext["get"]>>, what: string): Promise<any> => {
