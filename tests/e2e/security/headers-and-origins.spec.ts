@@ -1,5 +1,6 @@
 import { DEMO, listProjectsAs, pageFor, signIn } from "../support/session";
-import { clientFor, tokenClient } from "../support/api";
+import { query } from "../../support/sql";
+import { actionIds, callAction, clientFor, tokenClient } from "../support/api";
 import { expect, test } from "./fixtures";
 
 // What the browser is told about each answer, and who may write with a session cookie.
@@ -102,4 +103,30 @@ test("a plain HTML form on another site of the same host cannot move a project's
   expect([403, 415]).toContain((await answered).status());
   const after = await page.request.get(`/api/v1/projects/${targets.projectId}`.replace(/^/, process.env.BASE_URL ?? "http://127.0.0.1:3100"));
   expect((await after.json()).stage).toBe(before.stage);
+});
+
+test("an X-Forwarded-For written by the client changes neither the sign-in throttle nor the inspector access log", async ({ targets }) => {
+  // Defect: the client's own X-Forwarded-For was believed (no trusted proxy is configured here).
+  const email = "priya@quillmoor.example";
+  for (let i = 0; i < 5; i++) {
+    const client = await clientFor(null);
+    const { csrfToken } = await (await client.get("/api/auth/csrf")).json();
+    await client.post("/api/auth/callback/credentials", { headers: { "x-forwarded-for": `203.0.113.${i}` }, form: { csrfToken, email, password: `wrong-${i}`, json: "true" } });
+    await client.dispose();
+  }
+  const last = await clientFor(null);
+  const { csrfToken } = await (await last.get("/api/auth/csrf")).json();
+  const answer = await last.post("/api/auth/callback/credentials", { headers: { "x-forwarded-for": "198.51.100.250" }, form: { csrfToken, email, password: "ohmstead-demo", json: "true" } });
+  expect(decodeURIComponent(new URL((await answer.json()).url).searchParams.get("error") ?? "")).toMatch(/each new try waits a little longer/);
+  await last.dispose();
+
+  // The inspector's visit is logged with the connection's address, not the one the client wrote.
+  const coordinator = await clientFor(DEMO.coordinator);
+  const created = await callAction(coordinator, { id: actionIds().get("app/(app)/projects/[projectId]/documents/share-actions.ts#createShareLinkAction")!, page: `/projects/${targets.projectId}/documents`, args: [{ projectId: targets.projectId, packetIds: [targets.packetId] }] });
+  const { url, link } = (created.result as { data: { url: string; link: { id: string } } }).data;
+  const inspector = await clientFor(null);
+  expect((await inspector.get(new URL(url).pathname, { headers: { "x-forwarded-for": "6.6.6.6" } })).status()).toBe(200);
+  const logged = await query<{ address: string }>(process.env.DATABASE_URL!, "select address from share_link_accesses where share_link_id = $1", [link.id]);
+  expect(logged.map((row) => row.address)).toEqual(["127.0.0.1"]);
+  for (const c of [coordinator, inspector]) await c.dispose();
 });
