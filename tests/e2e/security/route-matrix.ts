@@ -4,7 +4,7 @@ import type { Targets } from "./targets";
 // first company's targets. The authorization matrix tries everyone else; the malformed-input test
 // sends hostile bodies to the same ways in as someone who may use them.
 
-export type Persona = "anonymous" | "forgedCookie" | "installer" | "coordinator" | "rivalCoordinator" | "rivalAdmin" | "token";
+export type Persona = "admin" | "anonymous" | "forgedCookie" | "installer" | "coordinator" | "rivalCoordinator" | "rivalAdmin" | "token";
 export type Role = "admin" | "coordinator" | "installer";
 /** project: one of this company's projects; item: another record of this company; org: the caller's own organization, no id. */
 export type Scope = "project" | "item" | "org";

@@ -42,7 +42,7 @@ export default async function ApiTokensPage() {
                   {t.createdByName ? <span className="block text-xs text-ink-faint">by {t.createdByName}</span> : null}
                 </td>
                 <td className="px-3 py-2 text-ink-soft">{when(t.lastUsedAt)}</td>
-                <td className="px-3 py-2 text-ink-soft">{t.revokedAt ? `Revoked ${when(t.revokedAt)}` : "Active"}</td>
+                <td className="px-3 py-2 text-ink-soft">{t.revokedAt ? <>Revoked {when(t.revokedAt)}</> : "Active"}</td>
                 <td className="px-3 py-2 text-right">{t.revokedAt ? null : <RevokeTokenButton apiTokenId={t.id} name={t.name} />}</td>
               </tr>
             ))}

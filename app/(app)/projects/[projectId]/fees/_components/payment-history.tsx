@@ -26,7 +26,7 @@ export function PaymentHistory({ payments, canRefund }: { payments: PaymentDto[]
                 {STATUS_TEXT[p.status]}
               </span>
               <span className="text-xs text-ink-faint">
-                {p.paidAt ? `paid ${when(p.paidAt)}` : `started ${when(p.createdAt)}`} by {p.createdBy ?? "someone"}
+                {p.paidAt ? <>paid {when(p.paidAt)}</> : <>started {when(p.createdAt)}</>} by {p.createdBy ?? "someone"}
                 {p.card ? ` · ${p.card}` : ""}
               </span>
               {p.hasReceipt ? (
