@@ -61,7 +61,8 @@ export function RunsStep({ issues }: { issues: Issues }) {
         onClick={() =>
           runs.append({
             lineId: nextLineId("run", runs.fields.map((f) => f.lineId)), label: "", circuit: "", lengthFt: "", material: "Cu", size: "10", stranding: "stranded", insulation: "THWN-2",
-            insulationTempC: "90", terminalTempC: "75", ambientTempC: "", onRoof: false, roofClearanceIn: "", currentCarryingConductors: "2", racewayType: "EMT", tradeSize: "3/4", ocpdA: "", egcSize: "10",
+            wireAreaIn2: "", insulationTempC: "90", terminalTempC: "", ambientTempC: "", onRoof: false, roofClearanceIn: "", currentCarryingConductors: "", arrangement: "",
+            racewayType: "EMT", tradeSize: "3/4", route: "", ocpdA: "", egcSize: "10",
           })
         }
       >
