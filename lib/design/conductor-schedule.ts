@@ -1,4 +1,4 @@
-import { DesignInputError, circuitConductorCount, runCircuits, sizeLabel, type Design } from "@/lib/engineering";
+import { circuitConductorCount, runCircuits, sizeLabel, unlessInputError as counted, type Design } from "@/lib/engineering";
 import type { DesignInput } from "@/lib/schemas/design";
 
 // The conductor schedule as the plans print it and the review step shows it: one row per run, each
@@ -29,16 +29,6 @@ function carriesText(circuit: string, inverterLines: { lineId: string; quantity:
   if (ref === "all") return `${inverterLines.length > 1 ? "All inverter outputs" : "Inverter output"}${count}`;
   const line = inverterLines.find((l) => l.lineId === ref);
   return line ? `Output of ${line.quantity} × ${line.model}` : `Output of ${ref}`;
-}
-
-/** A figure from the engine, or null where the entries cannot give it yet. */
-function counted<T>(compute: () => T): T | null {
-  try {
-    return compute();
-  } catch (err) {
-    if (err instanceof DesignInputError) return null;
-    throw err;
-  }
 }
 
 /** One row per conductor run, its conductor count taken from the circuits it holds (or the entered count when higher). */

@@ -1,5 +1,4 @@
 import {
-  DesignInputError,
   circuitConductorCount,
   coldModuleVoc,
   egcRequirement,
@@ -10,6 +9,7 @@ import {
   requiredOcpdA,
   runCircuits,
   runRacewayWires,
+  unlessInputError,
   runVoltageDrop,
   shutdownStringVoltageV,
   sizeLabel,
@@ -62,15 +62,8 @@ const CONNECTION_CHECKS = [
   "input:point-of-connection",
 ];
 
-/** A figure the engine cannot compute for this input; the engine has already reported why as a failed check. */
-function figure<T>(compute: () => T): T | null {
-  try {
-    return compute();
-  } catch (err) {
-    if (err instanceof DesignInputError) return null;
-    throw err;
-  }
-}
+// A figure the engine cannot compute for this input is null; the engine has already reported why as a failed check.
+const figure = unlessInputError;
 
 /**
  * Shapes the engine's result as the API's review. Per-string and per-run figures come

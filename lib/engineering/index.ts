@@ -1,6 +1,6 @@
 // The design review engine: pure functions over plain data, no I/O.
 export * from "./types";
-export { DesignInputError } from "./errors";
+export { DesignInputError, unlessInputError } from "./errors";
 export { CLAUSES, EDITION_ONLY_CLAUSES, NON_CODE_BASES, type ClauseId, type EditionOnlyClauseId, clause, clauseInEdition, clauses } from "./clauses";
 export { reviewArray, reviewDesign, type ReviewResult, type ReviewSummary } from "./review";
 export { validateArrayDesign, validateDesign, validateSite } from "./validate";

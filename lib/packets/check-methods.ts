@@ -10,6 +10,7 @@ import {
   stringsOnSameInput,
   terminalBasis,
   runMaxCurrentA,
+  unlessInputError,
   type CheckResult,
   type ConductorRun,
   type Design,
@@ -52,14 +53,8 @@ function vmpInputs(design: Design, site: Site): string[] {
   return [`Vmp = ${num(m.vmpV)} V (STC)`, `Tcell = ${num(cellTempC(design, site))} °C (${num(site.highDesignTempC)} °C air plus the usual rise)`, coeff];
 }
 
-/** A figure for the sheet, or null where the engine cannot compute it (the finding then says why). */
-function safely<T>(compute: () => T): T | null {
-  try {
-    return compute();
-  } catch {
-    return null;
-  }
-}
+// A figure for the sheet, or null where the engine cannot compute it (the finding then says why).
+const safely = unlessInputError;
 
 const modulesIn = (design: Design, subject: string) => design.strings.find((s) => s.id === subject)?.modulesInSeries ?? 1;
 
