@@ -1,13 +1,18 @@
-import { expect, test } from "@playwright/test";
+import { expect, test, type Page } from "@playwright/test";
 import { DEMO, listProjectsAs, pageFor, signIn } from "../support/session";
 
-test("coordinator builds a design step by step and fixes a failing check by its suggestion", async ({ page }) => {
+/** Signs the coordinator in and opens the design of a demo project still in draft; returns the live review panel. */
+async function openDraftDesign(page: Page, customerName: string) {
   await signIn(page, DEMO.coordinator);
-  // A draft project in Brackenford: NEC 2023, record low −24 °C, 100 A service.
-  const [project] = await listProjectsAs(page, { q: "Imogen Halvorsen" });
+  const [project] = await listProjectsAs(page, { q: customerName });
   expect(project.stage).toBe("draft");
   await page.goto(`/projects/${project.id}/design`);
-  const review = page.getByTestId("review-panel");
+  return { project, review: page.getByTestId("review-panel") };
+}
+
+test("coordinator builds a design step by step and fixes a failing check by its suggestion", async ({ page }) => {
+  // A draft project in Brackenford: NEC 2023, record low −24 °C, 100 A service.
+  const { project, review } = await openDraftDesign(page, "Imogen Halvorsen");
   await expect(review).toHaveAttribute("data-review", "incomplete");
 
   // 1. Equipment
@@ -92,12 +97,8 @@ test("installer sees an assigned project's design read-only", async ({ browser }
 });
 
 test("coordinator sees a 25-module string flagged on step 2, a missing length named, and two strings in one raceway scheduled as one run", async ({ page }) => {
-  await signIn(page, DEMO.coordinator);
   // A draft project in Wendle County: NEC 2017, record low −28 °C, 200 A service.
-  const [project] = await listProjectsAs(page, { q: "Wilhelmina Coe" });
-  expect(project.stage).toBe("draft");
-  await page.goto(`/projects/${project.id}/design`);
-  const review = page.getByTestId("review-panel");
+  const { review } = await openDraftDesign(page, "Wilhelmina Coe");
 
   await page.getByLabel("PV module").selectOption({ label: "Larkspur LK-405M-54H — 405 W" });
   await page.getByLabel("Inverter line inv-1").selectOption({ label: "Quillon QS-7600 — string, 7600 W AC" });
