@@ -29,7 +29,8 @@ export function checkProtectionFunctions(design: ArrayDesign, site: Site, module
       const known = inv.dcArcFaultProtection;
       results.push(makeCheck({
         id: `arc-fault:${inv.id}`, title: `DC arc-fault protection (${inv.model})`, status: known === true ? "pass" : known === false ? "fail" : "warn",
-        value: dcV, limit: ARC_FAULT_FROM_V, unit: "V", clause: clause("arcFault", edition), edition,
+        // The voltage is why the protection is needed, not a figure to stay under: no limit is shown beside it.
+        value: dcV, limit: null, unit: "V", clause: clause("arcFault", edition), edition,
         message: known === true
           ? `${who} is listed with DC arc-fault protection, which its ${fmt(dcV, 1)} V DC circuits on the building need.`
           : known === false
@@ -44,7 +45,7 @@ export function checkProtectionFunctions(design: ArrayDesign, site: Site, module
       const known = inv.dcGroundFaultProtection;
       results.push(makeCheck({
         id: `ground-fault:${inv.id}`, title: `DC ground-fault protection (${inv.model})`, status: known === true ? "pass" : known === false ? "fail" : "warn",
-        value: dcV, limit: GROUND_FAULT_ABOVE_V, unit: "V", clause: clause("groundFault", edition), edition,
+        value: dcV, limit: null, unit: "V", clause: clause("groundFault", edition), edition,
         message: known === true
           ? `${who} provides the DC ground-fault protection its circuits need (above 30 V or 8 A).`
           : known === false
