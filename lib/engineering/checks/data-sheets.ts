@@ -18,6 +18,8 @@ export const VMP_TO_VOC: Band = { min: 0.7, max: 0.95 };
 export const IMP_TO_ISC: Band = { min: 0.85, max: 0.995 };
 /** Pmax within 5 % of Vmp × Imp (common practice; data sheets round each figure). */
 export const PMAX_PRODUCT_TOLERANCE = 0.05;
+/** Voltage a module-level device holds while shut down: about 1 V is common practice; 0.1–3 V covers the devices sold. */
+export const SHUTDOWN_HOLD_V: Band = { min: 0.1, max: 3 };
 /** Rated output current at least 95 % of the rated power over the nominal voltage (common practice). */
 export const INVERTER_CURRENT_TOLERANCE = 0.05;
 
@@ -110,9 +112,22 @@ function inverterProblems(inv: Inverter, site: Site): CheckResult[] {
   return out;
 }
 
+function deviceProblems(design: ArrayDesign, site: Site): CheckResult[] {
+  const d = design.moduleLevelDevice;
+  if (d?.shutdownOutputV === undefined || within(d.shutdownOutputV, SHUTDOWN_HOLD_V)) return [];
+  // The rapid shutdown check and the field record's expected string voltage are built from this figure.
+  return [makeCheck({
+    id: "data-sheet:moduleLevelDevice.shutdownOutputV", title: `${d.model} voltage while shut down`, status: "warn", value: d.shutdownOutputV, limit: null, unit: "V",
+    clause: `${COMMON_PRACTICE}; ${clause("rapidShutdown", site.necEdition)}`, edition: site.necEdition,
+    message: `The ${d.model} is entered as holding ${d.shutdownOutputV} V while shut down; such devices hold about 0.1 to 3 V, most about 1 V.`,
+    fix: "Check the device's shutdown output voltage on its data sheet.",
+    field: "moduleLevelDevice.shutdownOutputV",
+  })];
+}
+
 /** Each data-sheet figure the review leans on, against the range it can plausibly take; one passing result when all are plausible. */
 export function checkDataSheets(design: ArrayDesign, site: Site): CheckResult[] {
-  const problems = [...moduleProblems(design.module, site), ...design.inverters.flatMap((i) => inverterProblems(i, site))];
+  const problems = [...moduleProblems(design.module, site), ...design.inverters.flatMap((i) => inverterProblems(i, site)), ...deviceProblems(design, site)];
   if (problems.length > 0) return problems;
   return [
     makeCheck({

@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { checkDataSheets, checkStringVoltage, coldModuleVoc, reviewDesign } from "@/lib/engineering";
 import type { TempCoefficient } from "@/lib/engineering";
-import { coldSite, larkspurModule, northmereString, stringDesign } from "../fixtures";
+import { coldSite, larkspurModule, northmereString, quillonShutdown, stringDesign } from "../fixtures";
 
 const withCoeff = (vocTempCoeff: TempCoefficient) => stringDesign({ module: { ...larkspurModule, vocTempCoeff } });
 const problem = (design: ReturnType<typeof stringDesign>, id: string) => checkDataSheets(design, coldSite).find((c) => c.id === id);
@@ -81,5 +81,15 @@ describe("data-sheet plausibility: other figures the review uses (common practic
   test("an MPPT window above the maximum DC input warns", () => {
     const r = problem(stringDesign({ inverters: [{ ...northmereString, mpptMaxV: 650 }] }), "data-sheet:inverters.inv-1.mpptMaxV");
     expect(r).toMatchObject({ status: "warn" });
+  });
+
+  test.each([
+    [0.6, undefined],
+    [0.06, "warn"], // 0.6 typed with a slipped decimal
+    [12, "warn"],
+  ] as const)("a device holding %d V while shut down → %s", (shutdownOutputV, status) => {
+    const r = problem(stringDesign({ moduleLevelDevice: { ...quillonShutdown, shutdownOutputV } }), "data-sheet:moduleLevelDevice.shutdownOutputV");
+    if (status === undefined) expect(r).toBeUndefined();
+    else expect(r).toMatchObject({ status, field: "moduleLevelDevice.shutdownOutputV" });
   });
 });
