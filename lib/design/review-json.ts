@@ -32,7 +32,7 @@ export type ReviewJson = {
   ratings: { dcKw: number; acKw: number; dcAcRatio: number; annualKwh?: number };
   strings: { id: string; moduleVocColdV: number | null; stringVocColdV: number | null; maxCircuitCurrentA: number | null; minOcpdA: number | null; shutdownStringV?: number }[];
   inverterOutputs: { inverterId: string; continuousA: number; minOcpdA: number | null }[];
-  pointOfConnection: { method: "load-side" | "supply-side"; rule: "100%" | "120%" | "sum" | "service-rating" | null; maxPvBreakerA: number | null; status: CheckStatus };
+  pointOfConnection: { method: "load-side" | "supply-side"; rule: "100%" | "120%" | "sum" | "service-rating" | "feeder" | null; maxPvBreakerA: number | null; status: CheckStatus };
   runs: {
     id: string;
     circuits: number | null; // separate circuits sharing the run's raceway or cable
@@ -80,7 +80,7 @@ export function toReviewJson(design: Design, site: Site, result: ReviewResult, {
       const continuousA = inv.quantity * inv.acOutputCurrentA;
       return { inverterId: inv.id, continuousA: round(continuousA), minOcpdA: figure(() => requiredOcpdA(continuousA, { edition: site.necEdition })) };
     }),
-    pointOfConnection: pointOfConnection(design, result, kept),
+    pointOfConnection: pointOfConnection(design, site, result, kept),
     runs: design.runs.map((run) => runFigures(design, site, run, kept)),
     checks: kept.map(toCheckJson),
     labels: result.labels.map((l) => ({ codeRef: l.clause, title: l.title, text: l.text, prescribedWording: l.prescribed, explanation: l.explanation, placement: l.placement, values: l.values })),
@@ -111,9 +111,12 @@ function stringFigures(design: Design, site: Site, s: PvString): ReviewJson["str
   };
 }
 
-function pointOfConnection(design: Design, result: ReviewResult, checks: CheckResult[]): ReviewJson["pointOfConnection"] {
+function pointOfConnection(design: Design, site: Site, result: ReviewResult, checks: CheckResult[]): ReviewJson["pointOfConnection"] {
   const s = design.service;
-  const rule = s.connection === "supply-side" ? "service-rating" : (governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design)))?.rule ?? null);
+  const rule =
+    s.connection === "supply-side" ? "service-rating"
+    : s.loadSideAt === "feeder" ? "feeder"
+    : (governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design), { isDwelling: site.isDwelling }))?.rule ?? null);
   const status = worstStatus(checks.filter((c) => CONNECTION_CHECKS.includes(c.id)).map((c) => c.status));
   return { method: s.connection, rule, maxPvBreakerA: result.summary.largestPvBreakerA, status };
 }

@@ -1,5 +1,5 @@
 import { makeCheck, round, worstStatus } from "./check-result";
-import { evaluateLoadSideRules, largestPvBreakerA } from "./checks/busbar-rules";
+import { evaluateLoadSideRules, feedThroughLimitsToFullRating, largestPvBreakerA } from "./checks/busbar-rules";
 import { checkInverterInputCurrent, runMaxCurrentA, stringMaxCurrentA } from "./checks/circuit-current";
 import { checkConductorAmpacity, checkCurrentCarryingCount } from "./checks/conductor-ampacity";
 import { checkConduitFill } from "./checks/conduit-fill";
@@ -36,7 +36,7 @@ export interface ReviewSummary {
   annualProductionKwh: number | null; // null without peak sun hours
   maxDcVoltageV: number | null; // null when no DC string leaves the modules
   maxDcCircuitCurrentA: number | null;
-  largestPvBreakerA: number | null; // load side with a main breaker only
+  largestPvBreakerA: number | null; // load side on a busbar with a main breaker only
 }
 
 export interface ReviewResult {
@@ -143,8 +143,8 @@ function summarize(design: Design, site: Site, checks: CheckResult[]): ReviewSum
     maxDcVoltageV: stringVoltages.length > 0 ? Math.max(...stringVoltages) : null,
     maxDcCircuitCurrentA: maxDcCurrentA(design),
     largestPvBreakerA:
-      s.connection === "load-side" && s.mainBreakerA !== null
-        ? largestPvBreakerA(s.busbarA, s.mainBreakerA, s.pvBreakerAtOppositeEnd ? "120%" : "100%")
+      s.connection === "load-side" && s.mainBreakerA !== null && s.loadSideAt !== "feeder"
+        ? largestPvBreakerA(s.busbarA, s.mainBreakerA, s.pvBreakerAtOppositeEnd && !feedThroughLimitsToFullRating(s) ? "120%" : "100%")
         : null,
   };
 }

@@ -211,3 +211,14 @@ describe("reviewDocument never throws for any JSON", () => {
     );
   });
 });
+
+describe("reviewDocument: where the connection lands", () => {
+  it("a connection on a feeder answers with the feeder rule and no busbar breaker limit", () => {
+    const doc = exampleDocument();
+    doc.service = { ...doc.service, loadSideAt: "feeder", feeder: { ampacityA: 250, ocpdA: 200 } };
+    const r = review(doc);
+    // 200 A device + 1.25 × 32 A = 240 A ≤ 250 A (705.12(B)(1), 2020; from memory)
+    expect(r.pointOfConnection).toEqual({ method: "load-side", rule: "feeder", maxPvBreakerA: null, status: "pass" });
+    expect(check(r, "feeder-connection")).toMatchObject({ status: "pass", value: 250, limit: 240, codeRef: "NEC 2020 705.12(B)(1)" });
+  });
+});
