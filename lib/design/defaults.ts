@@ -4,6 +4,32 @@ type ServiceFacts = { serviceVoltageV: number | null; servicePhases: number | nu
 
 const str = (v: number | null | undefined) => (v === null || v === undefined ? "" : String(v));
 
+/** The service step's less common entries, blank until the design needs them. */
+export const BLANK_SERVICE_DETAILS = {
+  panelFeed: "end",
+  loadSideAt: "busbar",
+  feederAmpacityA: "",
+  feederOcpdA: "",
+  feederLoadSideOcpdA: "",
+  feederTapAmpacityA: "",
+  feederAtOppositeEnd: false,
+  supplyConductorSize: "",
+  supplyConductorMaterial: "",
+  supplyTapLengthFt: "",
+  serviceConductorSize: "",
+  serviceConductorMaterial: "",
+  pvDisconnectKind: "pv-breaker",
+  pvDisconnectRatingA: "",
+  pvDisconnectVoltageV: "",
+  pvDisconnectAccessible: "",
+  rsdInitiatorKind: "",
+  rsdInitiatorOutside: "",
+  gecSize: "",
+  gecMaterial: "",
+  gecElectrode: "",
+  combinerBusbarA: "",
+} satisfies Partial<DesignFormValues["service"]>;
+
 /** A blank design for a project, prefilled from what the project already knows about its service. */
 export function newDesignDraft(project: ServiceFacts): DesignFormValues {
   return {
@@ -24,17 +50,18 @@ export function newDesignDraft(project: ServiceFacts): DesignFormValues {
       otherBreakersA: "",
       serviceLocation: "",
       pvDisconnectLocation: "",
+      ...BLANK_SERVICE_DETAILS,
     },
     runs: [
       {
         lineId: "run-1", label: "Array to junction box", circuit: "dc:S1", lengthFt: "", material: "Cu", size: "10", stranding: "stranded",
-        insulation: "PV wire", insulationTempC: "90", terminalTempC: "75", ambientTempC: "", onRoof: true, roofClearanceIn: "1",
-        currentCarryingConductors: "2", racewayType: "none", tradeSize: "", ocpdA: "", egcSize: "10",
+        insulation: "PV wire", wireAreaIn2: "", insulationTempC: "90", terminalTempC: "", ambientTempC: "", onRoof: true, roofClearanceIn: "1",
+        currentCarryingConductors: "", arrangement: "", racewayType: "none", tradeSize: "", route: "outdoors", ocpdA: "", egcSize: "6",
       },
       {
         lineId: "run-2", label: "Inverter to service panel", circuit: "ac:all", lengthFt: "", material: "Cu", size: "8", stranding: "stranded",
-        insulation: "THWN-2", insulationTempC: "90", terminalTempC: "75", ambientTempC: "", onRoof: false, roofClearanceIn: "",
-        currentCarryingConductors: "2", racewayType: "EMT", tradeSize: "3/4", ocpdA: "", egcSize: "10",
+        insulation: "THWN-2", wireAreaIn2: "", insulationTempC: "90", terminalTempC: "", ambientTempC: "", onRoof: false, roofClearanceIn: "",
+        currentCarryingConductors: "", arrangement: "", racewayType: "EMT", tradeSize: "3/4", route: "", ocpdA: "", egcSize: "10",
       },
     ],
     site: { isDwelling: true, peakSunHours: "" },

@@ -12,7 +12,6 @@ import {
   type NecEdition,
   type PvModule,
   type PvString,
-  type RacewayWire,
   type RoofPlane,
   type ServicePanel,
   type Site,
@@ -40,10 +39,6 @@ export function parallelStringIds(lineId: string, parallel: number): string[] {
   return parallel === 1 ? [lineId] : Array.from({ length: parallel }, (_, k) => `${lineId}.${k + 1}`);
 }
 
-/** What a conduit holds when the document does not list its wires: the current-carrying conductors and the EGC. */
-export function defaultRacewayWires(size: ConductorSize, currentCarrying: number, egcSize?: ConductorSize): RacewayWire[] {
-  return [{ size, count: currentCarrying }, ...(egcSize ? [{ size: egcSize, count: 1 }] : [])];
-}
 
 /**
  * A parsed design document as the review engine's input. Problems zod cannot see
@@ -81,6 +76,10 @@ export function documentToEngine(doc: Doc): EngineFromDocument {
     roofPlanes: toRoofPlanes(doc, strings.list, inverters),
     cellTempRiseC: doc.cellTempRiseC,
     attachmentRatedLoadLb: doc.attachmentRatedLoadLb,
+    pvDisconnect: doc.pvDisconnect,
+    rapidShutdownInitiator: doc.rapidShutdownInitiator,
+    groundingElectrodeConductor: doc.groundingElectrodeConductor && { ...doc.groundingElectrodeConductor, size: sizeFromLabel(doc.groundingElectrodeConductor.size) },
+    acCombiner: doc.acCombiner,
   };
   return { ok: true, design, site, sources: { moduleIndex, deviceIndex, roofPlanesGiven } };
 }
@@ -158,6 +157,7 @@ function toModule(m: Doc["modules"][number], index: number, needsRoofData: boole
     vmpTempCoeff: coefficient(m.vmpTempCoeffPctPerC, m.vmpTempCoeffVPerC),
     pmaxTempCoeffPctPerC: m.pmaxTempCoeffPctPerC,
     maxSeriesFuseA: m.maxSeriesFuseA,
+    maxSystemVoltageV: m.maxSystemVoltageV,
     lengthIn: lengthIn ?? UNUSED_FIGURE,
     widthIn: widthIn ?? UNUSED_FIGURE,
     weightLb: m.weightLb ?? UNUSED_FIGURE,
@@ -188,6 +188,10 @@ function toInverter(inv: Doc["inverters"][number], index: number, isDwelling: bo
     maxInputIscA: inv.maxInputCurrentA,
     regulatedStringV: inv.regulatedStringV,
     maxStringPowerW: inv.maxStringPowerW,
+    terminalTempC: inv.terminalC,
+    dcArcFaultProtection: inv.dcArcFaultProtection,
+    dcGroundFaultProtection: inv.dcGroundFaultProtection,
+    dcDisconnect: inv.dcDisconnect,
   };
 }
 
@@ -200,6 +204,7 @@ function toDevice(o: Doc["optimizers"][number]): ModuleLevelDevice {
     maxInputIscA: o.maxInputCurrentA,
     maxOutputCurrentA: o.maxOutputCurrentA,
     shutdownOutputV: o.shutdownOutputV,
+    maxSystemVoltageV: o.maxSystemVoltageV,
   };
 }
 
@@ -228,31 +233,39 @@ function toStrings(doc: Doc, report: Report): Strings {
 function toCircuit(doc: Doc, run: Doc["runs"][number], at: string, strings: Strings, report: Report): CircuitRef | null {
   if (run.circuit === "dc-string") {
     if (run.inverterId !== undefined) report(`${at}.inverterId`, "A dc-string run carries the string named by stringId; leave inverterId out");
-    const ids = run.stringId === undefined ? undefined : strings.idsByLine.get(run.stringId);
-    if (!ids) report(`${at}.stringId`, run.stringId === undefined ? "Name the string this run carries" : `No string with id "${run.stringId}" is in strings`);
-    return ids ? { kind: "dc-strings", stringIds: ids } : null;
+    if (run.stringId !== undefined && run.stringIds !== undefined) report(`${at}.stringIds`, "Give stringId for one string or stringIds for several, not both");
+    const lines = run.stringIds ?? (run.stringId === undefined ? [] : [run.stringId]);
+    if (lines.length === 0) report(`${at}.stringId`, "Name the string this run carries (stringId), or the strings sharing it (stringIds)");
+    const ids: string[] = [];
+    lines.forEach((line, j) => {
+      const found = strings.idsByLine.get(line);
+      if (!found) report(run.stringIds ? `${at}.stringIds[${j}]` : `${at}.stringId`, `No string with id "${line}" is in strings`);
+      else ids.push(...found);
+    });
+    return ids.length > 0 ? { kind: "dc-strings", stringIds: ids, combined: run.combined ?? false } : null;
   }
-  if (run.stringId !== undefined) report(`${at}.stringId`, `Only dc-string runs name a string; a ${run.circuit} run names an inverter, or none for all of them`);
+  if (run.stringId !== undefined || run.stringIds !== undefined) report(`${at}.${run.stringId !== undefined ? "stringId" : "stringIds"}`, `Only dc-string runs name strings; a ${run.circuit} run names an inverter, or none for all of them`);
   if (run.inverterId !== undefined && !doc.inverters.some((i) => i.id === run.inverterId)) {
     report(`${at}.inverterId`, `No inverter with id "${run.inverterId}" is in inverters`);
     return null;
   }
   if (run.circuit === "ac-output") {
     const ids = run.inverterId === undefined ? doc.inverters.map((i) => i.id) : [run.inverterId];
-    return { kind: "ac-output", sources: ids.map((inverterId) => ({ inverterId })) };
+    return { kind: "ac-output", sources: ids.map((inverterId) => ({ inverterId })), combined: run.combined ?? true };
   }
   const stringIds = strings.list.filter((s) => run.inverterId === undefined || s.inverterId === run.inverterId).map((s) => s.id);
   if (stringIds.length === 0) {
     report(run.inverterId === undefined ? `${at}.circuit` : `${at}.inverterId`, run.inverterId === undefined ? "A dc-output run carries strings, but the design has none" : `No string feeds inverter "${run.inverterId}"`);
     return null;
   }
-  return { kind: "dc-strings", stringIds };
+  return { kind: "dc-strings", stringIds, combined: run.combined ?? true };
 }
 
 function toRun(doc: Doc, run: Doc["runs"][number], index: number, strings: Strings, report: Report): ConductorRun {
   const at = `runs[${index}]`;
   const circuit = toCircuit(doc, run, at, strings, report);
   if (run.insulationC === 60) report(`${at}.insulationC`, "The review's correction tables cover 75 °C and 90 °C insulation; 60 °C insulation cannot be checked");
+  if (run.mcCable && run.conduit) report(`${at}.mcCable`, "A run is in a conduit or in Type MC cable, not both");
   const size = sizeFromLabel(run.size);
   const egc = run.egc ? { size: sizeFromLabel(run.egc.size), material: run.egc.material ?? run.material } : undefined;
   const c = run.conduit;
@@ -273,8 +286,11 @@ function toRun(doc: Doc, run: Doc["runs"][number], index: number, strings: Strin
     raceway: c && {
       type: c.type,
       tradeSize: c.tradeSize,
-      wires: c.wires?.map((w) => ({ size: sizeFromLabel(w.size), count: w.count, areaIn2: w.areaIn2 })) ?? defaultRacewayWires(size, run.currentCarrying, egc?.size),
+      wires: c.wires?.map((w) => ({ size: sizeFromLabel(w.size), count: w.count, insulation: w.insulation || undefined, areaIn2: w.areaIn2 })),
     },
+    wireAreaIn2: run.wireAreaIn2,
+    mcCable: run.mcCable,
+    insideBuilding: run.insideBuilding,
   };
 }
 
@@ -304,6 +320,11 @@ function toService(s: Doc["service"], inverters: Inverter[], report: Report): Se
     pvBreakerAtOppositeEnd: s.pvBreakerOppositeEnd ?? false,
     otherBreakersA: s.otherBreakersA,
     serviceConductorAmpacityA: s.serviceConductorAmpacityA,
+    serviceConductor: s.serviceConductor && { size: sizeFromLabel(s.serviceConductor.size), material: s.serviceConductor.material },
+    panelFeed: s.panelFeed,
+    loadSideAt: s.loadSideAt,
+    feeder: s.feeder,
+    supplySideConductors: s.supplySideConductors && { ...s.supplySideConductors, size: sizeFromLabel(s.supplySideConductors.size) },
     serviceLocation: s.serviceLocation || undefined,
     pvDisconnectLocation: s.pvDisconnectLocation || undefined,
   };

@@ -52,6 +52,7 @@ const Module = z.strictObject({
   vmpTempCoeffVPerC: optNum("The Vmp coefficient", r(-1, 0, "V/°C")),
   pmaxTempCoeffPctPerC: optNum("The Pmax coefficient", r(-2, 0, "%/°C")),
   maxSeriesFuseA: optNum("The maximum series fuse", r(1, 100, "A")),
+  maxSystemVoltageV: optNum("The maximum system voltage", r(100, 2000, "V")), // the module's listing; unknown → a warning
   weightLb: optNum("The module weight", r(1, 200, "lb")),
   areaFt2: optNum("The module area", r(1, 100, "ft²")),
   lengthIn: optNum("The module length", r(10, 150, "in")),
@@ -74,6 +75,10 @@ const Inverter = z.strictObject({
   maxInputCurrentA: optNum("The maximum input current", r(0.1, 500, "A")),
   regulatedStringV: optNum("The regulated string voltage", r(10, 2000, "V")),
   maxStringPowerW: optNum("The maximum power per string", r(1, 100_000, "W")),
+  terminalC: oneOfNumbers([60, 75, 90]).optional(), // marked temperature rating of its terminals; unknown → 110.14(C)
+  dcArcFaultProtection: flag("dcArcFaultProtection"), // 690.11; unknown → a warning where it is needed
+  dcGroundFaultProtection: flag("dcGroundFaultProtection"), // 690.41(B)
+  dcDisconnect: flag("dcDisconnect"), // an integrated DC disconnect (690.15)
 });
 
 const Optimizer = z.strictObject({
@@ -86,6 +91,7 @@ const Optimizer = z.strictObject({
   maxInputCurrentA: optNum("The maximum input current", r(0.1, 100, "A")),
   maxOutputCurrentA: optNum("The maximum output current", r(0.1, 100, "A")),
   shutdownOutputV: optNum("The voltage held in shutdown", r(0, 30, "V")), // default 1 V (common practice)
+  maxSystemVoltageV: optNum("The maximum system voltage", r(50, 2000, "V")),
 });
 
 const PvString = z.strictObject({
@@ -98,6 +104,16 @@ const PvString = z.strictObject({
   parallel: whole("Strings in parallel", r(1, 50)),
 });
 
+const ConductorOf = z.strictObject({ size, material: oneOf(["Cu", "Al"]) });
+
+const Feeder = z.strictObject({
+  ampacityA: optNum("The feeder ampacity", r(1, 6000, "A")),
+  ocpdA: optNum("The feeder's overcurrent device", r(1, 6000, "A")),
+  atOppositeEnd: flag("atOppositeEnd"),
+  loadSideOcpdA: optNum("The load-side overcurrent device", r(1, 6000, "A")),
+  tapAmpacityA: optNum("The smallest tap's ampacity", r(1, 6000, "A")),
+});
+
 const Service = z.strictObject({
   nominalV: num("The service voltage", r(100, 1000, "V")),
   phases: oneOfNumbers([1, 3]),
@@ -108,28 +124,39 @@ const Service = z.strictObject({
   pvBreakerOppositeEnd: flag("pvBreakerOppositeEnd"),
   otherBreakersA: list(num("A breaker rating", r(1, 4000, "A")), 120, "breakers").optional(),
   serviceConductorAmpacityA: optNum("The service conductor ampacity", r(1, 6000, "A")),
+  serviceConductor: ConductorOf.optional(), // the largest ungrounded service-entrance conductor (Table 250.66)
+  panelFeed: oneOf(["end", "center"]).optional(), // default end-fed
+  loadSideAt: oneOf(["busbar", "feeder", "feed-through"]).optional(), // default the busbar
+  feeder: Feeder.optional(),
+  supplySideConductors: z.strictObject({ size, material: oneOf(["Cu", "Al"]), lengthToOcpdFt: optNum("The length to the overcurrent device", r(0, 500, "ft")) }).optional(),
   serviceLocation: text(120),
   pvDisconnectLocation: text(120),
 });
 
-const Wire = z.strictObject({ size, count: whole("The wire count", r(1, 100)), areaIn2: optNum("The wire area", r(0.001, 5, "in²")) });
+const Wire = z.strictObject({ size, count: whole("The wire count", r(1, 100)), insulation: text(30), areaIn2: optNum("The wire area", r(0.001, 5, "in²")) });
 
 const Run = z.strictObject({
   id,
   label: text(60),
   circuit: oneOf(["dc-string", "dc-output", "ac-output"]),
   stringId: id.optional(), // dc-string: the string (all its parallel copies)
+  stringIds: list(id, 50, "strings").min(1, "Name at least one string").optional(), // dc-string: several strings sharing the raceway
   inverterId: id.optional(), // dc-output: that inverter's strings (default all); ac-output: that inverter (default all)
+  // Strings keep their own circuits in a run unless joined in parallel before it; inverter outputs leave a combiner as one.
+  combined: flag("combined"), // default: false for dc-string, true for dc-output and ac-output
   lengthFt: num("The length", r(0, 5000, "ft")),
   material: oneOf(["Cu", "Al"]),
   size,
   stranded: z.boolean({ error: "stranded must be true or false" }),
   insulation: text(30), // e.g. "THWN-2"; XHHW-2 is exempt from the rooftop adder
   insulationC: oneOfNumbers([60, 75, 90]),
-  terminalC: oneOfNumbers([60, 75, 90]),
+  terminalC: oneOfNumbers([60, 75, 90]).optional(), // default: the inverter's marked rating, else 110.14(C)
   ambientC: num("The ambient temperature", r(-60, 80, "°C")),
   aboveRoofIn: optNum("The height above the roof", r(0, 120, "in")), // only for raceway or cable in sunlight on a roof
-  currentCarrying: whole("Current-carrying conductors", r(1, 60)),
+  currentCarrying: optWhole("Current-carrying conductors", r(1, 60)), // default (and least): what the run's circuits put in it
+  wireAreaIn2: optNum("The wire area", r(0.001, 5, "in²")), // one conductor, from its data sheet, for insulation Table 5 does not list
+  mcCable: flag("mcCable"), // Type MC cable (metal armor) instead of a raceway
+  insideBuilding: flag("insideBuilding"), // passes inside a building (690.31); unknown → a warning for DC runs
   conduit: z
     .strictObject({
       type: oneOf(["EMT", "PVC-40"]),
@@ -153,6 +180,25 @@ const RoofPlane = z.strictObject({
 
 const VoltageDropPath = z.strictObject({ id, label: text(60), runIds: list(id, 20, "runs").min(1, "Name at least one run") });
 
+const PvDisconnect = z.strictObject({
+  kind: oneOf(["pv-breaker", "switch", "fused-switch"]),
+  ratingA: optNum("The disconnect's ampere rating", r(1, 6000, "A")),
+  voltageRatingV: optNum("The disconnect's voltage rating", r(100, 2000, "V")),
+  readilyAccessible: flag("readilyAccessible"),
+});
+
+const RapidShutdownInitiator = z.strictObject({
+  kind: oneOf(["service-disconnect", "pv-disconnect", "switch"]),
+  outsideReadilyAccessible: flag("outsideReadilyAccessible"),
+});
+
+const GroundingElectrodeConductor = z.strictObject({ size, material: oneOf(["Cu", "Al"]), electrode: oneOf(["rod-pipe-plate", "other"]) });
+
+const AcCombiner = z.strictObject({
+  busbarA: optNum("The combiner's busbar rating", r(1, 1200, "A")),
+  breakersA: list(num("A breaker rating", r(1, 1200, "A")), 40, "breakers").optional(), // default: the branch runs' devices
+});
+
 export const DesignDocument = z.strictObject(
   {
     codeEdition: oneOf(CODE_EDITIONS),
@@ -169,6 +215,10 @@ export const DesignDocument = z.strictObject(
     attachmentRatedLoadLb: optNum("The attachment rating", r(1, 100_000, "lb")),
     cellTempRiseC: optNum("The cell temperature rise", r(0, 60, "°C")),
     paths: list(VoltageDropPath, 20, "paths").optional(),
+    pvDisconnect: PvDisconnect.optional(),
+    rapidShutdownInitiator: RapidShutdownInitiator.optional(),
+    groundingElectrodeConductor: GroundingElectrodeConductor.optional(),
+    acCombiner: AcCombiner.optional(),
   },
   { error: "The design document must be a JSON object" },
 );

@@ -1,7 +1,5 @@
-import { DesignInputError, sizeLabel, type ConductorRun, type Design, type Inverter, type ModuleLevelDevice, type PvModule, type PvString, type Site } from "@/lib/engineering";
-import { DEFAULT_TERMINAL_TEMP_C, defaultCurrentCarrying } from "@/lib/engineering/checks/conductor-ampacity";
+import { sizeLabel, type ConductorRun, type Design, type Inverter, type ModuleLevelDevice, type PvModule, type PvString, type Site } from "@/lib/engineering";
 import type { DesignDocument } from "./document";
-import { defaultRacewayWires } from "./document-to-engine";
 import type { DesignProblem } from "./to-engine";
 
 type Doc = DesignDocument;
@@ -47,6 +45,10 @@ export function engineToDocument(design: Design, site: Site): DocumentFromEngine
     attachmentRatedLoadLb: design.attachmentRatedLoadLb,
     cellTempRiseC: design.cellTempRiseC,
     paths: design.paths?.map((p) => ({ id: p.id, label: p.label, runIds: p.runIds })),
+    pvDisconnect: design.pvDisconnect,
+    rapidShutdownInitiator: design.rapidShutdownInitiator,
+    groundingElectrodeConductor: design.groundingElectrodeConductor && { ...design.groundingElectrodeConductor, size: sizeLabel(design.groundingElectrodeConductor.size) },
+    acCombiner: design.acCombiner && { busbarA: design.acCombiner.busbarA, breakersA: design.acCombiner.breakersA && [...design.acCombiner.breakersA] },
   };
   return problems.length > 0 ? { ok: false, problems } : { ok: true, document };
 }
@@ -87,6 +89,7 @@ function fromModule(m: PvModule): Doc["modules"][number] {
     vmpTempCoeffVPerC: vmp?.unit === "V/C" ? vmp.value : undefined,
     pmaxTempCoeffPctPerC: m.pmaxTempCoeffPctPerC,
     maxSeriesFuseA: m.maxSeriesFuseA,
+    maxSystemVoltageV: m.maxSystemVoltageV,
     weightLb: m.weightLb,
     // For readers of the document; lengthIn and widthIn, when both are given, are what the review uses.
     areaFt2: Math.round(((m.lengthIn * m.widthIn) / 144) * 100) / 100,
@@ -112,11 +115,18 @@ function fromInverter(inv: Inverter): Doc["inverters"][number] {
     maxInputCurrentA: inv.maxInputIscA,
     regulatedStringV: inv.regulatedStringV,
     maxStringPowerW: inv.maxStringPowerW,
+    terminalC: inv.terminalTempC,
+    dcArcFaultProtection: inv.dcArcFaultProtection,
+    dcGroundFaultProtection: inv.dcGroundFaultProtection,
+    dcDisconnect: inv.dcDisconnect,
   };
 }
 
 function fromDevice(d: ModuleLevelDevice): Doc["optimizers"][number] {
-  return { id: DEVICE_ID, kind: d.kind, maker: d.maker, model: d.model, maxInputV: d.maxInputV, maxInputCurrentA: d.maxInputIscA, maxOutputCurrentA: d.maxOutputCurrentA, shutdownOutputV: d.shutdownOutputV };
+  return {
+    id: DEVICE_ID, kind: d.kind, maker: d.maker, model: d.model, maxInputV: d.maxInputV, maxInputCurrentA: d.maxInputIscA,
+    maxOutputCurrentA: d.maxOutputCurrentA, shutdownOutputV: d.shutdownOutputV, maxSystemVoltageV: d.maxSystemVoltageV,
+  };
 }
 
 function fromService(s: Design["service"]): Doc["service"] {
@@ -130,41 +140,49 @@ function fromService(s: Design["service"]): Doc["service"] {
     pvBreakerOppositeEnd: s.pvBreakerAtOppositeEnd,
     otherBreakersA: s.otherBreakersA,
     serviceConductorAmpacityA: s.serviceConductorAmpacityA,
+    serviceConductor: s.serviceConductor && { size: sizeLabel(s.serviceConductor.size), material: s.serviceConductor.material },
+    panelFeed: s.panelFeed,
+    loadSideAt: s.loadSideAt,
+    feeder: s.feeder,
+    supplySideConductors: s.supplySideConductors && { ...s.supplySideConductors, size: sizeLabel(s.supplySideConductors.size) },
     serviceLocation: s.serviceLocation,
     pvDisconnectLocation: s.pvDisconnectLocation,
   };
 }
 
-type CircuitFields = Pick<Doc["runs"][number], "circuit" | "stringId" | "inverterId">;
+type CircuitFields = Pick<Doc["runs"][number], "circuit" | "stringId" | "stringIds" | "inverterId" | "combined">;
 
-/** The document names one string line, one inverter's strings, or all of them; other sets cannot be written. */
+/** The document names string lines, one inverter's strings, or all of them; other sets cannot be written. */
 function fromCircuit(design: Design, run: ConductorRun, lines: StringLine[]): CircuitFields | null {
   if (run.circuit.kind === "dc-strings") {
     const ids = run.circuit.stringIds;
-    const line = lines.find((l) => sameJson(l.ids, ids));
-    if (line) return { circuit: "dc-string", stringId: line.id };
-    if (sameJson(ids, design.strings.map((s) => s.id))) return { circuit: "dc-output" };
+    const combined = run.circuit.combined ?? false;
+    // Whole string lines, in order: one line is stringId, several are stringIds.
+    const picked: StringLine[] = [];
+    for (let at = 0; at < ids.length; ) {
+      const line = lines.find((l) => l.ids[0] === ids[at] && sameJson(l.ids, ids.slice(at, at + l.ids.length)));
+      if (!line) break;
+      picked.push(line);
+      at += line.ids.length;
+    }
+    if (picked.reduce((n, l) => n + l.ids.length, 0) === ids.length) {
+      return picked.length === 1 ? { circuit: "dc-string", stringId: picked[0]!.id, combined } : { circuit: "dc-string", stringIds: picked.map((l) => l.id), combined };
+    }
+    if (sameJson(ids, design.strings.map((s) => s.id))) return { circuit: "dc-output", combined };
     const inverter = design.inverters.find((inv) => sameJson(ids, design.strings.filter((s) => s.inverterId === inv.id).map((s) => s.id)));
-    return inverter ? { circuit: "dc-output", inverterId: inverter.id } : null;
+    return inverter ? { circuit: "dc-output", inverterId: inverter.id, combined } : null;
   }
   const sources = run.circuit.sources;
+  const combined = run.circuit.combined ?? true;
   if (sources.some((s) => s.units !== undefined)) return null;
-  if (sameJson(sources.map((s) => s.inverterId), design.inverters.map((i) => i.id))) return { circuit: "ac-output" };
-  return sources.length === 1 ? { circuit: "ac-output", inverterId: sources[0]!.inverterId } : null;
+  if (sameJson(sources.map((s) => s.inverterId), design.inverters.map((i) => i.id))) return { circuit: "ac-output", combined };
+  return sources.length === 1 ? { circuit: "ac-output", inverterId: sources[0]!.inverterId, combined } : null;
 }
 
 function fromRun(design: Design, site: Site, run: ConductorRun, lines: StringLine[], report: (message: string) => void): Doc["runs"][number] {
   const circuit = fromCircuit(design, run, lines);
-  if (!circuit) report(`Run "${run.label}" carries strings or inverter units a design document cannot name: one string, one inverter's strings or output, or all of them`);
-  let currentCarrying = run.currentCarryingConductors;
-  try {
-    currentCarrying ??= defaultCurrentCarrying(design, run);
-  } catch (err) {
-    if (!(err instanceof DesignInputError)) throw err;
-    report(err.message);
-  }
+  if (!circuit) report(`Run "${run.label}" carries strings or inverter units a design document cannot name: whole strings, one inverter's strings or output, or all of them`);
   const { conductor: c, raceway, egc } = run;
-  const ccc = currentCarrying ?? 1;
   return {
     id: run.id,
     label: run.label,
@@ -175,19 +193,21 @@ function fromRun(design: Design, site: Site, run: ConductorRun, lines: StringLin
     stranded: (c.stranding ?? "stranded") === "stranded",
     insulation: c.insulation,
     insulationC: c.insulationTempC,
-    terminalC: run.terminalTempC ?? DEFAULT_TERMINAL_TEMP_C,
+    terminalC: run.terminalTempC,
     ambientC: run.ambientTempC ?? site.highDesignTempC,
     aboveRoofIn: run.roofClearanceIn,
-    currentCarrying: ccc,
+    currentCarrying: run.currentCarryingConductors,
     conduit: raceway && {
       type: raceway.type,
       tradeSize: raceway.tradeSize,
-      // Listed only when they differ from what the document assumes: the current-carrying conductors and the EGC.
-      wires: sameJson(raceway.wires, defaultRacewayWires(c.size, ccc, egc?.size)) ? undefined : raceway.wires.map((w) => ({ size: sizeLabel(w.size), count: w.count, areaIn2: w.areaIn2 })),
+      wires: raceway.wires?.map((w) => ({ size: sizeLabel(w.size), count: w.count, insulation: w.insulation, areaIn2: w.areaIn2 })),
     },
     ocpdA: run.ocpdA,
     ocpdIsFuse: run.ocpdIsFuse,
     egc: egc && { size: sizeLabel(egc.size), material: egc.material },
     conductorTempC: run.conductorTempC,
+    wireAreaIn2: run.wireAreaIn2,
+    mcCable: run.mcCable,
+    insideBuilding: run.insideBuilding,
   };
 }

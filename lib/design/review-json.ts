@@ -1,11 +1,15 @@
 import {
-  DesignInputError,
+  circuitConductorCount,
   coldModuleVoc,
+  egcRequirement,
   evaluateLoadSideRules,
+  evaluateRun,
   racewayFill,
   rapidShutdownMethod,
-  requiredEgcSize,
   requiredOcpdA,
+  runCircuits,
+  runRacewayWires,
+  unlessInputError,
   runVoltageDrop,
   shutdownStringVoltageV,
   sizeLabel,
@@ -19,8 +23,6 @@ import {
   type Site,
 } from "@/lib/engineering";
 import { round, worstStatus } from "@/lib/engineering/check-result";
-import { evaluateRun } from "@/lib/engineering/checks/conductor-ampacity";
-import { egcBasisA } from "@/lib/engineering/checks/egc";
 import { governingLoadSideRule } from "@/lib/engineering/checks/point-of-connection";
 import { totalInverterOutputA } from "@/lib/engineering/design-lookup";
 
@@ -30,10 +32,13 @@ export type ReviewJson = {
   ratings: { dcKw: number; acKw: number; dcAcRatio: number; annualKwh?: number };
   strings: { id: string; moduleVocColdV: number | null; stringVocColdV: number | null; maxCircuitCurrentA: number | null; minOcpdA: number | null; shutdownStringV?: number }[];
   inverterOutputs: { inverterId: string; continuousA: number; minOcpdA: number | null }[];
-  pointOfConnection: { method: "load-side" | "supply-side"; rule: "100%" | "120%" | "sum" | "service-rating" | null; maxPvBreakerA: number | null; status: CheckStatus };
+  pointOfConnection: { method: "load-side" | "supply-side"; rule: "100%" | "120%" | "sum" | "service-rating" | "feeder" | null; maxPvBreakerA: number | null; status: CheckStatus };
   runs: {
     id: string;
-    designCurrentA: number | null;
+    circuits: number | null; // separate circuits sharing the run's raceway or cable
+    currentCarrying: number | null; // current-carrying conductors the ampacity is adjusted for
+    terminalC: number | null; // the terminal temperature the conductors are sized at
+    designCurrentA: number | null; // per circuit
     requiredAmpacityA: number | null;
     correctedAmpacityA: number | null;
     voltageDropV: number | null;
@@ -42,24 +47,23 @@ export type ReviewJson = {
     fillPct?: number | null;
     status: CheckStatus;
   }[];
-  checks: { id: string; subject: string; codeRef: string; status: CheckStatus; value: number | null; limit: number | null; unit: string; message: string; fix?: string }[];
-  labels: { codeRef: string; title: string; values: Record<string, number> }[];
+  checks: { id: string; subject: string; codeRef: string; status: CheckStatus; value: number | null; limit: number | null; unit: string; message: string; fix?: string; field?: string }[];
+  labels: { codeRef: string; title: string; text: string; prescribedWording: boolean; explanation: string; placement: string; values: Record<string, number> }[];
 };
 
 // Checks that compare against roof planes; a document without roof planes has nothing for them to read.
 const ROOF_CHECK = /^(roof-dead-load|roof-attachment-load|input:roof):|^module-count$/;
-const RUN_CHECKS = ["ampacity-terminal", "ampacity-conditions", "ocpd-rating", "ocpd-protects", "egc", "voltage-drop", "conduit-fill", "input:run"];
-const CONNECTION_CHECKS = ["pv-breaker-size", "point-of-connection", "input:point-of-connection"];
+const RUN_CHECKS = [
+  "current-carrying-count", "ampacity-terminal", "ampacity-conditions", "ocpd-rating", "ocpd-protects", "egc", "voltage-drop", "conduit-fill",
+  "wiring-exposed", "wiring-inside", "egc-protection", "input:run",
+];
+const CONNECTION_CHECKS = [
+  "pv-breaker-size", "point-of-connection", "feeder-connection", "feeder-taps", "supply-side-conductors", "supply-side-ocpd-location", "ac-combiner-busbar",
+  "input:point-of-connection",
+];
 
-/** A figure the engine cannot compute for this input; the engine has already reported why as a failed check. */
-function figure<T>(compute: () => T): T | null {
-  try {
-    return compute();
-  } catch (err) {
-    if (err instanceof DesignInputError) return null;
-    throw err;
-  }
-}
+// A figure the engine cannot compute for this input is null; the engine has already reported why as a failed check.
+const figure = unlessInputError;
 
 /**
  * Shapes the engine's result as the API's review. Per-string and per-run figures come
@@ -74,17 +78,21 @@ export function toReviewJson(design: Design, site: Site, result: ReviewResult, {
     strings: design.strings.map((s) => stringFigures(design, site, s)),
     inverterOutputs: design.inverters.map((inv) => {
       const continuousA = inv.quantity * inv.acOutputCurrentA;
-      return { inverterId: inv.id, continuousA: round(continuousA), minOcpdA: figure(() => requiredOcpdA(continuousA)) };
+      return { inverterId: inv.id, continuousA: round(continuousA), minOcpdA: figure(() => requiredOcpdA(continuousA, { edition: site.necEdition })) };
     }),
-    pointOfConnection: pointOfConnection(design, result, kept),
+    pointOfConnection: pointOfConnection(design, site, result, kept),
     runs: design.runs.map((run) => runFigures(design, site, run, kept)),
     checks: kept.map(toCheckJson),
-    labels: result.labels.map((l) => ({ codeRef: l.clause, title: l.title, values: l.values })),
+    labels: result.labels.map((l) => ({ codeRef: l.clause, title: l.title, text: l.text, prescribedWording: l.prescribed, explanation: l.explanation, placement: l.placement, values: l.values })),
   };
 }
 
 function toCheckJson(c: CheckResult): ReviewJson["checks"][number] {
-  return { id: c.id, subject: c.title, codeRef: c.clause, status: c.status, value: c.value, limit: c.limit, unit: c.unit, message: c.message, ...(c.fix === undefined ? {} : { fix: c.fix }) };
+  return {
+    id: c.id, subject: c.title, codeRef: c.clause, status: c.status, value: c.value, limit: c.limit, unit: c.unit, message: c.message,
+    ...(c.fix === undefined ? {} : { fix: c.fix }),
+    ...(c.field === undefined ? {} : { field: c.field }),
+  };
 }
 
 function stringFigures(design: Design, site: Site, s: PvString): ReviewJson["strings"][number] {
@@ -98,14 +106,17 @@ function stringFigures(design: Design, site: Site, s: PvString): ReviewJson["str
     moduleVocColdV: moduleVocV === null ? null : round(moduleVocV),
     stringVocColdV: stringV === null ? null : round(stringV),
     maxCircuitCurrentA: maxA === null ? null : round(maxA),
-    minOcpdA: maxA === null ? null : figure(() => requiredOcpdA(maxA, { fuse: true })),
+    minOcpdA: maxA === null ? null : figure(() => requiredOcpdA(maxA, { fuse: true, edition: site.necEdition })),
     ...(rapidShutdownMethod(design) === "module-level-devices" ? { shutdownStringV: round(shutdownStringVoltageV(design, s)) } : {}),
   };
 }
 
-function pointOfConnection(design: Design, result: ReviewResult, checks: CheckResult[]): ReviewJson["pointOfConnection"] {
+function pointOfConnection(design: Design, site: Site, result: ReviewResult, checks: CheckResult[]): ReviewJson["pointOfConnection"] {
   const s = design.service;
-  const rule = s.connection === "supply-side" ? "service-rating" : (governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design)))?.rule ?? null);
+  const rule =
+    s.connection === "supply-side" ? "service-rating"
+    : s.loadSideAt === "feeder" ? "feeder"
+    : (governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design), { isDwelling: site.isDwelling }))?.rule ?? null);
   const status = worstStatus(checks.filter((c) => CONNECTION_CHECKS.includes(c.id)).map((c) => c.status));
   return { method: s.connection, rule, maxPvBreakerA: result.summary.largestPvBreakerA, status };
 }
@@ -115,18 +126,23 @@ function isCheckOfRun(check: CheckResult, runId: string): boolean {
 }
 
 function runFigures(design: Design, site: Site, run: ConductorRun, checks: CheckResult[]): ReviewJson["runs"][number] {
-  const e = figure(() => evaluateRun(design, site, run).evaluation);
+  const evaluated = figure(() => evaluateRun(design, site, run));
+  const e = evaluated?.evaluation ?? null;
   const drop = figure(() => runVoltageDrop(design, run));
-  const minEgc = figure(() => sizeLabel(requiredEgcSize(egcBasisA(design, run).ocpdA, run.egc?.material ?? "Cu", run.conductor.size, run.conductor.material)));
+  const minEgc = figure(() => sizeLabel(egcRequirement(design, site, run, run.egc?.material ?? "Cu").required));
+  const raceway = run.raceway;
   return {
     id: run.id,
+    circuits: figure(() => runCircuits(design, run).length),
+    currentCarrying: evaluated ? evaluated.conditions.currentCarryingConductors : figure(() => circuitConductorCount(design, run)),
+    terminalC: evaluated ? evaluated.terminal.tempC : null,
     designCurrentA: e && round(e.maxCurrentA),
     requiredAmpacityA: e && round(e.requiredUnconditionedA),
     correctedAmpacityA: e && round(e.correctedAmpacityA),
     voltageDropV: drop && round(drop.dropV),
     voltageDropPct: drop && round(drop.percent),
     minEgc,
-    ...(run.raceway ? { fillPct: figure(() => round(racewayFill(run.raceway!).fillPercent)) } : {}),
+    ...(raceway ? { fillPct: figure(() => round(racewayFill({ type: raceway.type, tradeSize: raceway.tradeSize, wires: runRacewayWires(design, run) }).fillPercent)) } : {}),
     status: worstStatus(checks.filter((c) => isCheckOfRun(c, run.id)).map((c) => c.status)),
   };
 }

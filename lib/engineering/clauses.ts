@@ -17,14 +17,18 @@ export const CLAUSES = {
   rapidShutdownInside: same("690.12(B)(2)"), // from memory
   pvEgc: same("690.45"), // assumed OCPD where none is installed; from memory
   egcTable: same("Table 250.122"), // REFERENCE.md, confirmed
+  egcIncrease: same("250.122(B)"), // proportional increase, REFERENCE.md
   terminals: same("110.14(C)"), // REFERENCE.md
+  terminals60: same("110.14(C)(1)(a)"), // 100 A or less, or 14–1 AWG: 60 °C unless marked; from memory
   listing: same("110.3(B)"), // follow the listing and instructions
   conductorProtection: same("240.4(B)"), // REFERENCE.md
   smallConductors: same("240.4(D)"), // REFERENCE.md
-  standardRatings: same("240.6(A)"), // REFERENCE.md, confirmed for 2017
+  // 2023 turned the list into Table 240.6(A) (trade-press summaries of the 2023 changes).
+  standardRatings: { 2017: "240.6(A)", 2020: "240.6(A)", 2023: "Table 240.6(A)" },
   // 2017 kept the table inside 310.15; 2020 renumbered it 310.16 (from memory for 2017).
   ampacityTable: { 2017: "Table 310.15(B)(16)", 2020: "Table 310.16", 2023: "Table 310.16" },
-  tempCorrection: { 2017: "Table 310.15(B)(2)(a)", 2020: "Table 310.15(B)(1)", 2023: "Table 310.15(B)(1)" },
+  // 2023 numbered the 30 °C table 310.15(B)(1)(1), beside a 40 °C table (B)(1)(2) (from memory).
+  tempCorrection: { 2017: "Table 310.15(B)(2)(a)", 2020: "Table 310.15(B)(1)", 2023: "Table 310.15(B)(1)(1)" },
   rooftopAdder: { 2017: "310.15(B)(3)(c)", 2020: "310.15(B)(2)", 2023: "310.15(B)(2)" },
   cccAdjustment: { 2017: "Table 310.15(B)(3)(a)", 2020: "Table 310.15(C)(1)", 2023: "Table 310.15(C)(1)" },
   // Inverter output circuits moved from Article 690 to 705.28/705.30 in 2020; from memory.
@@ -37,11 +41,37 @@ export const CLAUSES = {
   loadSide120: { 2017: "705.12(B)(2)(3)(b)", 2020: "705.12(B)(3)(2)", 2023: "705.12(B)(2)" },
   loadSideSum: { 2017: "705.12(B)(2)(3)(c)", 2020: "705.12(B)(3)(3)", 2023: "705.12(B)(3)" },
   multipleSourcesMarking: { 2017: "705.12(B)(3)", 2020: "705.12(C)", 2023: "705.12(C)" }, // from memory
+  // Feeders, taps and center-fed panels on the load side (from memory).
+  feederConnection: { 2017: "705.12(B)(2)(1)", 2020: "705.12(B)(1)", 2023: "705.12(A)" },
+  tapConnection: { 2017: "705.12(B)(2)(2)", 2020: "705.12(B)(2)", 2023: "705.12(A)" },
+  centerFed: { 2017: "705.12(B)(2)(3)(d)", 2020: "705.12(B)(3)(4)", 2023: "705.12(B)(4)" },
+  supplySideAllowed: same("230.82(6)"), // a power source may connect ahead of the service disconnect (from memory)
+  // Disconnecting means (from memory): 690.13 PV system disconnect, its ratings (2017 (E), 2020 on (D)); 690.15 equipment.
+  pvDisconnect: same("690.13"),
+  pvDisconnectLocation: same("690.13(A)"),
+  pvDisconnectRatings: { 2017: "690.13(E)", 2020: "690.13(D)", 2023: "690.13(D)" },
+  equipmentDisconnect: same("690.15(A)"),
+  rapidShutdownInitiator: same("690.12(C)"), // 2020 on: outside and readily accessible at dwellings (from memory)
+  arcFault: same("690.11"), // DC circuits of 80 V or more (from memory)
+  groundFault: same("690.41(B)"), // from memory
+  // Wiring methods (from memory): exposed array wiring, DC circuits inside a building, their marking.
+  exposedWiring: same("690.31(C)(1)"),
+  dcInsideBuilding: { 2017: "690.31(G)", 2020: "690.31(D)", 2023: "690.31(D)" },
+  dcCircuitMarking: { 2017: "690.31(G)(3)", 2020: "690.31(D)(2)", 2023: "690.31(D)(2)" },
+  arrayEgc: same("690.46"), // EGCs smaller than 6 AWG per 250.120(C); from memory
+  egcProtection: same("250.120(C)"),
+  pvGrounding: same("690.47"), // grounding electrode system; from memory
+  gecTable: same("Table 250.66"), // REFERENCE.md
+  gecRodCap: same("250.66(A)"), // REFERENCE.md
+  gecProtection: same("250.64(B)"), // from memory
   voltageDrop: same("Chapter 9 Table 8"), // REFERENCE.md
   conduitFill: same("Chapter 9 Table 1"), // REFERENCE.md
   dcVoltageLabel: same("690.53"),
   disconnectLabel: same("690.13(B)"),
-  rapidShutdownLabel: same("690.56(C)"),
+  // The building's rapid shutdown label and the switch label; 2023 moved both into 690.12(D) (from memory,
+  // agreeing with a trade summary of the 2023 changes).
+  rapidShutdownLabel: { 2017: "690.56(C)(1)(a)", 2020: "690.56(C)(1)(a)", 2023: "690.12(D)" },
+  rapidShutdownSwitchLabel: { 2017: "690.56(C)(3)", 2020: "690.56(C)(3)", 2023: "690.12(D)" },
   directory: same("705.10"),
 } as const satisfies Record<string, ByEdition>;
 
@@ -57,9 +87,11 @@ type SomeEditions = Readonly<Record<NecEdition, string | null>>;
 
 export const EDITION_ONLY_CLAUSES = {
   // Marking at the point of interconnection: a power source, with its rated AC output current and
-  // nominal operating AC voltage. 2017 690.54. From memory, not confirmed: 2020 dropped 690.54 when
-  // the interactive-system rules moved to Article 705, leaving the values on the 705.12(C) marking.
-  interactivePointLabel: { 2017: "690.54", 2020: null, 2023: null },
+  // nominal operating AC voltage (690.54). A trade-press summary of the 2023 changes reports 690.54
+  // deleted in 2023 as redundant with the equipment's listing marks, so 2020 still has it.
+  interactivePointLabel: { 2017: "690.54", 2020: "690.54", 2023: null },
+  // Busbars feeding feed-through lugs: 2020 705.12(B)(3)(6), 2023 705.12(B)(6); 2017 has no such item (from memory).
+  feedThrough: { 2017: null, 2020: "705.12(B)(3)(6)", 2023: "705.12(B)(6)" },
 } as const satisfies Record<string, SomeEditions>;
 
 export type EditionOnlyClauseId = keyof typeof EDITION_ONLY_CLAUSES;

@@ -1,23 +1,23 @@
 import { DesignInputError } from "./errors";
-import type { ConductorRun, Design, Inverter, PvString } from "./types";
+import type { ArrayDesign, ConductorRun, Design, Inverter, PvString } from "./types";
 
-export function inverterById(design: Design, inverterId: string): Inverter {
+export function inverterById(design: ArrayDesign, inverterId: string): Inverter {
   const inverter = design.inverters.find((i) => i.id === inverterId);
   if (!inverter) throw new DesignInputError("inverterId", `No inverter with id "${inverterId}" is in the design.`);
   return inverter;
 }
 
-export function stringById(design: Design, stringId: string): PvString {
+export function stringById(design: ArrayDesign, stringId: string): PvString {
   const found = design.strings.find((s) => s.id === stringId);
   if (!found) throw new DesignInputError("stringId", `No string with id "${stringId}" is in the design.`);
   return found;
 }
 
-export function usesOptimizers(design: Design): boolean {
+export function usesOptimizers(design: ArrayDesign): boolean {
   return design.moduleLevelDevice?.kind === "optimizer";
 }
 
-export function microInverters(design: Design): Inverter[] {
+export function microInverters(design: ArrayDesign): Inverter[] {
   return design.inverters.filter((i) => i.kind === "micro");
 }
 
@@ -26,7 +26,7 @@ export function totalModuleCount(design: Design): number {
 }
 
 /** Total continuous output current of every inverter unit in the design. */
-export function totalInverterOutputA(design: Design): number {
+export function totalInverterOutputA(design: Pick<Design, "inverters">): number {
   return design.inverters.reduce((sum, i) => sum + i.quantity * i.acOutputCurrentA, 0);
 }
 
@@ -57,4 +57,9 @@ export function runInverterUnits(design: Design, run: ConductorRun): { inverter:
     }
     return { inverter, units };
   });
+}
+
+/** The DC runs that carry a string. */
+export function runsCarryingString(design: Design, stringId: string): ConductorRun[] {
+  return design.runs.filter((r) => r.circuit.kind === "dc-strings" && r.circuit.stringIds.includes(stringId));
 }

@@ -39,3 +39,13 @@ export function requireFinite(value: number, field: string, what: string): numbe
   if (!Number.isFinite(value)) throw new DesignInputError(field, `${what} must be a number.`);
   return value;
 }
+
+/** A figure the entries may not allow yet: its value, or null where the engine raises a DesignInputError (reported elsewhere). */
+export function unlessInputError<T>(compute: () => T): T | null {
+  try {
+    return compute();
+  } catch (err) {
+    if (err instanceof DesignInputError) return null;
+    throw err;
+  }
+}

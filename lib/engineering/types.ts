@@ -28,6 +28,7 @@ export interface PvModule {
   vmpTempCoeff?: TempCoefficient; // without it, the Pmax coefficient stands in
   pmaxTempCoeffPctPerC?: number;
   maxSeriesFuseA?: number;
+  maxSystemVoltageV?: number; // the module's listed maximum system voltage (600, 1000, 1500 V)
   lengthIn: number;
   widthIn: number;
   weightLb: number;
@@ -49,6 +50,10 @@ export interface Inverter {
   maxInputIscA?: number; // string: per MPPT input; micro: per module input
   regulatedStringV?: number; // inverters made for optimizer strings
   maxStringPowerW?: number; // per-string limit of optimizer-string inverters
+  terminalTempC?: TerminalTempC; // temperature rating of its wiring terminals, as marked; unknown → 110.14(C) default
+  dcArcFaultProtection?: boolean; // listed DC arc-fault protection (690.11); undefined = not known
+  dcGroundFaultProtection?: boolean; // DC ground-fault protection (690.41(B)); undefined = not known
+  dcDisconnect?: boolean; // an integrated DC disconnect (690.15); undefined = not known
 }
 
 /** A device behind each module: a DC optimizer or a shutdown-only device. */
@@ -60,6 +65,7 @@ export interface ModuleLevelDevice {
   maxInputIscA?: number;
   maxOutputCurrentA?: number; // optimizer continuous output current
   shutdownOutputV?: number; // per device while shut down; default 1 V (common practice)
+  maxSystemVoltageV?: number; // the highest string voltage the device may sit in
 }
 
 export interface PvString {
@@ -69,10 +75,15 @@ export interface PvString {
   modulesInSeries: number;
 }
 
-/** What a conductor run carries: strings in parallel, or the output of some inverter units. */
+/**
+ * What a conductor run carries. Strings are separate circuits in the one raceway or cable
+ * (each with its own pair of conductors and its own current) unless `combined` says they were
+ * joined in parallel before the run (a combiner or branch connectors). Inverter outputs are one
+ * combined circuit (after an AC combiner) unless `combined` is false.
+ */
 export type CircuitRef =
-  | { kind: "dc-strings"; stringIds: string[] }
-  | { kind: "ac-output"; sources: { inverterId: string; units?: number }[] }; // units default to the quantity
+  | { kind: "dc-strings"; stringIds: string[]; combined?: boolean } // combined default false
+  | { kind: "ac-output"; sources: { inverterId: string; units?: number }[]; combined?: boolean }; // units default to the quantity; combined default true
 
 export interface ConductorSpec {
   size: ConductorSize;
@@ -88,13 +99,14 @@ export type TradeSize = "1/2" | "3/4" | "1" | "1-1/4" | "1-1/2" | "2";
 export interface RacewayWire {
   size: ConductorSize;
   count: number;
-  areaIn2?: number; // needed for insulation other than THHN/THWN-2
+  insulation?: string; // Chapter 9 Table 5 holds THHN/THWN-2, XHHW-2 and RHW-2; others need areaIn2
+  areaIn2?: number; // from the wire's data sheet; overrides Table 5
 }
 
 export interface Raceway {
   type: RacewayType;
   tradeSize: TradeSize;
-  wires: RacewayWire[]; // every wire in the raceway, EGC included
+  wires?: RacewayWire[]; // every wire in the raceway, EGC included; default: the run's circuit conductors and its EGC
 }
 
 export interface ConductorRun {
@@ -103,8 +115,8 @@ export interface ConductorRun {
   circuit: CircuitRef;
   lengthFt: number; // one way
   conductor: ConductorSpec;
-  terminalTempC?: TerminalTempC; // default 75
-  currentCarryingConductors?: number; // in the same raceway or cable; default from the circuit
+  terminalTempC?: TerminalTempC; // default: the inverter's marked rating, else 110.14(C)
+  currentCarryingConductors?: number; // in the same raceway or cable; default (and minimum) from the circuits it carries
   ambientTempC?: number; // default: the site's high design temperature
   roofClearanceIn?: number; // set only for raceway or cable in sunlight on a roof
   ocpdA?: number; // AC runs without one are protected by the PV breaker
@@ -112,6 +124,9 @@ export interface ConductorRun {
   egc?: { size: ConductorSize; material: ConductorMaterial };
   conductorTempC?: number; // corrects Table 8 resistance from 75 °C
   raceway?: Raceway;
+  mcCable?: boolean; // Type MC cable: metal armor, no raceway
+  wireAreaIn2?: number; // one circuit conductor's area from its data sheet, for insulation Chapter 9 Table 5 does not list
+  insideBuilding?: boolean; // passes inside a building (690.31); undefined = not known
 }
 
 export interface ServicePanel {
@@ -124,8 +139,56 @@ export interface ServicePanel {
   pvBreakerAtOppositeEnd: boolean;
   otherBreakersA?: number[]; // every other breaker on the bus except the main, for the sum rule
   serviceConductorAmpacityA?: number; // supply side; defaults to the main rating
+  serviceConductor?: { size: ConductorSize; material: ConductorMaterial }; // largest ungrounded service-entrance conductor (Table 250.66)
+  panelFeed?: "end" | "center"; // where the supply enters the busbar; default end-fed
+  loadSideAt?: "busbar" | "feeder" | "feed-through"; // where a load-side connection lands; default the busbar
+  feeder?: FeederConnection; // for connections on a feeder or on feed-through conductors
+  supplySideConductors?: SupplySideConductors; // supply side: from the tap to the PV overcurrent device
   serviceLocation?: string;
   pvDisconnectLocation?: string;
+}
+
+/** A load-side connection to a feeder (705.12, feeders and taps). */
+export interface FeederConnection {
+  ampacityA?: number; // of the feeder (or feed-through) conductors
+  ocpdA?: number; // the device protecting the feeder at its supply end
+  atOppositeEnd?: boolean; // the connection is at the end of the feeder away from that device
+  loadSideOcpdA?: number; // a device on the feeder, on the load side of the connection
+  tapAmpacityA?: number; // the smallest tap taken from the feeder, if any
+}
+
+/** Supply-side source conductors between the service tap and the PV overcurrent device (705.11). */
+export interface SupplySideConductors {
+  size: ConductorSize;
+  material: ConductorMaterial;
+  lengthToOcpdFt?: number;
+}
+
+/** The PV system disconnecting means (690.13). */
+export interface PvSystemDisconnect {
+  kind: "pv-breaker" | "switch" | "fused-switch";
+  ratingA?: number; // ampere rating of a separate switch
+  voltageRatingV?: number;
+  readilyAccessible?: boolean;
+}
+
+/** The rapid shutdown initiation device (690.12(C)). */
+export interface RapidShutdownInitiator {
+  kind: "service-disconnect" | "pv-disconnect" | "switch";
+  outsideReadilyAccessible?: boolean;
+}
+
+/** A grounding electrode conductor the design adds (690.47, Table 250.66). */
+export interface GroundingElectrodeConductor {
+  size: ConductorSize;
+  material: ConductorMaterial;
+  electrode: "rod-pipe-plate" | "other";
+}
+
+/** The AC combiner panel that joins micro-inverter branch circuits. */
+export interface AcCombiner {
+  busbarA?: number;
+  breakersA?: readonly number[]; // every breaker on its bus except the one feeding out; default the branch runs' devices
 }
 
 export interface RoofPlane {
@@ -155,7 +218,14 @@ export interface Design {
   roofPlanes: RoofPlane[];
   cellTempRiseC?: number; // overrides the common-practice rise over ambient
   attachmentRatedLoadLb?: number;
+  pvDisconnect?: PvSystemDisconnect;
+  rapidShutdownInitiator?: RapidShutdownInitiator;
+  groundingElectrodeConductor?: GroundingElectrodeConductor;
+  acCombiner?: AcCombiner;
 }
+
+/** The part of a design the string checks read: enough to review strings before the rest is entered. */
+export type ArrayDesign = Pick<Design, "module" | "inverters" | "moduleLevelDevice" | "strings" | "mount" | "cellTempRiseC" | "listedRapidShutdownSystem">;
 
 export interface Site {
   recordLowTempC: number;
@@ -178,4 +248,5 @@ export interface CheckResult {
   edition: NecEdition;
   message: string;
   fix?: string;
+  field?: string; // the entry the check needs or faults, as a design path ("runs.r1.insideBuilding")
 }

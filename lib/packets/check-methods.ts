@@ -1,8 +1,16 @@
 import {
   DEFAULT_SHUTDOWN_V_PER_DEVICE,
   cellTempC,
+  circuitConductorCount,
+  egcBasisA,
   evaluateLoadSideRules,
+  runCircuits,
+  runRacewayWires,
   sizeLabel,
+  stringsOnSameInput,
+  terminalBasis,
+  runMaxCurrentA,
+  unlessInputError,
   type CheckResult,
   type ConductorRun,
   type Design,
@@ -45,6 +53,9 @@ function vmpInputs(design: Design, site: Site): string[] {
   return [`Vmp = ${num(m.vmpV)} V (STC)`, `Tcell = ${num(cellTempC(design, site))} °C (${num(site.highDesignTempC)} °C air plus the usual rise)`, coeff];
 }
 
+// A figure for the sheet, or null where the engine cannot compute it (the finding then says why).
+const safely = unlessInputError;
+
 const modulesIn = (design: Design, subject: string) => design.strings.find((s) => s.id === subject)?.modulesInSeries ?? 1;
 
 const DESCRIBE: Record<string, Describe> = {
@@ -83,26 +94,38 @@ const DESCRIBE: Record<string, Describe> = {
   },
   "ampacity-terminal": ({ design, subject }) => {
     const r = runOf(design, subject);
+    const t = r ? safely(() => terminalBasis(design, r, runMaxCurrentA(design, r))) : null;
+    const source = t === null ? "" : t.source === "run" ? " (entered)" : t.source === "equipment" ? " (inverter's marking)" : " (110.14(C)(1) default)";
     return {
-      inputs: r ? [conductorText(r), `terminals ${r.terminalTempC ?? 75} °C`] : [],
-      method: "Table 310.16 ampacity in the terminal's temperature column, at least 1.25 × the circuit's maximum current",
+      inputs: r ? [conductorText(r), t ? `terminals ${t.tempC} °C${source}` : "terminals: see the finding"] : [],
+      method: "Table 310.16 ampacity in the terminal's temperature column, at least 1.25 × each circuit's maximum current",
+    };
+  },
+  "current-carrying-count": ({ design, subject }) => {
+    const r = runOf(design, subject);
+    const circuits = r ? safely(() => runCircuits(design, r).length) : null;
+    return {
+      inputs: r ? [`${r.currentCarryingConductors ?? "—"} entered`, `${circuits ?? "?"} circuits in the raceway`] : [],
+      method: "Two conductors per DC or single-phase circuit, three per three-phase circuit: the least the raceway holds",
     };
   },
   "ampacity-conditions": ({ design, site, subject }) => {
     const r = runOf(design, subject);
+    const counted = r ? safely(() => Math.max(r.currentCarryingConductors ?? 0, circuitConductorCount(design, r))) : null;
     const inputs = r
       ? [
           conductorText(r),
           `ambient ${num(r.ambientTempC ?? site.highDesignTempC)} °C${r.roofClearanceIn !== undefined ? `, ${num(r.roofClearanceIn)} in above the roof` : ""}`,
-          ...(r.currentCarryingConductors ? [`${r.currentCarryingConductors} current-carrying conductors`] : []),
+          ...(counted ? [`${counted} current-carrying conductors`] : []),
         ]
       : [];
     return { inputs, method: "Table 310.16 ampacity (insulation column) × temperature correction × fill adjustment, at least the circuit's maximum current" };
   },
   "ocpd-rating": ({ design, subject }) => {
     const r = runOf(design, subject);
+    const parallel = r && r.circuit.kind === "dc-strings" ? safely(() => Math.max(...runCircuits(design, r).flatMap((c) => c.strings.map((s) => stringsOnSameInput(design, s))))) : null;
     return {
-      inputs: [r?.ocpdA ? `${r.ocpdIsFuse ? "fuse" : "breaker"} ${r.ocpdA} A` : "no overcurrent device on this run"],
+      inputs: [r?.ocpdA ? `${r.ocpdIsFuse ? "fuse" : "breaker"} ${r.ocpdA} A` : "no overcurrent device on this run", ...(parallel ? [`${parallel} ${parallel === 1 ? "string" : "strings"} on one inverter input`] : [])],
       method: "Needed where parallel sources can feed a fault; then at least 1.25 × the maximum current, next standard rating (240.6(A))",
     };
   },
@@ -113,11 +136,14 @@ const DESCRIBE: Record<string, Describe> = {
       method: "Device rating at most the conductor's usable ampacity (next size up where 240.4(B) allows) and the small-conductor limits of 240.4(D)",
     };
   },
-  egc: ({ design, subject }) => {
+  egc: ({ design, site, subject }) => {
     const r = runOf(design, subject);
+    const basis = r ? safely(() => egcBasisA(design, r, site.necEdition)) : null;
     return {
-      inputs: r ? [r.egc ? `EGC ${sizeLabel(r.egc.size)} ${r.egc.material}` : "no EGC entered", r.ocpdA ? `device ${r.ocpdA} A` : "device: the circuit's protection"] : [],
-      method: "Smallest EGC in Table 250.122 for the overcurrent device rating",
+      inputs: r
+        ? [r.egc ? `EGC ${sizeLabel(r.egc.size)} ${r.egc.material}` : "no EGC entered", basis ? `device ${num(basis.ocpdA)} A${basis.assumed ? " (assumed, 690.45)" : ""}` : "device: see the finding", conductorText(r)]
+        : [],
+      method: "Table 250.122 for the device; grown by the conductors' area ratio where they exceed what ampacity needs (250.122(B)), except PV DC circuits (690.45)",
     };
   },
   "voltage-drop": ({ design, subject }) => {
@@ -133,10 +159,12 @@ const DESCRIBE: Record<string, Describe> = {
     return { inputs: path ? [`runs: ${path.runIds.join(", ")}`] : [], method: "Sum of the runs' drops along the path, as a percentage of the working voltage" };
   },
   "conduit-fill": ({ design, subject }) => {
-    const rw = runOf(design, subject)?.raceway;
+    const r = runOf(design, subject);
+    const rw = r?.raceway;
+    const wires = r ? safely(() => runRacewayWires(design, r)) : null;
     return {
-      inputs: rw ? [`${rw.tradeSize} in ${rw.type === "PVC-40" ? "PVC Sch 40" : rw.type}`, `wires: ${rw.wires.map((w) => `${w.count} × ${sizeLabel(w.size)}`).join(", ")}`] : [],
-      method: "Sum of wire areas (Chapter 9 Table 5) / raceway area (Table 4), against the Table 1 percentage",
+      inputs: rw ? [`${rw.tradeSize} in ${rw.type === "PVC-40" ? "PVC Sch 40" : rw.type}`, `wires: ${(wires ?? []).map((w) => `${w.count} × ${sizeLabel(w.size)} ${w.insulation ?? ""}`.trim()).join(", ")}`] : [],
+      method: "Sum of wire areas (Chapter 9 Table 5 for the insulation, or the data sheet) / raceway area (Table 4), against the Table 1 percentage",
     };
   },
   "pv-breaker-size": ({ design }) => ({
@@ -189,6 +217,39 @@ const DESCRIBE: Record<string, Describe> = {
       method: "(modules × module weight + racking) / attachments",
     };
   },
+  "data-sheet": () => ({ inputs: ["the data-sheet figures of the catalog items"], method: "Each figure against the range such equipment can have; a coefficient outside it is not trusted to lower the cold voltage" }),
+  "system-voltage": () => ({ inputs: ["highest string voltage (690.7)", "listed maximum system voltage"], method: "The highest string voltage at or below the equipment's maximum system voltage" }),
+  "arc-fault": () => ({ inputs: ["highest DC voltage", "inverter's DC arc-fault protection"], method: "DC circuits of 80 V or more on a building need listed arc-fault protection" }),
+  "ground-fault": () => ({ inputs: ["DC voltage and current", "inverter's DC ground-fault protection"], method: "DC circuits above 30 V or 8 A need ground-fault protection" }),
+  "pv-disconnect": () => ({ inputs: ["the PV system disconnect named in the design"], method: "A PV breaker on a load-side connection, or a separate switch with its ratings" }),
+  "pv-disconnect-rating": ({ design }) => ({ inputs: [`switch ${design.pvDisconnect?.ratingA ?? "—"} A, ${design.pvDisconnect?.voltageRatingV ?? "—"} V`, `inverter output ${num(totalInverterOutputA(design))} A`], method: "Ampere and voltage ratings at least those of the circuit (and of the fuses it holds)" }),
+  "pv-disconnect-location": () => ({ inputs: ["readily accessible, as entered"], method: "The PV system disconnect at a readily accessible location" }),
+  "dc-disconnect": () => ({ inputs: ["inverter's integrated DC disconnect"], method: "A means to isolate the inverter's DC inputs, in it or within sight and 10 ft" }),
+  "rapid-shutdown-initiator": () => ({ inputs: ["initiator and its location, as entered"], method: "Service disconnect, PV disconnect or a switch; outside and readily accessible at dwellings from 2020 on" }),
+  "wiring-exposed": ({ design, subject }) => ({ inputs: runOf(design, subject) ? [conductorText(runOf(design, subject)!)] : [], method: "Exposed single conductors in the array: PV wire or USE-2" }),
+  "wiring-inside": ({ design, subject }) => {
+    const r = runOf(design, subject);
+    return { inputs: r ? [r.mcCable ? "Type MC cable" : r.raceway ? r.raceway.type : "no raceway", r.insideBuilding === undefined ? "route not entered" : r.insideBuilding ? "enters the building" : "outdoors only"] : [], method: "DC circuits inside a building in metal raceway or Type MC cable" };
+  },
+  "egc-protection": () => ({ inputs: ["EGC size", "no raceway or armor"], method: "An EGC smaller than 6 AWG is protected by a raceway or cable armor" }),
+  "string-run": () => ({ inputs: ["the runs and the strings each carries"], method: "Every string carried by a DC run" }),
+  gec: ({ design }) => {
+    const g = design.groundingElectrodeConductor;
+    const sc = design.service.serviceConductor;
+    return { inputs: [g ? `GEC ${sizeLabel(g.size)} ${g.material} to ${g.electrode === "rod-pipe-plate" ? "a rod, pipe or plate" : "the electrode"}` : "", sc ? `service conductors ${sizeLabel(sc.size)} ${sc.material}` : "service conductors not entered"].filter(Boolean), method: "Table 250.66 by the largest service-entrance conductor; 6 AWG Cu at most to a rod, pipe or plate" };
+  },
+  "gec-protection": () => ({ inputs: ["GEC 8 AWG"], method: "An 8 AWG GEC runs in raceway or armor" }),
+  "feeder-connection": ({ design }) => {
+    const f = design.service.feeder;
+    return { inputs: [`conductors ${f?.ampacityA ?? "—"} A`, `device ${f?.ocpdA ?? design.service.mainBreakerA ?? "—"} A`, `inverter output ${num(totalInverterOutputA(design))} A`], method: "Ampacity at least the device plus 1.25 × inverter current, or a load-side device no larger than the ampacity" };
+  },
+  "feeder-taps": ({ design }) => ({ inputs: [`smallest tap ${design.service.feeder?.tapAmpacityA ?? "—"} A`], method: "Tap up to 25 ft: a third of (feeder device + 1.25 × inverter current)" }),
+  "supply-side-conductors": ({ design }) => {
+    const c = design.service.supplySideConductors;
+    return { inputs: [c ? `${sizeLabel(c.size)} ${c.material}` : "not entered", `PV device ${design.service.pvBreakerA} A`], method: "Ampacity at 75 °C at least 1.25 × inverter output and the device's rating; at least 6 AWG Cu or 4 AWG Al from 2020 on" };
+  },
+  "supply-side-ocpd-location": ({ design }) => ({ inputs: [`${design.service.supplySideConductors?.lengthToOcpdFt ?? "—"} ft from the tap`], method: "The PV overcurrent device within 10 ft of the connection to the service conductors" }),
+  "ac-combiner-busbar": ({ design }) => ({ inputs: [`busbar ${design.acCombiner?.busbarA ?? "—"} A`], method: "Sum of the combiner's breakers, other than the one feeding out, at most the busbar rating" }),
   input: () => ({ inputs: [], method: "Could not be computed from the entries; see the finding" }),
 };
 

@@ -1,5 +1,6 @@
-import { roofPlaneLoad, sizeLabel, type CheckResult, type WarningLabel } from "@/lib/engineering";
+import { article, roofPlaneLoad, type CheckResult, type WarningLabel } from "@/lib/engineering";
 import { totalInverterOutputA } from "@/lib/engineering/design-lookup";
+import { type ConductorRow, conductorSchedule as scheduleOf } from "@/lib/design/conductor-schedule";
 import type { PacketInput } from "./packet-input";
 
 // The words and figures the packet sheets print, computed once from the packet input so
@@ -54,11 +55,6 @@ export function printableDeep<T>(value: T): T {
   return value;
 }
 
-/** "an 8.91 kW …", "a 7.6 kW …": the article as the number is spoken. */
-function articleFor(spoken: string): "a" | "an" {
-  return /^(8|11|18)(\D|$)|^8\d/.test(spoken) ? "an" : "a";
-}
-
 type InverterItem = PacketInput["equipment"]["inverters"][number]["item"];
 
 /** Inverter lines of the same catalog item counted together (branch circuits often share a model). */
@@ -90,7 +86,7 @@ export function scopeOfWork(input: PacketInput): string[] {
       ? `on the load side of the existing ${s.busbarA} A service panel through a ${s.pvBreakerA} A PV breaker`
       : `on the supply side of the service through a ${s.pvBreakerA} A fused PV disconnect`;
   const lines = [
-    `Install ${articleFor(dc)} ${dc} kW DC / ${formatNumber(ratings.acKw)} kW AC grid-tied PV system at ${siteAddress(input)}.`,
+    `Install ${article(dc)} ${dc} kW DC / ${formatNumber(ratings.acKw)} kW AC grid-tied PV system at ${siteAddress(input)}.`,
     `${ratings.moduleCount} ${m.maker} ${m.model} modules (${m.specs.powerW} W each) on ${mount}, feeding ${inverters}.`,
     `Connect ${connection}, at ${s.voltageV} V ${s.phase === "3" ? "three-phase" : "single-phase"}.`,
   ];
@@ -177,28 +173,11 @@ export function equipmentSchedule(input: PacketInput): EquipmentRow[] {
   return rows;
 }
 
-export type ConductorRow = { number: string; label: string; carries: string; conductors: string; raceway: string; egc: string; lengthFt: string; ocpd: string };
+export type { ConductorRow } from "@/lib/design/conductor-schedule";
 
-/** The conductor runs as the summary sheet lists them, numbered in the design's order as the single-line diagram tags them. */
+/** The conductor runs as the summary sheet lists them: one row per raceway, with its circuits and conductor count. */
 export function conductorSchedule(input: PacketInput): ConductorRow[] {
-  return input.designInput.runs.map((r, i) => {
-    const [kind, ref] = r.circuit.split(":");
-    const line = input.equipment.inverters.find((l) => l.lineId === ref);
-    const carries =
-      kind === "dc" ? (ref === "all" ? "All DC strings" : `String ${ref}`)
-      : ref === "all" ? "All inverter output"
-      : line ? `Output of ${line.quantity} × ${line.item.model}` : `Output of ${ref}`;
-    return {
-      number: String(i + 1),
-      label: r.label,
-      carries,
-      conductors: `${r.currentCarryingConductors} × ${sizeLabel(r.size)} ${r.material}${r.insulation ? ` ${r.insulation}` : ""}, ${r.insulationTempC} °C`,
-      raceway: r.racewayType === "none" ? (r.onRoof ? "Free air on the roof" : "None") : `${r.tradeSize || "?"} in ${r.racewayType === "PVC-40" ? "PVC Sch 40" : r.racewayType}`,
-      egc: r.egcSize ? `${sizeLabel(r.egcSize)} ${r.material}` : "—",
-      lengthFt: `${formatNumber(r.lengthFt)} ft`,
-      ocpd: r.ocpdA ? `${r.ocpdA} A` : kind === "ac" ? "PV breaker" : "—",
-    };
-  });
+  return scheduleOf(input.designInput, input.design, input.equipment.inverters.map((l) => ({ lineId: l.lineId, quantity: l.quantity, model: l.item.model })));
 }
 
 // Names and units for the computed values a label carries (WarningLabel.values keys).

@@ -1,10 +1,15 @@
 import { z } from "zod";
 import { safeString } from "./fields";
+import { withArticle } from "@/lib/engineering/check-result";
 import { CONDUCTOR_SIZES } from "@/lib/engineering/tables/conductor-sizes";
 
 export const TRADE_SIZES = ["1/2", "3/4", "1", "1-1/4", "1-1/2", "2"] as const;
-export const RACEWAY_TYPES = ["none", "EMT", "PVC-40"] as const;
+/** How a run is enclosed: no raceway (cable or free air), a conduit, or Type MC cable (metal armor). */
+export const RACEWAY_TYPES = ["none", "EMT", "PVC-40", "MC"] as const;
 export const SERVICE_VOLTAGES_V = ["120", "208", "240", "277", "480"] as const;
+/** Conductor insulations the review knows: Table 5 holds THWN-2, XHHW-2 and RHW-2; PV wire and USE-2 need the maker's area in a raceway. */
+export const INSULATIONS = ["PV wire", "USE-2", "THWN-2", "XHHW-2", "RHW-2"] as const;
+const YES_NO = ["", "yes", "no"] as const;
 
 const blankToUndefined = (v: unknown) => (v === "" || v === null ? undefined : v);
 
@@ -15,14 +20,19 @@ function numberIn(label: string, min: number, max: number, unit = "", { integer 
     .refine((v) => !integer || Number.isInteger(v), `${label} must be a whole number`)
     .refine((v) => v >= min && v <= max, `${label} must be between ${min} and ${max}${unit ? ` ${unit}` : ""}`);
 }
+/** "Busbar rating" → "busbar rating", but "PV breaker" stays "PV breaker" and "MPPT input" stays "MPPT input". */
+const inSentence = (label: string) => (/^[A-Z]{2}/.test(label) ? label : label[0]!.toLowerCase() + label.slice(1));
 const required = (label: string, min: number, max: number, unit = "", opts = {}) =>
-  z.preprocess(blankToUndefined, numberIn(label, min, max, unit, opts).optional()).refine((v) => v !== undefined, `Enter the ${label.toLowerCase()}`) as unknown as z.ZodType<number, string | number>;
+  z.preprocess(blankToUndefined, numberIn(label, min, max, unit, opts).optional()).refine((v) => v !== undefined, `Enter the ${inSentence(label)}`) as unknown as z.ZodType<number, string | number>;
 const optional = (label: string, min: number, max: number, unit = "", opts = {}) =>
   z.preprocess(blankToUndefined, numberIn(label, min, max, unit, opts).optional()) as unknown as z.ZodType<number | undefined, string | number | undefined>;
 const choice = <const T extends readonly [string, ...string[]]>(values: T, label: string) => z.enum(values, { error: `Choose the ${label}` });
 const text = (label: string, max: number) => safeString().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
 const optionalText = (max: number) => safeString().trim().max(max, `At most ${max} characters`).optional();
-const catalogId = (label: string) => safeString({ error: `Choose a ${label}` }).uuid(`Choose a ${label}`);
+const catalogId = (label: string) => safeString({ error: `Choose ${withArticle(label)}` }).uuid(`Choose ${withArticle(label)}`);
+const yesNo = z.enum(YES_NO, { error: "Answer yes or no" }).optional();
+const sizeOrBlank = z.union([z.enum(CONDUCTOR_SIZES), z.literal("")], { error: "Choose a conductor size" }).optional();
+const materialOrBlank = z.union([z.enum(["Cu", "Al"]), z.literal("")]).optional();
 const lineId = safeString().min(1).max(20);
 const flag = z.boolean().optional();
 
@@ -86,6 +96,33 @@ export const DesignInput = z.object({
       }),
     serviceLocation: optionalText(120),
     pvDisconnectLocation: optionalText(120),
+    // Where a load-side connection lands, and the panel's feed.
+    panelFeed: z.enum(["end", "center"], { error: "Choose how the panel is fed" }).optional(),
+    loadSideAt: z.enum(["busbar", "feeder", "feed-through"], { error: "Choose where the connection lands" }).optional(),
+    feederAmpacityA: optional("Feeder ampacity", 1, 4000, "A"),
+    feederOcpdA: optional("Feeder overcurrent device", 1, 4000, "A", { integer: true }),
+    feederLoadSideOcpdA: optional("Load-side overcurrent device", 1, 4000, "A", { integer: true }),
+    feederTapAmpacityA: optional("Smallest tap ampacity", 1, 4000, "A"),
+    feederAtOppositeEnd: flag,
+    // Supply side: the conductors from the tap to the PV overcurrent device.
+    supplyConductorSize: sizeOrBlank,
+    supplyConductorMaterial: materialOrBlank,
+    supplyTapLengthFt: optional("Length to the overcurrent device", 0, 500, "ft"),
+    serviceConductorSize: sizeOrBlank,
+    serviceConductorMaterial: materialOrBlank,
+    // Disconnecting means and rapid shutdown initiator (690.13, 690.12(C)).
+    pvDisconnectKind: z.enum(["", "pv-breaker", "switch", "fused-switch"], { error: "Choose the PV system disconnect" }).optional(),
+    pvDisconnectRatingA: optional("Disconnect rating", 1, 1200, "A", { integer: true }),
+    pvDisconnectVoltageV: optional("Disconnect voltage rating", 100, 1000, "V", { integer: true }),
+    pvDisconnectAccessible: yesNo,
+    rsdInitiatorKind: z.enum(["", "service-disconnect", "pv-disconnect", "switch"], { error: "Choose the rapid shutdown initiator" }).optional(),
+    rsdInitiatorOutside: yesNo,
+    // A grounding electrode conductor the design adds (690.47).
+    gecSize: sizeOrBlank,
+    gecMaterial: materialOrBlank,
+    gecElectrode: z.enum(["", "rod-pipe-plate", "other"]).optional(),
+    // The AC combiner of micro-inverter branch circuits.
+    combinerBusbarA: optional("Combiner busbar", 1, 1200, "A", { integer: true }),
   }),
   runs: z
     .array(
@@ -97,18 +134,24 @@ export const DesignInput = z.object({
         material: choice(["Cu", "Al"], "conductor material"),
         size: choice(CONDUCTOR_SIZES, "conductor size"),
         stranding: choice(["stranded", "solid"], "stranding"),
-        insulation: optionalText(30),
+        insulation: choice(INSULATIONS, "insulation"),
+        wireAreaIn2: optional("Wire area", 0.001, 1, "in²"),
         insulationTempC: choice(["75", "90"], "insulation temperature rating"),
-        terminalTempC: choice(["60", "75", "90"], "terminal temperature rating"),
+        // Blank: the inverter's marked rating, else 110.14(C) (60 °C up to 100 A).
+        terminalTempC: z.enum(["", "60", "75", "90"], { error: "Choose the terminal temperature rating" }).optional(),
         ambientTempC: optional("Ambient temperature", -40, 70, "°C"),
         onRoof: flag,
         roofClearanceIn: optional("Height above the roof", 0, 36, "in"),
-        currentCarryingConductors: required("Current-carrying conductors", 1, 40, "", { integer: true }),
+        // Blank: counted from the circuits the run carries.
+        currentCarryingConductors: optional("Current-carrying conductors", 1, 40, "", { integer: true }),
+        // Strings keep their own circuits unless joined in parallel before the run; inverter outputs leave a combiner as one.
+        arrangement: z.enum(["", "separate", "combined"], { error: "Choose how the circuits run" }).optional(),
         racewayType: choice(RACEWAY_TYPES, "conduit type"),
         tradeSize: z.union([z.enum(TRADE_SIZES), z.literal("")]).optional(),
+        route: z.enum(["", "outdoors", "inside"], { error: "Choose whether the run enters the building" }).optional(),
         ocpdA: optional("Overcurrent device", 1, 1200, "A", { integer: true }),
         egcSize: z.union([z.enum(CONDUCTOR_SIZES), z.literal("")]).optional(),
-      }),
+      }).refine((r) => !(r.racewayType === "EMT" || r.racewayType === "PVC-40") || Boolean(r.tradeSize), { path: ["tradeSize"], message: "Choose the conduit's trade size" }),
     )
     .min(1, "Add at least one conductor run")
     .max(20, "At most 20 conductor runs"),

@@ -25,6 +25,7 @@ export const ModuleSpecs = z
     ),
     pmaxTempCoeffPctPerC: optionalNumberField("Pmax coefficient", { min: -2, max: 0, unit: "%/°C" }),
     maxSeriesFuseA: optionalNumberField("Maximum series fuse", { min: 1, max: 60, unit: "A" }),
+    maxSystemVoltageV: optionalNumberField("Maximum system voltage", { min: 100, max: 1500, unit: "V" }),
     lengthIn: numberField("Length", { min: 10, max: 120, unit: "in" }),
     widthIn: numberField("Width", { min: 10, max: 80, unit: "in" }),
     weightLb: numberField("Weight", { min: 5, max: 120, unit: "lb" }),
@@ -40,6 +41,15 @@ export const ModuleSpecs = z
 export type ModuleSpecs = z.output<typeof ModuleSpecs>;
 
 const booleanish = z.preprocess((v) => (v === "true" || v === "on" ? true : v === "false" || v === "" || v === undefined ? false : v), z.boolean({ error: "Answer yes or no" }));
+/** A data-sheet yes or no that may be unknown: blank stays unknown, and the review then asks for it. */
+const yesNoUnknown = z.preprocess(
+  (v) => (v === "yes" || v === "true" ? true : v === "no" || v === "false" ? false : v === "" || v === null ? undefined : v),
+  z.boolean({ error: "Answer yes, no, or leave it blank" }).optional(),
+);
+const terminalRating = z.preprocess(
+  (v) => (v === "" || v === null ? undefined : typeof v === "string" ? Number(v) : v),
+  z.union([z.literal(60), z.literal(75), z.literal(90)], { error: "Terminal ratings are 60, 75 or 90 °C" }).optional(),
+);
 
 export const InverterSpecs = z
   .object({
@@ -59,6 +69,11 @@ export const InverterSpecs = z
     meetsRapidShutdownWithDevices: booleanish.default(false),
     // Module-level monitoring: each microinverter reports to a gateway, so the crew can count them found and reporting.
     reportsPerModule: booleanish.optional(),
+    // What the plan review asks of the inverter's listing; blank means not known yet.
+    terminalTempC: terminalRating,
+    dcArcFaultProtection: yesNoUnknown,
+    dcGroundFaultProtection: yesNoUnknown,
+    dcDisconnect: yesNoUnknown,
   })
   .refine((s) => s.mpptMinV === undefined || s.mpptMaxV === undefined || s.mpptMinV < s.mpptMaxV, {
     path: ["mpptMaxV"],
@@ -98,6 +113,7 @@ export const DeviceSpecs = z.object({
   shutdownOutputV: optionalNumberField("Voltage held while shut down", { min: 0, max: 30, unit: "V" }),
   // Module-level monitoring: each device reports to the inverter, so the crew can count them paired and reporting.
   reportsPerModule: booleanish.optional(),
+  maxSystemVoltageV: optionalNumberField("Maximum system voltage", { min: 50, max: 1500, unit: "V" }),
 });
 export type DeviceSpecs = z.output<typeof DeviceSpecs>;
 

@@ -28,23 +28,34 @@ export function largestMainBreakerA(busbarA: number, pvBreakerA: number, rule: "
   return largestStandardRatingAtMostA(busbarAllowanceA(busbarA, rule) - pvBreakerA);
 }
 
+/** Whether a busbar may use the 120 % and sum rules at all: a busbar feeding feed-through conductors with no device at either end may not (from memory). */
+export function feedThroughLimitsToFullRating(service: ServicePanel): boolean {
+  return service.loadSideAt === "feed-through" && service.feeder?.loadSideOcpdA === undefined;
+}
+
 /**
  * Each load-side rule as the code words it: 125 % of the inverter output current plus the
  * main, against the busbar (100 %) or 1.2 × busbar (120 %); the sum rule adds every breaker
- * on the bus except the main.
+ * on the bus except the main. On an end-fed bus the 120 % rule needs the PV breaker at the end
+ * away from the main; on a center-fed bus it may sit at either end, but only at dwellings
+ * (705.12 center-fed panelboards, from memory).
  */
-export function evaluateLoadSideRules(service: ServicePanel, inverterOutputA: number): LoadSideOutcome[] {
+export function evaluateLoadSideRules(service: ServicePanel, inverterOutputA: number, context: { isDwelling?: boolean } = {}): LoadSideOutcome[] {
   const sourceA = CONTINUOUS_MULTIPLIER * inverterOutputA;
   const main = service.mainBreakerA;
+  const centerFed = service.panelFeed === "center";
+  const fullRatingOnly = feedThroughLimitsToFullRating(service);
   const outcomes: LoadSideOutcome[] = [];
   for (const rule of ["100%", "120%"] as const) {
     const limitA = busbarAllowanceA(service.busbarA, rule);
     const valueA = sourceA + (main ?? 0);
-    const applies = main !== null && (rule === "100%" || service.pvBreakerAtOppositeEnd);
+    const endOk = service.pvBreakerAtOppositeEnd && (!centerFed || (context.isDwelling ?? true));
+    const applies = main !== null && (rule === "100%" || (endOk && !fullRatingOnly));
     outcomes.push({ rule, applies, passes: applies && atMost(valueA, limitA), valueA, limitA });
   }
   const others = service.otherBreakersA;
   const sumA = (others ?? []).reduce((a, b) => a + b, 0) + service.pvBreakerA;
-  outcomes.push({ rule: "sum", applies: others !== undefined, passes: others !== undefined && atMost(sumA, service.busbarA), valueA: sumA, limitA: service.busbarA });
+  const sumApplies = others !== undefined && !fullRatingOnly;
+  outcomes.push({ rule: "sum", applies: sumApplies, passes: sumApplies && atMost(sumA, service.busbarA), valueA: sumA, limitA: service.busbarA });
   return outcomes;
 }

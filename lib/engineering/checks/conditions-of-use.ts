@@ -35,11 +35,16 @@ export interface ConditionsOfUse {
   adjustmentFactor: number;
 }
 
-export function conditionsOfUse(run: ConductorRun, site: Site, defaultCurrentCarrying: number): ConditionsOfUse {
+/**
+ * Ambient correction and conductor-count adjustment of a run. `circuitConductors` is what the run's
+ * own circuits put in the raceway: the count used is that, or the entered count when it is higher
+ * (other circuits share the raceway); an entered count below it is reported by checkCurrentCarryingCount.
+ */
+export function conditionsOfUse(run: ConductorRun, site: Site, circuitConductors: number): ConditionsOfUse {
   const ambientC = requireFinite(run.ambientTempC ?? site.highDesignTempC, `runs.${run.id}.ambientTempC`, "The ambient temperature");
   const adderC = rooftopAdderC(site.necEdition, run.roofClearanceIn, run.conductor.insulation);
   const effectiveAmbientC = ambientC + adderC;
-  const ccc = run.currentCarryingConductors ?? defaultCurrentCarrying;
+  const ccc = Math.max(run.currentCarryingConductors ?? circuitConductors, circuitConductors);
   return {
     ambientC,
     rooftopAdderC: adderC,

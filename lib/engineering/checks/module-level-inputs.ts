@@ -1,7 +1,7 @@
 import { atMost, fmt, makeCheck } from "../check-result";
 import { clause, clauses } from "../clauses";
 import { microInverters } from "../design-lookup";
-import type { CheckResult, Design, Site } from "../types";
+import type { ArrayDesign, CheckResult, Site } from "../types";
 import { coldModuleVoc } from "./string-voltage";
 
 interface DeviceInput {
@@ -15,7 +15,7 @@ interface DeviceInput {
  * Each module feeds one device input (an optimizer, a shutdown device or a micro-inverter),
  * so each module's own cold Voc and Isc must stay within that input's ratings.
  */
-export function checkModuleLevelInputs(design: Design, site: Site): CheckResult[] {
+export function checkModuleLevelInputs(design: ArrayDesign, site: Site): CheckResult[] {
   const devices: DeviceInput[] = microInverters(design).map((i) => ({
     key: i.id,
     model: i.model,

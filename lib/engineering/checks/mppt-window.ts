@@ -1,12 +1,12 @@
 import { atLeast, atMost, fmt, makeCheck } from "../check-result";
 import { COMMON_PRACTICE } from "../clauses";
 import { inverterById, microInverters, usesOptimizers } from "../design-lookup";
-import type { CheckResult, Design, Inverter, PvModule, PvString, Site } from "../types";
+import type { ArrayDesign, CheckResult, Inverter, PvModule, PvString, Site } from "../types";
 
 // Cell temperature above the high design ambient (common practice; flush roof arrays run hotter than open racks).
 export const CELL_TEMP_RISE_C = { roof: 25, ground: 20 } as const;
 
-export function cellTempC(design: Design, site: Site): number {
+export function cellTempC(design: ArrayDesign, site: Site): number {
   return site.highDesignTempC + (design.cellTempRiseC ?? CELL_TEMP_RISE_C[design.mount ?? "roof"]);
 }
 
@@ -22,18 +22,18 @@ export function hotModuleVmpV(module: PvModule, cellTemperatureC: number): numbe
   return null;
 }
 
-export function checkMpptWindow(design: Design, site: Site, string: PvString): CheckResult[] {
+export function checkMpptWindow(design: ArrayDesign, site: Site, string: PvString): CheckResult[] {
   if (usesOptimizers(design)) return []; // the optimizers hold the string at a fixed voltage
   const inverter = inverterById(design, string.inverterId);
   return windowChecks(design, site, inverter, string.modulesInSeries, `String ${string.id}`, string.id);
 }
 
 /** Micro-inverters track one module each: the same test with a "string" of one. */
-export function checkMicroMpptWindow(design: Design, site: Site): CheckResult[] {
+export function checkMicroMpptWindow(design: ArrayDesign, site: Site): CheckResult[] {
   return microInverters(design).flatMap((i) => windowChecks(design, site, i, 1, `Each module on the ${i.model}`, i.id));
 }
 
-function windowChecks(design: Design, site: Site, inverter: Inverter, n: number, who: string, key: string): CheckResult[] {
+function windowChecks(design: ArrayDesign, site: Site, inverter: Inverter, n: number, who: string, key: string): CheckResult[] {
   const results: CheckResult[] = [];
   const edition = site.necEdition;
   const clauseText = `${COMMON_PRACTICE}: inverter MPPT range`;

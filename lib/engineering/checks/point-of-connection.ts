@@ -1,7 +1,10 @@
 import { atLeast, atMost, fmt, makeCheck } from "../check-result";
-import { type ClauseId, clause, clauses } from "../clauses";
+import { type ClauseId, clause, clauseInEdition, clauses } from "../clauses";
 import { totalInverterOutputA } from "../design-lookup";
 import type { CheckResult, Design, Site } from "../types";
+import { checkAcCombiner } from "./ac-combiner";
+import { checkFeederConnection } from "./feeder-connection";
+import { checkSupplySideConductors } from "./supply-side";
 import { type LoadSideOutcome, type LoadSideRule, evaluateLoadSideRules, largestMainBreakerA, largestPvBreakerA } from "./busbar-rules";
 import { CONTINUOUS_MULTIPLIER } from "./conductor-ampacity";
 import { requiredOcpdA } from "./ocpd";
@@ -15,7 +18,24 @@ export function governingLoadSideRule(outcomes: LoadSideOutcome[]): LoadSideOutc
 }
 
 export function checkPointOfConnection(design: Design, site: Site): CheckResult[] {
-  return [pvBreakerSize(design, site), design.service.connection === "supply-side" ? supplySide(design, site) : loadSide(design, site)];
+  const s = design.service;
+  const results = [pvBreakerSize(design, site)];
+  if (s.connection === "supply-side") results.push(supplySide(design, site), ...checkSupplySideConductors(design, site));
+  else {
+    const at = s.loadSideAt ?? "busbar";
+    if (at !== "feeder") results.push(loadSide(design, site));
+    if (at !== "busbar") results.push(...checkFeederConnection(design, site));
+  }
+  results.push(...checkAcCombiner(design, site));
+  return results;
+}
+
+/** The clause a load-side rule is cited by: a center-fed bus has its own 120 % item, and a bus with feed-through lugs cites that item too (2020 on). */
+function ruleClause(rule: LoadSideRule, design: Design, site: Site): string {
+  const s = design.service;
+  const main = clause(rule === "120%" && s.panelFeed === "center" ? "centerFed" : RULE_CLAUSE[rule], site.necEdition);
+  const feedThrough = s.loadSideAt === "feed-through" ? clauseInEdition("feedThrough", site.necEdition) : null;
+  return feedThrough ? `${main}, ${feedThrough.replace(/^NEC \d+ /, "")}` : main;
 }
 
 function pvBreakerSize(design: Design, site: Site): CheckResult {
@@ -42,14 +62,14 @@ function loadSide(design: Design, site: Site): CheckResult {
   const edition = site.necEdition;
   const s = design.service;
   const outputA = totalInverterOutputA(design);
-  const outcomes = evaluateLoadSideRules(s, outputA);
+  const outcomes = evaluateLoadSideRules(s, outputA, { isDwelling: site.isDwelling });
   const governing = governingLoadSideRule(outcomes);
   const base = { id: "point-of-connection", title: "Connection to the panel busbar", unit: "A", edition };
   if (governing) {
     const breakerSumA = s.pvBreakerA + (s.mainBreakerA ?? 0);
     // Code arithmetic uses 125 % of inverter current; many AHJs add the breaker rating instead.
     const breakerOver = governing.rule === "120%" && !atMost(breakerSumA, governing.limitA);
-    const where = governing.rule === "120%" ? ", with the PV breaker at the far end of the bus from the main" : "";
+    const where = governing.rule === "120%" ? (s.panelFeed === "center" ? ", with the PV breaker at one end of the center-fed bus" : ", with the PV breaker at the far end of the bus from the main") : "";
     const sum = governing.rule === "sum"
       ? `its breakers other than the main total ${fmt(governing.valueA)} A`
       : `1.25 × ${fmt(outputA)} A of inverter current plus the ${s.mainBreakerA} A main is ${fmt(governing.valueA)} A`;
@@ -58,7 +78,7 @@ function loadSide(design: Design, site: Site): CheckResult {
       status: breakerOver ? "warn" : "pass",
       value: governing.valueA,
       limit: governing.limitA,
-      clause: clause(RULE_CLAUSE[governing.rule], edition),
+      clause: ruleClause(governing.rule, design, site),
       message: `The panel meets the ${RULE_NAME[governing.rule]}: ${sum}, within the ${fmt(governing.limitA)} A allowed on the ${s.busbarA} A busbar${where}.${breakerOver ? ` Counting the ${s.pvBreakerA} A breaker itself gives ${breakerSumA} A, which some AHJs will not accept.` : ""}`,
       fix: breakerOver ? pvBreakerFix(s.busbarA, s.mainBreakerA) : undefined,
     });
@@ -66,7 +86,9 @@ function loadSide(design: Design, site: Site): CheckResult {
   if (s.mainBreakerA === null) return mainLugOnly(outcomes, base, s.busbarA, edition);
   const shown = outcomes.find((o) => o.rule === "120%")!;
   const fixes = [pvBreakerFix(s.busbarA, s.mainBreakerA, requiredOcpdA(outputA)), mainFix(s.busbarA, s.mainBreakerA, s.pvBreakerA)];
-  if (!s.pvBreakerAtOppositeEnd) fixes.unshift("Move the PV breaker to the end of the bus opposite the main to use the 120 % rule.");
+  if (!s.pvBreakerAtOppositeEnd) {
+    fixes.unshift(s.panelFeed === "center" ? "Move the PV breaker to one end of the center-fed bus to use the 120 % rule." : "Move the PV breaker to the end of the bus opposite the main to use the 120 % rule.");
+  }
   fixes.push("Or connect on the supply side of the main.");
   return makeCheck({
     ...base,

@@ -1,7 +1,7 @@
 import { atMost, fmt, makeCheck } from "../check-result";
 import { COMMON_PRACTICE, clause, clauses } from "../clauses";
 import { microInverters } from "../design-lookup";
-import type { CheckResult, Design, PvString, Site } from "../types";
+import type { ArrayDesign, CheckResult, Design, PvString, Site } from "../types";
 
 // A module-level device in shutdown holds about 1 V (common practice, REFERENCE.md).
 export const DEFAULT_SHUTDOWN_V_PER_DEVICE = 1;
@@ -11,14 +11,14 @@ export const INSIDE_BOUNDARY_MAX_V = 80;
 
 export type RapidShutdownMethod = "micro-inverters" | "module-level-devices" | "listed-system" | "none";
 
-export function rapidShutdownMethod(design: Design): RapidShutdownMethod {
+export function rapidShutdownMethod(design: ArrayDesign): RapidShutdownMethod {
   if (design.inverters.length > 0 && microInverters(design).length === design.inverters.length) return "micro-inverters";
   if (design.moduleLevelDevice) return "module-level-devices";
   return design.listedRapidShutdownSystem ? "listed-system" : "none";
 }
 
 /** Expected string voltage with the array shut down: one small hold voltage per device in series. */
-export function shutdownStringVoltageV(design: Design, string: PvString): number {
+export function shutdownStringVoltageV(design: ArrayDesign, string: PvString): number {
   const perDeviceV = design.moduleLevelDevice?.shutdownOutputV ?? DEFAULT_SHUTDOWN_V_PER_DEVICE;
   return string.modulesInSeries * perDeviceV;
 }

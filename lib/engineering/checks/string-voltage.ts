@@ -3,7 +3,8 @@ import { clause } from "../clauses";
 import { inverterById, usesOptimizers } from "../design-lookup";
 import { DesignInputError, requireWholePositive } from "../errors";
 import { vocCorrectionFactor } from "../tables/voc-correction";
-import type { CheckResult, Design, Inverter, PvModule, PvString, Site } from "../types";
+import type { ArrayDesign, CheckResult, Inverter, PvModule, PvString, Site } from "../types";
+import { coefficientPctPerC, vocCoefficientTrusted } from "./data-sheets";
 
 // NEC 690.7: 600 V on one- and two-family dwellings, 1000 V on other buildings (REFERENCE.md).
 export const DWELLING_MAX_V = 600;
@@ -13,21 +14,33 @@ export interface ColdVoc {
   vocV: number;
   method: "coefficient" | "table";
   factor: number;
+  coefficientSetAside?: boolean; // the maker's coefficient was outside the usual range and gave the lower voltage
 }
 
-/** 690.7(A) module Voc at the record low: the maker's coefficient when given, Table 690.7(A) otherwise. */
+/**
+ * 690.7(A) module Voc at the record low: the maker's coefficient when given (690.7(A)(1)), Table 690.7(A)
+ * otherwise. A coefficient outside the usual range of crystalline modules is not trusted to lower the
+ * result: the higher of the two methods is used, so a unit slip cannot remove the cold correction.
+ */
+function fromTableAt(module: PvModule, tempC: number): ColdVoc {
+  const factor = vocCorrectionFactor(tempC);
+  return { vocV: module.vocV * factor, method: "table", factor };
+}
+
 export function coldModuleVoc(module: PvModule, recordLowTempC: number): ColdVoc {
   const coeff = module.vocTempCoeff;
-  if (!coeff) {
-    const factor = vocCorrectionFactor(recordLowTempC);
-    return { vocV: module.vocV * factor, method: "table", factor };
-  }
+  const fromTable = (): ColdVoc => fromTableAt(module, recordLowTempC);
+  if (!coeff) return fromTable();
   if (!(coeff.value < 0)) {
     throw new DesignInputError("module.vocTempCoeff", "The Voc temperature coefficient must be negative: module voltage rises as it gets colder.");
   }
   const deltaC = recordLowTempC - 25;
-  const vocV = coeff.unit === "%/C" ? module.vocV * (1 + (deltaC * coeff.value) / 100) : module.vocV + deltaC * coeff.value;
-  return { vocV, method: "coefficient", factor: vocV / module.vocV };
+  const vocV = module.vocV * (1 + (deltaC * coefficientPctPerC(coeff, module.vocV)) / 100);
+  const byCoefficient: ColdVoc = { vocV, method: "coefficient", factor: vocV / module.vocV };
+  if (vocCoefficientTrusted(module) || recordLowTempC >= 25) return byCoefficient;
+  // Table 690.7(A) stops at −40 °C; colder than that its last factor still sets a floor (the data-sheet check flags the coefficient).
+  const table = recordLowTempC < -40 ? { ...fromTableAt(module, -40) } : fromTable();
+  return table.vocV > byCoefficient.vocV ? { ...table, coefficientSetAside: true } : byCoefficient;
 }
 
 /** The lower of the inverter's maximum DC input and the 690.7 limit for the building. */
@@ -41,14 +54,16 @@ export function stringVoltageLimit(inverter: Inverter, site: Site): { limitV: nu
     : { limitV: codeV, why: "the 1000 V limit for buildings other than dwellings" };
 }
 
-function methodText(design: Design, cold: ColdVoc): string {
+function methodText(design: ArrayDesign, cold: ColdVoc): string {
   const c = design.module.vocTempCoeff;
-  return cold.method === "coefficient" && c
-    ? `using the module's ${c.value} ${c.unit === "%/C" ? "%/°C" : "V/°C"} coefficient`
-    : `using the Table 690.7(A) factor ${cold.factor}`;
+  if (cold.method === "coefficient" && c) return `using the module's ${c.value} ${c.unit === "%/C" ? "%/°C" : "V/°C"} coefficient`;
+  if (cold.coefficientSetAside && c) {
+    return `using the Table 690.7(A) factor ${cold.factor} (the module's ${c.value} ${c.unit === "%/C" ? "%/°C" : "V/°C"} coefficient is outside the usual range and would give less)`;
+  }
+  return `using the Table 690.7(A) factor ${cold.factor}`;
 }
 
-export function checkStringVoltage(design: Design, site: Site, string: PvString): CheckResult[] {
+export function checkStringVoltage(design: ArrayDesign, site: Site, string: PvString): CheckResult[] {
   const n = requireWholePositive(string.modulesInSeries, `strings.${string.id}.modulesInSeries`, "The number of modules in a string");
   const inverter = inverterById(design, string.inverterId);
   if (inverter.kind === "micro") {
@@ -57,7 +72,7 @@ export function checkStringVoltage(design: Design, site: Site, string: PvString)
   return usesOptimizers(design) ? optimizerString(design, site, string, inverter, n) : seriesString(design, site, string, inverter, n);
 }
 
-function seriesString(design: Design, site: Site, string: PvString, inverter: Inverter, n: number): CheckResult[] {
+function seriesString(design: ArrayDesign, site: Site, string: PvString, inverter: Inverter, n: number): CheckResult[] {
   const cold = coldModuleVoc(design.module, site.recordLowTempC);
   const stringV = n * cold.vocV;
   const { limitV, why } = stringVoltageLimit(inverter, site);
@@ -79,7 +94,7 @@ function seriesString(design: Design, site: Site, string: PvString, inverter: In
   ];
 }
 
-function optimizerString(design: Design, site: Site, string: PvString, inverter: Inverter, n: number): CheckResult[] {
+function optimizerString(design: ArrayDesign, site: Site, string: PvString, inverter: Inverter, n: number): CheckResult[] {
   const regulatedV = inverter.regulatedStringV;
   if (regulatedV === undefined || !(regulatedV > 0)) {
     throw new DesignInputError(`inverters.${inverter.id}.regulatedStringV`, `Optimizer strings need the ${inverter.model}'s fixed string voltage.`);

@@ -1,10 +1,12 @@
-import { atMost, fmt, makeCheck } from "../check-result";
+import { atMost, fmt, makeCheck, withArticle } from "../check-result";
 import { COMMON_PRACTICE, clause } from "../clauses";
-import { inverterById, runInverterUnits, runStrings, usesOptimizers } from "../design-lookup";
+import { inverterById, usesOptimizers } from "../design-lookup";
 import { DesignInputError, requireNonNegative } from "../errors";
 import { CONDUCTOR_SIZES, sizeIndex, sizeLabel } from "../tables/conductor-sizes";
 import { resistanceOhmPerKft } from "../tables/conductor-resistance";
-import type { CheckResult, CheckStatus, ConductorRun, Design, Site, VoltageDropPath } from "../types";
+import type { CheckResult, CheckStatus, ConductorRun, ConductorSize, Design, Site, VoltageDropPath } from "../types";
+import { type RunCircuit, runCircuits } from "./circuit-current";
+import { egcRequirement } from "./egc";
 
 export type VoltageDropSystem = "dc" | "1-phase" | "3-phase";
 
@@ -23,10 +25,10 @@ export function voltageDropStatus(percent: number): CheckStatus {
   return atMost(percent, VOLTAGE_DROP_WARN_PERCENT) ? "pass" : "warn";
 }
 
-/** Working voltage and current of a run: Vmp and Imp for strings, regulated voltage for optimizer strings, rated output for AC. */
-export function runOperatingPoint(design: Design, run: ConductorRun): { voltageV: number; currentA: number; system: VoltageDropSystem } {
-  if (run.circuit.kind === "ac-output") {
-    const units = runInverterUnits(design, run);
+/** Working voltage and current of one circuit: Vmp and Imp for strings, regulated voltage for optimizer strings, rated output for AC. */
+export function circuitOperatingPoint(design: Design, run: ConductorRun, circuit: RunCircuit): { voltageV: number; currentA: number; system: VoltageDropSystem } {
+  if (circuit.units.length > 0) {
+    const units = circuit.units;
     const { acVoltageV, phase } = units[0]!.inverter;
     if (units.some((u) => u.inverter.acVoltageV !== acVoltageV || u.inverter.phase !== phase)) {
       throw new DesignInputError(`runs.${run.id}.circuit`, `Run "${run.label}" joins inverters of different voltage or phase.`);
@@ -34,7 +36,7 @@ export function runOperatingPoint(design: Design, run: ConductorRun): { voltageV
     const currentA = units.reduce((sum, u) => sum + u.units * u.inverter.acOutputCurrentA, 0);
     return { voltageV: acVoltageV, currentA, system: phase === 3 ? "3-phase" : "1-phase" };
   }
-  const strings = runStrings(design, run);
+  const strings = circuit.strings;
   const n = strings[0]!.modulesInSeries;
   if (usesOptimizers(design)) {
     const voltageV = inverterById(design, strings[0]!.inverterId).regulatedStringV ?? 0;
@@ -48,12 +50,31 @@ export function runOperatingPoint(design: Design, run: ConductorRun): { voltageV
   return { voltageV: n * design.module.vmpV, currentA: strings.length * design.module.impA, system: "dc" };
 }
 
+/** The drop of the run's worst circuit: each circuit in a shared raceway has its own conductors and its own current. */
 export function runVoltageDrop(design: Design, run: ConductorRun, size = run.conductor.size): { dropV: number; percent: number } {
   const lengthFt = requireNonNegative(run.lengthFt, `runs.${run.id}.lengthFt`, `The length of run "${run.label}"`);
-  const { voltageV, currentA, system } = runOperatingPoint(design, run);
   const ohmPerKft = resistanceOhmPerKft(size, run.conductor.material, run.conductor.stranding, run.conductorTempC);
-  const dropV = voltageDropV(system, lengthFt, ohmPerKft, currentA);
-  return { dropV, percent: (dropV / voltageV) * 100 };
+  const drops = runCircuits(design, run).map((circuit) => {
+    const { voltageV, currentA, system } = circuitOperatingPoint(design, run, circuit);
+    const dropV = voltageDropV(system, lengthFt, ohmPerKft, currentA);
+    return { dropV, percent: (dropV / voltageV) * 100 };
+  });
+  return drops.reduce((worst, d) => (d.percent > worst.percent ? d : worst));
+}
+
+/** The suggested larger size, with the EGC 250.122(B) then asks for where it grows with the conductors. */
+function largerSizeFix(design: Design, site: Site, run: ConductorRun, size: ConductorSize): string {
+  const upsized = { ...run, conductor: { ...run.conductor, size } };
+  let egcNote = "";
+  if (run.egc) {
+    try {
+      const needed = egcRequirement(design, site, upsized, run.egc.material).required;
+      if (sizeIndex(needed) > sizeIndex(run.egc.size)) egcNote = ` with ${withArticle(sizeLabel(needed))} grounding conductor (250.122(B) grows it with the conductors)`;
+    } catch (err) {
+      if (!(err instanceof DesignInputError)) throw err;
+    }
+  }
+  return `Use ${sizeLabel(size)} conductors${egcNote} to stay within 2 %.`;
 }
 
 export function checkRunVoltageDrop(design: Design, site: Site, run: ConductorRun): CheckResult[] {
@@ -78,7 +99,7 @@ export function checkRunVoltageDrop(design: Design, site: Site, run: ConductorRu
       clause: `${clause("voltageDrop", site.necEdition)}; ${COMMON_PRACTICE} 2 %`,
       edition: site.necEdition,
       message: `Run "${run.label}" (${run.lengthFt} ft one way, ${sizeLabel(run.conductor.size)}) loses ${fmt(dropV)} V, ${fmt(percent)} % of its working voltage.`,
-      fix: status === "pass" ? undefined : better ? `Use ${sizeLabel(better)} conductors to stay within 2 %.` : "Shorten the run or split the circuit.",
+      fix: status === "pass" ? undefined : better ? largerSizeFix(design, site, run, better) : "Shorten the run or split the circuit.",
     }),
   ];
 }

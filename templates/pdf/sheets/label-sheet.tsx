@@ -15,6 +15,8 @@ const s = StyleSheet.create({
   plate: { borderWidth: 2.5, borderColor: COLORS.ink, padding: 3 },
   plateInner: { borderWidth: 0.8, borderColor: COLORS.ink, paddingVertical: 8, paddingHorizontal: 10, minHeight: 64, justifyContent: "center" },
   plateText: { fontSize: 10.5, fontWeight: 700, textAlign: "center", lineHeight: 1.3 },
+  wording: { marginTop: 3, fontSize: 7, color: COLORS.inkSoft },
+  explanation: { marginTop: 3, fontSize: 7.5, lineHeight: 1.3 },
   details: { marginTop: 4, paddingLeft: 2 },
   detailRow: { flexDirection: "row", marginTop: 2 },
   detailName: { width: 110, fontSize: 7.5, color: COLORS.inkSoft },
@@ -36,6 +38,11 @@ function LabelCard({ label, index }: { label: WarningLabel; index: number }) {
           <Text style={s.plateText}>{label.text}</Text>
         </View>
       </View>
+      <Text style={s.wording}>{label.prescribed ? `Wording prescribed by ${label.clause}.` : `${label.clause} asks for this content; the wording is ours.`}</Text>
+      <Text style={s.explanation}>
+        <Text style={base.strong}>What it means: </Text>
+        {label.explanation}
+      </Text>
       <View style={s.details}>
         {values.map((v) => (
           <View key={v.name} style={s.detailRow}>
@@ -57,8 +64,9 @@ export function LabelSheet({ input, sheet }: { input: PacketInput; sheet: SheetI
   return (
     <PlanSheet input={input} sheet={sheet} subtitle={`${input.review.labels.length} labels required by the design review, NEC ${input.review.edition}`}>
       <Text style={s.intro}>
-        Wording in our own plain terms with the values computed for this design. Make each label permanent and suited to its environment (sunlight, weather); letter height, colours and any
-        additional wording as NEC 110.21(B) and the AHJ require. Where the AHJ prescribes its own text, use that text with these values.
+        Where the NEC prescribes a label's words, the plate shows them as the clause gives them; elsewhere it shows the content the clause asks for, with the values computed for this design. Beside
+        each plate, what it means in plain words. Make each label permanent and suited to its environment (sunlight, weather); letter height, colours and any additional wording as NEC 110.21(B) and the
+        AHJ require. Where the AHJ prescribes its own text, use that text with these values.
       </Text>
       <View style={s.grid}>
         {input.review.labels.map((label, i) => (

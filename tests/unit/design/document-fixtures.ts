@@ -7,7 +7,7 @@ import type { DesignDocumentInput } from "@/lib/design/document";
  */
 export function exampleDocument(): DesignDocumentInput {
   const dcRun = (id: string, stringId: string) => ({
-    id, circuit: "dc-string" as const, stringId, lengthFt: 100, material: "Cu" as const, size: "10 AWG", stranded: true,
+    id, circuit: "dc-string" as const, stringId, lengthFt: 100, material: "Cu" as const, size: "10 AWG", stranded: true, insulation: "PV wire",
     insulationC: 90 as const, terminalC: 75 as const, ambientC: 33, aboveRoofIn: 1, currentCarrying: 2,
   });
   return {
@@ -24,7 +24,7 @@ export function exampleDocument(): DesignDocumentInput {
     runs: [
       dcRun("r1", "S1"),
       dcRun("r2", "S2"),
-      { id: "r3", circuit: "ac-output", inverterId: "inv-1", lengthFt: 50, material: "Cu", size: "8 AWG", stranded: true, insulationC: 90, terminalC: 75, ambientC: 33, currentCarrying: 2, conduit: { type: "EMT", tradeSize: "3/4" } },
+      { id: "r3", circuit: "ac-output", inverterId: "inv-1", lengthFt: 50, material: "Cu", size: "8 AWG", stranded: true, insulation: "THWN-2", insulationC: 90, terminalC: 75, ambientC: 33, currentCarrying: 2, conduit: { type: "EMT", tradeSize: "3/4" } },
     ],
   };
 }

@@ -35,8 +35,12 @@ describe("reviewDocument: a hand-worked example", () => {
     // Required before conditions of use: 1.25 × 15.25 = 19.06 A (10 AWG Cu at 75 °C terminals: 35 A).
     // Corrected: 40 A (90 °C column) × 0.96 (33 °C, 90 °C insulation) = 38.4 A; 1 in above the roof adds nothing (≥ 7/8 in).
     // Drop: 2 × 100 ft × 1.24 Ω/kft × 11.9 A (Imp) / 1000 = 2.95 V, over 10 × 33.6 V = 336 V: 0.88 %.
-    // EGC: no fuse, so 690.45 assumes a 15.25 A device; Table 250.122 up to 20 A: 12 AWG copper.
-    expect(r.runs[0]).toEqual({ id: "r1", designCurrentA: 15.25, requiredAmpacityA: 19.06, correctedAmpacityA: 38.4, voltageDropV: 2.95, voltageDropPct: 0.88, minEgc: "12 AWG", status: "warn" });
+    // EGC: no fuse, so NEC 2020 690.45 assumes a device per 690.9(B): 1.25 × 15.25 = 19.06 → 20 A; Table 250.122 up to 20 A: 12 AWG copper.
+    // One string alone in the run: one circuit, two current-carrying conductors; the 75 °C terminals as entered.
+    expect(r.runs[0]).toEqual({
+      id: "r1", circuits: 1, currentCarrying: 2, terminalC: 75, designCurrentA: 15.25, requiredAmpacityA: 19.06, correctedAmpacityA: 38.4,
+      voltageDropV: 2.95, voltageDropPct: 0.88, minEgc: "12 AWG", status: "warn",
+    });
     expect(check(r, "ampacity-conditions:r1")).toMatchObject({ value: 38.4, limit: 15.25 });
     expect(check(r, "voltage-drop:r1").value).toBe(0.88);
     expect(check(r, "egc:r1")).toMatchObject({ status: "warn", fix: "Add a 12 AWG copper equipment grounding conductor." });
@@ -59,11 +63,71 @@ describe("reviewDocument: a hand-worked example", () => {
     expect(r.ratings).toEqual({ dcKw: 8, acKw: 7.6, dcAcRatio: 1.05 });
   });
 
-  it("is as bad as its worst check, with labels and no roof checks without roof planes", () => {
-    expect(r.status).toBe("warn"); // only the missing EGCs warn
-    expect(r.checks.filter((c) => c.status !== "pass").map((c) => c.id)).toEqual(["egc:r1", "egc:r2", "egc:r3"]);
+  it("is as bad as its worst check: every entry the document leaves out is a warning naming its field", () => {
+    expect(r.status).toBe("warn");
+    expect(r.checks.filter((c) => c.status !== "pass").map((c) => [c.id, c.field])).toEqual([
+      ["system-voltage:module", "module.maxSystemVoltageV"],
+      ["system-voltage:device", "moduleLevelDevice.maxSystemVoltageV"],
+      ["arc-fault:inv-1", "inverters.inv-1.dcArcFaultProtection"],
+      ["ground-fault:inv-1", "inverters.inv-1.dcGroundFaultProtection"],
+      // both strings join at the inverter's one input: without the series fuse rating fusing cannot be settled (690.9(A))
+      ["ocpd-rating:r1", "module.maxSeriesFuseA"],
+      ["egc:r1", "runs.r1.egc"],
+      ["wiring-inside:r1", "runs.r1.insideBuilding"],
+      ["ocpd-rating:r2", "module.maxSeriesFuseA"],
+      ["egc:r2", "runs.r2.egc"],
+      ["wiring-inside:r2", "runs.r2.insideBuilding"],
+      ["egc:r3", "runs.r3.egc"],
+      ["pv-disconnect", "pvDisconnect.kind"],
+      ["dc-disconnect:inv-1", "inverters.inv-1.dcDisconnect"],
+      ["rapid-shutdown-initiator", "rapidShutdownInitiator.kind"],
+    ]);
+  });
+
+  it("has labels in the code's words with our explanation, and no roof checks without roof planes", () => {
     expect(r.checks.some((c) => c.id.startsWith("roof-") || c.id === "module-count")).toBe(false);
-    expect(r.labels).toContainEqual({ codeRef: "NEC 2020 690.53", title: "Solar DC circuit ratings", values: { maxDcVoltageV: 450.4 } });
+    expect(r.labels).toContainEqual(expect.objectContaining({ codeRef: "NEC 2020 690.53", title: "Solar DC circuit ratings", values: { maxDcVoltageV: 450.4 }, prescribedWording: false }));
+    const rsd = r.labels.find((l) => l.codeRef === "NEC 2020 690.56(C)(1)(a)")!;
+    expect(rsd).toMatchObject({ prescribedWording: true });
+    expect(rsd.text).toContain("SOLAR PV SYSTEM IS EQUIPPED WITH RAPID SHUTDOWN");
+    expect(rsd.explanation.length).toBeGreaterThan(20);
+  });
+
+  it("a document that says everything the review asks passes", () => {
+    const doc = exampleDocument();
+    doc.modules[0] = { ...doc.modules[0]!, maxSystemVoltageV: 1000, maxSeriesFuseA: 25 };
+    doc.optimizers![0] = { ...doc.optimizers![0]!, maxSystemVoltageV: 1000 };
+    doc.inverters[0] = { ...doc.inverters[0]!, dcArcFaultProtection: true, dcGroundFaultProtection: true, dcDisconnect: true };
+    doc.runs = doc.runs!.map((run) => ({ ...run, egc: { size: run.circuit === "ac-output" ? "10 AWG" : "6 AWG" }, ...(run.circuit === "ac-output" ? {} : { insideBuilding: false }) }));
+    doc.pvDisconnect = { kind: "pv-breaker" };
+    doc.rapidShutdownInitiator = { kind: "service-disconnect", outsideReadilyAccessible: true };
+    const ok = review(doc);
+    expect(ok.checks.filter((c) => c.status !== "pass")).toEqual([]);
+    expect(ok.status).toBe("pass");
+  });
+
+  // Issue 11 items 1 and 4 of the design editor: two strings in one raceway are two circuits, four conductors.
+  it("two strings in one raceway: one run, two circuits, four current-carrying conductors, each string's own current", () => {
+    const doc = exampleDocument();
+    doc.runs = [
+      { ...doc.runs![0]!, id: "r1", stringId: undefined, stringIds: ["S1", "S2"], currentCarrying: undefined, conduit: { type: "EMT", tradeSize: "3/4" }, insulation: "THWN-2", aboveRoofIn: undefined },
+      doc.runs![2]!,
+    ];
+    const two = review(doc);
+    // 40 A × 0.96 (33 °C) × 0.8 (4 conductors, Table 310.15(C)(1)) = 30.72 A for each string's 15.25 A
+    expect(two.runs[0]).toMatchObject({ circuits: 2, currentCarrying: 4, designCurrentA: 15.25, correctedAmpacityA: 30.72 });
+    // 4 × 0.0211 in² (10 AWG THWN-2) = 0.0844 of 0.5325 in² = 15.85 %
+    expect(two.runs[0]!.fillPct).toBe(15.85);
+  });
+
+  it("a conduit of wires whose insulation Table 5 does not list asks for their area instead of passing", () => {
+    const doc = exampleDocument();
+    doc.runs = [{ ...doc.runs![0]!, conduit: { type: "EMT", tradeSize: "3/4" } }, doc.runs![1]!, doc.runs![2]!];
+    const c = check(review(doc), "conduit-fill:r1");
+    expect(c).toMatchObject({ status: "warn", value: null, field: "runs.r1.wireAreaIn2" });
+    doc.runs[0] = { ...doc.runs[0]!, wireAreaIn2: 0.0266 };
+    // PV wire 0.0266 in² × 2 = 0.0532 of 0.5325 in² = 9.99 % (31 % allowed for two wires)
+    expect(check(review(doc), "conduit-fill:r1")).toMatchObject({ status: "pass", value: 9.99 });
   });
 
   it("adds the roof checks and the production estimate when the document gives them", () => {
@@ -163,5 +227,16 @@ describe("keys named like Object's own properties", () => {
     expect(Object.prototype.hasOwnProperty.call(fieldErrors, key)).toBe(true);
     expect(fieldErrors[key]).toEqual(["Unknown field; check its spelling against the document format"]);
     expect(JSON.parse(JSON.stringify(fieldErrors))[key]).toBeDefined();
+  });
+});
+
+describe("reviewDocument: where the connection lands", () => {
+  it("a connection on a feeder answers with the feeder rule and no busbar breaker limit", () => {
+    const doc = exampleDocument();
+    doc.service = { ...doc.service, loadSideAt: "feeder", feeder: { ampacityA: 250, ocpdA: 200 } };
+    const r = review(doc);
+    // 200 A device + 1.25 × 32 A = 240 A ≤ 250 A (705.12(B)(1), 2020; from memory)
+    expect(r.pointOfConnection).toEqual({ method: "load-side", rule: "feeder", maxPvBreakerA: null, status: "pass" });
+    expect(check(r, "feeder-connection")).toMatchObject({ status: "pass", value: 250, limit: 240, codeRef: "NEC 2020 705.12(B)(1)" });
   });
 });

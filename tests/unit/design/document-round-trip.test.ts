@@ -31,9 +31,9 @@ function explicit(design: Design, site: Site): Design {
   const runs = design.runs.map((run): ConductorRun => ({
     ...run,
     conductor: { ...run.conductor, stranding: run.conductor.stranding ?? "stranded" },
-    terminalTempC: run.terminalTempC ?? 75,
     ambientTempC: run.ambientTempC ?? site.highDesignTempC,
-    currentCarryingConductors: run.currentCarryingConductors ?? 2, // every fixture is single phase
+    // strings keep their own circuits unless joined; inverter outputs leave a combiner as one
+    circuit: run.circuit.kind === "dc-strings" ? { ...run.circuit, combined: run.circuit.combined ?? false } : { ...run.circuit, combined: run.circuit.combined ?? true },
   }));
   return { ...design, runs };
 }
@@ -64,14 +64,22 @@ describe("engine → document → engine", () => {
   it("writes defaults out, so the engine reads the same figures and the review is the same", () => {
     const design = stringDesign(); // ambient, terminal rating and conductor count left to the engine's defaults
     const back = backToEngine(overTheWire(design, coldSite));
-    expect(back.design.runs[0]).toMatchObject({ ambientTempC: 35, terminalTempC: 75, currentCarryingConductors: 2 });
+    expect(back.design.runs[0]).toMatchObject({ ambientTempC: 35, circuit: { combined: false } });
+    // the terminal rating and the conductor count stay unentered: the engine takes them from the inverter and the circuits
+    expect(back.design.runs[0]!.terminalTempC).toBeUndefined();
+    expect(back.design.runs[0]!.currentCarryingConductors).toBeUndefined();
     expect(reviewDesign(back.design, coldSite)).toEqual(reviewDesign(design, coldSite));
   });
 
-  it("refuses a run whose set of strings a document cannot name", () => {
+  it("names several whole strings sharing a run, and refuses a run carrying part of a parallel set", () => {
     const design = stringDesign({ strings: [...stringDesign().strings, { id: "S3", inverterId: "inv-1", mpptIndex: 2, modulesInSeries: 10 }] });
-    design.runs = [{ ...design.runs[0], circuit: { kind: "dc-strings", stringIds: ["S1", "S3"] } }];
-    const out = engineToDocument(design, coldSite);
+    design.runs = [{ ...design.runs[0]!, circuit: { kind: "dc-strings", stringIds: ["S1", "S3"] } }];
+    const named = engineToDocument(design, coldSite);
+    expect(named.ok && named.document.runs[0]).toMatchObject({ circuit: "dc-string", stringIds: ["S1", "S3"], combined: false });
+
+    const parallel = stringDesign({ strings: [{ id: "A.1", inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 }, { id: "A.2", inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 }] });
+    parallel.runs = [{ ...parallel.runs[0]!, circuit: { kind: "dc-strings", stringIds: ["A.1"] } }];
+    const out = engineToDocument(parallel, coldSite);
     expect(out.ok ? [] : out.problems.map((p) => p.path)).toEqual(["runs.0.circuit"]);
   });
 });

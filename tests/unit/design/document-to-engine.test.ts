@@ -26,12 +26,13 @@ describe("documentToEngine", () => {
     expect(design.inverters[0]).toMatchObject({ id: "inv-1", quantity: 1, acPowerW: 7600, acOutputCurrentA: 32, acVoltageV: 240, phase: 1, maxInputIscA: 26 });
     expect(design.moduleLevelDevice).toMatchObject({ kind: "shutdown-device", maxInputV: 80, maxInputIscA: 15, shutdownOutputV: 1 });
     expect(design.runs[0]).toMatchObject({
-      circuit: { kind: "dc-strings", stringIds: ["S1"] },
+      circuit: { kind: "dc-strings", stringIds: ["S1"], combined: false },
       conductor: { size: "10", material: "Cu", stranding: "stranded", insulationTempC: 90 },
       terminalTempC: 75, ambientTempC: 33, roofClearanceIn: 1, currentCarryingConductors: 2,
     });
-    expect(design.runs[2].circuit).toEqual({ kind: "ac-output", sources: [{ inverterId: "inv-1" }] });
-    expect(design.runs[2].raceway).toEqual({ type: "EMT", tradeSize: "3/4", wires: [{ size: "8", count: 2 }] });
+    expect(design.runs[2].circuit).toEqual({ kind: "ac-output", sources: [{ inverterId: "inv-1" }], combined: true });
+    // Without a wires list the engine fills the raceway from the run's circuits (see runRacewayWires).
+    expect(design.runs[2].raceway).toEqual({ type: "EMT", tradeSize: "3/4", wires: undefined });
   });
 
   it("takes the Voc coefficient in V/°C too", () => {
@@ -51,7 +52,8 @@ describe("documentToEngine", () => {
       d.runs = [{ ...d.runs![0], circuit: "dc-output", stringId: undefined, inverterId: "inv-1" }];
     });
     expect(design.strings.map((s) => s.id)).toEqual(["S1.1", "S1.2"]);
-    expect(design.runs[0].circuit).toEqual({ kind: "dc-strings", stringIds: ["S1.1", "S1.2"] });
+    // a dc-output run is the inverter's input circuit: its strings joined, unless the document says otherwise
+    expect(design.runs[0].circuit).toEqual({ kind: "dc-strings", stringIds: ["S1.1", "S1.2"], combined: true });
   });
 
   it("fills the defaults a short document leaves out: dwelling, one unit, the smallest PV breaker that fits", () => {

@@ -43,4 +43,33 @@ describe("runDesignReview", () => {
     expect(check?.status).toBe("fail");
     expect(check?.fix).toContain("13");
   });
+
+  // Issue 11, design editor: the live review shows every check it can compute while other steps are
+  // incomplete, and names the run or field missing a value.
+  it("flags a 25-module string on step 2, before the service and the runs are entered", () => {
+    const draft = newDesignDraft({ serviceVoltageV: 240, servicePhases: 1, busbarA: 200, mainBreakerA: 200 });
+    draft.equipment.moduleId = CATALOG[0]!.id;
+    draft.equipment.inverters[0]!.equipmentId = CATALOG[1]!.id;
+    draft.array.strings[0] = { ...draft.array.strings[0]!, modulesInSeries: "25" };
+    const out = runDesignReview(draft, CATALOG, CONDITIONS);
+    if (out.status !== "incomplete") throw new Error("expected an incomplete design");
+    // 25 × 45.04 V = 1126 V > 600 V (NEC 2020 690.7(A), coefficient method)
+    expect(out.partial.find((c) => c.id === "string-voltage:S1")).toMatchObject({ status: "fail", value: 1126, limit: 600 });
+    expect(out.problems.map((p) => p.path)).toContain("service.pvBreakerA");
+  });
+
+  it("names the run and the string a missing value belongs to", () => {
+    const draft = completeDraft();
+    draft.runs[0].lengthFt = "";
+    draft.array.strings[0].modulesInSeries = "";
+    const out = runDesignReview(draft, CATALOG, CONDITIONS);
+    if (out.status !== "incomplete") throw new Error("expected an incomplete design");
+    expect(out.problems).toContainEqual({ path: "runs.0.lengthFt", message: 'Run "Array to junction box": enter the length' });
+    expect(out.problems).toContainEqual({ path: "array.strings.0.modulesInSeries", message: "String S1: enter the modules in series" });
+  });
+
+  it("has nothing partial to show before the equipment is chosen", () => {
+    const out = runDesignReview(newDesignDraft({ serviceVoltageV: 240, servicePhases: 1, busbarA: 200, mainBreakerA: 200 }), CATALOG, CONDITIONS);
+    expect(out.status === "incomplete" && out.partial).toEqual([]);
+  });
 });

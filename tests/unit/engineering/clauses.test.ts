@@ -8,7 +8,19 @@ describe("clause numbering by NEC edition (REFERENCE.md; marked entries from mem
     ["ampacityTable", 2017, "NEC 2017 Table 310.15(B)(16)"], // from memory
     ["ampacityTable", 2020, "NEC 2020 Table 310.16"],
     ["tempCorrection", 2017, "NEC 2017 Table 310.15(B)(2)(a)"],
-    ["tempCorrection", 2023, "NEC 2023 Table 310.15(B)(1)"],
+    ["tempCorrection", 2020, "NEC 2020 Table 310.15(B)(1)"],
+    ["tempCorrection", 2023, "NEC 2023 Table 310.15(B)(1)(1)"], // 2023 numbering from memory
+    ["standardRatings", 2020, "NEC 2020 240.6(A)"],
+    ["standardRatings", 2023, "NEC 2023 Table 240.6(A)"], // trade-press summaries of 2023
+    ["rapidShutdownLabel", 2017, "NEC 2017 690.56(C)(1)(a)"], // from memory
+    ["rapidShutdownLabel", 2023, "NEC 2023 690.12(D)"], // from memory, agreeing with a trade summary
+    ["dcInsideBuilding", 2017, "NEC 2017 690.31(G)"], // from memory
+    ["dcInsideBuilding", 2020, "NEC 2020 690.31(D)"], // from memory
+    ["pvDisconnectRatings", 2017, "NEC 2017 690.13(E)"], // from memory
+    ["pvDisconnectRatings", 2023, "NEC 2023 690.13(D)"], // from memory
+    ["centerFed", 2017, "NEC 2017 705.12(B)(2)(3)(d)"], // from memory
+    ["centerFed", 2020, "NEC 2020 705.12(B)(3)(4)"], // from memory
+    ["feederConnection", 2023, "NEC 2023 705.12(A)"], // from memory
     ["rooftopAdder", 2017, "NEC 2017 310.15(B)(3)(c)"],
     ["rooftopAdder", 2020, "NEC 2020 310.15(B)(2)"],
     ["cccAdjustment", 2017, "NEC 2017 Table 310.15(B)(3)(a)"],
@@ -36,11 +48,14 @@ describe("clause numbering by NEC edition (REFERENCE.md; marked entries from mem
     }
   });
 
-  // 690.54 for 2017; its absence from 2020 and 2023 is from memory, not confirmed.
+  // 690.54 in 2017 and 2020; a trade-press summary of the 2023 changes reports it deleted in 2023.
   test.each([
     ["interactivePointLabel", 2017, "NEC 2017 690.54"],
-    ["interactivePointLabel", 2020, null],
+    ["interactivePointLabel", 2020, "NEC 2020 690.54"],
     ["interactivePointLabel", 2023, null],
+    ["feedThrough", 2017, null], // no feed-through item in 2017 (from memory)
+    ["feedThrough", 2020, "NEC 2020 705.12(B)(3)(6)"], // from memory
+    ["feedThrough", 2023, "NEC 2023 705.12(B)(6)"], // from memory
   ] as const)("edition-only clause %s in %d → %s", (id, edition, expected) => {
     expect(clauseInEdition(id, edition)).toBe(expected);
   });

@@ -12,6 +12,7 @@ export const larkspurModule: PvModule = {
   vocTempCoeff: { value: -0.28, unit: "%/C" },
   pmaxTempCoeffPctPerC: -0.35,
   maxSeriesFuseA: 25,
+  maxSystemVoltageV: 1000,
   lengthIn: 69.1,
   widthIn: 44.6,
   weightLb: 48.5,
@@ -31,6 +32,10 @@ export const northmereString: Inverter = {
   mpptMinV: 200,
   mpptMaxV: 480,
   maxInputIscA: 18,
+  terminalTempC: 75,
+  dcArcFaultProtection: true,
+  dcGroundFaultProtection: true,
+  dcDisconnect: true,
 };
 
 export const northmereOptimizerInverter: Inverter = {
@@ -46,6 +51,10 @@ export const northmereOptimizerInverter: Inverter = {
   maxDcInputV: 480,
   regulatedStringV: 380,
   maxStringPowerW: 5700,
+  terminalTempC: 75,
+  dcArcFaultProtection: true,
+  dcGroundFaultProtection: true,
+  dcDisconnect: true,
 };
 
 export const halvardMicro: Inverter = {
@@ -62,6 +71,8 @@ export const halvardMicro: Inverter = {
   mpptMinV: 27,
   mpptMaxV: 45,
   maxInputIscA: 15,
+  terminalTempC: 75,
+  dcGroundFaultProtection: true,
 };
 
 export const fenwickOptimizer: ModuleLevelDevice = {
@@ -71,6 +82,7 @@ export const fenwickOptimizer: ModuleLevelDevice = {
   maxInputV: 60,
   maxInputIscA: 14.5,
   maxOutputCurrentA: 15,
+  maxSystemVoltageV: 1000,
 };
 
 export const quillonShutdown: ModuleLevelDevice = {
@@ -79,6 +91,7 @@ export const quillonShutdown: ModuleLevelDevice = {
   model: "QR-1",
   maxInputV: 80,
   maxInputIscA: 15,
+  maxSystemVoltageV: 600,
 };
 
 export const coldSite: Site = { recordLowTempC: -20, highDesignTempC: 35, necEdition: 2020, isDwelling: true, peakSunHours: 5 };
@@ -90,8 +103,12 @@ export const stringRun: ConductorRun = {
   lengthFt: 100,
   conductor: { size: "10", material: "Cu", insulationTempC: 90, insulation: "PV wire" },
   roofClearanceIn: 1,
-  egc: { size: "10", material: "Cu" },
+  egc: { size: "6", material: "Cu" }, // exposed in the array: 6 AWG needs no raceway (250.120(C))
+  insideBuilding: false,
 };
+
+/** String S2's own run, the same as S1's. */
+export const stringRun2: ConductorRun = { ...stringRun, id: "r3", label: "Array to inverter, string S2", circuit: { kind: "dc-strings", stringIds: ["S2"] } };
 
 export const acRun: ConductorRun = {
   id: "r2",
@@ -101,7 +118,7 @@ export const acRun: ConductorRun = {
   conductor: { size: "8", material: "Cu", insulationTempC: 90, insulation: "THWN-2" },
   ocpdA: 40,
   egc: { size: "10", material: "Cu" },
-  raceway: { type: "EMT", tradeSize: "3/4", wires: [{ size: "8", count: 3 }, { size: "10", count: 1 }] },
+  raceway: { type: "EMT", tradeSize: "3/4", wires: [{ size: "8", count: 3, insulation: "THWN-2" }, { size: "10", count: 1, insulation: "THWN-2" }] },
 };
 
 /** A 20-module home system: two strings of 10 on one string inverter, 200 A panel with a 200 A main. */
@@ -125,9 +142,11 @@ export function stringDesign(overrides: Partial<Design> = {}): Design {
       serviceLocation: "east wall",
       pvDisconnectLocation: "beside the meter",
     },
-    runs: [stringRun, acRun],
+    runs: [stringRun, stringRun2, acRun],
     paths: [{ id: "p1", label: "String S1 to panel", runIds: ["r1", "r2"] }],
     roofPlanes: [{ id: "south", label: "South roof", moduleCount: 20, attachmentCount: 24, rackingWeightLb: 180 }],
+    pvDisconnect: { kind: "pv-breaker" },
+    rapidShutdownInitiator: { kind: "service-disconnect", outsideReadilyAccessible: true },
     ...overrides,
   };
 }

@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { DesignInputError, reviewDesign } from "@/lib/engineering";
+import { DesignInputError, reviewArray, reviewDesign } from "@/lib/engineering";
 import { acRun, coldSite, fenwickOptimizer, microDesign, northmereOptimizerInverter, stringDesign, stringRun } from "./fixtures";
 
 // JSON would turn NaN into null, so walk the result itself.
@@ -25,7 +25,9 @@ describe("reviewDesign", () => {
   test("covers every area of the review", () => {
     const prefixes = new Set(reviewDesign(stringDesign(), coldSite).checks.map((c) => c.id.split(":")[0]));
     for (const p of ["string-voltage", "mppt-min", "ampacity-terminal", "ampacity-conditions", "ocpd-rating", "egc", "voltage-drop",
-      "voltage-drop-path", "conduit-fill", "pv-breaker-size", "point-of-connection", "rapid-shutdown", "dc-ac-ratio", "roof-dead-load"]) {
+      "voltage-drop-path", "conduit-fill", "pv-breaker-size", "point-of-connection", "rapid-shutdown", "dc-ac-ratio", "roof-dead-load",
+      "data-sheet", "system-voltage", "arc-fault", "ground-fault", "pv-disconnect", "dc-disconnect", "rapid-shutdown-initiator",
+      "wiring-exposed"]) {
       expect(prefixes).toContain(p);
     }
   });
@@ -89,5 +91,28 @@ describe("reviewDesign", () => {
     ["an unsupported edition", stringDesign(), { ...coldSite, necEdition: 2011 as never }],
   ])("%s throws a DesignInputError", (_what, design, site) => {
     expect(() => reviewDesign(design, site)).toThrow(DesignInputError);
+  });
+
+  test("every check names the entry it needs when it warns about missing data", () => {
+    const bare = stringDesign({ pvDisconnect: undefined, rapidShutdownInitiator: undefined, runs: [{ ...stringRun, insideBuilding: undefined }, acRun] });
+    const r = reviewDesign(bare, coldSite);
+    const warned = r.checks.filter((c) => c.status === "warn");
+    expect(warned.map((c) => c.field)).toEqual(expect.arrayContaining(["pvDisconnect.kind", "rapidShutdownInitiator.kind", "runs.r1.insideBuilding", "strings.S2"]));
+  });
+});
+
+// The live review flags what the equipment and strings alone can show, before the rest is entered.
+describe("reviewArray", () => {
+  test("a 25-module string is flagged with no service or runs", () => {
+    const d = stringDesign();
+    const checks = reviewArray({ ...d, strings: [{ id: "S1", inverterId: "inv-1", modulesInSeries: 25 }] }, { ...coldSite, necEdition: 2023 });
+    // 25 × 45.04 = 1126 V > 600 V
+    expect(checks.find((c) => c.id === "string-voltage:S1")).toMatchObject({ status: "fail", value: 1126, clause: "NEC 2023 690.7(A)" });
+    expect(checks.some((c) => c.id.startsWith("ampacity") || c.id === "point-of-connection")).toBe(false);
+  });
+
+  test("with no strings yet it still checks the data sheets", () => {
+    const checks = reviewArray({ ...stringDesign(), strings: [] }, coldSite);
+    expect(checks.map((c) => c.id)).toContain("data-sheet");
   });
 });

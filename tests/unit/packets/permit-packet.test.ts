@@ -51,8 +51,11 @@ function expectCalculationsMatchReview(r: Rendered) {
 
 function expectLabelsMatchReview(r: Rendered) {
   const [labels] = sheetTexts(r, "labels");
+  // Every label shows our explanation beside its words, and says whether the words are the code's own.
+  expect(labels!.text.split("What it means:").length - 1).toBe(r.input.review.labels.length);
   r.input.review.labels.forEach((label, i) => {
     expect(labels!.text).toContain(`L${i + 1}. ${label.title}`);
+    expect(labels!.text, label.id).toContain(label.prescribed ? `Wording prescribed by ${label.clause}.` : `${label.clause} asks for this content`);
     for (const [key, value] of Object.entries(label.values)) {
       const unit = key.endsWith("V") ? "V" : "A";
       expect(labels!.text, `${label.id}.${key}`).toContain(formatQuantity(value, unit));

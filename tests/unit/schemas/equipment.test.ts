@@ -38,6 +38,11 @@ describe("ModuleSpecs", () => {
     expect(messages(ModuleSpecs.safeParse({ ...moduleForm, ...patch }))[path]).toBe(message);
   });
 
+  it("takes the listed maximum system voltage, blank as not known", () => {
+    expect(ModuleSpecs.parse({ ...moduleForm, maxSystemVoltageV: "1000" }).maxSystemVoltageV).toBe(1000);
+    expect(ModuleSpecs.parse({ ...moduleForm, maxSystemVoltageV: "" }).maxSystemVoltageV).toBeUndefined();
+  });
+
   it("reports a cross-field rule beside unrelated errors", () => {
     const found = messages(ModuleSpecs.safeParse({ ...moduleForm, vmpV: "38", lengthIn: "" }));
     expect(found).toEqual({ vmpV: "Vmp must be lower than Voc", lengthIn: "Length is required" });
@@ -45,6 +50,23 @@ describe("ModuleSpecs", () => {
 });
 
 describe("InverterSpecs", () => {
+  // What a plan review asks of the inverter's listing (690.11, 690.41(B), 690.15, 110.14(C)); blank stays unknown.
+  it.each([
+    [{ dcArcFaultProtection: "yes", dcGroundFaultProtection: "no", terminalTempC: "75" }, { dcArcFaultProtection: true, dcGroundFaultProtection: false, terminalTempC: 75 }],
+    [{ dcArcFaultProtection: true, terminalTempC: 90 }, { dcArcFaultProtection: true, terminalTempC: 90 }],
+  ])("reads the listing answers %j", (patch, expected) => {
+    expect(InverterSpecs.parse({ ...stringInverter, ...patch })).toMatchObject(expected);
+  });
+
+  it("keeps blank answers unknown, never a silent no", () => {
+    const out = InverterSpecs.parse({ ...stringInverter, terminalTempC: "", dcArcFaultProtection: "", dcDisconnect: "" });
+    expect([out.terminalTempC, out.dcArcFaultProtection, out.dcDisconnect]).toEqual([undefined, undefined, undefined]);
+  });
+
+  it("refuses a terminal rating that is not 60, 75 or 90 °C", () => {
+    expect(messages(InverterSpecs.safeParse({ ...stringInverter, terminalTempC: "80" })).terminalTempC).toBe("Terminal ratings are 60, 75 or 90 °C");
+  });
+
   it("accepts a string inverter and reads 'false' as false", () => {
     const out = InverterSpecs.parse({ ...stringInverter, phase: "1", meetsRapidShutdownWithDevices: "false" });
     expect(out).toMatchObject({ phase: 1, meetsRapidShutdownWithDevices: false, certification: "" });

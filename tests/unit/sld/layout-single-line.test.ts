@@ -44,7 +44,7 @@ describe("single-line layout: what it says", () => {
     expect(all).toEqual(expect.arrayContaining(["40 A PV breaker", "200 A", "busbar", "main", "× 11", "INVERTER", "RAPID SHUTDOWN INITIATOR", "AC DISCONNECT", "UTILITY METER", "kWh", "UTILITY GRID"]));
     expect(all.filter((t) => t === "200 A")).toHaveLength(2); // busbar and main
     expect(all.filter((t) => t === "× 11")).toHaveLength(2);
-    expect(all).toEqual(expect.arrayContaining(["String S1 to inverter, 62 ft", "2 × 10 AWG Cu PV wire", "free air; EGC 10 AWG Cu"]));
+    expect(all).toEqual(expect.arrayContaining(["String S1 to inverter, 62 ft", "2 × 10 AWG Cu PV wire", "free air; EGC 6 AWG Cu"]));
     expect(all).toEqual(expect.arrayContaining(["Inverter to service panel, 28 ft", "2 × 8 AWG Cu THWN-2", "in 3/4 in EMT; EGC 10 AWG Cu"]));
     expect(all).toContain("Stavemoor SR-1 Shutdown Unit");
     expect(all).toContain("DC disconnect integral (dashed)");

@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { checkConductorAmpacity, conditionsOfUse, rooftopAdderC } from "@/lib/engineering";
+import { checkConductorAmpacity, checkCurrentCarryingCount, conditionsOfUse, rooftopAdderC } from "@/lib/engineering";
 import type { ConductorRun, NecEdition } from "@/lib/engineering";
 import { acRun, coldSite, stringDesign, stringRun } from "../fixtures";
 
@@ -27,7 +27,7 @@ describe("690.8(B) conductor ampacity with conditions of use", () => {
   // Terminal: 1.25 × 15.25 = 19.06 A ≤ 35 A (75 °C column, NEC 2023 Table 310.16; 110.14(C)).
   // Conditions: 40 A × 0.96 (31–35 °C, Table 310.15(B)(1)) = 38.4 A ≥ 15.25 A.
   test("10 AWG Cu string run passes both tests", () => {
-    const { terminal, conditions } = check(stringRun);
+    const { terminal, conditions } = check({ ...stringRun, terminalTempC: 75 });
     expect(terminal).toMatchObject({ status: "pass", value: 35, limit: 19.06, clause: "NEC 2020 690.8(B), 110.14(C), Table 310.16" });
     expect(conditions).toMatchObject({ status: "pass", value: 38.4, limit: 15.25 });
   });
@@ -64,8 +64,9 @@ describe("690.8(B) conductor ampacity with conditions of use", () => {
   });
 
   test("AC runs cite 705.28(B) from 2020 on, 690.8(B) in 2017 (from memory)", () => {
-    expect(check(acRun, 2023).terminal.clause).toBe("NEC 2023 705.28(B), 110.14(C), Table 310.16");
-    expect(check(acRun, 2017).terminal.clause).toBe("NEC 2017 690.8(B), 110.14(C), Table 310.15(B)(16)");
+    const rated = { ...acRun, terminalTempC: 75 as const };
+    expect(check(rated, 2023).terminal.clause).toBe("NEC 2023 705.28(B), 110.14(C), Table 310.16");
+    expect(check(rated, 2017).terminal.clause).toBe("NEC 2017 690.8(B), 110.14(C), Table 310.15(B)(16)");
   });
 
   test("the fix names the smallest conductor that passes: 10 AWG Cu on the AC run → 8 AWG", () => {
@@ -83,5 +84,73 @@ describe("690.8(B) conductor ampacity with conditions of use", () => {
   test("an unknown conductor size is a readable input error", () => {
     const run = { ...stringRun, conductor: { ...stringRun.conductor, size: "5" as never } };
     expect(() => checkConductorAmpacity(design, coldSite, run)).toThrow(/not in the ampacity table/);
+  });
+});
+
+// 110.14(C)(1): terminations of circuits of 100 A or less (or marked for 14–1 AWG) are 60 °C unless the
+// equipment is marked otherwise; over 100 A, 75 °C (from memory). 10 AWG Cu: 30 A at 60 °C, 35 A at 75 °C
+// (Table 310.16, REFERENCE.md). A 25 A inverter needs 1.25 × 25 = 31.25 A at its terminals.
+describe("110.14(C) terminal temperature when the run gives none", () => {
+  const inverter = design.inverters[0]!;
+  const run = { ...acRun, ocpdA: 35, conductor: { ...acRun.conductor, size: "10" as const }, terminalTempC: undefined };
+  const at = (terminalTempC?: 60 | 75 | 90) => checkConductorAmpacity(stringDesign({ inverters: [{ ...inverter, acOutputCurrentA: 25, terminalTempC }] }), coldSite, run)[0]!;
+
+  test.each([
+    [undefined, "fail", 30, "110.14(C)(1)(a)"], // nothing marked: 60 °C, 30 A < 31.25 A
+    [75, "pass", 35, "110.14(C),"], // the inverter's terminals marked 75 °C
+    [60, "fail", 30, "110.14(C),"],
+  ] as const)("inverter terminals %s °C → %s at %d A", (marked, status, valueA, citation) => {
+    const r = at(marked);
+    expect(r).toMatchObject({ status, value: valueA, limit: 31.25 });
+    expect(r.clause).toContain(citation);
+  });
+
+  test("the unmarked case says it assumed 60 °C and names the field", () => {
+    const r = at(undefined);
+    expect(r.message).toContain("no terminal rating is entered");
+    expect(r.field).toBe("runs.r2.terminalTempC");
+  });
+
+  test("the rating entered for the run wins over the equipment's", () => {
+    const r = checkConductorAmpacity(stringDesign({ inverters: [{ ...inverter, acOutputCurrentA: 25, terminalTempC: 60 }] }), coldSite, { ...run, terminalTempC: 75 })[0]!;
+    expect(r).toMatchObject({ status: "pass", value: 35 });
+  });
+
+  test("a circuit above 100 A takes 75 °C by default", () => {
+    const big = stringDesign({ inverters: [{ ...inverter, acOutputCurrentA: 100 }], service: { ...design.service, pvBreakerA: 125 } });
+    const feeder = { ...acRun, ocpdA: 125, conductor: { ...acRun.conductor, size: "1/0" as const }, terminalTempC: undefined, raceway: undefined };
+    // 1/0 Cu at 75 °C: 150 A ≥ 1.25 × 100 = 125 A (at 60 °C it would be 125 A)
+    expect(checkConductorAmpacity(big, coldSite, feeder)[0]).toMatchObject({ status: "pass", value: 150 });
+  });
+});
+
+// Issue: a blank count assumed 2–3 even with four conductors in the raceway. The count now comes
+// from the circuits (two strings → 4, Table 310.15(C)(1): 4–6 → 0.8), and a lower entered count fails.
+describe("current-carrying conductors counted from what the raceway carries (Table 310.15(C)(1))", () => {
+  const twoStrings = { ...stringRun, circuit: { kind: "dc-strings" as const, stringIds: ["S1", "S2"] }, roofClearanceIn: undefined };
+
+  test.each([
+    [undefined, 4, 0.8],
+    [2, 4, 0.8], // entered below the circuits' own count: the counted 4 is used
+    [7, 7, 0.7], // entered above: other circuits share the raceway
+  ])("entered %s → %d conductors × %d", (entered, counted, factor) => {
+    const c = conditionsOfUse({ ...twoStrings, currentCarryingConductors: entered }, coldSite, 4);
+    expect(c.currentCarryingConductors).toBe(counted);
+    expect(c.adjustmentFactor).toBe(factor);
+  });
+
+  test("two strings in one raceway: each conductor carries one string's 15.25 A, derated for four conductors", () => {
+    // 10 AWG Cu 90 °C: 40 A × 0.96 (35 °C) × 0.8 = 30.72 A ≥ 15.25 A
+    const { conditions } = check(twoStrings);
+    expect(conditions).toMatchObject({ status: "pass", value: 30.72, limit: 15.25 });
+    expect(conditions.message).toContain("4 current-carrying conductors together × 0.8");
+  });
+
+  test("an entered count below the circuits' count fails and names the field", () => {
+    const [r] = checkCurrentCarryingCount(design, coldSite, { ...twoStrings, currentCarryingConductors: 2 });
+    expect(r).toMatchObject({ status: "fail", value: 2, limit: 4, field: "runs.r1.currentCarryingConductors" });
+    expect(r!.message).toContain("2 separate circuits, 4 current-carrying conductors");
+    expect(checkCurrentCarryingCount(design, coldSite, { ...twoStrings, currentCarryingConductors: 4 })).toEqual([]);
+    expect(checkCurrentCarryingCount(design, coldSite, { ...twoStrings, currentCarryingConductors: undefined })).toEqual([]);
   });
 });

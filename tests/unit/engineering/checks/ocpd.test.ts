@@ -39,7 +39,7 @@ describe("240.4(B) and 240.4(D): the device must protect the conductor", () => {
 
   // 8 AWG Cu at 75 °C terminals: usable min(50, 55 × 0.96) = 50 A → 60 A breaker fails; 6 AWG (65 A → 70 A) would do.
   test("a 60 A breaker on 8 AWG copper fails and the fix offers 6 AWG", () => {
-    const r = byId(stringDesign(), { ...acRun, ocpdA: 60 }, "ocpd-protects");
+    const r = byId(stringDesign(), { ...acRun, ocpdA: 60, terminalTempC: 75 }, "ocpd-protects");
     expect(r).toMatchObject({ status: "fail", value: 60, limit: 50 });
     expect(r.fix).toBe("Use a device of at most 50 A, or 6 AWG conductors.");
   });
@@ -65,19 +65,30 @@ describe("240.4(B) and 240.4(D): the device must protect the conductor", () => {
   });
 });
 
+// Strings are in parallel where they join at one inverter input (MPPT), whether or not they share a raceway.
 describe("690.9(A): strings without fuses (from memory)", () => {
-  const parallel = (ids: string[]) => ({ ...stringRun, circuit: { kind: "dc-strings" as const, stringIds: ids } });
-  const threeStrings = stringDesign({
-    strings: ["S1", "S2", "S3"].map((id) => ({ id, inverterId: "inv-1", modulesInSeries: 10 })),
+  const parallel = (ids: string[]) => ({ ...stringRun, terminalTempC: 75 as const, circuit: { kind: "dc-strings" as const, stringIds: ids } });
+  const onOneInput = (count: number) => stringDesign({
+    strings: ["S1", "S2", "S3"].slice(0, count).map((id) => ({ id, inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 })),
+  });
+  const threeStrings = onOneInput(3);
+
+  test("one string: no other source, no fuse needed, and no '0 A' result", () => {
+    const r = byId(stringDesign(), stringRun, "ocpd-rating");
+    expect(r).toMatchObject({ status: "pass", value: null });
+    expect(r.message).toContain("alone on its inverter input");
   });
 
-  test("one string: no other source, no fuse needed", () => {
-    expect(byId(stringDesign(), stringRun, "ocpd-rating")).toMatchObject({ status: "pass", value: 0 });
+  test("two strings in one raceway but on separate inverter inputs: neither feeds the other, no fuse needed", () => {
+    // stringDesign puts S1 on MPPT 1 and S2 on MPPT 2
+    expect(byId(stringDesign(), parallel(["S1", "S2"]), "ocpd-rating")).toMatchObject({ status: "pass", value: null });
   });
 
-  // Two strings: a fault sees 1 × 15.25 A from the other string ≤ 25 A series fuse rating.
-  test("two strings in parallel: 15.25 A back-feed ≤ 25 A, no fuse needed", () => {
-    expect(byId(stringDesign(), parallel(["S1", "S2"]), "ocpd-rating")).toMatchObject({ status: "pass", value: 15.25, limit: 25 });
+  // Two strings on one input: a fault sees 1 × 15.25 A from the other string ≤ 25 A series fuse rating.
+  test("two strings in parallel on one input: 15.25 A back-feed ≤ 25 A, no fuse needed", () => {
+    expect(byId(onOneInput(2), parallel(["S1", "S2"]), "ocpd-rating")).toMatchObject({ status: "pass", value: 15.25, limit: 25 });
+    // the same holds for a run carrying only one of them: the other still feeds a fault at the input
+    expect(byId(onOneInput(2), parallel(["S1"]), "ocpd-rating")).toMatchObject({ status: "pass", value: 15.25 });
   });
 
   // Three strings: 2 × 15.25 = 30.5 A > 25 A → fuse each at the next fuse rating above 19.06 A = 20 A.
@@ -87,7 +98,7 @@ describe("690.9(A): strings without fuses (from memory)", () => {
   });
 
   test("without the module's series fuse rating the check warns", () => {
-    const design = stringDesign({ module: { ...larkspurModule, maxSeriesFuseA: undefined } });
-    expect(byId(design, parallel(["S1", "S2"]), "ocpd-rating").status).toBe("warn");
+    const design = { ...onOneInput(2), module: { ...larkspurModule, maxSeriesFuseA: undefined } };
+    expect(byId(design, parallel(["S1", "S2"]), "ocpd-rating")).toMatchObject({ status: "warn", field: "module.maxSeriesFuseA" });
   });
 });

@@ -9,6 +9,10 @@ export type SpecField =
 
 const num = (name: string, label: string, unit: string, hint?: string): SpecField => ({ type: "number", name, label, unit, hint });
 const OPTIONAL = "Leave blank when the data sheet does not give it";
+// Blank stays "not known": the design review then asks for it where a check needs it.
+const yesNo = (name: string, label: string): SpecField => ({
+  type: "select", name, label, options: [{ value: "", label: "Not known" }, { value: "yes", label: "Yes" }, { value: "no", label: "No" }],
+});
 
 export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
   module: [
@@ -21,6 +25,7 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
     { type: "select", name: "vocTempCoeff.unit", label: "Coefficient unit", options: [{ value: "%/C", label: "%/°C" }, { value: "V/C", label: "V/°C" }] },
     num("pmaxTempCoeffPctPerC", "Pmax temperature coefficient", "%/°C", OPTIONAL),
     num("maxSeriesFuseA", "Maximum series fuse", "A", OPTIONAL),
+    num("maxSystemVoltageV", "Maximum system voltage", "V", "As listed, e.g. 1000; the review warns while it is blank"),
     num("lengthIn", "Length", "in"),
     num("widthIn", "Width", "in"),
     num("weightLb", "Weight", "lb"),
@@ -39,6 +44,13 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
     num("regulatedStringV", "Regulated string voltage", "V", "Only for inverters fed by optimizers"),
     num("maxStringPowerW", "Maximum power per string", "W", "Only for inverters fed by optimizers"),
     { type: "text", name: "certification", label: "Certification", hint: "e.g. UL 1741 SB; IEEE 1547-2018 Category B" },
+    {
+      type: "select", name: "terminalTempC", label: "Terminal temperature rating",
+      options: [{ value: "", label: "Not marked (60 °C up to 100 A)" }, { value: "60", label: "60 °C" }, { value: "75", label: "75 °C" }, { value: "90", label: "90 °C" }],
+    },
+    yesNo("dcArcFaultProtection", "Listed DC arc-fault protection (690.11)"),
+    yesNo("dcGroundFaultProtection", "DC ground-fault protection (690.41(B))"),
+    yesNo("dcDisconnect", "Integrated DC disconnect (690.15)"),
     { type: "checkbox", name: "meetsRapidShutdownWithDevices", label: "Meets rapid shutdown (690.12) together with its module-level devices" },
     { type: "checkbox", name: "reportsPerModule", label: "Microinverters only: each unit reports to a gateway (module-level monitoring)" },
   ],
@@ -49,19 +61,25 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
     num("maxInputIscA", "Maximum input current", "A", OPTIONAL),
     num("maxOutputCurrentA", "Maximum output current", "A", OPTIONAL),
     num("shutdownOutputV", "Voltage held while shut down", "V", "About 1 V per module is usual"),
+    num("maxSystemVoltageV", "Maximum system voltage", "V", "The highest string voltage it may sit in"),
     { type: "checkbox", name: "reportsPerModule", label: "Each device reports to the inverter (module-level monitoring)" },
   ],
 };
 
 const EMPTY_SPECS: Record<EquipmentKind, Record<string, unknown>> = {
   module: { vocTempCoeff: { value: "", unit: "%/C" } },
-  inverter: { inverterKind: "string", phase: "1", certification: "", meetsRapidShutdownWithDevices: false, reportsPerModule: false },
+  inverter: { inverterKind: "string", phase: "1", certification: "", meetsRapidShutdownWithDevices: false, reportsPerModule: false, terminalTempC: "", dcArcFaultProtection: "", dcGroundFaultProtection: "", dcDisconnect: "" },
   device: { deviceKind: "optimizer", reportsPerModule: false },
 };
 
 /** The form's starting values: blank for a new item, the stored figures for an edit. */
 export function formValuesOf(kind: EquipmentKind, item?: EquipmentDto): EquipmentInput {
   if (!item) return { kind, maker: "", model: "", listing: "", specs: EMPTY_SPECS[kind] } as EquipmentInput;
-  const specs: Record<string, unknown> = { ...EMPTY_SPECS[kind], ...item.specs };
+  const specs: Record<string, unknown> = { ...EMPTY_SPECS[kind], ...formOfSpecs(item.specs) };
   return { kind: item.kind, maker: item.maker, model: item.model, listing: item.listing, specs } as EquipmentInput;
+}
+
+/** Stored figures as the form's inputs hold them: known yes/no answers as "yes"/"no", numbers as they are. */
+function formOfSpecs(specs: Record<string, unknown>): Record<string, unknown> {
+  return Object.fromEntries(Object.entries(specs).map(([k, v]) => [k, k === "meetsRapidShutdownWithDevices" || typeof v !== "boolean" ? v : v ? "yes" : "no"]));
 }

@@ -11,7 +11,8 @@ export function ArrayStep({ issues }: { issues: Issues }) {
   const planes = useFieldArray({ control, name: "array.roofPlanes" });
   const strings = useFieldArray({ control, name: "array.strings" });
   const inverterLines = useWatch({ control, name: "equipment.inverters" }) ?? [];
-  const inverterOptions = inverterLines.map((l) => ({ value: l.lineId, label: `Inverter line ${l.lineId}` }));
+  // The line id alone: "Inverter line inv-1" does not fit the narrow column.
+  const inverterOptions = inverterLines.map((l) => ({ value: l.lineId, label: l.lineId }));
 
   return (
     <div className="space-y-6">

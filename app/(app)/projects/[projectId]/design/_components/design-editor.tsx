@@ -96,7 +96,7 @@ export function DesignEditor(props: { projectId: string; initialDraft: DesignDra
   return (
     <FormProvider {...form}>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
-        <div className="space-y-4">
+        <div className="min-w-0 space-y-4">
           <nav aria-label="Design steps" className="flex flex-wrap gap-1">
             {DESIGN_STEPS.map((s, i) => (
               <button key={s.key} type="button" onClick={() => goTo(i)} aria-current={i === step ? "step" : undefined} className={clsx("rounded px-3 py-1.5 text-sm", i === step ? "bg-copper text-white" : "bg-paper-deep text-ink-soft hover:bg-paper-edge")}>
@@ -105,12 +105,12 @@ export function DesignEditor(props: { projectId: string; initialDraft: DesignDra
             ))}
           </nav>
           <form onSubmit={(e) => e.preventDefault()} className="panel" noValidate>
-            <fieldset disabled={readOnly} className="space-y-4">
+            <fieldset disabled={readOnly} className="min-w-0 space-y-4">
               <h2>{DESIGN_STEPS[step].title}</h2>
               {step === 0 ? <EquipmentStep catalog={catalog} issues={issues} /> : null}
               {step === 1 ? <ArrayStep issues={issues} /> : null}
               {step === 2 ? <ServiceStep issues={issues} /> : null}
-              {step === 3 ? <RunsStep issues={issues} /> : null}
+              {step === 3 ? <RunsStep issues={issues} outcome={outcome} /> : null}
               {step === 4 ? <ReviewStep outcome={outcome} onGoToStep={goTo} /> : null}
             </fieldset>
           </form>

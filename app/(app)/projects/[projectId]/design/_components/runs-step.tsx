@@ -2,66 +2,105 @@
 
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
+import type { DesignReviewOutcome } from "@/lib/design/run-review";
+import { circuitConductorCount, unlessInputError } from "@/lib/engineering";
 import { CONDUCTOR_SIZES, sizeLabel } from "@/lib/engineering/tables/conductor-sizes";
-import { RACEWAY_TYPES, TRADE_SIZES, type DesignFormValues } from "@/lib/schemas/design";
+import { INSULATIONS, RACEWAY_TYPES, TRADE_SIZES, type DesignFormValues } from "@/lib/schemas/design";
 import { CheckboxInput, SelectInput, TextInput, options, type Issues } from "./design-fields";
 import { nextLineId } from "./line-ids";
 
 const SIZES = options(CONDUCTOR_SIZES, (s) => sizeLabel(s as (typeof CONDUCTOR_SIZES)[number]));
+const RACEWAY_NAMES: Record<string, string> = { none: "None", EMT: "EMT", "PVC-40": "PVC Sch 40", MC: "MC cable" };
 
-export function RunsStep({ issues }: { issues: Issues }) {
+/** The current-carrying conductors the review counts for a run from its circuits, once the design reviews. */
+function countedConductors(outcome: DesignReviewOutcome, lineId: string): number | null {
+  if (outcome.status !== "reviewed") return null;
+  const run = outcome.design.runs.find((r) => r.id === lineId);
+  return run ? unlessInputError(() => circuitConductorCount(outcome.design, run)) : null;
+}
+
+export function RunsStep({ issues, outcome }: { issues: Issues; outcome: DesignReviewOutcome }) {
   const { control } = useFormContext<DesignFormValues>();
   const runs = useFieldArray({ control, name: "runs" });
   const strings = useWatch({ control, name: "array.strings" }) ?? [];
   const inverters = useWatch({ control, name: "equipment.inverters" }) ?? [];
+  const several = strings.length > 1 || strings.some((s) => Number(s.parallelCount) > 1);
   const circuits = [
     ...strings.map((s) => ({ value: `dc:${s.lineId}`, label: `DC: string ${s.lineId}${Number(s.parallelCount) > 1 ? ` (×${s.parallelCount} in parallel)` : ""}` })),
-    ...(strings.length > 1 ? [{ value: "dc:all", label: "DC: all strings combined" }] : []),
+    ...(several ? [{ value: "dc:all", label: "DC: every string, in one raceway" }] : []),
     ...inverters.map((l) => ({ value: `ac:${l.lineId}`, label: `AC: output of inverter line ${l.lineId}` })),
-    ...(inverters.length > 1 ? [{ value: "ac:all", label: "AC: all inverter outputs combined" }] : [{ value: "ac:all", label: "AC: inverter output" }]),
+    ...(inverters.length > 1 ? [{ value: "ac:all", label: "AC: all inverter outputs" }] : [{ value: "ac:all", label: "AC: inverter output" }]),
   ];
 
   return (
     <div className="space-y-4">
-      <p className="text-xs text-ink-faint">Each segment of wire between two pieces of equipment. Length is one way.</p>
+      <p className="text-xs text-ink-faint">
+        One entry per raceway or cable between two pieces of equipment; length is one way. Strings sharing a raceway are separate circuits, each on its own pair of conductors, unless they are
+        joined in parallel before it.
+      </p>
       {issues.runs ? <p className="text-xs text-result-fail">{issues.runs}</p> : null}
-      {runs.fields.map((field, i) => (
-        <fieldset key={field.id} className="space-y-3 rounded border border-paper-edge p-3" data-testid="conductor-run">
-          <div className="grid gap-3 sm:grid-cols-3">
-            <TextInput name={`runs.${i}.label`} label="Run" inputMode="text" issues={issues} />
-            <SelectInput name={`runs.${i}.circuit`} label="Carries" options={circuits} empty="Choose" issues={issues} />
-            <TextInput name={`runs.${i}.lengthFt`} label="Length" suffix="ft" issues={issues} />
-          </div>
-          <div className="grid gap-3 sm:grid-cols-4">
-            <SelectInput name={`runs.${i}.material`} label="Material" options={[{ value: "Cu", label: "Copper" }, { value: "Al", label: "Aluminum" }]} issues={issues} />
-            <SelectInput name={`runs.${i}.size`} label="Size" options={SIZES} issues={issues} />
-            <SelectInput name={`runs.${i}.stranding`} label="Stranding" options={options(["stranded", "solid"])} issues={issues} />
-            <TextInput name={`runs.${i}.insulation`} label="Insulation" inputMode="text" issues={issues} hint="e.g. PV wire, THWN-2" />
-            <SelectInput name={`runs.${i}.insulationTempC`} label="Insulation rating" options={options(["75", "90"], (v) => `${v} °C`)} issues={issues} />
-            <SelectInput name={`runs.${i}.terminalTempC`} label="Terminal rating" options={options(["60", "75", "90"], (v) => `${v} °C`)} issues={issues} />
-            <TextInput name={`runs.${i}.currentCarryingConductors`} label="Current-carrying" inputMode="numeric" issues={issues} hint="In the same raceway" />
-            <TextInput name={`runs.${i}.ambientTempC`} label="Ambient" suffix="°C" issues={issues} hint="Empty: the AHJ's high design temperature" />
-          </div>
-          <div className="grid items-end gap-3 sm:grid-cols-4">
-            <CheckboxInput name={`runs.${i}.onRoof`} label="On the roof in sunlight" />
-            <TextInput name={`runs.${i}.roofClearanceIn`} label="Height above roof" suffix="in" issues={issues} />
-            <SelectInput name={`runs.${i}.racewayType`} label="Conduit" options={options(RACEWAY_TYPES, (v) => (v === "none" ? "None (cable)" : v === "PVC-40" ? "PVC Schedule 40" : v))} issues={issues} />
-            <SelectInput name={`runs.${i}.tradeSize`} label="Trade size" options={options(TRADE_SIZES, (v) => `${v} in`)} empty="—" issues={issues} />
-            <TextInput name={`runs.${i}.ocpdA`} label="Fuse or breaker" suffix="A" inputMode="numeric" issues={issues} hint="Empty when none" />
-            <SelectInput name={`runs.${i}.egcSize`} label="Equipment grounding conductor" options={SIZES} empty="—" issues={issues} />
-          </div>
-          <Button type="button" variant="quiet" disabled={runs.fields.length === 1} onClick={() => runs.remove(i)}>
-            Remove this run
-          </Button>
-        </fieldset>
-      ))}
+      {runs.fields.map((field, i) => {
+        const counted = countedConductors(outcome, field.lineId);
+        return (
+          <fieldset key={field.id} className="space-y-3 rounded border border-paper-edge p-3" data-testid="conductor-run">
+            <div className="grid gap-3 sm:grid-cols-3">
+              <TextInput name={`runs.${i}.label`} label="Run" inputMode="text" issues={issues} />
+              <SelectInput name={`runs.${i}.circuit`} label="Carries" options={circuits} empty="Choose" issues={issues} />
+              <TextInput name={`runs.${i}.lengthFt`} label="Length" suffix="ft" issues={issues} />
+            </div>
+            <div className="grid gap-3 sm:grid-cols-4">
+              <SelectInput
+                name={`runs.${i}.arrangement`}
+                label="Circuits in it"
+                options={[
+                  { value: "separate", label: "Each on its own conductors" },
+                  { value: "combined", label: "Joined before this run" },
+                ]}
+                empty="As usual"
+                issues={issues}
+                hint="Usual: strings apart, AC outputs joined after a combiner"
+              />
+              <SelectInput name={`runs.${i}.material`} label="Material" options={[{ value: "Cu", label: "Copper" }, { value: "Al", label: "Aluminum" }]} issues={issues} />
+              <SelectInput name={`runs.${i}.size`} label="Size" options={SIZES} issues={issues} />
+              <SelectInput name={`runs.${i}.stranding`} label="Stranding" options={options(["stranded", "solid"])} issues={issues} />
+              <SelectInput name={`runs.${i}.insulation`} label="Insulation" options={options(INSULATIONS)} issues={issues} />
+              <TextInput name={`runs.${i}.wireAreaIn2`} label="Wire area" suffix="in²" issues={issues} hint="PV wire or USE-2 in a conduit: from its data sheet" />
+              <SelectInput name={`runs.${i}.insulationTempC`} label="Insulation rating" options={options(["75", "90"], (v) => `${v} °C`)} issues={issues} />
+              <SelectInput name={`runs.${i}.terminalTempC`} label="Terminal rating" options={options(["60", "75", "90"], (v) => `${v} °C`)} empty="As marked" issues={issues} hint="Inverter's marking; unmarked: 60 °C up to 100 A" />
+              <TextInput
+                name={`runs.${i}.currentCarryingConductors`}
+                label="Current-carrying"
+                inputMode="numeric"
+                issues={issues}
+                hint={counted === null ? "Blank: counted from its circuits" : `Blank: ${counted}, counted from its circuits`}
+              />
+              <TextInput name={`runs.${i}.ambientTempC`} label="Ambient" suffix="°C" issues={issues} hint="Empty: the AHJ's high design temperature" />
+              <div className="flex items-end pb-2">
+                <CheckboxInput name={`runs.${i}.onRoof`} label="On the roof in sunlight" />
+              </div>
+              <TextInput name={`runs.${i}.roofClearanceIn`} label="Height above roof" suffix="in" issues={issues} />
+            </div>
+            <div className="grid items-start gap-3 sm:grid-cols-5">
+              <SelectInput name={`runs.${i}.racewayType`} label="Raceway" options={options(RACEWAY_TYPES, (v) => RACEWAY_NAMES[v] ?? v)} issues={issues} hint="None: free air or cable" />
+              <SelectInput name={`runs.${i}.tradeSize`} label="Trade size" options={options(TRADE_SIZES, (v) => `${v} in`)} empty="—" issues={issues} />
+              <SelectInput name={`runs.${i}.route`} label="Enters the building" options={[{ value: "outdoors", label: "No" }, { value: "inside", label: "Yes" }]} empty="Choose" issues={issues} hint="DC inside needs metal raceway or MC" />
+              <TextInput name={`runs.${i}.ocpdA`} label="Fuse or breaker" suffix="A" inputMode="numeric" issues={issues} hint="Empty when none" />
+              <SelectInput name={`runs.${i}.egcSize`} label="Grounding conductor" options={SIZES} empty="—" issues={issues} />
+            </div>
+            <Button type="button" variant="quiet" disabled={runs.fields.length === 1} onClick={() => runs.remove(i)}>
+              Remove this run
+            </Button>
+          </fieldset>
+        );
+      })}
       <Button
         type="button"
         variant="secondary"
         onClick={() =>
           runs.append({
             lineId: nextLineId("run", runs.fields.map((f) => f.lineId)), label: "", circuit: "", lengthFt: "", material: "Cu", size: "10", stranding: "stranded", insulation: "THWN-2",
-            insulationTempC: "90", terminalTempC: "75", ambientTempC: "", onRoof: false, roofClearanceIn: "", currentCarryingConductors: "2", racewayType: "EMT", tradeSize: "3/4", ocpdA: "", egcSize: "10",
+            wireAreaIn2: "", insulationTempC: "90", terminalTempC: "", ambientTempC: "", onRoof: false, roofClearanceIn: "", currentCarryingConductors: "", arrangement: "",
+            racewayType: "EMT", tradeSize: "3/4", route: "", ocpdA: "", egcSize: "10",
           })
         }
       >
