@@ -1,17 +1,9 @@
 // The words written along a conductor run, the way a plan reviewer reads
 // them: what the run is, then "count × size material insulation, raceway; EGC".
-import { sizeLabel, type ConductorRun, type Design } from "@/lib/engineering";
-import { runInverterUnits } from "@/lib/engineering/design-lookup";
+import { circuitConductorCount, sizeLabel, unlessInputError, type ConductorRun, type Design } from "@/lib/engineering";
 import { textWidthPt } from "./scene";
 import type { SceneBuilder } from "./scene-builder";
 import { SIZE } from "./style";
-
-/** Circuit conductors the run carries: two per DC string; the phase conductors of the AC output. */
-export function circuitConductorCount(design: Design, run: ConductorRun): number {
-  if (run.circuit.kind === "dc-strings") return 2 * Math.max(1, run.circuit.stringIds.length);
-  const phase = safely(() => runInverterUnits(design, run)[0]?.inverter.phase) ?? design.service.phase;
-  return phase === 3 ? 3 : 2;
-}
 
 /**
  * The conductors in two halves that read as one: "2 × 10 AWG Cu PV wire" and
@@ -20,7 +12,8 @@ export function circuitConductorCount(design: Design, run: ConductorRun): number
 export function conductorSpec(design: Design, run: ConductorRun): [string, string] {
   const c = run.conductor;
   const insulation = c.insulation ?? `${c.insulationTempC} °C insulation`;
-  const wires = `${circuitConductorCount(design, run)} × ${sizeLabel(c.size)} ${c.material} ${insulation}`;
+  // The engine's count, the same the review and the conductor schedule use; "?" while the run names a missing string or inverter.
+  const wires = `${unlessInputError(() => circuitConductorCount(design, run)) ?? "?"} × ${sizeLabel(c.size)} ${c.material} ${insulation}`;
   const raceway = run.raceway ? `in ${run.raceway.tradeSize} in ${run.raceway.type}` : "free air";
   const egc = run.egc ? `; EGC ${sizeLabel(run.egc.size)} ${run.egc.material}` : "; no EGC entered";
   return [wires, `${raceway}${egc}`];
@@ -68,13 +61,4 @@ export function runLabelWidth([title, ...spec]: RunLabel): number {
 
 function formatFt(ft: number): string {
   return Number.isInteger(ft) ? String(ft) : ft.toFixed(1);
-}
-
-// A design under edit may point at a missing inverter; the label still draws.
-function safely<T>(fn: () => T): T | undefined {
-  try {
-    return fn();
-  } catch {
-    return undefined;
-  }
 }
