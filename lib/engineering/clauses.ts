@@ -107,10 +107,12 @@ export function clauses(edition: NecEdition, ...ids: ClauseId[]): string {
   return `NEC ${edition} ${ids.map((id) => CLAUSES[id][edition]).join(", ")}`;
 }
 
-// Not NEC clauses: named so the result still says where its limit comes from.
-export const COMMON_PRACTICE = "common practice";
+// Not NEC clauses: named so the result still says where its limit comes from. A trade rule of
+// thumb with no published source (common practice) is shown to users as a design guideline.
+export const DESIGN_GUIDELINE = "design guideline";
 export const STRUCTURAL_REVIEW = "IRC R324.4 (structural review by the AHJ)"; // from memory
 export const DESIGN_CONSISTENCY = "design consistency"; // the design's own entries disagree
+export const INVERTER_DATA_SHEET = "inverter data sheet"; // a limit the maker states, not the code
 
 /** Every basis a result may cite instead of an NEC clause of the site's edition. */
-export const NON_CODE_BASES: readonly string[] = [COMMON_PRACTICE, STRUCTURAL_REVIEW, DESIGN_CONSISTENCY];
+export const NON_CODE_BASES: readonly string[] = [DESIGN_GUIDELINE, STRUCTURAL_REVIEW, DESIGN_CONSISTENCY, INVERTER_DATA_SHEET];

@@ -19,7 +19,7 @@ export type PacketInput = {
   kind: PacketKind;
   revision: number;
   generatedAt: string; // ISO date-time
-  preparedBy: { name: string; organizationName: string; licenseNumber: string | null; phone: string | null };
+  preparedBy: { name: string; organizationName: string; licenseNumber: string | null; phone: string | null; timeZone?: string }; // IANA zone the packet's dates print in
   project: Pick<ProjectDto, "number" | "customerName" | "customerEmail" | "customerPhone" | "street" | "city" | "state" | "postalCode" | "utilityAccountNumber" | "meterNumber">;
   jurisdiction: { name: string; state: string; necEdition: NecEdition; recordLowTempC: number; highDesignTempC: number };
   utility: { name: string; acceptedGridProfiles: string[] } | null;

@@ -1,4 +1,5 @@
 import { article, roofPlaneLoad, type CheckResult, type WarningLabel } from "@/lib/engineering";
+import { DEFAULT_TIME_ZONE, localIsoDate } from "@/lib/domain/time-zones";
 import { totalInverterOutputA } from "@/lib/engineering/design-lookup";
 import { type ConductorRow, conductorSchedule as scheduleOf } from "@/lib/design/conductor-schedule";
 import type { PacketInput } from "./packet-input";
@@ -19,9 +20,13 @@ export function formatQuantity(value: number | null, unit: string): string {
   return unit ? `${formatNumber(value)} ${unit}` : formatNumber(value);
 }
 
-/** The packet date as an unambiguous calendar date (UTC), e.g. "2026-11-20". */
-export function packetDate(generatedAt: string): string {
-  return new Date(generatedAt).toISOString().slice(0, 10);
+/**
+ * A document's date as an unambiguous calendar date in the organization's zone, e.g. "2026-11-20":
+ * a packet made at 7 pm in Denver is dated that day, not the next day in UTC. Packets stored before
+ * the zone was recorded print in the default zone.
+ */
+export function packetDate(generatedAt: string, timeZone: string | undefined): string {
+  return localIsoDate(generatedAt, timeZone ?? DEFAULT_TIME_ZONE);
 }
 
 export function revisionLabel(revision: number): string {

@@ -42,7 +42,7 @@ function bandCells(input: CommissioningDocumentInput, documentLine: string): Tit
     { label: "Authority having jurisdiction", flex: 1.7, main: input.project.jurisdictionName ?? "Not set", lines: [`NEC ${input.record.edition} as adopted`] },
     { label: "Installer", flex: 2, main: org.name, lines: [person, org.phone].filter((l): l is string => Boolean(l)) },
     { label: "Document", flex: 1.6, main: COMMISSIONING_TITLES[input.kind], lines: [documentLine] },
-    { label: "Commissioning", flex: 0.9, main: input.completion.complete ? "Complete" : "Open", lines: [`Printed ${packetDate(input.generatedAt)}`] },
+    { label: "Commissioning", flex: 0.9, main: input.completion.complete ? "Complete" : "Open", lines: [`Printed ${packetDate(input.generatedAt, input.organization.timeZone)}`] },
   ];
 }
 

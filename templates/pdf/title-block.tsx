@@ -88,7 +88,7 @@ export function TitleBlock({ input, sheet, compact = false }: { input: PacketInp
     { label: "Authority having jurisdiction", flex: 1.7, main: input.jurisdiction.name, lines: [`NEC ${input.jurisdiction.necEdition} as adopted`] },
     { label: "Prepared by", flex: 2, main: p.organizationName, lines: p.phone ? [person, p.phone] : [person] },
     { label: "Document", flex: 1.6, main: PACKET_TITLES[input.kind], lines: [sheet.title] },
-    { label: "Revision", flex: 0.9, main: revisionLabel(input.revision), lines: [<>Issued {packetDate(input.generatedAt)}</>] },
+    { label: "Revision", flex: 0.9, main: revisionLabel(input.revision), lines: [<>Issued {packetDate(input.generatedAt, input.preparedBy.timeZone)}</>] },
   ];
   return <TitleBand cells={cells} count={{ sheet }} caution={SHEET_CAUTION} compact={compact} />;
 }

@@ -72,7 +72,8 @@ export function commissioningFixture({
   const completion = commissioningComplete(results);
   return {
     kind,
-    generatedAt: "2026-12-03T18:05:00.000Z",
+    // 8:05 pm on December 3 in Denver (the organization's zone), already December 4 in UTC.
+    generatedAt: "2026-12-04T03:05:00.000Z",
     organization: { name: "Quillmoor Solar Electric", licenseNumber: "EC-40718 (demo)", phone: "(555) 014-2210", timeZone: "America/Denver" },
     project: {
       number: 1042,

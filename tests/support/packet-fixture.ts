@@ -26,8 +26,9 @@ export function packetFixture({ kind = "permit", variant = 0, busbarA = 200, mai
   return {
     kind,
     revision,
-    generatedAt: "2026-11-20T16:30:00.000Z",
-    preparedBy: { name: "Dana Okafor", organizationName: "Quillmoor Solar Electric", licenseNumber: "EC-40718 (demo)", phone: "(555) 014-2210" },
+    // 7:30 pm on November 20 in Denver, already November 21 in UTC: every sheet must say the 20th.
+    generatedAt: "2026-11-21T02:30:00.000Z",
+    preparedBy: { name: "Dana Okafor", organizationName: "Quillmoor Solar Electric", licenseNumber: "EC-40718 (demo)", phone: "(555) 014-2210", timeZone: "America/Denver" },
     project: {
       number: 1042, customerName: "Imogen Halvorsen", customerEmail: "imogen@mail.example", customerPhone: "(555) 010-3000",
       street: "120 Larkin Mill Rd", city: "Brackenford", state: "CO", postalCode: "80913", utilityAccountNumber: "BL-4410000", meterNumber: "M72000000",

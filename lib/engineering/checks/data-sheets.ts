@@ -1,5 +1,5 @@
 import { fmt, makeCheck } from "../check-result";
-import { COMMON_PRACTICE, clause } from "../clauses";
+import { DESIGN_GUIDELINE, clause } from "../clauses";
 import type { ArrayDesign, CheckResult, CheckStatus, Inverter, PvModule, Site, TempCoefficient } from "../types";
 
 // Plausibility of the data-sheet figures the review computes with. The ranges are common practice for
@@ -40,7 +40,7 @@ const unitText = (c: TempCoefficient) => `${c.value} ${c.unit === "%/C" ? "%/°C
 function moduleProblems(m: PvModule, site: Site): CheckResult[] {
   const out: CheckResult[] = [];
   const edition = site.necEdition;
-  const problem = (key: string, title: string, status: CheckStatus, value: number | null, message: string, fix: string, basis = COMMON_PRACTICE) =>
+  const problem = (key: string, title: string, status: CheckStatus, value: number | null, message: string, fix: string, basis = DESIGN_GUIDELINE) =>
     out.push(makeCheck({ id: `data-sheet:module.${key}`, title, status, value, limit: null, unit: "", clause: basis, edition, message, fix, field: `module.${key}` }));
 
   if (m.vocTempCoeff) {
@@ -55,7 +55,7 @@ function moduleProblems(m: PvModule, site: Site): CheckResult[] {
         pct,
         `The module's Voc temperature coefficient, ${unitText(m.vocTempCoeff)}${asV}, is ${plausible ? "outside" : "far outside"} the usual −0.2 to −0.5 %/°C of crystalline modules${plausible ? "" : ": most likely a unit slip"}. The cold string voltage uses the higher of that figure and the Table 690.7(A) factor.`,
         `Check the data sheet's Voc coefficient and its unit (%/°C, or V/°C: about Voc × −0.002 to −0.005).`,
-        `${COMMON_PRACTICE}; ${clause("maxVoltage", edition)}`,
+        `${DESIGN_GUIDELINE}; ${clause("maxVoltage", edition)}`,
       );
     }
   }
@@ -99,14 +99,14 @@ function inverterProblems(inv: Inverter, site: Site): CheckResult[] {
     // A current below what the rated power needs understates the breaker and conductors sized from it.
     out.push(makeCheck({
       id: `data-sheet:inverters.${inv.id}.acOutputCurrentA`, title: `${inv.model} output current`, status: "fail", value: inv.acOutputCurrentA, limit: neededA, unit: "A",
-      clause: `${COMMON_PRACTICE}; ${clause("acCurrent", edition)}`, edition,
+      clause: `${DESIGN_GUIDELINE}; ${clause("acCurrent", edition)}`, edition,
       message: `The ${inv.model}'s ${inv.acOutputCurrentA} A output current cannot carry its ${inv.acPowerW} W at ${inv.acVoltageV} V${inv.phase === 3 ? " three-phase" : ""}, which needs ${fmt(neededA)} A; the breaker and conductors are sized from this figure.`,
       fix: "Enter the maximum continuous output current from the data sheet.",
       field: `inverters.${inv.id}.acOutputCurrentA`,
     }));
   }
   const window = (key: string, message: string) =>
-    out.push(makeCheck({ id: `data-sheet:inverters.${inv.id}.${key}`, title: `${inv.model} MPPT window`, status: "warn", value: null, limit: null, unit: "", clause: COMMON_PRACTICE, edition, message, fix: "Check the MPPT window and the maximum DC input voltage against the data sheet.", field: `inverters.${inv.id}.${key}` }));
+    out.push(makeCheck({ id: `data-sheet:inverters.${inv.id}.${key}`, title: `${inv.model} MPPT window`, status: "warn", value: null, limit: null, unit: "", clause: DESIGN_GUIDELINE, edition, message, fix: "Check the MPPT window and the maximum DC input voltage against the data sheet.", field: `inverters.${inv.id}.${key}` }));
   if (inv.mpptMinV !== undefined && inv.mpptMaxV !== undefined && inv.mpptMinV >= inv.mpptMaxV) window("mpptMaxV", `The ${inv.model}'s MPPT maximum ${inv.mpptMaxV} V is not above its minimum ${inv.mpptMinV} V.`);
   if (inv.mpptMaxV !== undefined && inv.mpptMaxV > inv.maxDcInputV) window("mpptMaxV", `The ${inv.model}'s MPPT maximum ${inv.mpptMaxV} V is above its ${inv.maxDcInputV} V maximum DC input.`);
   return out;
@@ -118,7 +118,7 @@ function deviceProblems(design: ArrayDesign, site: Site): CheckResult[] {
   // The rapid shutdown check and the field record's expected string voltage are built from this figure.
   return [makeCheck({
     id: "data-sheet:moduleLevelDevice.shutdownOutputV", title: `${d.model} voltage while shut down`, status: "warn", value: d.shutdownOutputV, limit: null, unit: "V",
-    clause: `${COMMON_PRACTICE}; ${clause("rapidShutdown", site.necEdition)}`, edition: site.necEdition,
+    clause: `${DESIGN_GUIDELINE}; ${clause("rapidShutdown", site.necEdition)}`, edition: site.necEdition,
     message: `The ${d.model} is entered as holding ${d.shutdownOutputV} V while shut down; such devices hold about 0.1 to 3 V, most about 1 V.`,
     fix: "Check the device's shutdown output voltage on its data sheet.",
     field: "moduleLevelDevice.shutdownOutputV",
@@ -131,7 +131,7 @@ export function checkDataSheets(design: ArrayDesign, site: Site): CheckResult[] 
   if (problems.length > 0) return problems;
   return [
     makeCheck({
-      id: "data-sheet", title: "Data-sheet figures", status: "pass", value: null, limit: null, unit: "", clause: COMMON_PRACTICE, edition: site.necEdition,
+      id: "data-sheet", title: "Data-sheet figures", status: "pass", value: null, limit: null, unit: "", clause: DESIGN_GUIDELINE, edition: site.necEdition,
       message: "The module's and inverters' figures the review uses (coefficients, Voc and Vmp, Isc and Imp, output current) are within their usual ranges.",
     }),
   ];

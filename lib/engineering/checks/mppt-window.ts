@@ -1,5 +1,5 @@
 import { atLeast, atMost, fmt, makeCheck } from "../check-result";
-import { COMMON_PRACTICE } from "../clauses";
+import { INVERTER_DATA_SHEET } from "../clauses";
 import { inverterById, microInverters, usesOptimizers } from "../design-lookup";
 import type { ArrayDesign, CheckResult, Inverter, PvModule, PvString, Site } from "../types";
 
@@ -36,7 +36,7 @@ export function checkMicroMpptWindow(design: ArrayDesign, site: Site): CheckResu
 function windowChecks(design: ArrayDesign, site: Site, inverter: Inverter, n: number, who: string, key: string): CheckResult[] {
   const results: CheckResult[] = [];
   const edition = site.necEdition;
-  const clauseText = `${COMMON_PRACTICE}: inverter MPPT range`;
+  const clauseText = `${INVERTER_DATA_SHEET}: MPPT range`;
   const tCell = cellTempC(design, site);
   if (inverter.mpptMinV !== undefined) {
     const vmpHot = hotModuleVmpV(design.module, tCell);

@@ -1,5 +1,5 @@
 import { atMost, fmt, makeCheck } from "../check-result";
-import { COMMON_PRACTICE, clause, clauses } from "../clauses";
+import { clause, clauses } from "../clauses";
 import { microInverters } from "../design-lookup";
 import type { ArrayDesign, CheckResult, Design, PvString, Site } from "../types";
 
@@ -70,7 +70,7 @@ export function checkRapidShutdown(design: Design, site: Site): CheckResult[] {
       limit: OUTSIDE_BOUNDARY_MAX_V,
       unit: "V",
       edition,
-      clause: `${clauses(edition, "rapidShutdownOutside", "rapidShutdownInside")}; ${COMMON_PRACTICE} ${perDeviceV} V per device`,
+      clause: `${clauses(edition, "rapidShutdownOutside", "rapidShutdownInside")}; ${perDeviceV} V per device in shutdown`,
       message: `With the array shut down, string ${s.id}'s ${s.modulesInSeries} devices should hold about ${fmt(v)} V: ${
         outside ? "within 30 V, so its wiring may leave the array" : inside ? "within 80 V inside the array but above 30 V for wiring outside it" : "above the 80 V allowed even inside the array"
       }.`,

@@ -1,5 +1,5 @@
 import { atMost, fmt, makeCheck } from "../check-result";
-import { COMMON_PRACTICE, DESIGN_CONSISTENCY } from "../clauses";
+import { DESIGN_GUIDELINE, DESIGN_CONSISTENCY } from "../clauses";
 import { totalModuleCount } from "../design-lookup";
 import { requirePositive } from "../errors";
 import type { CheckResult, Design, Site } from "../types";
@@ -33,7 +33,7 @@ export function checkDcToAcRatio(design: Design, site: Site): CheckResult[] {
       value: r.dcToAcRatio,
       limit: DC_TO_AC_WARN_ABOVE,
       unit: "",
-      clause: COMMON_PRACTICE,
+      clause: DESIGN_GUIDELINE,
       edition: site.necEdition,
       message: `${r.moduleCount} modules make ${fmt(r.dcKw, 3)} kW DC for ${fmt(r.acKw, 3)} kW of inverter output, a ratio of ${fmt(r.dcToAcRatio)}${ok ? "." : "; the inverters will clip a noticeable share of the energy."}`,
       fix: ok ? undefined : "Add inverter capacity or remove modules; check the inverter maker's DC to AC limit.",

@@ -1,5 +1,5 @@
 import { atMost, fmt, makeCheck, withArticle } from "../check-result";
-import { COMMON_PRACTICE, clause } from "../clauses";
+import { DESIGN_GUIDELINE, clause } from "../clauses";
 import { inverterById, usesOptimizers } from "../design-lookup";
 import { DesignInputError, requireNonNegative } from "../errors";
 import { CONDUCTOR_SIZES, sizeIndex, sizeLabel } from "../tables/conductor-sizes";
@@ -96,7 +96,7 @@ export function checkRunVoltageDrop(design: Design, site: Site, run: ConductorRu
       value: percent,
       limit: VOLTAGE_DROP_WARN_PERCENT,
       unit: "%",
-      clause: `${clause("voltageDrop", site.necEdition)}; ${COMMON_PRACTICE} 2 %`,
+      clause: `${clause("voltageDrop", site.necEdition)}; ${DESIGN_GUIDELINE} 2 %`,
       edition: site.necEdition,
       message: `Run "${run.label}" (${run.lengthFt} ft one way, ${sizeLabel(run.conductor.size)}) loses ${fmt(dropV)} V, ${fmt(percent)} % of its working voltage.`,
       fix: status === "pass" ? undefined : better ? largerSizeFix(design, site, run, better) : "Shorten the run or split the circuit.",
@@ -121,7 +121,7 @@ export function checkPathVoltageDrop(design: Design, site: Site, path: VoltageDr
       value: percent,
       limit: VOLTAGE_DROP_FAIL_PERCENT,
       unit: "%",
-      clause: `${clause("voltageDrop", site.necEdition)}; ${COMMON_PRACTICE} 2 %, 5 % in total`,
+      clause: `${clause("voltageDrop", site.necEdition)}; ${DESIGN_GUIDELINE} 2 %, 5 % in total`,
       edition: site.necEdition,
       message: `Along "${path.label}" (${runs.length} runs) the drops add up to ${fmt(percent)} %; we flag above 2 % and fail above 5 %.`,
       fix: status === "pass" ? undefined : "Use larger conductors on the longest runs.",

@@ -1,4 +1,5 @@
 import "server-only";
+import { DEFAULT_TIME_ZONE } from "@/lib/domain/time-zones";
 import { Jurisdiction, Organization, Utility } from "@/models";
 import { toEngineInput } from "@/lib/design/to-engine";
 import { runDesignReview } from "@/lib/design/run-review";
@@ -53,7 +54,7 @@ export async function buildPacketInput({ viewer, projectId, kind }: { viewer: Vi
   return {
     kind,
     generatedAt: new Date().toISOString(),
-    preparedBy: { name: viewer.name, organizationName: organization?.name ?? "", licenseNumber: organization?.licenseNumber ?? null, phone: organization?.phone ?? null },
+    preparedBy: { name: viewer.name, organizationName: organization?.name ?? "", licenseNumber: organization?.licenseNumber ?? null, phone: organization?.phone ?? null, timeZone: organization?.timeZone ?? DEFAULT_TIME_ZONE },
     project: {
       number: project.number, customerName: project.customerName, customerEmail: project.customerEmail, customerPhone: project.customerPhone, street: project.street,
       city: project.city, state: project.state, postalCode: project.postalCode, utilityAccountNumber: project.utilityAccountNumber, meterNumber: project.meterNumber,

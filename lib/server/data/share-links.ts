@@ -1,4 +1,5 @@
 import "server-only";
+import { DEFAULT_TIME_ZONE, localIsoDate, localLongDate } from "@/lib/domain/time-zones";
 import { Op } from "sequelize";
 import { z } from "zod";
 import { Organization, Packet, ShareLink, ShareLinkAccess, ShareLinkMiss, ShareLinkPacket, User } from "@/models";
@@ -13,6 +14,7 @@ import { db } from "../db";
 import { env } from "../env";
 import { enqueueMail } from "../services/outbox";
 import { hashToken, newToken } from "../tokens";
+import { getOrganization } from "./organizations";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
 import { getProjectById } from "./projects";
@@ -81,17 +83,18 @@ export async function createShareLink({ viewer, projectId, input }: { viewer: Vi
   const url = `${env().APP_URL}/share/${token}`;
   const expiresAt = new Date(Date.now() + values.expiresInDays * DAY_MS);
   const recipientEmail = values.recipientEmail || null;
+  const organization = await getOrganization({ viewer });
+  const zone = organization.timeZone;
   const id = await sequelize.transaction(async (transaction) => {
     const link = await ShareLink.create({ organizationId: viewer.organizationId, projectId, tokenHash, recipientEmail, note: values.note, expiresAt, createdById: viewer.id }, { transaction });
     await ShareLinkPacket.bulkCreate(packets.map((p) => ({ shareLinkId: link.id, packetId: p.id })), { transaction });
     await recordAudit(
-      { viewer, action: "share-link.created", entityType: "project", entityId: projectId, changes: { inspectorLink: { before: null, after: `${packets.map(revisionLabel).join(", ")} to ${recipientEmail ?? "no recipient"}, until ${expiresAt.toISOString().slice(0, 10)}` } } },
+      { viewer, action: "share-link.created", entityType: "project", entityId: projectId, changes: { inspectorLink: { before: null, after: `${packets.map(revisionLabel).join(", ")} to ${recipientEmail ?? "no recipient"}, until ${localIsoDate(expiresAt.toISOString(), zone)}` } } },
       { transaction },
     );
     if (recipientEmail) {
-      const organization = await Organization.findByPk(viewer.organizationId, { transaction });
       const input = packets[0].input as unknown as PacketInput;
-      const mail = inspectorLinkEmail({ organizationName: organization?.name ?? "", senderName: viewer.name, siteAddress: siteAddress(input), revisions: packets.map(revisionLabel), note: values.note, url, expiresOn: expiresAt.toISOString().slice(0, 10) });
+      const mail = inspectorLinkEmail({ organizationName: organization.name, senderName: viewer.name, siteAddress: siteAddress(input), revisions: packets.map(revisionLabel), note: values.note, url, expiresOn: localLongDate(expiresAt.toISOString(), zone) });
       await enqueueMail({ to: recipientEmail, ...mail, organizationId: viewer.organizationId }, { transaction });
     }
     return link.id;
@@ -139,6 +142,8 @@ export async function revokeShareLink({ viewer, shareLinkId }: { viewer: Viewer;
 /** What the public page shows: taken from the newest shared revision, so it matches the PDFs. */
 export type SharedView = {
   organizationName: string;
+  /** The sending organization's zone: the page's dates are its calendar days. */
+  timeZone: string;
   expiresAt: string;
   note: string;
   input: PacketInput;
@@ -166,7 +171,10 @@ async function liveLinkByToken(token: string, client: ClientInfo) {
   }
   const status = statusOf(link);
   if (status === "revoked") throw new AppError("GONE", "This link was withdrawn by the sender. Ask them for a new one if you still need the documents.");
-  if (status === "expired") throw new AppError("GONE", `This link expired on ${link.expiresAt.toISOString().slice(0, 10)}. Ask the sender for a new one if you still need the documents.`);
+  if (status === "expired") {
+    const organization = await Organization.findByPk(link.organizationId, { attributes: ["timeZone"] });
+    throw new AppError("GONE", `This link expired on ${localLongDate(link.expiresAt.toISOString(), organization?.timeZone ?? DEFAULT_TIME_ZONE)}. Ask the sender for a new one if you still need the documents.`);
+  }
   return link;
 }
 
@@ -193,6 +201,7 @@ export async function openShareLink(token: string, client: ClientInfo): Promise<
   const newest = [...packets].sort((a, b) => (b.readyAt?.getTime() ?? 0) - (a.readyAt?.getTime() ?? 0))[0];
   return {
     organizationName: organization?.name ?? "",
+    timeZone: organization?.timeZone ?? DEFAULT_TIME_ZONE,
     expiresAt: link.expiresAt.toISOString(),
     note: link.note,
     input: newest.input as unknown as PacketInput,

@@ -36,6 +36,9 @@ describe("commissioning report", () => {
     open.pages.forEach((text, i) => {
       expect(text).toContain(`Page ${i + 1} of ${open.pages.length}`);
       expect(text).toContain("Project 1042 · Imogen Halvorsen");
+      // Printed at 8:05 pm in Denver: the organization's day, not the UTC one.
+      expect(text).toContain("Printed 2026-12-03");
+      expect(text).not.toContain("2026-12-04");
       expect(text).toContain("Commissioning report Readings and results");
       expect(text).toContain("Caution: PV conductors are energized whenever light reaches the modules, and inverter capacitors hold a charge after shutdown.");
     });

@@ -114,6 +114,9 @@ describe("permit packet, string inverter with shutdown devices, Rev 1", () => {
     expect(summary!.text).toContain("Largest PV breaker the busbar allows 40 A");
     expect(summary!.text).toContain("UL 1741 SB; IEEE 1547-2018 Category B");
     expect(summary!.text).toContain("SR-1 Shutdown Unit");
+    // A reader's tools must find the unit: "240 V, single phase", never "240 , single phase".
+    expect(summary!.text).toContain("Service 240 V, single phase, 200 A busbar, 200 A main");
+    expect(summary!.text).toContain("Point of connection Load side, 40 A PV breaker");
   });
 
   test("the single-line sheet carries the drawn diagram", () => {

@@ -1,4 +1,5 @@
 import { SingleLineSvg } from "@/components/sld/single-line-svg";
+import { formatInZone } from "@/lib/domain/time-zones";
 import { formatNumber, inverterCounts, siteAddress } from "@/lib/packets/pdf-facts";
 import type { SharedView } from "@/lib/server/data/share-links";
 import { layoutSingleLine } from "@/lib/sld";
@@ -23,7 +24,7 @@ export function SharedPacketView({ token, view }: { token: string; view: SharedV
         <p className="text-sm text-ink-faint">Shared by {view.organizationName}</p>
         <h1>{siteAddress(input)}</h1>
         <p className="mt-1 text-sm text-ink-soft" data-testid="read-only-note">
-          This page is read only: you can view and download the documents below, nothing here can be changed. The link works until {view.expiresAt.slice(0, 10)}.
+          This page is read only: you can view and download the documents below, nothing here can be changed. The link works until {formatInZone(view.expiresAt, view.timeZone, "date")}.
         </p>
         {view.note ? <p className="mt-2 text-sm">Note from the sender: {view.note}</p> : null}
       </div>
@@ -48,7 +49,7 @@ export function SharedPacketView({ token, view }: { token: string; view: SharedV
             <li key={r.packetId} className="flex flex-wrap items-center justify-between gap-2 py-2" data-testid="shared-revision">
               <span>
                 <span className="font-medium">{r.label}</span>
-                <span className="ml-2 text-xs text-ink-faint">{[r.pageCount ? `${r.pageCount} pages` : null, r.readyAt ? `generated ${r.readyAt.slice(0, 10)}` : null].filter(Boolean).join(" · ")}</span>
+                <span className="ml-2 text-xs text-ink-faint">{[r.pageCount ? `${r.pageCount} pages` : null, r.readyAt ? `generated ${formatInZone(r.readyAt, view.timeZone, "date")}` : null].filter(Boolean).join(" · ")}</span>
               </span>
               <a className="rounded bg-copper px-3 py-1.5 text-sm text-white no-underline" href={`/share/${encodeURIComponent(token)}/packets/${r.packetId}`} download>
                 Download PDF

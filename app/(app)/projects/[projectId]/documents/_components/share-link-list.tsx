@@ -32,7 +32,7 @@ export function ShareLinkList({ links, onChange }: { links: ShareLinkDto[]; onCh
             <div>
               <p className="font-medium">{link.recipientEmail ?? "No recipient (link copied by hand)"}</p>
               <p className="text-xs text-ink-faint">
-                {link.revisions.map((r) => r.label).join(", ")} · made by {link.createdBy ?? "—"} on {link.createdAt.slice(0, 10)} · expires {link.expiresAt.slice(0, 10)}
+                {link.revisions.map((r) => r.label).join(", ")} · made by {link.createdBy ?? "—"} on <LocalTime iso={link.createdAt} style="date" /> · expires <LocalTime iso={link.expiresAt} style="date" />
               </p>
               {link.note ? <p className="text-xs text-ink-soft">Note: {link.note}</p> : null}
             </div>
