@@ -45,6 +45,7 @@ export function initModels(sequelize: Sequelize) {
   Project.belongsTo(Utility, { as: "utility", foreignKey: "utilityId" });
   Project.belongsTo(User, { as: "coordinator", foreignKey: "coordinatorId" });
   Project.belongsTo(User, { as: "installer", foreignKey: "installerId" });
+  Project.hasOne(Design, { as: "design", foreignKey: "projectId" });
   Packet.belongsTo(User, { as: "requestedBy", foreignKey: "requestedById" });
   StageChange.belongsTo(User, { as: "changedBy", foreignKey: "changedById" });
   AuditEvent.belongsTo(User, { as: "actor", foreignKey: "actorId" });

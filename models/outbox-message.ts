@@ -19,6 +19,8 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
   declare lastError: CreationOptional<string | null>;
   declare smtpResponse: CreationOptional<string | null>;
   declare sentAt: CreationOptional<Date | null>;
+  /** Set on a message held for later news of the same thing to join (see holdOrMergeMail). */
+  declare coalesceKey: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -38,6 +40,7 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
         lastError: { type: DataTypes.TEXT, allowNull: true },
         smtpResponse: { type: DataTypes.TEXT, allowNull: true },
         sentAt: { type: DataTypes.DATE, allowNull: true },
+        coalesceKey: { type: DataTypes.STRING(200), allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

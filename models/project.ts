@@ -2,6 +2,7 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import type { Stage } from "@/lib/domain/stages";
 import type { Jurisdiction } from "./jurisdiction";
 import type { Utility } from "./utility";
+import type { Design } from "./design";
 import type { User } from "./user";
 
 export class Project extends Model<InferAttributes<Project>, InferCreationAttributes<Project>> {
@@ -35,6 +36,7 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
   declare utility?: NonAttribute<Utility | null>;
   declare coordinator?: NonAttribute<User | null>;
   declare installer?: NonAttribute<User | null>;
+  declare design?: NonAttribute<Design | null>;
 
   static initModel(sequelize: Sequelize) {
     Project.init(

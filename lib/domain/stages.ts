@@ -44,6 +44,24 @@ export const NEXT_ACTION: Record<Stage, string> = {
   closed: "Nothing left to do",
 };
 
+/** The design review's latest outcome as the project knows it; null when no design was saved yet. */
+export type DesignReviewState = "incomplete" | "pass" | "warn" | "fail" | null;
+
+/**
+ * What the office does next: the stage's usual step, unless the design says otherwise. A draft whose
+ * review passes is ready to be marked checked; a checked design that no longer passes needs fixing first.
+ */
+export function nextActionFor(stage: Stage, review: DesignReviewState): string {
+  const passes = review === "pass" || review === "warn";
+  if (stage === "draft") {
+    if (passes) return review === "warn" ? "Read the checks that need review, then mark the design checked" : "The review passes: mark the design checked";
+    if (review === "fail") return "Fix the failing checks of the design review";
+    return NEXT_ACTION.draft;
+  }
+  if (stage === "design_checked" && !passes) return "The design no longer passes its review: fix it before filing";
+  return NEXT_ACTION[stage];
+}
+
 export function isStage(value: string): value is Stage {
   return (STAGES as readonly string[]).includes(value);
 }

@@ -1,13 +1,20 @@
 import { renderEmail } from "./layout";
 
-/** To the people on a project when someone else moves it to another stage. */
-export function stageChangedEmail({ changedBy, projectNumber, customerName, siteAddress, fromLabel, toLabel, nextAction, note, url }: { changedBy: string; projectNumber: number; customerName: string; siteAddress: string; fromLabel: string; toLabel: string; nextAction: string; note: string; url: string }) {
-  const subject = `Project ${projectNumber} is now “${toLabel}”: ${customerName}`;
+export type StageStep = { fromLabel: string; toLabel: string; changedBy: string; note: string };
+
+/**
+ * To the people on a project when someone else moves its stage. Moves made within a short while are
+ * gathered into one message: every step, in order, then where the project stands now.
+ */
+export function stageChangedEmail({ projectNumber, customerName, siteAddress, steps, nextAction, url }: { projectNumber: number; customerName: string; siteAddress: string; steps: StageStep[]; nextAction: string; url: string }) {
+  const last = steps[steps.length - 1]!;
+  const subject = `Project ${projectNumber} is now “${last.toLabel}”: ${customerName}`;
+  const moves = steps.map((s) => `${s.changedBy} moved it from “${s.fromLabel}” to “${s.toLabel}”.${s.note ? ` Note: ${s.note}` : ""}`);
   const body = renderEmail({
     paragraphs: [
-      `${changedBy} moved the PV project at ${siteAddress} from “${fromLabel}” to “${toLabel}”.`,
-      ...(note ? [`Note: ${note}`] : []),
-      `Next: ${nextAction}.`,
+      steps.length === 1 ? `The PV project at ${siteAddress} changed stage.` : `The PV project at ${siteAddress} changed stage ${steps.length} times in a short while.`,
+      ...moves,
+      `It is now “${last.toLabel}”. Next: ${nextAction}.`,
     ],
     action: { label: "Open the project", url },
   });

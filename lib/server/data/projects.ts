@@ -1,14 +1,14 @@
 import "server-only";
 import { literal, Op, type OrderItem, type Transaction, type WhereOptions } from "sequelize";
-import { CommissioningRecord, Jurisdiction, Project, ProjectFile, StageChange, User, Utility } from "@/models";
+import { CommissioningRecord, Design, Jurisdiction, Project, ProjectFile, StageChange, User, Utility } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
-import { NEXT_ACTION, STAGE_LABELS, STAGES, type Stage } from "@/lib/domain/stages";
+import { NEXT_ACTION, nextActionFor, STAGE_LABELS, STAGES, type Stage } from "@/lib/domain/stages";
 import { AppError } from "@/lib/errors";
 import type { ProjectListQuery, ProjectValues } from "@/lib/schemas/project";
-import { stageChangedEmail } from "@/templates/email/stage-changed";
+import { stageChangedEmail, type StageStep } from "@/templates/email/stage-changed";
 import { db } from "../db";
 import { env } from "../env";
-import { enqueueMail } from "../services/outbox";
+import { holdOrMergeMail } from "../services/outbox";
 import { isUuid } from "./ids";
 import { diffFields, recordAudit } from "./audit";
 
@@ -50,6 +50,8 @@ const INCLUDE = [
   { model: Utility, as: "utility", attributes: ["id", "name"] },
   { model: User, as: "coordinator", attributes: ["id", "name"] },
   { model: User, as: "installer", attributes: ["id", "name"] },
+  // Only the review's outcome: it decides the next action a draft shows.
+  { model: Design, as: "design", attributes: ["reviewStatus"] },
 ];
 
 function toProjectDto(p: Project, now = Date.now()): ProjectDto {
@@ -74,7 +76,7 @@ function toProjectDto(p: Project, now = Date.now()): ProjectDto {
     servicePhases: p.servicePhases,
     stage: p.stage as Stage,
     stageLabel: STAGE_LABELS[p.stage as Stage],
-    nextAction: NEXT_ACTION[p.stage as Stage],
+    nextAction: nextActionFor(p.stage as Stage, p.design?.reviewStatus ?? null),
     stageChangedAt: p.stageChangedAt.toISOString(),
     daysInStage: Math.max(0, Math.floor((now - p.stageChangedAt.getTime()) / DAY_MS)),
     coordinator: p.coordinator ? { id: p.coordinator.id, name: p.coordinator.name } : null,
@@ -197,12 +199,19 @@ async function fieldWorkMissing(projectId: string, transaction: Transaction): Pr
   return signed ? null : "No signed certificate of completion has been uploaded.";
 }
 
+/** How long a stage-change e-mail waits for further moves of the same project to join it. */
+export const STAGE_MAIL_HOLD_SECONDS = 45;
+
 /** Moves a project to another stage; the stage change and its audit event commit together or not at all. */
 export async function changeProjectStage({ viewer, projectId, toStage, note }: { viewer: Viewer; projectId: string; toStage: Stage; note: string }): Promise<ProjectDto> {
   const sequelize = db();
   await sequelize.transaction(async (transaction) => {
     const project = await findVisibleProject(viewer, projectId, transaction);
     if (!can(viewer, "project:change-stage", project)) throw new AppError("FORBIDDEN", "You cannot change this project's stage.");
+    // One change at a time per project: the stage read here is the one moved from, and the people's
+    // held e-mail (below) is merged into rather than doubled.
+    await Project.findByPk(projectId, { attributes: ["id"], lock: transaction.LOCK.UPDATE, transaction });
+    await project.reload({ transaction });
     const fromStage = project.stage;
     if (fromStage === toStage) throw new AppError("CONFLICT", `The project is already in “${STAGE_LABELS[toStage]}”.`);
     if (toStage === "commissioned" && !note.trim()) {
@@ -216,19 +225,25 @@ export async function changeProjectStage({ viewer, projectId, toStage, note }: {
     // The coordinator and installer hear of it, unless they made the change themselves.
     const people = [project.coordinatorId, project.installerId].filter((id): id is string => Boolean(id) && id !== viewer.id);
     const recipients = people.length ? await User.findAll({ where: { id: people, organizationId: viewer.organizationId, isActive: true }, transaction }) : [];
+    // Held briefly: further moves of this project in the next moments join the same message.
+    const stepsSince = async (since: Date): Promise<StageStep[]> => {
+      const rows = await StageChange.findAll({ where: { projectId, createdAt: { [Op.gte]: since } }, include: [{ model: User, as: "changedBy", attributes: ["name"] }], order: [["createdAt", "ASC"]], transaction });
+      return rows.map((r) => ({ fromLabel: STAGE_LABELS[r.fromStage as Stage] ?? r.fromStage ?? "—", toLabel: STAGE_LABELS[r.toStage as Stage], changedBy: r.changedBy?.name ?? "Someone", note: r.note ?? "" }));
+    };
     for (const person of recipients) {
-      const mail = stageChangedEmail({
-        changedBy: viewer.name,
-        projectNumber: project.number,
-        customerName: project.customerName,
-        siteAddress: `${project.street}, ${project.city}, ${project.state} ${project.postalCode}`,
-        fromLabel: STAGE_LABELS[fromStage as Stage],
-        toLabel: STAGE_LABELS[toStage],
-        nextAction: NEXT_ACTION[toStage],
-        note,
-        url: `${env().APP_URL}/projects/${projectId}`,
-      });
-      await enqueueMail({ to: person.email, ...mail, organizationId: viewer.organizationId }, { transaction });
+      await holdOrMergeMail(
+        { coalesceKey: `stage-change:${projectId}`, holdSeconds: STAGE_MAIL_HOLD_SECONDS, organizationId: viewer.organizationId, to: person.email, startedAt: at },
+        async (since) =>
+          stageChangedEmail({
+            projectNumber: project.number,
+            customerName: project.customerName,
+            siteAddress: `${project.street}, ${project.city}, ${project.state} ${project.postalCode}`,
+            steps: await stepsSince(since),
+            nextAction: NEXT_ACTION[toStage],
+            url: `${env().APP_URL}/projects/${projectId}`,
+          }),
+        { transaction },
+      );
     }
   });
   return getProjectById({ viewer, projectId });

@@ -24,6 +24,38 @@ export async function enqueueMail(mail: QueuedMail, { transaction }: { transacti
   return { id: row.id };
 }
 
+/**
+ * Holds one e-mail for `holdSeconds` from `startedAt` so that later news of the same thing (same
+ * `coalesceKey`) joins it instead of making another message: `compose` is given the start of the
+ * held window (this news's `startedAt` when nothing is held) and writes the whole mail from
+ * everything since then. Call it inside the change's transaction, after locking what the key names,
+ * so two changes at once merge rather than race.
+ */
+export async function holdOrMergeMail(
+  { coalesceKey, holdSeconds, organizationId, to, startedAt }: { coalesceKey: string; holdSeconds: number; organizationId: string; to: string; startedAt: Date },
+  compose: (since: Date) => Promise<Pick<QueuedMail, "subject" | "text" | "html">>,
+  { transaction }: { transaction: Transaction },
+): Promise<{ id: string; merged: boolean }> {
+  db();
+  const now = new Date();
+  const held = await OutboxMessage.findOne({
+    where: { coalesceKey, toAddress: to, status: "queued", attempts: 0, nextAttemptAt: { [Op.gt]: now } },
+    lock: transaction.LOCK.UPDATE,
+    transaction,
+  });
+  // A held row is due at its window's start plus the hold, so the start is read back from it.
+  const mail = await compose(held ? new Date(held.nextAttemptAt.getTime() - holdSeconds * 1000) : startedAt);
+  if (held) {
+    await held.update({ subject: mail.subject, textBody: mail.text, htmlBody: mail.html }, { transaction });
+    return { id: held.id, merged: true };
+  }
+  const row = await OutboxMessage.create(
+    { organizationId, toAddress: to, subject: mail.subject, textBody: mail.text, htmlBody: mail.html, attachments: [], nextAttemptAt: new Date(startedAt.getTime() + holdSeconds * 1000), coalesceKey },
+    { transaction },
+  );
+  return { id: row.id, merged: false };
+}
+
 type Outcome = keyof DeliveryReport;
 
 /**

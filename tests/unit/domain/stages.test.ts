@@ -1,5 +1,5 @@
-import { describe, expect, it } from "vitest";
-import { isStage, NEXT_ACTION, STAGE_LABELS, STAGES, stageIndex } from "@/lib/domain/stages";
+import { describe, expect, it, test } from "vitest";
+import { isStage, NEXT_ACTION, STAGE_LABELS, STAGES, stageIndex, nextActionFor } from "@/lib/domain/stages";
 
 describe("stages", () => {
   it("run from draft to closed with PTO before closing", () => {
@@ -24,4 +24,18 @@ describe("stages", () => {
   ])("isStage(%j) is %s", (value, expected) => {
     expect(isStage(value)).toBe(expected);
   });
+});
+
+describe("nextActionFor", () => {
+  // Our own workflow words (invented for the product): what the office does next follows the design's real state.
+  test.each([
+    ["draft", null, "Finish the design and run the review"],
+    ["draft", "incomplete", "Finish the design and run the review"],
+    ["draft", "fail", "Fix the failing checks of the design review"],
+    ["draft", "pass", "The review passes: mark the design checked"],
+    ["draft", "warn", "Read the checks that need review, then mark the design checked"],
+    ["design_checked", "pass", "Assemble and file the permit packet"],
+    ["design_checked", "fail", "The design no longer passes its review: fix it before filing"],
+    ["permit_filed", "fail", "Follow up with the AHJ on plan review"],
+  ] as const)("%s with a %s review → %s", (stage, review, text) => expect(nextActionFor(stage, review)).toBe(text));
 });

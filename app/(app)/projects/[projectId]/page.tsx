@@ -137,7 +137,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
 
         <section className="panel space-y-4" aria-labelledby="timeline-heading">
           <h2 id="timeline-heading">Stage timeline</h2>
-          {can(viewer, "project:change-stage", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }) ? <StageChangeForm projectId={project.id} current={project.stage} /> : null}
+          {can(viewer, "project:change-stage", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }) ? <StageChangeForm key={project.stage} projectId={project.id} current={project.stage} /> : null}
           <StageTimeline entries={timeline} />
         </section>
       </div>

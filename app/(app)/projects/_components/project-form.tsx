@@ -22,10 +22,11 @@ const EMPTY: FormValues = {
   mainBreakerA: "", busbarA: "", serviceVoltageV: "240", servicePhases: "1", coordinatorId: "", installerId: "",
 };
 
-export function ProjectForm({ projectId, initial, options }: { projectId?: string; initial?: FormValues; options: ProjectFormOptions }) {
+/** `defaultCoordinatorId`: on a new project, the coordinator creating it looks after it unless they choose otherwise. */
+export function ProjectForm({ projectId, initial, options, defaultCoordinatorId = "" }: { projectId?: string; initial?: FormValues; options: ProjectFormOptions; defaultCoordinatorId?: string }) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
-  const form = useForm<FormValues, unknown, z.output<typeof ProjectInput>>({ resolver: zodResolver(ProjectInput), defaultValues: initial ?? EMPTY });
+  const form = useForm<FormValues, unknown, z.output<typeof ProjectInput>>({ resolver: zodResolver(ProjectInput), defaultValues: initial ?? { ...EMPTY, coordinatorId: defaultCoordinatorId } });
   const { errors, isSubmitting } = form.formState;
   const err = (name: keyof FormValues) => errors[name]?.message as string | undefined;
 

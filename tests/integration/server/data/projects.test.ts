@@ -3,7 +3,7 @@ import { Op } from "sequelize";
 import { AuditEvent, CommissioningRecord, OutboxMessage, Project, StageChange } from "@/models";
 import { AppError } from "@/lib/errors";
 import { ProjectInput, ProjectListQuery } from "@/lib/schemas/project";
-import { changeProjectStage, createProject, getProjectById, listProjects, listStageChanges, updateProject } from "@/lib/server/data/projects";
+import { STAGE_MAIL_HOLD_SECONDS, changeProjectStage, createProject, getProjectById, listProjects, listStageChanges, updateProject } from "@/lib/server/data/projects";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, projectFormValues, type OrgFixture } from "../../support/fixtures";
 
@@ -146,9 +146,28 @@ describe("changeProjectStage", () => {
     expect(sent[0].textBody).toContain("Note: Commissioning record complete");
     expect(sent[0].textBody).toContain(`/projects/${project.id}`);
 
+    // A second move moments later joins the installer's held message; the coordinator made it, so theirs stays as it was.
     await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "pto_received", note: "" });
     const second = await OutboxMessage.findAll({ where: { subject: { [Op.like]: `Project ${number} is now “PTO received”%` } } });
     expect(second.map((m) => m.toAddress)).toEqual([acme.users.installer.email]);
+    expect(second[0]!.textBody).toMatch(/moved it from “Utility approved” to “Commissioned”[\s\S]*moved it from “Commissioned” to “PTO received”/);
+    const forInstaller = await OutboxMessage.count({ where: { toAddress: acme.users.installer.email, coalesceKey: `stage-change:${project.id}` } });
+    expect(forInstaller).toBe(1);
+  });
+
+  it("gathers a burst of moves of one project into one e-mail per person, held briefly for more", async () => {
+    // Defect: ten stage changes in a few seconds sent the installer ten e-mails.
+    const project = await makeProject(acme, { stage: "draft", installerId: acme.users.installer.id });
+    const path = ["design_checked", "permit_filed", "permit_issued", "installed", "inspection_passed", "installed", "inspection_passed", "utility_filed", "utility_approved", "utility_filed"] as const;
+    const before = Date.now();
+    for (const toStage of path) await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage, note: "" });
+    const held = await OutboxMessage.findAll({ where: { coalesceKey: `stage-change:${project.id}` } });
+    expect(held.map((m) => m.toAddress)).toEqual([acme.users.installer.email]);
+    expect(held[0]!.textBody).toContain(`changed stage ${path.length} times`);
+    expect(held[0]!.textBody.match(/moved it from/g)).toHaveLength(path.length);
+    expect(held[0]!.subject).toContain("is now “Utility filed”");
+    // Held for the window, then sent like any other message.
+    expect(held[0]!.nextAttemptAt.getTime()).toBeGreaterThanOrEqual(before + (STAGE_MAIL_HOLD_SECONDS - 1) * 1000);
   });
 
   it("refuses installers and the same stage, and changes nothing", async () => {

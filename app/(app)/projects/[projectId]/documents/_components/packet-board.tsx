@@ -1,5 +1,7 @@
 "use client";
 
+import { useRouter } from "next/navigation";
+import { useEffect, useRef } from "react";
 import useSWR from "swr";
 import { PACKET_KINDS } from "@/lib/packets/packet-input";
 import type { PacketDto } from "@/lib/server/data/packets";
@@ -18,6 +20,16 @@ export function PacketBoard({ projectId, initial, canGenerate, reviewStatus }: {
     fallbackData: initial,
     refreshInterval: (latest) => (latest?.some((p) => p.status === "queued" || p.status === "running") ? 1000 : 0),
   });
+  // A revision that just became ready can be shared: the server-rendered share panel is refreshed
+  // when the set of ready revisions grows, not only on the next page load.
+  const router = useRouter();
+  const ready = (data ?? []).filter((p) => p.status === "ready").map((p) => p.id).sort().join(",");
+  const seen = useRef(ready);
+  useEffect(() => {
+    if (ready === seen.current) return;
+    seen.current = ready;
+    router.refresh();
+  }, [ready, router]);
   return (
     <div className="grid gap-6 lg:grid-cols-2">
       {error ? <p role="alert" className="text-sm text-result-fail">{error.message}</p> : null}
