@@ -58,7 +58,7 @@ export function StructuralSheet({ input, sheet }: { input: PacketInput; sheet: S
               weight entered for the plane. Dead load = array weight / array area. Load per attachment = array weight / attachments on the plane.
             </Text>
             <Text style={base.paragraph}>
-              Many AHJs accept arrays up to about {EXPEDITED_DEAD_LOAD_PSF} lb/ft² without a structural letter (common practice); above that, or where the AHJ asks, expect an engineer's review.
+              Many AHJs accept arrays up to about {EXPEDITED_DEAD_LOAD_PSF} lb/ft² without a structural letter; above that, or where the AHJ asks, expect an engineer's review. Ask the AHJ what it accepts.
             </Text>
           </Section>
         </View>

@@ -29,6 +29,8 @@ function expectTitleBlockOnEveryPage(r: Rendered) {
     expect(text, `page ${i + 1}`).toContain(`Sheet ${i + 1} of ${total}`);
     expect(text, `page ${i + 1}`).toContain(`Rev ${r.input.revision}`);
     expect(text, `page ${i + 1}`).toContain("Issued 2026-11-20");
+    // Source marks belong in tests and code comments, never on a sheet.
+    expect(text, `page ${i + 1}`).not.toMatch(/common practice|from memory|\[object Object\]|undefined|NaN/i);
     expect(text, `page ${i + 1}`).toContain(r.input.preparedBy.organizationName);
     expect(text, `page ${i + 1}`).toContain(r.input.jurisdiction.name);
     expect(text, `page ${i + 1}`).toContain("local amendments the AHJ enforces");
