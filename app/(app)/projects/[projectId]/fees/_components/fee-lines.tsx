@@ -4,17 +4,18 @@ import { useRouter } from "next/navigation";
 import { useEffect, useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
+import { feeAmountText } from "@/lib/fees/line-amount";
 import { formatUsd } from "@/lib/fees/money";
 import type { ProjectFeeLineDto } from "@/lib/server/data/project-fees";
 import { payFeesAction } from "../actions";
 
-const STATE_TEXT = { unpaid: "Unpaid", "in-progress": "Payment in progress", paid: "Paid" } as const;
+const STATE_TEXT: Record<ProjectFeeLineDto["state"], string> = { unpaid: "Unpaid", "in-progress": "Payment in progress", paid: "Paid", refunded: "Refunded, unpaid again" };
 
 /** The project's fee lines with their working; unpaid ones can be chosen and paid together. */
 export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId: string; lines: ProjectFeeLineDto[]; canPay: boolean; watchPending: boolean }) {
   const router = useRouter();
-  const payable = lines.filter((l) => l.state !== "paid" && !l.problem && l.amountCents > 0);
-  const [chosen, setChosen] = useState<Set<string>>(() => new Set(payable.filter((l) => l.state === "unpaid").map((l) => l.feeKey)));
+  const payable = lines.filter((l) => l.payable);
+  const [chosen, setChosen] = useState<Set<string>>(() => new Set(payable.filter((l) => l.state === "unpaid" || l.state === "refunded").map((l) => l.feeKey)));
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
   const total = lines.filter((l) => chosen.has(l.feeKey)).reduce((sum, l) => sum + l.amountCents, 0);
@@ -67,7 +68,9 @@ export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId
                   <p className="font-medium">
                     {line.name} <span className="text-sm font-normal text-ink-faint">· {line.authority}</span>
                   </p>
-                  <p className="measure font-semibold">{formatUsd(line.amountCents)}</p>
+                  <p className="measure font-semibold" data-testid="fee-line-amount">
+                    {feeAmountText({ amountCents: line.amountCents, problem: line.problemCode })}
+                  </p>
                 </div>
                 <ul className="measure mt-1 space-y-0.5 text-xs text-ink-soft" aria-label={`Working for ${line.name}`}>
                   {line.arithmetic.map((step, i) => (
