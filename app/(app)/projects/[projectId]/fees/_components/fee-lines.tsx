@@ -15,10 +15,15 @@ const STATE_TEXT: Record<ProjectFeeLineDto["state"], string> = { unpaid: "Unpaid
 export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId: string; lines: ProjectFeeLineDto[]; canPay: boolean; watchPending: boolean }) {
   const router = useRouter();
   const payable = lines.filter((l) => l.payable);
-  const [chosen, setChosen] = useState<Set<string>>(() => new Set(payable.filter((l) => l.state === "unpaid" || l.state === "refunded").map((l) => l.feeKey)));
+  // What the coordinator ticked or unticked; a line they left alone is chosen while it is owed, so a
+  // fee that becomes payable (the valuation was entered) is offered without a reload.
+  const [choice, setChoice] = useState<Map<string, boolean>>(() => new Map());
+  const isChosen = (l: ProjectFeeLineDto) => choice.get(l.feeKey) ?? (l.state === "unpaid" || l.state === "refunded");
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
-  const total = lines.filter((l) => chosen.has(l.feeKey)).reduce((sum, l) => sum + l.amountCents, 0);
+  // Only lines payable now count: one chosen earlier may since wait for the valuation, or be paid.
+  const picked = payable.filter(isChosen);
+  const total = picked.reduce((sum, l) => sum + l.amountCents, 0);
 
   // While a payment waits for the processor's confirmation, look again every couple of seconds.
   useEffect(() => {
@@ -34,7 +39,7 @@ export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId
   function pay() {
     setMessage(undefined);
     startTransition(async () => {
-      const result = await payFeesAction({ projectId, feeKeys: [...chosen] });
+      const result = await payFeesAction({ projectId, feeKeys: picked.map((l) => l.feeKey) });
       if (!result.ok) {
         setMessage(result.message);
         router.refresh();
@@ -58,7 +63,7 @@ export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId
             <li key={line.feeKey} className="flex gap-3 py-3" data-testid="fee-line" data-state={line.state}>
               <div className="pt-0.5">
                 {selectable ? (
-                  <input type="checkbox" className="h-5 w-5 accent-copper" aria-label={`Pay ${line.name}`} checked={chosen.has(line.feeKey)} onChange={(e) => setChosen((s) => { const next = new Set(s); if (e.target.checked) next.add(line.feeKey); else next.delete(line.feeKey); return next; })} />
+                  <input type="checkbox" className="h-5 w-5 accent-copper" aria-label={`Pay ${line.name}`} checked={isChosen(line)} onChange={(e) => setChoice((all) => new Map(all).set(line.feeKey, e.target.checked))} />
                 ) : (
                   <span className="inline-block h-5 w-5" aria-hidden />
                 )}
@@ -88,7 +93,7 @@ export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId
       </ul>
       {canPay && payable.length > 0 ? (
         <div className="flex flex-wrap items-center gap-3 border-t border-paper-edge pt-3">
-          <Button type="button" onClick={pay} disabled={pending || chosen.size === 0}>
+          <Button type="button" onClick={pay} disabled={pending || picked.length === 0}>
             {pending ? "Opening the payment page…" : `Pay ${formatUsd(total)} by card`}
           </Button>
           <span className="text-xs text-ink-faint">Card payment on the payment service&apos;s page; Ohmstead never sees the card number.</span>

@@ -99,12 +99,11 @@ export function RefundForm({ payment }: { payment: PaymentDto }) {
           <ul className="ml-6 space-y-1" aria-label="Fees to refund">
             {open.map((l) => (
               <li key={l.feeKey}>
-                <label className="flex flex-wrap items-baseline gap-x-2 text-sm">
-                  <input type="checkbox" className="h-4 w-4 accent-copper" checked={chosen.has(l.feeKey)} onChange={(e) => toggle(l.feeKey, e.target.checked)} />
-                  <span>
-                    {l.authority}: {l.name}
+                <label className="flex items-start gap-2 text-sm">
+                  <input type="checkbox" className="mt-0.5 h-4 w-4 shrink-0 accent-copper" checked={chosen.has(l.feeKey)} onChange={(e) => toggle(l.feeKey, e.target.checked)} />
+                  <span className="min-w-0 flex-1">
+                    {l.authority}: {l.name} <span className="measure whitespace-nowrap">{formatUsd(l.amountCents)}</span>
                   </span>
-                  <span className="measure">{formatUsd(l.amountCents)}</span>
                 </label>
               </li>
             ))}
