@@ -31,6 +31,7 @@ test("installer on a phone sees site photos as thumbnails and removes a wrong on
 
   // Each photo shows as a thumbnail made on the server: upright, at most 320 pixels on its longer side.
   const thumbnail = tile("roof-east.jpg").getByRole("img", { name: "Site photo: roof-east.jpg" });
+  await thumbnail.scrollIntoViewIfNeeded(); // thumbnails load lazily, as they come into view
   await expect.poll(() => thumbnail.evaluate((img: HTMLImageElement) => (img.complete ? img.naturalWidth : 0))).toBeGreaterThan(0);
   const natural = await thumbnail.evaluate((img: HTMLImageElement) => ({ width: img.naturalWidth, height: img.naturalHeight }));
   expect(natural).toEqual({ width: 240, height: 320 });
