@@ -22,6 +22,7 @@ import { ShareLinkMiss } from "./share-link-miss";
 import { ShareLinkPacket } from "./share-link-packet";
 import { SignInAttempt } from "./sign-in-attempt";
 import { StageChange } from "./stage-change";
+import { StorageRemoval } from "./storage-removal";
 import { User } from "./user";
 import { Utility } from "./utility";
 
@@ -29,7 +30,7 @@ export { AuditEvent, Design, Equipment, Invitation, Jurisdiction, Organization, 
 export { ApiToken };
 export { ShareLink, ShareLinkAccess, ShareLinkMiss, ShareLinkPacket };
 export { OutboxMessage };
-export { CommissioningRecord, ProjectFile };
+export { CommissioningRecord, ProjectFile, StorageRemoval };
 export { FeeSchedule, Payment, PaymentLine, ProcessorEvent, Refund };
 
 let initialized: Sequelize | null = null;
@@ -60,6 +61,7 @@ export function initModels(sequelize: Sequelize) {
   CommissioningRecord.initModel(sequelize);
   ProjectFile.initModel(sequelize);
   ProjectFile.belongsTo(User, { as: "uploadedBy", foreignKey: "uploadedById" });
+  StorageRemoval.initModel(sequelize);
   for (const model of [FeeSchedule, Payment, PaymentLine, Refund, ProcessorEvent]) model.initModel(sequelize);
   Payment.hasMany(PaymentLine, { as: "lines", foreignKey: "paymentId" });
   Payment.hasMany(Refund, { as: "refunds", foreignKey: "paymentId" });

@@ -4,6 +4,9 @@ import type { User } from "./user";
 
 export type PacketStatus = "queued" | "running" | "ready" | "failed";
 
+/** One step of a generation as the worker recorded it when starting it. */
+export type PacketStepRecord = { at: string; progress: number; text: string };
+
 /** One generation of a project's permit or interconnection packet; ready rows are its revisions. */
 export class Packet extends Model<InferAttributes<Packet>, InferCreationAttributes<Packet>> {
   declare id: CreationOptional<string>;
@@ -14,6 +17,7 @@ export class Packet extends Model<InferAttributes<Packet>, InferCreationAttribut
   declare status: CreationOptional<PacketStatus>;
   declare progress: CreationOptional<number>;
   declare step: CreationOptional<string>;
+  declare steps: CreationOptional<PacketStepRecord[]>;
   declare input: Record<string, unknown>;
   declare changes: CreationOptional<string[]>;
   declare overrideReason: string | null;
@@ -41,6 +45,7 @@ export class Packet extends Model<InferAttributes<Packet>, InferCreationAttribut
         status: { type: DataTypes.STRING(10), allowNull: false, defaultValue: "queued" },
         progress: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         step: { type: DataTypes.STRING(80), allowNull: false, defaultValue: "" },
+        steps: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         input: { type: DataTypes.JSONB, allowNull: false },
         changes: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         overrideReason: { type: DataTypes.TEXT, allowNull: true },

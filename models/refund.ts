@@ -12,6 +12,8 @@ export class Refund extends Model<InferAttributes<Refund>, InferCreationAttribut
   declare reason: string | null;
   /** pending or succeeded count as returned; failed (the processor could not return it) does not. */
   declare status: CreationOptional<RefundStatus>;
+  /** The fee lines of the payment this refund gives back; empty when it returns money not tied to a line. */
+  declare feeKeys: CreationOptional<string[]>;
   declare createdById: string | null;
   declare createdAt: CreationOptional<Date>;
 
@@ -26,6 +28,7 @@ export class Refund extends Model<InferAttributes<Refund>, InferCreationAttribut
         amountCents: { type: DataTypes.INTEGER, allowNull: false },
         reason: { type: DataTypes.TEXT, allowNull: true },
         status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: "succeeded" },
+        feeKeys: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         createdById: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
       },

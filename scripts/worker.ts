@@ -6,6 +6,7 @@ import { PACKET_QUEUE, type PacketJob } from "@/lib/server/services/jobs";
 import { deliverDueMail } from "@/lib/server/services/outbox";
 import { generatePacket } from "@/lib/server/services/packet-generation";
 import { failAbandonedPackets } from "@/lib/server/data/packets";
+import { sweepStorageRemovals } from "@/lib/server/data/storage-removals";
 import { reconcilePendingPayments } from "@/lib/server/data/payments";
 import { pruneSignInAttempts } from "@/lib/server/data/sign-in-throttle";
 import { issueDueReceipts } from "@/lib/server/services/receipts";
@@ -59,8 +60,9 @@ console.log("• Mail worker is sending the outbox.");
 
 // Maintenance: receipts for newly paid payments, a look at the processor for checkouts whose
 // webhook never came (a crash between charge and webhook), so no payment stays unrecorded, and
-// packet generations a worker abandoned marked failed so they can be retried, and sign-in failures
-// old enough that no throttle counts them forgotten.
+// packet generations a worker abandoned marked failed so they can be retried, sign-in failures
+// old enough that no throttle counts them forgotten, and stored objects of removed uploads that
+// storage did not take away at once removed again.
 const RECEIPT_INTERVAL_MS = 2_000;
 const SLOW_CHECKS_EVERY = 15; // rounds, about 30 s
 let maintenanceRound: Promise<void> = Promise.resolve();
@@ -76,12 +78,13 @@ async function maintenanceLoop() {
       await pruneSignInAttempts().catch(logged("sign-in attempt pruning"));
     }
     await issueDueReceipts().catch(logged("receipt"));
+    await sweepStorageRemovals().catch(logged("storage removal"));
   })();
   await maintenanceRound;
   if (!stopping) setTimeout(maintenanceLoop, RECEIPT_INTERVAL_MS);
 }
 void maintenanceLoop();
-console.log("• Maintenance: receipts, checkout reconciliation, abandoned packet generations.");
+console.log("• Maintenance: receipts, checkout reconciliation, abandoned packet generations, removed uploads' stored objects.");
 
 for (const signal of ["SIGINT", "SIGTERM"] as const) {
   process.on(signal, async () => {

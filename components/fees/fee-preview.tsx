@@ -2,7 +2,7 @@
 
 import { useId, useMemo, useState, useSyncExternalStore } from "react";
 import { useWatch, type Control } from "react-hook-form";
-import { computeFees, formatUsd, parseUsd, type FeeComputation } from "@/lib/fees";
+import { computeFees, feeAmountText, formatUsd, parseUsd, type FeeComputation } from "@/lib/fees";
 import { FeeScheduleInput } from "@/lib/schemas/fee-schedule";
 import { todayIso, type FeeScheduleFormInput, type FeeScheduleFormValues } from "./fee-schedule-form";
 
@@ -94,7 +94,7 @@ function PreviewResult({ computation, notCounted, date }: { computation: FeeComp
           <li key={line.lineId} className="rounded border border-paper-edge bg-white px-3 py-2">
             <div className="flex flex-wrap items-baseline justify-between gap-x-3">
               <span className="font-medium">{line.name}</span>
-              <span className="measure">{formatUsd(line.amountCents)}</span>
+              <span className="measure">{feeAmountText({ amountCents: line.amountCents, problem: line.problem?.code })}</span>
             </div>
             <ul className="mt-1 space-y-0.5 text-xs tabular-nums text-ink-soft">
               {line.arithmetic.map((step, k) => (
@@ -111,7 +111,7 @@ function PreviewResult({ computation, notCounted, date }: { computation: FeeComp
         </p>
       ) : null}
       <p className="flex items-baseline justify-between gap-3 border-t border-paper-edge pt-2 font-semibold" aria-live="polite">
-        <span>{computation.isComplete ? "Total" : "Total so far (a line needs the valuation)"}</span>
+        <span>{computation.isComplete ? "Total" : "At least (a line needs the valuation)"}</span>
         <span className="measure" data-testid="fee-preview-total">
           {formatUsd(computation.totalCents)}
         </span>

@@ -7,19 +7,20 @@ import { formatKw, kwToWatts, parsePercent } from "./quantities";
 import type { BracketTier, FeeBasis, FeeComputation, FeeFacts, FeeLineProblem, FeeLineResult, MarginalTier, ScheduledFeeLine, SizeRating } from "./types";
 import { assertValidFacts, assertValidFeeLines } from "./validate";
 
-type Sizes = Record<SizeRating, number>; // whole watts
+type Sizes = Record<SizeRating, number | null>; // whole watts; null while the design is not complete
 type Working = { amountCents: number; arithmetic: string[]; problem?: FeeLineProblem };
 
 /**
  * The fees that apply to a project on `facts.asOf`, each with its working, and their total.
  * Lines are checked first: data that breaks a schedule rule throws `FeeScheduleError`. A line
- * that needs a fact the project has not declared (the valuation) comes back with a `problem`
- * and 0, and the computation is marked incomplete rather than thrown.
+ * that needs a fact the project has not given yet (the valuation, or the system size) comes back
+ * with a `problem` and the least it can come to, its minimum (or 0), which the total counts; the
+ * computation is then marked incomplete rather than thrown.
  */
 export function computeFees({ lines, facts }: { lines: readonly ScheduledFeeLine[]; facts: FeeFacts }): FeeComputation {
   assertValidFacts(facts);
   assertValidFeeLines(lines);
-  const sizes: Sizes = { dc: kwToWatts(facts.dcKw), ac: kwToWatts(facts.acKw) };
+  const sizes: Sizes = { dc: facts.dcKw === null ? null : kwToWatts(facts.dcKw), ac: facts.acKw === null ? null : kwToWatts(facts.acKw) };
   const results = applicableLines(lines, facts.asOf).map((line) => lineResult(line, sizes, facts.valuationCents));
   const totalCents = toCents(results.reduce((sum, line) => sum + BigInt(line.amountCents), 0n));
   return { lines: results, totalCents, isComplete: results.every((line) => !line.problem) };
@@ -27,7 +28,8 @@ export function computeFees({ lines, facts }: { lines: readonly ScheduledFeeLine
 
 function lineResult(line: ScheduledFeeLine, sizes: Sizes, valuationCents: number | null): FeeLineResult {
   const working = basisWorking(line.basis, sizes, valuationCents);
-  if (!working.problem) applyLimits(working, line.minimumCents, line.maximumCents);
+  if (working.problem) countAtLeast(working, line.minimumCents);
+  else applyLimits(working, line.minimumCents, line.maximumCents);
   return {
     lineId: line.id,
     name: line.name,
@@ -40,20 +42,38 @@ function lineResult(line: ScheduledFeeLine, sizes: Sizes, valuationCents: number
 }
 
 function basisWorking(basis: FeeBasis, sizes: Sizes, valuationCents: number | null): Working {
+  if (basis.kind === "flat") return { amountCents: basis.amountCents, arithmetic: [`flat fee = ${formatUsd(basis.amountCents)}`] };
+  if (basis.kind === "valuation-percent") return valuationWorking(basis.ratePercent, valuationCents);
+  const watts = sizes[basis.size];
+  if (watts === null) return sizeMissing(basis.size);
   switch (basis.kind) {
-    case "flat":
-      return { amountCents: basis.amountCents, arithmetic: [`flat fee = ${formatUsd(basis.amountCents)}`] };
     case "per-kw": {
-      const { cents, text } = rateTimesSize(basis.rateCentsPerKw, sizes[basis.size], basis.size);
+      const { cents, text } = rateTimesSize(basis.rateCentsPerKw, watts, basis.size);
       return { amountCents: cents, arithmetic: [text] };
     }
     case "bracket-tiers":
-      return bracketWorking(basis.tiers, sizes[basis.size], basis.size);
+      return bracketWorking(basis.tiers, watts, basis.size);
     case "marginal-tiers":
-      return marginalWorking(basis.tiers, sizes[basis.size], basis.size);
-    case "valuation-percent":
-      return valuationWorking(basis.ratePercent, valuationCents);
+      return marginalWorking(basis.tiers, watts, basis.size);
   }
+}
+
+function sizeMissing(size: SizeRating): Working {
+  return {
+    amountCents: 0,
+    arithmetic: [`reads the system size in kW ${RATING_LABEL[size]}: not known until the design is complete`],
+    problem: { code: "size-missing", message: "Complete the design to work out this fee: it depends on the system size." },
+  };
+}
+
+/**
+ * A line that cannot be worked out yet still costs at least its minimum (every amount is raised to
+ * it), so it counts at that much, and the working says so; without a minimum it counts at 0.
+ */
+function countAtLeast(working: Working, minimumCents: number | null): void {
+  if (minimumCents === null || minimumCents === 0) return;
+  working.amountCents = minimumCents;
+  working.arithmetic.push(`at least the ${formatUsd(minimumCents)} minimum until then`);
 }
 
 /** A minimum raises the basis amount, a maximum caps it; the working says which one acted. */

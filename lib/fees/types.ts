@@ -65,15 +65,18 @@ export type ScheduledFeeLine = FeeLine & { authority?: string };
 
 /** What a project declares that the fees read. */
 export interface FeeFacts {
-  dcKw: number; // module nameplate total; read to the watt
-  acKw: number; // inverter continuous output total; read to the watt
+  dcKw: number | null; // module nameplate total; read to the watt; null: not known yet (the design is not complete)
+  acKw: number | null; // inverter continuous output total; read to the watt; null: not known yet
   valuationCents: number | null; // null: not declared yet
   asOf: string; // YYYY-MM-DD, the day the fees are for
 }
 
-/** Why a line could not be worked out; the line's amount is 0 until it is resolved. */
+/**
+ * Why a line could not be worked out yet. Until it is resolved the line counts at the least it can
+ * come to: its minimum, or 0 when it has none.
+ */
 export interface FeeLineProblem {
-  code: "valuation-missing";
+  code: "valuation-missing" | "size-missing";
   message: string;
 }
 
@@ -82,6 +85,7 @@ export interface FeeLineResult {
   name: string;
   authority?: string;
   kind: FeeBasisKind;
+  /** The fee; for a line with a `problem`, the least it can come to once the missing fact is known. */
   amountCents: number;
   /** The working, one step a line, for a coordinator to check against the schedule. */
   arithmetic: string[];
@@ -91,6 +95,6 @@ export interface FeeLineResult {
 export interface FeeComputation {
   lines: FeeLineResult[];
   totalCents: number;
-  /** False while any line has a problem: the total is then short by those lines. */
+  /** False while any line has a problem: the total is then the least the fees can come to. */
   isComplete: boolean;
 }

@@ -10,8 +10,8 @@ const join = (...parts: (string | number)[]) => parts.join(".");
 export function assertValidFacts(facts: FeeFacts): void {
   for (const key of ["dcKw", "acKw"] as const) {
     const kw: unknown = facts[key];
-    if (typeof kw !== "number" || !Number.isFinite(kw) || kw < 0) {
-      throw new FeeScheduleError(join("facts", key), `The system size (${key === "dcKw" ? "kW DC" : "kW AC"}) must be a number of kW, zero or more.`);
+    if (kw !== null && (typeof kw !== "number" || !Number.isFinite(kw) || kw < 0)) {
+      throw new FeeScheduleError(join("facts", key), `The system size (${key === "dcKw" ? "kW DC" : "kW AC"}) must be a number of kW, zero or more, or null when not known yet.`);
     }
   }
   if (facts.valuationCents !== null && !isCents(facts.valuationCents)) {

@@ -3,7 +3,7 @@ import { createElement } from "react";
 import { printableDeep } from "@/lib/packets/pdf-facts";
 import { CommissioningReport } from "@/templates/pdf/commissioning-report";
 import { CompletionCertificate } from "@/templates/pdf/completion-certificate";
-import { registerPdfFonts } from "@/templates/pdf/fonts";
+import { preparePdfFonts } from "@/templates/pdf/fonts";
 import type { CommissioningDocumentInput } from "./commissioning-document-input";
 
 /**
@@ -11,7 +11,7 @@ import type { CommissioningDocumentInput } from "./commissioning-document-input"
  * bytes. Pure apart from reading the shipped font files once.
  */
 export async function renderCommissioningPdf(input: CommissioningDocumentInput): Promise<Uint8Array> {
-  registerPdfFonts();
+  await preparePdfFonts();
   // Typed text (grid profiles, names) may hold characters the PDF fonts cannot draw.
   const printable = printableDeep(input);
   const document = printable.kind === "certificate" ? createElement(CompletionCertificate, { input: printable }) : createElement(CommissioningReport, { input: printable });

@@ -1,3 +1,5 @@
+import { can, type Viewer } from "@/lib/domain/permissions";
+import { stageIndex, type Stage } from "@/lib/domain/stages";
 import type { ProjectFileKind } from "@/models/project-file";
 
 export const MAX_UPLOAD_BYTES = 20 * 1024 * 1024;
@@ -38,4 +40,29 @@ export function displayFileName(original: string, mime: string): string {
     .slice(0, 120)
     .trim();
   return `${stem || "upload"}.${EXTENSION[mime] ?? "bin"}`;
+}
+
+/** Longest side of a site photo's thumbnail, in pixels: two across a phone screen at twice its density. */
+export const THUMBNAIL_PX = 320;
+
+/** Uploads whose bytes are a picture get a thumbnail; a PDF is shown as a file. */
+export function hasThumbnail(contentType: string): boolean {
+  return contentType === "image/jpeg" || contentType === "image/png";
+}
+
+/**
+ * The field work ends when the utility grants permission to operate: from then on the signed form and
+ * photos are the record as filed and stay.
+ */
+export const FIELD_WORK_ENDS_AT: Stage = "pto_received";
+
+/**
+ * Who may remove an upload: someone who may record the field work of the project (an installer only on
+ * a project assigned to them) and either uploaded it or runs the project's office work (a coordinator or
+ * an admin of its organization), while the field work is open. API tokens only read.
+ */
+export function mayRemoveUpload(viewer: Pick<Viewer, "id" | "role" | "organizationId" | "apiTokenId">, project: { organizationId: string; installerId: string | null; stage: Stage }, file: { uploadedById: string | null }): boolean {
+  if (stageIndex(project.stage) >= stageIndex(FIELD_WORK_ENDS_AT)) return false;
+  if (!can(viewer, "field:record", project)) return false;
+  return file.uploadedById === viewer.id || can(viewer, "project:edit", project);
 }

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { safeString } from "./fields";
+import { safeString, whenValid } from "./fields";
 import { parseUsd } from "@/lib/fees/money";
 
 const dollars = (label: string, { allowEmpty }: { allowEmpty: boolean }) =>
@@ -22,11 +22,22 @@ export const PayFeesInput = z.object({
   feeKeys: z.array(safeString().min(1).max(200)).min(1, "Choose at least one fee to pay").max(50),
 });
 
-export const RefundInput = z.object({
-  paymentId: safeString().uuid("Unknown payment"),
-  amount: dollars("refund amount", { allowEmpty: false }),
-  reason: safeString().trim().min(3, "Say why the money is returned").max(500, "At most 500 characters"),
-});
+/**
+ * A refund names whole fee lines of the payment (the amount is their sum, worked out on the server) or
+ * an amount of money not tied to a line; exactly one of the two.
+ */
+export const RefundInput = z
+  .object({
+    paymentId: safeString().uuid("Unknown payment"),
+    feeKeys: z.array(safeString().min(1).max(200)).max(50).optional(),
+    amount: dollars("refund amount", { allowEmpty: true }).optional(),
+    reason: safeString().trim().min(3, "Say why the money is returned").max(500, "At most 500 characters"),
+  })
+  .refine((v) => Boolean(v.feeKeys?.length) !== (v.amount !== undefined && v.amount !== null), {
+    path: ["amount"],
+    message: "Choose the fees to refund, or enter an amount, not both",
+    when: whenValid("feeKeys", "amount"),
+  });
 export type RefundInput = z.input<typeof RefundInput>;
 
 export const ValuationInput = z.object({

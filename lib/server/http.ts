@@ -123,3 +123,18 @@ export function attachmentHeaders({ fileName, contentType, length }: { fileName:
     "cache-control": "private, no-store",
   };
 }
+
+/**
+ * Headers for a thumbnail the app made from an uploaded picture: always a JPEG it encoded itself, shown
+ * inline in the app's own pages, kept only in the viewer's browser (a file's id never changes content).
+ */
+export function thumbnailHeaders(length: number): Record<string, string> {
+  return {
+    "content-type": "image/jpeg",
+    "content-length": String(length),
+    "content-disposition": "inline",
+    "x-content-type-options": "nosniff",
+    "cache-control": "private, max-age=86400",
+    "cross-origin-resource-policy": "same-origin",
+  };
+}

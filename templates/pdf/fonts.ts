@@ -28,6 +28,7 @@ export const TEXT_STACK = [TEXT_FONT, GREEK_FALLBACK];
 export const MEASURE_STACK = [MEASURE_FONT, GREEK_FALLBACK];
 
 let registered = false;
+let prepared: Promise<void> | undefined;
 
 /** Registers the packet fonts once per process; later calls do nothing. */
 export function registerPdfFonts(): void {
@@ -47,4 +48,38 @@ export function registerPdfFonts(): void {
   // Hyphenation would split model numbers and values such as "LK-405M-54H" across lines.
   Font.registerHyphenationCallback((word) => [word]);
   registered = true;
+}
+
+const REGISTERED_FACES: { fontFamily: string; fontWeight: number }[] = [
+  ...[400, 600, 700].map((fontWeight) => ({ fontFamily: TEXT_FONT, fontWeight })),
+  ...[400, 500].map((fontWeight) => ({ fontFamily: MEASURE_FONT, fontWeight })),
+  ...[400, 700].map((fontWeight) => ({ fontFamily: GREEK_FALLBACK, fontWeight })),
+];
+
+// The parts of fontkit's font object this relies on: its character set and its glyph lookup.
+type FontkitFace = { characterSet: number[]; glyphForCodePoint(codePoint: number): unknown };
+
+/**
+ * Registers the fonts and gives every character of each face its glyph before any PDF is drawn, once
+ * per process. The font objects are shared by every PDF a process renders, and fontkit keeps the first
+ * glyph object it makes for each glyph id: when embedding one PDF's subset makes a glyph only as a
+ * part of another (the period inside a colon), that glyph is kept without its character, and a later
+ * PDF that prints the character gets no text for it (copying, searching and screen readers lose it).
+ * Made here from the character map first, each glyph keeps its character.
+ */
+export function preparePdfFonts(): Promise<void> {
+  registerPdfFonts();
+  prepared ??= (async () => {
+    for (const face of REGISTERED_FACES) {
+      const source = Font.getFont(face);
+      if (!source) continue;
+      await source.load();
+      const font = source.data as unknown as FontkitFace | null;
+      for (const codePoint of font?.characterSet ?? []) font!.glyphForCodePoint(codePoint);
+    }
+  })().catch((error) => {
+    prepared = undefined;
+    throw error;
+  });
+  return prepared;
 }

@@ -1,11 +1,12 @@
 import "server-only";
+import { createHash } from "node:crypto";
 import { Op, type Transaction } from "sequelize";
 import type Stripe from "stripe";
 import { Payment, PaymentLine, Project, Refund, User } from "@/models";
 import type { RefundStatus } from "@/models/refund";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
-import { formatUsd } from "@/lib/fees";
+import { formatUsd, planLineRefund, refundableCents } from "@/lib/fees";
 import { refundEmail } from "@/templates/email/payment-receipt";
 import { db } from "../db";
 import { env } from "../env";
@@ -14,7 +15,7 @@ import { stripe } from "../services/payments";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
 import { applySessionState } from "./payment-events";
-import { getProjectFees, PAYMENT_INCLUDE, toPaymentDto, type PaymentDto } from "./project-fees";
+import { getProjectFees, PAYMENT_INCLUDE, paidPaymentOf, toPaymentDto, type PaymentDto } from "./project-fees";
 import { getProjectById } from "./projects";
 
 /** Ends an unfinished checkout that holds some of the same lines, so one fee is never being paid twice. */
@@ -44,7 +45,7 @@ export async function startPayment({ viewer, projectId, feeKeys }: { viewer: Vie
   }
   const chosen = fees.lines.filter((l) => feeKeys.includes(l.feeKey));
   if (chosen.length !== new Set(feeKeys).size) throw new AppError("CONFLICT", "Some of the chosen fees no longer apply to this project. Reload the page.");
-  const blocked = chosen.find((l) => l.state !== "unpaid" || l.problem || l.amountCents <= 0);
+  const blocked = chosen.find((l) => !l.payable);
   if (blocked) throw new AppError("CONFLICT", blocked.state === "paid" ? `${blocked.name} is already paid.` : blocked.problem ? `${blocked.name}: ${blocked.problem}` : `${blocked.name} has nothing to pay.`);
   const amountCents = chosen.reduce((sum, l) => sum + l.amountCents, 0);
 
@@ -88,26 +89,50 @@ function refusalOf(error: unknown): AppError {
   return new AppError("CONFLICT", "The payment service did not answer. Nothing was refunded; try again in a minute.");
 }
 
+/** What a refund returns: whole fee lines of the payment (their sum, worked out here), or an amount of money not tied to a line. */
+export type RefundRequest = { feeKeys: string[] } | { amountCents: number };
+
+// The processor keeps a refund's metadata values to 500 characters; longer key lists are recorded from the admin's own call only.
+const METADATA_VALUE_MAX = 500;
+
 /**
- * Returns money on a paid payment, all of it or part; recorded from the processor's answer. Two admins
- * pressing Refund at once make one refund (the same idempotency key), and only the request that
+ * Returns money on a paid payment: whole fee lines, which are then unpaid again, or an amount, which
+ * leaves the lines paid (the rule is in lib/fees/refunds.ts). Recorded from the processor's answer. Two
+ * admins pressing Refund at once make one refund (the same idempotency key), and only the request that
  * records it audits it and e-mails the payer.
  */
-export async function refundPayment({ viewer, paymentId, amountCents, reason }: { viewer: Viewer; paymentId: string; amountCents: number; reason: string }): Promise<PaymentDto> {
+export async function refundPayment({ viewer, paymentId, reason, ...request }: { viewer: Viewer; paymentId: string; reason: string } & RefundRequest): Promise<PaymentDto> {
   const sequelize = db();
   if (!can(viewer, "fees:refund")) throw new AppError("FORBIDDEN", "Only an admin can refund.");
-  const payment = isUuid(paymentId) ? await Payment.findOne({ where: { id: paymentId, organizationId: viewer.organizationId } }) : null;
+  const payment = isUuid(paymentId) ? await Payment.findOne({ where: { id: paymentId, organizationId: viewer.organizationId }, include: [{ model: PaymentLine, as: "lines" }, { model: Refund, as: "refunds" }] }) : null;
   if (!payment) throw new AppError("NOT_FOUND", "No such payment.");
   await getProjectById({ viewer, projectId: payment.projectId });
-  const left = payment.amountCents - payment.refundedCents;
   if (payment.status !== "paid" && payment.status !== "partially_refunded") throw new AppError("CONFLICT", "Only a paid payment can be refunded.");
-  if (!Number.isInteger(amountCents) || amountCents <= 0 || amountCents > left) {
-    throw new AppError("INVALID_INPUT", `Refund between $0.01 and ${formatUsd(left)}.`, { amount: [`At most ${formatUsd(left)}`] });
+  const paid = paidPaymentOf(payment);
+  const left = refundableCents(paid);
+  let amountCents: number;
+  let feeKeys: string[] = [];
+  if ("feeKeys" in request) {
+    const plan = planLineRefund(paid, request.feeKeys);
+    if (!plan.ok) throw new AppError("CONFLICT", plan.message, { feeKeys: [plan.message] });
+    amountCents = plan.amountCents;
+    feeKeys = plan.lines.map((l) => l.feeKey);
+  } else {
+    amountCents = request.amountCents;
+    if (!Number.isInteger(amountCents) || amountCents <= 0 || amountCents > left) {
+      throw new AppError("INVALID_INPUT", `Refund between $0.01 and ${formatUsd(left)}.`, { amount: [`At most ${formatUsd(left)}`] });
+    }
   }
+  const keysText = feeKeys.length ? JSON.stringify(feeKeys) : "";
   const refund = await stripe()
     .refunds.create(
-      { payment_intent: payment.paymentIntentId!, amount: amountCents, reason: "requested_by_customer", metadata: { paymentId: payment.id, note: reason.slice(0, 450) } },
-      { idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${amountCents}` },
+      {
+        payment_intent: payment.paymentIntentId!,
+        amount: amountCents,
+        reason: "requested_by_customer",
+        metadata: { paymentId: payment.id, note: reason.slice(0, 450), ...(keysText && keysText.length <= METADATA_VALUE_MAX ? { feeKeys: keysText } : {}) },
+      },
+      { idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${amountCents}${keysText ? `-${createHash("sha256").update(keysText).digest("hex").slice(0, 16)}` : ""}` },
     )
     .catch((error: unknown) => {
       throw refusalOf(error);
@@ -116,9 +141,10 @@ export async function refundPayment({ viewer, paymentId, amountCents, reason }: 
     throw new AppError("CONFLICT", `The payment service could not return the money${refund.failure_reason ? ` (${refund.failure_reason.replace(/_/g, " ")})` : ""}. Nothing was refunded.`);
   }
   await sequelize.transaction(async (transaction) => {
-    const { attributed } = await recordRefund(payment.id, refund, { reason, createdById: viewer.id }, transaction);
+    const { attributed } = await recordRefund(payment.id, refund, { reason, createdById: viewer.id, feeKeys }, transaction);
     if (!attributed) return;
-    await recordAudit({ viewer, action: "payment.refunded", entityType: "project", entityId: payment.projectId, changes: { refund: { before: null, after: `${formatUsd(amountCents)}: ${reason}` } } }, { transaction });
+    const what = feeKeys.length ? `${formatUsd(amountCents)} for ${payment.lines!.filter((l) => feeKeys.includes(l.feeKey)).map((l) => l.name).join(", ")}` : formatUsd(amountCents);
+    await recordAudit({ viewer, action: "payment.refunded", entityType: "project", entityId: payment.projectId, changes: { refund: { before: null, after: `${what}: ${reason}` } } }, { transaction });
     const payer = payment.createdById ? await User.findByPk(payment.createdById, { transaction }) : null;
     const project = await Project.findByPk(payment.projectId, { transaction });
     const after = await Payment.findByPk(payment.id, { transaction });
@@ -132,21 +158,37 @@ export async function refundPayment({ viewer, paymentId, amountCents, reason }: 
 
 const refundStatusOf = (status: string | null): RefundStatus => (status === "failed" || status === "canceled" ? "failed" : status === "succeeded" ? "succeeded" : "pending");
 
+/** Fee keys a refund carries in the processor's metadata (a JSON list), for a refund the webhook records before the admin's call does. */
+function feeKeysOf(refund: { metadata?: Stripe.Metadata | null }): string[] {
+  try {
+    const keys: unknown = JSON.parse(refund.metadata?.feeKeys ?? "[]");
+    return Array.isArray(keys) ? keys.filter((k): k is string => typeof k === "string").slice(0, 50) : [];
+  } catch {
+    return [];
+  }
+}
+
 /**
  * Records a refund once, by the processor's id, and brings the payment's refunded total and status
  * along. Failed is final: a late "succeeded" never revives it. `attributed` is true for the one call
  * that first records who asked for the refund, whichever of the admin's request and the webhook came first.
  */
-export async function recordRefund(paymentId: string, refund: Pick<Stripe.Refund, "id" | "amount" | "status">, extra: { reason: string | null; createdById: string | null }, transaction: Transaction): Promise<{ attributed: boolean }> {
+export async function recordRefund(
+  paymentId: string,
+  refund: Pick<Stripe.Refund, "id" | "amount" | "status"> & { metadata?: Stripe.Metadata | null },
+  extra: { reason: string | null; createdById: string | null; feeKeys?: string[] },
+  transaction: Transaction,
+): Promise<{ attributed: boolean }> {
   const payment = await Payment.findByPk(paymentId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!payment) return { attributed: false };
   const status = refundStatusOf(refund.status);
-  const [row, created] = await Refund.findOrCreate({ where: { processorRefundId: refund.id }, defaults: { paymentId, processorRefundId: refund.id, amountCents: refund.amount, reason: extra.reason, createdById: extra.createdById, status }, transaction });
+  const feeKeys = extra.feeKeys ?? feeKeysOf(refund);
+  const [row, created] = await Refund.findOrCreate({ where: { processorRefundId: refund.id }, defaults: { paymentId, processorRefundId: refund.id, amountCents: refund.amount, reason: extra.reason, createdById: extra.createdById, status, feeKeys }, transaction });
   const changes: Partial<Refund> = {};
   if (!created && row.status !== "failed" && status !== row.status && (status === "failed" || row.status === "pending")) changes.status = status;
   const attributed = Boolean(extra.createdById) && (created || !row.createdById);
-  // The webhook may have recorded it first; the admin's own call then adds who asked and why.
-  if (!created && attributed) Object.assign(changes, { reason: extra.reason, createdById: extra.createdById });
+  // The webhook may have recorded it first; the admin's own call then adds who asked, why and for which fees.
+  if (!created && attributed) Object.assign(changes, { reason: extra.reason, createdById: extra.createdById, ...(feeKeys.length ? { feeKeys } : {}) });
   if (Object.keys(changes).length) await row.update(changes, { transaction });
   await settleRefunded(payment, transaction);
   return { attributed };

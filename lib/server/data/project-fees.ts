@@ -4,7 +4,7 @@ import { runDesignReview } from "@/lib/design/run-review";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { localIsoDate } from "@/lib/domain/time-zones";
 import { AppError } from "@/lib/errors";
-import { computeFees, feeNameKey } from "@/lib/fees";
+import { computeFees, feeNameKey, returnedFeeKeys, type FeeLineProblem, type PaidPayment } from "@/lib/fees";
 import type { PaymentStatus } from "@/models/payment";
 import { db } from "../db";
 import { getDesignWithContext } from "./designs";
@@ -12,7 +12,8 @@ import { recordAudit } from "./audit";
 import { schedulesForProject } from "./fee-schedules";
 import { getOrganization } from "./organizations";
 
-export type FeeLineState = "unpaid" | "in-progress" | "paid";
+/** refunded: paid once, then given back by a refund that named it (lib/fees/refunds.ts); owed again like an unpaid line. */
+export type FeeLineState = "unpaid" | "in-progress" | "paid" | "refunded";
 
 export type ProjectFeeLineDto = {
   feeKey: string;
@@ -20,9 +21,13 @@ export type ProjectFeeLineDto = {
   authorityKind: "jurisdiction" | "utility";
   name: string;
   arithmetic: string[];
+  /** The fee; while `problem` is set, the least it comes to (its minimum, or 0). */
   amountCents: number;
   problem: string | null; // why the line cannot be paid yet
+  problemCode: FeeLineProblem["code"] | null;
   state: FeeLineState;
+  /** Can be chosen for a card payment now. */
+  payable: boolean;
   paymentId: string | null;
 };
 
@@ -38,8 +43,10 @@ export type PaymentDto = {
   paidAt: string | null;
   createdAt: string;
   createdBy: string | null;
-  lines: { name: string; authority: string; amountCents: number }[];
-  refunds: { id: string; amountCents: number; reason: string | null; createdAt: string; createdBy: string | null; failed: boolean }[];
+  lines: { feeKey: string; name: string; authority: string; amountCents: number; refunded: boolean }[];
+  refunds: { id: string; amountCents: number; lineNames: string[]; reason: string | null; createdAt: string; createdBy: string | null; failed: boolean }[];
+  /** A failed attempt whose fees are still unpaid: the page tells the payer to try another card. */
+  failureStillOpen: boolean;
 };
 
 export type ProjectFeesDto = {
@@ -48,15 +55,30 @@ export type ProjectFeesDto = {
   valuationCents: number | null;
   lines: ProjectFeeLineDto[];
   unpaidTotalCents: number;
+  /** True while an unpaid line waits for the valuation or the design: the unpaid total is then the least it comes to. */
+  unpaidIsAtLeast: boolean;
   payments: PaymentDto[];
 };
 
-/** Paid lines stay paid whatever the design does later; a fully refunded payment frees its lines again. */
+/** Paid lines stay paid whatever the design does later; lines a refund gave back are owed again. */
 const HOLDS_LINES: PaymentStatus[] = ["pending", "paid", "partially_refunded"];
 
 export const feeKeyOf = (kind: string, authorityId: string, name: string) => `${kind}:${authorityId}:${feeNameKey(name)}`;
 
-export function toPaymentDto(p: Payment): PaymentDto {
+/** A payment's lines and standing refunds, as the refund rule reads them. */
+export function paidPaymentOf(p: Payment): PaidPayment {
+  return {
+    amountCents: p.amountCents,
+    lines: (p.lines ?? []).map((l) => ({ feeKey: l.feeKey, name: l.name, amountCents: l.amountCents })),
+    refunds: (p.refunds ?? []).filter((r) => r.status !== "failed").map((r) => ({ amountCents: r.amountCents, feeKeys: r.feeKeys })),
+  };
+}
+
+const MONEY_HELD: PaymentStatus[] = ["paid", "partially_refunded", "refunded"];
+
+export function toPaymentDto(p: Payment, { failureStillOpen = false }: { failureStillOpen?: boolean } = {}): PaymentDto {
+  const returned = MONEY_HELD.includes(p.status) ? returnedFeeKeys(paidPaymentOf(p)) : new Set<string>();
+  const nameOf = new Map((p.lines ?? []).map((l) => [l.feeKey, l.name]));
   return {
     id: p.id,
     status: p.status,
@@ -69,8 +91,9 @@ export function toPaymentDto(p: Payment): PaymentDto {
     paidAt: p.paidAt?.toISOString() ?? null,
     createdAt: p.createdAt.toISOString(),
     createdBy: p.createdBy?.name ?? null,
-    lines: (p.lines ?? []).map((l) => ({ name: l.name, authority: l.authority, amountCents: l.amountCents })),
-    refunds: (p.refunds ?? []).map((r) => ({ id: r.id, amountCents: r.amountCents, reason: r.reason, createdAt: r.createdAt.toISOString(), createdBy: r.createdBy?.name ?? null, failed: r.status === "failed" })),
+    lines: (p.lines ?? []).map((l) => ({ feeKey: l.feeKey, name: l.name, authority: l.authority, amountCents: l.amountCents, refunded: returned.has(l.feeKey) })),
+    refunds: (p.refunds ?? []).map((r) => ({ id: r.id, amountCents: r.amountCents, lineNames: r.feeKeys.map((k) => nameOf.get(k)).filter((n): n is string => Boolean(n)), reason: r.reason, createdAt: r.createdAt.toISOString(), createdBy: r.createdBy?.name ?? null, failed: r.status === "failed" })),
+    failureStillOpen: Boolean(p.failureMessage) && failureStillOpen,
   };
 }
 
@@ -95,34 +118,60 @@ export async function getProjectFees({ viewer, projectId }: { viewer: Viewer; pr
 
   const schedules = await schedulesForProject(viewer, project);
   const payments = await Payment.findAll({ where: { projectId, organizationId: viewer.organizationId }, include: PAYMENT_INCLUDE, order: [["createdAt", "DESC"]] });
+  // Which payment holds each line (a paid one before a pending one), and which lines refunds gave back.
   const holding = new Map<string, Payment>();
-  for (const p of payments.filter((p) => HOLDS_LINES.includes(p.status))) for (const l of p.lines ?? []) if (!holding.has(l.feeKey) || p.status !== "pending") holding.set(l.feeKey, p);
+  const refundedBy = new Map<string, Payment>();
+  for (const p of payments) {
+    const returned = MONEY_HELD.includes(p.status) ? returnedFeeKeys(paidPaymentOf(p)) : new Set<string>();
+    for (const l of p.lines ?? []) {
+      if (returned.has(l.feeKey)) {
+        if (!refundedBy.has(l.feeKey)) refundedBy.set(l.feeKey, p);
+      } else if (HOLDS_LINES.includes(p.status) && (!holding.has(l.feeKey) || (holding.get(l.feeKey)!.status === "pending" && p.status !== "pending"))) {
+        holding.set(l.feeKey, p);
+      }
+    }
+  }
 
   const lines: ProjectFeeLineDto[] = [];
   for (const schedule of schedules) {
-    const computed = computeFees({ lines: schedule.lines.map((l) => ({ ...l, authority: schedule.name })), facts: { dcKw: sizes?.dcKw ?? 0, acKw: sizes?.acKw ?? 0, valuationCents, asOf } });
+    const computed = computeFees({ lines: schedule.lines.map((l) => ({ ...l, authority: schedule.name })), facts: { dcKw: sizes?.dcKw ?? null, acKw: sizes?.acKw ?? null, valuationCents, asOf } });
     for (const line of computed.lines) {
       const feeKey = feeKeyOf(schedule.kind, schedule.id, line.name);
       const payment = holding.get(feeKey) ?? null;
       const paidLine = payment && payment.status !== "pending" ? payment.lines!.find((l) => l.feeKey === feeKey)! : null;
-      const needsSize = line.kind !== "flat" && line.kind !== "valuation-percent";
-      const problem = line.problem?.message ?? (needsSize && !sizes ? "The design is not complete yet, so the system size is not known." : null);
+      // A declined card leaves its checkout open but the fee unpaid; paying again replaces that checkout.
+      const state: FeeLineState = paidLine ? "paid" : payment && !payment.failureMessage ? "in-progress" : refundedBy.has(feeKey) ? "refunded" : "unpaid";
+      const problem = paidLine ? null : line.problem ?? null;
+      const amountCents = paidLine ? paidLine.amountCents : line.amountCents;
       lines.push({
         feeKey,
         authority: schedule.name,
         authorityKind: schedule.kind,
         name: line.name,
         arithmetic: paidLine ? paidLine.arithmetic : line.arithmetic,
-        amountCents: paidLine ? paidLine.amountCents : line.amountCents,
-        problem: paidLine ? null : problem,
-        // A declined card leaves its checkout open but the fee unpaid; paying again replaces that checkout.
-        state: !payment || (payment.status === "pending" && payment.failureMessage) ? "unpaid" : payment.status === "pending" ? "in-progress" : "paid",
-        paymentId: payment?.id ?? null,
+        amountCents,
+        problem: problem?.message ?? null,
+        problemCode: problem?.code ?? null,
+        state,
+        payable: state !== "paid" && !problem && amountCents > 0,
+        paymentId: payment?.id ?? refundedBy.get(feeKey)?.id ?? null,
       });
     }
   }
-  const unpaidTotalCents = lines.filter((l) => l.state === "unpaid").reduce((sum, l) => sum + l.amountCents, 0);
-  return { asOf, sizes, valuationCents, lines, unpaidTotalCents, payments: payments.map(toPaymentDto) };
+  const owed = lines.filter((l) => l.state === "unpaid" || l.state === "refunded");
+  const unpaidTotalCents = owed.reduce((sum, l) => sum + l.amountCents, 0);
+  const stateOf = new Map(lines.map((l) => [l.feeKey, l.state]));
+  // A failed attempt matters while one of its fees is still owed and no other checkout is under way for it.
+  const failureStillOpen = (p: Payment) => !MONEY_HELD.includes(p.status) && (p.lines ?? []).some((l) => stateOf.get(l.feeKey) === "unpaid" || stateOf.get(l.feeKey) === "refunded");
+  return {
+    asOf,
+    sizes,
+    valuationCents,
+    lines,
+    unpaidTotalCents,
+    unpaidIsAtLeast: owed.some((l) => l.problem !== null),
+    payments: payments.map((p) => toPaymentDto(p, { failureStillOpen: failureStillOpen(p) })),
+  };
 }
 
 /** The valuation the owner declared for the work; fees that are a percentage of it follow. */

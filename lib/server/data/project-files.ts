@@ -4,7 +4,8 @@ import type { Transaction } from "sequelize";
 import { CommissioningRecord, ProjectFile, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
-import { ALLOWED_TYPES, MAX_UPLOAD_BYTES, allowedTypesText, displayFileName, tooLargeMessage } from "@/lib/field/upload-rules";
+import { ALLOWED_TYPES, FIELD_WORK_ENDS_AT, MAX_UPLOAD_BYTES, allowedTypesText, displayFileName, hasThumbnail, mayRemoveUpload, tooLargeMessage } from "@/lib/field/upload-rules";
+import { STAGE_LABELS, stageIndex } from "@/lib/domain/stages";
 import { PROJECT_FILE_KINDS, type ProjectFileKind } from "@/models/project-file";
 import { completionReceivedEmail } from "@/templates/email/completion-received";
 import { db } from "../db";
@@ -14,11 +15,36 @@ import { sniffMimeType } from "../services/file-sniffing";
 import { deleteObject, putObject } from "../services/storage";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
-import { getProjectById } from "./projects";
+import { getProjectById, type ProjectDto } from "./projects";
+import { queueStorageRemovals, sweepStorageRemovals } from "./storage-removals";
 
-export type ProjectFileDto = { id: string; kind: ProjectFileKind; fileName: string; contentType: string; sizeBytes: number; uploadedBy: string | null; createdAt: string };
+export type ProjectFileDto = {
+  id: string;
+  kind: ProjectFileKind;
+  fileName: string;
+  contentType: string;
+  sizeBytes: number;
+  uploadedBy: string | null;
+  createdAt: string;
+  /** A picture: its thumbnail is served by the file's route with ?size=thumbnail. */
+  hasThumbnail: boolean;
+  /** The viewer may remove it (see mayRemoveUpload). */
+  canRemove: boolean;
+};
 
-const toDto = (f: ProjectFile): ProjectFileDto => ({ id: f.id, kind: f.kind, fileName: f.fileName, contentType: f.contentType, sizeBytes: f.sizeBytes, uploadedBy: f.uploadedBy?.name ?? null, createdAt: f.createdAt.toISOString() });
+const scopeOf = (viewer: Viewer, project: ProjectDto) => ({ organizationId: viewer.organizationId, installerId: project.installer?.id ?? null, stage: project.stage });
+
+const toDto = (f: ProjectFile, viewer: Viewer, project: ProjectDto): ProjectFileDto => ({
+  id: f.id,
+  kind: f.kind,
+  fileName: f.fileName,
+  contentType: f.contentType,
+  sizeBytes: f.sizeBytes,
+  uploadedBy: f.uploadedBy?.name ?? null,
+  createdAt: f.createdAt.toISOString(),
+  hasThumbnail: hasThumbnail(f.contentType),
+  canRemove: mayRemoveUpload(viewer, scopeOf(viewer, project), f),
+});
 
 export function isProjectFileKind(value: unknown): value is ProjectFileKind {
   return typeof value === "string" && (PROJECT_FILE_KINDS as readonly string[]).includes(value);
@@ -69,7 +95,7 @@ export async function uploadProjectFile({ viewer, projectId, kind, fileName, byt
       }
       return row.id;
     });
-    return toDto((await ProjectFile.findByPk(id, { include: [{ model: User, as: "uploadedBy", attributes: ["name"] }] }))!);
+    return toDto((await ProjectFile.findByPk(id, { include: [{ model: User, as: "uploadedBy", attributes: ["name"] }] }))!, viewer, project);
   } catch (error) {
     await deleteObject(objectKey).catch(() => undefined);
     throw error;
@@ -86,9 +112,34 @@ async function coordinatorAddress(viewer: Viewer, coordinatorId: string | null, 
 
 export async function listProjectFiles({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<ProjectFileDto[]> {
   db();
-  await getProjectById({ viewer, projectId });
+  const project = await getProjectById({ viewer, projectId });
   const rows = await ProjectFile.findAll({ where: { projectId, organizationId: viewer.organizationId }, include: [{ model: User, as: "uploadedBy", attributes: ["name"] }], order: [["createdAt", "DESC"]] });
-  return rows.map(toDto);
+  return rows.map((row) => toDto(row, viewer, project));
+}
+
+/**
+ * Removes an upload made by mistake: its record goes and the removal is audited in one transaction,
+ * which also marks the stored object for removal; the object is removed after the commit. If storage
+ * fails then, the failure is logged and the worker's sweep tries again: the caller is never told the
+ * removal failed, because as far as anyone can see, it did not.
+ */
+export async function deleteProjectFile({ viewer, projectId, fileId }: { viewer: Viewer; projectId: string; fileId: string }): Promise<void> {
+  const sequelize = db();
+  const project = await getProjectById({ viewer, projectId });
+  if (!isUuid(fileId)) throw new AppError("NOT_FOUND", "No such file.");
+  const objectKey = await sequelize.transaction(async (transaction) => {
+    const row = await ProjectFile.findOne({ where: { id: fileId, projectId, organizationId: viewer.organizationId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!row) throw new AppError("NOT_FOUND", "No such file.");
+    if (!mayRemoveUpload(viewer, scopeOf(viewer, project), row)) {
+      const fieldWorkOpen = stageIndex(project.stage) < stageIndex(FIELD_WORK_ENDS_AT);
+      throw new AppError("FORBIDDEN", fieldWorkOpen ? "Only the person who uploaded this file, or the project's coordinator or an admin, can remove it." : `Uploads are kept as filed once the project reaches ${STAGE_LABELS[FIELD_WORK_ENDS_AT]}.`);
+    }
+    await row.destroy({ transaction });
+    await recordAudit({ viewer, action: "file.removed", entityType: "project", entityId: projectId, changes: { file: { before: `${row.kind}: ${row.fileName} (SHA-256 ${row.sha256.slice(0, 12)}…)`, after: null } } }, { transaction });
+    await queueStorageRemovals([row.objectKey], { transaction });
+    return row.objectKey;
+  });
+  await sweepStorageRemovals({ objectKeys: [objectKey] }).catch((error: unknown) => console.error("storage removal after a file was removed; the worker will sweep it", error));
 }
 
 /** Where an uploaded file is kept, for a viewer who may see the project; NOT_FOUND otherwise. */
@@ -98,6 +149,6 @@ export async function getProjectFileLocation({ viewer, projectId, fileId }: { vi
   if (!isUuid(fileId)) throw new AppError("NOT_FOUND", "No such file.");
   const row = await ProjectFile.findOne({ where: { id: fileId, projectId, organizationId: viewer.organizationId } });
   if (!row) throw new AppError("NOT_FOUND", "No such file.");
-  return { key: row.objectKey, fileName: row.fileName, contentType: row.contentType };
+  return { key: row.objectKey, fileName: row.fileName, contentType: row.contentType, hasThumbnail: hasThumbnail(row.contentType) };
 }
 

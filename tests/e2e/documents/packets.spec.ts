@@ -22,6 +22,10 @@ test("coordinator generates both packets, downloads them, and regenerates after 
   await page.goto(`/projects/${project.id}/documents`);
 
   const permit = await generate(page, "permit", 1);
+  // The bar reported the worker's real steps on the way, and never went back.
+  const seen = permit.seenProgress;
+  expect(seen.some((s) => s.value > 0 && s.value < 100 && /^(Drawing sheet \d+ of \d+|Reading data sheet|Putting \d+ sheets|Storing the PDF|Checking the stored copy)/.test(s.step)), JSON.stringify(seen)).toBe(true);
+  seen.slice(1).forEach((s, i) => expect(s.value, JSON.stringify(seen)).toBeGreaterThanOrEqual(seen[i]!.value));
   const interconnection = await generate(page, "interconnection", 1);
 
   const permitPdf = await download(page, permit, 1);

@@ -26,7 +26,7 @@ async function pdfTexts(page: Page, href: string): Promise<string[]> {
   return pageTexts(new Uint8Array(await res.body()));
 }
 
-test("a new coordinator, inspector and installer go from a new project to paid fees without meeting a wrong date or a broken text", async ({ page, browser }) => {
+test("a new coordinator, inspector and installer go from a new project to fees paid and refunded without meeting a wrong date or a broken text", async ({ page, browser }) => {
   test.setTimeout(300_000);
   await page.setViewportSize({ width: 1366, height: 900 });
   await signIn(page, DEMO.coordinator);
@@ -146,8 +146,25 @@ test("a new coordinator, inspector and installer go from a new project to paid f
   await expect(payment).toContainText(`paid ${mediumDateThere()}`);
   await expectCleanPage(page, "fees page");
 
-  // API tokens: a revoked token says when, as a date.
+  // An admin refunds one whole fee after confirming it: that line is no longer shown as paid.
   const admin = await pageFor(browser, DEMO.admin);
+  await admin.goto(`/projects/${project!.id}/fees`);
+  const paid = admin.getByTestId("payment").filter({ hasText: "visa •••• 4242" });
+  await paid.getByRole("button", { name: "Refund…" }).click();
+  const choice = paid.getByRole("list", { name: "Fees to refund" }).getByRole("listitem").first();
+  // "City of Brackenford Building Division: Electrical permit, PV $185.00" → the fee's own name.
+  const feeName = /: (.+?) \$/.exec((await choice.innerText()).replace(/\s+/g, " "))![1]!;
+  await choice.getByRole("checkbox").check();
+  await paid.getByLabel("Reason").fill("Fee waived");
+  await paid.getByRole("button", { name: "Review the refund" }).click();
+  const dialog = admin.getByRole("dialog", { name: /^Refund \$[\d,.]+\?$/ });
+  await expect(dialog.getByTestId("refund-confirmation")).toContainText("visa •••• 4242");
+  await dialog.getByRole("button", { name: /^Refund \$/ }).click();
+  await expect(paid.getByTestId("refunds")).toContainText(`Refunded`);
+  await expect(admin.getByTestId("fee-line").filter({ hasText: feeName }).first().getByTestId("fee-line-state")).toHaveText("Refunded, unpaid again");
+  await expectCleanPage(admin, "fees page after a refund");
+
+  // API tokens: a revoked token says when, as a date.
   await admin.goto("/settings/api-tokens");
   await admin.getByLabel("Token name").fill(`Walk ${Date.now()}`);
   await admin.getByRole("button", { name: "Create token" }).click();

@@ -55,6 +55,8 @@ export const ROUTES: Record<string, Entry> = {
   "GET /api/v1/projects/:projectId/files": { scope: "project", roles: ALL, url: (t) => `${project(t)}/files` },
   "POST /api/v1/projects/:projectId/files": { scope: "project", roles: ALL, url: (t) => `${project(t)}/files`, upload: { name: "intruder.png", mimeType: "image/png", kind: "site-photo" } },
   "GET /api/v1/projects/:projectId/files/:fileId": { scope: "project", roles: ALL, url: (t) => `${project(t)}/files/${t.fileId}` },
+  // The uploader, or the project's coordinator or an admin (tests/integration/server/data/project-files); tried here by everyone outside the project.
+  "DELETE /api/v1/projects/:projectId/files/:fileId": { scope: "project", roles: ALL, url: (t) => `${project(t)}/files/${t.fileId}` },
   "GET /api/v1/projects/:projectId/commissioning/:document": { scope: "project", roles: ALL, url: (t) => `${project(t)}/commissioning/certificate` },
   "GET /api/v1/packets/:packetId/file": { scope: "project", roles: ALL, url: (t) => `/api/v1/packets/${t.packetId}/file` },
   "POST /api/v1/packets/:packetId/retry": { scope: "project", roles: OFFICE, url: (t) => `/api/v1/packets/${t.packetId}/retry` },

@@ -163,8 +163,8 @@ describe("size tiers at the bracket boundaries (invented schedule, demo)", () =>
   });
 });
 
-describe("a percent of valuation with no valuation declared", () => {
-  test("is a problem on its line, 0, not a thrown error; the other lines still count", () => {
+describe("a line that needs a fact not given yet", () => {
+  test("no valuation: a problem on its line, counted at its minimum, not a thrown error; the other lines still count", () => {
     const lines = [
       feeLine({ kind: "valuation-percent", ratePercent: "1.25" }, { id: "valuation", minimumCents: 5_000 }),
       feeLine({ kind: "flat", amountCents: 7_500 }, { id: "plan-review", name: "Plan review" }),
@@ -174,16 +174,40 @@ describe("a percent of valuation with no valuation declared", () => {
       lineId: "valuation",
       name: "Building permit",
       kind: "valuation-percent",
-      amountCents: 0, // the $50.00 minimum is not applied to an amount not yet known
-      arithmetic: ["1.25% of the project valuation: no valuation declared yet"],
+      // Every amount is raised to the minimum, so the line comes to at least $50.00 whatever the valuation.
+      amountCents: 5_000,
+      arithmetic: ["1.25% of the project valuation: no valuation declared yet", "at least the $50.00 minimum until then"],
       problem: { code: "valuation-missing", message: "Enter the project's declared valuation to work out this fee." },
     });
-    expect(result).toMatchObject({ totalCents: 7_500, isComplete: false });
+    // $50.00 at least + $75.00: the total is the least the fees come to.
+    expect(result).toMatchObject({ totalCents: 12_500, isComplete: false });
+  });
+
+  test("no valuation and no minimum: counted at 0 until the valuation is declared", () => {
+    const result = computeFees({ lines: [feeLine({ kind: "valuation-percent", ratePercent: "1.25" })], facts: facts({ valuationCents: null }) });
+    expect(result.lines[0]).toMatchObject({ amountCents: 0, arithmetic: ["1.25% of the project valuation: no valuation declared yet"], problem: { code: "valuation-missing" } });
+    expect(result).toMatchObject({ totalCents: 0, isComplete: false });
   });
 
   test("a valuation of $0.00 is declared: the line is worked out", () => {
     const result = computeFees({ lines: [feeLine({ kind: "valuation-percent", ratePercent: "1.25" }, { minimumCents: 5_000 })], facts: facts({ valuationCents: 0 }) });
     expect(result).toMatchObject({ totalCents: 5_000, isComplete: true });
+  });
+
+  test.each<[string, FeeBasis, Partial<FeeFacts>, number | null, number]>([
+    ["per kW on DC, no DC size, $100 minimum", { kind: "per-kw", size: "dc", rateCentsPerKw: 1_500 }, { dcKw: null }, 10_000, 10_000],
+    ["per kW on AC, no AC size, no minimum", { kind: "per-kw", size: "ac", rateCentsPerKw: 2_000 }, { acKw: null }, null, 0],
+    ["brackets, no DC size, $150 minimum", ashcombeBrackets, { dcKw: null }, 15_000, 15_000],
+    ["marginal tiers, no AC size, no minimum", brindleMarginal, { acKw: null }, null, 0],
+  ])("size not known (%s): a problem, counted at its minimum or 0", (_what, basis, on, minimumCents, amountCents) => {
+    const line = only(feeLine(basis, { minimumCents }), on);
+    expect(line).toMatchObject({ amountCents, problem: { code: "size-missing", message: "Complete the design to work out this fee: it depends on the system size." } });
+    expect(line.arithmetic[0]).toMatch(/reads the system size in kW (DC|AC): not known until the design is complete/);
+  });
+
+  test("the other size still works a line out: an AC fee needs no DC size", () => {
+    expect(only(feeLine({ kind: "per-kw", size: "ac", rateCentsPerKw: 2_000 }), { dcKw: null })).toMatchObject({ amountCents: 12_000 });
+    expect(only(feeLine({ kind: "flat", amountCents: 25_000 }), { dcKw: null, acKw: null, valuationCents: null }).problem).toBeUndefined();
   });
 });
 

@@ -63,8 +63,8 @@ const scheduleArb = fc
   .map((lines): FeeLine[] => lines.map((line, i) => ({ id: `line-${i}`, ...line })));
 
 const factsArb: fc.Arbitrary<FeeFacts> = fc.record({
-  dcKw: wattsArb.map((w) => w / 1000),
-  acKw: wattsArb.map((w) => w / 1000),
+  dcKw: fc.option(wattsArb.map((w) => w / 1000), { freq: 5 }),
+  acKw: fc.option(wattsArb.map((w) => w / 1000), { freq: 5 }),
   valuationCents: fc.option(centsArb(1_000_000_000)),
   asOf: dateArb,
 });
@@ -85,7 +85,7 @@ describe("fee arithmetic holds for any schedule the form accepts", () => {
     );
   });
 
-  test("only lines in effect count, one version of each fee, and only a missing valuation leaves a problem", () => {
+  test("only lines in effect count, one version of each fee, and only a missing valuation or size leaves a problem", () => {
     fc.assert(
       fc.property(scheduleArb, factsArb, (lines, facts) => {
         const result = computeFees({ lines, facts });
@@ -93,7 +93,9 @@ describe("fee arithmetic holds for any schedule the form accepts", () => {
         for (const { lineId, problem } of result.lines) {
           const line = byId.get(lineId)!;
           expect(isInEffect(line, facts.asOf)).toBe(true);
-          expect(problem !== undefined).toBe(line.basis.kind === "valuation-percent" && facts.valuationCents === null);
+          const basis = line.basis;
+          const missing = basis.kind === "valuation-percent" ? facts.valuationCents === null : basis.kind !== "flat" && facts[basis.size === "dc" ? "dcKw" : "acKw"] === null;
+          expect(problem !== undefined).toBe(missing);
         }
         const names = result.lines.map((line) => feeNameKey(line.name));
         expect(new Set(names).size).toBe(names.length);
@@ -112,6 +114,25 @@ describe("fee arithmetic holds for any schedule the form accepts", () => {
           if (minimumCents !== null) expect(amountCents).toBeGreaterThanOrEqual(minimumCents);
           if (maximumCents !== null) expect(amountCents).toBeLessThanOrEqual(maximumCents);
         }
+      }),
+      RUNS,
+    );
+  });
+
+  test("a line that waits for a fact counts at its minimum (or 0), never more than it comes to once the fact is given", () => {
+    const given = fc.record({ watts: wattsArb, valuationCents: centsArb(1_000_000_000) });
+    fc.assert(
+      fc.property(lineArb(), dateArb, given, (line, asOf, { watts, valuationCents }) => {
+        const lines = [{ id: "line", ...line, effectiveFrom: "2024-01-01", effectiveUntil: null }];
+        const [waiting] = computeFees({ lines, facts: { dcKw: null, acKw: null, valuationCents: null, asOf } }).lines;
+        const [known] = computeFees({ lines, facts: { dcKw: watts / 1000, acKw: watts / 1000, valuationCents, asOf } }).lines;
+        expect(known!.problem).toBeUndefined();
+        if (line.basis.kind === "flat") {
+          expect(waiting).toEqual(known);
+          return;
+        }
+        expect(waiting!.amountCents).toBe(line.minimumCents ?? 0);
+        expect(waiting!.amountCents).toBeLessThanOrEqual(known!.amountCents);
       }),
       RUNS,
     );

@@ -8,7 +8,11 @@ import { saveDesignDraft } from "@/lib/server/data/designs";
 import { failAbandonedPackets, getPacketFile, listPackets, requestPacket, retryPacket } from "@/lib/server/data/packets";
 import { db } from "@/lib/server/db";
 import { generatePacket } from "@/lib/server/services/packet-generation";
-import { getObjectBytes } from "@/lib/server/services/storage";
+import { getObjectBytes, putObject } from "@/lib/server/services/storage";
+import { planGenerationSteps } from "@/lib/packets/generation-steps";
+import { packetSheetTitles } from "@/lib/packets/render-packet";
+import type { PacketInput } from "@/lib/packets/packet-input";
+import { PDFDocument } from "pdf-lib";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
 
@@ -72,6 +76,33 @@ describe("packets", () => {
     expect(await AuditEvent.count({ where: { entityId: project.id, action: "packet.generated" } })).toBe(2);
   });
 
+  it("records each step the worker takes, in order, as it starts it, with progress that only grows", async () => {
+    const project = await projectWithDesign();
+    const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" });
+    // One data sheet in storage, so the log also shows it being read and merged.
+    const sheet = await PDFDocument.create();
+    sheet.addPage([612, 792]);
+    const key = `orgs/${org.organization.id}/test/datasheet-${queued.id}.pdf`;
+    await putObject({ key, body: await sheet.save(), contentType: "application/pdf" });
+    const row = (await Packet.findByPk(queued.id))!;
+    const input = { ...(row.input as unknown as PacketInput), datasheets: [{ title: "NM-380B module data sheet", fileName: "nm-380b.pdf", objectKey: key }] };
+    await row.update({ input: input as unknown as Record<string, unknown> });
+
+    await generatePacket(queued.id);
+    const done = (await Packet.findByPk(queued.id))!;
+    const titles = packetSheetTitles(input);
+    const planned = planGenerationSteps({ sheetTitles: titles, datasheetTitles: ["NM-380B module data sheet"] });
+    expect(done.steps.map((s) => s.text)).toEqual([...planned.map((s) => s.text), "Ready"]);
+    expect(done.steps[0]!.text).toBe(`Drawing sheet 1 of ${titles.length}: Cover sheet`);
+    expect(done.steps.map((s) => s.progress)).toEqual([...planned.map((s) => s.progress), 100]);
+    // In order, as they happened: times and progress never go back, and most steps sit strictly between 0 and 100.
+    const times = done.steps.map((s) => Date.parse(s.at));
+    times.slice(1).forEach((t, i) => expect(t).toBeGreaterThanOrEqual(times[i]!));
+    done.steps.slice(1).forEach((s, i) => expect(s.progress).toBeGreaterThanOrEqual(done.steps[i]!.progress));
+    expect(done.steps.filter((s) => s.progress > 0 && s.progress < 100).length).toBe(planned.length - 1);
+    expect(done).toMatchObject({ status: "ready", progress: 100, pageCount: titles.length + 1 });
+  });
+
   it("refuses a failing design unless a reason is written, and prints and records the reason", async () => {
     const project = await projectWithDesign("15"); // 15 × 42.5 V at −20 °C is above 600 V
     const refused = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "interconnection" }).catch((e) => e);
@@ -94,6 +125,8 @@ describe("packets", () => {
     await generatePacket(queued.id);
     const [failed] = await listPackets({ viewer: org.viewers.coordinator, projectId: project.id });
     expect(failed).toMatchObject({ status: "failed", sha256: null });
+    // The attempt's log stops at the step that could not finish.
+    expect((await Packet.findByPk(queued.id))!.steps.at(-1)!.text).toBe("Reading data sheet 1 of 1: Missing");
     expect(await code(getPacketFile({ viewer: org.viewers.coordinator, packetId: failed.id }))).toBe("NOT_FOUND");
 
     await row!.update({ input });

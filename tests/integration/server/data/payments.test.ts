@@ -102,6 +102,36 @@ describe("fees and payments", () => {
     expect(await code(getProjectFees({ viewer: rival.viewers.admin, projectId: project.id }))).toBe("NOT_FOUND");
   });
 
+  it("counts a fee that waits for the valuation or the design at its minimum, in the unpaid total too", async () => {
+    // Invented schedule (demo): 1 % of the valuation with a $60.00 minimum, 0.5 % with none, $30.00/kW DC with a $100.00 minimum.
+    const own = await makeOrganization("Fees at least");
+    await FeeSchedule.create({
+      organizationId: own.organization.id, authorityKind: "jurisdiction", authorityId: own.jurisdiction.id, updatedById: null,
+      lines: [
+        line("b", "Building permit", { kind: "valuation-percent", ratePercent: "1" }, { minimumCents: 60_00 }),
+        line("r", "Records fee", { kind: "valuation-percent", ratePercent: "0.5" }),
+        line("k", "Electrical permit", { kind: "per-kw", size: "dc", rateCentsPerKw: 30_00 }, { minimumCents: 100_00 }),
+      ],
+    });
+    const project = await makeProject(own); // no design saved: the size is not known
+    const before = await getProjectFees({ viewer: own.viewers.coordinator, projectId: project.id });
+    const byName = (name: string) => before.lines.find((l) => l.name === name)!;
+    expect(byName("Building permit")).toMatchObject({ amountCents: 60_00, problemCode: "valuation-missing", state: "unpaid", payable: false });
+    expect(byName("Records fee")).toMatchObject({ amountCents: 0, problemCode: "valuation-missing", payable: false });
+    expect(byName("Electrical permit")).toMatchObject({ amountCents: 100_00, problemCode: "size-missing", payable: false });
+    expect(byName("Electrical permit").problem).toMatch(/design/);
+    // $60.00 + $0.00 + $100.00, the least the fees come to
+    expect(before).toMatchObject({ unpaidTotalCents: 160_00, unpaidIsAtLeast: true });
+    expect(await code(startPayment({ viewer: own.viewers.coordinator, projectId: project.id, feeKeys: [byName("Building permit").feeKey] }))).toBe("CONFLICT");
+
+    // $4,000.00 declared: 1 % is $40.00, raised to the $60.00 minimum; 0.5 % is $20.00.
+    await setDeclaredValuation({ viewer: own.viewers.coordinator, projectId: project.id, valuationCents: 4_000_00 });
+    const after = await getProjectFees({ viewer: own.viewers.coordinator, projectId: project.id });
+    expect(after.lines.find((l) => l.name === "Building permit")).toMatchObject({ amountCents: 60_00, problemCode: null, payable: true });
+    expect(after.lines.find((l) => l.name === "Records fee")).toMatchObject({ amountCents: 20_00, payable: true });
+    expect(after).toMatchObject({ unpaidTotalCents: 180_00, unpaidIsAtLeast: true }); // the electrical permit still waits for the design
+  });
+
   it("pays with the succeeding card: duplicated and reordered webhooks make exactly one paid payment; a forged one changes nothing", async () => {
     const project = await projectWithDesign();
     const fees = await getProjectFees({ viewer: org.viewers.coordinator, projectId: project.id });
@@ -173,10 +203,25 @@ describe("fees and payments", () => {
     const after = await getProjectFees({ viewer: org.viewers.coordinator, projectId: project.id });
     expect(after.lines.find((l) => l.feeKey === key)!.state).toBe("unpaid");
 
+    expect(after.payments.find((p) => p.id === paymentId)!.failureStillOpen).toBe(true);
+
     // Paying again replaces the open checkout, so the fee can never be paid twice.
     const second = await startPayment({ viewer: org.viewers.coordinator, projectId: project.id, feeKeys: [key] });
     expect((await Payment.findByPk(paymentId))!.status).toBe("expired");
     expect(second.paymentId).not.toBe(paymentId);
+    // With another checkout under way for the fee, the declined one no longer asks for another card.
+    const paying = await getProjectFees({ viewer: org.viewers.coordinator, projectId: project.id });
+    expect(paying.lines.find((l) => l.feeKey === key)!.state).toBe("in-progress");
+    expect(paying.payments.find((p) => p.id === paymentId)!.failureStillOpen).toBe(false);
+
+    // Once another card pays the fee, the declined attempt no longer tells anyone to pay again.
+    const replacement = (await Payment.findByPk(second.paymentId))!;
+    await fake(`/_fake/checkout/sessions/${replacement.checkoutSessionId}/pay`, { card: CARDS.ok });
+    const done = (await eventsFor(replacement.checkoutSessionId!)).find((e) => e.type === "checkout.session.completed")!;
+    for (const event of await eventsFor(replacement.checkoutSessionId!, (done.data.object as Stripe.Checkout.Session).payment_intent as string)) await deliver(event);
+    const paidNow = await getProjectFees({ viewer: org.viewers.coordinator, projectId: project.id });
+    expect(paidNow.lines.find((l) => l.feeKey === key)!.state).toBe("paid");
+    expect(paidNow.payments.find((p) => p.id === paymentId)).toMatchObject({ failureMessage: "Your card was declined.", failureStillOpen: false });
   });
 
   it("ignores a signed event for a payment Ohmstead did not start, even with odd metadata", async () => {
@@ -226,6 +271,64 @@ describe("refunds under pressure", () => {
     expect((await Payment.findByPk(payment.id))!.refundedCents).toBe(10_00);
     expect((await refundMail(payment.projectId)) - mailBefore).toBe(1);
     expect(await audits(payment.projectId)).toBe(1);
+  });
+
+  it("a refund naming a fee makes it unpaid again; money alone leaves the fees paid until all of it is returned", async () => {
+    const payment = await paidPayment();
+    const fees = () => getProjectFees({ viewer: org.viewers.admin, projectId: payment.projectId });
+    const states = async () => Object.fromEntries((await fees()).lines.filter((l) => l.name !== "Plan review").map((l) => [l.name, l.state]));
+    const utility = (await fees()).lines.find((l) => l.name === "Interconnection application")!;
+    const permit = (await fees()).lines.find((l) => l.name === "Solar permit")!;
+    expect(payment.amountCents).toBe(utility.amountCents + permit.amountCents);
+    expect(permit.amountCents).toBeGreaterThanOrEqual(125_00); // at least its $100.00 minimum: 7.6 kW DC × $20.00 = $152.00
+
+    // Money equal to the utility fee's $125.00, not tied to it: which fee it was for is not known, so both stay paid.
+    await refundPayment({ viewer: org.viewers.admin, paymentId: payment.id, amountCents: 125_00, reason: "Overcharged" });
+    expect(await states()).toEqual({ "Solar permit": "paid", "Interconnection application": "paid" });
+    expect((await Payment.findByPk(payment.id))!.status).toBe("partially_refunded");
+
+    // The utility fee refunded as a line: the server works out its amount, and the line is unpaid again.
+    expect(await code(refundPayment({ viewer: org.viewers.admin, paymentId: payment.id, feeKeys: ["not-a-line"], reason: "Wrong" }))).toBe("CONFLICT");
+    const after = await refundPayment({ viewer: org.viewers.admin, paymentId: payment.id, feeKeys: [utility.feeKey], reason: "Application withdrawn" });
+    expect(after.refunds.find((r) => r.lineNames.length)).toMatchObject({ amountCents: 125_00, lineNames: ["Interconnection application"] });
+    expect(Object.fromEntries(after.lines.map((l) => [l.name, l.refunded]))).toEqual({ "Solar permit": false, "Interconnection application": true });
+    expect(await states()).toEqual({ "Solar permit": "paid", "Interconnection application": "refunded" });
+    const now = await fees();
+    expect(now.lines.find((l) => l.feeKey === utility.feeKey)).toMatchObject({ payable: true, paymentId: payment.id });
+    expect(now.unpaidTotalCents).toBe(now.lines.filter((l) => l.state === "unpaid" || l.state === "refunded").reduce((sum, l) => sum + l.amountCents, 0));
+    expect(now.lines.filter((l) => l.state === "unpaid" || l.state === "refunded").map((l) => l.name).sort()).toEqual(["Interconnection application", "Plan review"]);
+    expect(await code(refundPayment({ viewer: org.viewers.admin, paymentId: payment.id, feeKeys: [utility.feeKey], reason: "Again" }))).toBe("CONFLICT");
+    // The permit as a line no longer fits: $125.00 of money already went back.
+    expect(await code(refundPayment({ viewer: org.viewers.admin, paymentId: payment.id, feeKeys: [permit.feeKey], reason: "Too much" }))).toBe("CONFLICT");
+
+    // The rest as money: the payment is refunded in full, so every line is given back.
+    await refundPayment({ viewer: org.viewers.admin, paymentId: payment.id, amountCents: permit.amountCents - 125_00, reason: "Project cancelled" });
+    expect((await Payment.findByPk(payment.id))!.status).toBe("refunded");
+    expect(await states()).toEqual({ "Solar permit": "refunded", "Interconnection application": "refunded" });
+
+    // Paying the utility fee again makes it paid by the new payment.
+    const { paymentId } = await startPayment({ viewer: org.viewers.coordinator, projectId: payment.projectId, feeKeys: [utility.feeKey] });
+    expect((await Payment.findByPk(paymentId))!.amountCents).toBe(125_00);
+
+    // The processor's refund events, delivered late, keep the fee lines each refund named.
+    for (const event of (await eventsFor(payment.checkoutSessionId!, payment.paymentIntentId)).filter((e) => e.type.startsWith("refund."))) await deliver(event);
+    const named = await Refund.findAll({ where: { paymentId: payment.id }, order: [["createdAt", "ASC"]] });
+    expect(named.map((r) => r.feeKeys)).toEqual([[], [utility.feeKey], []]);
+  });
+
+  it("records the fees a refund named even when the processor's event arrives before the admin's call is recorded", async () => {
+    const payment = await paidPayment();
+    const line = (await getProjectFees({ viewer: org.viewers.admin, projectId: payment.projectId })).lines.find((l) => l.name === "Interconnection application")!;
+    // The refund made at the processor with Ohmstead's metadata, and recorded from its webhook only.
+    const created = await fetch(`${FAKE}/v1/refunds`, {
+      method: "POST",
+      headers: { authorization: `Bearer ${process.env.STRIPE_SECRET_KEY}`, "content-type": "application/x-www-form-urlencoded" },
+      body: new URLSearchParams({ payment_intent: payment.paymentIntentId!, amount: String(line.amountCents), "metadata[paymentId]": payment.id, "metadata[feeKeys]": JSON.stringify([line.feeKey]) }).toString(),
+    }).then((r) => r.json());
+    expect(created.id).toBeTruthy();
+    for (const event of (await eventsFor(payment.checkoutSessionId!, payment.paymentIntentId)).filter((e) => e.type.startsWith("refund."))) await deliver(event);
+    expect((await Refund.findOne({ where: { processorRefundId: created.id } }))!.feeKeys).toEqual([line.feeKey]);
+    expect((await getProjectFees({ viewer: org.viewers.admin, projectId: payment.projectId })).lines.find((l) => l.feeKey === line.feeKey)!.state).toBe("refunded");
   });
 
   it("shows the processor's reason when it refuses a refund", async () => {

@@ -8,8 +8,8 @@ import { PayFeesInput, RefundInput, ValuationInput } from "@/lib/schemas/payment
 
 export const payFeesAction = defineAction({ schema: PayFeesInput, permission: "fees:pay" }, async ({ projectId, feeKeys }, { viewer }) => startPayment({ viewer, projectId, feeKeys }));
 
-export const refundPaymentAction = defineAction({ schema: RefundInput, permission: "fees:refund" }, async ({ paymentId, amount, reason }, { viewer }) => {
-  const payment = await refundPayment({ viewer, paymentId, amountCents: amount!, reason });
+export const refundPaymentAction = defineAction({ schema: RefundInput, permission: "fees:refund" }, async ({ paymentId, feeKeys, amount, reason }, { viewer }) => {
+  const payment = await refundPayment({ viewer, paymentId, reason, ...(feeKeys?.length ? { feeKeys } : { amountCents: amount! }) });
   return { status: payment.status, refundedCents: payment.refundedCents };
 });
 

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { ProjectSubpageHeader } from "@/components/projects/project-subpage-header";
 import { can } from "@/lib/domain/permissions";
-import { formatUsd } from "@/lib/fees";
+import { feeTotalText } from "@/lib/fees";
 import { requireUser } from "@/lib/server/auth";
 import { getProjectFees } from "@/lib/server/data/project-fees";
 import { loadProjectOr404 } from "@/lib/server/pages";
@@ -34,7 +34,8 @@ export default async function FeesPage({ params, searchParams }: { params: Promi
       <ValuationForm projectId={project.id} valuationCents={fees.valuationCents} canEdit={can(viewer, "project:edit")} />
       <FeeLines projectId={project.id} lines={fees.lines} canPay={can(viewer, "fees:pay")} watchPending={pending} />
       <p className="text-sm text-ink-soft">
-        Unpaid: <strong className="measure">{formatUsd(fees.unpaidTotalCents)}</strong>. Fee schedules change: confirm the amounts with the AHJ and the utility before filing.
+        Unpaid: <strong className="measure" data-testid="unpaid-total">{feeTotalText({ totalCents: fees.unpaidTotalCents, isComplete: !fees.unpaidIsAtLeast })}</strong>
+        {fees.unpaidIsAtLeast ? " (a fee still waits for the valuation or the design)" : ""}. Fee schedules change: confirm the amounts with the AHJ and the utility before filing.
       </p>
       <PaymentHistory payments={fees.payments} canRefund={can(viewer, "fees:refund")} />
     </div>

@@ -14,11 +14,13 @@ async function fetchPackets(url: string): Promise<PacketDto[]> {
   return body.items;
 }
 
-/** Both packets of a project; polls while a generation is queued or running. */
+/** Both packets of a project; polls while a generation is queued or running, often enough to show each step the worker reports. */
 export function PacketBoard({ projectId, initial, canGenerate, reviewStatus }: { projectId: string; initial: PacketDto[]; canGenerate: boolean; reviewStatus: string }) {
   const { data, error, mutate } = useSWR(`/api/v1/projects/${projectId}/packets`, fetchPackets, {
     fallbackData: initial,
-    refreshInterval: (latest) => (latest?.some((p) => p.status === "queued" || p.status === "running") ? 1000 : 0),
+    refreshInterval: (latest) => (latest?.some((p) => p.status === "queued" || p.status === "running") ? 400 : 0),
+    // SWR skips a poll within the dedupe window of the last request (2 s by default), which hid most steps.
+    dedupingInterval: 300,
   });
   // A revision that just became ready can be shared: the server-rendered share panel is refreshed
   // when the set of ready revisions grows, not only on the next page load.

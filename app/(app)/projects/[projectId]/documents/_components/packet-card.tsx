@@ -1,6 +1,6 @@
 "use client";
 
-import { useState, useTransition } from "react";
+import { useRef, useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { PACKET_TITLES, type PacketKind } from "@/lib/packets/packet-input";
@@ -22,6 +22,7 @@ export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus
   const ready = packets.filter((p) => p.status === "ready");
   const next = (ready[0]?.revision ?? 0) + 1;
   const needsReason = reviewStatus === "fail";
+  const progress = useForwardProgress(inFlight);
 
   const run = (action: () => Promise<{ ok: boolean; message?: string }>) =>
     startTransition(async () => {
@@ -41,12 +42,16 @@ export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus
 
       {inFlight ? (
         <div className="space-y-1" data-testid="packet-progress">
-          <p className="text-sm">
-            Generating Rev {inFlight.revision}: {inFlight.step}
+          <p className="flex items-baseline justify-between gap-3 text-sm">
+            <span className="font-medium">{inFlight.status === "queued" ? `Rev ${inFlight.revision} is queued` : `Generating Rev ${inFlight.revision}`}</span>
+            <span className="measure text-xs text-ink-soft">{progress} %</span>
           </p>
-          <div className="h-2 overflow-hidden rounded-full bg-paper-edge" role="progressbar" aria-label={`${PACKET_TITLES[kind]} progress`} aria-valuemin={0} aria-valuemax={100} aria-valuenow={inFlight.progress}>
-            <div className="h-full bg-copper transition-all" style={{ width: `${Math.max(4, inFlight.progress)}%` }} />
+          <div className="h-2 overflow-hidden rounded-full bg-paper-edge" role="progressbar" aria-label={`${PACKET_TITLES[kind]} progress`} aria-valuemin={0} aria-valuemax={100} aria-valuenow={progress} aria-valuetext={`${progress} %: ${inFlight.step}`}>
+            <div className="h-full bg-copper transition-all" style={{ width: `${Math.max(4, progress)}%` }} />
           </div>
+          <p className="truncate text-xs text-ink-soft" data-testid="packet-step" title={inFlight.step}>
+            {inFlight.step}
+          </p>
         </div>
       ) : null}
 
@@ -89,4 +94,17 @@ export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus
       )}
     </section>
   );
+}
+
+/** The in-flight generation's progress, never shown going back: a poll answered out of order cannot move the bar backwards. */
+function useForwardProgress(packet: PacketDto | undefined): number {
+  const highest = useRef<{ id: string; progress: number } | null>(null);
+  if (!packet) {
+    highest.current = null; // a retry of the same revision starts again from its first step
+    return 0;
+  }
+  const seen = highest.current?.id === packet.id ? highest.current.progress : 0;
+  const progress = Math.max(seen, packet.progress);
+  highest.current = { id: packet.id, progress };
+  return progress;
 }

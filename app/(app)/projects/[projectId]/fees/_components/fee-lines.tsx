@@ -4,20 +4,26 @@ import { useRouter } from "next/navigation";
 import { useEffect, useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
+import { feeAmountText } from "@/lib/fees/line-amount";
 import { formatUsd } from "@/lib/fees/money";
 import type { ProjectFeeLineDto } from "@/lib/server/data/project-fees";
 import { payFeesAction } from "../actions";
 
-const STATE_TEXT = { unpaid: "Unpaid", "in-progress": "Payment in progress", paid: "Paid" } as const;
+const STATE_TEXT: Record<ProjectFeeLineDto["state"], string> = { unpaid: "Unpaid", "in-progress": "Payment in progress", paid: "Paid", refunded: "Refunded, unpaid again" };
 
 /** The project's fee lines with their working; unpaid ones can be chosen and paid together. */
 export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId: string; lines: ProjectFeeLineDto[]; canPay: boolean; watchPending: boolean }) {
   const router = useRouter();
-  const payable = lines.filter((l) => l.state !== "paid" && !l.problem && l.amountCents > 0);
-  const [chosen, setChosen] = useState<Set<string>>(() => new Set(payable.filter((l) => l.state === "unpaid").map((l) => l.feeKey)));
+  const payable = lines.filter((l) => l.payable);
+  // What the coordinator ticked or unticked; a line they left alone is chosen while it is owed, so a
+  // fee that becomes payable (the valuation was entered) is offered without a reload.
+  const [choice, setChoice] = useState<Map<string, boolean>>(() => new Map());
+  const isChosen = (l: ProjectFeeLineDto) => choice.get(l.feeKey) ?? (l.state === "unpaid" || l.state === "refunded");
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
-  const total = lines.filter((l) => chosen.has(l.feeKey)).reduce((sum, l) => sum + l.amountCents, 0);
+  // Only lines payable now count: one chosen earlier may since wait for the valuation, or be paid.
+  const picked = payable.filter(isChosen);
+  const total = picked.reduce((sum, l) => sum + l.amountCents, 0);
 
   // While a payment waits for the processor's confirmation, look again every couple of seconds.
   useEffect(() => {
@@ -33,7 +39,7 @@ export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId
   function pay() {
     setMessage(undefined);
     startTransition(async () => {
-      const result = await payFeesAction({ projectId, feeKeys: [...chosen] });
+      const result = await payFeesAction({ projectId, feeKeys: picked.map((l) => l.feeKey) });
       if (!result.ok) {
         setMessage(result.message);
         router.refresh();
@@ -57,7 +63,7 @@ export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId
             <li key={line.feeKey} className="flex gap-3 py-3" data-testid="fee-line" data-state={line.state}>
               <div className="pt-0.5">
                 {selectable ? (
-                  <input type="checkbox" className="h-5 w-5 accent-copper" aria-label={`Pay ${line.name}`} checked={chosen.has(line.feeKey)} onChange={(e) => setChosen((s) => { const next = new Set(s); if (e.target.checked) next.add(line.feeKey); else next.delete(line.feeKey); return next; })} />
+                  <input type="checkbox" className="h-5 w-5 accent-copper" aria-label={`Pay ${line.name}`} checked={isChosen(line)} onChange={(e) => setChoice((all) => new Map(all).set(line.feeKey, e.target.checked))} />
                 ) : (
                   <span className="inline-block h-5 w-5" aria-hidden />
                 )}
@@ -67,7 +73,9 @@ export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId
                   <p className="font-medium">
                     {line.name} <span className="text-sm font-normal text-ink-faint">· {line.authority}</span>
                   </p>
-                  <p className="measure font-semibold">{formatUsd(line.amountCents)}</p>
+                  <p className="measure font-semibold" data-testid="fee-line-amount">
+                    {feeAmountText({ amountCents: line.amountCents, problem: line.problemCode })}
+                  </p>
                 </div>
                 <ul className="measure mt-1 space-y-0.5 text-xs text-ink-soft" aria-label={`Working for ${line.name}`}>
                   {line.arithmetic.map((step, i) => (
@@ -85,7 +93,7 @@ export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId
       </ul>
       {canPay && payable.length > 0 ? (
         <div className="flex flex-wrap items-center gap-3 border-t border-paper-edge pt-3">
-          <Button type="button" onClick={pay} disabled={pending || chosen.size === 0}>
+          <Button type="button" onClick={pay} disabled={pending || picked.length === 0}>
             {pending ? "Opening the payment page…" : `Pay ${formatUsd(total)} by card`}
           </Button>
           <span className="text-xs text-ink-faint">Card payment on the payment service&apos;s page; Ohmstead never sees the card number.</span>

@@ -1,12 +1,9 @@
 "use client";
 
-import { useRouter } from "next/navigation";
-import { useState, useTransition } from "react";
 import { LocalTime } from "@/components/time/local-time";
-import { Button } from "@/components/ui/button";
-import { centsToDollarsText, formatUsd } from "@/lib/fees/money";
+import { formatUsd } from "@/lib/fees/money";
 import type { PaymentDto } from "@/lib/server/data/project-fees";
-import { refundPaymentAction } from "../actions";
+import { RefundForm } from "./refund-form";
 
 const STATUS_TEXT: Record<PaymentDto["status"], string> = { pending: "Waiting for payment", paid: "Paid", expired: "Not completed", partially_refunded: "Partly refunded", refunded: "Refunded" };
 
@@ -35,8 +32,8 @@ export function PaymentHistory({ payments, canRefund }: { payments: PaymentDto[]
                 </a>
               ) : null}
             </div>
-            <p className="text-sm text-ink-soft">{p.lines.map((l) => `${l.authority}: ${l.name} ${formatUsd(l.amountCents)}`).join(" · ")}</p>
-            {p.failureMessage && p.status !== "paid" ? (
+            <p className="text-sm text-ink-soft">{p.lines.map((l) => `${l.authority}: ${l.name} ${formatUsd(l.amountCents)}${l.refunded ? " (refunded)" : ""}`).join(" · ")}</p>
+            {p.failureStillOpen ? (
               <p className="text-sm text-result-fail" role="alert" data-testid="payment-failure">
                 Last attempt: {p.failureMessage} The fees stay unpaid; pay again with another card.
               </p>
@@ -45,7 +42,8 @@ export function PaymentHistory({ payments, canRefund }: { payments: PaymentDto[]
               <ul className="text-sm text-ink-soft" data-testid="refunds">
                 {p.refunds.map((r) => (
                   <li key={r.id} data-failed={r.failed || undefined}>
-                    Refunded <span className="measure">{formatUsd(r.amountCents)}</span> on {when(r.createdAt)}
+                    Refunded <span className="measure">{formatUsd(r.amountCents)}</span>
+                    {r.lineNames.length ? ` for ${r.lineNames.join(", ")}` : ""} on {when(r.createdAt)}
                     {r.createdBy ? ` by ${r.createdBy}` : ""}
                     {r.reason ? `: ${r.reason}` : ""}
                     {r.failed ? " — the processor could not return this money, so it is not counted as refunded" : null}
@@ -58,63 +56,5 @@ export function PaymentHistory({ payments, canRefund }: { payments: PaymentDto[]
         ))}
       </ul>
     </section>
-  );
-}
-
-function RefundForm({ payment }: { payment: PaymentDto }) {
-  const router = useRouter();
-  const left = payment.amountCents - payment.refundedCents;
-  const [open, setOpen] = useState(false);
-  const [amount, setAmount] = useState(centsToDollarsText(left));
-  const [reason, setReason] = useState("");
-  const [errors, setErrors] = useState<Record<string, string[] | undefined>>({});
-  const [message, setMessage] = useState<string>();
-  const [pending, startTransition] = useTransition();
-  if (!open) {
-    return (
-      <Button type="button" variant="quiet" onClick={() => setOpen(true)}>
-        Refund…
-      </Button>
-    );
-  }
-  const submit = (event: React.FormEvent) => {
-    event.preventDefault();
-    setMessage(undefined);
-    startTransition(async () => {
-      const result = await refundPaymentAction({ paymentId: payment.id, amount, reason });
-      if (!result.ok) {
-        setErrors(result.fieldErrors ?? {});
-        setMessage(result.message);
-        return;
-      }
-      setOpen(false);
-      router.refresh();
-    });
-  };
-  return (
-    <form onSubmit={submit} className="grid gap-2 rounded border border-paper-edge bg-paper/60 p-3 sm:grid-cols-[10rem_1fr_auto] sm:items-end" aria-label="Refund">
-      <div>
-        <label className="label" htmlFor={`refund-amount-${payment.id}`}>
-          Refund amount ($)
-        </label>
-        <input id={`refund-amount-${payment.id}`} className="input measure" inputMode="decimal" value={amount} onChange={(e) => setAmount(e.target.value)} />
-        {errors.amount ? <p className="mt-1 text-sm text-result-fail">{errors.amount[0]}</p> : <p className="mt-1 text-xs text-ink-faint">Up to {formatUsd(left)}</p>}
-      </div>
-      <div>
-        <label className="label" htmlFor={`refund-reason-${payment.id}`}>
-          Reason
-        </label>
-        <input id={`refund-reason-${payment.id}`} className="input" value={reason} onChange={(e) => setReason(e.target.value)} />
-        {errors.reason ? <p className="mt-1 text-sm text-result-fail">{errors.reason[0]}</p> : null}
-      </div>
-      <Button type="submit" variant="danger" disabled={pending}>
-        {pending ? "Refunding…" : "Refund"}
-      </Button>
-      {message ? (
-        <p className="text-sm text-result-fail sm:col-span-3" role="alert">
-          {message}
-        </p>
-      ) : null}
-    </form>
   );
 }

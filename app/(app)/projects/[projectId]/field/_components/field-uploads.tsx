@@ -3,14 +3,12 @@
 import { clsx } from "clsx";
 import { useRef, useState } from "react";
 import { useDropzone, type FileRejection } from "react-dropzone";
-import { LocalTime } from "@/components/time/local-time";
-import { ALLOWED_TYPES, KIND_LABELS, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, allowedTypesText, tooLargeMessage } from "@/lib/field/upload-rules";
+import { ALLOWED_TYPES, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, allowedTypesText, tooLargeMessage } from "@/lib/field/upload-rules";
 import type { ProjectFileDto } from "@/lib/server/data/project-files";
 import type { ProjectFileKind } from "@/models/project-file";
+import { UploadedFiles } from "./uploaded-files";
 
 type Notice = { key: string; name: string; kind: "uploading" | "done" | "refused"; text: string };
-
-const sizeText = (bytes: number) => (bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`);
 
 function rejectionText(kind: ProjectFileKind, rejection: FileRejection): string {
   const code = rejection.errors[0]?.code;
@@ -74,23 +72,14 @@ export function FieldUploads({ projectId, initialFiles, mayUpload }: { projectId
       ) : null}
       <div>
         <h3 className="mb-1 text-sm font-semibold">Received files</h3>
-        {files.length === 0 ? (
-          <p className="text-sm text-ink-faint">Nothing uploaded yet.</p>
-        ) : (
-          <ul className="divide-y divide-paper-edge/70" data-testid="uploaded-files">
-            {files.map((f) => (
-              <li key={f.id} className="flex flex-wrap items-baseline gap-x-3 py-2 text-sm">
-                <a href={`/api/v1/projects/${projectId}/files/${f.id}`} download className="font-medium">
-                  {f.fileName}
-                </a>
-                <span className="text-ink-soft">{KIND_LABELS[f.kind]}</span>
-                <span className="measure text-xs text-ink-faint">
-                  {sizeText(f.sizeBytes)} · {f.uploadedBy ?? "someone"} · <LocalTime iso={f.createdAt} />
-                </span>
-              </li>
-            ))}
-          </ul>
-        )}
+        <UploadedFiles
+          projectId={projectId}
+          files={files}
+          onRemoved={(file, error) => {
+            if (!error) setFiles((all) => all.filter((f) => f.id !== file.id));
+            note({ key: `removed:${file.id}`, name: file.fileName, kind: error ? "refused" : "done", text: error ?? "Removed." });
+          }}
+        />
       </div>
     </section>
   );
