@@ -2,8 +2,9 @@
 // Money is always integer cents; sizes are kW with at most three decimals (whole watts).
 
 /** Who charges a fee: the AHJ (permit) or the utility (interconnection); each keeps one schedule. */
-export const FEE_AUTHORITY_KINDS = ["jurisdiction", "utility"] as const;
-export type FeeAuthorityKind = (typeof FEE_AUTHORITY_KINDS)[number];
+export { AUTHORITY_KINDS as FEE_AUTHORITY_KINDS } from "@/lib/domain/authorities";
+import type { AuthorityKind } from "@/lib/domain/authorities";
+export type FeeAuthorityKind = AuthorityKind;
 
 /** Which size of the system a size-based fee reads: module nameplate (DC) or inverter output (AC). */
 export type SizeRating = "dc" | "ac";

@@ -35,8 +35,8 @@ test("admin adds a jurisdiction and a utility with its accepted grid profiles, a
 
   const coordinator = await pageFor(browser, DEMO.coordinator);
   await coordinator.goto("/settings/utilities");
-  const card = coordinator.getByRole("listitem").filter({ hasText: `Ivel Valley Power ${tag}` });
-  await expect(card.getByRole("listitem")).toHaveText(["IEEE 1547-2018 Category B, utility's default settings", "IEEE 1547-2018 Category B, volt-var on"]);
+  const utilityRow = coordinator.getByRole("row", { name: new RegExp(`Ivel Valley Power ${tag}`) });
+  await expect(utilityRow.getByRole("cell").nth(2).getByRole("listitem")).toHaveText(["IEEE 1547-2018 Category B, utility's default settings", "IEEE 1547-2018 Category B, volt-var on"]);
   await expect(coordinator.getByRole("link", { name: `Edit Ivel Valley Power ${tag}` })).toHaveCount(0);
   await expect(coordinator.getByRole("button", { name: "Add utility" })).toHaveCount(0);
   await coordinator.goto("/settings/jurisdictions");
