@@ -28,7 +28,7 @@ export function reviewDocument(body: unknown): DocumentReviewOutcome {
   if (!input.ok) return input;
   try {
     const result = reviewDesign(input.design, input.site);
-    return { ok: true, review: toReviewJson(input.design, input.site, result, input.sources) };
+    return { ok: true, review: toReviewJson(result, input.sources) };
   } catch (err) {
     if (!(err instanceof DesignInputError)) throw err;
     return { ok: false, problems: [{ path: documentPathOf(err.field, input.sources), message: err.message }] };

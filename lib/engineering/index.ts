@@ -3,6 +3,7 @@ export * from "./types";
 export { DesignInputError, unlessInputError } from "./errors";
 export { CLAUSES, EDITION_ONLY_CLAUSES, NON_CODE_BASES, type ClauseId, type EditionOnlyClauseId, clause, clauseInEdition, clauses } from "./clauses";
 export { reviewArray, reviewDesign, type ReviewResult, type ReviewSummary } from "./review";
+export { isCheckOfRun, isConnectionCheck, type ConnectionFigures, type InverterOutputFigures, type ReviewFigures, type RunFigures, type StringFigures } from "./figures";
 export { validateArrayDesign, validateDesign, validateSite } from "./validate";
 export { requiredLabels, type LabelFacts, type WarningLabel } from "./labels";
 export { article, withArticle, plural, countAgrees } from "./check-result";

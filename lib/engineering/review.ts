@@ -23,6 +23,7 @@ import { type SystemRatings, checkDcToAcRatio, checkModuleCount, systemRatings }
 import { checkWiringMethods } from "./checks/wiring-methods";
 import { isDcRun, totalInverterOutputA } from "./design-lookup";
 import { DesignInputError } from "./errors";
+import { reviewFigures, type ReviewFigures } from "./figures";
 import { type WarningLabel, requiredLabels } from "./labels";
 import type { ArrayDesign, CheckResult, CheckStatus, Design, NecEdition, Site } from "./types";
 import { validateArrayDesign, validateDesign, validateSite } from "./validate";
@@ -44,6 +45,8 @@ export interface ReviewResult {
   checks: CheckResult[];
   labels: WarningLabel[];
   summary: ReviewSummary;
+  /** Every figure behind the checks, per string, inverter output, run and at the point of connection. */
+  figures: ReviewFigures;
 }
 
 type Attempt = (what: string, key: string, fn: () => CheckResult[]) => void;
@@ -126,7 +129,7 @@ export function reviewDesign(design: Design, site: Site): ReviewResult {
   }
 
   const summary = summarize(design, site, checks);
-  return { edition, checks, labels: labelsFor(design, site, summary), summary };
+  return { edition, checks, labels: labelsFor(design, site, summary), summary, figures: reviewFigures(design, site, checks) };
 }
 
 function summarize(design: Design, site: Site, checks: CheckResult[]): ReviewSummary {

@@ -1,22 +1,19 @@
 import {
   DEFAULT_SHUTDOWN_V_PER_DEVICE,
   cellTempC,
-  circuitConductorCount,
-  egcBasisA,
-  evaluateLoadSideRules,
   runCircuits,
   runRacewayWires,
   sizeLabel,
   stringsOnSameInput,
-  terminalBasis,
-  runMaxCurrentA,
   unlessInputError,
   type CheckResult,
   type ConductorRun,
   type Design,
+  type ReviewFigures,
+  type RunFigures,
   type Site,
 } from "@/lib/engineering";
-import { governingLoadSideRule } from "@/lib/engineering/checks/point-of-connection";
+import { reviewFigures } from "@/lib/engineering/figures";
 import { totalInverterOutputA } from "@/lib/engineering/design-lookup";
 import { formatNumber } from "./pdf-facts";
 
@@ -26,11 +23,13 @@ import { formatNumber } from "./pdf-facts";
 
 export type CheckMethod = { inputs: string[]; method: string };
 
-type Context = { design: Design; site: Site; subject: string };
+type Context = { design: Design; site: Site; subject: string; figures: ReviewFigures };
 type Describe = (ctx: Context) => CheckMethod;
 
 const num = formatNumber;
 const runOf = (design: Design, id: string): ConductorRun | undefined => design.runs.find((r) => r.id === id);
+// The review's own figures for a run (ReviewResult.figures), never worked out again here.
+const figuresOf = (figures: ReviewFigures, id: string): RunFigures | undefined => figures.runs.find((r) => r.id === id);
 const conductorText = (r: ConductorRun) =>
   `${sizeLabel(r.conductor.size)} ${r.conductor.material}${r.conductor.insulation ? ` ${r.conductor.insulation}` : ""}, ${r.conductor.insulationTempC} °C insulation`;
 
@@ -92,26 +91,26 @@ const DESCRIBE: Record<string, Describe> = {
     const count = design.strings.filter((s) => s.inverterId === inverterId && String(s.mpptIndex ?? 1) === mppt).length;
     return { inputs: [`Isc = ${num(design.module.iscA)} A`, `${count} ${count === 1 ? "string" : "strings"} on input ${mppt}`], method: "Strings in parallel × Isc, against the input's maximum short-circuit current" };
   },
-  "ampacity-terminal": ({ design, subject }) => {
+  "ampacity-terminal": ({ design, subject, figures }) => {
     const r = runOf(design, subject);
-    const t = r ? safely(() => terminalBasis(design, r, runMaxCurrentA(design, r))) : null;
-    const source = t === null ? "" : t.source === "run" ? " (entered)" : t.source === "equipment" ? " (inverter's marking)" : " (110.14(C)(1) default)";
+    const f = figuresOf(figures, subject);
+    const source = f?.terminalSource === "run" ? " (entered)" : f?.terminalSource === "equipment" ? " (inverter's marking)" : " (110.14(C)(1) default)";
     return {
-      inputs: r ? [conductorText(r), t ? `terminals ${t.tempC} °C${source}` : "terminals: see the finding"] : [],
+      inputs: r ? [conductorText(r), f?.terminalC ? `terminals ${f.terminalC} °C${source}` : "terminals: see the finding"] : [],
       method: "Table 310.16 ampacity in the terminal's temperature column, at least 1.25 × each circuit's maximum current",
     };
   },
-  "current-carrying-count": ({ design, subject }) => {
+  "current-carrying-count": ({ design, subject, figures }) => {
     const r = runOf(design, subject);
-    const circuits = r ? safely(() => runCircuits(design, r).length) : null;
+    const circuits = figuresOf(figures, subject)?.circuits ?? null;
     return {
       inputs: r ? [`${r.currentCarryingConductors ?? "—"} entered`, `${circuits ?? "?"} circuits in the raceway`] : [],
       method: "Two conductors per DC or single-phase circuit, three per three-phase circuit: the least the raceway holds",
     };
   },
-  "ampacity-conditions": ({ design, site, subject }) => {
+  "ampacity-conditions": ({ design, site, subject, figures }) => {
     const r = runOf(design, subject);
-    const counted = r ? safely(() => Math.max(r.currentCarryingConductors ?? 0, circuitConductorCount(design, r))) : null;
+    const counted = figuresOf(figures, subject)?.currentCarrying ?? null;
     const inputs = r
       ? [
           conductorText(r),
@@ -136,12 +135,12 @@ const DESCRIBE: Record<string, Describe> = {
       method: "Device rating at most the conductor's usable ampacity (next size up where 240.4(B) allows) and the small-conductor limits of 240.4(D)",
     };
   },
-  egc: ({ design, site, subject }) => {
+  egc: ({ design, subject, figures }) => {
     const r = runOf(design, subject);
-    const basis = r ? safely(() => egcBasisA(design, r, site.necEdition)) : null;
+    const f = figuresOf(figures, subject);
     return {
       inputs: r
-        ? [r.egc ? `EGC ${sizeLabel(r.egc.size)} ${r.egc.material}` : "no EGC entered", basis ? `device ${num(basis.ocpdA)} A${basis.assumed ? " (assumed, 690.45)" : ""}` : "device: see the finding", conductorText(r)]
+        ? [r.egc ? `EGC ${sizeLabel(r.egc.size)} ${r.egc.material}` : "no EGC entered", f?.egcDeviceA ? `device ${num(f.egcDeviceA)} A${f.egcDeviceAssumed ? " (assumed, 690.45)" : ""}` : "device: see the finding", conductorText(r)]
         : [],
       method: "Table 250.122 for the device; grown by the conductors' area ratio where they exceed what ampacity needs (250.122(B)), except PV DC circuits (690.45)",
     };
@@ -171,14 +170,15 @@ const DESCRIBE: Record<string, Describe> = {
     inputs: [`inverter output ${num(totalInverterOutputA(design))} A continuous`, `PV breaker ${design.service.pvBreakerA} A`],
     method: "PV breaker at least 1.25 × the inverters' continuous output current, standard ratings of 240.6(A)",
   }),
-  "point-of-connection": ({ design }) => {
+  "point-of-connection": ({ design, figures }) => {
     const s = design.service;
     const outputA = totalInverterOutputA(design);
     if (s.connection === "supply-side") {
       return { inputs: [`PV disconnect ${s.pvBreakerA} A`, `service conductors ${num(s.serviceConductorAmpacityA ?? s.mainBreakerA ?? s.busbarA)} A`], method: "Supply-side disconnect rating, at most the ampacity of the service conductors it taps" };
     }
     const inputs = [`busbar ${s.busbarA} A`, `main ${s.mainBreakerA === null ? "none (main lugs)" : `${s.mainBreakerA} A`}`, `inverter output ${num(outputA)} A`, `PV breaker ${s.pvBreakerA} A${s.pvBreakerAtOppositeEnd ? " at the end away from the main" : ""}`];
-    const rule = governingLoadSideRule(evaluateLoadSideRules(s, outputA))?.rule ?? (s.pvBreakerAtOppositeEnd ? "120%" : "100%");
+    const governing = figures.pointOfConnection.rule;
+    const rule = governing === "100%" || governing === "120%" || governing === "sum" ? governing : s.pvBreakerAtOppositeEnd ? "120%" : "100%";
     const method = {
       "100%": "1.25 × inverter output current + main breaker, at most the busbar rating",
       "120%": "1.25 × inverter output current + main breaker, at most 1.2 × the busbar rating",
@@ -253,11 +253,19 @@ const DESCRIBE: Record<string, Describe> = {
   input: () => ({ inputs: [], method: "Could not be computed from the entries; see the finding" }),
 };
 
-/** The inputs and method of one check, for the calculation sheet. */
-export function describeCheck(check: CheckResult, design: Design, site: Site): CheckMethod {
+/**
+ * The figures a stored packet input carries with its review; a packet stored before reviews kept them
+ * gets them from the same engine function the review uses.
+ */
+export function figuresOfReview(input: { design: Design; site: Site; review: { checks: CheckResult[]; figures?: ReviewFigures } }): ReviewFigures {
+  return input.review.figures ?? reviewFigures(input.design, input.site, input.review.checks);
+}
+
+/** The inputs and method of one check, for the calculation sheet; engine figures come from the review's own (`figures`). */
+export function describeCheck(check: CheckResult, design: Design, site: Site, figures: ReviewFigures): CheckMethod {
   const at = check.id.indexOf(":");
   const prefix = at === -1 ? check.id : check.id.slice(0, at);
   const subject = at === -1 ? "" : check.id.slice(at + 1);
   const describe = DESCRIBE[prefix];
-  return describe ? describe({ design, site, subject }) : { inputs: [], method: "See the finding" };
+  return describe ? describe({ design, site, subject, figures }) : { inputs: [], method: "See the finding" };
 }

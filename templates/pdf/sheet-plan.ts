@@ -1,5 +1,6 @@
 import type { CheckResult } from "@/lib/engineering";
 import type { PacketInput } from "@/lib/packets/packet-input";
+import { figuresOfReview } from "@/lib/packets/check-methods";
 import { paginateChecks } from "./sheets/calculation-layout";
 import type { SheetInfo } from "./title-block";
 
@@ -16,7 +17,7 @@ function numbered<K extends string>(sheets: { key: K; title: string; checks?: Ch
 }
 
 export function planPermitSheets(input: PacketInput): PlannedSheet<PermitSheetKey>[] {
-  const groups = paginateChecks(input.review.checks, input.design, input.site);
+  const groups = paginateChecks(input.review.checks, input.design, input.site, figuresOfReview(input));
   const calc = groups.map((checks, i) => ({
     key: "calculations" as const,
     title: groups.length === 1 ? "Calculations" : `Calculations (${i + 1} of ${groups.length})`,

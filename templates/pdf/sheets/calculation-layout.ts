@@ -1,4 +1,4 @@
-import type { CheckResult, Design, Site } from "@/lib/engineering";
+import type { CheckResult, Design, ReviewFigures, Site } from "@/lib/engineering";
 import { describeCheck } from "@/lib/packets/check-methods";
 
 // The calculation table's columns and a conservative estimate of each row's height, so the
@@ -29,8 +29,8 @@ function lines(text: string, widthPt: number, fontPt: number): number {
 const height = (lineCount: number, fontPt: number) => lineCount * fontPt * LINE_HEIGHT;
 
 /** The estimated height of a check's row, in points. */
-export function estimateCheckRowPt(check: CheckResult, design: Design, site: Site): number {
-  const { inputs, method } = describeCheck(check, design, site);
+export function estimateCheckRowPt(check: CheckResult, design: Design, site: Site, figures: ReviewFigures): number {
+  const { inputs, method } = describeCheck(check, design, site, figures);
   const w = CALC_COLUMNS;
   const checkCol =
     height(lines(check.title, w.check, CALC_TITLE_PT), CALC_TITLE_PT) +
@@ -42,11 +42,11 @@ export function estimateCheckRowPt(check: CheckResult, design: Design, site: Sit
 }
 
 /** The checks in order, split into groups that each fit one calculation sheet. */
-export function paginateChecks(checks: CheckResult[], design: Design, site: Site): CheckResult[][] {
+export function paginateChecks(checks: CheckResult[], design: Design, site: Site, figures: ReviewFigures): CheckResult[][] {
   const pages: CheckResult[][] = [[]];
   let used = 0;
   for (const check of checks) {
-    const h = estimateCheckRowPt(check, design, site);
+    const h = estimateCheckRowPt(check, design, site, figures);
     if (used + h > ROWS_HEIGHT_BUDGET_PT && pages.at(-1)!.length > 0) {
       pages.push([]);
       used = 0;

@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { CheckResult } from "@/lib/engineering";
-import { describeCheck } from "@/lib/packets/check-methods";
+import { describeCheck, figuresOfReview } from "@/lib/packets/check-methods";
 import type { PacketInput } from "@/lib/packets/packet-input";
 import { formatQuantity } from "@/lib/packets/pdf-facts";
 import { StatusMark } from "../blocks";
@@ -26,7 +26,7 @@ const COLUMNS: [keyof typeof W, string][] = [
 ];
 
 function CheckRow({ check, index, input }: { check: CheckResult; index: number; input: PacketInput }) {
-  const { inputs, method } = describeCheck(check, input.design, input.site);
+  const { inputs, method } = describeCheck(check, input.design, input.site, figuresOfReview(input));
   return (
     <View style={s.row} wrap={false}>
       <Text style={[s.cell, { width: W.index }, base.faint]}>{index}</Text>

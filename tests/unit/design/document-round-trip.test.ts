@@ -99,7 +99,7 @@ describe("a saved demo design exported and posted back", () => {
 
     const input = toEngineInput(DesignInput.parse(draft), catalog, j);
     if (!input.ok) throw new Error(JSON.stringify(input.problems));
-    const direct = toReviewJson(input.design, input.site, reviewDesign(input.design, input.site), { roofPlanesGiven: true });
+    const direct = toReviewJson(reviewDesign(input.design, input.site), { roofPlanesGiven: true });
     expect(posted.review).toEqual(direct);
     expect(posted.review.status).toBe("pass");
   });

@@ -54,5 +54,5 @@ describe("drawing a packet sheet by sheet", () => {
     const planned = packetSheetTitles(input);
     expect(seen).toEqual(planned.map((_, i) => i));
     expect(await countPages(bytes)).toBe(planned.length);
-  });
+  }, 60_000); // drawing a whole packet sheet by sheet takes seconds on a busy machine
 });

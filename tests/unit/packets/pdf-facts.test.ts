@@ -73,7 +73,7 @@ describe("schedules", () => {
 describe("calculation methods", () => {
   test.each(FIXTURES)("every check of the %s design has a method of its own and the inputs it read", (_, input) => {
     for (const check of input.review.checks) {
-      const { inputs, method } = describeCheck(check, input.design, input.site);
+      const { inputs, method } = describeCheck(check, input.design, input.site, input.review.figures);
       expect(method, check.id).not.toBe("See the finding");
       if (check.id !== "rapid-shutdown") expect(inputs.length, check.id).toBeGreaterThan(0);
     }
@@ -82,7 +82,7 @@ describe("calculation methods", () => {
   test("the string voltage check shows the coefficient method with this design's numbers", () => {
     const input = FIXTURES[0][1];
     const check = input.review.checks.find((c) => c.id === "string-voltage:S1")!;
-    expect(describeCheck(check, input.design, input.site)).toEqual({
+    expect(describeCheck(check, input.design, input.site, input.review.figures)).toEqual({
       inputs: ["N = 11 modules in series", "Voc = 37.2 V (STC)", "Tmin = -24 °C record low", "αVoc = -0.27 %/°C"],
       method: "N × Voc × [1 + (Tmin − 25) × αVoc / 100]; limit: the lower of the inverter's maximum input and the 690.7 limit for the building",
     });

@@ -21,7 +21,7 @@ function withManyChecks(times: number): PacketInput {
 describe("calculation sheets", () => {
   test("every check lands on exactly one sheet, in the review's order", () => {
     const input = packetFixture();
-    const pages = paginateChecks(input.review.checks, input.design, input.site);
+    const pages = paginateChecks(input.review.checks, input.design, input.site, input.review.figures);
     expect(pages.flat()).toEqual(input.review.checks);
     expect(pages.every((p) => p.length > 0)).toBe(true);
   });
