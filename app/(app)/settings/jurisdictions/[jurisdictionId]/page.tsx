@@ -5,6 +5,7 @@ import { orNotFoundPage } from "@/lib/server/pages";
 import { getFeeSchedule } from "@/lib/server/data/fee-schedules";
 import { getJurisdictionById } from "@/lib/server/data/reference-data";
 import { FeeSchedulePanel } from "@/components/fees/fee-schedule-panel";
+import { saveFeeScheduleAction } from "../../fee-schedule-actions";
 import { JurisdictionForm } from "../_components/jurisdiction-form";
 
 export const metadata: Metadata = { title: "Edit jurisdiction" };
@@ -23,7 +24,7 @@ export default async function EditJurisdictionPage({ params }: { params: Promise
       <section className="panel">
         <JurisdictionForm jurisdictionId={j.id} initial={initial} />
       </section>
-      <FeeSchedulePanel authorityKind="jurisdiction" authorityId={j.id} authorityName={j.name} initialLines={feeLines} />
+      <FeeSchedulePanel authorityKind="jurisdiction" authorityId={j.id} authorityName={j.name} initialLines={feeLines} save={saveFeeScheduleAction} />
     </div>
   );
 }

@@ -7,7 +7,7 @@ import { useActionSubmit } from "@/components/forms/use-action-submit";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { NEC_EDITIONS } from "@/lib/domain/roles";
+import { NEC_EDITIONS } from "@/lib/engineering/types";
 import { JurisdictionInput, type JurisdictionValues } from "@/lib/schemas/reference-data";
 import { createJurisdictionAction, updateJurisdictionAction } from "../actions";
 

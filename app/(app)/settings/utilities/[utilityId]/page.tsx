@@ -5,6 +5,7 @@ import { orNotFoundPage } from "@/lib/server/pages";
 import { getFeeSchedule } from "@/lib/server/data/fee-schedules";
 import { getUtilityById } from "@/lib/server/data/reference-data";
 import { FeeSchedulePanel } from "@/components/fees/fee-schedule-panel";
+import { saveFeeScheduleAction } from "../../fee-schedule-actions";
 import { UtilityForm } from "../_components/utility-form";
 
 export const metadata: Metadata = { title: "Edit utility" };
@@ -23,7 +24,7 @@ export default async function EditUtilityPage({ params }: { params: Promise<{ ut
       <section className="panel">
         <UtilityForm utilityId={u.id} initial={initial} />
       </section>
-      <FeeSchedulePanel authorityKind="utility" authorityId={u.id} authorityName={u.name} initialLines={feeLines} />
+      <FeeSchedulePanel authorityKind="utility" authorityId={u.id} authorityName={u.name} initialLines={feeLines} save={saveFeeScheduleAction} />
     </div>
   );
 }
