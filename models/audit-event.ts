@@ -1,7 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
+import type { AuditChanges } from "@/lib/domain/stored-values";
 import type { User } from "./user";
-
-export type AuditChanges = Record<string, { before: unknown; after: unknown }>;
 
 export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreationAttributes<AuditEvent>> {
   declare id: CreationOptional<string>;

@@ -1,6 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
-
-export type CommissioningStatus = "open" | "complete";
+import type { CommissioningStatus } from "@/lib/domain/stored-values";
 
 /** The installer's commissioning readings for one project; checked against the design whenever they are read. */
 export class CommissioningRecord extends Model<InferAttributes<CommissioningRecord>, InferCreationAttributes<CommissioningRecord>> {

@@ -1,6 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
-
-export type ReviewStatus = "incomplete" | "pass" | "warn" | "fail";
+import type { ReviewStatus } from "@/lib/domain/stored-values";
 
 /** The one design of a project: the editor's draft as typed, and the outcome of its last review. */
 export class Design extends Model<InferAttributes<Design>, InferCreationAttributes<Design>> {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
-import type { EquipmentKind } from "@/lib/schemas/equipment";
+import type { EquipmentKind } from "@/lib/domain/stored-values";
 
 /** A catalog item (PV module, inverter or module-level device) with its data-sheet figures and an optional data sheet PDF in storage. */
 export class Equipment extends Model<InferAttributes<Equipment>, InferCreationAttributes<Equipment>> {

@@ -1,6 +1,5 @@
-import type { FeeAuthorityKind } from "@/lib/fees/types";
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
-
+import type { FeeAuthorityKind } from "@/lib/domain/stored-values";
 
 /** An AHJ's or a utility's fees; `lines` hold every version of each fee, chosen by effective date when worked out. */
 export class FeeSchedule extends Model<InferAttributes<FeeSchedule>, InferCreationAttributes<FeeSchedule>> {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
-import type { NecEdition } from "@/lib/domain/roles";
+import type { NecEdition } from "@/lib/domain/stored-values";
 
 /** An authority having jurisdiction (AHJ) and the site data its reviews need. */
 export class Jurisdiction extends Model<InferAttributes<Jurisdiction>, InferCreationAttributes<Jurisdiction>> {

@@ -1,8 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
-
-export type OutboxStatus = "queued" | "sent" | "failed";
-/** A stored file sent along with the message; the worker reads it from storage when it sends. */
-export type OutboxAttachment = { fileName: string; objectKey: string; contentType: string };
+import type { OutboxAttachment, OutboxStatus } from "@/lib/domain/stored-values";
 
 /** One e-mail waiting for, or done with, delivery by the worker. */
 export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCreationAttributes<OutboxMessage>> {

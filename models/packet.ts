@@ -1,11 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
-import type { PacketKind } from "@/lib/packets/packet-input";
+import type { PacketKind, PacketStatus, PacketStepRecord } from "@/lib/domain/stored-values";
 import type { User } from "./user";
-
-export type PacketStatus = "queued" | "running" | "ready" | "failed";
-
-/** One step of a generation as the worker recorded it when starting it. */
-export type PacketStepRecord = { at: string; progress: number; text: string };
 
 /** One generation of a project's permit or interconnection packet; ready rows are its revisions. */
 export class Packet extends Model<InferAttributes<Packet>, InferCreationAttributes<Packet>> {

@@ -1,10 +1,8 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
 import type { PaymentLine } from "./payment-line";
 import type { Refund } from "./refund";
+import type { PaymentStatus } from "@/lib/domain/stored-values";
 import type { User } from "./user";
-
-export const PAYMENT_STATUSES = ["pending", "paid", "expired", "partially_refunded", "refunded"] as const;
-export type PaymentStatus = (typeof PAYMENT_STATUSES)[number];
 
 /** One attempt to pay fee lines through the payment processor. */
 export class Payment extends Model<InferAttributes<Payment>, InferCreationAttributes<Payment>> {

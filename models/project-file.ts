@@ -1,8 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
+import type { ProjectFileKind } from "@/lib/domain/stored-values";
 import type { User } from "./user";
-
-export const PROJECT_FILE_KINDS = ["signed-completion", "site-photo"] as const;
-export type ProjectFileKind = (typeof PROJECT_FILE_KINDS)[number];
 
 /** A file uploaded from the field; its type was judged from its bytes, its key made by the server. */
 export class ProjectFile extends Model<InferAttributes<ProjectFile>, InferCreationAttributes<ProjectFile>> {

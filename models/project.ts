@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
-import type { Stage } from "@/lib/domain/stages";
+import type { Stage } from "@/lib/domain/stored-values";
 import type { Jurisdiction } from "./jurisdiction";
 import type { Utility } from "./utility";
 import type { Design } from "./design";

@@ -1,7 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
+import type { RefundStatus } from "@/lib/domain/stored-values";
 import type { User } from "./user";
-
-export type RefundStatus = "pending" | "succeeded" | "failed";
 
 /** Money returned on a payment, full or partial, by its id at the processor. */
 export class Refund extends Model<InferAttributes<Refund>, InferCreationAttributes<Refund>> {

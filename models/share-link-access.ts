@@ -1,6 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
-
-export type ShareLinkAccessKind = "view" | "download";
+import type { ShareLinkAccessKind } from "@/lib/domain/stored-values";
 
 /** One opening of a share link's page or one download through it, for the coordinator's access log. */
 export class ShareLinkAccess extends Model<InferAttributes<ShareLinkAccess>, InferCreationAttributes<ShareLinkAccess>> {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
-import type { Stage } from "@/lib/domain/stages";
+import type { Stage } from "@/lib/domain/stored-values";
 import type { User } from "./user";
 
 export class StageChange extends Model<InferAttributes<StageChange>, InferCreationAttributes<StageChange>> {

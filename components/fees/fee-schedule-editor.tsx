@@ -3,9 +3,9 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useId, useState } from "react";
 import { FormProvider, useFieldArray, useForm } from "react-hook-form";
-import { saveFeeScheduleAction } from "@/app/(app)/settings/fee-schedule-actions";
 import { useActionSubmit } from "@/components/forms/use-action-submit";
 import { Button } from "@/components/ui/button";
+import type { ActionResult } from "@/lib/dto/action-result";
 import { FormMessage } from "@/components/ui/form-message";
 import type { FeeAuthorityKind, FeeLine } from "@/lib/fees";
 import { feeLineToFormValues } from "@/lib/schemas/fee-schedule";
@@ -13,13 +13,16 @@ import { FeeLineFields } from "./fee-line-fields";
 import { FeePreview } from "./fee-preview";
 import { FeeScheduleForm, newFeeLine, type FeeScheduleFormInput, type FeeScheduleFormValues } from "./fee-schedule-form";
 
-type Props = { authorityKind: FeeAuthorityKind; authorityId: string; authorityName: string; initialLines: FeeLine[] };
+/** The server action that replaces a schedule, handed down by the page that shows the editor. */
+export type SaveFeeSchedule = (input: { authorityKind: FeeAuthorityKind; authorityId: string; lines: FeeScheduleFormInput["lines"] }) => Promise<ActionResult<{ lineCount: number }>>;
+
+type Props = { authorityKind: FeeAuthorityKind; authorityId: string; authorityName: string; initialLines: FeeLine[]; save: SaveFeeSchedule };
 
 /**
  * An AHJ's or a utility's fee schedule, line by line, with a preview of what it charges.
  * Saving replaces the whole schedule; a refusal leaves every typed value in place.
  */
-export function FeeScheduleEditor({ authorityKind, authorityId, authorityName, initialLines }: Props) {
+export function FeeScheduleEditor({ authorityKind, authorityId, authorityName, initialLines, save }: Props) {
   const formId = useId();
   const form = useForm<FeeScheduleFormInput, unknown, FeeScheduleFormValues>({
     resolver: zodResolver(FeeScheduleForm),
@@ -30,7 +33,7 @@ export function FeeScheduleEditor({ authorityKind, authorityId, authorityName, i
   const [savedCount, setSavedCount] = useState<number | null>(null);
   const { submit, message } = useActionSubmit(
     form,
-    (raw) => saveFeeScheduleAction({ authorityKind, authorityId, lines: raw.lines }),
+    (raw) => save({ authorityKind, authorityId, lines: raw.lines }),
     ({ lineCount }) => {
       // What was saved becomes the new starting point, so the next edit shows as unsaved again.
       form.reset(form.getValues());

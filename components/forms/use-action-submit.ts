@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import type { FieldValues, UseFormReturn } from "react-hook-form";
-import type { ActionResult } from "@/lib/server/action";
+import type { ActionResult } from "@/lib/dto/action-result";
 import { applyFieldErrors } from "./apply-field-errors";
 
 /**

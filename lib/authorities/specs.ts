@@ -1,5 +1,5 @@
 import type { AuthorityKind } from "@/lib/domain/authorities";
-import { NEC_EDITIONS } from "@/lib/domain/roles";
+import { NEC_EDITIONS } from "@/lib/engineering/types";
 import { JurisdictionInput, UtilityInput } from "@/lib/schemas/reference-data";
 
 // The authorities a project answers to, in one place: the AHJ that issues the permit and the utility

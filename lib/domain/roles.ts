@@ -6,6 +6,3 @@ export const ROLE_LABELS: Record<Role, string> = {
   coordinator: "Permit coordinator",
   installer: "Installer",
 };
-
-export const NEC_EDITIONS = [2017, 2020, 2023] as const;
-export type NecEdition = (typeof NEC_EDITIONS)[number];

@@ -2,8 +2,8 @@ import type { ConductorSize } from "./tables/conductor-sizes";
 
 export type { ConductorSize } from "./tables/conductor-sizes";
 
-export type NecEdition = 2017 | 2020 | 2023;
-export const NEC_EDITIONS: readonly NecEdition[] = [2017, 2020, 2023];
+export const NEC_EDITIONS = [2017, 2020, 2023] as const;
+export type NecEdition = (typeof NEC_EDITIONS)[number];
 
 export type ConductorMaterial = "Cu" | "Al";
 export type Stranding = "stranded" | "solid";

@@ -1,6 +1,6 @@
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { stageIndex, type Stage } from "@/lib/domain/stages";
-import type { ProjectFileKind } from "@/models/project-file";
+import type { ProjectFileKind } from "@/lib/domain/stored-values";
 
 export const MAX_UPLOAD_BYTES = 20 * 1024 * 1024;
 export const MAX_UPLOAD_LABEL = "20 MB";

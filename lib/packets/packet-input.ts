@@ -1,10 +1,9 @@
 import type { Design, NecEdition, ReviewResult, Site } from "@/lib/engineering";
 import type { DesignInput } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
-import type { ProjectDto } from "@/lib/server/data/projects";
+import type { ProjectDto } from "@/lib/dto/projects";
+import type { PacketKind } from "@/lib/domain/stored-values";
 
-export const PACKET_KINDS = ["permit", "interconnection"] as const;
-export type PacketKind = (typeof PACKET_KINDS)[number];
 
 export const PACKET_TITLES: Record<PacketKind, string> = {
   permit: "Permit packet",

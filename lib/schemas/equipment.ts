@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { EQUIPMENT_KINDS, type EquipmentKind } from "@/lib/domain/stored-values";
 import { blankToUndefined, numberField, optionalNumberField, optionalText, requiredText, safeString, toNumber, whenValid } from "./fields";
 
 // Catalog items as the office enters them from data sheets.
@@ -117,8 +118,6 @@ export const DeviceSpecs = z.object({
 });
 export type DeviceSpecs = z.output<typeof DeviceSpecs>;
 
-export const EQUIPMENT_KINDS = ["module", "inverter", "device"] as const;
-export type EquipmentKind = (typeof EQUIPMENT_KINDS)[number];
 export const EQUIPMENT_KIND_LABELS: Record<EquipmentKind, string> = { module: "PV module", inverter: "Inverter", device: "Module-level device" };
 
 const common = { maker: requiredText("maker", 80), model: requiredText("model", 80), listing: optionalText(120) };

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { safeString } from "./fields";
-import { PACKET_KINDS } from "@/lib/packets/packet-input";
+import { PACKET_KINDS } from "@/lib/domain/stored-values";
 
 export const RequestPacketInput = z.object({
   kind: z.enum(PACKET_KINDS, { error: "Choose the permit or the interconnection packet" }),

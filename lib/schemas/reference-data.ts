@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { NEC_EDITIONS } from "@/lib/domain/roles";
+import { NEC_EDITIONS } from "@/lib/engineering/types";
 import { numberField, optionalText, requiredText, safeString, toNumber, whenValid } from "./fields";
 
 export const JurisdictionInput = z

@@ -1,6 +1,6 @@
 // The invented demo scenario: two installer companies in invented towns,
 // invented authorities and utilities. No real company, place or person.
-import type { NecEdition } from "@/lib/domain/roles";
+import type { NecEdition } from "@/lib/engineering/types";
 
 export const ORGANIZATIONS = {
   main: { name: "Quillmoor Solar Electric", licenseNumber: "EC-40718 (demo)", phone: "(555) 014-2210", timeZone: "America/Denver" },

@@ -2,12 +2,11 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { z } from "zod";
 import { can, type Permission, type Viewer } from "@/lib/domain/permissions";
-import { groupFieldErrors, isAppError, type ErrorCode } from "@/lib/errors";
+import { groupFieldErrors, isAppError } from "@/lib/errors";
 import { findUnstorableInput } from "@/lib/schemas/fields";
 import { getViewer } from "./auth";
 import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "./db-unavailable";
-
-export type ActionResult<T> = { ok: true; data: T } | { ok: false; code: ErrorCode | "INTERNAL"; message: string; fieldErrors?: Record<string, string[]> };
+import type { ActionResult } from "@/lib/dto/action-result";
 
 /** zod issues as { "field.path": ["message", …] } for form.setError. */
 export function fieldErrorsOf(error: z.ZodError): Record<string, string[]> {

@@ -2,7 +2,8 @@
 // template, diagram and packet tests. No database needed.
 import { runDesignReview } from "@/lib/design/run-review";
 import { toEngineInput } from "@/lib/design/to-engine";
-import type { PacketInput, PacketKind } from "@/lib/packets/packet-input";
+import type { PacketKind } from "@/lib/domain/stored-values";
+import type { PacketInput } from "@/lib/packets/packet-input";
 import { DesignInput } from "@/lib/schemas/design";
 import { EquipmentInput, type EquipmentDto } from "@/lib/schemas/equipment";
 import { DEMO_CATALOG } from "@/lib/seed/demo-catalog";

@@ -8,14 +8,13 @@ import { db } from "../db";
 import { isUuid } from "./ids";
 import { hashToken, newToken } from "../tokens";
 import { recordAudit } from "./audit";
+import type { ApiTokenDto } from "@/lib/dto/api-tokens";
 
 // A recognisable prefix lets people and secret scanners tell an Ohmstead token from other strings.
 export const API_TOKEN_PREFIX = "ohm_";
 const MAX_ACTIVE_TOKENS = 25;
 // Writing last_used_at on every call would turn each read into a write; a minute is precise enough to see which tokens are in use.
 const LAST_USED_PRECISION_MS = 60_000;
-
-export type ApiTokenDto = { id: string; name: string; createdAt: string; createdByName: string | null; lastUsedAt: string | null; revokedAt: string | null };
 
 function toDto(row: ApiToken, createdByName: string | null): ApiTokenDto {
   return { id: row.id, name: row.name, createdAt: row.createdAt.toISOString(), createdByName, lastUsedAt: row.lastUsedAt?.toISOString() ?? null, revokedAt: row.revokedAt?.toISOString() ?? null };

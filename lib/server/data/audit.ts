@@ -1,19 +1,10 @@
 import "server-only";
 import type { Transaction } from "sequelize";
 import { AuditEvent, User } from "@/models";
-import type { AuditChanges } from "@/models/audit-event";
+import type { AuditChanges } from "@/lib/domain/stored-values";
 import type { Viewer } from "@/lib/domain/permissions";
 import { db } from "../db";
-
-export type AuditEventDto = {
-  id: string;
-  action: string;
-  entityType: string;
-  entityId: string;
-  actorName: string | null;
-  changes: AuditChanges;
-  createdAt: string;
-};
+import type { AuditEventDto } from "@/lib/dto/audit";
 
 /** Before/after pairs for the fields that differ. */
 export function diffFields<T extends Record<string, unknown>>(before: Partial<T>, after: Partial<T>): AuditChanges {

@@ -1,6 +1,6 @@
 import "server-only";
 import type { Transaction } from "sequelize";
-import type { AuditChanges } from "@/models/audit-event";
+import type { AuditChanges } from "@/lib/domain/stored-values";
 import type { Viewer } from "@/lib/domain/permissions";
 import { db } from "../db";
 import { recordAudit } from "./audit";

@@ -1,31 +1,20 @@
 import "server-only";
 import { CommissioningRecord, Project, ProjectFile, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
-import { checkCommissioning, commissioningComplete, type CommissioningCheck, type CommissioningCompletion, type CommissioningRecord as RecordFacts } from "@/lib/engineering/commissioning";
+import { checkCommissioning, commissioningComplete, type CommissioningCompletion } from "@/lib/engineering/commissioning";
 import { AppError, isAppError } from "@/lib/errors";
 import { commissioningFacts, emptyReadings, moduleMonitoringOf, toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
 import type { CommissioningDocumentInput, CommissioningDocumentKind } from "@/lib/field/commissioning-document-input";
 import { openCountsInWords } from "@/lib/field/completion-words";
 import type { PacketInput } from "@/lib/packets/packet-input";
 import { CommissioningReadings, SaveCommissioningInput } from "@/lib/schemas/commissioning";
-import type { CommissioningStatus } from "@/models/commissioning-record";
+import type { CommissioningStatus } from "@/lib/domain/stored-values";
 import { db } from "../db";
 import { recordAudit } from "./audit";
 import { getOrganization } from "./organizations";
 import { buildPacketInput } from "./packet-input";
 import { getProjectById } from "./projects";
-
-export type CommissioningDto = {
-  projectId: string;
-  facts: CommissioningFacts;
-  readings: CommissioningReadings;
-  record: RecordFacts;
-  results: CommissioningCheck[];
-  completion: CommissioningCompletion;
-  status: CommissioningStatus;
-  updatedAt: string | null;
-  completedAt: string | null;
-};
+import type { CommissioningDto, SaveCommissioningResult, FieldSummaryDto } from "@/lib/dto/commissioning";
 
 export type CommissioningContext = { input: Omit<PacketInput, "revision" | "changes" | "override">; facts: CommissioningFacts };
 
@@ -79,8 +68,6 @@ export async function getCommissioning({ viewer, projectId }: { viewer: Viewer; 
   const row = await CommissioningRecord.findOne({ where: { projectId, organizationId: viewer.organizationId } });
   return { ...toDto(projectId, context.facts, storedReadings(row, context.facts), row), context };
 }
-
-export type SaveCommissioningResult = CommissioningDto & { completeRefused: string | null };
 
 /**
  * Saves the readings as typed, always, so nothing entered on site is lost. Marking the record
@@ -159,8 +146,6 @@ export async function buildCommissioningDocumentInput({ viewer, projectId, kind 
     completedAt: dto.completedAt,
   };
 }
-
-export type FieldSummaryDto = { status: CommissioningStatus | "not-started"; completedAt: string | null; signedForms: number; photos: number };
 
 /** What the project page shows of the field work, without reviewing the design again. */
 export async function getFieldSummary({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<FieldSummaryDto> {

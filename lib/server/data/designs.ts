@@ -12,9 +12,9 @@ import { db } from "../db";
 import { isUuid } from "./ids";
 import { recordAudit } from "./audit";
 import { getEquipmentByIds } from "./equipment";
-import { getProjectById, type ProjectDto } from "./projects";
-
-export type DesignDto = { projectId: string; draft: DesignDraft; isSaved: boolean; revision: number; reviewStatus: string; updatedAt: string | null };
+import { getProjectById } from "./projects";
+import type { ProjectDto } from "@/lib/dto/projects";
+import type { DesignDto, DesignStatusDto } from "@/lib/dto/designs";
 
 async function siteConditions(viewer: Viewer, jurisdictionId: string | null): Promise<SiteConditions | null> {
   if (!jurisdictionId) return null;
@@ -95,8 +95,6 @@ export async function saveDesignDraft({ viewer, projectId, draft: raw }: { viewe
   });
   return { revision: saved.revision, updatedAt: saved.updatedAt.toISOString(), outcome };
 }
-
-export type DesignStatusDto = { reviewStatus: "incomplete" | "pass" | "warn" | "fail"; revision: number; updatedAt: string; counts: { pass: number; warn: number; fail: number } | null } | null;
 
 /** The outcome of the saved design's last review, for the project page; null when nothing is saved. */
 export async function getDesignStatus({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<DesignStatusDto> {

@@ -6,8 +6,7 @@ import { AppError } from "@/lib/errors";
 import type { OrganizationValues } from "@/lib/schemas/organization";
 import { db } from "../db";
 import { diffFields, recordAudit } from "./audit";
-
-export type OrganizationDto = { id: string; name: string; licenseNumber: string | null; phone: string | null; timeZone: string };
+import type { OrganizationDto } from "@/lib/dto/organizations";
 
 const toDto = ({ id, name, licenseNumber, phone, timeZone }: Organization): OrganizationDto => ({ id, name, licenseNumber, phone, timeZone });
 

@@ -4,32 +4,15 @@ import { Packet, Project, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import { describeChanges } from "@/lib/packets/changes";
-import type { PacketInput, PacketKind } from "@/lib/packets/packet-input";
-import type { PacketStatus } from "@/models/packet";
+import type { PacketKind } from "@/lib/domain/stored-values";
+import type { PacketInput } from "@/lib/packets/packet-input";
 import { db } from "../db";
 import { enqueuePacketJob } from "../services/jobs";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
 import { buildPacketInput } from "./packet-input";
 import { getProjectById } from "./projects";
-
-export type PacketDto = {
-  id: string;
-  kind: PacketKind;
-  revision: number;
-  status: PacketStatus;
-  progress: number;
-  step: string;
-  changes: string[];
-  overrideReason: string | null;
-  sizeBytes: number | null;
-  pageCount: number | null;
-  sha256: string | null;
-  error: string | null;
-  requestedBy: string | null;
-  readyAt: string | null;
-  createdAt: string;
-};
+import type { PacketDto } from "@/lib/dto/packets";
 
 // Far longer than any generation takes; a row still in flight after this was abandoned.
 const STALE_AFTER_MS = 10 * 60_000;

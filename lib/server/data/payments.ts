@@ -3,7 +3,7 @@ import { createHash } from "node:crypto";
 import { Op, type Transaction } from "sequelize";
 import type Stripe from "stripe";
 import { Payment, PaymentLine, Project, Refund, User } from "@/models";
-import type { RefundStatus } from "@/models/refund";
+import type { RefundStatus } from "@/lib/domain/stored-values";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import { formatUsd, planLineRefund, refundableCents } from "@/lib/fees";
@@ -15,7 +15,8 @@ import { stripe } from "../services/payments";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
 import { applySessionState } from "./payment-events";
-import { getProjectFees, PAYMENT_INCLUDE, paidPaymentOf, toPaymentDto, type PaymentDto } from "./project-fees";
+import { getProjectFees, PAYMENT_INCLUDE, paidPaymentOf, toPaymentDto } from "./project-fees";
+import type { PaymentDto } from "@/lib/dto/fees";
 import { getProjectById } from "./projects";
 
 /** Ends an unfinished checkout that holds some of the same lines, so one fee is never being paid twice. */

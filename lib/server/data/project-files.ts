@@ -6,7 +6,7 @@ import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import { ALLOWED_TYPES, FIELD_WORK_ENDS_AT, MAX_UPLOAD_BYTES, allowedTypesText, displayFileName, hasThumbnail, mayRemoveUpload, tooLargeMessage } from "@/lib/field/upload-rules";
 import { STAGE_LABELS, stageIndex } from "@/lib/domain/stages";
-import { PROJECT_FILE_KINDS, type ProjectFileKind } from "@/models/project-file";
+import { PROJECT_FILE_KINDS, type ProjectFileKind } from "@/lib/domain/stored-values";
 import { completionReceivedEmail } from "@/templates/email/completion-received";
 import { db } from "../db";
 import { env } from "../env";
@@ -15,22 +15,10 @@ import { sniffMimeType } from "../services/file-sniffing";
 import { deleteObject, putObject } from "../services/storage";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
-import { getProjectById, type ProjectDto } from "./projects";
+import { getProjectById } from "./projects";
+import type { ProjectDto } from "@/lib/dto/projects";
 import { queueStorageRemovals, sweepStorageRemovals } from "./storage-removals";
-
-export type ProjectFileDto = {
-  id: string;
-  kind: ProjectFileKind;
-  fileName: string;
-  contentType: string;
-  sizeBytes: number;
-  uploadedBy: string | null;
-  createdAt: string;
-  /** A picture: its thumbnail is served by the file's route with ?size=thumbnail. */
-  hasThumbnail: boolean;
-  /** The viewer may remove it (see mayRemoveUpload). */
-  canRemove: boolean;
-};
+import type { ProjectFileDto } from "@/lib/dto/project-files";
 
 const scopeOf = (viewer: Viewer, project: ProjectDto) => ({ organizationId: viewer.organizationId, installerId: project.installer?.id ?? null, stage: project.stage });
 

@@ -11,37 +11,7 @@ import { env } from "../env";
 import { holdOrMergeMail } from "../services/outbox";
 import { isUuid } from "./ids";
 import { diffFields, recordAudit } from "./audit";
-
-export type ProjectDto = {
-  id: string;
-  number: number;
-  customerName: string;
-  customerEmail: string | null;
-  customerPhone: string | null;
-  street: string;
-  city: string;
-  state: string;
-  postalCode: string;
-  address: string;
-  jurisdiction: { id: string; name: string; necEdition: number } | null;
-  utility: { id: string; name: string } | null;
-  utilityAccountNumber: string | null;
-  meterNumber: string | null;
-  mainBreakerA: number | null;
-  busbarA: number | null;
-  serviceVoltageV: number | null;
-  servicePhases: number | null;
-  stage: Stage;
-  stageLabel: string;
-  nextAction: string;
-  stageChangedAt: string;
-  daysInStage: number;
-  coordinator: { id: string; name: string } | null;
-  installer: { id: string; name: string } | null;
-  declaredValuationCents: number | null; // the owner's declared value of the work; percentage fees read it
-  createdAt: string;
-  updatedAt: string;
-};
+import type { ProjectDto, StageChangeDto } from "@/lib/dto/projects";
 
 const DAY_MS = 86_400_000;
 
@@ -248,8 +218,6 @@ export async function changeProjectStage({ viewer, projectId, toStage, note }: {
   });
   return getProjectById({ viewer, projectId });
 }
-
-export type StageChangeDto = { id: string; fromStage: Stage | null; toStage: Stage; toLabel: string; note: string; changedBy: string | null; createdAt: string };
 
 /** The project's stage timeline, oldest first. */
 export async function listStageChanges({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<StageChangeDto[]> {

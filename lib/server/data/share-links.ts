@@ -5,10 +5,10 @@ import { z } from "zod";
 import { Organization, Packet, ShareLink, ShareLinkAccess, ShareLinkMiss, ShareLinkPacket, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
-import { PACKET_TITLES, type PacketInput, type PacketKind } from "@/lib/packets/packet-input";
+import type { PacketKind, ShareLinkAccessKind } from "@/lib/domain/stored-values";
+import { PACKET_TITLES, type PacketInput } from "@/lib/packets/packet-input";
 import { siteAddress } from "@/lib/packets/pdf-facts";
 import { CreateShareLinkInput } from "@/lib/schemas/share-link";
-import type { ShareLinkAccessKind } from "@/models/share-link-access";
 import { inspectorLinkEmail } from "@/templates/email/inspector-link";
 import { db } from "../db";
 import { env } from "../env";
@@ -18,25 +18,12 @@ import { getOrganization } from "./organizations";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
 import { getProjectById } from "./projects";
+import type { ShareLinkStatus, ShareLinkDto } from "@/lib/dto/share-links";
 
 /** Unknown tokens allowed per client address and window before every share link answers 429 to it. */
 export const SHARE_THROTTLE = { windowMinutes: 10, maxMisses: 30 };
 const DAY_MS = 24 * 60 * 60_000;
 
-export type ShareLinkStatus = "active" | "expired" | "revoked";
-export type ShareLinkAccessDto = { kind: ShareLinkAccessKind; revision: string | null; address: string; userAgent: string; at: string };
-export type ShareLinkDto = {
-  id: string;
-  recipientEmail: string | null;
-  note: string;
-  status: ShareLinkStatus;
-  expiresAt: string;
-  revokedAt: string | null;
-  createdBy: string | null;
-  createdAt: string;
-  revisions: { packetId: string; label: string }[];
-  accesses: ShareLinkAccessDto[];
-};
 export type ClientInfo = { address: string; userAgent: string };
 
 /** "Permit packet Rev 2": how links, the access log and the inspector page name a revision. */

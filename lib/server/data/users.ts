@@ -14,11 +14,9 @@ import { enqueueMail } from "../services/outbox";
 import { hashToken, newToken } from "../tokens";
 import { recordAudit } from "./audit";
 import { throttledSignIn } from "./sign-in-throttle";
+import type { UserStatus, UserDto } from "@/lib/dto/users";
 
 export const INVITATION_DAYS = 7;
-
-export type UserStatus = "active" | "invited" | "deactivated";
-export type UserDto = { id: string; name: string; email: string; role: Role; status: UserStatus; lastSignInAt: string | null };
 
 function toViewer(user: User): Viewer {
   return { id: user.id, organizationId: user.organizationId, role: user.role, name: user.name, email: user.email };

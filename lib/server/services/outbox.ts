@@ -2,7 +2,7 @@ import "server-only";
 import type { Transporter } from "nodemailer";
 import { Op, type Transaction } from "sequelize";
 import { OutboxMessage } from "@/models";
-import type { OutboxAttachment } from "@/models/outbox-message";
+import type { OutboxAttachment } from "@/lib/domain/stored-values";
 import { afterFailedAttempt } from "@/lib/domain/mail-retry";
 import { db } from "../db";
 import { sendMail } from "./mail";

@@ -6,7 +6,7 @@ import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { StageBadge } from "@/components/ui/stage-badge";
 import { STAGES, STAGE_LABELS, stageIndex } from "@/lib/domain/stages";
-import type { ProjectDto } from "@/lib/server/data/projects";
+import type { ProjectDto } from "@/lib/dto/projects";
 
 type Page = { items: ProjectDto[]; total: number; page: number; pageSize: number; pageCount: number };
 

@@ -9,7 +9,7 @@ import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { AUTHORITY_SPECS, type AuthorityField } from "@/lib/authorities/specs";
 import type { AuthorityKind } from "@/lib/domain/authorities";
-import type { ActionResult } from "@/lib/server/action";
+import type { ActionResult } from "@/lib/dto/action-result";
 
 type Values = Record<string, string>;
 type Save = (input: { kind: AuthorityKind; authorityId?: string; values: Values }) => Promise<ActionResult<{ id: string }>>;

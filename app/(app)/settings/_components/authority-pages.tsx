@@ -9,6 +9,7 @@ import { getAuthorityById, listAuthorities } from "@/lib/server/data/authorities
 import { getFeeSchedule } from "@/lib/server/data/fee-schedules";
 import { orNotFoundPage } from "@/lib/server/pages";
 import { saveAuthorityAction } from "../authority-actions";
+import { saveFeeScheduleAction } from "../fee-schedule-actions";
 import { AuthorityForm } from "./authority-form";
 
 // The list and edit pages of the AHJs and the utilities: one pair of pages, the kind's declaration
@@ -85,7 +86,7 @@ export async function AuthorityEditPage({ kind, authorityId }: { kind: Authority
       <section className="panel">
         <AuthorityForm kind={kind} authorityId={record.id} initial={authorityFormValues(kind, record as unknown as Record<string, unknown>)} save={saveAuthorityAction} />
       </section>
-      <FeeSchedulePanel authorityKind={kind} authorityId={record.id} authorityName={record.name} initialLines={feeLines} />
+      <FeeSchedulePanel authorityKind={kind} authorityId={record.id} authorityName={record.name} initialLines={feeLines} save={saveFeeScheduleAction} />
     </div>
   );
 }

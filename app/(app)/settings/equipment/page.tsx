@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { can } from "@/lib/domain/permissions";
-import { EQUIPMENT_KINDS } from "@/lib/schemas/equipment";
+import { EQUIPMENT_KINDS } from "@/lib/domain/stored-values";
 import { requirePermission } from "@/lib/server/auth";
 import { listEquipment } from "@/lib/server/data/equipment";
 import { EquipmentGroup } from "./_components/equipment-group";

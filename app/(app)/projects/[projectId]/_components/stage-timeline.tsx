@@ -1,5 +1,5 @@
 import { LocalTime } from "@/components/time/local-time";
-import type { StageChangeDto } from "@/lib/server/data/projects";
+import type { StageChangeDto } from "@/lib/dto/projects";
 
 export function StageTimeline({ entries }: { entries: StageChangeDto[] }) {
   return (

@@ -7,7 +7,8 @@ import { useActionSubmit } from "@/components/forms/use-action-submit";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { EquipmentInput, type EquipmentKind, type EquipmentValues } from "@/lib/schemas/equipment";
+import type { EquipmentKind } from "@/lib/domain/stored-values";
+import { EquipmentInput, type EquipmentValues } from "@/lib/schemas/equipment";
 import { createEquipmentAction, updateEquipmentAction } from "../actions";
 import { SPEC_FIELDS, type SpecField } from "./spec-fields";
 

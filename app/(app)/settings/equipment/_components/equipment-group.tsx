@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { clsx } from "clsx";
-import type { EquipmentDto, EquipmentKind } from "@/lib/schemas/equipment";
+import type { EquipmentKind } from "@/lib/domain/stored-values";
+import type { EquipmentDto } from "@/lib/schemas/equipment";
 import { ArchiveButton } from "./archive-button";
 import { FIGURE_COLUMNS, formatFileSize, keyFigures } from "./key-figures";
 import { KIND_WORDS } from "./kind-words";

@@ -1,4 +1,5 @@
-import type { EquipmentDto, EquipmentKind } from "@/lib/schemas/equipment";
+import type { EquipmentKind } from "@/lib/domain/stored-values";
+import type { EquipmentDto } from "@/lib/schemas/equipment";
 
 // The few figures a coordinator compares at a glance, per kind; the full sheet is on the edit page.
 export const FIGURE_COLUMNS: Record<EquipmentKind, string[]> = {

@@ -1,4 +1,4 @@
-import type { EquipmentKind } from "@/lib/schemas/equipment";
+import type { EquipmentKind } from "@/lib/domain/stored-values";
 
 /** How the catalog pages name each kind in headings and links. */
 export const KIND_WORDS: Record<EquipmentKind, { plural: string; add: string }> = {

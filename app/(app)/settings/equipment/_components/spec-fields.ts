@@ -1,4 +1,5 @@
-import type { EquipmentDto, EquipmentInput, EquipmentKind } from "@/lib/schemas/equipment";
+import type { EquipmentKind } from "@/lib/domain/stored-values";
+import type { EquipmentDto, EquipmentInput } from "@/lib/schemas/equipment";
 
 // What the form asks for each kind, in data-sheet order. Names are paths under `specs`.
 export type SpecField =

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { EQUIPMENT_KINDS, type EquipmentKind } from "@/lib/schemas/equipment";
+import { EQUIPMENT_KINDS, type EquipmentKind } from "@/lib/domain/stored-values";
 import { requirePermission } from "@/lib/server/auth";
 import { EquipmentForm } from "../_components/equipment-form";
 import { KIND_WORDS } from "../_components/kind-words";

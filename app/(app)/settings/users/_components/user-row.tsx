@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { ROLES, ROLE_LABELS, type Role } from "@/lib/domain/roles";
-import type { UserDto } from "@/lib/server/data/users";
+import type { UserDto } from "@/lib/dto/users";
 import { changeRoleAction, renewInvitationAction, setActiveAction } from "../actions";
 
 const STATUS_TEXT: Record<UserDto["status"], string> = { active: "Active", invited: "Invited, no password yet", deactivated: "Deactivated" };

@@ -3,8 +3,8 @@
 import { useRouter } from "next/navigation";
 import { useEffect, useRef } from "react";
 import useSWR from "swr";
-import { PACKET_KINDS } from "@/lib/packets/packet-input";
-import type { PacketDto } from "@/lib/server/data/packets";
+import { PACKET_KINDS } from "@/lib/domain/stored-values";
+import type { PacketDto } from "@/lib/dto/packets";
 import { PacketCard } from "./packet-card";
 
 async function fetchPackets(url: string): Promise<PacketDto[]> {

@@ -1,5 +1,5 @@
 import { LocalTime } from "@/components/time/local-time";
-import type { PacketDto } from "@/lib/server/data/packets";
+import type { PacketDto } from "@/lib/dto/packets";
 
 const size = (bytes: number | null) => (bytes === null ? "" : bytes > 1_000_000 ? `${(bytes / 1_000_000).toFixed(1)} MB` : `${Math.round(bytes / 1000)} kB`);
 

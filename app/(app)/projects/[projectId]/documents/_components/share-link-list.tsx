@@ -4,7 +4,7 @@ import { useState, useTransition } from "react";
 import { LocalTime } from "@/components/time/local-time";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
-import type { ShareLinkDto, ShareLinkStatus } from "@/lib/server/data/share-links";
+import type { ShareLinkDto, ShareLinkStatus } from "@/lib/dto/share-links";
 import { revokeShareLinkAction } from "../share-actions";
 
 const STATUS_WORDS: Record<ShareLinkStatus, string> = { active: "Active", expired: "Expired", revoked: "Revoked" };

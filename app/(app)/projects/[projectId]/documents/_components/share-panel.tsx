@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import type { ShareLinkDto } from "@/lib/server/data/share-links";
+import type { ShareLinkDto } from "@/lib/dto/share-links";
 import { ShareLinkForm, type ShareableRevision } from "./share-link-form";
 import { ShareLinkList } from "./share-link-list";
 

@@ -6,7 +6,7 @@ import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { feeAmountText } from "@/lib/fees/line-amount";
 import { formatUsd } from "@/lib/fees/money";
-import type { ProjectFeeLineDto } from "@/lib/server/data/project-fees";
+import type { ProjectFeeLineDto } from "@/lib/dto/fees";
 import { payFeesAction } from "../actions";
 
 const STATE_TEXT: Record<ProjectFeeLineDto["state"], string> = { unpaid: "Unpaid", "in-progress": "Payment in progress", paid: "Paid", refunded: "Refunded, unpaid again" };

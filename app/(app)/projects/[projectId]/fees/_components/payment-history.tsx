@@ -2,7 +2,7 @@
 
 import { LocalTime } from "@/components/time/local-time";
 import { formatUsd } from "@/lib/fees/money";
-import type { PaymentDto } from "@/lib/server/data/project-fees";
+import type { PaymentDto } from "@/lib/dto/fees";
 import { RefundForm } from "./refund-form";
 
 const STATUS_TEXT: Record<PaymentDto["status"], string> = { pending: "Waiting for payment", paid: "Paid", expired: "Not completed", partially_refunded: "Partly refunded", refunded: "Refunded" };

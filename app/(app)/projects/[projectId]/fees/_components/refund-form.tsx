@@ -6,7 +6,7 @@ import { LocalTime } from "@/components/time/local-time";
 import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { formatUsd, parseUsd } from "@/lib/fees/money";
-import type { PaymentDto } from "@/lib/server/data/project-fees";
+import type { PaymentDto } from "@/lib/dto/fees";
 import { refundPaymentAction } from "../actions";
 
 type Mode = "fees" | "amount";

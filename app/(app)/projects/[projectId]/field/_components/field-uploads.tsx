@@ -4,8 +4,8 @@ import { clsx } from "clsx";
 import { useRef, useState } from "react";
 import { useDropzone, type FileRejection } from "react-dropzone";
 import { ALLOWED_TYPES, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, allowedTypesText, tooLargeMessage } from "@/lib/field/upload-rules";
-import type { ProjectFileDto } from "@/lib/server/data/project-files";
-import type { ProjectFileKind } from "@/models/project-file";
+import type { ProjectFileDto } from "@/lib/dto/project-files";
+import type { ProjectFileKind } from "@/lib/domain/stored-values";
 import { UploadedFiles } from "./uploaded-files";
 
 type Notice = { key: string; name: string; kind: "uploading" | "done" | "refused"; text: string };

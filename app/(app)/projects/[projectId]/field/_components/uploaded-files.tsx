@@ -4,7 +4,7 @@ import { useState } from "react";
 import { LocalTime } from "@/components/time/local-time";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { KIND_LABELS, THUMBNAIL_PX } from "@/lib/field/upload-rules";
-import type { ProjectFileDto } from "@/lib/server/data/project-files";
+import type { ProjectFileDto } from "@/lib/dto/project-files";
 
 const sizeText = (bytes: number) => (bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`);
 

@@ -1,0 +1,40 @@
+// The value sets and JSON shapes the database's columns hold, named once. Models take their
+// column types from here and from nowhere else in lib; DTOs, schemas and screens name the same
+// sets. Types and constant lists only: no rules, no imports that run.
+
+export type { Role } from "./roles";
+export type { Stage } from "./stages";
+export type { NecEdition } from "@/lib/engineering/types";
+export type { FeeAuthorityKind } from "@/lib/fees/types";
+
+export const EQUIPMENT_KINDS = ["module", "inverter", "device"] as const;
+export type EquipmentKind = (typeof EQUIPMENT_KINDS)[number];
+
+export const PACKET_KINDS = ["permit", "interconnection"] as const;
+export type PacketKind = (typeof PACKET_KINDS)[number];
+
+export type PacketStatus = "queued" | "running" | "ready" | "failed";
+/** One step of a generation as the worker recorded it when starting it. */
+export type PacketStepRecord = { at: string; progress: number; text: string };
+
+/** The outcome of a design's last review, kept with the design. */
+export type ReviewStatus = "incomplete" | "pass" | "warn" | "fail";
+
+export type CommissioningStatus = "open" | "complete";
+
+export const PROJECT_FILE_KINDS = ["signed-completion", "site-photo"] as const;
+export type ProjectFileKind = (typeof PROJECT_FILE_KINDS)[number];
+
+export const PAYMENT_STATUSES = ["pending", "paid", "expired", "partially_refunded", "refunded"] as const;
+export type PaymentStatus = (typeof PAYMENT_STATUSES)[number];
+
+export type RefundStatus = "pending" | "succeeded" | "failed";
+
+export type OutboxStatus = "queued" | "sent" | "failed";
+/** A stored file sent along with the message; the worker reads it from storage when it sends. */
+export type OutboxAttachment = { fileName: string; objectKey: string; contentType: string };
+
+export type ShareLinkAccessKind = "view" | "download";
+
+/** An audit event's before/after pairs, by field. */
+export type AuditChanges = Record<string, { before: unknown; after: unknown }>;

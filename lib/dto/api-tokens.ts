@@ -1,0 +1,1 @@
+export type ApiTokenDto = { id: string; name: string; createdAt: string; createdByName: string | null; lastUsedAt: string | null; revokedAt: string | null };

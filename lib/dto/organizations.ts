@@ -1,0 +1,1 @@
+export type OrganizationDto = { id: string; name: string; licenseNumber: string | null; phone: string | null; timeZone: string };
