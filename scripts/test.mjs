@@ -1,10 +1,10 @@
-// `npm test`: the same bootstrap as `npm start` for separate test services,
+// `npm test`: typecheck, lint and format check; then the same bootstrap as `npm start` for separate test services,
 // then every suite: unit, integration against a fresh PostgreSQL database,
 // end-to-end in Debian's Chromium against a production build, and system
 // (two app servers and two workers, database and storage faults).
 // Exits non-zero on the first failing suite.
 import path from "node:path";
-import { spawn } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
 import { ensureNodeModules, ensurePostgresBinaries, ensureTestTools } from "./bootstrap.mjs";
 
@@ -15,6 +15,16 @@ const wants = (suite) => only.length === 0 || only.includes(suite);
 ensureNodeModules(root);
 const postgresBin = ensurePostgresBinaries();
 ensureTestTools();
+
+// Typecheck, lint and format first: a broken boundary stops the run before any service starts.
+if (wants("lint")) {
+  console.log("\n━━ lint ━━");
+  const lint = spawnSync("npm", ["run", "--silent", "lint"], { cwd: root, stdio: "inherit" });
+  if (lint.status !== 0) {
+    console.log("\nSuites:\n  ✖ lint\n\nsuites: 0 passed, 1 failed");
+    process.exit(1);
+  }
+}
 
 const { startStack } = await import("./services/stack.mjs");
 const { recreateDatabase, databaseUrl } = await import("./services/postgres.mjs");

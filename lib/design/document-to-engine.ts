@@ -5,7 +5,6 @@ import {
   requiredOcpdA,
   type CircuitRef,
   type ConductorRun,
-  type ConductorSize,
   type Design,
   type Inverter,
   type ModuleLevelDevice,

@@ -1,4 +1,3 @@
-import { readFileSync } from "node:fs";
 import { expect, test, type Page } from "@playwright/test";
 import { generatePacket } from "../support/packets";
 import { payByCard } from "../support/api";

@@ -28,7 +28,6 @@ export type Targets = {
 
 const query = <T>(sql: string, params: unknown[] = []) => queryDatabase<T>(process.env.DATABASE_URL!, sql, params);
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- fixture answers are read field by field
 const ok = async (res: Awaited<ReturnType<APIRequestContext["get"]>>, what: string): Promise<any> => {
   expect(res.status(), `${what}: ${await res.text().catch(() => "")}`).toBeLessThan(300);
   return res.json();

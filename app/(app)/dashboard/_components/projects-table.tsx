@@ -80,6 +80,7 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
 
   const { data, error, isLoading } = useSWR(url, fetchJson, { keepPreviousData: true });
 
+  // eslint-disable-next-line react-hooks/incompatible-library -- the table object is recreated each render and never memoized; nothing here relies on the compiler
   const table = useReactTable({
     data: data?.items ?? [],
     columns: COLUMNS,

@@ -1,6 +1,6 @@
 "use client";
 
-import { useRef, useState, useTransition } from "react";
+import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import type { PacketKind } from "@/lib/domain/stored-values";
@@ -99,13 +99,14 @@ export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus
 
 /** The in-flight generation's progress, never shown going back: a poll answered out of order cannot move the bar backwards. */
 function useForwardProgress(packet: PacketDto | undefined): number {
-  const highest = useRef<{ id: string; progress: number } | null>(null);
+  const [highest, setHighest] = useState<{ id: string; progress: number } | null>(null);
+  // Adjusting state while rendering (React's pattern for state derived from props): no effect, no extra paint.
   if (!packet) {
-    highest.current = null; // a retry of the same revision starts again from its first step
+    if (highest) setHighest(null); // a retry of the same revision starts again from its first step
     return 0;
   }
-  const seen = highest.current?.id === packet.id ? highest.current.progress : 0;
+  const seen = highest?.id === packet.id ? highest.progress : 0;
   const progress = Math.max(seen, packet.progress);
-  highest.current = { id: packet.id, progress };
+  if (highest?.id !== packet.id || highest.progress !== progress) setHighest({ id: packet.id, progress });
   return progress;
 }

@@ -15,7 +15,7 @@ export function BeforeEnergizingStep({ number, facts, values, errors, byId, reg 
       title="Before energizing: string tests"
       intro={
         <>
-          <p>With the DC disconnect open and each string's conductors apart at the inverter, test every string before it is landed. Read the temperature on the back of a module in full sun for the sharpest Voc check.</p>
+          <p>With the DC disconnect open and each string&apos;s conductors apart at the inverter, test every string before it is landed. Read the temperature on the back of a module in full sun for the sharpest Voc check.</p>
           <p>The modules are live in daylight. Use meters and an insulation tester rated for the string voltage; the tester puts its own voltage on the conductors, so keep clear while it runs and test with the inverter and any surge protection disconnected.</p>
           {facts.stringTests.some((s) => !s.vocApplies) ? <p>Optimizers hold each module at a low voltage until the inverter runs, so those strings have no Voc test here.</p> : null}
         </>

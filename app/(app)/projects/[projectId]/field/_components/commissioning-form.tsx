@@ -1,4 +1,5 @@
 "use client";
+/* eslint-disable react-hooks/refs -- the refs are written only by event handlers (typing, saving); the compiler rule cannot tell the handlers that reg() and setValue() return apart from reads during render. */
 
 import { clsx } from "clsx";
 import { useEffect, useMemo, useRef, useState } from "react";

@@ -9,7 +9,7 @@ export function InverterStep({ number, facts, values, byId, reg, setValue }: Ste
       id="inverter"
       number={number}
       title="At the inverter: serial, activation card, activation"
-      intro={<p>Read the serial from the unit's label and from the activation card in its box. They must match before you activate; a card from another box activates the wrong unit.</p>}
+      intro={<p>Read the serial from the unit&apos;s label and from the activation card in its box. They must match before you activate; a card from another box activates the wrong unit.</p>}
     >
       {facts.inverters.map((unit) => {
         const i = values.inverters.findIndex((u) => u.id === unit.id);
@@ -37,7 +37,7 @@ export function InverterStep({ number, facts, values, byId, reg, setValue }: Ste
             <ResultLine result={byId(`inverter-serial:${unit.id}`)} />
             <label className="flex items-start gap-2 text-sm">
               <input type="checkbox" className="mt-1" {...reg(`inverters.${i}.activated`)} />
-              <span>Activated with this card's key, and the inverter shows it activated</span>
+              <span>Activated with this card&apos;s key, and the inverter shows it activated</span>
             </label>
             <ResultLine result={byId(`inverter-activation:${unit.id}`)} />
           </fieldset>
