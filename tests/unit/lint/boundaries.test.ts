@@ -28,6 +28,8 @@ describe("boundaries between the rooms", () => {
     ["a shared component imports a route's action", "components/example.tsx", `import { saveAction } from "@/app/(app)/settings/actions";\nexport const x = saveAction;\n`, RESTRICTED],
     ["a client component takes a type from a server module", "components/example.tsx", `"use client";\nimport type { Viewer } from "@/lib/server/auth";\nexport type X = Viewer;\n`, CLIENT],
     ["a client component in a route imports a model", "app/(app)/example/_components/x.tsx", `"use client";\nimport type { Project } from "@/models/project";\nexport type X = Project;\n`, CLIENT],
+    ["a client component imports its route's server action", "app/(app)/example/_components/x.tsx", `"use client";\nimport { saveAction } from "../actions";\nexport const x = saveAction;\n`, CLIENT],
+    ["a client component imports a share action", "app/(app)/example/_components/x.tsx", `"use client";\nimport { revokeAction } from "../share-actions";\nexport const x = revokeAction;\n`, CLIENT],
   ])("%s is refused", async (_what, filePath, code, rule) => {
     expect(await rulesBroken(filePath, code)).toContain(rule);
   });
@@ -38,6 +40,8 @@ describe("boundaries between the rooms", () => {
     ["a template takes a type from pure lib", "templates/pdf/example.tsx", `import type { FeeLine } from "@/lib/fees";\nexport type X = FeeLine;\n`],
     ["pure engineering imports the domain", "lib/engineering/example.ts", `import { STAGES } from "@/lib/domain/stages";\nexport const x = STAGES;\n`],
     ["a client component takes a DTO type", "components/example.tsx", `"use client";\nimport type { ActionResult } from "@/lib/dto/action-result";\nexport type X = ActionResult<number>;\n`],
+    ["a client component types its action prop", "app/(app)/example/_components/x.tsx", `"use client";\nimport type { saveAction } from "../actions";\nexport type X = typeof saveAction;\n`],
+    ["a page imports its route's action", "app/(app)/example/page.tsx", `import { saveAction } from "./actions";\nexport const x = saveAction;\n`],
   ])("%s is allowed", async (_what, filePath, code) => {
     expect(await rulesBroken(filePath, code)).toEqual([]);
   });

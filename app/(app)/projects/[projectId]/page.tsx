@@ -11,6 +11,7 @@ import { listStageChanges } from "@/lib/server/data/projects";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { StageChangeForm } from "./_components/stage-change-form";
 import { StageTimeline } from "./_components/stage-timeline";
+import { changeStageAction } from "../actions";
 
 export const metadata: Metadata = { title: "Project" };
 
@@ -137,7 +138,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
 
         <section className="panel space-y-4" aria-labelledby="timeline-heading">
           <h2 id="timeline-heading">Stage timeline</h2>
-          {can(viewer, "project:change-stage", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }) ? <StageChangeForm key={project.stage} projectId={project.id} current={project.stage} /> : null}
+          {can(viewer, "project:change-stage", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }) ? <StageChangeForm changeStage={changeStageAction} key={project.stage} projectId={project.id} current={project.stage} /> : null}
           <StageTimeline entries={timeline} />
         </section>
       </div>

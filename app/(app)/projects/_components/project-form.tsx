@@ -10,7 +10,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { ProjectInput, SERVICE_VOLTAGES } from "@/lib/schemas/project";
-import { createProjectAction, updateProjectAction } from "../actions";
+import type { createProjectAction, updateProjectAction } from "../actions";
 
 type FormValues = z.input<typeof ProjectInput>;
 type Option = { id: string; name: string };
@@ -23,7 +23,10 @@ const EMPTY: FormValues = {
 };
 
 /** `defaultCoordinatorId`: on a new project, the coordinator creating it looks after it unless they choose otherwise. */
-export function ProjectForm({ projectId, initial, options, defaultCoordinatorId = "" }: { projectId?: string; initial?: FormValues; options: ProjectFormOptions; defaultCoordinatorId?: string }) {
+/** The page hands in the action that saves: creating a project or updating this one. */
+export type SaveProject = { create: typeof createProjectAction } | { update: typeof updateProjectAction; projectId: string };
+
+export function ProjectForm({ initial, options, defaultCoordinatorId = "", save }: { initial?: FormValues; options: ProjectFormOptions; defaultCoordinatorId?: string; save: SaveProject }) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
   const form = useForm<FormValues, unknown, z.output<typeof ProjectInput>>({ resolver: zodResolver(ProjectInput), defaultValues: initial ?? { ...EMPTY, coordinatorId: defaultCoordinatorId } });
@@ -34,7 +37,7 @@ export function ProjectForm({ projectId, initial, options, defaultCoordinatorId 
     setMessage(undefined);
     // The server parses the raw form values again with the same schema.
     const raw = form.getValues();
-    const result = projectId ? await updateProjectAction({ projectId, values: raw }) : await createProjectAction(raw);
+    const result = "update" in save ? await save.update({ projectId: save.projectId, values: raw }) : await save.create(raw);
     if (!result.ok) {
       applyFieldErrors(form, Object.fromEntries(Object.entries(result.fieldErrors ?? {}).map(([k, v]) => [k.replace(/^values\./, ""), v])));
       setMessage(result.message);
@@ -113,7 +116,7 @@ export function ProjectForm({ projectId, initial, options, defaultCoordinatorId 
       </fieldset>
       <div className="flex gap-3">
         <Button type="submit" disabled={isSubmitting}>
-          {isSubmitting ? "Saving…" : projectId ? "Save changes" : "Create project"}
+          {isSubmitting ? "Saving…" : "update" in save ? "Save changes" : "Create project"}
         </Button>
         <Button type="button" variant="secondary" onClick={() => router.back()}>
           Cancel

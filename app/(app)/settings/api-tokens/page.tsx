@@ -5,6 +5,7 @@ import { CreateTokenForm } from "./_components/create-token-form";
 import { RevokeTokenButton } from "./_components/revoke-token-button";
 import { LocalTime } from "@/components/time/local-time";
 import { DataTable } from "@/components/ui/data-table";
+import { createApiTokenAction, revokeApiTokenAction } from "./actions";
 
 export const metadata: Metadata = { title: "API tokens" };
 
@@ -24,7 +25,7 @@ export default async function ApiTokensPage() {
       </div>
       <section className="panel">
         <h2 className="mb-3">Create a token</h2>
-        <CreateTokenForm />
+        <CreateTokenForm create={createApiTokenAction} />
       </section>
       <DataTable columns={["Name", "Created", "Last used", "Status", { label: "Actions", hidden: true }]}>
             {tokens.length === 0 ? (
@@ -43,7 +44,7 @@ export default async function ApiTokensPage() {
                 </td>
                 <td className="px-3 py-2 text-ink-soft">{when(t.lastUsedAt)}</td>
                 <td className="px-3 py-2 text-ink-soft">{t.revokedAt ? <>Revoked {when(t.revokedAt)}</> : "Active"}</td>
-                <td className="px-3 py-2 text-right">{t.revokedAt ? null : <RevokeTokenButton apiTokenId={t.id} name={t.name} />}</td>
+                <td className="px-3 py-2 text-right">{t.revokedAt ? null : <RevokeTokenButton apiTokenId={t.id} name={t.name} revokeToken={revokeApiTokenAction} />}</td>
               </tr>
             ))}
           </DataTable>

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { requirePermission } from "@/lib/server/auth";
 import { getOrganization } from "@/lib/server/data/organizations";
 import { OrganizationForm } from "./_components/organization-form";
+import { updateOrganizationAction } from "./actions";
 
 export const metadata: Metadata = { title: "Organization" };
 
@@ -15,7 +16,7 @@ export default async function OrganizationPage() {
         <p className="text-sm text-ink-soft">How your company appears on packets, field reports and receipts, and the time zone their times are printed in.</p>
       </div>
       <section className="panel">
-        <OrganizationForm initial={{ name: o.name, licenseNumber: o.licenseNumber ?? "", phone: o.phone ?? "", timeZone: o.timeZone }} />
+        <OrganizationForm update={updateOrganizationAction} initial={{ name: o.name, licenseNumber: o.licenseNumber ?? "", phone: o.phone ?? "", timeZone: o.timeZone }} />
       </section>
     </div>
   );

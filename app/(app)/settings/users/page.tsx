@@ -4,6 +4,7 @@ import { listUsers } from "@/lib/server/data/users";
 import { InviteUserForm } from "./_components/invite-user-form";
 import { UserRow } from "./_components/user-row";
 import { DataTable } from "@/components/ui/data-table";
+import { changeRoleAction, inviteUserAction, renewInvitationAction, setActiveAction } from "./actions";
 
 export const metadata: Metadata = { title: "Users" };
 
@@ -15,11 +16,11 @@ export default async function UsersPage() {
       <h1>Users</h1>
       <section className="panel">
         <h2 className="mb-3">Invite someone</h2>
-        <InviteUserForm />
+        <InviteUserForm invite={inviteUserAction} />
       </section>
       <DataTable columns={["Name", "E-mail", "Role", "Status", { label: "Actions", hidden: true }]}>
             {users.map((user) => (
-              <UserRow key={user.id} user={user} isSelf={user.id === viewer.id} />
+              <UserRow key={user.id} user={user} isSelf={user.id === viewer.id} actions={{ changeRole: changeRoleAction, renewInvitation: renewInvitationAction, setActive: setActiveAction }} />
             ))}
           </DataTable>
     </div>

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { getInvitationByToken } from "@/lib/server/data/users";
 import { SetPasswordForm } from "./_components/set-password-form";
+import { acceptInvitationAction } from "./actions";
 
 export const metadata: Metadata = { title: "Set your password", robots: { index: false } };
 
@@ -38,7 +39,7 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
       <p className="mb-4 text-sm text-ink-soft">
         Choose a password for <span className="measure">{invitation.email}</span> at {invitation.organizationName}.
       </p>
-      <SetPasswordForm token={token} email={invitation.email} />
+      <SetPasswordForm accept={acceptInvitationAction} token={token} email={invitation.email} />
     </>
   );
 }

@@ -5,9 +5,9 @@ import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { STAGES, STAGE_LABELS, stageIndex, type Stage } from "@/lib/domain/stages";
-import { changeStageAction } from "../../actions";
+import type { changeStageAction } from "../../actions";
 
-export function StageChangeForm({ projectId, current }: { projectId: string; current: Stage }) {
+export function StageChangeForm({ projectId, current, changeStage }: { projectId: string; current: Stage; changeStage: typeof changeStageAction }) {
   const router = useRouter();
   const next = STAGES[Math.min(stageIndex(current) + 1, STAGES.length - 1)];
   const [toStage, setToStage] = useState<Stage>(next === current ? STAGES[0] : next);
@@ -19,7 +19,7 @@ export function StageChangeForm({ projectId, current }: { projectId: string; cur
     event.preventDefault();
     setMessage(undefined);
     startTransition(async () => {
-      const result = await changeStageAction({ projectId, toStage, note });
+      const result = await changeStage({ projectId, toStage, note });
       if (!result.ok) {
         setMessage(result.fieldErrors?.note?.[0] ?? result.message);
         return;

@@ -6,6 +6,7 @@ import { getDesignWithContext } from "@/lib/server/data/designs";
 import { listEquipment } from "@/lib/server/data/equipment";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { DesignEditor } from "./_components/design-editor";
+import { saveDesignAction } from "./actions";
 
 export const metadata: Metadata = { title: "Design" };
 
@@ -22,7 +23,7 @@ export default async function DesignPage({ params }: { params: Promise<{ project
       <ProjectSubpageHeader project={project} title="Design">
         {project.jurisdiction ? `Checked against NEC ${project.jurisdiction.necEdition} as adopted by ${project.jurisdiction.name}.` : "Choose the project's AHJ to run the code checks."} Your input is saved as you go.
       </ProjectSubpageHeader>
-      <DesignEditor projectId={project.id} initialDraft={design.draft} initialRevision={design.revision} catalog={choices} conditions={context.conditions} readOnly={!can(viewer, "project:edit")} />
+      <DesignEditor save={saveDesignAction} projectId={project.id} initialDraft={design.draft} initialRevision={design.revision} catalog={choices} conditions={context.conditions} readOnly={!can(viewer, "project:edit")} />
     </div>
   );
 }

@@ -10,6 +10,8 @@ import { listShareLinks, revisionLabel } from "@/lib/server/data/share-links";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { PacketBoard } from "./_components/packet-board";
 import { SharePanel } from "./_components/share-panel";
+import { requestPacketAction, retryPacketAction } from "./actions";
+import { createShareLinkAction, revokeShareLinkAction } from "./share-actions";
 
 export const metadata: Metadata = { title: "Documents" };
 
@@ -34,8 +36,8 @@ export default async function DocumentsPage({ params }: { params: Promise<{ proj
           </div>
         </section>
       ) : null}
-      <PacketBoard projectId={project.id} initial={packets} canGenerate={can(viewer, "project:edit")} reviewStatus={design?.reviewStatus ?? "incomplete"} />
-      {canShare ? <SharePanel projectId={project.id} revisions={shareable} links={shareLinks} /> : null}
+      <PacketBoard projectId={project.id} initial={packets} canGenerate={can(viewer, "project:edit")} reviewStatus={design?.reviewStatus ?? "incomplete"} actions={{ request: requestPacketAction, retry: retryPacketAction }} />
+      {canShare ? <SharePanel projectId={project.id} revisions={shareable} links={shareLinks} actions={{ create: createShareLinkAction, revoke: revokeShareLinkAction }} /> : null}
     </div>
   );
 }

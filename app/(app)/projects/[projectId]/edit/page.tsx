@@ -5,6 +5,7 @@ import { requireUser } from "@/lib/server/auth";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { getProjectFormOptions } from "@/lib/server/data/reference-data";
 import { ProjectForm } from "../../_components/project-form";
+import { updateProjectAction } from "../../actions";
 
 export const metadata: Metadata = { title: "Edit project" };
 
@@ -27,7 +28,7 @@ export default async function EditProjectPage({ params }: { params: Promise<{ pr
       <h1>
         Edit project <span className="measure text-ink-faint">No. {project.number}</span>
       </h1>
-      <ProjectForm projectId={project.id} initial={initial} options={options} />
+      <ProjectForm save={{ update: updateProjectAction, projectId: project.id }} initial={initial} options={options} />
     </div>
   );
 }

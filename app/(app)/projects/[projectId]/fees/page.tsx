@@ -8,6 +8,7 @@ import { loadProjectOr404 } from "@/lib/server/pages";
 import { FeeLines } from "./_components/fee-lines";
 import { PaymentHistory } from "./_components/payment-history";
 import { ValuationForm } from "./_components/valuation-form";
+import { payFeesAction, refundPaymentAction, setValuationAction } from "./actions";
 
 export const metadata: Metadata = { title: "Fees" };
 
@@ -31,13 +32,13 @@ export default async function FeesPage({ params, searchParams }: { params: Promi
           Payment not completed. Nothing was charged for the fees still marked unpaid.
         </p>
       ) : null}
-      <ValuationForm projectId={project.id} valuationCents={fees.valuationCents} canEdit={can(viewer, "project:edit")} />
-      <FeeLines projectId={project.id} lines={fees.lines} canPay={can(viewer, "fees:pay")} watchPending={pending} />
+      <ValuationForm setValuation={setValuationAction} projectId={project.id} valuationCents={fees.valuationCents} canEdit={can(viewer, "project:edit")} />
+      <FeeLines payFees={payFeesAction} projectId={project.id} lines={fees.lines} canPay={can(viewer, "fees:pay")} watchPending={pending} />
       <p className="text-sm text-ink-soft">
         Unpaid: <strong className="measure" data-testid="unpaid-total">{feeTotalText({ totalCents: fees.unpaidTotalCents, isComplete: !fees.unpaidIsAtLeast })}</strong>
         {fees.unpaidIsAtLeast ? " (a fee still waits for the valuation or the design)" : ""}. Fee schedules change: confirm the amounts with the AHJ and the utility before filing.
       </p>
-      <PaymentHistory payments={fees.payments} canRefund={can(viewer, "fees:refund")} />
+      <PaymentHistory payments={fees.payments} refund={refundPaymentAction} canRefund={can(viewer, "fees:refund")} />
     </div>
   );
 }

@@ -10,6 +10,7 @@ import { loadProjectOr404 } from "@/lib/server/pages";
 import { CommissioningForm } from "./_components/commissioning-form";
 import { FieldCautions } from "./_components/field-cautions";
 import { FieldUploads } from "./_components/field-uploads";
+import { saveCommissioningAction } from "./actions";
 
 export const metadata: Metadata = { title: "Field record" };
 
@@ -36,6 +37,7 @@ export default async function FieldPage({ params }: { params: Promise<{ projectI
       {commissioning.ok ? (
         <>
           <CommissioningForm
+            save={saveCommissioningAction}
             projectId={project.id}
             facts={commissioning.data.facts}
             initialReadings={commissioning.data.readings}

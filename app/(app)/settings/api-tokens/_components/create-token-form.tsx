@@ -9,16 +9,16 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { CreateApiTokenInput } from "@/lib/schemas/api-token";
-import { createApiTokenAction } from "../actions";
+import type { createApiTokenAction } from "../actions";
 
 /** Names a new token and shows it once: only its hash is kept, so it cannot be shown again. */
-export function CreateTokenForm() {
+export function CreateTokenForm({ create }: { create: typeof createApiTokenAction }) {
   const router = useRouter();
   const [created, setCreated] = useState<{ name: string; token: string }>();
   const [copied, setCopied] = useState(false);
   const form = useForm<CreateApiTokenInput>({ resolver: zodResolver(CreateApiTokenInput), defaultValues: { name: "" } });
   const { errors, isSubmitting } = form.formState;
-  const { submit, message } = useActionSubmit(form, createApiTokenAction, (data) => {
+  const { submit, message } = useActionSubmit(form, create, (data) => {
     setCreated({ name: data.apiToken.name, token: data.token });
     setCopied(false);
     form.reset({ name: "" });

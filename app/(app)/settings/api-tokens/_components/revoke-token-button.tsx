@@ -3,9 +3,9 @@
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
-import { revokeApiTokenAction } from "../actions";
+import type { revokeApiTokenAction } from "../actions";
 
-export function RevokeTokenButton({ apiTokenId, name }: { apiTokenId: string; name: string }) {
+export function RevokeTokenButton({ apiTokenId, name, revokeToken }: { apiTokenId: string; name: string; revokeToken: typeof revokeApiTokenAction }) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
@@ -14,7 +14,7 @@ export function RevokeTokenButton({ apiTokenId, name }: { apiTokenId: string; na
     if (!window.confirm(`Revoke “${name}”? Integrations using it stop working at once.`)) return;
     setMessage(undefined);
     startTransition(async () => {
-      const result = await revokeApiTokenAction({ apiTokenId });
+      const result = await revokeToken({ apiTokenId });
       if (!result.ok) setMessage(result.message);
       router.refresh();
     });

@@ -8,6 +8,7 @@ import { getEquipmentById } from "@/lib/server/data/equipment";
 import { DatasheetUpload } from "../_components/datasheet-upload";
 import { EquipmentForm } from "../_components/equipment-form";
 import { formValuesOf } from "../_components/spec-fields";
+import { updateEquipmentAction } from "../actions";
 
 export const metadata: Metadata = { title: "Edit equipment" };
 
@@ -30,7 +31,7 @@ export default async function EditEquipmentPage({ params, searchParams }: Props)
         <h2 id="datasheet-heading" className="mb-2">Data sheet</h2>
         <DatasheetUpload equipmentId={item.id} current={item.datasheet} />
       </section>
-      <EquipmentForm kind={item.kind} equipmentId={item.id} initial={formValuesOf(item.kind, item)} />
+      <EquipmentForm save={{ update: updateEquipmentAction, equipmentId: item.id }} kind={item.kind} initial={formValuesOf(item.kind, item)} />
     </div>
   );
 }

@@ -3,9 +3,9 @@
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
-import { setEquipmentArchivedAction } from "../actions";
+import type { setEquipmentArchivedAction } from "../actions";
 
-export function ArchiveButton({ equipmentId, isArchived, name }: { equipmentId: string; isArchived: boolean; name: string }) {
+export function ArchiveButton({ equipmentId, isArchived, name, setArchived }: { equipmentId: string; isArchived: boolean; name: string; setArchived: typeof setEquipmentArchivedAction }) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
@@ -13,7 +13,7 @@ export function ArchiveButton({ equipmentId, isArchived, name }: { equipmentId: 
   function toggle() {
     setMessage(undefined);
     startTransition(async () => {
-      const result = await setEquipmentArchivedAction({ equipmentId, isArchived: !isArchived });
+      const result = await setArchived({ equipmentId, isArchived: !isArchived });
       if (!result.ok) setMessage(result.message);
       router.refresh();
     });

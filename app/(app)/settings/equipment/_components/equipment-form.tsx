@@ -9,19 +9,23 @@ import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import type { EquipmentKind } from "@/lib/domain/stored-values";
 import { EquipmentInput, type EquipmentValues } from "@/lib/schemas/equipment";
-import { createEquipmentAction, updateEquipmentAction } from "../actions";
+import type { createEquipmentAction, updateEquipmentAction } from "../actions";
 import { SPEC_FIELDS, type SpecField } from "./spec-fields";
 
 type Path = FieldPath<EquipmentInput>;
 
-export function EquipmentForm({ kind, equipmentId, initial }: { kind: EquipmentKind; equipmentId?: string; initial: EquipmentInput }) {
+/** The page hands in the action that saves: adding to the catalog or updating this item. */
+export type SaveEquipment = { create: typeof createEquipmentAction } | { update: typeof updateEquipmentAction; equipmentId: string };
+
+export function EquipmentForm({ kind, initial, save }: { kind: EquipmentKind; initial: EquipmentInput; save: SaveEquipment }) {
+  const equipmentId = "update" in save ? save.equipmentId : undefined;
   const router = useRouter();
   const form = useForm<EquipmentInput, unknown, EquipmentValues>({ resolver: zodResolver(EquipmentInput), defaultValues: initial });
   const { errors, isSubmitting } = form.formState;
   const errorOf = (path: string) => (get(errors, path) as { message?: string } | undefined)?.message;
   const { submit, message } = useActionSubmit(
     form,
-    (raw) => (equipmentId ? updateEquipmentAction({ ...raw, equipmentId }) : createEquipmentAction(raw)),
+    (raw) => ("update" in save ? save.update({ ...raw, equipmentId: save.equipmentId }) : save.create(raw)),
     ({ id }) => {
       router.push(equipmentId ? "/settings/equipment" : `/settings/equipment/${id}?added=1`);
       router.refresh();

@@ -6,6 +6,7 @@ import { ArchiveButton } from "./archive-button";
 import { FIGURE_COLUMNS, formatFileSize, keyFigures } from "./key-figures";
 import { KIND_WORDS } from "./kind-words";
 import { DataTable } from "@/components/ui/data-table";
+import { setEquipmentArchivedAction } from "../actions";
 
 /** One kind's items as a table; archived ones last and muted. */
 export function EquipmentGroup({ kind, items, canEdit }: { kind: EquipmentKind; items: EquipmentDto[]; canEdit: boolean }) {
@@ -44,7 +45,7 @@ export function EquipmentGroup({ kind, items, canEdit }: { kind: EquipmentKind; 
                     {canEdit ? (
                       <td className="space-x-2 whitespace-nowrap px-3 py-2 text-right">
                         <Link href={`/settings/equipment/${item.id}`} aria-label={`Edit ${name}`}>Edit</Link>
-                        <ArchiveButton equipmentId={item.id} isArchived={item.isArchived} name={name} />
+                        <ArchiveButton equipmentId={item.id} isArchived={item.isArchived} name={name} setArchived={setEquipmentArchivedAction} />
                       </td>
                     ) : null}
                   </tr>

@@ -4,6 +4,7 @@ import { requirePermission } from "@/lib/server/auth";
 import { EquipmentForm } from "../_components/equipment-form";
 import { KIND_WORDS } from "../_components/kind-words";
 import { formValuesOf } from "../_components/spec-fields";
+import { createEquipmentAction } from "../actions";
 
 export const metadata: Metadata = { title: "Add equipment" };
 
@@ -15,7 +16,7 @@ export default async function NewEquipmentPage({ searchParams }: { searchParams:
     <div className="mx-auto max-w-3xl space-y-4">
       <h1>{KIND_WORDS[kind].add}</h1>
       <p className="text-sm text-ink-soft">Copy the figures from the data sheet at STC; the data sheet PDF can be attached once the item is saved.</p>
-      <EquipmentForm kind={kind} initial={formValuesOf(kind)} />
+      <EquipmentForm save={{ create: createEquipmentAction }} kind={kind} initial={formValuesOf(kind)} />
     </div>
   );
 }

@@ -10,14 +10,14 @@ import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { US_TIME_ZONES } from "@/lib/domain/time-zones";
 import { OrganizationInput, type OrganizationValues } from "@/lib/schemas/organization";
-import { updateOrganizationAction } from "../actions";
+import type { updateOrganizationAction } from "../actions";
 
-export function OrganizationForm({ initial }: { initial: OrganizationInput }) {
+export function OrganizationForm({ initial, update }: { initial: OrganizationInput; update: typeof updateOrganizationAction }) {
   const router = useRouter();
   const [saved, setSaved] = useState(false);
   const form = useForm<OrganizationInput, unknown, OrganizationValues>({ resolver: zodResolver(OrganizationInput), defaultValues: initial });
   const { errors, isSubmitting } = form.formState;
-  const { submit, message } = useActionSubmit(form, updateOrganizationAction, () => {
+  const { submit, message } = useActionSubmit(form, update, () => {
     setSaved(true);
     form.reset(form.getValues());
     router.refresh();

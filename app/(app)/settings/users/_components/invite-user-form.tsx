@@ -9,16 +9,16 @@ import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { ROLES, ROLE_LABELS } from "@/lib/domain/roles";
 import { InviteUserInput } from "@/lib/schemas/user";
-import { inviteUserAction } from "../actions";
+import type { inviteUserAction } from "../actions";
 
-export function InviteUserForm() {
+export function InviteUserForm({ invite }: { invite: typeof inviteUserAction }) {
   const [result, setResult] = useState<{ kind: "error" | "info"; text: string }>();
   const form = useForm<InviteUserInput>({ resolver: zodResolver(InviteUserInput), defaultValues: { name: "", email: "", role: "installer" } });
   const { errors, isSubmitting } = form.formState;
 
   async function onSubmit(values: InviteUserInput) {
     setResult(undefined);
-    const res = await inviteUserAction(values);
+    const res = await invite(values);
     if (!res.ok) {
       applyFieldErrors(form, res.fieldErrors);
       setResult({ kind: "error", text: res.message });

@@ -5,11 +5,14 @@ import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { ROLES, ROLE_LABELS, type Role } from "@/lib/domain/roles";
 import type { UserDto } from "@/lib/dto/users";
-import { changeRoleAction, renewInvitationAction, setActiveAction } from "../actions";
+import type { changeRoleAction, renewInvitationAction, setActiveAction } from "../actions";
 
 const STATUS_TEXT: Record<UserDto["status"], string> = { active: "Active", invited: "Invited, no password yet", deactivated: "Deactivated" };
 
-export function UserRow({ user, isSelf }: { user: UserDto; isSelf: boolean }) {
+/** The page hands down what a row can do to its user. */
+export type UserActions = { changeRole: typeof changeRoleAction; renewInvitation: typeof renewInvitationAction; setActive: typeof setActiveAction };
+
+export function UserRow({ user, isSelf, actions }: { user: UserDto; isSelf: boolean; actions: UserActions }) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
@@ -36,7 +39,7 @@ export function UserRow({ user, isSelf }: { user: UserDto; isSelf: boolean }) {
           className="input py-1"
           defaultValue={user.role}
           disabled={isSelf || pending}
-          onChange={(e) => run(() => changeRoleAction({ userId: user.id, role: e.target.value as Role }), "Role changed.")}
+          onChange={(e) => run(() => actions.changeRole({ userId: user.id, role: e.target.value as Role }), "Role changed.")}
         >
           {ROLES.map((r) => (
             <option key={r} value={r}>
@@ -51,16 +54,16 @@ export function UserRow({ user, isSelf }: { user: UserDto; isSelf: boolean }) {
       </td>
       <td className="space-x-2 whitespace-nowrap px-3 py-2 text-right">
         {user.status === "invited" ? (
-          <Button variant="quiet" disabled={pending} onClick={() => run(() => renewInvitationAction({ userId: user.id }), "New link queued.")}>
+          <Button variant="quiet" disabled={pending} onClick={() => run(() => actions.renewInvitation({ userId: user.id }), "New link queued.")}>
             Send a new link
           </Button>
         ) : null}
         {isSelf ? null : user.status === "deactivated" ? (
-          <Button variant="secondary" disabled={pending} onClick={() => run(() => setActiveAction({ userId: user.id, isActive: true }))}>
+          <Button variant="secondary" disabled={pending} onClick={() => run(() => actions.setActive({ userId: user.id, isActive: true }))}>
             Reactivate
           </Button>
         ) : (
-          <Button variant="danger" disabled={pending} onClick={() => run(() => setActiveAction({ userId: user.id, isActive: false }))}>
+          <Button variant="danger" disabled={pending} onClick={() => run(() => actions.setActive({ userId: user.id, isActive: false }))}>
             Deactivate
           </Button>
         )}

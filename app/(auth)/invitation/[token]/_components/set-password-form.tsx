@@ -10,9 +10,9 @@ import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { applyFieldErrors } from "@/components/forms/apply-field-errors";
 import { SetPasswordInput } from "@/lib/schemas/user";
-import { acceptInvitationAction } from "../actions";
+import type { acceptInvitationAction } from "../actions";
 
-export function SetPasswordForm({ token, email }: { token: string; email: string }) {
+export function SetPasswordForm({ token, email, accept }: { token: string; email: string; accept: typeof acceptInvitationAction }) {
   const router = useRouter();
   const [error, setError] = useState<string>();
   const form = useForm<SetPasswordInput>({ resolver: zodResolver(SetPasswordInput), defaultValues: { token, password: "", confirm: "" } });
@@ -20,7 +20,7 @@ export function SetPasswordForm({ token, email }: { token: string; email: string
 
   async function onSubmit(values: SetPasswordInput) {
     setError(undefined);
-    const result = await acceptInvitationAction(values);
+    const result = await accept(values);
     if (!result.ok) {
       applyFieldErrors(form, result.fieldErrors);
       setError(result.message);

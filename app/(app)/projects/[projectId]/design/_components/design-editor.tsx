@@ -8,7 +8,7 @@ import { runDesignReview } from "@/lib/design/run-review";
 import type { SiteConditions } from "@/lib/design/to-engine";
 import { DESIGN_STEPS, DesignInput, type DesignDraft, type DesignFormValues } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
-import { saveDesignAction } from "../actions";
+import type { saveDesignAction } from "../actions";
 import { ArrayStep } from "./array-step";
 import { EquipmentStep } from "./equipment-step";
 import { ReviewPanel } from "./review-panel";
@@ -31,7 +31,7 @@ function isDirty(dirty: unknown, path: string): boolean {
   return Boolean(node);
 }
 
-export function DesignEditor(props: { projectId: string; initialDraft: DesignDraft; initialRevision: number; catalog: EquipmentDto[]; conditions: SiteConditions | null; readOnly: boolean }) {
+export function DesignEditor(props: { projectId: string; initialDraft: DesignDraft; initialRevision: number; catalog: EquipmentDto[]; conditions: SiteConditions | null; readOnly: boolean; save: typeof saveDesignAction }) {
   const { projectId, catalog, conditions, readOnly } = props;
   const form = useForm<DesignFormValues>({ defaultValues: props.initialDraft as DesignFormValues });
   const values = useWatch({ control: form.control });
@@ -58,7 +58,7 @@ export function DesignEditor(props: { projectId: string; initialDraft: DesignDra
     if (readOnly) return;
     pending.current = false;
     setSave({ kind: "saving", text: "Saving…" });
-    const result = await saveDesignAction({ projectId, draft: form.getValues() as Record<string, unknown> });
+    const result = await props.save({ projectId, draft: form.getValues() as Record<string, unknown> });
     if (result.ok) setSave({ kind: "saved", text: `Saved, revision ${result.data.revision}` });
     else setSave({ kind: "error", text: `Not saved: ${result.message} Your input stays on this page.` });
   }

@@ -5,7 +5,7 @@ import { useEffect, useRef } from "react";
 import useSWR from "swr";
 import { PACKET_KINDS } from "@/lib/domain/stored-values";
 import type { PacketDto } from "@/lib/dto/packets";
-import { PacketCard } from "./packet-card";
+import { PacketCard, type PacketActions } from "./packet-card";
 
 async function fetchPackets(url: string): Promise<PacketDto[]> {
   const res = await fetch(url, { cache: "no-store" });
@@ -15,7 +15,7 @@ async function fetchPackets(url: string): Promise<PacketDto[]> {
 }
 
 /** Both packets of a project; polls while a generation is queued or running, often enough to show each step the worker reports. */
-export function PacketBoard({ projectId, initial, canGenerate, reviewStatus }: { projectId: string; initial: PacketDto[]; canGenerate: boolean; reviewStatus: string }) {
+export function PacketBoard({ projectId, initial, canGenerate, reviewStatus, actions }: { projectId: string; initial: PacketDto[]; canGenerate: boolean; reviewStatus: string; actions: PacketActions }) {
   const { data, error, mutate } = useSWR(`/api/v1/projects/${projectId}/packets`, fetchPackets, {
     fallbackData: initial,
     refreshInterval: (latest) => (latest?.some((p) => p.status === "queued" || p.status === "running") ? 400 : 0),
@@ -36,7 +36,7 @@ export function PacketBoard({ projectId, initial, canGenerate, reviewStatus }: {
     <div className="grid gap-6 lg:grid-cols-2">
       {error ? <p role="alert" className="text-sm text-result-fail">{error.message}</p> : null}
       {PACKET_KINDS.map((kind) => (
-        <PacketCard key={kind} projectId={projectId} kind={kind} packets={(data ?? []).filter((p) => p.kind === kind)} canGenerate={canGenerate} reviewStatus={reviewStatus} onChange={() => mutate()} />
+        <PacketCard key={kind} projectId={projectId} kind={kind} packets={(data ?? []).filter((p) => p.kind === kind)} canGenerate={canGenerate} reviewStatus={reviewStatus} onChange={() => mutate()} actions={actions} />
       ))}
     </div>
   );

@@ -6,7 +6,7 @@ import { FormMessage } from "@/components/ui/form-message";
 import type { PacketKind } from "@/lib/domain/stored-values";
 import { PACKET_TITLES } from "@/lib/packets/packet-input";
 import type { PacketDto } from "@/lib/dto/packets";
-import { requestPacketAction, retryPacketAction } from "../actions";
+import type { requestPacketAction, retryPacketAction } from "../actions";
 import { PacketRevision } from "./packet-revision";
 
 const PURPOSE: Record<PacketKind, string> = {
@@ -14,7 +14,10 @@ const PURPOSE: Record<PacketKind, string> = {
   interconnection: "For the utility: application with account and meter, equipment and ratings, single-line diagram, signature blocks. Letter-size forms.",
 };
 
-export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus, onChange }: { projectId: string; kind: PacketKind; packets: PacketDto[]; canGenerate: boolean; reviewStatus: string; onChange: () => void }) {
+/** The page hands down the two generation actions. */
+export type PacketActions = { request: typeof requestPacketAction; retry: typeof retryPacketAction };
+
+export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus, onChange, actions }: { actions: PacketActions;  projectId: string; kind: PacketKind; packets: PacketDto[]; canGenerate: boolean; reviewStatus: string; onChange: () => void }) {
   const [reason, setReason] = useState("");
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
@@ -60,7 +63,7 @@ export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus
         <div className="space-y-2 rounded border border-result-fail/40 p-3 text-sm" data-testid="packet-failed">
           <p className="text-result-fail">Rev {failed.revision} could not be made: {failed.error}</p>
           {canGenerate ? (
-            <Button variant="secondary" disabled={pending} onClick={() => run(() => retryPacketAction({ packetId: failed.id }))}>
+            <Button variant="secondary" disabled={pending} onClick={() => run(() => actions.retry({ packetId: failed.id }))}>
               Retry
             </Button>
           ) : null}
@@ -77,7 +80,7 @@ export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus
               <textarea id={`${kind}-reason`} className="input" rows={2} maxLength={1000} value={reason} onChange={(e) => setReason(e.target.value)} />
             </>
           ) : null}
-          <Button disabled={pending || reviewStatus === "incomplete" || (needsReason && !reason.trim())} onClick={() => run(() => requestPacketAction({ projectId, kind, overrideReason: reason || undefined }))}>
+          <Button disabled={pending || reviewStatus === "incomplete" || (needsReason && !reason.trim())} onClick={() => run(() => actions.request({ projectId, kind, overrideReason: reason || undefined }))}>
             {pending ? "Queueing…" : `Generate Rev ${next}`}
           </Button>
           {reviewStatus === "incomplete" ? <p className="text-xs text-ink-faint">Complete the design first: packets are made from a reviewed design.</p> : null}

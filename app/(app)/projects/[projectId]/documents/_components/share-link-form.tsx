@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { CreateShareLinkInput, SHARE_LINK_DAYS } from "@/lib/schemas/share-link";
-import { createShareLinkAction } from "../share-actions";
+import type { createShareLinkAction } from "../share-actions";
 
 export type ShareableRevision = { packetId: string; label: string };
 
@@ -16,14 +16,14 @@ type Values = { packetIds: string[]; recipientEmail: string; expiresInDays: stri
 const EMPTY: Values = { packetIds: [], recipientEmail: "", expiresInDays: String(SHARE_LINK_DAYS.default), note: "" };
 
 /** Chooses ready revisions and makes a link; the link is shown here once and never again. */
-export function ShareLinkForm({ projectId, revisions, onCreated }: { projectId: string; revisions: ShareableRevision[]; onCreated: () => void }) {
+export function ShareLinkForm({ projectId, revisions, onCreated, create }: { projectId: string; revisions: ShareableRevision[]; onCreated: () => void; create: typeof createShareLinkAction }) {
   // The shared schema checks the form here and again in the action; a refusal keeps what was typed.
   const form = useForm<Values, unknown, CreateShareLinkInput>({ resolver: zodResolver(CreateShareLinkInput) as never, defaultValues: EMPTY });
   const chosen = useWatch({ control: form.control, name: "packetIds" }) ?? [];
   const [created, setCreated] = useState<{ url: string; recipient: string | null }>();
   const { submit, message } = useActionSubmit(
     form,
-    (raw) => createShareLinkAction({ projectId, ...raw, expiresInDays: Number(raw.expiresInDays) }),
+    (raw) => create({ projectId, ...raw, expiresInDays: Number(raw.expiresInDays) }),
     (data) => {
       setCreated({ url: data.url, recipient: data.link.recipientEmail });
       form.reset({ ...EMPTY, expiresInDays: form.getValues("expiresInDays") });

@@ -5,18 +5,18 @@ import { LocalTime } from "@/components/time/local-time";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import type { ShareLinkDto, ShareLinkStatus } from "@/lib/dto/share-links";
-import { revokeShareLinkAction } from "../share-actions";
+import type { revokeShareLinkAction } from "../share-actions";
 
 const STATUS_WORDS: Record<ShareLinkStatus, string> = { active: "Active", expired: "Expired", revoked: "Revoked" };
 const when = (iso: string) => <LocalTime iso={iso} />;
 
 /** The project's links with their state and who opened them. */
-export function ShareLinkList({ links, onChange }: { links: ShareLinkDto[]; onChange: () => void }) {
+export function ShareLinkList({ links, onChange, revokeLink }: { links: ShareLinkDto[]; onChange: () => void; revokeLink: typeof revokeShareLinkAction }) {
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
   const revoke = (shareLinkId: string) =>
     startTransition(async () => {
-      const result = await revokeShareLinkAction({ shareLinkId });
+      const result = await revokeLink({ shareLinkId });
       setMessage(result.ok ? undefined : result.message);
       onChange();
     });

@@ -7,12 +7,12 @@ import { FormMessage } from "@/components/ui/form-message";
 import { feeAmountText } from "@/lib/fees/line-amount";
 import { formatUsd } from "@/lib/fees/money";
 import type { ProjectFeeLineDto } from "@/lib/dto/fees";
-import { payFeesAction } from "../actions";
+import type { payFeesAction } from "../actions";
 
 const STATE_TEXT: Record<ProjectFeeLineDto["state"], string> = { unpaid: "Unpaid", "in-progress": "Payment in progress", paid: "Paid", refunded: "Refunded, unpaid again" };
 
 /** The project's fee lines with their working; unpaid ones can be chosen and paid together. */
-export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId: string; lines: ProjectFeeLineDto[]; canPay: boolean; watchPending: boolean }) {
+export function FeeLines({ projectId, lines, canPay, watchPending, payFees }: { projectId: string; lines: ProjectFeeLineDto[]; canPay: boolean; watchPending: boolean; payFees: typeof payFeesAction }) {
   const router = useRouter();
   const payable = lines.filter((l) => l.payable);
   // What the coordinator ticked or unticked; a line they left alone is chosen while it is owed, so a
@@ -39,7 +39,7 @@ export function FeeLines({ projectId, lines, canPay, watchPending }: { projectId
   function pay() {
     setMessage(undefined);
     startTransition(async () => {
-      const result = await payFeesAction({ projectId, feeKeys: picked.map((l) => l.feeKey) });
+      const result = await payFees({ projectId, feeKeys: picked.map((l) => l.feeKey) });
       if (!result.ok) {
         setMessage(result.message);
         router.refresh();

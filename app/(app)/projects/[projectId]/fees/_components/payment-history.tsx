@@ -4,12 +4,13 @@ import { LocalTime } from "@/components/time/local-time";
 import { formatUsd } from "@/lib/fees/money";
 import type { PaymentDto } from "@/lib/dto/fees";
 import { RefundForm } from "./refund-form";
+import type { refundPaymentAction } from "../actions";
 
 const STATUS_TEXT: Record<PaymentDto["status"], string> = { pending: "Waiting for payment", paid: "Paid", expired: "Not completed", partially_refunded: "Partly refunded", refunded: "Refunded" };
 
 const when = (iso: string) => <LocalTime iso={iso} />;
 
-export function PaymentHistory({ payments, canRefund }: { payments: PaymentDto[]; canRefund: boolean }) {
+export function PaymentHistory({ payments, canRefund, refund }: { payments: PaymentDto[]; canRefund: boolean; refund: typeof refundPaymentAction }) {
   if (payments.length === 0) return null;
   return (
     <section className="panel space-y-3" aria-labelledby="payments-heading">
@@ -51,7 +52,7 @@ export function PaymentHistory({ payments, canRefund }: { payments: PaymentDto[]
                 ))}
               </ul>
             ) : null}
-            {canRefund && (p.status === "paid" || p.status === "partially_refunded") ? <RefundForm payment={p} /> : null}
+            {canRefund && (p.status === "paid" || p.status === "partially_refunded") ? <RefundForm payment={p} refund={refund} /> : null}
           </li>
         ))}
       </ul>

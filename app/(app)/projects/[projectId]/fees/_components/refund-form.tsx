@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { formatUsd, parseUsd } from "@/lib/fees/money";
 import type { PaymentDto } from "@/lib/dto/fees";
-import { refundPaymentAction } from "../actions";
+import type { refundPaymentAction } from "../actions";
 
 type Mode = "fees" | "amount";
 type Errors = Record<string, string[] | undefined>;
@@ -17,7 +17,7 @@ type Errors = Record<string, string[] | undefined>;
  * (the fees stay paid). Nothing is chosen or filled in beforehand, and a dialog naming the amount and the
  * payment asks before anything is sent.
  */
-export function RefundForm({ payment }: { payment: PaymentDto }) {
+export function RefundForm({ payment, refund }: { payment: PaymentDto; refund: typeof refundPaymentAction }) {
   const router = useRouter();
   const id = useId();
   const left = payment.amountCents - payment.refundedCents;
@@ -66,7 +66,7 @@ export function RefundForm({ payment }: { payment: PaymentDto }) {
 
   const send = () =>
     startTransition(async () => {
-      const result = await refundPaymentAction({ paymentId: payment.id, reason, ...(mode === "fees" ? { feeKeys: [...chosen] } : { amount }) });
+      const result = await refund({ paymentId: payment.id, reason, ...(mode === "fees" ? { feeKeys: [...chosen] } : { amount }) });
       setConfirming(null);
       if (!result.ok) {
         setErrors(result.fieldErrors ?? {});

@@ -4,10 +4,10 @@ import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { centsToDollarsText } from "@/lib/fees/money";
-import { setValuationAction } from "../actions";
+import type { setValuationAction } from "../actions";
 
 /** The valuation the owner declared for the work, which percentage fees read. */
-export function ValuationForm({ projectId, valuationCents, canEdit }: { projectId: string; valuationCents: number | null; canEdit: boolean }) {
+export function ValuationForm({ projectId, valuationCents, canEdit, setValuation }: { projectId: string; valuationCents: number | null; canEdit: boolean; setValuation: typeof setValuationAction }) {
   const router = useRouter();
   const [value, setValue] = useState(valuationCents === null ? "" : centsToDollarsText(valuationCents));
   const [error, setError] = useState<string>();
@@ -16,7 +16,7 @@ export function ValuationForm({ projectId, valuationCents, canEdit }: { projectI
     event.preventDefault();
     setError(undefined);
     startTransition(async () => {
-      const result = await setValuationAction({ projectId, valuation: value });
+      const result = await setValuation({ projectId, valuation: value });
       if (!result.ok) setError(result.fieldErrors?.valuation?.[0] ?? result.message);
       else router.refresh();
     });

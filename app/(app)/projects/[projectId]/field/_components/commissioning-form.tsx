@@ -10,7 +10,7 @@ import { checkCommissioning, commissioningComplete, shutdownWindow } from "@/lib
 import { toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
 import { formatInZone } from "@/lib/domain/time-zones";
 import type { CommissioningReadings } from "@/lib/schemas/commissioning";
-import { saveCommissioningAction } from "../actions";
+import type { saveCommissioningAction } from "../actions";
 import { BeforeEnergizingStep } from "./before-energizing-step";
 import { liveReadings, toFormValues, toReadingsInput, type FormValues } from "./form-values";
 import { GridProfileStep } from "./grid-profile-step";
@@ -26,7 +26,7 @@ function savedText(updatedAt: string | null, timeZone: string) {
   return updatedAt ? `Saved ${formatInZone(updatedAt, timeZone, "time")}` : "Not saved yet";
 }
 
-export function CommissioningForm(props: { projectId: string; facts: CommissioningFacts; initialReadings: CommissioningReadings; initialStatus: "open" | "complete"; initialUpdatedAt: string | null; readOnly: boolean }) {
+export function CommissioningForm(props: { projectId: string; facts: CommissioningFacts; initialReadings: CommissioningReadings; initialStatus: "open" | "complete"; initialUpdatedAt: string | null; readOnly: boolean; save: typeof saveCommissioningAction }) {
   const { projectId, facts, readOnly } = props;
   const form = useForm<FormValues>({ defaultValues: toFormValues(props.initialReadings, facts.acceptedGridProfiles) });
   const values = useWatch({ control: form.control }) as FormValues;
@@ -51,7 +51,7 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
     typed.current = false;
     setSave({ kind: "saving", text: "Saving…" });
     const mine = ++latest.current;
-    const result = await saveCommissioningAction({ projectId, readings: toReadingsInput(form.getValues()), complete });
+    const result = await props.save({ projectId, readings: toReadingsInput(form.getValues()), complete });
     if (mine !== latest.current) return;
     if (!result.ok) {
       setSave({ kind: "error", text: `Not saved: ${result.message} Your readings stay on this page.` });
