@@ -1,0 +1,4 @@
+export * from "./statuses";
+export * from "./transitions";
+export * from "./stage-from-facts";
+export * from "./waiting-on";
