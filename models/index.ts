@@ -3,7 +3,11 @@ import { ApiToken } from "./api-token";
 import { AuditEvent } from "./audit-event";
 import { CommissioningRecord } from "./commissioning-record";
 import { Design } from "./design";
+import { CorrectionRound } from "./correction-round";
 import { Equipment } from "./equipment";
+import { Filing } from "./filing";
+import { FilingItem } from "./filing-item";
+import { Inspection } from "./inspection";
 import { FeeSchedule } from "./fee-schedule";
 import { Invitation } from "./invitation";
 import { Jurisdiction } from "./jurisdiction";
@@ -32,6 +36,7 @@ export { ShareLink, ShareLinkAccess, ShareLinkMiss, ShareLinkPacket };
 export { OutboxMessage };
 export { CommissioningRecord, ProjectFile, StorageRemoval };
 export { FeeSchedule, Payment, PaymentLine, ProcessorEvent, Refund };
+export { CorrectionRound, Filing, FilingItem, Inspection };
 
 let initialized: Sequelize | null = null;
 
@@ -67,4 +72,11 @@ export function initModels(sequelize: Sequelize) {
   Payment.hasMany(Refund, { as: "refunds", foreignKey: "paymentId" });
   Payment.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
   Refund.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
+  for (const model of [Filing, CorrectionRound, Inspection, FilingItem]) model.initModel(sequelize);
+  Filing.belongsTo(Packet, { as: "packet", foreignKey: "packetId" });
+  Filing.hasMany(CorrectionRound, { as: "rounds", foreignKey: "filingId" });
+  Filing.hasMany(Inspection, { as: "inspections", foreignKey: "filingId" });
+  CorrectionRound.hasMany(FilingItem, { as: "items", foreignKey: "roundId" });
+  Inspection.hasMany(FilingItem, { as: "items", foreignKey: "inspectionId" });
+  Project.hasMany(Filing, { as: "filings", foreignKey: "projectId" });
 }

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
-import type { NecEdition } from "@/lib/domain/stored-values";
+import type { InspectionKind, NecEdition } from "@/lib/domain/stored-values";
 
 /** An authority having jurisdiction (AHJ) and the site data its reviews need. */
 export class Jurisdiction extends Model<InferAttributes<Jurisdiction>, InferCreationAttributes<Jurisdiction>> {
@@ -11,6 +11,9 @@ export class Jurisdiction extends Model<InferAttributes<Jurisdiction>, InferCrea
   declare recordLowTempC: number;
   declare highDesignTempC: number;
   declare notes: string;
+  declare reviewDays: CreationOptional<number>;
+  declare permitValidDays: CreationOptional<number>;
+  declare requiredInspections: CreationOptional<InspectionKind[]>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -25,6 +28,9 @@ export class Jurisdiction extends Model<InferAttributes<Jurisdiction>, InferCrea
         recordLowTempC: { type: DataTypes.DOUBLE, allowNull: false },
         highDesignTempC: { type: DataTypes.DOUBLE, allowNull: false },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
+        reviewDays: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 10 },
+        permitValidDays: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 180 },
+        requiredInspections: { type: DataTypes.JSONB, allowNull: false, defaultValue: ["final"] },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
-import type { Stage } from "@/lib/domain/stored-values";
+import type { FilingStatus, HoldState, Stage, WaitingParty } from "@/lib/domain/stored-values";
 import type { Jurisdiction } from "./jurisdiction";
 import type { Utility } from "./utility";
 import type { Design } from "./design";
@@ -29,6 +29,16 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
   declare coordinatorId: string | null;
   declare installerId: string | null;
   declare declaredValuationCents: CreationOptional<number | null>;
+  /** The stage last set by hand; it stands until the facts of the filings pass it. */
+  declare handStage: CreationOptional<Stage | null>;
+  declare holdState: CreationOptional<HoldState | null>;
+  declare holdReason: CreationOptional<string>;
+  declare holdSince: CreationOptional<Date | null>;
+  // Kept from the filings on every change to them, so the projects list filters on columns.
+  declare waitingOn: CreationOptional<WaitingParty | null>;
+  declare waitingSince: CreationOptional<Date | null>;
+  declare permitStatus: CreationOptional<FilingStatus | null>;
+  declare interconnectionStatus: CreationOptional<FilingStatus | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -72,6 +82,14 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
             return v === null || v === undefined ? null : Number(v);
           },
         },
+        handStage: { type: DataTypes.STRING(30), allowNull: true },
+        holdState: { type: DataTypes.STRING(20), allowNull: true },
+        holdReason: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
+        holdSince: { type: DataTypes.DATE, allowNull: true },
+        waitingOn: { type: DataTypes.STRING(20), allowNull: true, defaultValue: "office" },
+        waitingSince: { type: DataTypes.DATE, allowNull: true, defaultValue: DataTypes.NOW },
+        permitStatus: { type: DataTypes.STRING(30), allowNull: true },
+        interconnectionStatus: { type: DataTypes.STRING(30), allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

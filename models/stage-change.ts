@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
-import type { Stage } from "@/lib/domain/stored-values";
+import type { Stage, StageChangeCause } from "@/lib/domain/stored-values";
 import type { User } from "./user";
 
 export class StageChange extends Model<InferAttributes<StageChange>, InferCreationAttributes<StageChange>> {
@@ -10,6 +10,7 @@ export class StageChange extends Model<InferAttributes<StageChange>, InferCreati
   declare toStage: Stage;
   declare changedById: string | null;
   declare note: string;
+  declare cause: CreationOptional<StageChangeCause>;
   declare createdAt: CreationOptional<Date>;
 
   declare changedBy?: NonAttribute<User | null>;
@@ -24,6 +25,7 @@ export class StageChange extends Model<InferAttributes<StageChange>, InferCreati
         toStage: { type: DataTypes.STRING(30), allowNull: false },
         changedById: { type: DataTypes.UUID, allowNull: true },
         note: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
+        cause: { type: DataTypes.STRING(10), allowNull: false, defaultValue: "hand" },
         createdAt: DataTypes.DATE,
       },
       { sequelize, modelName: "StageChange", tableName: "stage_changes", underscored: true, updatedAt: false },

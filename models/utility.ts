@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import type { InspectionKind } from "@/lib/domain/stored-values";
 
 /** An electric utility the organization files interconnection applications with. */
 export class Utility extends Model<InferAttributes<Utility>, InferCreationAttributes<Utility>> {
@@ -9,6 +10,8 @@ export class Utility extends Model<InferAttributes<Utility>, InferCreationAttrib
   // The grid profiles the utility accepts at commissioning, each as the utility words it.
   declare acceptedGridProfiles: CreationOptional<string[]>;
   declare notes: string;
+  declare reviewDays: CreationOptional<number>;
+  declare requiredInspections: CreationOptional<InspectionKind[]>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -21,6 +24,8 @@ export class Utility extends Model<InferAttributes<Utility>, InferCreationAttrib
         serviceVoltages: { type: DataTypes.ARRAY(DataTypes.STRING(40)), allowNull: false, defaultValue: [] },
         acceptedGridProfiles: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
+        reviewDays: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 15 },
+        requiredInspections: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

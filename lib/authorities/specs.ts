@@ -1,4 +1,5 @@
 import type { AuthorityKind } from "@/lib/domain/authorities";
+import { INSPECTION_KIND_LABELS, INSPECTION_KINDS_BY_FILING } from "@/lib/domain/filings";
 import { NEC_EDITIONS } from "@/lib/engineering/types";
 import { JurisdictionInput, UtilityInput } from "@/lib/schemas/reference-data";
 
@@ -10,7 +11,7 @@ import { JurisdictionInput, UtilityInput } from "@/lib/schemas/reference-data";
 export type AuthorityField = {
   name: string;
   label: string;
-  input: "text" | "lines" | "note" | "select";
+  input: "text" | "lines" | "note" | "select" | "checks";
   hint?: string;
   options?: readonly { value: string; label: string }[];
   /** Grid row the field sits in, so short fields share a line. */
@@ -26,10 +27,14 @@ export type AuthorityKindSpec = {
   noun: string;
   path: string;
   schema: typeof JurisdictionInput | typeof UtilityInput;
-  empty: Record<string, string>;
+  empty: Record<string, string | string[]>;
   fields: readonly AuthorityField[];
   columns: readonly AuthorityColumn[];
 };
+
+function inspectionOptions(filing: "permit" | "interconnection") {
+  return INSPECTION_KINDS_BY_FILING[filing].map((kind) => ({ value: kind, label: INSPECTION_KIND_LABELS[kind] }));
+}
 
 export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
   jurisdiction: {
@@ -38,14 +43,17 @@ export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
     noun: "jurisdiction",
     path: "/settings/jurisdictions",
     schema: JurisdictionInput,
-    empty: { name: "", state: "", necEdition: "2023", recordLowTempC: "", highDesignTempC: "", notes: "" },
+    empty: { name: "", state: "", necEdition: "2023", recordLowTempC: "", highDesignTempC: "", reviewDays: "10", permitValidDays: "180", requiredInspections: ["final"], notes: "" },
     fields: [
       { name: "name", label: "Authority", input: "text", row: 1 },
       { name: "state", label: "State", input: "text", row: 1 },
       { name: "necEdition", label: "Adopted NEC edition", input: "select", options: NEC_EDITIONS.map((e) => ({ value: String(e), label: `NEC ${e}` })), row: 1 },
       { name: "recordLowTempC", label: "Record low (°C)", input: "text", hint: "ASHRAE extreme annual mean minimum design dry-bulb", row: 2 },
       { name: "highDesignTempC", label: "High design temperature (°C)", input: "text", hint: "Hot-day air temperature for the string voltage and ampacity checks", row: 2 },
-      { name: "notes", label: "Notes", input: "note", row: 3 },
+      { name: "reviewDays", label: "Usual plan review (days)", input: "text", hint: "Sets a filing's first follow-up date", row: 3 },
+      { name: "permitValidDays", label: "Permit valid for (days)", input: "text", hint: "Without an inspection, from the day it is issued", row: 3 },
+      { name: "requiredInspections", label: "Inspections it requires", input: "checks", options: inspectionOptions("permit"), row: 3 },
+      { name: "notes", label: "Notes", input: "note", row: 4 },
     ],
     columns: [
       { label: "Authority", show: "text", key: "name" },
@@ -53,6 +61,7 @@ export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
       { label: "NEC edition", show: "measure", key: "necEdition" },
       { label: "Record low", show: "measure", key: "recordLowTempC", unit: "°C" },
       { label: "High design", show: "measure", key: "highDesignTempC", unit: "°C" },
+      { label: "Usual review", show: "measure", key: "reviewDays", unit: "days" },
       { label: "Notes", show: "text", key: "notes" },
     ],
   },
@@ -62,7 +71,7 @@ export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
     noun: "utility",
     path: "/settings/utilities",
     schema: UtilityInput,
-    empty: { name: "", serviceVoltages: "", acceptedGridProfiles: "", notes: "" },
+    empty: { name: "", serviceVoltages: "", acceptedGridProfiles: "", reviewDays: "15", requiredInspections: [], notes: "" },
     fields: [
       { name: "name", label: "Utility", input: "text", row: 1 },
       { name: "serviceVoltages", label: "Service voltages", input: "lines", hint: "One per line, e.g. 120/240 V split-phase", row: 1 },
@@ -73,22 +82,26 @@ export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
         hint: "One per line, as the utility words each, e.g. IEEE 1547-2018 Category B, utility's default settings. The crew chooses from these on site.",
         row: 2,
       },
-      { name: "notes", label: "Notes", input: "note", row: 3 },
+      { name: "reviewDays", label: "Usual application review (days)", input: "text", hint: "Sets a filing's first follow-up date", row: 3 },
+      { name: "requiredInspections", label: "Visits it requires", input: "checks", options: inspectionOptions("interconnection"), row: 3 },
+      { name: "notes", label: "Notes", input: "note", row: 4 },
     ],
     columns: [
       { label: "Utility", show: "text", key: "name" },
       { label: "Service voltages", show: "list", key: "serviceVoltages" },
       { label: "Accepted grid profiles", show: "list", key: "acceptedGridProfiles" },
+      { label: "Usual review", show: "measure", key: "reviewDays", unit: "days" },
       { label: "Notes", show: "text", key: "notes" },
     ],
   },
 };
 
-/** A stored record as its form edits it: lists one per line, numbers as text. */
-export function authorityFormValues(kind: AuthorityKind, record: Record<string, unknown>): Record<string, string> {
+/** A stored record as its form edits it: lists one per line (or ticked boxes), numbers as text. */
+export function authorityFormValues(kind: AuthorityKind, record: Record<string, unknown>): Record<string, string | string[]> {
   return Object.fromEntries(
     AUTHORITY_SPECS[kind].fields.map((f) => {
       const value = record[f.name];
+      if (f.input === "checks") return [f.name, Array.isArray(value) ? value.map(String) : []];
       return [f.name, Array.isArray(value) ? value.join("\n") : value === null || value === undefined ? "" : String(value)];
     }),
   );

@@ -26,11 +26,12 @@ export type Permission =
   | "field:record"
   | "fees:pay"
   | "fees:refund"
+  | "filings:edit"
   | "organization:edit";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
-  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage", "field:record", "fees:pay", "fees:refund", "organization:edit"],
-  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "design:review", "field:record", "fees:pay"],
+  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage", "field:record", "fees:pay", "fees:refund", "filings:edit", "organization:edit"],
+  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "design:review", "field:record", "fees:pay", "filings:edit"],
   installer: ["project:view", "design:review", "field:record"],
 };
 

@@ -6,6 +6,7 @@ export type { Role } from "./roles";
 export type { Stage } from "./stages";
 export type { NecEdition } from "@/lib/engineering/types";
 export type { FeeAuthorityKind } from "@/lib/fees/types";
+export type { AuthorityKind } from "./authorities";
 
 export const EQUIPMENT_KINDS = ["module", "inverter", "device"] as const;
 export type EquipmentKind = (typeof EQUIPMENT_KINDS)[number];
@@ -38,3 +39,9 @@ export type ShareLinkAccessKind = "view" | "download";
 
 /** An audit event's before/after pairs, by field. */
 export type AuditChanges = Record<string, { before: unknown; after: unknown }>;
+
+export type { FilingKind, FilingStatus, SubmissionChannel, InspectionKind, InspectionResult, WaitingParty } from "./filings";
+/** A project set aside: on hold (it comes back) or cancelled (with a reason). */
+export type HoldState = "on_hold" | "cancelled";
+/** Whether a stage change came from the office's hand or from the facts of the filings. */
+export type StageChangeCause = "hand" | "facts";

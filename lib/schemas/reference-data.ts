@@ -1,6 +1,17 @@
 import { z } from "zod";
+import { INSPECTION_KINDS_BY_FILING } from "@/lib/domain/filings";
 import { NEC_EDITIONS } from "@/lib/engineering/types";
-import { numberField, optionalText, requiredText, safeString, toNumber, whenValid } from "./fields";
+import { numberField, optionalNumberField, optionalText, requiredText, safeString, toNumber, whenValid } from "./fields";
+
+/**
+ * The inspections an authority requires, from a group of check boxes (nothing ticked arrives as false) or a
+ * list; left out, the usual ones.
+ */
+const requiredInspections = <K extends readonly [string, ...string[]]>(kinds: K, usual: K[number][]) =>
+  z.preprocess((v) => (v === undefined ? usual : v === false || v === null ? [] : typeof v === "string" ? [v] : v), z.array(z.enum(kinds, { error: "Choose from the inspections listed" })).transform((list) => [...new Set(list)]));
+
+/** Days an authority usually takes to answer; left out, the given default. */
+const days = (label: string, range: { min: number; max: number }, usual: number) => optionalNumberField(label, { ...range, unit: "days" }).transform((v) => v ?? usual);
 
 export const JurisdictionInput = z
   .object({
@@ -10,6 +21,9 @@ export const JurisdictionInput = z
     // ASHRAE extreme annual mean minimum design dry-bulb temperature of the nearest station.
     recordLowTempC: numberField("Record low", { min: -60, max: 20, unit: "°C" }),
     highDesignTempC: numberField("High design temperature", { min: 10, max: 60, unit: "°C" }),
+    reviewDays: days("Usual review time", { min: 1, max: 365 }, 10),
+    permitValidDays: days("Permit validity", { min: 30, max: 1095 }, 180),
+    requiredInspections: requiredInspections(INSPECTION_KINDS_BY_FILING.permit, ["final"]),
     notes: optionalText(2000),
   })
   .refine((j) => j.recordLowTempC < j.highDesignTempC, {
@@ -42,6 +56,8 @@ export const UtilityInput = z.object({
   name: requiredText("utility's name", 160),
   serviceVoltages,
   acceptedGridProfiles,
+  reviewDays: days("Usual review time", { min: 1, max: 365 }, 15),
+  requiredInspections: requiredInspections(INSPECTION_KINDS_BY_FILING.interconnection, []),
   notes: optionalText(2000),
 });
 export type UtilityInput = z.input<typeof UtilityInput>;

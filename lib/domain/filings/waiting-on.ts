@@ -1,3 +1,4 @@
+import type { InspectionResult } from "./inspections";
 import { WITH_THE_AUTHORITY, type FilingKind, type FilingStatus } from "./statuses";
 
 export const WAITING_PARTIES = ["office", "ahj", "utility", "customer", "crew"] as const;
@@ -14,7 +15,7 @@ export const WAITING_PARTY_LABELS: Record<WaitingParty, string> = {
 export type AuthorityParty = "ahj" | "utility" | "other";
 
 /** An inspection, witness test or meter set as the waiting-on rules read it. */
-export type InspectionFacts = { scheduledFor: string | null; result: "passed" | "failed" | "partial" | "cancelled" | null; recordedAt: string | null };
+export type InspectionFacts = { scheduledFor: string | null; result: InspectionResult | null; recordedAt: string | null };
 
 /** A filing as the waiting-on rules read it. `since` is when it entered its status. */
 export type WaitingFiling = {

@@ -13,8 +13,19 @@ import { isUuid } from "./ids";
 // The authorities a project answers to (AHJs and utilities), kept, listed and changed the same way;
 // what differs per kind is its model, its fields and its words (lib/authorities/specs.ts).
 
-export type JurisdictionDto = { id: string; name: string; state: string; necEdition: number; recordLowTempC: number; highDesignTempC: number; notes: string };
-export type UtilityDto = { id: string; name: string; serviceVoltages: string[]; acceptedGridProfiles: string[]; notes: string };
+export type JurisdictionDto = {
+  id: string;
+  name: string;
+  state: string;
+  necEdition: number;
+  recordLowTempC: number;
+  highDesignTempC: number;
+  reviewDays: number;
+  permitValidDays: number;
+  requiredInspections: string[];
+  notes: string;
+};
+export type UtilityDto = { id: string; name: string; serviceVoltages: string[]; acceptedGridProfiles: string[]; reviewDays: number; requiredInspections: string[]; notes: string };
 export type AuthorityDto<K extends AuthorityKind> = K extends "jurisdiction" ? JurisdictionDto : UtilityDto;
 export type AuthorityValues<K extends AuthorityKind> = K extends "jurisdiction" ? JurisdictionValues : UtilityValues;
 
@@ -32,8 +43,8 @@ const STORES: Record<AuthorityKind, KindStore> = {
     list: (organizationId) => Jurisdiction.findAll({ where: { organizationId }, order: [["name", "ASC"]] }),
     create: (values, transaction) => Jurisdiction.create(values as never, { transaction }),
     toDto: (row) => {
-      const { id, name, state, necEdition, recordLowTempC, highDesignTempC, notes } = row as Jurisdiction;
-      return { id, name, state, necEdition, recordLowTempC, highDesignTempC, notes };
+      const { id, name, state, necEdition, recordLowTempC, highDesignTempC, reviewDays, permitValidDays, requiredInspections, notes } = row as Jurisdiction;
+      return { id, name, state, necEdition, recordLowTempC, highDesignTempC, reviewDays, permitValidDays, requiredInspections, notes };
     },
   },
   utility: {
@@ -41,8 +52,8 @@ const STORES: Record<AuthorityKind, KindStore> = {
     list: (organizationId) => Utility.findAll({ where: { organizationId }, order: [["name", "ASC"]] }),
     create: (values, transaction) => Utility.create(values as never, { transaction }),
     toDto: (row) => {
-      const { id, name, serviceVoltages, acceptedGridProfiles, notes } = row as Utility;
-      return { id, name, serviceVoltages, acceptedGridProfiles, notes };
+      const { id, name, serviceVoltages, acceptedGridProfiles, reviewDays, requiredInspections, notes } = row as Utility;
+      return { id, name, serviceVoltages, acceptedGridProfiles, reviewDays, requiredInspections, notes };
     },
   },
 };
@@ -74,9 +85,9 @@ export async function saveAuthority<K extends AuthorityKind>({ viewer, kind, aut
   if (!can(viewer, "reference:edit")) throw new AppError("FORBIDDEN", "Only admins can change jurisdictions and utilities.");
   const store = STORES[kind];
   const row = await writeWithAudit({ viewer, action: `${kind}.${authorityId ? "updated" : "created"}`, entityType: kind }, async (transaction) => {
-    if (!authorityId) return { row: await store.create({ organizationId: viewer.organizationId, ...values }, transaction), changes: diffFields({}, values) };
+    if (!authorityId) return { row: await store.create({ organizationId: viewer.organizationId, ...values }, transaction), changes: diffFields<Record<string, unknown>>({}, values) };
     const found = await findOwn(kind, viewer, authorityId, transaction);
-    const changes = diffFields(store.toDto(found), values);
+    const changes = diffFields<Record<string, unknown>>(store.toDto(found), values);
     return { row: await (found as Jurisdiction).update(values as never, { transaction }), changes };
   });
   return store.toDto(row) as AuthorityDto<K>;

@@ -46,6 +46,7 @@ export const ROUTES: Record<string, Entry> = {
   "GET /api/v1/projects/:projectId": { scope: "project", roles: ALL, url: project },
   "PUT /api/v1/projects/:projectId": { scope: "project", roles: OFFICE, url: project, body: (t) => ({ ...t.bodies.project, customerName: "Taken over" }) },
   "POST /api/v1/projects/:projectId/stage": { scope: "project", roles: OFFICE, url: (t) => `${project(t)}/stage`, body: () => ({ toStage: "closed", note: "not yours" }) },
+  "GET /api/v1/projects/:projectId/filings": { scope: "project", roles: ALL, url: (t) => `${project(t)}/filings` },
   "GET /api/v1/projects/:projectId/design": { scope: "project", roles: ALL, url: (t) => `${project(t)}/design` },
   "PUT /api/v1/projects/:projectId/design": { scope: "project", roles: OFFICE, url: (t) => `${project(t)}/design`, body: (t) => t.bodies.draft },
   "GET /api/v1/projects/:projectId/design-document": { scope: "project", roles: ALL, url: (t) => `${project(t)}/design-document` },

@@ -30,6 +30,9 @@ describe("can", () => {
     ["admin", "fees:pay", true],
     ["coordinator", "fees:pay", true],
     ["installer", "fees:pay", false],
+    ["admin", "filings:edit", true],
+    ["coordinator", "filings:edit", true],
+    ["installer", "filings:edit", false],
     ["admin", "fees:refund", true],
     ["coordinator", "fees:refund", false],
     ["installer", "fees:refund", false],
@@ -61,6 +64,6 @@ describe("can", () => {
 
   it("gives API tokens no write, payment or field permission", () => {
     const token = { ...viewer("admin"), apiTokenId: "t1" };
-    for (const permission of ["field:record", "fees:pay", "fees:refund", "organization:edit", "project:edit"] as const) expect(can(token, permission)).toBe(false);
+    for (const permission of ["field:record", "fees:pay", "fees:refund", "filings:edit", "organization:edit", "project:edit"] as const) expect(can(token, permission)).toBe(false);
   });
 });

@@ -8,7 +8,7 @@ const jurisdiction = { name: "Town of Fenmoor Permits", state: "co", necEdition:
 
 describe("JurisdictionInput", () => {
   it("reads form strings", () => {
-    expect(JurisdictionInput.parse(jurisdiction)).toEqual({ name: "Town of Fenmoor Permits", state: "CO", necEdition: 2020, recordLowTempC: -21, highDesignTempC: 33, notes: "" });
+    expect(JurisdictionInput.parse(jurisdiction)).toEqual({ name: "Town of Fenmoor Permits", state: "CO", necEdition: 2020, recordLowTempC: -21, highDesignTempC: 33, reviewDays: 10, permitValidDays: 180, requiredInspections: ["final"], notes: "" });
   });
 
   it.each([
@@ -18,6 +18,9 @@ describe("JurisdictionInput", () => {
     [{ recordLowTempC: "" }, "recordLowTempC", "Record low is required"],
     [{ recordLowTempC: "-80" }, "recordLowTempC", "Record low must be between -60 and 20 °C"],
     [{ recordLowTempC: "15", highDesignTempC: "12" }, "highDesignTempC", "The high design temperature must be above the record low"],
+    [{ reviewDays: "0" }, "reviewDays", "Usual review time must be between 1 and 365 days"],
+    [{ permitValidDays: "ten" }, "permitValidDays", "Permit validity must be a number"],
+    [{ requiredInspections: ["meter_set"] }, "requiredInspections.0", "Choose from the inspections listed"],
   ])("refuses %j with a readable message", (patch, path, message) => {
     expect(messages(JurisdictionInput.safeParse({ ...jurisdiction, ...patch }))[path]).toBe(message);
   });
@@ -26,8 +29,17 @@ describe("JurisdictionInput", () => {
 describe("UtilityInput", () => {
   it("takes service voltages one per line from a form and as a list from the API", () => {
     const fromForm = UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: "120/240 V split-phase\n\n 120/208 V three-phase \n" });
-    expect(fromForm).toEqual({ name: "Fenmoor Power", serviceVoltages: ["120/240 V split-phase", "120/208 V three-phase"], acceptedGridProfiles: [], notes: "" });
+    expect(fromForm).toEqual({ name: "Fenmoor Power", serviceVoltages: ["120/240 V split-phase", "120/208 V three-phase"], acceptedGridProfiles: [], reviewDays: 15, requiredInspections: [], notes: "" });
     expect(UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: ["120/240 V"], acceptedGridProfiles: ["IEEE 1547-2018 Category B"] }).acceptedGridProfiles).toEqual(["IEEE 1547-2018 Category B"]);
+  });
+
+  it("reads the required visits from ticked boxes: none ticked is none, left out is the usual", () => {
+    const base = { name: "Fenmoor Power", serviceVoltages: "120/240 V" };
+    expect(UtilityInput.parse({ ...base, requiredInspections: false }).requiredInspections).toEqual([]);
+    expect(UtilityInput.parse({ ...base, requiredInspections: "meter_set" }).requiredInspections).toEqual(["meter_set"]);
+    expect(UtilityInput.parse({ ...base, requiredInspections: ["witness_test", "meter_set", "meter_set"] }).requiredInspections).toEqual(["witness_test", "meter_set"]);
+    expect(JurisdictionInput.parse({ ...jurisdiction, requiredInspections: false }).requiredInspections).toEqual([]);
+    expect(JurisdictionInput.parse({ ...jurisdiction, reviewDays: "21" }).reviewDays).toBe(21);
   });
 
   it("takes accepted grid profiles one per line from a form, blank lines and repeats dropped", () => {

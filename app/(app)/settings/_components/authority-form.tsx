@@ -11,7 +11,7 @@ import { AUTHORITY_SPECS, type AuthorityField } from "@/lib/authorities/specs";
 import type { AuthorityKind } from "@/lib/domain/authorities";
 import type { ActionResult } from "@/lib/dto/action-result";
 
-type Values = Record<string, string>;
+type Values = Record<string, string | string[]>;
 type Save = (input: { kind: AuthorityKind; authorityId?: string; values: Values }) => Promise<ActionResult<{ id: string }>>;
 
 const ROW_GRID: Record<string, string> = { "3": "sm:grid-cols-[2fr_5rem_1fr]", "2": "sm:grid-cols-2", "1": "" };
@@ -43,6 +43,17 @@ export function AuthorityForm({ kind, authorityId, initial, save }: { kind: Auth
             </option>
           ))}
         </select>
+      );
+    if (f.input === "checks")
+      return (
+        <span className="flex flex-wrap gap-x-4 gap-y-1 pt-2" role="group" aria-label={f.label}>
+          {f.options!.map((o, i) => (
+            <label key={o.value} className="inline-flex items-center gap-2 text-sm">
+              <input type="checkbox" value={o.value} id={i === 0 ? id(f) : `${id(f)}-${o.value}`} {...form.register(f.name)} />
+              {o.label}
+            </label>
+          ))}
+        </span>
       );
     if (f.input === "lines") return <textarea rows={f.row === 1 ? 2 : 3} {...common} />;
     if (f.input === "note") return <textarea rows={2} {...common} />;
