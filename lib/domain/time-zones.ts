@@ -44,3 +44,8 @@ export type TimeStyle = keyof typeof STYLES;
 export function formatInZone(iso: string, timeZone: string, style: TimeStyle = "datetime"): string {
   return new Intl.DateTimeFormat("en-US", { ...STYLES[style], timeZone }).format(new Date(iso));
 }
+
+/** "Mar 2, 2026" for a calendar day (YYYY-MM-DD) that is already the organization's own: no zone to apply. */
+export function calendarDayText(day: string): string {
+  return new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeZone: "UTC" }).format(new Date(`${day}T12:00:00Z`));
+}
