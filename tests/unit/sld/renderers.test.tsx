@@ -3,8 +3,8 @@ import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, test } from "vitest";
 import { SingleLineSvg } from "@/components/sld/single-line-svg";
 import { layoutSingleLine } from "@/lib/sld";
-import { registerPdfFonts } from "@/templates/pdf/fonts";
-import { PdfSingleLine } from "@/templates/pdf/single-line";
+import { registerPdfFonts } from "@/templates/pdf/shared/fonts";
+import { PdfSingleLine } from "@/templates/pdf/shared/single-line";
 import { microFixture, optimizerFixture, stringFixture } from "./sld-designs";
 
 describe("single-line renderers", () => {

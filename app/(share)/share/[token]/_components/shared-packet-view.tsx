@@ -1,6 +1,6 @@
 import { SingleLineSvg } from "@/components/sld/single-line-svg";
 import { formatInZone } from "@/lib/domain/time-zones";
-import { formatNumber, inverterCounts, siteAddress } from "@/lib/packets/pdf-facts";
+import { formatNumber, inverterCounts, siteAddress } from "@/lib/documents/packets/facts";
 import type { SharedView } from "@/lib/server/data/share-links";
 import { layoutSingleLine } from "@/lib/sld";
 
