@@ -1,4 +1,3 @@
-import { localDateTime } from "@/lib/domain/time-zones";
 import {
   DEFAULT_SHUTDOWN_V_PER_DEVICE,
   FIRST_POWER_MAX_FRACTION,
@@ -14,9 +13,9 @@ import {
   type CommissioningKind,
   type CommissioningRecord,
 } from "@/lib/engineering";
-import type { CommissioningDocumentInput, CommissioningDocumentKind } from "@/lib/documents/commissioning/input";
+import type { CommissioningDocumentInput, CommissioningDocumentKind } from "./input";
 import { openCountsInWords } from "@/lib/field/completion-words";
-import { formatNumber, formatQuantity } from "@/lib/documents/packets/facts";
+import { documentDate, documentTime, formatNumber, formatQuantity } from "../text";
 
 // The words and figures the certificate of completion and the commissioning report print,
 // computed from the document input so the templates only lay them out and the tests can
@@ -39,11 +38,6 @@ export const COMMISSIONING_CAUTIONS: readonly string[] = [
 export const COMMISSIONING_BAND_CAUTION =
   "Caution: PV conductors are energized whenever light reaches the modules, and inverter capacitors hold a charge after shutdown. Qualified persons only; follow the manufacturers' instructions " +
   "and the NEC edition and local amendments the AHJ enforces.";
-
-/** An ISO time as a local date and 24-hour time in the organization's zone, e.g. "2026-11-20 09:30 MST". */
-export function documentTime(iso: string, timeZone: string): string {
-  return localDateTime(iso, timeZone);
-}
 
 export function commissioningProjectLabel(input: CommissioningDocumentInput): string {
   return `Project ${input.project.number} · ${input.project.customerName}`;
@@ -323,3 +317,61 @@ export function certificateReadings(input: CommissioningDocumentInput): { label:
   });
   return lines;
 }
+
+/** The statement the installer signs on the certificate, in full. */
+export function installerStatement(input: CommissioningDocumentInput): string {
+  const ahj = input.project.jurisdictionName ?? "the authority having jurisdiction";
+  const utility = input.project.utilityName ?? "the utility";
+  return (
+    `I state that the grid-tied PV system described above was installed and commissioned according to the approved design, ` +
+    `the NEC ${input.record.edition} with the local amendments enforced by ${ahj}, and the manufacturers' installation instructions; ` +
+    `that the commissioning readings were taken by me or under my direct supervision and are truly recorded in the commissioning report; ` +
+    `and that the system will not run in parallel with the grid until ${utility} grants permission to operate, apart from tests it allows.`
+  );
+}
+
+/** Everything the certificate's and the report's layouts print beyond the input's own text, as printed. */
+export type CommissioningFacts = {
+  title: string;
+  projectLabel: string;
+  printedDate: string;
+  cautions: readonly string[];
+  bandCaution: string;
+  summary: CompletionSummary;
+  ratings: { dc: string; ac: string };
+  /** The report's readings table. */
+  rows: ReadingRow[];
+  /** The certificate's key readings, in one paragraph. */
+  readings: { label: string; value: string }[];
+  lastRecorded: string;
+  markedComplete: string;
+  /** The certificate's line under the result. */
+  certificateFootnote: string;
+  installerStatement: string;
+};
+
+/** The printed facts of a commissioning document, from its (printable) input. */
+export function commissioningFacts(input: CommissioningDocumentInput): CommissioningFacts {
+  const zone = input.organization.timeZone;
+  const summary = completionSummary(input);
+  return {
+    title: COMMISSIONING_TITLES[input.kind],
+    projectLabel: commissioningProjectLabel(input),
+    printedDate: documentDate(input.generatedAt, zone),
+    cautions: COMMISSIONING_CAUTIONS,
+    bandCaution: COMMISSIONING_BAND_CAUTION,
+    summary,
+    ratings: systemRatingText(input),
+    rows: readingRows(input),
+    readings: certificateReadings(input),
+    lastRecorded: input.recordUpdatedAt ? documentTime(input.recordUpdatedAt, zone) : "Nothing recorded yet",
+    markedComplete: input.completedAt ? documentTime(input.completedAt, zone) : "Not yet",
+    certificateFootnote: summary.complete
+      ? `Marked complete ${input.completedAt ? documentTime(input.completedAt, zone) : "(time not recorded)"}; the readings are in the commissioning report.`
+      : "Do not sign until every reading is recorded and none fails; the commissioning report says what to do for each.",
+    installerStatement: installerStatement(input),
+  };
+}
+
+/** A commissioning document's input with its printed facts: what the layouts receive. */
+export type PrintedCommissioning = CommissioningDocumentInput & { facts: CommissioningFacts };

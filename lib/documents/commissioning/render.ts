@@ -1,9 +1,9 @@
-import { renderToBuffer } from "@react-pdf/renderer";
 import { createElement } from "react";
-import { printableDeep } from "@/lib/documents/packets/facts";
 import { CommissioningReport } from "@/templates/pdf/commissioning/commissioning-report";
 import { CompletionCertificate } from "@/templates/pdf/commissioning/completion-certificate";
-import { preparePdfFonts } from "@/templates/pdf/shared/fonts";
+import { renderPdf } from "../render";
+import { printableDeep } from "../text";
+import { commissioningFacts } from "./facts";
 import type { CommissioningDocumentInput } from "./input";
 
 /**
@@ -11,11 +11,8 @@ import type { CommissioningDocumentInput } from "./input";
  * bytes. Pure apart from reading the shipped font files once.
  */
 export async function renderCommissioningPdf(input: CommissioningDocumentInput): Promise<Uint8Array> {
-  await preparePdfFonts();
   // Typed text (grid profiles, names) may hold characters the PDF fonts cannot draw.
   const printable = printableDeep(input);
-  const document = printable.kind === "certificate" ? createElement(CompletionCertificate, { input: printable }) : createElement(CommissioningReport, { input: printable });
-  // renderToBuffer is typed for a <Document> element; both components render one.
-  const buffer = await renderToBuffer(document as Parameters<typeof renderToBuffer>[0]);
-  return new Uint8Array(buffer.buffer, buffer.byteOffset, buffer.byteLength);
+  const document = { ...printable, facts: commissioningFacts(printable) };
+  return renderPdf(document.kind === "certificate" ? createElement(CompletionCertificate, { input: document }) : createElement(CommissioningReport, { input: document }));
 }

@@ -1,15 +1,9 @@
 import type { CheckResult, Design, ReviewFigures, Site } from "@/lib/engineering";
-import { describeCheck } from "@/lib/documents/packets/check-methods";
+import { CALC_COLUMNS, CALC_FONT_PT, CALC_TITLE_PT } from "@/templates/pdf/packets/sheets/calculation-columns";
+import { describeCheck } from "./check-methods";
 
-// The calculation table's columns and a conservative estimate of each row's height, so the
-// checks can be split across sheets before rendering: every sheet's "Sheet N of M" and the
-// cover's sheet index must be known up front.
-
-export const CALC_FONT_PT = 7;
-export const CALC_TITLE_PT = 7.5;
-
-/** Column widths in points; they add up to the body width of an 11 × 17 sheet. */
-export const CALC_COLUMNS = { index: 22, check: 320, inputs: 230, method: 220, result: 70, limit: 70, clause: 160, status: 49 } as const;
+// A conservative estimate of each calculation row's height, so the checks can be split across
+// sheets before rendering: every sheet's "Sheet N of M" and the cover's sheet index must be known up front.
 
 // Room for rows on one calculation sheet: the body height less the heading, table head and a margin.
 const ROWS_HEIGHT_BUDGET_PT = 575;

@@ -15,7 +15,7 @@ import {
 } from "@/lib/engineering";
 import { reviewFigures } from "@/lib/engineering/figures";
 import { totalInverterOutputA } from "@/lib/engineering/design-lookup";
-import { formatNumber } from "./facts";
+import { formatNumber } from "../text";
 
 // How each check was worked out, for the calculation sheet: the inputs it read from the
 // design and the method in our own notation. Keyed by the check id's prefix

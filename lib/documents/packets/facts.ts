@@ -1,33 +1,11 @@
 import { article, roofPlaneLoad, type CheckResult, type WarningLabel } from "@/lib/engineering";
-import { DEFAULT_TIME_ZONE, localIsoDate } from "@/lib/domain/time-zones";
 import { totalInverterOutputA } from "@/lib/engineering/design-lookup";
 import { type ConductorRow, conductorSchedule as scheduleOf } from "@/lib/design/conductor-schedule";
+import { formatNumber, formatQuantity } from "../text";
 import type { PacketInput } from "./input";
 
 // The words and figures the packet sheets print, computed once from the packet input so
 // the templates only lay them out and the tests can check the same strings.
-
-const NUMBER = new Intl.NumberFormat("en-US", { maximumFractionDigits: 2 });
-
-/** A figure as every sheet prints it: at most two decimals, thousands grouped. */
-export function formatNumber(value: number): string {
-  return NUMBER.format(value);
-}
-
-/** "463.34 V", "2.55 lb/ft²", "1.17" (no unit), "—" when the check has no figure. */
-export function formatQuantity(value: number | null, unit: string): string {
-  if (value === null) return "—";
-  return unit ? `${formatNumber(value)} ${unit}` : formatNumber(value);
-}
-
-/**
- * A document's date as an unambiguous calendar date in the organization's zone, e.g. "2026-11-20":
- * a packet made at 7 pm in Denver is dated that day, not the next day in UTC. Packets stored before
- * the zone was recorded print in the default zone.
- */
-export function packetDate(generatedAt: string, timeZone: string | undefined): string {
-  return localIsoDate(generatedAt, timeZone ?? DEFAULT_TIME_ZONE);
-}
 
 export function revisionLabel(revision: number): string {
   return `Rev ${revision}`;
@@ -40,24 +18,6 @@ export function projectLabel(input: PacketInput): string {
 export function siteAddress(input: PacketInput): string {
   const p = input.project;
   return `${p.street}, ${p.city}, ${p.state} ${p.postalCode}`;
-}
-
-// The shipped latin font subsets lack arrows and comparison signs, which would print as
-// empty boxes; change lines ("35 A → 40 A") and typed text use them, so they are spelled out.
-const UNSUPPORTED_GLYPHS: Record<string, string> = { "→": "to", "←": "from", "≤": "<=", "≥": ">=", "≈": "~", "√": "sqrt " };
-const UNSUPPORTED = /[→←≤≥≈√]/g;
-
-/** Text with the characters the PDF fonts cannot draw spelled out. */
-export function printable(text: string): string {
-  return text.replace(UNSUPPORTED, (c) => UNSUPPORTED_GLYPHS[c]!);
-}
-
-/** A copy of a value with every string in it made printable (applied once to the whole packet input). */
-export function printableDeep<T>(value: T): T {
-  if (typeof value === "string") return printable(value) as T;
-  if (Array.isArray(value)) return value.map(printableDeep) as T;
-  if (value && typeof value === "object") return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, printableDeep(v)])) as T;
-  return value;
 }
 
 type InverterItem = PacketInput["equipment"]["inverters"][number]["item"];

@@ -1,18 +1,27 @@
-import { renderToBuffer } from "@react-pdf/renderer";
 import { createElement } from "react";
 import { PDFDocument } from "pdf-lib";
-import { preparePdfFonts } from "@/templates/pdf/shared/fonts";
 import { interconnectionSheetPages } from "@/templates/pdf/packets/interconnection-packet";
-import { PacketDocument, packetDocumentInfo } from "@/templates/pdf/packets/packet-document";
+import { PacketDocument } from "@/templates/pdf/packets/packet-document";
 import { permitSheetPages, type DrawnSheet } from "@/templates/pdf/packets/permit-packet";
+import { renderPdf } from "../render";
+import { printableDeep } from "../text";
+import { packetFacts, type PrintedPacket } from "./printed";
 import type { PacketInput } from "./input";
-import { printableDeep } from "./facts";
+import { planInterconnectionSheets, planPermitSheets } from "./sheet-plan";
 
-const sheetsOf = (printable: PacketInput): DrawnSheet[] => (printable.kind === "permit" ? permitSheetPages(printable) : interconnectionSheetPages(printable));
+/** The packet's input made printable, with its printed facts. */
+function printedPacket(input: PacketInput): PrintedPacket {
+  const printable = printableDeep(input);
+  return { ...printable, facts: packetFacts(printable) };
+}
+
+const sheetsOf = (packet: PrintedPacket): DrawnSheet[] =>
+  packet.kind === "permit" ? permitSheetPages(packet, planPermitSheets(packet)) : interconnectionSheetPages(packet, planInterconnectionSheets());
 
 /** The titles of a packet's generated sheets, in order: what the worker will draw. */
 export function packetSheetTitles(input: PacketInput): string[] {
-  return sheetsOf(printableDeep(input)).map((s) => s.sheet.title);
+  const printable = printableDeep(input);
+  return (printable.kind === "permit" ? planPermitSheets(printable) : planInterconnectionSheets()).map((s) => s.title);
 }
 
 /**
@@ -22,26 +31,22 @@ export function packetSheetTitles(input: PacketInput): string[] {
  * shipped font files once.
  */
 export async function renderPacketPdf(input: PacketInput, { onSheet }: { onSheet?: (index: number) => Promise<void> | void } = {}): Promise<Uint8Array> {
-  await preparePdfFonts();
-  const printable = printableDeep(input);
-  const sheets = sheetsOf(printable);
-  const packet = await PDFDocument.create({ updateMetadata: false });
-  for (const [index, { page }] of sheets.entries()) {
+  const packet = printedPacket(input);
+  const { documentInfo: info } = packet.facts;
+  const merged = await PDFDocument.create({ updateMetadata: false });
+  for (const [index, { page }] of sheetsOf(packet).entries()) {
     await onSheet?.(index);
-    // renderToBuffer is typed for a <Document> element; PacketDocument renders one.
-    const buffer = await renderToBuffer(createElement(PacketDocument, { input: printable, children: page }) as Parameters<typeof renderToBuffer>[0]);
-    const drawn = await PDFDocument.load(new Uint8Array(buffer.buffer, buffer.byteOffset, buffer.byteLength), { updateMetadata: false });
-    for (const copied of await packet.copyPages(drawn, drawn.getPageIndices())) packet.addPage(copied);
+    const drawn = await PDFDocument.load(await renderPdf(createElement(PacketDocument, { info, children: page })), { updateMetadata: false });
+    for (const copied of await merged.copyPages(drawn, drawn.getPageIndices())) merged.addPage(copied);
   }
-  const info = packetDocumentInfo(printable);
-  packet.setTitle(info.title);
-  packet.setAuthor(info.author);
-  packet.setCreator(info.creator);
-  packet.setProducer(info.producer);
-  const issued = new Date(printable.generatedAt);
+  merged.setTitle(info.title);
+  merged.setAuthor(info.author);
+  merged.setCreator(info.creator);
+  merged.setProducer(info.producer);
+  const issued = new Date(packet.generatedAt);
   if (!Number.isNaN(issued.getTime())) {
-    packet.setCreationDate(issued);
-    packet.setModificationDate(issued);
+    merged.setCreationDate(issued);
+    merged.setModificationDate(issued);
   }
-  return packet.save();
+  return merged.save();
 }

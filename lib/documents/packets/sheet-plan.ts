@@ -1,8 +1,8 @@
 import type { CheckResult } from "@/lib/engineering";
-import type { PacketInput } from "@/lib/documents/packets/input";
-import { figuresOfReview } from "@/lib/documents/packets/check-methods";
+import type { SheetInfo } from "@/templates/pdf/shared/title-block";
 import { paginateChecks } from "./calculation-layout";
-import type { SheetInfo } from "../../../templates/pdf/shared/title-block";
+import { figuresOfReview } from "./check-methods";
+import type { PacketInput } from "./input";
 
 // Which sheets a packet holds, in order, numbered before anything is drawn so every title
 // block can say "Sheet N of M" and the cover can index them.

@@ -1,26 +1,12 @@
-import { localDateTime, localLongDate } from "@/lib/domain/time-zones";
-import { formatUsd } from "@/lib/fees";
-import type { ReceiptInput } from "@/lib/documents/receipt/input";
+import { longDate, longDateTime, money } from "@/lib/documents/text";
+import type { ReceiptInput } from "./input";
 
 // The words and figures the payment receipt prints, computed from the receipt input so the
 // template only lays them out and the tests can check the same strings.
 
-/** "December 3, 2026" in the organization's zone. */
-export function receiptDate(iso: string, timeZone: string): string {
-  return localLongDate(iso, timeZone);
-}
-
-/** "December 3, 2026, 11:05 MST" in the organization's zone. */
-export function receiptDateTime(iso: string, timeZone: string): string {
-  return `${receiptDate(iso, timeZone)}, ${localDateTime(iso, timeZone).split(" ").slice(1).join(" ")}`;
-}
-
-/** Amounts as the receipt prints them: "$1,234.50". */
-export const money = formatUsd;
-
 /** A refund as a deduction: "−$25.00" (with a true minus sign). */
 export function deduction(cents: number): string {
-  return `\u2212${formatUsd(Math.abs(cents))}`;
+  return `\u2212${money(Math.abs(cents))}`;
 }
 
 /** "Brand •••• 4242" as far as the processor reported it. */
@@ -65,4 +51,52 @@ export function receiptTotals(input: ReceiptInput): ReceiptTotals {
 /** Text for a field that may have been left empty. */
 export function orNotRecorded(text: string | null | undefined): string {
   return text?.trim() ? text.trim() : "Not recorded";
+}
+
+/** Everything the receipt's layout prints, as printed. */
+export type ReceiptFacts = {
+  documentInfo: { title: string; author: string };
+  receiptNumber: string;
+  subtitle: string;
+  footerText: string;
+  datePaid: string;
+  paidAt: string;
+  organization: string; // name and phone, one per line
+  paidBy: string; // name and e-mail, one per line
+  projectLabel: string;
+  projectLine: string;
+  status: string;
+  total: string;
+  refunded: { total: string; net: string } | null;
+  lines: { name: string; authority: string; arithmetic: string[]; amount: string }[];
+  method: string;
+  processorReference: string;
+  refunds: { date: string; reason: string; amount: string }[];
+};
+
+/** The receipt's printed facts from its (printable) input. */
+export function receiptFacts(input: ReceiptInput): ReceiptFacts {
+  const p = input.project;
+  const zone = input.organization.timeZone;
+  const totals = receiptTotals(input);
+  const datePaid = longDate(input.issuedAt, zone);
+  return {
+    documentInfo: { title: `Payment receipt ${input.receiptNumber}, project ${p.number}`, author: input.organization.name },
+    receiptNumber: input.receiptNumber,
+    subtitle: `Receipt ${input.receiptNumber} · ${datePaid}`,
+    footerText: `Receipt ${input.receiptNumber} · Project ${p.number} · ${orNotRecorded(input.organization.name)}`,
+    datePaid,
+    paidAt: longDateTime(input.issuedAt, zone),
+    organization: [orNotRecorded(input.organization.name), input.organization.phone?.trim()].filter(Boolean).join("\n"),
+    paidBy: [orNotRecorded(input.paidBy.name), input.paidBy.email.trim()].filter(Boolean).join("\n"),
+    projectLabel: `Project ${p.number}`,
+    projectLine: `${p.customerName}, ${p.address}`,
+    status: totals.status,
+    total: money(input.totalCents),
+    refunded: input.refunds.length > 0 ? { total: deduction(totals.refundedCents), net: money(totals.netCents) } : null,
+    lines: input.lines.map((l) => ({ name: l.name, authority: l.authority, arithmetic: l.arithmetic.map(arithmeticText), amount: money(l.amountCents) })),
+    method: methodText(input.method),
+    processorReference: input.processorReference,
+    refunds: input.refunds.map((r) => ({ date: longDate(r.createdAt, zone), reason: refundReason(r.reason), amount: deduction(r.amountCents) })),
+  };
 }

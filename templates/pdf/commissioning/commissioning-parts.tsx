@@ -1,17 +1,8 @@
 import { Document, StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { ReactNode } from "react";
 import type { Style } from "@react-pdf/types";
-import type { CommissioningDocumentInput } from "@/lib/documents/commissioning/input";
-import { packetDate } from "@/lib/documents/packets/facts";
+import type { CompletionSummary, PrintedCommissioning } from "@/lib/documents/commissioning/facts";
 import { Field, Notice } from "../shared/blocks";
-import {
-  COMMISSIONING_BAND_CAUTION,
-  COMMISSIONING_CAUTIONS,
-  COMMISSIONING_TITLES,
-  commissioningProjectLabel,
-  completionSummary,
-  type CompletionSummary,
-} from "../../../lib/documents/commissioning/facts";
 import { LetterPage } from "../shared/letter-page";
 import { StatusBadge } from "../shared/status-glyph";
 import { COLORS, STATUS_COLORS } from "../shared/styles";
@@ -34,15 +25,15 @@ const s = StyleSheet.create({
   cautionText: { flex: 1, lineHeight: 1.35 },
 });
 
-function bandCells(input: CommissioningDocumentInput, documentLine: string): TitleCell[] {
+function bandCells(input: PrintedCommissioning, documentLine: string): TitleCell[] {
   const org = input.organization;
   const person = [input.installer?.name, org.licenseNumber ? `License ${org.licenseNumber}` : null].filter(Boolean).join(" · ");
   return [
-    { label: "Project", flex: 2.3, main: commissioningProjectLabel(input), lines: [input.project.address] },
+    { label: "Project", flex: 2.3, main: input.facts.projectLabel, lines: [input.project.address] },
     { label: "Authority having jurisdiction", flex: 1.7, main: input.project.jurisdictionName ?? "Not set", lines: [`NEC ${input.record.edition} as adopted`] },
     { label: "Installer", flex: 2, main: org.name, lines: [person, org.phone].filter((l): l is string => Boolean(l)) },
-    { label: "Document", flex: 1.6, main: COMMISSIONING_TITLES[input.kind], lines: [documentLine] },
-    { label: "Commissioning", flex: 0.9, main: input.completion.complete ? "Complete" : "Open", lines: [`Printed ${packetDate(input.generatedAt, input.organization.timeZone)}`] },
+    { label: "Document", flex: 1.6, main: input.facts.title, lines: [documentLine] },
+    { label: "Commissioning", flex: 0.9, main: input.completion.complete ? "Complete" : "Open", lines: [`Printed ${input.facts.printedDate}`] },
   ];
 }
 
@@ -54,21 +45,21 @@ export function CommissioningDocument({
   bandCaution = true,
   children,
 }: {
-  input: CommissioningDocumentInput;
+  input: PrintedCommissioning;
   subtitle: string;
   documentLine: string;
   /** Repeat the short caution in the band (a one-page document that prints the cautions in full can leave it out). */
   bandCaution?: boolean;
   children: ReactNode;
 }) {
-  const title = COMMISSIONING_TITLES[input.kind];
+  const { title } = input.facts;
   return (
-    <Document title={`${title}, ${commissioningProjectLabel(input)}`} author={input.organization.name} creator="Ohmstead" producer="Ohmstead">
+    <Document title={`${title}, ${input.facts.projectLabel}`} author={input.organization.name} creator="Ohmstead" producer="Ohmstead">
       <LetterPage
         title={title}
         subtitle={subtitle}
         footer={({ pageNumber, totalPages }) => (
-          <TitleBand cells={bandCells(input, documentLine)} count={{ page: pageNumber, total: totalPages }} caution={bandCaution ? COMMISSIONING_BAND_CAUTION : undefined} compact />
+          <TitleBand cells={bandCells(input, documentLine)} count={{ page: pageNumber, total: totalPages }} caution={bandCaution ? input.facts.bandCaution : undefined} compact />
         )}
       >
         {children}
@@ -90,12 +81,12 @@ function TitleList({ label, titles }: { label: string; titles: string[] }) {
 /** The commissioning result: a mark and word, one sentence, and the readings holding it open. */
 export function CompletionPanel({
   input,
-  summary = completionSummary(input),
+  summary = input.facts.summary,
   details,
   footnote,
   listReview = true,
 }: {
-  input: CommissioningDocumentInput;
+  input: PrintedCommissioning;
   summary?: CompletionSummary;
   details?: ReactNode;
   footnote?: string;
@@ -122,8 +113,8 @@ export function CompletionPanel({
 }
 
 /** The cautions in full, boxed; `columns` 2 sets them side by side to save height. */
-export function CautionNotice({ fontSize = 8, columns = 1 }: { fontSize?: number; columns?: 1 | 2 }) {
-  const items = COMMISSIONING_CAUTIONS.map((text, i) => ({ text, n: i + 1 }));
+export function CautionNotice({ cautions, fontSize = 8, columns = 1 }: { cautions: readonly string[]; fontSize?: number; columns?: 1 | 2 }) {
+  const items = cautions.map((text, i) => ({ text, n: i + 1 }));
   const per = Math.ceil(items.length / columns);
   const groups = Array.from({ length: columns }, (_, c) => items.slice(c * per, (c + 1) * per));
   return (
@@ -145,7 +136,7 @@ export function CautionNotice({ fontSize = 8, columns = 1 }: { fontSize?: number
 }
 
 /** The equipment line both documents print: modules, inverters and the rapid shutdown equipment. */
-export function EquipmentRow({ system, rowStyle, cellStyle }: { system: CommissioningDocumentInput["system"]; rowStyle: Style; cellStyle: Style }) {
+export function EquipmentRow({ system, rowStyle, cellStyle }: { system: PrintedCommissioning["system"]; rowStyle: Style; cellStyle: Style }) {
   return (
     <View style={rowStyle}>
       <Field label="Modules" value={system.moduleSummary} style={cellStyle} />

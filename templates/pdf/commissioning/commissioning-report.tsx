@@ -1,7 +1,6 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
-import type { CommissioningDocumentInput } from "@/lib/documents/commissioning/input";
+import type { PrintedCommissioning, ReadingRow } from "@/lib/documents/commissioning/facts";
 import { Field, Section } from "../shared/blocks";
-import { documentTime, readingRows, systemRatingText, type ReadingRow } from "../../../lib/documents/commissioning/facts";
 import { CautionNotice, CommissioningDocument, CompletionPanel, EquipmentRow } from "./commissioning-parts";
 import { StatusBadge } from "../shared/status-glyph";
 import { COLORS, base } from "../shared/styles";
@@ -70,11 +69,10 @@ function ReadingLine({ row, index }: { row: ReadingRow; index: number }) {
 }
 
 /** The commissioning report, letter portrait, as many pages as the readings need. */
-export function CommissioningReport({ input }: { input: CommissioningDocumentInput }) {
+export function CommissioningReport({ input }: { input: PrintedCommissioning }) {
   const p = input.project;
   const sys = input.system;
-  const ratings = systemRatingText(input);
-  const rows = readingRows(input);
+  const { ratings, rows } = input.facts;
   const account = [p.utilityAccountNumber, p.meterNumber ? `meter ${p.meterNumber}` : null].filter(Boolean).join(" · ");
   return (
     <CommissioningDocument input={input} subtitle={`Grid-tied PV system · Project ${p.number}`} documentLine="Readings and results">
@@ -104,8 +102,8 @@ export function CommissioningReport({ input }: { input: CommissioningDocumentInp
         <CompletionPanel input={input} />
         <View style={s.row}>
           <Field label="Readings by" value={input.installer ? `${input.installer.name} (${input.installer.email})` : "Not assigned"} style={s.wide} />
-          <Field label="Last recorded" value={input.recordUpdatedAt ? documentTime(input.recordUpdatedAt, input.organization.timeZone) : "Nothing recorded yet"} style={s.cell} />
-          <Field label="Marked complete" value={input.completedAt ? documentTime(input.completedAt, input.organization.timeZone) : "Not yet"} style={s.cell} />
+          <Field label="Last recorded" value={input.facts.lastRecorded} style={s.cell} />
+          <Field label="Marked complete" value={input.facts.markedComplete} style={s.cell} />
         </View>
       </Section>
       <Text style={base.sectionTitle} minPresenceAhead={90}>
@@ -124,7 +122,7 @@ export function CommissioningReport({ input }: { input: CommissioningDocumentInp
         ))}
       </View>
       <View style={s.afterTable} />
-      <CautionNotice />
+      <CautionNotice cautions={input.facts.cautions} />
     </CommissioningDocument>
   );
 }

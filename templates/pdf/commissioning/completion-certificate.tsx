@@ -1,7 +1,6 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
-import type { CommissioningDocumentInput } from "@/lib/documents/commissioning/input";
+import type { PrintedCommissioning } from "@/lib/documents/commissioning/facts";
 import { Field, Section } from "../shared/blocks";
-import { certificateReadings, completionSummary, documentTime, systemRatingText } from "../../../lib/documents/commissioning/facts";
 import { CautionNotice, CommissioningDocument, CompletionPanel, EquipmentRow } from "./commissioning-parts";
 import { SignatureLine, SignatureRow } from "../shared/signature-line";
 import { COLORS } from "../shared/styles";
@@ -26,34 +25,18 @@ const s = StyleSheet.create({
 // Room above each signature line: a little under the packets' signature sheet, to keep the certificate on one page.
 const LINE_SPACE_PT = 14;
 
-/** The statement the installer signs, in full. */
-export function installerStatement(input: CommissioningDocumentInput): string {
-  const ahj = input.project.jurisdictionName ?? "the authority having jurisdiction";
-  const utility = input.project.utilityName ?? "the utility";
-  return (
-    `I state that the grid-tied PV system described above was installed and commissioned according to the approved design, ` +
-    `the NEC ${input.record.edition} with the local amendments enforced by ${ahj}, and the manufacturers' installation instructions; ` +
-    `that the commissioning readings were taken by me or under my direct supervision and are truly recorded in the commissioning report; ` +
-    `and that the system will not run in parallel with the grid until ${utility} grants permission to operate, apart from tests it allows.`
-  );
-}
-
 /** What the customer acknowledges by signing. */
 export const CUSTOMER_ACKNOWLEDGEMENT =
   "The installer has shown me the system, its rapid shutdown switch and its disconnects, and given me the operating instructions and the manufacturers' documents. " +
   "I understand the system may not run in parallel with the grid before the utility grants permission to operate.";
 
 /** The certificate of completion, one letter page. */
-export function CompletionCertificate({ input }: { input: CommissioningDocumentInput }) {
+export function CompletionCertificate({ input }: { input: PrintedCommissioning }) {
   const p = input.project;
   const sys = input.system;
-  const ratings = systemRatingText(input);
-  const summary = completionSummary(input);
-  const readings = certificateReadings(input); // the key readings, in one paragraph to keep the certificate on one page
+  // The key readings go in one paragraph, to keep the certificate on one page.
+  const { ratings, summary, readings, certificateFootnote: footnote } = input.facts;
   const org = input.organization;
-  const footnote = summary.complete
-    ? `Marked complete ${input.completedAt ? documentTime(input.completedAt, input.organization.timeZone) : "(time not recorded)"}; the readings are in the commissioning report.`
-    : "Do not sign until every reading is recorded and none fails; the commissioning report says what to do for each.";
   return (
     <CommissioningDocument input={input} subtitle={`Grid-tied PV system · Project ${p.number}`} documentLine="For signature and upload" bandCaution={false}>
       <Section title="1  Installation and system">
@@ -88,7 +71,7 @@ export function CompletionCertificate({ input }: { input: CommissioningDocumentI
         />
       </Section>
       <Section title="3  Statement and signatures">
-        <Text style={s.statement}>{installerStatement(input)}</Text>
+        <Text style={s.statement}>{input.facts.installerStatement}</Text>
         <View style={s.signatures} wrap={false}>
           <View style={s.block}>
             <Text style={s.blockTitle}>Installer</Text>
@@ -115,7 +98,7 @@ export function CompletionCertificate({ input }: { input: CommissioningDocumentI
           </View>
         </View>
       </Section>
-      <CautionNotice fontSize={6.5} columns={2} />
+      <CautionNotice cautions={input.facts.cautions} fontSize={6.5} columns={2} />
     </CommissioningDocument>
   );
 }

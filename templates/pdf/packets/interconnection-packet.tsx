@@ -1,15 +1,13 @@
 import type { ReactElement } from "react";
-import type { PacketInput } from "@/lib/documents/packets/input";
-import { PacketDocument } from "./packet-document";
+import type { PrintedPacket } from "@/lib/documents/packets/printed";
+import type { InterconnectionSheetKey, PlannedSheet } from "@/lib/documents/packets/sheet-plan";
 import type { DrawnSheet } from "./permit-packet";
-import { planInterconnectionSheets } from "../../../lib/documents/packets/sheet-plan";
 import { ApplicationSheet, FacilitySheet } from "./sheets/application-sheets";
 import { SignatureSheet } from "./sheets/signature-sheet";
 import { SingleLineSheet } from "./sheets/single-line-sheet";
 
 /** The interconnection packet's pages, each as its own element: letter-size application pages, an 11 × 17 diagram sheet, signatures. */
-export function interconnectionSheetPages(input: PacketInput): DrawnSheet[] {
-  const sheets = planInterconnectionSheets();
+export function interconnectionSheetPages(input: PrintedPacket, sheets: PlannedSheet<InterconnectionSheetKey>[]): DrawnSheet[] {
   const singleLine = sheets.find((s) => s.key === "single-line")!.number;
   return sheets.map((sheet) => {
     let page: ReactElement;
@@ -29,9 +27,4 @@ export function interconnectionSheetPages(input: PacketInput): DrawnSheet[] {
     }
     return { sheet, page };
   });
-}
-
-/** The interconnection packet as one document. */
-export function InterconnectionPacket({ input }: { input: PacketInput }) {
-  return <PacketDocument input={input}>{interconnectionSheetPages(input).map((s) => s.page)}</PacketDocument>;
 }

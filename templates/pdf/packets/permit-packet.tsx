@@ -1,7 +1,6 @@
 import type { ReactElement } from "react";
-import type { PacketInput } from "@/lib/documents/packets/input";
-import { PacketDocument } from "./packet-document";
-import { planPermitSheets, type PlannedSheet, type PermitSheetKey } from "../../../lib/documents/packets/sheet-plan";
+import type { PrintedPacket } from "@/lib/documents/packets/printed";
+import type { PermitSheetKey, PlannedSheet } from "@/lib/documents/packets/sheet-plan";
 import { CalculationSheet } from "./sheets/calculation-sheet";
 import { CoverSheet } from "./sheets/cover-sheet";
 import { LabelSheet } from "./sheets/label-sheet";
@@ -11,9 +10,8 @@ import { SystemSummarySheet } from "./sheets/system-summary-sheet";
 
 export type DrawnSheet = { sheet: PlannedSheet<string>; page: ReactElement };
 
-/** The permit packet's generated sheets (11 × 17 landscape), each as its own page element, in order. */
-export function permitSheetPages(input: PacketInput): DrawnSheet[] {
-  const sheets = planPermitSheets(input);
+/** The permit packet's generated sheets (11 × 17 landscape) as planned, each as its own page element, in order. */
+export function permitSheetPages(input: PrintedPacket, sheets: PlannedSheet<PermitSheetKey>[]): DrawnSheet[] {
   let checkIndex = 1;
   return sheets.map((sheet) => ({ sheet, page: permitSheetPage(input, sheet, sheets, () => {
     const first = checkIndex;
@@ -22,7 +20,7 @@ export function permitSheetPages(input: PacketInput): DrawnSheet[] {
   }) }));
 }
 
-function permitSheetPage(input: PacketInput, sheet: PlannedSheet<PermitSheetKey>, sheets: PlannedSheet<PermitSheetKey>[], nextCheckIndex: () => number): ReactElement {
+function permitSheetPage(input: PrintedPacket, sheet: PlannedSheet<PermitSheetKey>, sheets: PlannedSheet<PermitSheetKey>[], nextCheckIndex: () => number): ReactElement {
   switch (sheet.key) {
     case "cover":
       return <CoverSheet key={sheet.number} input={input} sheet={sheet} sheets={sheets} />;
@@ -38,9 +36,4 @@ function permitSheetPage(input: PacketInput, sheet: PlannedSheet<PermitSheetKey>
     case "structural":
       return <StructuralSheet key={sheet.number} input={input} sheet={sheet} />;
   }
-}
-
-/** The permit packet's generated sheets as one document; data sheets are appended afterwards. */
-export function PermitPacket({ input }: { input: PacketInput }) {
-  return <PacketDocument input={input}>{permitSheetPages(input).map((s) => s.page)}</PacketDocument>;
 }

@@ -1,8 +1,7 @@
 import { Document, StyleSheet, Text, View } from "@react-pdf/renderer";
-import type { ReceiptInput } from "@/lib/documents/receipt/input";
+import type { ReceiptFacts } from "@/lib/documents/receipt/facts";
 import { Field, Section, Table } from "../shared/blocks";
 import { LetterPage } from "../shared/letter-page";
-import { arithmeticText, deduction, methodText, money, orNotRecorded, receiptDate, receiptDateTime, receiptTotals, refundReason } from "../../../lib/documents/receipt/facts";
 import { COLORS, base } from "../shared/styles";
 
 // The payment receipt: what was paid, to which authority's fee, how each fee was worked out,
@@ -31,8 +30,8 @@ const s = StyleSheet.create({
   footerText: { fontSize: 7, color: COLORS.inkFaint },
 });
 
-type FeeLine = ReceiptInput["lines"][number];
-type RefundLine = ReceiptInput["refunds"][number];
+type FeeLine = ReceiptFacts["lines"][number];
+type RefundLine = ReceiptFacts["refunds"][number];
 
 function SumRow({ label, value, total = false }: { label: string; value: string; total?: boolean }) {
   return (
@@ -50,7 +49,7 @@ function FeeCell({ line }: { line: FeeLine }) {
       <Text style={s.authority}>{line.authority}</Text>
       {line.arithmetic.map((a, i) => (
         <Text key={i} style={[s.working, base.measure]}>
-          {arithmeticText(a)}
+          {a}
         </Text>
       ))}
     </View>
@@ -58,19 +57,16 @@ function FeeCell({ line }: { line: FeeLine }) {
 }
 
 /** The receipt for one payment, letter portrait; continues onto more pages only for a long list of fees. */
-export function PaymentReceipt({ input }: { input: ReceiptInput }) {
-  const p = input.project;
-  const totals = receiptTotals(input);
-  const refunded = input.refunds.length > 0;
-  const footerText = `Receipt ${input.receiptNumber} · Project ${p.number} · ${orNotRecorded(input.organization.name)}`;
+export function PaymentReceipt({ receipt: r }: { receipt: ReceiptFacts }) {
+  const { refunded } = r;
   return (
-    <Document title={`Payment receipt ${input.receiptNumber}, project ${p.number}`} author={input.organization.name} creator="Ohmstead" producer="Ohmstead">
+    <Document title={r.documentInfo.title} author={r.documentInfo.author} creator="Ohmstead" producer="Ohmstead">
       <LetterPage
         title="Payment receipt"
-        subtitle={`Receipt ${input.receiptNumber} · ${receiptDate(input.issuedAt, input.organization.timeZone)}`}
+        subtitle={r.subtitle}
         footer={({ pageNumber, totalPages }) => (
           <View style={s.footer}>
-            <Text style={s.footerText}>{footerText}</Text>
+            <Text style={s.footerText}>{r.footerText}</Text>
             <Text style={s.footerText}>{`Page ${pageNumber} of ${totalPages}`}</Text>
           </View>
         )}
@@ -78,24 +74,24 @@ export function PaymentReceipt({ input }: { input: ReceiptInput }) {
         <View style={s.top} wrap={false}>
           <View style={s.parties}>
             <View style={s.row}>
-              <Field label="Receipt number" value={input.receiptNumber} mono style={s.cell} />
-              <Field label="Date paid" value={receiptDate(input.issuedAt, input.organization.timeZone)} style={s.cell} />
+              <Field label="Receipt number" value={r.receiptNumber} mono style={s.cell} />
+              <Field label="Date paid" value={r.datePaid} style={s.cell} />
             </View>
             <View style={s.row}>
-              <Field label="Organization" value={[orNotRecorded(input.organization.name), input.organization.phone?.trim()].filter(Boolean).join("\n")} style={s.cell} />
-              <Field label="Paid by" value={[orNotRecorded(input.paidBy.name), input.paidBy.email.trim()].filter(Boolean).join("\n")} style={s.cell} />
+              <Field label="Organization" value={r.organization} style={s.cell} />
+              <Field label="Paid by" value={r.paidBy} style={s.cell} />
             </View>
-            <Field label={`Project ${p.number}`} value={`${p.customerName}, ${p.address}`} />
+            <Field label={r.projectLabel} value={r.projectLine} />
           </View>
           <View style={s.amountBox}>
             <Text style={base.caps}>Amount paid</Text>
-            <Text style={[s.amount, base.measure]}>{money(input.totalCents)}</Text>
-            <Text style={s.amountStatus}>{totals.status}</Text>
+            <Text style={[s.amount, base.measure]}>{r.total}</Text>
+            <Text style={s.amountStatus}>{r.status}</Text>
             {refunded ? (
               <>
-                <Text style={s.amountNote}>{`Refunded ${deduction(totals.refundedCents)}`}</Text>
+                <Text style={s.amountNote}>{`Refunded ${refunded.total}`}</Text>
                 <Text style={s.amountNote}>Net amount paid</Text>
-                <Text style={[s.amountNet, base.measure]}>{money(totals.netCents)}</Text>
+                <Text style={[s.amountNet, base.measure]}>{refunded.net}</Text>
               </>
             ) : null}
           </View>
@@ -104,19 +100,19 @@ export function PaymentReceipt({ input }: { input: ReceiptInput }) {
           <Table
             columns={[
               { header: "Fee, authority and how it was worked out", width: 5, render: (l: FeeLine) => <FeeCell line={l} /> },
-              { header: "Amount", width: 1.2, render: (l: FeeLine) => money(l.amountCents), mono: true, align: "right" },
+              { header: "Amount", width: 1.2, render: (l: FeeLine) => l.amount, mono: true, align: "right" },
             ]}
-            rows={input.lines}
+            rows={r.lines}
             fontSize={8.5}
           />
-          <SumRow label="Total paid" value={money(input.totalCents)} total />
+          <SumRow label="Total paid" value={r.total} total />
         </Section>
         <Section title="Payment">
           <View style={s.row}>
-            <Field label="Method" value={methodText(input.method)} style={s.cell} />
-            <Field label="Paid at" value={receiptDateTime(input.issuedAt, input.organization.timeZone)} style={s.cell} />
+            <Field label="Method" value={r.method} style={s.cell} />
+            <Field label="Paid at" value={r.paidAt} style={s.cell} />
           </View>
-          <Field label="Processor reference" value={input.processorReference} mono />
+          <Field label="Processor reference" value={r.processorReference} mono />
         </Section>
         {refunded ? (
           // Refunds are few: the list and the sums under it stay on one page.
@@ -124,16 +120,16 @@ export function PaymentReceipt({ input }: { input: ReceiptInput }) {
             <Section title="Refunds">
               <Table
                 columns={[
-                  { header: "Date", width: 1.4, render: (r: RefundLine) => receiptDate(r.createdAt, input.organization.timeZone) },
-                  { header: "Reason", width: 3.8, render: (r: RefundLine) => refundReason(r.reason) },
-                  { header: "Amount", width: 1.2, render: (r: RefundLine) => deduction(r.amountCents), mono: true, align: "right" },
+                  { header: "Date", width: 1.4, render: (line: RefundLine) => line.date },
+                  { header: "Reason", width: 3.8, render: (line: RefundLine) => line.reason },
+                  { header: "Amount", width: 1.2, render: (line: RefundLine) => line.amount, mono: true, align: "right" },
                 ]}
-                rows={input.refunds}
+                rows={r.refunds}
                 fontSize={8.5}
               />
-              <SumRow label="Total paid" value={money(input.totalCents)} />
-              <SumRow label="Refunded" value={deduction(totals.refundedCents)} />
-              <SumRow label="Net amount paid" value={money(totals.netCents)} total />
+              <SumRow label="Total paid" value={r.total} />
+              <SumRow label="Refunded" value={refunded.total} />
+              <SumRow label="Net amount paid" value={refunded.net} total />
             </Section>
           </View>
         ) : null}

@@ -1,6 +1,6 @@
 import { Page, StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { ReactNode } from "react";
-import type { PacketInput } from "@/lib/documents/packets/input";
+import type { PrintedPacket } from "@/lib/documents/packets/printed";
 import { COLORS, FORM_PAGE, PLAN_PAGE, base } from "./styles";
 import { TitleBlock, type SheetInfo } from "./title-block";
 
@@ -16,7 +16,7 @@ const s = StyleSheet.create({
   subtitle: { fontSize: 8, color: COLORS.inkSoft, maxWidth: "55%", textAlign: "right" },
 });
 
-type SheetProps = { input: PacketInput; sheet: SheetInfo; subtitle?: string; children: ReactNode };
+type SheetProps = { input: PrintedPacket; sheet: SheetInfo; subtitle?: string; children: ReactNode };
 
 /** A sheet's or document's title over a copper rule, with an optional note on the right. */
 export function SheetHeading({ title, subtitle, form }: { title: string; subtitle?: string; form: boolean }) {

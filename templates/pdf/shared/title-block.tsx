@@ -1,7 +1,6 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { ReactNode } from "react";
-import { PACKET_TITLES, type PacketInput } from "@/lib/documents/packets/input";
-import { packetDate, projectLabel, revisionLabel, siteAddress } from "@/lib/documents/packets/facts";
+import type { PrintedPacket } from "@/lib/documents/packets/printed";
 import { COLORS, base } from "./styles";
 
 /** Which sheet of how many, and what it shows. */
@@ -80,15 +79,16 @@ export function TitleBand({ cells, count, caution, compact = false }: TitleBandP
  * Ohmstead's title block: a band across the foot of every sheet. Plan sheets show it as one
  * row; letter pages (compact) as two rows of three cells.
  */
-export function TitleBlock({ input, sheet, compact = false }: { input: PacketInput; sheet: SheetInfo; compact?: boolean }) {
+export function TitleBlock({ input, sheet, compact = false }: { input: PrintedPacket; sheet: SheetInfo; compact?: boolean }) {
   const p = input.preparedBy;
+  const f = input.facts;
   const person = [p.name, p.licenseNumber ? `License ${p.licenseNumber}` : null].filter(Boolean).join(" · ");
   const cells: TitleCell[] = [
-    { label: "Project", flex: 2.3, main: projectLabel(input), lines: [siteAddress(input)] },
+    { label: "Project", flex: 2.3, main: f.projectLabel, lines: [f.siteAddress] },
     { label: "Authority having jurisdiction", flex: 1.7, main: input.jurisdiction.name, lines: [`NEC ${input.jurisdiction.necEdition} as adopted`] },
     { label: "Prepared by", flex: 2, main: p.organizationName, lines: p.phone ? [person, p.phone] : [person] },
-    { label: "Document", flex: 1.6, main: PACKET_TITLES[input.kind], lines: [sheet.title] },
-    { label: "Revision", flex: 0.9, main: revisionLabel(input.revision), lines: [<>Issued {packetDate(input.generatedAt, input.preparedBy.timeZone)}</>] },
+    { label: "Document", flex: 1.6, main: f.documentTitle, lines: [sheet.title] },
+    { label: "Revision", flex: 0.9, main: f.revisionLabel, lines: [<>Issued {f.issuedDate}</>] },
   ];
   return <TitleBand cells={cells} count={{ sheet }} caution={SHEET_CAUTION} compact={compact} />;
 }

@@ -1,7 +1,5 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
-import { totalInverterOutputA } from "@/lib/engineering/design-lookup";
-import type { PacketInput } from "@/lib/documents/packets/input";
-import { disconnectLocation, formatNumber, formatQuantity, inverterCounts, listingText, siteAddress } from "@/lib/documents/packets/facts";
+import type { PrintedPacket } from "@/lib/documents/packets/printed";
 import { Field, Notice, Section, Table } from "../../shared/blocks";
 import { FormSheet } from "../../shared/sheet-page";
 import { base } from "../../shared/styles";
@@ -14,8 +12,8 @@ const s = StyleSheet.create({
   note: { fontSize: 8, lineHeight: 1.35 },
 });
 
-type Sheet = { input: PacketInput; sheet: SheetInfo };
-type InverterLine = ReturnType<typeof inverterCounts>[number];
+type Sheet = { input: PrintedPacket; sheet: SheetInfo };
+type InverterLine = PrintedPacket["facts"]["inverterLines"][number];
 
 const notEntered = "Not entered";
 const phaseWords = (phase: string) => (phase === "3" ? "Three-phase" : "Single-phase");
@@ -36,7 +34,7 @@ export function ApplicationSheet({ input, sheet }: Sheet) {
           <Field label="Phone" value={p.customerPhone ?? notEntered} style={s.cell} />
         </View>
         <View style={s.row}>
-          <Field label="Service address" value={siteAddress(input)} style={s.wide} />
+          <Field label="Service address" value={input.facts.siteAddress} style={s.wide} />
           <Field label="Email" value={p.customerEmail ?? notEntered} style={s.cell} />
         </View>
         <View style={s.row}>
@@ -58,8 +56,8 @@ export function ApplicationSheet({ input, sheet }: Sheet) {
       <Section title="3  Request in brief">
         <View style={s.row}>
           <Field label="Generator type" value="Photovoltaic, inverter-based" style={s.cell} />
-          <Field label="DC rating (STC)" value={formatQuantity(ratings.dcKw, "kW")} mono style={s.cell} />
-          <Field label="AC rating" value={formatQuantity(ratings.acKw, "kW")} mono style={s.cell} />
+          <Field label="DC rating (STC)" value={input.facts.ratings.dcKw} mono style={s.cell} />
+          <Field label="AC rating" value={input.facts.ratings.acKw} mono style={s.cell} />
         </View>
         <View style={s.row}>
           <Field label="Energy storage" value="None" style={s.cell} />
@@ -86,12 +84,12 @@ export function FacilitySheet({ input, sheet, singleLineSheet }: Sheet & { singl
       <Section title="4  Inverters">
         <Table
           columns={[
-            { header: "Qty", width: 0.5, render: (l: InverterLine) => String(l.quantity), mono: true, align: "right" },
-            { header: "Maker and model", width: 2.2, render: (l: InverterLine) => `${l.item.maker} ${l.item.model}` },
-            { header: "Rated output", width: 1.8, render: (l: InverterLine) => `${formatNumber(l.item.specs.acPowerW)} W, ${l.item.specs.acOutputCurrentA} A at ${l.item.specs.acVoltageV} V` },
-            { header: "Certification", width: 2.6, render: (l: InverterLine) => listingText(l.item.specs.certification, l.item.listing) },
+            { header: "Qty", width: 0.5, render: (l: InverterLine) => l.quantity, mono: true, align: "right" },
+            { header: "Maker and model", width: 2.2, render: (l: InverterLine) => l.makerModel },
+            { header: "Rated output", width: 1.8, render: (l: InverterLine) => l.ratedOutput },
+            { header: "Certification", width: 2.6, render: (l: InverterLine) => l.certification },
           ]}
-          rows={inverterCounts(input)}
+          rows={input.facts.inverterLines}
           fontSize={8}
         />
       </Section>
@@ -107,14 +105,14 @@ export function FacilitySheet({ input, sheet, singleLineSheet }: Sheet & { singl
       </Section>
       <Section title="6  Ratings">
         <View style={s.row}>
-          <Field label="DC rating (STC)" value={formatQuantity(ratings.dcKw, "kW")} mono style={s.cell} />
-          <Field label="AC rating" value={formatQuantity(ratings.acKw, "kW")} mono style={s.cell} />
-          <Field label="AC output current" value={formatQuantity(totalInverterOutputA(input.design), "A")} mono style={s.cell} />
+          <Field label="DC rating (STC)" value={input.facts.ratings.dcKw} mono style={s.cell} />
+          <Field label="AC rating" value={input.facts.ratings.acKw} mono style={s.cell} />
+          <Field label="AC output current" value={input.facts.ratings.inverterOutputA} mono style={s.cell} />
         </View>
         <View style={s.row}>
           <Field label="Phase" value={phaseWords(inverterPhase)} style={s.cell} />
           <Field label="Nominal AC voltage" value={`${s2.voltageV} V`} mono style={s.cell} />
-          <Field label="Highest DC voltage" value={formatQuantity(input.review.summary.maxDcVoltageV, "V")} mono style={s.cell} />
+          <Field label="Highest DC voltage" value={input.facts.ratings.maxDcVoltage} mono style={s.cell} />
         </View>
       </Section>
       <Section title="7  Certification and grid profile">
@@ -130,7 +128,7 @@ export function FacilitySheet({ input, sheet, singleLineSheet }: Sheet & { singl
           <Field label="Service panel" value={`${s2.busbarA} A busbar${s2.mainBreakerA ? `, ${s2.mainBreakerA} A main` : ""}`} style={s.cell} />
         </View>
         <View style={s.row}>
-          <Field label="PV system disconnect location" value={disconnectLocation(input)} style={s.cell} />
+          <Field label="PV system disconnect location" value={input.facts.disconnectLocation} style={s.cell} />
           <Field label="Service equipment location" value={s2.serviceLocation || notEntered} style={s.cell} />
         </View>
       </Section>

@@ -1,13 +1,11 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { CheckResult } from "@/lib/engineering";
-import { describeCheck, figuresOfReview } from "@/lib/documents/packets/check-methods";
-import type { PacketInput } from "@/lib/documents/packets/input";
-import { formatQuantity } from "@/lib/documents/packets/facts";
+import type { PrintedPacket } from "@/lib/documents/packets/printed";
 import { StatusMark } from "../../shared/blocks";
 import { PlanSheet } from "../../shared/sheet-page";
 import { COLORS, base } from "../../shared/styles";
 import type { SheetInfo } from "../../shared/title-block";
-import { CALC_COLUMNS as W, CALC_FONT_PT, CALC_TITLE_PT } from "../../../../lib/documents/packets/calculation-layout";
+import { CALC_COLUMNS as W, CALC_FONT_PT, CALC_TITLE_PT } from "./calculation-columns";
 
 const s = StyleSheet.create({
   head: { flexDirection: "row", backgroundColor: COLORS.paperTint, borderTopWidth: 1, borderBottomWidth: 1, borderColor: COLORS.ink },
@@ -25,8 +23,8 @@ const COLUMNS: [keyof typeof W, string][] = [
   ["index", "#"], ["check", "Check and finding"], ["inputs", "Inputs"], ["method", "Method"], ["result", "Result"], ["limit", "Limit"], ["clause", "Code reference"], ["status", "Status"],
 ];
 
-function CheckRow({ check, index, input }: { check: CheckResult; index: number; input: PacketInput }) {
-  const { inputs, method } = describeCheck(check, input.design, input.site, figuresOfReview(input));
+function CheckRow({ check, index, input }: { check: CheckResult; index: number; input: PrintedPacket }) {
+  const { inputs, method, result, limit } = input.facts.checks[check.id]!;
   return (
     <View style={s.row} wrap={false}>
       <Text style={[s.cell, { width: W.index }, base.faint]}>{index}</Text>
@@ -39,8 +37,8 @@ function CheckRow({ check, index, input }: { check: CheckResult; index: number; 
         {inputs.length ? inputs.map((line, i) => <Text key={i}>{line}</Text>) : <Text style={base.faint}>—</Text>}
       </View>
       <Text style={[s.cell, { width: W.method }]}>{method}</Text>
-      <Text style={[s.cell, s.figure, base.measure, { width: W.result }]}>{formatQuantity(check.value, check.unit)}</Text>
-      <Text style={[s.cell, s.figure, base.measure, { width: W.limit }]}>{formatQuantity(check.limit, check.unit)}</Text>
+      <Text style={[s.cell, s.figure, base.measure, { width: W.result }]}>{result}</Text>
+      <Text style={[s.cell, s.figure, base.measure, { width: W.limit }]}>{limit}</Text>
       <View style={[s.cell, { width: W.clause }]}>
         <Text>{check.clause}</Text>
         <Text style={base.faint}>Edition: NEC {check.edition}</Text>
@@ -53,7 +51,7 @@ function CheckRow({ check, index, input }: { check: CheckResult; index: number; 
 }
 
 /** One calculation sheet: its share of the review's checks, numbered across all calculation sheets. */
-export function CalculationSheet({ input, sheet, checks, firstIndex }: { input: PacketInput; sheet: SheetInfo; checks: CheckResult[]; firstIndex: number }) {
+export function CalculationSheet({ input, sheet, checks, firstIndex }: { input: PrintedPacket; sheet: SheetInfo; checks: CheckResult[]; firstIndex: number }) {
   const j = input.jurisdiction;
   return (
     <PlanSheet input={input} sheet={sheet} subtitle={`Every check of the design review, NEC ${input.review.edition}; record low ${j.recordLowTempC} °C, high design ${j.highDesignTempC} °C`}>

@@ -1,6 +1,5 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
-import type { PacketInput } from "@/lib/documents/packets/input";
-import { generalNotes, scopeOfWork, siteAddress } from "@/lib/documents/packets/facts";
+import type { PrintedPacket } from "@/lib/documents/packets/printed";
 import { Field, Notice, NumberedList, Section, Table } from "../../shared/blocks";
 import { PlanSheet } from "../../shared/sheet-page";
 import { COLORS, base } from "../../shared/styles";
@@ -22,11 +21,11 @@ function overrideLead(failCount: number, byName: string): string {
 }
 
 /** Sheet 1 of the permit packet: project data, scope of work, notes, sheet index and revision. */
-export function CoverSheet({ input, sheet, sheets }: { input: PacketInput; sheet: SheetInfo; sheets: SheetInfo[] }) {
+export function CoverSheet({ input, sheet, sheets }: { input: PrintedPacket; sheet: SheetInfo; sheets: SheetInfo[] }) {
   const p = input.project;
   const j = input.jurisdiction;
   return (
-    <PlanSheet input={input} sheet={sheet} subtitle={`Grid-tied photovoltaic system · ${siteAddress(input)}`}>
+    <PlanSheet input={input} sheet={sheet} subtitle={`Grid-tied photovoltaic system · ${input.facts.siteAddress}`}>
       <View style={s.columns}>
         <View style={s.column}>
           <Section title="Project data">
@@ -34,7 +33,7 @@ export function CoverSheet({ input, sheet, sheets }: { input: PacketInput; sheet
               <Field label="Customer" value={p.customerName} style={s.half} />
               <Field label="Project number" value={String(p.number)} style={s.half} />
             </View>
-            <Field label="Site address" value={siteAddress(input)} />
+            <Field label="Site address" value={input.facts.siteAddress} />
             <Field label="Authority having jurisdiction" value={`${j.name} (${j.state})`} />
             <View style={s.pair}>
               <Field label="Code basis" value={`NEC ${j.necEdition}, with local amendments`} style={s.half} />
@@ -44,7 +43,7 @@ export function CoverSheet({ input, sheet, sheets }: { input: PacketInput; sheet
             <Field label="Prepared by" value={[input.preparedBy.organizationName, input.preparedBy.name, input.preparedBy.licenseNumber ? `License ${input.preparedBy.licenseNumber}` : null].filter(Boolean).join(" · ")} />
           </Section>
           <Section title="Scope of work">
-            {scopeOfWork(input).map((line, i) => (
+            {input.facts.scopeOfWork.map((line, i) => (
               <Text key={i} style={s.scope}>
                 {line}
               </Text>
@@ -53,7 +52,7 @@ export function CoverSheet({ input, sheet, sheets }: { input: PacketInput; sheet
         </View>
         <View style={s.column}>
           <Section title="General notes">
-            <NumberedList items={generalNotes(input)} fontSize={9.5} />
+            <NumberedList items={input.facts.generalNotes} fontSize={9.5} />
           </Section>
         </View>
         <View style={s.lastColumn}>

@@ -1,7 +1,6 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { WarningLabel } from "@/lib/engineering";
-import type { PacketInput } from "@/lib/documents/packets/input";
-import { labelValueLines } from "@/lib/documents/packets/facts";
+import type { PrintedPacket } from "@/lib/documents/packets/printed";
 import { PlanSheet } from "../../shared/sheet-page";
 import { COLORS, base } from "../../shared/styles";
 import type { SheetInfo } from "../../shared/title-block";
@@ -23,8 +22,7 @@ const s = StyleSheet.create({
   detailValue: { flex: 1, fontSize: 7.5 },
 });
 
-function LabelCard({ label, index }: { label: WarningLabel; index: number }) {
-  const values = labelValueLines(label);
+function LabelCard({ label, values, index }: { label: WarningLabel; values: { name: string; value: string }[]; index: number }) {
   return (
     <View style={s.card} wrap={false}>
       <View style={s.cardHead}>
@@ -60,7 +58,7 @@ function LabelCard({ label, index }: { label: WarningLabel; index: number }) {
 }
 
 /** Every label the review requires, drawn with its computed values and its place. */
-export function LabelSheet({ input, sheet }: { input: PacketInput; sheet: SheetInfo }) {
+export function LabelSheet({ input, sheet }: { input: PrintedPacket; sheet: SheetInfo }) {
   return (
     <PlanSheet input={input} sheet={sheet} subtitle={`${input.review.labels.length} labels required by the design review, NEC ${input.review.edition}`}>
       <Text style={s.intro}>
@@ -70,7 +68,7 @@ export function LabelSheet({ input, sheet }: { input: PacketInput; sheet: SheetI
       </Text>
       <View style={s.grid}>
         {input.review.labels.map((label, i) => (
-          <LabelCard key={label.id} label={label} index={i + 1} />
+          <LabelCard key={label.id} label={label} values={input.facts.labelValues[i]!} index={i + 1} />
         ))}
       </View>
     </PlanSheet>

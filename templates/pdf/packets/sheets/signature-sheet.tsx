@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
-import type { PacketInput } from "@/lib/documents/packets/input";
+import type { PrintedPacket } from "@/lib/documents/packets/printed";
 import { NumberedList, Section } from "../../shared/blocks";
 import { FormSheet } from "../../shared/sheet-page";
 import { SignatureLine, SignatureRow } from "../../shared/signature-line";
@@ -29,7 +29,7 @@ function SignatureBlock({ title, who, name }: { title: string; who: string; name
 }
 
 /** The last page: what each party confirms, and lines to sign. */
-export function SignatureSheet({ input, sheet }: { input: PacketInput; sheet: SheetInfo }) {
+export function SignatureSheet({ input, sheet }: { input: PrintedPacket; sheet: SheetInfo }) {
   const utility = input.utility?.name ?? "the utility";
   return (
     <FormSheet input={input} sheet={sheet}>

@@ -1,8 +1,5 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
-import { EXPEDITED_DEAD_LOAD_PSF } from "@/lib/engineering";
-import { worstStatus } from "@/lib/engineering/check-result";
-import type { PacketInput } from "@/lib/documents/packets/input";
-import { formatNumber, formatQuantity, structuralRows, type StructuralRow } from "@/lib/documents/packets/facts";
+import type { PrintedPacket, PrintedStructuralRow as StructuralRow } from "@/lib/documents/packets/printed";
 import { Notice, Section, StatusMark, Table } from "../../shared/blocks";
 import { PlanSheet } from "../../shared/sheet-page";
 import { COLORS, base } from "../../shared/styles";
@@ -18,11 +15,9 @@ const s = StyleSheet.create({
 });
 
 /** Per roof plane: modules, tilt, azimuth, dead load and load per attachment, with room for the spacing. */
-export function StructuralSheet({ input, sheet }: { input: PacketInput; sheet: SheetInfo }) {
-  const rows = structuralRows(input);
+export function StructuralSheet({ input, sheet }: { input: PrintedPacket; sheet: SheetInfo }) {
+  const { rows, moduleWeight, moduleLength, moduleWidth, expeditedDeadLoadPsf } = input.facts.structural;
   const m = input.equipment.module;
-  const planeStatus = (r: StructuralRow) => worstStatus([r.deadLoad, r.perAttachment].flatMap((c) => (c ? [c.status] : [])));
-  const figure = (r: StructuralRow, which: "deadLoad" | "perAttachment") => formatQuantity(r[which]?.value ?? null, r[which]?.unit ?? "");
   return (
     <PlanSheet input={input} sheet={sheet} subtitle="Dead load of the array on each roof plane">
       <Notice title="Structural adequacy is not assessed here">
@@ -40,11 +35,11 @@ export function StructuralSheet({ input, sheet }: { input: PacketInput; sheet: S
             { header: "Azimuth", width: 0.8, render: (r: StructuralRow) => r.azimuth, mono: true, align: "right" },
             { header: "Array area", width: 1, render: (r: StructuralRow) => r.areaFt2, mono: true, align: "right" },
             { header: "Array weight", width: 1, render: (r: StructuralRow) => r.weightLb, mono: true, align: "right" },
-            { header: "Dead load", width: 1.1, render: (r: StructuralRow) => figure(r, "deadLoad"), mono: true, align: "right" },
+            { header: "Dead load", width: 1.1, render: (r: StructuralRow) => r.deadLoad, mono: true, align: "right" },
             { header: "Attachments", width: 0.9, render: (r: StructuralRow) => String(r.attachmentCount), mono: true, align: "right" },
-            { header: "Load per attachment", width: 1.2, render: (r: StructuralRow) => figure(r, "perAttachment"), mono: true, align: "right" },
+            { header: "Load per attachment", width: 1.2, render: (r: StructuralRow) => r.perAttachment, mono: true, align: "right" },
             { header: "Attachment spacing (in)", width: 1.5, render: () => <View style={s.blank} /> },
-            { header: "Result", width: 0.7, render: (r: StructuralRow) => <StatusMark status={planeStatus(r)} /> },
+            { header: "Result", width: 0.7, render: (r: StructuralRow) => <StatusMark status={r.status} /> },
           ]}
           rows={rows}
           fontSize={8.5}
@@ -54,11 +49,11 @@ export function StructuralSheet({ input, sheet }: { input: PacketInput; sheet: S
         <View style={s.left}>
           <Section title="Basis">
             <Text style={base.paragraph}>
-              Module: {m.maker} {m.model}, {formatNumber(m.specs.weightLb)} lb, {formatNumber(m.specs.lengthIn)} × {formatNumber(m.specs.widthIn)} in. Array weight = modules × module weight + the racking
+              Module: {m.maker} {m.model}, {moduleWeight} lb, {moduleLength} × {moduleWidth} in. Array weight = modules × module weight + the racking
               weight entered for the plane. Dead load = array weight / array area. Load per attachment = array weight / attachments on the plane.
             </Text>
             <Text style={base.paragraph}>
-              Many AHJs accept arrays up to about {EXPEDITED_DEAD_LOAD_PSF} lb/ft² without a structural letter; above that, or where the AHJ asks, expect an engineer's review. Ask the AHJ what it accepts.
+              Many AHJs accept arrays up to about {expeditedDeadLoadPsf} lb/ft² without a structural letter; above that, or where the AHJ asks, expect an engineer's review. Ask the AHJ what it accepts.
             </Text>
           </Section>
         </View>

@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
-import type { PacketInput } from "@/lib/documents/packets/input";
-import { conductorSchedule, equipmentSchedule, ratingLines, type ConductorRow, type EquipmentRow, type RatingLine } from "@/lib/documents/packets/facts";
+import type { ConductorRow, EquipmentRow, RatingLine } from "@/lib/documents/packets/facts";
+import type { PrintedPacket } from "@/lib/documents/packets/printed";
 import { Section, StatusMark, Table } from "../../shared/blocks";
 import { PlanSheet } from "../../shared/sheet-page";
 import { base } from "../../shared/styles";
@@ -14,7 +14,7 @@ const s = StyleSheet.create({
 });
 
 /** Ratings, site conditions, the equipment schedule with listings, and the conductor schedule. */
-export function SystemSummarySheet({ input, sheet }: { input: PacketInput; sheet: SheetInfo }) {
+export function SystemSummarySheet({ input, sheet }: { input: PrintedPacket; sheet: SheetInfo }) {
   const { summary } = input.review;
   const j = input.jurisdiction;
   const conditions: RatingLine[] = [
@@ -38,7 +38,7 @@ export function SystemSummarySheet({ input, sheet }: { input: PacketInput; sheet
     <PlanSheet input={input} sheet={sheet} subtitle="Figures from the design review of this revision">
       <View style={s.columns}>
         <View style={s.left}>
-          <Section title="System ratings">{valueTable(ratingLines(input))}</Section>
+          <Section title="System ratings">{valueTable(input.facts.ratingLines)}</Section>
           <Section title="Site conditions">{valueTable(conditions)}</Section>
           <Section title="Design review">
             <Text style={base.paragraph}>
@@ -61,7 +61,7 @@ export function SystemSummarySheet({ input, sheet }: { input: PacketInput; sheet
                 { header: "Rating", width: 2.4, render: (r: EquipmentRow) => r.rating },
                 { header: "Listing and certification", width: 2.6, render: (r: EquipmentRow) => r.listing },
               ]}
-              rows={equipmentSchedule(input)}
+              rows={input.facts.equipmentSchedule}
               fontSize={8}
             />
           </Section>
@@ -77,7 +77,7 @@ export function SystemSummarySheet({ input, sheet }: { input: PacketInput; sheet
                 { header: "Length", width: 0.8, render: (r: ConductorRow) => r.lengthFt, mono: true, align: "right" },
                 { header: "Protection", width: 1, render: (r: ConductorRow) => r.ocpd },
               ]}
-              rows={conductorSchedule(input)}
+              rows={input.facts.conductorSchedule}
               fontSize={8}
             />
           </Section>

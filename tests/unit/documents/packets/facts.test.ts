@@ -1,6 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { describeCheck } from "@/lib/documents/packets/check-methods";
-import { equipmentSchedule, formatQuantity, labelValueLines, listingText, printable, printableDeep, scopeOfWork, structuralRows } from "@/lib/documents/packets/facts";
+import { equipmentSchedule, labelValueLines, listingText, scopeOfWork, structuralRows } from "@/lib/documents/packets/facts";
+import { formatQuantity, printable, printableDeep } from "@/lib/documents/text";
 import { packetFixture } from "@/tests/support/packet-fixture";
 
 const FIXTURES = [

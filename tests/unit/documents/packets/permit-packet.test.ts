@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, test } from "vitest";
 import type { PacketInput } from "@/lib/documents/packets/input";
-import { formatQuantity } from "@/lib/documents/packets/facts";
+import { formatQuantity } from "@/lib/documents/text";
 import { countPages } from "@/lib/documents/packets/merge-datasheets";
 import { renderPacketPdf } from "@/lib/documents/packets/render";
 import { planPermitSheets } from "@/lib/documents/packets/sheet-plan";
