@@ -1,5 +1,5 @@
 // Single-line diagrams drawn from the design: pure layout, rendered by
-// components/sld (SVG) and templates/pdf/single-line.tsx (PDF).
+// components/sld (SVG) and templates/pdf/shared/single-line.tsx (PDF).
 export { layoutSingleLine, type SingleLineOptions } from "./layout-single-line";
 export {
   SLD_COLORS,

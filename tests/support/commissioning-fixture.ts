@@ -1,7 +1,7 @@
 // A commissioning document input for template and render tests: an invented installer,
 // customer and equipment, with results computed by the real commissioning checks.
 import { checkCommissioning, commissioningComplete, type CommissioningRecord } from "@/lib/engineering/commissioning";
-import type { CommissioningDocumentInput, CommissioningDocumentKind } from "@/lib/field/commissioning-document-input";
+import type { CommissioningDocumentInput, CommissioningDocumentKind } from "@/lib/documents/commissioning/input";
 
 export const REQUIRED_PROFILE = "IEEE 1547-2018 Category B, utility default settings";
 

@@ -3,7 +3,7 @@
 import { runDesignReview } from "@/lib/design/run-review";
 import { toEngineInput } from "@/lib/design/to-engine";
 import type { PacketKind } from "@/lib/domain/stored-values";
-import type { PacketInput } from "@/lib/packets/packet-input";
+import type { PacketInput } from "@/lib/documents/packets/input";
 import { DesignInput } from "@/lib/schemas/design";
 import { EquipmentInput, type EquipmentDto } from "@/lib/schemas/equipment";
 import { DEMO_CATALOG } from "@/lib/seed/demo-catalog";

@@ -1,6 +1,6 @@
 // A payment receipt input for template and render tests: invented organization, payer,
 // authorities and card brand; amounts in integer cents as the server computes them.
-import type { ReceiptInput } from "@/lib/fees/receipt-input";
+import type { ReceiptInput } from "@/lib/documents/receipt/input";
 
 export const RECEIPT_LINES: ReceiptInput["lines"] = [
   {

@@ -7,7 +7,7 @@ import type { Viewer } from "@/lib/domain/permissions";
 import type { NecEdition } from "@/lib/engineering";
 import { AppError } from "@/lib/errors";
 import type { PacketKind } from "@/lib/domain/stored-values";
-import type { PacketInput } from "@/lib/packets/packet-input";
+import type { PacketInput } from "@/lib/documents/packets/input";
 import { DesignInput } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 import { getDesignWithContext } from "./designs";

@@ -6,8 +6,8 @@ import { Organization, Packet, ShareLink, ShareLinkAccess, ShareLinkMiss, ShareL
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import type { PacketKind, ShareLinkAccessKind } from "@/lib/domain/stored-values";
-import { PACKET_TITLES, type PacketInput } from "@/lib/packets/packet-input";
-import { siteAddress } from "@/lib/packets/pdf-facts";
+import { PACKET_TITLES, type PacketInput } from "@/lib/documents/packets/input";
+import { siteAddress } from "@/lib/documents/packets/facts";
 import { CreateShareLinkInput } from "@/lib/schemas/share-link";
 import { inspectorLinkEmail } from "@/templates/email/inspector-link";
 import { db } from "../db";

@@ -1,10 +1,10 @@
 import "server-only";
 import { createHash, randomUUID } from "node:crypto";
 import { AuditEvent, Packet } from "@/models";
-import { planGenerationSteps, type GenerationStep } from "@/lib/packets/generation-steps";
-import { appendPdfs } from "@/lib/packets/merge-datasheets";
-import { PACKET_TITLES, type PacketInput } from "@/lib/packets/packet-input";
-import { packetSheetTitles, renderPacketPdf } from "@/lib/packets/render-packet";
+import { planGenerationSteps, type GenerationStep } from "@/lib/documents/packets/generation-steps";
+import { appendPdfs } from "@/lib/documents/packets/merge-datasheets";
+import { PACKET_TITLES, type PacketInput } from "@/lib/documents/packets/input";
+import { packetSheetTitles, renderPacketPdf } from "@/lib/documents/packets/render";
 import { db } from "../db";
 import { deleteObject, getObjectBytes, putObject } from "./storage";
 

@@ -2,7 +2,7 @@ import { expect, test, type Page } from "@playwright/test";
 import { generatePacket } from "../support/packets";
 import { payByCard } from "../support/api";
 import { DEMO, listProjectsAs, pageFor, signIn } from "../support/session";
-import { pageTexts } from "../../unit/packets/read-pdf";
+import { pageTexts } from "../../unit/documents/read-pdf";
 
 // The path a new user took in every role — create, design, review, packets, share, the field record on
 // a phone, fees paid and refunded — and the things they met on the way: no "[object Object]", no source

@@ -2,7 +2,7 @@ import { readdirSync, readFileSync, statSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, test } from "vitest";
 import { localIsoDate } from "@/lib/domain/time-zones";
-import { packetDate } from "@/lib/packets/pdf-facts";
+import { documentDate } from "@/lib/documents/text";
 
 // Every date a user sees is the organization's calendar day. Cutting an ISO timestamp to its first
 // ten characters gives the UTC day, which in the evening in America is already tomorrow.
@@ -16,7 +16,7 @@ function sources(dir: string): string[] {
 
 describe("dates in the organization's zone", () => {
   test("no code that renders or mails takes the UTC day of a timestamp", () => {
-    const files = ["app", "components", "templates", "lib/packets", "lib/field", "lib/server", "lib/fees"].flatMap(sources);
+    const files = ["app", "components", "templates", "lib/documents", "lib/field", "lib/server", "lib/fees"].flatMap(sources);
     const offenders = files.filter((file) => /toISOString\(\)\.slice\(0, ?10\)|At\??\.slice\(0, ?10\)|toISOString\(\)\.split\("T"\)/.test(readFileSync(file, "utf8")));
     expect(offenders).toEqual([]);
   });
@@ -31,7 +31,7 @@ describe("dates in the organization's zone", () => {
     ["2026-07-01T06:00:00Z", "America/Denver", "2026-07-01"],
     ["2026-12-05T09:59:00Z", "Pacific/Honolulu", "2026-12-04"],
   ])("%s in %s is dated %s", (iso, zone, day) => {
-    expect(packetDate(iso, zone)).toBe(day);
+    expect(documentDate(iso, zone)).toBe(day);
     expect(localIsoDate(iso, zone)).toBe(day);
   });
 });

@@ -2,9 +2,10 @@ import { Document, Page, renderToBuffer } from "@react-pdf/renderer";
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, test } from "vitest";
 import { SingleLineSvg } from "@/components/sld/single-line-svg";
+import { paintScene } from "@/lib/documents/single-line";
 import { layoutSingleLine } from "@/lib/sld";
-import { registerPdfFonts } from "@/templates/pdf/fonts";
-import { PdfSingleLine } from "@/templates/pdf/single-line";
+import { registerPdfFonts } from "@/templates/pdf/shared/fonts";
+import { PdfSingleLine } from "@/templates/pdf/shared/single-line";
 import { microFixture, optimizerFixture, stringFixture } from "./sld-designs";
 
 describe("single-line renderers", () => {
@@ -25,7 +26,7 @@ describe("single-line renderers", () => {
       <Document>
         {scenes.map((scene, i) => (
           <Page key={i} size="TABLOID" orientation="landscape">
-            <PdfSingleLine scene={scene} width={1100} height={700} />
+            <PdfSingleLine drawing={paintScene(scene, 1100, 700)} />
           </Page>
         ))}
       </Document>,

@@ -9,9 +9,9 @@ import { failAbandonedPackets, getPacketFile, listPackets, requestPacket, retryP
 import { db } from "@/lib/server/db";
 import { generatePacket } from "@/lib/server/services/packet-generation";
 import { getObjectBytes, putObject } from "@/lib/server/services/storage";
-import { planGenerationSteps } from "@/lib/packets/generation-steps";
-import { packetSheetTitles } from "@/lib/packets/render-packet";
-import type { PacketInput } from "@/lib/packets/packet-input";
+import { planGenerationSteps } from "@/lib/documents/packets/generation-steps";
+import { packetSheetTitles } from "@/lib/documents/packets/render";
+import type { PacketInput } from "@/lib/documents/packets/input";
 import { PDFDocument } from "pdf-lib";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";

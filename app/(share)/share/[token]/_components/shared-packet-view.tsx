@@ -1,6 +1,7 @@
 import { SingleLineSvg } from "@/components/sld/single-line-svg";
 import { formatInZone } from "@/lib/domain/time-zones";
-import { formatNumber, inverterCounts, siteAddress } from "@/lib/packets/pdf-facts";
+import { inverterCounts, siteAddress } from "@/lib/documents/packets/facts";
+import { formatNumber } from "@/lib/documents/text";
 import type { SharedView } from "@/lib/server/data/share-links";
 import { layoutSingleLine } from "@/lib/sld";
 

@@ -4,7 +4,7 @@ import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import type { PacketKind } from "@/lib/domain/stored-values";
-import { PACKET_TITLES } from "@/lib/packets/packet-input";
+import { PACKET_TITLES } from "@/lib/documents/packets/input";
 import type { PacketDto } from "@/lib/dto/packets";
 import type { requestPacketAction, retryPacketAction } from "../actions";
 import { PacketRevision } from "./packet-revision";

@@ -1,6 +1,6 @@
 import { AppError } from "@/lib/errors";
-import { COMMISSIONING_DOCUMENT_KINDS, type CommissioningDocumentKind } from "@/lib/field/commissioning-document-input";
-import { renderCommissioningPdf } from "@/lib/field/render-commissioning-pdf";
+import { COMMISSIONING_DOCUMENT_KINDS, type CommissioningDocumentKind } from "@/lib/documents/commissioning/input";
+import { renderCommissioningPdf } from "@/lib/documents/commissioning/render";
 import { buildCommissioningDocumentInput } from "@/lib/server/data/commissioning";
 import { attachmentHeaders, withAuth } from "@/lib/server/http";
 
