@@ -36,7 +36,7 @@ export async function renderPacketPdf(input: PacketInput, { onSheet }: { onSheet
   const merged = await PDFDocument.create({ updateMetadata: false });
   for (const [index, { page }] of sheetsOf(packet).entries()) {
     await onSheet?.(index);
-    const drawn = await PDFDocument.load(await renderPdf(createElement(PacketDocument, { info, children: page })), { updateMetadata: false });
+    const drawn = await PDFDocument.load(await renderPdf(createElement(PacketDocument, { info }, page)), { updateMetadata: false });
     for (const copied of await merged.copyPages(drawn, drawn.getPageIndices())) merged.addPage(copied);
   }
   merged.setTitle(info.title);

@@ -22,7 +22,6 @@ const phaseWords = (phase: string) => (phase === "3" ? "Three-phase" : "Single-p
 export function ApplicationSheet({ input, sheet }: Sheet) {
   const p = input.project;
   const by = input.preparedBy;
-  const { ratings } = input.review.summary;
   return (
     <FormSheet input={input} sheet={sheet} subtitle={input.utility ? `To ${input.utility.name}` : undefined}>
       <Text style={[base.paragraph, { fontSize: 8.5 }]}>
