@@ -1,10 +1,6 @@
 import { describe, expect, test } from "vitest";
-import { DesignInputError, checkInsulation, checkPolarity, checkStringVoc, insulationRequirement, moduleVocAtV, stringVocWindow, type StringTestReading, type TempCoefficient } from "@/lib/engineering";
-
-// Invented demo modules: "Larkspur" Voc 37.2 V, −0.27 %/°C; "Fenwick" Voc 49.4 V, −0.136 V/°C.
-const LARKSPUR = { moduleVocV: 37.2, vocTempCoeff: { value: -0.27, unit: "%/C" } as TempCoefficient };
-const FENWICK = { moduleVocV: 49.4, vocTempCoeff: { value: -0.136, unit: "V/C" } as TempCoefficient };
-const string = (over: Partial<StringTestReading> = {}): StringTestReading => ({ id: "S1", modulesInSeries: 11, ...LARKSPUR, vocApplies: true, ...over });
+import { DesignInputError, checkStringVoc, moduleVocAtV, stringVocWindow, type StringTestReading, type TempCoefficient } from "@/lib/engineering";
+import { FENWICK, stringReading } from "./fixtures";
 
 describe("module Voc at a temperature: the 690.7(A)(1) coefficient arithmetic at any temperature", () => {
   test.each([
@@ -25,17 +21,17 @@ describe("module Voc at a temperature: the 690.7(A)(1) coefficient arithmetic at
 // The ±5 % window and the 30 °C cell rise over the air are common practice; the correction is 690.7(A)(1)'s.
 describe("string open-circuit voltage before energizing", () => {
   const at = (vocV: number | null, tempC: number | null = 45, source: "module" | "ambient" = "module", over: Partial<StringTestReading> = {}) =>
-    checkStringVoc(string({ vocV, ...over }), { tempC, source }, 2023);
+    checkStringVoc(stringReading({ vocV, ...over }), { tempC, source }, 2023);
 
   test("window at a module temperature: 11 × 37.2 × (1 + 20 × −0.0027) = 387.1 V, ± 5 %", () => {
-    const w = stringVocWindow(string(), { tempC: 45, source: "module" });
+    const w = stringVocWindow(stringReading(), { tempC: 45, source: "module" });
     expect(w.expectedV).toBeCloseTo(387.12, 1);
     expect(w.lowV).toBeCloseTo(387.12 * 0.95, 1);
     expect(w.highV).toBeCloseTo(387.12 * 1.05, 1);
   });
 
   test("window from an air temperature spans cells from the air temperature to 30 °C warmer", () => {
-    const w = stringVocWindow(string(), { tempC: 20, source: "ambient" });
+    const w = stringVocWindow(stringReading(), { tempC: 20, source: "ambient" });
     expect(w.cellC).toEqual({ low: 20, high: 50 });
     expect(w.highV).toBeCloseTo(11 * 37.2 * (1 + 0.0135) * 1.05, 1);
     expect(w.lowV).toBeCloseTo(11 * 37.2 * (1 - 0.0675) * 0.95, 1);
@@ -95,60 +91,5 @@ describe("string open-circuit voltage before energizing", () => {
     [11, 0],
   ])("bad design facts (%d modules, Voc %d V) are input errors", (n, voc) => {
     expect(() => at(387, 45, "module", { modulesInSeries: n, moduleVocV: voc })).toThrow(DesignInputError);
-  });
-});
-
-// IEC 62446-1 insulation resistance test (from memory; partly confirmed, see insulation-resistance.ts):
-// up to 120 V: 250 V test, 0.5 MΩ; to 500 V: 500 V test, 1 MΩ; above: 1000 V test, 1 MΩ.
-describe("string insulation resistance to ground", () => {
-  test.each([
-    [3 * 37.2, 250, 0.5], // 111.6 V
-    [120, 250, 0.5], // the row's top
-    [11 * 37.2, 500, 1], // 409.2 V
-    [500, 500, 1],
-    [16 * 37.2, 1000, 1], // 595.2 V
-  ])("string Voc %d V → test at %d V, at least %d MΩ", (voc, testV, minMohm) => {
-    expect(insulationRequirement(voc)).toEqual({ testV, minMohm });
-  });
-
-  test.each([
-    [11, 220, "pass", 1],
-    [11, 1, "pass", 1], // at the minimum
-    [11, 0.99, "fail", 1],
-    [11, 0, "fail", 1],
-    [3, 0.5, "pass", 0.5],
-    [3, 0.49, "fail", 0.5],
-  ])("%d modules, %d MΩ → %s (minimum %d MΩ)", (n, mohm, status, min) => {
-    const r = checkInsulation(string({ modulesInSeries: n, insulationMohm: mohm }), 2023);
-    expect(r).toMatchObject({ status, value: mohm, limit: min, unit: "MΩ", kind: "string-insulation", clause: "IEC 62446-1 insulation resistance test" });
-  });
-
-  test("a low reading says not to connect, and why", () => {
-    const r = checkInsulation(string({ insulationMohm: 0.3 }), 2023);
-    expect(r.message).toMatch(/insulation may be damaged or wet/);
-    expect(r.fix).toMatch(/Do not connect the string/);
-  });
-
-  test.each([
-    [null, "warn", "missing"],
-    [-2, "fail", "invalid"],
-    [Number.NaN, "fail", "invalid"],
-  ])("reading %j → %s (%s)", (mohm, status, state) => {
-    expect(checkInsulation(string({ insulationMohm: mohm }), 2023)).toMatchObject({ status, reading: state });
-  });
-});
-
-// Basis: the inverter's input marking (+ to +, − to −).
-describe("string polarity", () => {
-  test.each([
-    ["correct", "pass", "recorded"],
-    ["reversed", "fail", "recorded"],
-    [null, "warn", "missing"],
-  ] as const)("%j → %s", (polarity, status, state) => {
-    expect(checkPolarity(string({ polarity }), 2023)).toMatchObject({ status, reading: state, kind: "string-polarity", id: "string-polarity:S1" });
-  });
-
-  test("a reversed string must not be landed", () => {
-    expect(checkPolarity(string({ polarity: "reversed" }), 2023).fix).toMatch(/Do not close the DC disconnect/);
   });
 });
