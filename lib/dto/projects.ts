@@ -1,4 +1,4 @@
-import type { Stage } from "@/lib/domain/stored-values";
+import type { FilingStatus, Stage, WaitingParty } from "@/lib/domain/stored-values";
 
 export type ProjectDto = {
   id: string;
@@ -27,6 +27,10 @@ export type ProjectDto = {
   coordinator: { id: string; name: string } | null;
   installer: { id: string; name: string } | null;
   declaredValuationCents: number | null; // the owner's declared value of the work; percentage fees read it
+  waitingOn: WaitingParty | null;
+  waitingSince: string | null;
+  permitStatus: FilingStatus | null;
+  interconnectionStatus: FilingStatus | null;
   createdAt: string;
   updatedAt: string;
 };

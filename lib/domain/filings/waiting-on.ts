@@ -88,7 +88,11 @@ export function waitingOn(facts: WaitingFacts): WaitingOn {
   if (facts.ptoAt || facts.hold) return null;
   const live = facts.filings.filter((f) => f.status !== "withdrawn");
   if (live.length === 0) return { party: "office", since: facts.createdAt, why: "No filing yet" };
-  const claims = live.map((f) => claimOf(f, facts)).filter((c): c is Claim => c !== null);
+  // A filing still being prepared holds the project only while nothing else is in motion: once the
+  // permit is with the AHJ, that is who the project waits on, and the next application is the office's to-do.
+  const claimsOf = (filings: WaitingFiling[]) => filings.map((f) => claimOf(f, facts)).filter((c): c is Claim => c !== null);
+  const moving = claimsOf(live.filter((f) => f.status !== "preparing"));
+  const claims = moving.length ? moving : claimsOf(live.filter((f) => f.status === "preparing"));
   for (const party of PRIORITY) {
     const mine = claims.filter((c) => c.party === party).sort((a, b) => a.since.localeCompare(b.since));
     if (mine.length) return mine[0]!;

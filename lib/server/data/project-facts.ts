@@ -1,37 +1,37 @@
 import "server-only";
 import type { Transaction } from "sequelize";
-import { CommissioningRecord, CorrectionRound, Design, Filing, Inspection, Project, StageChange } from "@/models";
+import { CommissioningRecord, CorrectionRound, Filing, Inspection, Project, StageChange } from "@/models";
 import { stageFromFacts, resolveStage, waitingOn, type FilingFacts, type StageFacts, type WaitingFacts, type WaitingFiling } from "@/lib/domain/filings";
-import { STAGE_LABELS, type Stage } from "@/lib/domain/stages";
+import { STAGE_LABELS, stageIndex, type Stage } from "@/lib/domain/stages";
 
 const day = (d: Date | null | undefined) => (d ? d.toISOString().slice(0, 10) : null);
 const earliest = (...dates: (string | null | undefined)[]) => dates.filter((d): d is string => Boolean(d)).sort()[0] ?? null;
 
-type Loaded = { project: Project; filings: Filing[]; designPasses: boolean; record: CommissioningRecord | null };
+type Loaded = { project: Project; filings: Filing[]; record: CommissioningRecord | null };
 
 async function load(projectId: string, transaction: Transaction): Promise<Loaded> {
   const project = await Project.findByPk(projectId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!project) throw new Error(`project ${projectId} vanished`);
-  const [filings, design, record] = await Promise.all([
+  const [filings, record] = await Promise.all([
     Filing.findAll({ where: { projectId }, include: [{ model: Inspection, as: "inspections" }, { model: CorrectionRound, as: "rounds" }], order: [["createdAt", "ASC"]], transaction }),
-    Design.findOne({ where: { projectId }, attributes: ["reviewStatus"], transaction }),
     CommissioningRecord.findOne({ where: { projectId }, attributes: ["createdAt", "status", "completedAt"], transaction }),
   ]);
-  return { project, filings, designPasses: design?.reviewStatus === "pass" || design?.reviewStatus === "warn", record };
+  return { project, filings, record };
 }
 
 const filingFacts = (f: Filing | undefined): FilingFacts | null =>
   f ? { status: f.status, referenceNumber: f.referenceNumber, submittedAt: f.submittedOn, decidedAt: f.decidedOn } : null;
 
 /** The facts of one project as the stage and waiting-on rules read them. */
-function factsOf({ filings, designPasses, record }: Loaded): { stage: StageFacts; permit?: Filing; interconnection?: Filing } {
+function factsOf({ project, filings, record }: Loaded): { stage: StageFacts; permit?: Filing; interconnection?: Filing } {
   const permit = filings.find((f) => f.kind === "permit");
   const interconnection = filings.find((f) => f.kind === "interconnection");
   const permitInspections = permit?.inspections ?? [];
   const firstInspection = earliest(...permitInspections.filter((i) => i.result && i.result !== "cancelled").map((i) => i.resultOn ?? day(i.recordedAt)));
   const finalPassed = earliest(...permitInspections.filter((i) => i.kind === "final" && i.result === "passed").map((i) => i.resultOn ?? day(i.recordedAt)));
   const stage: StageFacts = {
-    designChecked: designPasses,
+    // The office marks a design checked by hand once it has read the review; a filed permit implies it.
+    designChecked: project.handStage !== null && stageIndex(project.handStage) >= stageIndex("design_checked"),
     permit: filingFacts(permit),
     interconnection: filingFacts(interconnection),
     installedAt: earliest(firstInspection, day(record?.createdAt)),

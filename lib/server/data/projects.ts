@@ -11,6 +11,7 @@ import { env } from "../env";
 import { holdOrMergeMail } from "../services/outbox";
 import { isUuid } from "./ids";
 import { diffFields, recordAudit } from "./audit";
+import { ensureDefaultFilings } from "./filings";
 import type { ProjectDto, StageChangeDto } from "@/lib/dto/projects";
 
 const DAY_MS = 86_400_000;
@@ -52,6 +53,10 @@ function toProjectDto(p: Project, now = Date.now()): ProjectDto {
     coordinator: p.coordinator ? { id: p.coordinator.id, name: p.coordinator.name } : null,
     installer: p.installer ? { id: p.installer.id, name: p.installer.name } : null,
     declaredValuationCents: p.declaredValuationCents ?? null,
+    waitingOn: p.waitingOn ?? null,
+    waitingSince: p.waitingSince?.toISOString() ?? null,
+    permitStatus: p.permitStatus ?? null,
+    interconnectionStatus: p.interconnectionStatus ?? null,
     createdAt: p.createdAt.toISOString(),
     updatedAt: p.updatedAt.toISOString(),
   };
@@ -142,6 +147,7 @@ export async function createProject({ viewer, values }: { viewer: Viewer; values
     const project = await Project.create({ ...values, organizationId: viewer.organizationId, stage: "draft", stageChangedAt: new Date() }, { transaction });
     await StageChange.create({ organizationId: viewer.organizationId, projectId: project.id, fromStage: null, toStage: "draft", changedById: viewer.id, note: "Project created" }, { transaction });
     await recordAudit({ viewer, action: "project.created", entityType: "project", entityId: project.id, changes: diffFields({}, values) }, { transaction });
+    await ensureDefaultFilings(project, { transaction, actorId: viewer.id });
     return project.id;
   });
   return getProjectById({ viewer, projectId: id });
@@ -157,6 +163,7 @@ export async function updateProject({ viewer, projectId, values }: { viewer: Vie
     const before = project.get({ plain: true }) as Record<string, unknown>;
     await project.update(values, { transaction });
     await recordAudit({ viewer, action: "project.updated", entityType: "project", entityId: project.id, changes: diffFields(before, values) }, { transaction });
+    await ensureDefaultFilings(project, { transaction, actorId: viewer.id });
   });
   return getProjectById({ viewer, projectId });
 }
@@ -189,7 +196,8 @@ export async function changeProjectStage({ viewer, projectId, toStage, note }: {
       if (missing) throw new AppError("CONFLICT", `${missing} Move it anyway only with a note saying why.`, { note: [`Say why: ${missing.toLowerCase()}`] });
     }
     const at = new Date();
-    await project.update({ stage: toStage, stageChangedAt: at }, { transaction });
+    // A stage set by hand stands until the facts of the filings pass it (lib/domain/filings).
+    await project.update({ stage: toStage, stageChangedAt: at, handStage: toStage }, { transaction });
     await StageChange.create({ organizationId: viewer.organizationId, projectId, fromStage, toStage, changedById: viewer.id, note }, { transaction });
     await recordAudit({ viewer, action: "project.stage-changed", entityType: "project", entityId: projectId, changes: { stage: { before: fromStage, after: toStage }, ...(note ? { note: { before: null, after: note } } : {}) } }, { transaction });
     // The coordinator and installer hear of it, unless they made the change themselves.

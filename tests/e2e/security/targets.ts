@@ -13,6 +13,8 @@ export type Targets = {
   packetId: string;
   shareLinkId: string;
   fileId: string;
+  /** The project's permit filing (items and inspections are tried with this id too: any id of the company's rows will do). */
+  filingId: string;
   paymentId: string;
   equipmentId: string;
   jurisdictionId: string;
@@ -115,6 +117,7 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
   const [jurisdiction] = await query<Record<string, unknown>>("select id, name, state, nec_edition as \"necEdition\", record_low_temp_c as \"recordLowTempC\", high_design_temp_c as \"highDesignTempC\", coalesce(notes, '') as notes from jurisdictions where id = $1", [source.jurisdiction.id]);
   const [utility] = await query<Record<string, unknown>>("select id, name, service_voltages as \"serviceVoltages\", accepted_grid_profiles as \"acceptedGridProfiles\", coalesce(notes, '') as notes from utilities where id = $1", [source.utility.id]);
   const [user] = await query<{ name: string; email: string }>("select name, email from users where id = $1", [userId]);
+  const [filing] = await query<{ id: string }>("select id from filings where project_id = $1 and kind = 'permit'", [projectId]);
 
   for (const client of [coordinator, admin, crew]) await client.dispose();
   return {
@@ -123,6 +126,7 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
     packetId,
     shareLinkId,
     fileId,
+    filingId: filing!.id,
     paymentId,
     equipmentId: equipment.id,
     jurisdictionId: String(jurisdiction!.id),

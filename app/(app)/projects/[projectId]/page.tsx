@@ -3,6 +3,7 @@ import Link from "next/link";
 import { CheckStatusChip } from "@/components/review/check-status";
 import { LocalTime } from "@/components/time/local-time";
 import { StageBadge } from "@/components/ui/stage-badge";
+import { WAITING_PARTY_LABELS } from "@/lib/domain/filings";
 import { can } from "@/lib/domain/permissions";
 import { requireUser } from "@/lib/server/auth";
 import { getFieldSummary } from "@/lib/server/data/commissioning";
@@ -44,6 +45,9 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         <Link href={`/projects/${project.id}/documents`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
           Documents
         </Link>
+        <Link href={`/projects/${project.id}/filings`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
+          Filings
+        </Link>
         <Link href={`/projects/${project.id}/field`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
           Field record
         </Link>
@@ -65,6 +69,20 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         </span>
         <span className="text-sm">
           Next: <strong>{project.nextAction}</strong>
+        </span>
+        <span className="text-sm" data-testid="project-waiting-on">
+          {project.waitingOn ? (
+            <>
+              Waiting on <strong>{WAITING_PARTY_LABELS[project.waitingOn]}</strong>
+              {project.waitingSince ? (
+                <>
+                  {" "}since <LocalTime iso={project.waitingSince} style="date" />
+                </>
+              ) : null}
+            </>
+          ) : (
+            "Nobody is holding it"
+          )}
         </span>
       </section>
 

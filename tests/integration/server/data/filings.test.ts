@@ -170,7 +170,7 @@ describe("filings", () => {
   it("marks a submitted filing as owing a new revision when the design changes, and the office holds the project", async () => {
     const { project, packets, permit, interconnection } = await filedProject();
     await changeFilingStatus({ viewer: coordinator(), input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" } });
-    expect((await stageOf(project.id)).waitingOn).toBe("office"); // the interconnection application is still being prepared
+    expect((await stageOf(project.id)).waitingOn).toBe("ahj"); // the interconnection application still being prepared does not hold it
     await changeFilingStatus({ viewer: coordinator(), input: { filingId: interconnection.id, status: "submitted", packetId: packets.interconnection1.id, sentTo: "", note: "" } });
     expect((await stageOf(project.id)).waitingOn).toBe("ahj");
     await db().transaction(async (transaction) => {

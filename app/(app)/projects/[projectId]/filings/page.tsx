@@ -1,0 +1,95 @@
+import type { Metadata } from "next";
+import { ProjectSubpageHeader } from "@/components/projects/project-subpage-header";
+import { LocalTime } from "@/components/time/local-time";
+import { can } from "@/lib/domain/permissions";
+import { FILING_KIND_LABELS, INSPECTION_KIND_LABELS, INSPECTION_KINDS_BY_FILING, NEXT_STATUSES, WAITING_PARTY_LABELS, WITH_THE_AUTHORITY, isFiled, needsReinspection } from "@/lib/domain/filings";
+import { calendarDayText, localIsoDate } from "@/lib/domain/time-zones";
+import { centsToDollarsText } from "@/lib/fees/money";
+import { requireUser } from "@/lib/server/auth";
+import { getDesignStatus } from "@/lib/server/data/designs";
+import { listProjectFilings } from "@/lib/server/data/filings";
+import { getOrganization } from "@/lib/server/data/organizations";
+import { listPackets } from "@/lib/server/data/packets";
+import { getProjectFees } from "@/lib/server/data/project-fees";
+import { loadProjectOr404 } from "@/lib/server/pages";
+import { FilingCard, type FilingActions } from "./_components/filing-card";
+import {
+  answerItemAction,
+  changeFilingStatusAction,
+  recordInspectionResultAction,
+  recordPtoAction,
+  recordRoundAction,
+  scheduleInspectionAction,
+  updateFilingDetailsAction,
+} from "./actions";
+
+export const metadata: Metadata = { title: "Filings" };
+
+const ACTIONS: FilingActions = {
+  change: changeFilingStatusAction,
+  update: updateFilingDetailsAction,
+  recordRound: recordRoundAction,
+  answer: answerItemAction,
+  book: scheduleInspectionAction,
+  recordResult: recordInspectionResultAction,
+  recordPto: recordPtoAction,
+};
+
+export default async function FilingsPage({ params }: { params: Promise<{ projectId: string }> }) {
+  const viewer = await requireUser();
+  const project = await loadProjectOr404(viewer, (await params).projectId);
+  const canEdit = can(viewer, "filings:edit", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null });
+  const [filings, organization, packets, design, fees] = await Promise.all([
+    listProjectFilings({ viewer, projectId: project.id }),
+    getOrganization({ viewer }),
+    listPackets({ viewer, projectId: project.id }),
+    getDesignStatus({ viewer, projectId: project.id }),
+    canEdit ? getProjectFees({ viewer, projectId: project.id }) : null,
+  ]);
+  const today = localIsoDate(new Date().toISOString(), organization.timeZone);
+  const payments = (fees?.payments ?? []).filter((p) => p.status !== "pending" && p.status !== "expired").map((p) => ({ id: p.id, label: `${centsToDollarsText(p.amountCents)} paid ${calendarDayText(localIsoDate(p.paidAt ?? p.createdAt, organization.timeZone))}` }));
+  return (
+    <div className="space-y-5">
+      <ProjectSubpageHeader project={project} title="Filings">
+        Each authority that must say yes, side by side: what went in, what came back, the inspections, and who holds the project now. Requirements differ from one AHJ and utility to the next: follow each authority&apos;s own instructions.
+      </ProjectSubpageHeader>
+      <section className="panel flex flex-wrap items-center gap-x-6 gap-y-1 text-sm" aria-label="Waiting on" data-testid="waiting-on">
+        {filings.waitingOn ? (
+          <>
+            <span>
+              Waiting on <strong>{WAITING_PARTY_LABELS[filings.waitingOn]}</strong>
+            </span>
+            {filings.waitingSince ? (
+              <span className="text-ink-soft">
+                since <LocalTime iso={filings.waitingSince} style="date" />
+              </span>
+            ) : null}
+          </>
+        ) : (
+          <span>Nobody is holding this project.</span>
+        )}
+      </section>
+      {filings.filings.length === 0 ? <p className="panel text-sm text-ink-soft">No filing yet: choose the project&apos;s AHJ and utility on its edit page.</p> : null}
+      {filings.filings.map((filing) => {
+        const kinds = INSPECTION_KINDS_BY_FILING[filing.kind];
+        return (
+          <FilingCard
+            key={filing.id}
+            filing={filing}
+            title={`${FILING_KIND_LABELS[filing.kind]} · ${filing.authority.name}`}
+            today={today}
+            canEdit={canEdit}
+            actions={ACTIONS}
+            designRevision={design?.revision ?? null}
+            nextStatuses={NEXT_STATUSES[filing.status].filter((s) => s !== "corrections_requested")}
+            revisions={packets.filter((p) => p.status === "ready" && (filing.kind === "other" || p.kind === filing.kind)).map((p) => ({ id: p.id, label: `Rev ${p.revision}` })).reverse()}
+            payments={payments}
+            takesRound={WITH_THE_AUTHORITY.includes(filing.status)}
+            inspectionKinds={filing.kind === "permit" ? (filing.status === "approved" ? kinds : []) : isFiled(filing.status) ? kinds : []}
+            failedInspections={filing.inspections.filter((i) => needsReinspection(i.result)).map((i) => ({ id: i.id, label: `${INSPECTION_KIND_LABELS[i.kind]} of ${i.resultOn ? calendarDayText(i.resultOn) : i.scheduledFor ? calendarDayText(i.scheduledFor) : "an unknown day"}` }))}
+          />
+        );
+      })}
+    </div>
+  );
+}
