@@ -29,7 +29,7 @@ export function FilingStatusForm(props: {
     ChangeFilingStatusInput,
     { filingId, status: first, on: today, referenceNumber: props.referenceNumber ?? "", packetId: props.revisions[0]?.id ?? "", channel: "portal", sentTo: "", note: "" },
     (raw) => props.change(raw as never),
-    () => form.reset({ ...form.getValues(), note: "" }),
+    (saved) => saved.reset({ ...saved.getValues(), note: "" }),
   );
   const status = useWatch({ control: form.control, name: "status" }) as FilingStatus;
   const sending = status === "submitted" || status === "resubmitted";

@@ -16,7 +16,7 @@ type BookValues = { filingId: string; kind: string; scheduledFor: string; timeWi
 export function BookInspectionForm(props: { filingId: string; kinds: readonly InspectionKind[]; failed: { id: string; label: string }[]; today: string; book: typeof scheduleInspectionAction }) {
   const { filingId } = props;
   const blank = { filingId, kind: props.kinds[props.kinds.length - 1] ?? "", scheduledFor: props.today, timeWindow: "", inspectorName: "", reinspectionOfId: props.failed[0]?.id ?? "" };
-  const { form, submit, message, errors, busy } = useFilingForm<BookValues, { inspectionId: string }>(ScheduleInspectionInput, blank, (raw) => props.book(raw as never), () => form.reset(blank));
+  const { form, submit, message, errors, busy } = useFilingForm<BookValues, { inspectionId: string }>(ScheduleInspectionInput, blank, (raw) => props.book(raw as never), (saved) => saved.reset(blank));
   const id = (name: string) => `${filingId}-book-${name}`;
   return (
     <form onSubmit={submit} noValidate className="space-y-3" aria-label="Book an inspection">

@@ -15,7 +15,7 @@ type Items = { items: Values["items"] };
 /** The authority's comments came back: round N, each comment an item to answer. */
 export function RoundForm({ filingId, number, today, record }: { filingId: string; number: number; today: string; record: typeof recordRoundAction }) {
   const blank = { filingId, receivedOn: today, items: [{ text: "", reference: "" }] };
-  const { form, submit, message, errors, busy } = useFilingForm<Values, { number: number }>(RecordRoundInput, blank, (raw) => record(raw), () => form.reset(blank));
+  const { form, submit, message, errors, busy } = useFilingForm<Values, { number: number }>(RecordRoundInput, blank, (raw) => record(raw), (saved) => saved.reset(blank));
   return (
     <form onSubmit={submit} noValidate className="space-y-3" aria-label={`Record correction round ${number}`}>
       <FormMessage kind="error">{message}</FormMessage>

@@ -2,7 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useForm, type DefaultValues, type FieldValues, type Resolver } from "react-hook-form";
+import { useForm, type DefaultValues, type FieldValues, type Resolver, type UseFormReturn } from "react-hook-form";
 import type { z } from "zod";
 import { useActionSubmit } from "@/components/forms/use-action-submit";
 import type { ActionResult } from "@/lib/dto/action-result";
@@ -11,11 +11,11 @@ import type { ActionResult } from "@/lib/dto/action-result";
  * A filing form: checked with the server's own schema before it is sent; once saved the page reloads
  * its facts (the stage and waiting-on may have moved). A refusal keeps every typed value.
  */
-export function useFilingForm<T extends FieldValues, R>(schema: z.ZodType, defaults: DefaultValues<T>, send: (raw: T) => Promise<ActionResult<R>>, onSaved?: () => void) {
+export function useFilingForm<T extends FieldValues, R>(schema: z.ZodType, defaults: DefaultValues<T>, send: (raw: T) => Promise<ActionResult<R>>, onSaved?: (form: UseFormReturn<T>) => void) {
   const router = useRouter();
   const form = useForm<T>({ resolver: zodResolver(schema as never) as unknown as Resolver<T>, defaultValues: defaults });
   const { submit, message } = useActionSubmit(form, send, () => {
-    onSaved?.();
+    onSaved?.(form);
     router.refresh();
   });
   return { form, submit, message, errors: form.formState.errors, busy: form.formState.isSubmitting };
