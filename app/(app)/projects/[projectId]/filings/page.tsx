@@ -86,7 +86,7 @@ export default async function FilingsPage({ params }: { params: Promise<{ projec
             payments={payments}
             takesRound={WITH_THE_AUTHORITY.includes(filing.status)}
             inspectionKinds={filing.kind === "permit" ? (filing.status === "approved" ? kinds : []) : isFiled(filing.status) ? kinds : []}
-            failedInspections={filing.inspections.filter((i) => needsReinspection(i.result)).map((i) => ({ id: i.id, label: `${INSPECTION_KIND_LABELS[i.kind]} of ${i.resultOn ? calendarDayText(i.resultOn) : i.scheduledFor ? calendarDayText(i.scheduledFor) : "an unknown day"}` }))}
+            failedInspections={filing.inspections.filter((i) => needsReinspection(i.result) && !filing.inspections.some((r) => r.reinspectionOf === i.id)).map((i) => ({ id: i.id, label: `${INSPECTION_KIND_LABELS[i.kind]} of ${i.resultOn ? calendarDayText(i.resultOn) : i.scheduledFor ? calendarDayText(i.scheduledFor) : "an unknown day"}` }))}
           />
         );
       })}

@@ -159,17 +159,17 @@ export function FilingCard(props: Props) {
         <div className="space-y-2">
           {props.nextStatuses.length ? (
             <Task title="Change the status">
-              <FilingStatusForm filingId={filing.id} nextStatuses={props.nextStatuses} referenceNumber={filing.referenceNumber} revisions={props.revisions} today={today} change={actions.change} />
+              <FilingStatusForm key={filing.status} filingId={filing.id} nextStatuses={props.nextStatuses} referenceNumber={filing.referenceNumber} revisions={props.revisions} today={today} change={actions.change} />
             </Task>
           ) : null}
           {props.takesRound ? (
             <Task title={`Record corrections (round ${filing.rounds.length + 1})`}>
-              <RoundForm filingId={filing.id} number={filing.rounds.length + 1} today={today} record={actions.recordRound} />
+              <RoundForm key={filing.rounds.length} filingId={filing.id} number={filing.rounds.length + 1} today={today} record={actions.recordRound} />
             </Task>
           ) : null}
           {props.inspectionKinds.length ? (
             <Task title="Book an inspection">
-              <BookInspectionForm filingId={filing.id} kinds={props.inspectionKinds} failed={props.failedInspections} today={today} book={actions.book} />
+              <BookInspectionForm key={`${filing.inspections.length}-${props.failedInspections.length}`} filingId={filing.id} kinds={props.inspectionKinds} failed={props.failedInspections} today={today} book={actions.book} />
             </Task>
           ) : null}
           {filing.kind === "interconnection" && filing.status === "approved" && !filing.ptoOn ? (
