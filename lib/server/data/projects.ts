@@ -8,7 +8,7 @@ import type { ProjectListQuery, ProjectValues } from "@/lib/schemas/project";
 import { stageChangedEmail, type StageStep } from "@/templates/email/stage-changed";
 import { db } from "../db";
 import { env } from "../env";
-import { holdOrMergeMail } from "../services/outbox";
+import { holdOrMergeMail } from "./outbox";
 import { isUuid } from "./ids";
 import { diffFields, recordAudit } from "./audit";
 import type { ProjectDto, StageChangeDto } from "@/lib/dto/projects";

@@ -11,11 +11,11 @@ import { DESIGN_MODELS, demoDesign, type CatalogIds } from "@/lib/seed/demo-desi
 import { saveDesignDraft } from "@/lib/server/data/designs";
 import { getFeeSchedule, saveFeeSchedule } from "@/lib/server/data/fee-schedules";
 import { FeeScheduleInput } from "@/lib/schemas/fee-schedule";
-import { reconcilePendingPayments, refundPayment, startPayment } from "@/lib/server/data/payments";
+import { reconcilePendingPayments, refundPayment, startPayment } from "@/lib/server/use-cases/payments";
 import { getProjectFees, setDeclaredValuation } from "@/lib/server/data/project-fees";
 import { db } from "@/lib/server/db";
 import { getObjectBytes } from "@/lib/server/services/storage";
-import { issueDueReceipts } from "@/lib/server/services/receipts";
+import { issueDueReceipts } from "@/lib/server/jobs/issue-receipts";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
 
