@@ -10,7 +10,8 @@ import { db } from "../db";
 import { enqueuePacketJob } from "../services/jobs";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
-import { buildPacketInput } from "./packet-input";
+import { buildPacketInput, reviewedOrConflict } from "./packet-input";
+import { getReviewedDesign } from "./reviewed-design";
 import { getProjectById } from "./projects";
 import type { PacketDto } from "@/lib/dto/packets";
 
@@ -58,7 +59,8 @@ export async function requestPacket({ viewer, projectId, kind, overrideReason }:
   const project = await getProjectById({ viewer, projectId });
   if (!can(viewer, "project:edit", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null })) throw new AppError("FORBIDDEN", "Your role cannot generate packets.");
   await failAbandonedPackets({ projectId });
-  const base = await buildPacketInput({ viewer, projectId, kind });
+  const reviewed = reviewedOrConflict(await getReviewedDesign({ viewer, projectId, project }));
+  const base = await buildPacketInput({ viewer, reviewed, kind });
   const failing = base.review.summary.status === "fail";
   const reason = overrideReason?.trim() || null;
   if (failing && !reason) {

@@ -13,7 +13,7 @@ import { applySessionState } from "../data/payment-events";
 import {
   createPendingPayment, expirePayment, getPaymentDto, getPaymentRefs, getRefundablePayment, getRefundMailFacts, listStalePendingPayments, setCheckoutSession, touchPayment, type PaymentRef,
 } from "../data/payments";
-import { getProjectFees } from "../data/project-fees";
+import { designSizes, feesForProject } from "../data/project-fees";
 import { getProjectById } from "../data/projects";
 import { recordRefund } from "../data/refunds";
 import { stripe } from "../services/payments";
@@ -31,16 +31,19 @@ async function releasePending(payment: PaymentRef) {
 
 /**
  * Starts paying the chosen unpaid lines. The amount is worked out here, from the schedules and the
- * design, in integer cents; the browser only names the lines. Returns the hosted checkout page.
+ * design, in integer cents; the browser only names the lines. The project is read and its design
+ * reviewed once; after unfinished checkouts are ended, only the payments are read again. Returns the
+ * hosted checkout page.
  */
 export async function startPayment({ viewer, projectId, feeKeys }: { viewer: Viewer; projectId: string; feeKeys: string[] }): Promise<{ paymentId: string; checkoutUrl: string }> {
   const project = await getProjectById({ viewer, projectId });
   if (!can(viewer, "fees:pay")) throw new AppError("FORBIDDEN", "Your role cannot pay fees.");
-  let fees = await getProjectFees({ viewer, projectId });
+  const sizes = await designSizes({ viewer, project });
+  let fees = await feesForProject({ viewer, project, sizes });
   const stale = fees.payments.filter((p) => p.status === "pending" && fees.lines.some((l) => feeKeys.includes(l.feeKey) && l.paymentId === p.id));
   if (stale.length) {
     for (const p of await getPaymentRefs({ viewer, paymentIds: stale.map((s) => s.id) })) await releasePending(p);
-    fees = await getProjectFees({ viewer, projectId });
+    fees = await feesForProject({ viewer, project, sizes });
   }
   const chosen = fees.lines.filter((l) => feeKeys.includes(l.feeKey));
   if (chosen.length !== new Set(feeKeys).size) throw new AppError("CONFLICT", "Some of the chosen fees no longer apply to this project. Reload the page.");

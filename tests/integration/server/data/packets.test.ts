@@ -15,6 +15,7 @@ import type { PacketInput } from "@/lib/packets/packet-input";
 import { PDFDocument } from "pdf-lib";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
+import { readsOf, sqlDuring } from "../../support/query-log";
 
 // The queue is exercised end to end by the e2e suite; here jobs run in-process.
 vi.mock("@/lib/server/services/jobs", () => ({ enqueuePacketJob: vi.fn(async () => undefined), PACKET_QUEUE: "packet-generate" }));
@@ -186,6 +187,14 @@ describe("packets", () => {
     // Written in the same transaction as the ready mark: one commit stamps both with the same transaction time.
     const [[stamps]] = (await db().query(`select (select xmin::text from packets where id = :packet) as packet, (select xmin::text from audit_events where id = :audit) as audit`, { replacements: { packet: queued.id, audit: audits[0].id } })) as [{ packet: string; audit: string }[], unknown];
     expect(stamps.packet).toBe(stamps.audit);
+  });
+
+  it("reads the project and its AHJ once to queue a packet, reviewing the saved design once", async () => {
+    const project = await projectWithDesign();
+    const { sql } = await sqlDuring(() => requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" }));
+    expect(readsOf(sql, "projects")).toHaveLength(1);
+    expect(readsOf(sql, "jurisdictions")).toHaveLength(1);
+    expect(readsOf(sql, "designs")).toHaveLength(1);
   });
 
   it("keeps packets inside the organization and away from installers and unfinished designs", async () => {
