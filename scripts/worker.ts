@@ -3,13 +3,13 @@
 // run as many as needed with `npm run worker`.
 import PgBoss from "pg-boss";
 import { PACKET_QUEUE, type PacketJob } from "@/lib/server/services/jobs";
-import { deliverDueMail } from "@/lib/server/services/outbox";
-import { generatePacket } from "@/lib/server/services/packet-generation";
+import { deliverDueMail } from "@/lib/server/jobs/deliver-mail";
+import { generatePacket } from "@/lib/server/jobs/generate-packet";
 import { failAbandonedPackets } from "@/lib/server/data/packets";
 import { sweepStorageRemovals } from "@/lib/server/data/storage-removals";
-import { reconcilePendingPayments } from "@/lib/server/data/payments";
+import { reconcilePendingPayments } from "@/lib/server/use-cases/payments";
 import { pruneSignInAttempts } from "@/lib/server/data/sign-in-throttle";
-import { issueDueReceipts } from "@/lib/server/services/receipts";
+import { issueDueReceipts } from "@/lib/server/jobs/issue-receipts";
 
 const url = process.env.DATABASE_URL;
 if (!url) {

@@ -72,7 +72,7 @@ describe("two app servers and two workers", () => {
     // The session is started in-process with the app's own code (same database and processor).
     Object.assign(process.env, cluster.env);
     const { getProjectFees } = await import("@/lib/server/data/project-fees");
-    const { startPayment } = await import("@/lib/server/data/payments");
+    const { startPayment } = await import("@/lib/server/use-cases/payments");
     const [admin] = await sql<{ id: string; organization_id: string; name: string; email: string }>("select id, organization_id, name, email from users where email = 'dana@quillmoor.example'");
     const viewer = { id: admin!.id, organizationId: admin!.organization_id, role: "coordinator" as const, name: admin!.name, email: admin!.email };
     const { body } = await servers[0]!.json("/api/v1/projects?stage=permit_filed&pageSize=10");

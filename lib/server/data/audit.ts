@@ -17,9 +17,12 @@ export function diffFields<T extends Record<string, unknown>>(before: Partial<T>
   return changes;
 }
 
+/** Who an audit event is by: the viewer, or for work done later on someone's behalf (the worker), their id in their organization. */
+export type AuditActor = Pick<Viewer, "organizationId"> & { id: string | null };
+
 /** Writes one audit event; pass the caller's transaction so it commits or rolls back with the change. */
 export async function recordAudit(
-  { viewer, action, entityType, entityId, changes = {} }: { viewer: Viewer | null; action: string; entityType: string; entityId: string; changes?: AuditChanges },
+  { viewer, action, entityType, entityId, changes = {} }: { viewer: AuditActor | null; action: string; entityType: string; entityId: string; changes?: AuditChanges },
   { transaction }: { transaction?: Transaction } = {},
 ) {
   db();

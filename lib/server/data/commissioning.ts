@@ -2,41 +2,37 @@ import "server-only";
 import { CommissioningRecord, Project, ProjectFile, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { checkCommissioning, commissioningComplete, type CommissioningCompletion } from "@/lib/engineering/commissioning";
-import { AppError, isAppError } from "@/lib/errors";
+import { AppError } from "@/lib/errors";
 import { commissioningFacts, emptyReadings, moduleMonitoringOf, toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
 import type { CommissioningDocumentInput, CommissioningDocumentKind } from "@/lib/documents/commissioning/input";
 import { openCountsInWords } from "@/lib/field/completion-words";
-import type { PacketInput } from "@/lib/documents/packets/input";
+import type { ReviewedDesign } from "@/lib/dto/reviewed-design";
 import { CommissioningReadings, SaveCommissioningInput } from "@/lib/schemas/commissioning";
 import type { CommissioningStatus } from "@/lib/domain/stored-values";
 import { db } from "../db";
 import { recordAudit } from "./audit";
 import { getOrganization } from "./organizations";
-import { buildPacketInput } from "./packet-input";
+import { getReviewedDesign } from "./reviewed-design";
 import { getProjectById } from "./projects";
 import type { CommissioningDto, SaveCommissioningResult, FieldSummaryDto } from "@/lib/dto/commissioning";
 
-export type CommissioningContext = { input: Omit<PacketInput, "revision" | "changes" | "override">; facts: CommissioningFacts };
+export type CommissioningContext = { reviewed: ReviewedDesign; facts: CommissioningFacts };
 
 /** The design facts a record is checked against; CONFLICT while the design cannot be reviewed. */
 export async function getCommissioningContext({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<CommissioningContext> {
-  let input: CommissioningContext["input"];
-  try {
-    input = await buildPacketInput({ viewer, projectId, kind: "interconnection" });
-  } catch (error) {
-    if (isAppError(error) && error.code === "CONFLICT") throw new AppError("CONFLICT", "Commissioning is checked against the project's design, and the design is not complete yet. Ask the office to finish it.");
-    throw error;
-  }
-  const { ratings } = input.review.summary;
+  const snapshot = await getReviewedDesign({ viewer, projectId });
+  if (snapshot.status !== "reviewed") throw new AppError("CONFLICT", "Commissioning is checked against the project's design, and the design is not complete yet. Ask the office to finish it.");
+  const { reviewed } = snapshot;
+  const { ratings } = reviewed.review.summary;
   const facts = commissioningFacts({
-    design: input.design,
-    edition: input.site.necEdition,
-    acceptedGridProfiles: input.utility?.acceptedGridProfiles ?? [],
+    design: reviewed.design,
+    edition: reviewed.site.necEdition,
+    acceptedGridProfiles: reviewed.utility?.acceptedGridProfiles ?? [],
     moduleCount: ratings.moduleCount,
     acKw: ratings.acKw,
-    moduleMonitoring: moduleMonitoringOf(input.equipment),
+    moduleMonitoring: moduleMonitoringOf(reviewed.equipment),
   });
-  return { input, facts };
+  return { reviewed, facts };
 }
 
 /** Stored readings written before a design change may not parse any more; the installer then starts the changed parts again. */
@@ -112,8 +108,8 @@ function refusal({ failing, missing, waiting }: CommissioningCompletion): string
 /** What the certificate of completion and the commissioning report print, from the saved record and the current design. */
 export async function buildCommissioningDocumentInput({ viewer, projectId, kind }: { viewer: Viewer; projectId: string; kind: CommissioningDocumentKind }): Promise<CommissioningDocumentInput> {
   const dto = await getCommissioning({ viewer, projectId });
-  const { input } = dto.context;
-  const [organization, installer] = await Promise.all([getOrganization({ viewer }), Project.findOne({ where: { id: projectId, organizationId: viewer.organizationId }, include: [{ model: User, as: "installer", attributes: ["name", "email"] }] })]);
+  const input = dto.context.reviewed;
+  const [organization, installer] = await Promise.all([getOrganization({ viewer }), input.project.installer ? User.findOne({ where: { id: input.project.installer.id, organizationId: viewer.organizationId }, attributes: ["name", "email"] }) : null]);
   const { ratings } = input.review.summary;
   const m = input.equipment.module;
   const device = input.equipment.device;
@@ -138,7 +134,7 @@ export async function buildCommissioningDocumentInput({ viewer, projectId, kind 
       inverterSummary: input.equipment.inverters.map((l) => `${l.quantity} × ${l.item.maker} ${l.item.model} (${l.item.specs.acPowerW.toLocaleString("en-US")} W AC)`).join("; "),
       shutdownSummary: device ? `${device.maker} ${device.model} ${device.specs.deviceKind === "optimizer" ? "optimizers" : "rapid shutdown devices"}, one per module` : null,
     },
-    installer: installer?.installer ? { name: installer.installer.name, email: installer.installer.email } : null,
+    installer: installer ? { name: installer.name, email: installer.email } : null,
     record: dto.record,
     results: dto.results,
     completion: dto.completion,

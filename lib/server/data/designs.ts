@@ -23,13 +23,13 @@ async function siteConditions(viewer: Viewer, jurisdictionId: string | null): Pr
 }
 
 /** Every catalog id the draft mentions, whatever its shape, for one lookup. */
-function referencedIds(draft: DesignDraft): string[] {
+export function referencedIds(draft: DesignDraft): string[] {
   const e = draft.equipment ?? {};
   const ids = [e.moduleId, e.deviceId, ...(e.inverters ?? []).map((l) => l?.equipmentId)];
   return ids.filter((v): v is string => typeof v === "string" && isUuid(v));
 }
 
-async function savedOrNewDesign(viewer: Viewer, project: ProjectDto): Promise<DesignDto> {
+export async function savedOrNewDesign(viewer: Viewer, project: ProjectDto): Promise<DesignDto> {
   const row = await Design.findOne({ where: { projectId: project.id, organizationId: viewer.organizationId } });
   if (!row) return { projectId: project.id, draft: newDesignDraft(project) as DesignDraft, isSaved: false, revision: 0, reviewStatus: "incomplete", updatedAt: null };
   return { projectId: project.id, draft: row.draft as DesignDraft, isSaved: true, revision: row.revision, reviewStatus: row.reviewStatus, updatedAt: row.updatedAt.toISOString() };

@@ -10,7 +10,8 @@ import { db } from "../db";
 import { enqueuePacketJob } from "../services/jobs";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
-import { buildPacketInput } from "./packet-input";
+import { buildPacketInput, reviewedOrConflict } from "./packet-input";
+import { getReviewedDesign } from "./reviewed-design";
 import { getProjectById } from "./projects";
 import type { PacketDto } from "@/lib/dto/packets";
 
@@ -58,7 +59,8 @@ export async function requestPacket({ viewer, projectId, kind, overrideReason }:
   const project = await getProjectById({ viewer, projectId });
   if (!can(viewer, "project:edit", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null })) throw new AppError("FORBIDDEN", "Your role cannot generate packets.");
   await failAbandonedPackets({ projectId });
-  const base = await buildPacketInput({ viewer, projectId, kind });
+  const reviewed = reviewedOrConflict(await getReviewedDesign({ viewer, projectId, project }));
+  const base = await buildPacketInput({ viewer, reviewed, kind });
   const failing = base.review.summary.status === "fail";
   const reason = overrideReason?.trim() || null;
   if (failing && !reason) {
@@ -124,4 +126,52 @@ export async function getPacketFile({ viewer, packetId }: { viewer: Viewer; pack
   if (packet.status !== "ready" || !packet.objectKey) throw new AppError("NOT_FOUND", "This packet is not ready.");
   const input = packet.input as unknown as PacketInput;
   return { key: packet.objectKey, fileName: `ohmstead-${input.project.number}-${packet.kind}-rev${packet.revision}.pdf`, sizeBytes: packet.sizeBytes };
+}
+
+/** One attempt at generating a packet, as the worker sees it: what to print and how to report each step. */
+export type PacketGeneration = {
+  packet: { id: string; organizationId: string; projectId: string; kind: PacketKind; revision: number; input: PacketInput };
+  /** Writes the step as it starts (text, progress and the attempt's log); the bar of an attempt only moves forward. */
+  begin(step: { text: string; progress: number }): Promise<void>;
+  /** Marks the packet ready with its stored object, and audits it in the same transaction. */
+  markReady(result: { objectKey: string; sha256: string; sizeBytes: number; pageCount: number; doneText: string }): Promise<void>;
+  /** Marks the attempt failed with what went wrong; the step log keeps where it stopped. */
+  markFailed(message: string): Promise<void>;
+};
+
+/** Starts a new attempt at a queued packet (a new step log); null when there is none or it is ready already. */
+export async function startPacketGeneration(packetId: string): Promise<PacketGeneration | null> {
+  const sequelize = db();
+  const row = await Packet.findByPk(packetId);
+  if (!row || row.status === "ready") return null;
+  await row.update({ attempts: row.attempts + 1, error: null, steps: [] });
+  const logged = (progress: number, text: string) => [...row.steps, { at: new Date().toISOString(), progress, text }];
+  return {
+    packet: { id: row.id, organizationId: row.organizationId, projectId: row.projectId, kind: row.kind, revision: row.revision, input: row.input as unknown as PacketInput },
+    async begin(step) {
+      const progress = Math.max(row.progress, step.progress);
+      await row.update({ status: "running", progress, step: step.text, steps: logged(progress, step.text) });
+    },
+    async markReady({ objectKey, sha256, sizeBytes, pageCount, doneText }) {
+      const committed = sequelize.transaction(async (transaction) => {
+        await row.update({ status: "ready", progress: 100, step: doneText, steps: logged(100, doneText), objectKey, sha256, sizeBytes, pageCount, readyAt: new Date() }, { transaction });
+        await recordAudit(
+          {
+            viewer: { organizationId: row.organizationId, id: row.requestedById },
+            action: "packet.generated", entityType: "project", entityId: row.projectId,
+            changes: { [`${row.kind} packet`]: { before: null, after: `Rev ${row.revision}, ${pageCount} pages, SHA-256 ${sha256.slice(0, 12)}…` } },
+          },
+          { transaction },
+        );
+      });
+      // A ready mark rolled back leaves its values on the instance: start again from what is stored.
+      await committed.catch(async (error: unknown) => {
+        await row.reload();
+        throw error;
+      });
+    },
+    async markFailed(message) {
+      await row.update({ status: "failed", progress: 0, step: "Failed", error: message.slice(0, 500) });
+    },
+  };
 }

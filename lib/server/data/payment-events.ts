@@ -4,7 +4,7 @@ import type Stripe from "stripe";
 import { Payment, ProcessorEvent } from "@/models";
 import { db } from "../db";
 import { isUuid } from "./ids";
-import { recordRefund } from "./payments";
+import { recordRefund } from "./refunds";
 
 export type EventOutcome = "applied" | "duplicate" | "ignored";
 

@@ -1,13 +1,14 @@
 import "server-only";
 import { Payment, PaymentLine, Project, Refund, User } from "@/models";
-import { runDesignReview } from "@/lib/design/run-review";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { localIsoDate } from "@/lib/domain/time-zones";
 import { AppError } from "@/lib/errors";
 import { computeFees, feeNameKey, returnedFeeKeys, type PaidPayment } from "@/lib/fees";
 import type { PaymentStatus } from "@/lib/domain/stored-values";
 import { db } from "../db";
-import { getDesignWithContext } from "./designs";
+import { getProjectById } from "./projects";
+import { getReviewedDesign } from "./reviewed-design";
+import type { ProjectDto } from "@/lib/dto/projects";
 import { recordAudit } from "./audit";
 import { schedulesForProject } from "./fee-schedules";
 import { getOrganization } from "./organizations";
@@ -63,9 +64,22 @@ export const PAYMENT_INCLUDE = [
  */
 export async function getProjectFees({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<ProjectFeesDto> {
   db();
-  const { project, design, catalog, conditions } = await getDesignWithContext({ viewer, projectId });
-  const outcome = runDesignReview(design.draft, catalog, conditions);
-  const sizes = outcome.status === "reviewed" ? { dcKw: outcome.review.summary.ratings.dcKw, acKw: outcome.review.summary.ratings.acKw } : null;
+  const project = await getProjectById({ viewer, projectId });
+  return feesForProject({ viewer, project, sizes: await designSizes({ viewer, project }) });
+}
+
+export type DesignSizes = ProjectFeesDto["sizes"];
+
+/** The ratings fees are priced from: the reviewed design's DC and AC size, null while the design cannot be reviewed. */
+export async function designSizes({ viewer, project }: { viewer: Viewer; project: ProjectDto }): Promise<DesignSizes> {
+  const snapshot = await getReviewedDesign({ viewer, projectId: project.id, project });
+  return snapshot.status === "reviewed" ? { dcKw: snapshot.reviewed.review.summary.ratings.dcKw, acKw: snapshot.reviewed.review.summary.ratings.acKw } : null;
+}
+
+/** The fees of a project already read, priced from sizes already worked out: what changes between two looks is only the payments. */
+export async function feesForProject({ viewer, project, sizes }: { viewer: Viewer; project: ProjectDto; sizes: DesignSizes }): Promise<ProjectFeesDto> {
+  db();
+  const projectId = project.id;
   const valuationCents = project.declaredValuationCents;
   const asOf = localIsoDate(new Date().toISOString(), (await getOrganization({ viewer })).timeZone);
 

@@ -10,7 +10,7 @@ import { PROJECT_FILE_KINDS, type ProjectFileKind } from "@/lib/domain/stored-va
 import { completionReceivedEmail } from "@/templates/email/completion-received";
 import { db } from "../db";
 import { env } from "../env";
-import { enqueueMail } from "../services/outbox";
+import { enqueueMail } from "./outbox";
 import { sniffMimeType } from "../services/file-sniffing";
 import { deleteObject, putObject } from "../services/storage";
 import { recordAudit } from "./audit";

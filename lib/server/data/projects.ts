@@ -1,4 +1,5 @@
 import "server-only";
+import { cache } from "react";
 import { literal, Op, type OrderItem, type Transaction, type WhereOptions } from "sequelize";
 import { CommissioningRecord, Design, Jurisdiction, Project, ProjectFile, StageChange, User, Utility } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
@@ -8,7 +9,7 @@ import type { ProjectListQuery, ProjectValues } from "@/lib/schemas/project";
 import { stageChangedEmail, type StageStep } from "@/templates/email/stage-changed";
 import { db } from "../db";
 import { env } from "../env";
-import { holdOrMergeMail } from "../services/outbox";
+import { holdOrMergeMail } from "./outbox";
 import { isUuid } from "./ids";
 import { diffFields, recordAudit } from "./audit";
 import { ensureDefaultFilings } from "./filings";
@@ -116,10 +117,20 @@ async function findVisibleProject(viewer: Viewer, projectId: string, transaction
   return project;
 }
 
-/** One project the viewer may see; NOT_FOUND for missing and foreign ones alike. */
-export async function getProjectById({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<ProjectDto> {
+// Read once per page render: the page, its header and the data functions it calls all ask for it. The
+// viewer is the request's one object (getViewer is cached too); server actions, route handlers and the
+// worker run outside a render and read afresh each time.
+const loadVisibleProject = cache(readFreshProject);
+
+/** After a write: never the copy read earlier in the same request. */
+async function readFreshProject(viewer: Viewer, projectId: string): Promise<ProjectDto> {
   db();
   return toProjectDto(await findVisibleProject(viewer, projectId));
+}
+
+/** One project the viewer may see; NOT_FOUND for missing and foreign ones alike. */
+export function getProjectById({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<ProjectDto> {
+  return loadVisibleProject(viewer, projectId);
 }
 
 /** Refuses references to another organization's rows or to people in the wrong role. */
@@ -150,7 +161,7 @@ export async function createProject({ viewer, values }: { viewer: Viewer; values
     await ensureDefaultFilings(project, { transaction, actorId: viewer.id });
     return project.id;
   });
-  return getProjectById({ viewer, projectId: id });
+  return readFreshProject(viewer, id);
 }
 
 export async function updateProject({ viewer, projectId, values }: { viewer: Viewer; projectId: string; values: ProjectValues }): Promise<ProjectDto> {
@@ -165,7 +176,7 @@ export async function updateProject({ viewer, projectId, values }: { viewer: Vie
     await recordAudit({ viewer, action: "project.updated", entityType: "project", entityId: project.id, changes: diffFields(before, values) }, { transaction });
     await ensureDefaultFilings(project, { transaction, actorId: viewer.id });
   });
-  return getProjectById({ viewer, projectId });
+  return readFreshProject(viewer, projectId);
 }
 
 /** What the field record still lacks before a project counts as commissioned, or null when nothing does. */
@@ -224,7 +235,7 @@ export async function changeProjectStage({ viewer, projectId, toStage, note }: {
       );
     }
   });
-  return getProjectById({ viewer, projectId });
+  return readFreshProject(viewer, projectId);
 }
 
 /** The project's stage timeline, oldest first. */

@@ -12,7 +12,7 @@ import { CreateShareLinkInput } from "@/lib/schemas/share-link";
 import { inspectorLinkEmail } from "@/templates/email/inspector-link";
 import { db } from "../db";
 import { env } from "../env";
-import { enqueueMail } from "../services/outbox";
+import { enqueueMail } from "./outbox";
 import { hashToken, newToken } from "../tokens";
 import { getOrganization } from "./organizations";
 import { recordAudit } from "./audit";

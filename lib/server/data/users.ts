@@ -10,7 +10,7 @@ import { invitationEmail } from "@/templates/email/invitation";
 import { db } from "../db";
 import { env } from "../env";
 import { hashPassword, verifyPassword } from "../passwords";
-import { enqueueMail } from "../services/outbox";
+import { enqueueMail } from "./outbox";
 import { hashToken, newToken } from "../tokens";
 import { recordAudit } from "./audit";
 import { throttledSignIn } from "./sign-in-throttle";

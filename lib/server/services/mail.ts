@@ -18,7 +18,7 @@ function transport(): Transporter {
 
 /**
  * Sends one message through the configured SMTP server (the local catcher in development), or through
- * `via` when given, and returns the server's reply. Application code enqueues mail instead (services/outbox.ts).
+ * `via` when given, and returns the server's reply. Application code enqueues mail instead (data/outbox.ts).
  */
 export async function sendMail(mail: OutgoingMail & { messageId?: string }, via: Transporter = transport()): Promise<{ response: string }> {
   const info = await via.sendMail({ from: env().MAIL_FROM, ...mail });

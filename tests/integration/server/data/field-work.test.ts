@@ -12,6 +12,7 @@ import { db } from "@/lib/server/db";
 import { getObjectBytes } from "@/lib/server/services/storage";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
+import { readsOf, sqlDuring } from "../../support/query-log";
 
 let org: OrgFixture;
 let rival: OrgFixture;
@@ -191,6 +192,20 @@ describe("commissioning record", () => {
     expect(input.record.stringTests?.map((s) => s.insulationMohm)).toEqual([250, 250]);
     expect(input.completion.complete).toBe(true);
     expect(input.completedAt).not.toBeNull();
+  });
+
+  it("checks the record and prints its documents against one read of the project and one review of its design", async () => {
+    const project = await assignedProject();
+    const looks: [string, () => Promise<unknown>][] = [
+      ["the record", () => getCommissioning({ viewer: org.viewers.installer, projectId: project.id })],
+      ["the certificate", () => buildCommissioningDocumentInput({ viewer: org.viewers.installer, projectId: project.id, kind: "certificate" })],
+    ];
+    for (const [what, work] of looks) {
+      const { sql } = await sqlDuring(work);
+      expect(readsOf(sql, "projects"), what).toHaveLength(1);
+      expect(readsOf(sql, "designs"), what).toHaveLength(1);
+      expect(readsOf(sql, "jurisdictions"), what).toHaveLength(1);
+    }
   });
 });
 

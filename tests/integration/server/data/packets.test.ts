@@ -7,7 +7,7 @@ import { DESIGN_MODELS, demoDesign, type CatalogIds } from "@/lib/seed/demo-desi
 import { saveDesignDraft } from "@/lib/server/data/designs";
 import { failAbandonedPackets, getPacketFile, listPackets, requestPacket, retryPacket } from "@/lib/server/data/packets";
 import { db } from "@/lib/server/db";
-import { generatePacket } from "@/lib/server/services/packet-generation";
+import { generatePacket } from "@/lib/server/jobs/generate-packet";
 import { getObjectBytes, putObject } from "@/lib/server/services/storage";
 import { planGenerationSteps } from "@/lib/documents/packets/generation-steps";
 import { packetSheetTitles } from "@/lib/documents/packets/render";
@@ -15,6 +15,7 @@ import type { PacketInput } from "@/lib/documents/packets/input";
 import { PDFDocument } from "pdf-lib";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
+import { readsOf, sqlDuring } from "../../support/query-log";
 
 // The queue is exercised end to end by the e2e suite; here jobs run in-process.
 vi.mock("@/lib/server/services/jobs", () => ({ enqueuePacketJob: vi.fn(async () => undefined), PACKET_QUEUE: "packet-generate" }));
@@ -156,6 +157,44 @@ describe("packets", () => {
     const retried = await retryPacket({ viewer: org.viewers.coordinator, packetId: queued.id });
     expect(retried.status).toBe("queued");
     expect((await listPackets({ viewer: org.viewers.coordinator, projectId: project.id }))[0].status).toBe("queued");
+  });
+
+  it("marks a packet ready and audits it in one transaction: an audit row that cannot be written leaves the packet not ready", async () => {
+    const project = await projectWithDesign();
+    const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "interconnection" });
+    const create = AuditEvent.create.bind(AuditEvent);
+    const refused = vi.spyOn(AuditEvent, "create").mockImplementation(((values: { action?: string }, options?: unknown) => {
+      if (values.action === "packet.generated") return Promise.reject(new Error("audit write refused"));
+      return create(values as never, options as never);
+    }) as typeof AuditEvent.create);
+    try {
+      await generatePacket(queued.id);
+    } finally {
+      refused.mockRestore();
+    }
+    const failed = (await Packet.findByPk(queued.id))!;
+    // The ready mark rolled back with its audit row: no stored object, no checksum, no ready time.
+    expect(failed).toMatchObject({ status: "failed", objectKey: null, sha256: null, readyAt: null, error: "audit write refused" });
+    expect(await AuditEvent.count({ where: { entityId: project.id, action: "packet.generated" } })).toBe(0);
+
+    await retryPacket({ viewer: org.viewers.coordinator, packetId: queued.id });
+    await generatePacket(queued.id);
+    const ready = (await Packet.findByPk(queued.id))!;
+    expect(ready.status).toBe("ready");
+    const audits = await AuditEvent.findAll({ where: { entityId: project.id, action: "packet.generated" } });
+    expect(audits).toHaveLength(1);
+    expect(audits[0]).toMatchObject({ organizationId: org.organization.id, actorId: org.viewers.coordinator.id });
+    // Written in the same transaction as the ready mark: one commit stamps both with the same transaction time.
+    const [[stamps]] = (await db().query(`select (select xmin::text from packets where id = :packet) as packet, (select xmin::text from audit_events where id = :audit) as audit`, { replacements: { packet: queued.id, audit: audits[0].id } })) as [{ packet: string; audit: string }[], unknown];
+    expect(stamps.packet).toBe(stamps.audit);
+  });
+
+  it("reads the project and its AHJ once to queue a packet, reviewing the saved design once", async () => {
+    const project = await projectWithDesign();
+    const { sql } = await sqlDuring(() => requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" }));
+    expect(readsOf(sql, "projects")).toHaveLength(1);
+    expect(readsOf(sql, "jurisdictions")).toHaveLength(1);
+    expect(readsOf(sql, "designs")).toHaveLength(1);
   });
 
   it("keeps packets inside the organization and away from installers and unfinished designs", async () => {

@@ -11,13 +11,14 @@ import { DESIGN_MODELS, demoDesign, type CatalogIds } from "@/lib/seed/demo-desi
 import { saveDesignDraft } from "@/lib/server/data/designs";
 import { getFeeSchedule, saveFeeSchedule } from "@/lib/server/data/fee-schedules";
 import { FeeScheduleInput } from "@/lib/schemas/fee-schedule";
-import { reconcilePendingPayments, refundPayment, startPayment } from "@/lib/server/data/payments";
+import { reconcilePendingPayments, refundPayment, startPayment } from "@/lib/server/use-cases/payments";
 import { getProjectFees, setDeclaredValuation } from "@/lib/server/data/project-fees";
 import { db } from "@/lib/server/db";
 import { getObjectBytes } from "@/lib/server/services/storage";
-import { issueDueReceipts } from "@/lib/server/services/receipts";
+import { issueDueReceipts } from "@/lib/server/jobs/issue-receipts";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
+import { readsOf, sqlDuring } from "../../support/query-log";
 
 // Payments run against the local test-mode fake the test stack starts (STRIPE_API_URL). Its webhooks
 // cannot reach an app here, so each test fetches the events the fake made and delivers them itself:
@@ -222,6 +223,18 @@ describe("fees and payments", () => {
     const paidNow = await getProjectFees({ viewer: org.viewers.coordinator, projectId: project.id });
     expect(paidNow.lines.find((l) => l.feeKey === key)!.state).toBe("paid");
     expect(paidNow.payments.find((p) => p.id === paymentId)).toMatchObject({ failureMessage: "Your card was declined.", failureStillOpen: false });
+  });
+
+  it("reads the project once and reviews its design once to start a payment, also when it first ends an unfinished checkout", async () => {
+    const project = await projectWithDesign();
+    const fees = await getProjectFees({ viewer: org.viewers.coordinator, projectId: project.id });
+    const key = fees.lines.find((l) => l.name === "Interconnection application")!.feeKey;
+    for (const round of ["first", "replacing the open checkout"]) {
+      const { sql } = await sqlDuring(() => startPayment({ viewer: org.viewers.coordinator, projectId: project.id, feeKeys: [key] }));
+      expect(readsOf(sql, "projects"), round).toHaveLength(1);
+      expect(readsOf(sql, "designs"), round).toHaveLength(1);
+      expect(readsOf(sql, "jurisdictions"), round).toHaveLength(1);
+    }
   });
 
   it("ignores a signed event for a payment Ohmstead did not start, even with odd metadata", async () => {

@@ -2,7 +2,7 @@
 
 import { revalidatePath } from "next/cache";
 import { defineAction } from "@/lib/server/action";
-import { refundPayment, startPayment } from "@/lib/server/data/payments";
+import { refundPayment, startPayment } from "@/lib/server/use-cases/payments";
 import { setDeclaredValuation } from "@/lib/server/data/project-fees";
 import { PayFeesInput, RefundInput, ValuationInput } from "@/lib/schemas/payment";
 

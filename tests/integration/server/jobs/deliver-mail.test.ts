@@ -8,7 +8,8 @@ import { InviteUserInput } from "@/lib/schemas/user";
 import { inviteUser } from "@/lib/server/data/users";
 import { db } from "@/lib/server/db";
 import { createMailTransport } from "@/lib/server/services/mail";
-import { deliverDueMail, enqueueMail } from "@/lib/server/services/outbox";
+import { enqueueMail } from "@/lib/server/data/outbox";
+import { deliverDueMail } from "@/lib/server/jobs/deliver-mail";
 import { closeDb } from "../../support/db";
 import { makeOrganization, type OrgFixture } from "../../support/fixtures";
 

@@ -1,15 +1,11 @@
 import "server-only";
-import type { Transporter } from "nodemailer";
 import { Op, type Transaction } from "sequelize";
 import { OutboxMessage } from "@/models";
 import type { OutboxAttachment } from "@/lib/domain/stored-values";
 import { afterFailedAttempt } from "@/lib/domain/mail-retry";
 import { db } from "../db";
-import { sendMail } from "./mail";
-import { getObjectBytes } from "./storage";
 
 export type QueuedMail = { to: string; subject: string; text: string; html: string; organizationId?: string | null; attachments?: OutboxAttachment[] };
-export type DeliveryReport = { sent: number; retried: number; failed: number };
 
 /**
  * Puts one e-mail in the outbox. Pass the transaction of the change that causes the mail:
@@ -56,44 +52,27 @@ export async function holdOrMergeMail(
   return { id: row.id, merged: false };
 }
 
-type Outcome = keyof DeliveryReport;
-
-/**
- * Sends up to `limit` due messages, one row per transaction. The row stays locked (FOR UPDATE SKIP LOCKED)
- * while SMTP talks, so parallel workers never send it twice, and it is marked sent only after the server
- * accepted it. `transport` overrides the configured SMTP server (tests use their own).
- */
-export async function deliverDueMail({ limit = 20, transport }: { limit?: number; transport?: Transporter } = {}): Promise<DeliveryReport> {
-  const report: DeliveryReport = { sent: 0, retried: 0, failed: 0 };
-  for (let i = 0; i < limit; i++) {
-    const outcome = await db().transaction((transaction) => deliverOne(transaction, transport));
-    if (!outcome) break;
-    report[outcome]++;
-  }
-  return report;
-}
-
-async function deliverOne(transaction: Transaction, transport: Transporter | undefined): Promise<Outcome | null> {
-  const row = await OutboxMessage.findOne({
+/** A message due now, locked (FOR UPDATE SKIP LOCKED) for the caller's transaction so parallel workers never take it twice. */
+export async function claimDueMail(transaction: Transaction): Promise<OutboxMessage | null> {
+  db();
+  return OutboxMessage.findOne({
     where: { status: "queued", nextAttemptAt: { [Op.lte]: new Date() } },
     order: [["nextAttemptAt", "ASC"]],
     lock: transaction.LOCK.UPDATE,
     skipLocked: true,
     transaction,
   });
-  if (!row) return null;
-  const attempts = row.attempts + 1;
-  try {
-    // A Message-ID fixed per row lets a receiving server spot the rare resend after a lost commit.
-    // Attachments are read from storage at send time, so the outbox row stays small; a storage failure retries like SMTP's.
-    const attachments = await Promise.all((row.attachments ?? []).map(async (a) => ({ filename: a.fileName, contentType: a.contentType, content: Buffer.from(await getObjectBytes(a.objectKey)) })));
-    const { response } = await sendMail({ to: row.toAddress, subject: row.subject, text: row.textBody, html: row.htmlBody, attachments, messageId: `<${row.id}@outbox.ohmstead>` }, transport);
-    await row.update({ status: "sent", attempts, smtpResponse: response, sentAt: new Date(), lastError: null }, { transaction });
-    return "sent";
-  } catch (error) {
-    const next = afterFailedAttempt(attempts, new Date());
-    const lastError = (error instanceof Error ? error.message : String(error)).slice(0, 2000);
-    await row.update({ attempts, lastError, ...(next.status === "failed" ? { status: "failed" as const } : { nextAttemptAt: next.nextAttemptAt }) }, { transaction });
-    return next.status === "failed" ? "failed" : "retried";
-  }
+}
+
+/** Marks a claimed message sent, with the mail server's reply. */
+export async function markMailSent(row: OutboxMessage, { attempts, response }: { attempts: number; response: string }, transaction: Transaction): Promise<void> {
+  await row.update({ status: "sent", attempts, smtpResponse: response, sentAt: new Date(), lastError: null }, { transaction });
+}
+
+/** Records a failed attempt: the message waits for its next try, or is failed for good after its last one. */
+export async function markMailAttemptFailed(row: OutboxMessage, { attempts, error }: { attempts: number; error: unknown }, transaction: Transaction): Promise<"retried" | "failed"> {
+  const next = afterFailedAttempt(attempts, new Date());
+  const lastError = (error instanceof Error ? error.message : String(error)).slice(0, 2000);
+  await row.update({ attempts, lastError, ...(next.status === "failed" ? { status: "failed" as const } : { nextAttemptAt: next.nextAttemptAt }) }, { transaction });
+  return next.status === "failed" ? "failed" : "retried";
 }
