@@ -8,7 +8,22 @@ import { clientBoundary } from "./scripts/lint/client-boundary.mjs";
 
 const MODELS = ["@/models", "@/models/*"];
 const SERVER = ["@/lib/server", "@/lib/server/*", "@/lib/db", "@/lib/db/*", "server-only", ...MODELS];
-const FRAMEWORK = ["next", "next/*", "react", "react-dom", "react/*", "sequelize", "pg", "pg-boss", "nodemailer", "stripe", "@aws-sdk/*", "node:*", "fs", "path"];
+const FRAMEWORK = [
+  "next",
+  "next/*",
+  "react",
+  "react-dom",
+  "react/*",
+  "sequelize",
+  "pg",
+  "pg-boss",
+  "nodemailer",
+  "stripe",
+  "@aws-sdk/*",
+  "node:*",
+  "fs",
+  "path",
+];
 
 /** `no-restricted-imports` groups; type-only imports stay allowed where `allowTypeImports` is set. */
 /** Left out of a group that allows type imports, so that the SERVER group (which does not) is the one that matches. */
@@ -20,7 +35,16 @@ export default defineConfig([
   ...nextVitals,
   ...nextTs,
   prettier,
-  globalIgnores(["node_modules/**", ".next/**", ".next-*/**", ".data/**", "test-results/**", "playwright-report/**", "coverage/**", "next-env.d.ts"]),
+  globalIgnores([
+    "node_modules/**",
+    ".next/**",
+    ".next-*/**",
+    ".data/**",
+    "test-results/**",
+    "playwright-report/**",
+    "coverage/**",
+    "next-env.d.ts",
+  ]),
   {
     rules: {
       "import/no-cycle": ["error", { ignoreExternal: true }],
@@ -41,14 +65,21 @@ export default defineConfig([
     // Only the data layer (and the database's own plumbing, the seed, migrations, scripts and tests) reads models.
     files: ["**/*.{ts,tsx,mjs}"],
     ignores: ["models/**", "lib/server/data/**", "lib/db/**", "lib/server/db.ts", "lib/seed/**", "migrations/**", "scripts/**", "tests/**"],
-    rules: { "@typescript-eslint/no-restricted-imports": restrict(group(MODELS, "Only lib/server/data reads and writes the database: call a data function instead.")) },
+    rules: {
+      "@typescript-eslint/no-restricted-imports": restrict(
+        group(MODELS, "Only lib/server/data reads and writes the database: call a data function instead."),
+      ),
+    },
   },
   {
     // Models take column types from one shared module of pure types, and nothing else from lib.
     files: ["models/**"],
     rules: {
       "@typescript-eslint/no-restricted-imports": restrict(
-        group(["@/lib/*", "!@/lib/domain", "@/lib/domain/*", "!@/lib/domain/stored-values"], "Models import only types from lib/domain/stored-values."),
+        group(
+          ["@/lib/*", "!@/lib/domain", "@/lib/domain/*", "!@/lib/domain/stored-values"],
+          "Models import only types from lib/domain/stored-values.",
+        ),
         group(["@/lib/domain/stored-values"], "Models import only types from lib/domain/stored-values.", true),
       ),
     },
@@ -58,7 +89,22 @@ export default defineConfig([
     files: ["lib/engineering/**", "lib/domain/**", "lib/sld/**"],
     rules: {
       "@typescript-eslint/no-restricted-imports": restrict(
-        group(["@/*", "!@/lib", "@/lib/*", "!@/lib/engineering", "!@/lib/engineering/*", "!@/lib/domain", "!@/lib/domain/*", "!@/lib/sld", "!@/lib/sld/*", ...NOT_SERVER], "Pure code imports only pure code (lib/engineering, lib/domain, lib/sld).", true),
+        group(
+          [
+            "@/*",
+            "!@/lib",
+            "@/lib/*",
+            "!@/lib/engineering",
+            "!@/lib/engineering/*",
+            "!@/lib/domain",
+            "!@/lib/domain/*",
+            "!@/lib/sld",
+            "!@/lib/sld/*",
+            ...NOT_SERVER,
+          ],
+          "Pure code imports only pure code (lib/engineering, lib/domain, lib/sld).",
+          true,
+        ),
         group(FRAMEWORK, "Pure code has no framework and no I/O."),
         group(SERVER, "Pure code never reaches the server."),
       ),
@@ -69,7 +115,11 @@ export default defineConfig([
     files: ["templates/**"],
     rules: {
       "@typescript-eslint/no-restricted-imports": restrict(
-        group(["@/lib/*", "@/app/*", "@/components/*", ...NOT_SERVER], "Templates are layout only: compute the value in lib/documents and pass it in.", true),
+        group(
+          ["@/lib/*", "@/app/*", "@/components/*", ...NOT_SERVER],
+          "Templates are layout only: compute the value in lib/documents and pass it in.",
+          true,
+        ),
         group(SERVER, "Templates never reach the server."),
       ),
     },
@@ -77,7 +127,12 @@ export default defineConfig([
   {
     // Shared components receive server actions as props; they never reach into a route.
     files: ["components/**"],
-    rules: { "@typescript-eslint/no-restricted-imports": restrict(group(["@/app/*"], "Pass the server action in as a prop."), group(SERVER, "Components never reach the server.")) },
+    rules: {
+      "@typescript-eslint/no-restricted-imports": restrict(
+        group(["@/app/*"], "Pass the server action in as a prop."),
+        group(SERVER, "Components never reach the server."),
+      ),
+    },
   },
   {
     files: ["app/**", "components/**", "lib/**"],

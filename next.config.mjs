@@ -25,7 +25,10 @@ const nextConfig = {
       // JSON and files are never documents to run: nothing in them may load or be framed.
       { source: "/api/:path*", headers: [{ key: "Content-Security-Policy", value: "default-src 'none'; frame-ancestors 'none'" }] },
       // The field record scans barcodes and takes photos with the phone's camera; nowhere else may use it.
-      { source: "/projects/:projectId/field", headers: [{ key: "Permissions-Policy", value: "camera=(self), microphone=(), geolocation=(), payment=(), usb=()" }] },
+      {
+        source: "/projects/:projectId/field",
+        headers: [{ key: "Permissions-Policy", value: "camera=(self), microphone=(), geolocation=(), payment=(), usb=()" }],
+      },
       // Inspector links are private by their token: keep them out of search indexes and out of Referer headers.
       {
         source: "/share/:path*",

@@ -22,10 +22,17 @@ export default defineConfig({
     screenshot: "only-on-failure",
     launchOptions: {
       executablePath: "/usr/bin/chromium",
-      args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+      args: [
+        "--headless",
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--no-first-run",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+      ],
     },
   },
-  projects: [
-    { name: "desktop", use: { viewport: { width: 1280, height: 900 } } },
-  ],
+  projects: [{ name: "desktop", use: { viewport: { width: 1280, height: 900 } } }],
 });

@@ -10,7 +10,8 @@ const SIGNED_IN_AREAS = ["/dashboard", "/projects", "/settings", "/mailbox"];
 /** The framework's own limit on a server action's body (next.config serverActions.bodySizeLimit, default 1 MB). */
 const ACTION_BODY_LIMIT_BYTES = 1024 * 1024;
 
-const plain = (status: number, message: string) => new NextResponse(message, { status, headers: { "content-type": "text/plain; charset=utf-8", "x-content-type-options": "nosniff" } });
+const plain = (status: number, message: string) =>
+  new NextResponse(message, { status, headers: { "content-type": "text/plain; charset=utf-8", "x-content-type-options": "nosniff" } });
 
 /** A path with a broken percent-escape cannot be routed; say so instead of failing inside the router. */
 function hasBrokenEscape(pathname: string): boolean {
@@ -30,7 +31,8 @@ function hasBrokenEscape(pathname: string): boolean {
 async function screenAction(request: NextRequest): Promise<NextResponse | null> {
   const appUrl = env().APP_URL;
   const host = request.headers.get("x-forwarded-host") ?? request.headers.get("host");
-  if (!isSameOrigin(request.headers.get("origin"), { appUrl, host })) return plain(403, "This request came from another site and was refused.");
+  if (!isSameOrigin(request.headers.get("origin"), { appUrl, host }))
+    return plain(403, "This request came from another site and was refused.");
   const declared = request.headers.get("content-length");
   if (declared !== null && !(Number(declared) <= ACTION_BODY_LIMIT_BYTES)) return plain(413, "The request is larger than 1 MB.");
   // The client library sends plain arguments as JSON in text/plain; multipart replies carry files and

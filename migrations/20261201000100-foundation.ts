@@ -7,7 +7,12 @@ const timestamps = {
   updated_at: { type: DataTypes.DATE, allowNull: false },
 };
 const org = { type: DataTypes.UUID, allowNull: false, references: { model: "organizations", key: "id" }, onDelete: "CASCADE" };
-const userRef = (allowNull: boolean) => ({ type: DataTypes.UUID, allowNull, references: { model: "users", key: "id" }, onDelete: "SET NULL" });
+const userRef = (allowNull: boolean) => ({
+  type: DataTypes.UUID,
+  allowNull,
+  references: { model: "users", key: "id" },
+  onDelete: "SET NULL",
+});
 
 export async function up({ context: q }: { context: MigrationContext }) {
   await q.createTable("organizations", {
@@ -61,7 +66,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
     notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
     ...timestamps,
   });
-  await q.sequelize.query(`alter table jurisdictions add constraint jurisdictions_nec_edition_check check (nec_edition in (2017, 2020, 2023))`);
+  await q.sequelize.query(
+    `alter table jurisdictions add constraint jurisdictions_nec_edition_check check (nec_edition in (2017, 2020, 2023))`,
+  );
   await q.addIndex("jurisdictions", ["organization_id"]);
 
   await q.createTable("utilities", {
@@ -131,7 +138,17 @@ export async function up({ context: q }: { context: MigrationContext }) {
 }
 
 export async function down({ context: q }: { context: MigrationContext }) {
-  for (const table of ["audit_events", "stage_changes", "projects", "utilities", "jurisdictions", "sign_in_attempts", "invitations", "users", "organizations"]) {
+  for (const table of [
+    "audit_events",
+    "stage_changes",
+    "projects",
+    "utilities",
+    "jurisdictions",
+    "sign_in_attempts",
+    "invitations",
+    "users",
+    "organizations",
+  ]) {
     await q.dropTable(table);
   }
 }

@@ -20,7 +20,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
   });
   await q.sequelize.query(`alter table equipment add constraint equipment_kind_check check (kind in ('module','inverter','device'))`);
   // "Larkspur LK-405" and "larkspur lk-405" are the same product: compare without case.
-  await q.sequelize.query(`create unique index equipment_organization_kind_maker_model on equipment (organization_id, kind, lower(maker), lower(model))`);
+  await q.sequelize.query(
+    `create unique index equipment_organization_kind_maker_model on equipment (organization_id, kind, lower(maker), lower(model))`,
+  );
 
   await q.addColumn("utilities", "required_grid_profile", { type: DataTypes.TEXT, allowNull: false, defaultValue: "" });
 }

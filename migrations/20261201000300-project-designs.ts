@@ -15,7 +15,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
     created_at: { type: DataTypes.DATE, allowNull: false },
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await q.sequelize.query(`alter table designs add constraint designs_review_status_check check (review_status in ('incomplete','pass','warn','fail'))`);
+  await q.sequelize.query(
+    `alter table designs add constraint designs_review_status_check check (review_status in ('incomplete','pass','warn','fail'))`,
+  );
 }
 
 export async function down({ context: q }: { context: MigrationContext }) {

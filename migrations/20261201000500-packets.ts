@@ -27,7 +27,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
   await q.sequelize.query(`alter table packets add constraint packets_kind_check check (kind in ('permit','interconnection'))`);
-  await q.sequelize.query(`alter table packets add constraint packets_status_check check (status in ('queued','running','ready','failed'))`);
+  await q.sequelize.query(
+    `alter table packets add constraint packets_status_check check (status in ('queued','running','ready','failed'))`,
+  );
   await q.addIndex("packets", ["project_id", "kind", "revision"], { unique: true, name: "packets_project_kind_revision" });
 }
 

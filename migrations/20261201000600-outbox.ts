@@ -19,7 +19,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
     created_at: { type: DataTypes.DATE, allowNull: false },
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await q.sequelize.query(`alter table outbox_messages add constraint outbox_messages_status_check check (status in ('queued','sent','failed'))`);
+  await q.sequelize.query(
+    `alter table outbox_messages add constraint outbox_messages_status_check check (status in ('queued','sent','failed'))`,
+  );
   // The worker's only query: due queued rows, oldest first.
   await q.addIndex("outbox_messages", ["status", "next_attempt_at"], { name: "outbox_messages_status_next_attempt" });
 }

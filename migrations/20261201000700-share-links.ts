@@ -32,7 +32,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
     user_agent: { type: DataTypes.STRING(500), allowNull: false, defaultValue: "" },
     created_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await q.sequelize.query(`alter table share_link_accesses add constraint share_link_accesses_kind_check check (kind in ('view','download'))`);
+  await q.sequelize.query(
+    `alter table share_link_accesses add constraint share_link_accesses_kind_check check (kind in ('view','download'))`,
+  );
   await q.addIndex("share_link_accesses", ["share_link_id", "created_at"], { name: "share_link_accesses_link_time" });
 
   // Unknown tokens per client address, counted to slow down guessing.

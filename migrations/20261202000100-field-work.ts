@@ -15,7 +15,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
     created_at: { type: DataTypes.DATE, allowNull: false },
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await q.sequelize.query(`alter table commissioning_records add constraint commissioning_records_status_check check (status in ('open','complete'))`);
+  await q.sequelize.query(
+    `alter table commissioning_records add constraint commissioning_records_status_check check (status in ('open','complete'))`,
+  );
 
   // Uploaded files: the object key is made by the server; the name is the uploader's, kept for display only.
   await q.createTable("project_files", {
@@ -31,7 +33,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
     uploaded_by_id: { type: DataTypes.UUID, references: { model: "users", key: "id" }, onDelete: "SET NULL" },
     created_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await q.sequelize.query(`alter table project_files add constraint project_files_kind_check check (kind in ('signed-completion','site-photo'))`);
+  await q.sequelize.query(
+    `alter table project_files add constraint project_files_kind_check check (kind in ('signed-completion','site-photo'))`,
+  );
   await q.addIndex("project_files", ["project_id", "created_at"], { name: "project_files_project_time" });
 }
 

@@ -16,7 +16,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
     created_at: { type: DataTypes.DATE, allowNull: false },
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await q.sequelize.query(`alter table fee_schedules add constraint fee_schedules_kind_check check (authority_kind in ('jurisdiction','utility'))`);
+  await q.sequelize.query(
+    `alter table fee_schedules add constraint fee_schedules_kind_check check (authority_kind in ('jurisdiction','utility'))`,
+  );
   await q.addIndex("fee_schedules", ["authority_kind", "authority_id"], { unique: true, name: "fee_schedules_authority" });
 
   // One attempt to pay some fee lines; the amount was worked out on the server and the processor's ids tie it to the charge.
@@ -40,8 +42,12 @@ export async function up({ context: q }: { context: MigrationContext }) {
     created_at: { type: DataTypes.DATE, allowNull: false },
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await q.sequelize.query(`alter table payments add constraint payments_status_check check (status in ('pending','paid','expired','partially_refunded','refunded'))`);
-  await q.sequelize.query(`alter table payments add constraint payments_amounts_check check (amount_cents > 0 and refunded_cents >= 0 and refunded_cents <= amount_cents)`);
+  await q.sequelize.query(
+    `alter table payments add constraint payments_status_check check (status in ('pending','paid','expired','partially_refunded','refunded'))`,
+  );
+  await q.sequelize.query(
+    `alter table payments add constraint payments_amounts_check check (amount_cents > 0 and refunded_cents >= 0 and refunded_cents <= amount_cents)`,
+  );
   await q.addIndex("payments", ["project_id", "created_at"], { name: "payments_project_time" });
 
   // The fee lines a payment covers, frozen as they were worked out when it was made.

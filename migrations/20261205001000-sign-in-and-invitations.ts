@@ -12,7 +12,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
 export async function down({ context: q }: { context: MigrationContext }) {
   // One address per account again: invitations that never set a password give way, and any other
   // duplicate keeps its row under a marked address so that nothing it owns is lost.
-  await q.sequelize.query(`delete from users u where u.password_hash is null and exists (select 1 from users v where v.email = u.email and v.id <> u.id)`);
+  await q.sequelize.query(
+    `delete from users u where u.password_hash is null and exists (select 1 from users v where v.email = u.email and v.id <> u.id)`,
+  );
   await q.sequelize.query(
     `update users u set email = left(u.email, 200) || '.duplicate-' || left(u.id::text, 8) where exists (select 1 from users v where v.email = u.email and v.id <> u.id and (v.is_active, v.updated_at, v.id) > (u.is_active, u.updated_at, u.id))`,
   );

@@ -2,7 +2,12 @@ import { DataTypes } from "sequelize";
 import type { MigrationContext } from "@/lib/db/migrator";
 
 const id = { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 };
-const ref = (table: string, onDelete: "CASCADE" | "SET NULL", allowNull = onDelete === "SET NULL") => ({ type: DataTypes.UUID, allowNull, references: { model: table, key: "id" }, onDelete });
+const ref = (table: string, onDelete: "CASCADE" | "SET NULL", allowNull = onDelete === "SET NULL") => ({
+  type: DataTypes.UUID,
+  allowNull,
+  references: { model: table, key: "id" },
+  onDelete,
+});
 const stamps = { created_at: { type: DataTypes.DATE, allowNull: false }, updated_at: { type: DataTypes.DATE, allowNull: false } };
 
 export async function up({ context: q }: { context: MigrationContext }) {
@@ -34,7 +39,11 @@ export async function up({ context: q }: { context: MigrationContext }) {
     created_by_id: { type: DataTypes.UUID, allowNull: true },
     ...stamps,
   });
-  await q.addIndex("filings", ["project_id", "kind"], { name: "filings_one_permit_one_interconnection", unique: true, where: { kind: ["permit", "interconnection"] } });
+  await q.addIndex("filings", ["project_id", "kind"], {
+    name: "filings_one_permit_one_interconnection",
+    unique: true,
+    where: { kind: ["permit", "interconnection"] },
+  });
   await q.addIndex("filings", ["organization_id", "next_follow_up_on"], { name: "filings_follow_up" });
 
   // The authority's comments, round by round.
@@ -84,7 +93,9 @@ export async function up({ context: q }: { context: MigrationContext }) {
     resolved: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     ...stamps,
   });
-  await q.sequelize.query(`ALTER TABLE filing_items ADD CONSTRAINT filing_items_one_parent CHECK ((round_id IS NULL) <> (inspection_id IS NULL))`);
+  await q.sequelize.query(
+    `ALTER TABLE filing_items ADD CONSTRAINT filing_items_one_parent CHECK ((round_id IS NULL) <> (inspection_id IS NULL))`,
+  );
   await q.addIndex("filing_items", ["round_id"], { name: "filing_items_round" });
   await q.addIndex("filing_items", ["inspection_id"], { name: "filing_items_inspection" });
 
@@ -116,7 +127,17 @@ export async function down({ context: q }: { context: MigrationContext }) {
   for (const column of ["review_days", "permit_valid_days", "required_inspections"]) await q.removeColumn("jurisdictions", column);
   await q.removeColumn("stage_changes", "cause");
   await q.removeIndex("projects", "projects_waiting_on");
-  for (const column of ["hand_stage", "hold_state", "hold_reason", "hold_since", "waiting_on", "waiting_since", "permit_status", "interconnection_status"]) await q.removeColumn("projects", column);
+  for (const column of [
+    "hand_stage",
+    "hold_state",
+    "hold_reason",
+    "hold_since",
+    "waiting_on",
+    "waiting_since",
+    "permit_status",
+    "interconnection_status",
+  ])
+    await q.removeColumn("projects", column);
   await q.dropTable("filing_items");
   await q.dropTable("inspections");
   await q.dropTable("correction_rounds");

@@ -30,7 +30,20 @@ import { StorageRemoval } from "./storage-removal";
 import { User } from "./user";
 import { Utility } from "./utility";
 
-export { AuditEvent, Design, Equipment, Invitation, Jurisdiction, Organization, Packet, Project, SignInAttempt, StageChange, User, Utility };
+export {
+  AuditEvent,
+  Design,
+  Equipment,
+  Invitation,
+  Jurisdiction,
+  Organization,
+  Packet,
+  Project,
+  SignInAttempt,
+  StageChange,
+  User,
+  Utility,
+};
 export { ApiToken };
 export { ShareLink, ShareLinkAccess, ShareLinkMiss, ShareLinkPacket };
 export { OutboxMessage };
@@ -44,7 +57,20 @@ let initialized: Sequelize | null = null;
 export function initModels(sequelize: Sequelize) {
   if (initialized === sequelize) return;
   initialized = sequelize;
-  for (const model of [Organization, User, Invitation, SignInAttempt, Jurisdiction, Utility, Project, StageChange, AuditEvent, Equipment, Design, Packet]) {
+  for (const model of [
+    Organization,
+    User,
+    Invitation,
+    SignInAttempt,
+    Jurisdiction,
+    Utility,
+    Project,
+    StageChange,
+    AuditEvent,
+    Equipment,
+    Design,
+    Packet,
+  ]) {
     model.initModel(sequelize);
   }
   Project.belongsTo(Jurisdiction, { as: "jurisdiction", foreignKey: "jurisdictionId" });

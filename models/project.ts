@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from "sequelize";
 import type { FilingStatus, HoldState, Stage, WaitingParty } from "@/lib/domain/stored-values";
 import type { Jurisdiction } from "./jurisdiction";
 import type { Utility } from "./utility";

@@ -29,5 +29,4 @@ export class ApiError extends Error {
 
 export const invalid = (message, param, code) => new ApiError(400, message, { param, code });
 
-export const missing = (kind, id, param = "id") =>
-  new ApiError(404, `No such ${kind}: '${id}'`, { param, code: "resource_missing" });
+export const missing = (kind, id, param = "id") => new ApiError(404, `No such ${kind}: '${id}'`, { param, code: "resource_missing" });

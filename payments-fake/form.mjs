@@ -79,7 +79,10 @@ export function parseForm(input) {
       } else {
         if (!Object.hasOwn(node, part)) node[part] = {};
         if (typeof node[part] !== "object") {
-          throw new FormError(`Parameter ${printable(parts.slice(0, i + 1))} cannot be both a value and a group.`, printable(parts.slice(0, i + 1)));
+          throw new FormError(
+            `Parameter ${printable(parts.slice(0, i + 1))} cannot be both a value and a group.`,
+            printable(parts.slice(0, i + 1)),
+          );
         }
         node = node[part];
       }

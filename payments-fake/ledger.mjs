@@ -150,15 +150,27 @@ export class Ledger {
 
   createSession(params, context) {
     onlyKnown(params, [
-      "mode", "line_items", "success_url", "cancel_url", "client_reference_id", "customer_email",
-      "metadata", "payment_intent_data", "expires_at", "expand", "payment_method_types", "locale", "submit_type",
+      "mode",
+      "line_items",
+      "success_url",
+      "cancel_url",
+      "client_reference_id",
+      "customer_email",
+      "metadata",
+      "payment_intent_data",
+      "expires_at",
+      "expand",
+      "payment_method_types",
+      "locale",
+      "submit_type",
     ]);
     const mode = text(params.mode, "mode", { required: true });
     if (mode !== "payment") throw invalid(`Invalid mode: the payments fake supports only 'payment', got '${mode}'.`, "mode");
 
     const items = params.line_items;
     if (items === undefined || items === "") throw invalid("Missing required parameter: line_items.", "line_items");
-    if (!Array.isArray(items) || items.length === 0) throw invalid("Invalid line_items: expected a list such as line_items[0][quantity]=1.", "line_items");
+    if (!Array.isArray(items) || items.length === 0)
+      throw invalid("Invalid line_items: expected a list such as line_items[0][quantity]=1.", "line_items");
     if (items.length > 100) throw invalid("Invalid line_items: at most 100 items are allowed.", "line_items");
     const created = nowSeconds();
     const lines = items.map((item, index) => this.#lineItem(item, `line_items[${index}]`, created));
@@ -173,22 +185,27 @@ export class Ledger {
     const sessionMetadata = metadata(params.metadata, "metadata");
 
     const intentData = params.payment_intent_data ?? {};
-    if (intentData !== "" && !isObject(intentData)) throw invalid("Invalid payment_intent_data: expected a group of fields.", "payment_intent_data");
+    if (intentData !== "" && !isObject(intentData))
+      throw invalid("Invalid payment_intent_data: expected a group of fields.", "payment_intent_data");
     const intent = intentData === "" ? {} : intentData;
     onlyKnown(intent, ["metadata", "description", "receipt_email"], "payment_intent_data");
     const intentMetadata = metadata(intent.metadata, "payment_intent_data[metadata]");
     const intentDescription = text(intent.description, "payment_intent_data[description]", { max: 1000 });
     const receiptEmail = email(intent.receipt_email, "payment_intent_data[receipt_email]");
 
-    const expiresAt = integer(params.expires_at, "expires_at", {
-      min: created + MIN_LIFETIME,
-      max: created + MAX_LIFETIME,
-    }) ?? created + MAX_LIFETIME;
+    const expiresAt =
+      integer(params.expires_at, "expires_at", {
+        min: created + MIN_LIFETIME,
+        max: created + MAX_LIFETIME,
+      }) ?? created + MAX_LIFETIME;
 
     if (params.payment_method_types !== undefined) {
       const types = params.payment_method_types;
       if (!Array.isArray(types) || types.length !== 1 || types[0] !== "card") {
-        throw invalid("Invalid payment_method_types: the payments fake takes only cards (payment_method_types[0]=card).", "payment_method_types");
+        throw invalid(
+          "Invalid payment_method_types: the payments fake takes only cards (payment_method_types[0]=card).",
+          "payment_method_types",
+        );
       }
     }
     const locale = text(params.locale, "locale", { max: 10 });
@@ -259,7 +276,10 @@ export class Ledger {
   #lineItem(item, param, created) {
     if (!isObject(item)) throw invalid(`Invalid ${param}: expected a group of fields.`, param);
     if (item.price !== undefined) {
-      throw invalid(`Invalid ${param}[price]: saved prices are not supported by the payments fake; send ${param}[price_data] instead.`, `${param}[price]`);
+      throw invalid(
+        `Invalid ${param}[price]: saved prices are not supported by the payments fake; send ${param}[price_data] instead.`,
+        `${param}[price]`,
+      );
     }
     onlyKnown(item, ["price_data", "quantity"], param);
     const priceData = item.price_data;
@@ -272,8 +292,10 @@ export class Ledger {
     }
     const unitAmount = integer(priceData.unit_amount, `${param}[price_data][unit_amount]`, { required: true, min: 0, max: MAX_AMOUNT });
     const product = priceData.product_data;
-    if (product === undefined) throw invalid(`Missing required parameter: ${param}[price_data][product_data].`, `${param}[price_data][product_data]`);
-    if (!isObject(product)) throw invalid(`Invalid ${param}[price_data][product_data]: expected a group of fields.`, `${param}[price_data][product_data]`);
+    if (product === undefined)
+      throw invalid(`Missing required parameter: ${param}[price_data][product_data].`, `${param}[price_data][product_data]`);
+    if (!isObject(product))
+      throw invalid(`Invalid ${param}[price_data][product_data]: expected a group of fields.`, `${param}[price_data][product_data]`);
     onlyKnown(product, ["name", "description"], `${param}[price_data][product_data]`);
     const name = text(product.name, `${param}[price_data][product_data][name]`, { required: true, max: 250 });
     text(product.description, `${param}[price_data][product_data][description]`, { max: 1000 });
@@ -523,7 +545,9 @@ export class Ledger {
     const id = newId("ch");
     const card = {
       ...this.#cardDetails(details),
-      three_d_secure: details.authenticated ? { authentication_flow: "challenge", result: "authenticated", result_reason: null, version: "2.2.0" } : null,
+      three_d_secure: details.authenticated
+        ? { authentication_flow: "challenge", result: "authenticated", result_reason: null, version: "2.2.0" }
+        : null,
     };
     const charge = {
       id,

@@ -9,7 +9,10 @@ export function onlyKnown(params, allowed, prefix = "") {
   for (const key of Object.keys(params)) {
     if (!allowed.includes(key)) {
       const name = prefix ? `${prefix}[${key}]` : key;
-      throw invalid(`Unknown parameter: ${name}. The payments fake accepts ${allowed.map((a) => (prefix ? `${prefix}[${a}]` : a)).join(", ")} here.`, name);
+      throw invalid(
+        `Unknown parameter: ${name}. The payments fake accepts ${allowed.map((a) => (prefix ? `${prefix}[${a}]` : a)).join(", ")} here.`,
+        name,
+      );
     }
   }
 }

@@ -68,7 +68,8 @@ function alert(message) {
 function summary(session, lineItems) {
   const rows = lineItems
     .map(
-      (item) => `<tr><td>${escape(item.description)}${item.quantity > 1 ? ` × ${item.quantity}` : ""}</td><td class="amount">${escape(formatAmount(item.amount_total, item.currency))}</td></tr>`,
+      (item) =>
+        `<tr><td>${escape(item.description)}${item.quantity > 1 ? ` × ${item.quantity}` : ""}</td><td class="amount">${escape(formatAmount(item.amount_total, item.currency))}</td></tr>`,
     )
     .join("\n");
   return `<table>
@@ -98,7 +99,9 @@ export function payPage({ session, lineItems, error = null, field = null, values
     return ids.length ? ` aria-describedby="${ids.join(" ")}"` : "";
   };
   // Screen-reader users hear the title first, so a failed attempt says so there too.
-  return layout(`${error ? "Error: " : ""}Pay ${amount} — local test payment`, `
+  return layout(
+    `${error ? "Error: " : ""}Pay ${amount} — local test payment`,
+    `
 ${testModeNotice()}
 <h1>Pay ${escape(amount)}</h1>
 ${alert(error)}
@@ -124,13 +127,16 @@ ${summary(session, lineItems)}
   </div>
   <button type="submit">Pay ${escape(amount)}</button>
 </form>
-${cancelLink(session)}`);
+${cancelLink(session)}`,
+  );
 }
 
 /** The extra step some cards ask for before the payment goes through. */
 export function authenticatePage({ session, last4 }) {
   const amount = formatAmount(session.amount_total, session.currency);
-  return layout("Confirm this payment — local test payment", `
+  return layout(
+    "Confirm this payment — local test payment",
+    `
 ${testModeNotice()}
 <h1>Extra authentication needed</h1>
 <p>The bank of the card ending in ${escape(last4)} asks you to confirm this payment of <strong>${escape(amount)}</strong>.
@@ -141,29 +147,39 @@ This is a simulation: choose what the card holder does.</p>
     <button type="submit" name="result" value="fail" class="secondary">Fail authentication</button>
   </div>
 </form>
-${cancelLink(session)}`);
+${cancelLink(session)}`,
+  );
 }
 
 /** Shown when the session can no longer take a payment. */
 export function closedPage({ session }) {
   if (session.status === "complete") {
     const back = session.success_url.replaceAll("{CHECKOUT_SESSION_ID}", session.id);
-    return layout("Already paid — local test payment", `
+    return layout(
+      "Already paid — local test payment",
+      `
 ${testModeNotice()}
 <h1>This payment is already complete</h1>
 <p>${escape(formatAmount(session.amount_total, session.currency))} was paid. Nothing more is needed.</p>
-<p><a href="${escape(back)}">Continue</a></p>`);
+<p><a href="${escape(back)}">Continue</a></p>`,
+    );
   }
-  return layout("Payment page expired — local test payment", `
+  return layout(
+    "Payment page expired — local test payment",
+    `
 ${testModeNotice()}
 <h1>This payment page has expired</h1>
 <p>No payment was taken. Start the payment again from the application to get a new page.</p>
-${cancelLink(session)}`);
+${cancelLink(session)}`,
+  );
 }
 
 export function notFoundPage() {
-  return layout("Payment page not found — local test payment", `
+  return layout(
+    "Payment page not found — local test payment",
+    `
 ${testModeNotice()}
 <h1>Payment page not found</h1>
-<p>There is no payment with this address. Start the payment again from the application.</p>`);
+<p>There is no payment with this address. Start the payment again from the application.</p>`,
+  );
 }

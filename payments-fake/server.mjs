@@ -83,7 +83,9 @@ const masked = (key) => (key.length > 12 ? `${key.slice(0, 8)}…${key.slice(-4)
 
 /** MM/YY or MM/YYYY, not in the past; null when it is not a usable expiry. */
 function parseExpiry(raw) {
-  const match = String(raw ?? "").trim().match(/^(\d{1,2})\s*\/\s*(\d{2}|\d{4})$/);
+  const match = String(raw ?? "")
+    .trim()
+    .match(/^(\d{1,2})\s*\/\s*(\d{2}|\d{4})$/);
   if (!match) return null;
   const month = Number(match[1]);
   const year = match[2].length === 2 ? 2000 + Number(match[2]) : Number(match[2]);
@@ -170,9 +172,12 @@ export async function startPaymentsFake({
     if (!key) {
       return fail(new ApiError(401, "No API key was sent. Send it as 'Authorization: Bearer <secret key>'."));
     }
-    if (key !== apiKey) return fail(new ApiError(401, `Invalid API key: ${masked(key)}. This payments fake accepts only its own test key.`));
+    if (key !== apiKey)
+      return fail(new ApiError(401, `Invalid API key: ${masked(key)}. This payments fake accepts only its own test key.`));
 
-    const found = API_ROUTES.map(([method, pattern, name]) => ({ method, match: url.pathname.match(pattern), name })).filter((r) => r.match);
+    const found = API_ROUTES.map(([method, pattern, name]) => ({ method, match: url.pathname.match(pattern), name })).filter(
+      (r) => r.match,
+    );
     const route = found.find((r) => r.method === req.method);
     if (!route) {
       return fail(new ApiError(404, `Unrecognised request: ${req.method} ${url.pathname} is not part of the payments fake.`));
@@ -199,9 +204,13 @@ export async function startPaymentsFake({
       const stored = store.idempotency[idempotencyKey];
       if (stored && stored.fingerprint !== fingerprint) {
         return fail(
-          new ApiError(400, `Idempotency key '${idempotencyKey}' was already used for a different request; use a new key for new parameters or routes.`, {
-            type: "idempotency_error",
-          }),
+          new ApiError(
+            400,
+            `Idempotency key '${idempotencyKey}' was already used for a different request; use a new key for new parameters or routes.`,
+            {
+              type: "idempotency_error",
+            },
+          ),
         );
       }
       if (stored) {
@@ -363,8 +372,10 @@ export async function startPaymentsFake({
     if (path === "/_fake/webhooks" && (req.method === "GET" || req.method === "POST")) {
       if (req.method === "POST") {
         const body = await readJson(req);
-        if (body.paused !== undefined && typeof body.paused !== "boolean") throw new ApiError(400, "paused must be true or false.", { param: "paused" });
-        if (body.url !== undefined && body.url !== null && typeof body.url !== "string") throw new ApiError(400, "url must be a string or null.", { param: "url" });
+        if (body.paused !== undefined && typeof body.paused !== "boolean")
+          throw new ApiError(400, "paused must be true or false.", { param: "paused" });
+        if (body.url !== undefined && body.url !== null && typeof body.url !== "string")
+          throw new ApiError(400, "url must be a string or null.", { param: "url" });
         if (body.url !== undefined) webhooks.setUrl(body.url);
         if (body.paused !== undefined) webhooks.setPaused(body.paused);
       }

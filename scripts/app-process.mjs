@@ -23,7 +23,15 @@ export async function migrateAndSeed(root, env, { seed = true } = {}) {
 }
 
 const SOURCE_DIRS = ["app", "components", "lib", "models", "templates", "public"];
-const SOURCE_FILES = ["package-lock.json", "next.config.mjs", "tailwind.config.ts", "postcss.config.mjs", "tsconfig.json", "proxy.ts", "instrumentation.ts"];
+const SOURCE_FILES = [
+  "package-lock.json",
+  "next.config.mjs",
+  "tailwind.config.ts",
+  "postcss.config.mjs",
+  "tsconfig.json",
+  "proxy.ts",
+  "instrumentation.ts",
+];
 
 function sourceHash(root) {
   const hash = createHash("sha256");

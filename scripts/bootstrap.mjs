@@ -33,7 +33,9 @@ export function ensureNodeModules(root) {
 
 export function aptInstall(packages, why) {
   if (!isRoot) {
-    fail(`${why}\n  Install it once with:\n\n    sudo apt-get update && sudo apt-get install -y ${packages.join(" ")}\n\n  then run the command again.`);
+    fail(
+      `${why}\n  Install it once with:\n\n    sudo apt-get update && sudo apt-get install -y ${packages.join(" ")}\n\n  then run the command again.`,
+    );
   }
   console.log(`• Installing Debian packages: ${packages.join(", ")} …`);
   const env = { ...process.env, DEBIAN_FRONTEND: "noninteractive" };

@@ -27,7 +27,8 @@ async function startQueue(): Promise<PgBoss> {
       await boss.createQueue(PACKET_QUEUE);
       return boss;
     } catch (error) {
-      if (attempt === 1) console.error("• The database is not answering; the worker keeps trying.", error instanceof Error ? error.message : error);
+      if (attempt === 1)
+        console.error("• The database is not answering; the worker keeps trying.", error instanceof Error ? error.message : error);
       await boss.stop({ graceful: false }).catch(() => undefined);
       await new Promise((resolve) => setTimeout(resolve, Math.min(30_000, 1_000 * attempt)));
     }

@@ -22,12 +22,25 @@ function useErrorAt() {
 
 const inputId = (idPrefix: string, path: string) => `${idPrefix}-${path.replaceAll(".", "-")}`;
 
-type TextFieldProps = { idPrefix: string; path: FormPath; label: string; hint?: string; className?: string; measure?: boolean } & Pick<HTMLAttributes<HTMLInputElement>, "inputMode"> & {
+type TextFieldProps = { idPrefix: string; path: FormPath; label: string; hint?: string; className?: string; measure?: boolean } & Pick<
+  HTMLAttributes<HTMLInputElement>,
+  "inputMode"
+> & {
     type?: "text" | "date";
     placeholder?: string;
   };
 
-function TextField({ idPrefix, path, label, hint, className, measure = true, inputMode = "decimal", type = "text", placeholder }: TextFieldProps) {
+function TextField({
+  idPrefix,
+  path,
+  label,
+  hint,
+  className,
+  measure = true,
+  inputMode = "decimal",
+  type = "text",
+  placeholder,
+}: TextFieldProps) {
   const { register } = useFormContext<FeeScheduleFormInput>();
   const error = useErrorAt()(path);
   const id = inputId(idPrefix, path);
@@ -92,9 +105,23 @@ export function FeeLineFields({ idPrefix, index, onRemove }: { idPrefix: string;
         </p>
       ) : null}
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField idPrefix={idPrefix} path={`lines.${index}.name`} label="Fee name" hint="e.g. Building permit, Plan review, Interconnection application" className="sm:col-span-2" measure={false} inputMode="text" />
+        <TextField
+          idPrefix={idPrefix}
+          path={`lines.${index}.name`}
+          label="Fee name"
+          hint="e.g. Building permit, Plan review, Interconnection application"
+          className="sm:col-span-2"
+          measure={false}
+          inputMode="text"
+        />
         <TextField idPrefix={idPrefix} path={`lines.${index}.effectiveFrom`} label="Takes effect" type="date" />
-        <TextField idPrefix={idPrefix} path={`lines.${index}.effectiveUntil`} label="Ends (optional)" type="date" hint="The first day it no longer applies" />
+        <TextField
+          idPrefix={idPrefix}
+          path={`lines.${index}.effectiveUntil`}
+          label="Ends (optional)"
+          type="date"
+          hint="The first day it no longer applies"
+        />
         <div className="sm:col-span-2">
           <Field label="How it is worked out" htmlFor={kindId} error={kindError}>
             <select
@@ -112,7 +139,9 @@ export function FeeLineFields({ idPrefix, index, onRemove }: { idPrefix: string;
             </select>
           </Field>
         </div>
-        {kind === "flat" ? <TextField idPrefix={idPrefix} path={`lines.${index}.basis.amountUsd`} label="Amount ($)" hint="e.g. 150.00" /> : null}
+        {kind === "flat" ? (
+          <TextField idPrefix={idPrefix} path={`lines.${index}.basis.amountUsd`} label="Amount ($)" hint="e.g. 150.00" />
+        ) : null}
         {kind === "per-kw" ? (
           <>
             <SizeField idPrefix={idPrefix} index={index} />
@@ -126,11 +155,28 @@ export function FeeLineFields({ idPrefix, index, onRemove }: { idPrefix: string;
             <TierRows key={`${index}-${kind}`} idPrefix={idPrefix} index={index} kind={kind} />
           </>
         ) : null}
-        {kind === "valuation-percent" ? <TextField idPrefix={idPrefix} path={`lines.${index}.basis.ratePercent`} label="Percent of valuation" hint="As the schedule prints it: 1.25 means 1.25 %" /> : null}
+        {kind === "valuation-percent" ? (
+          <TextField
+            idPrefix={idPrefix}
+            path={`lines.${index}.basis.ratePercent`}
+            label="Percent of valuation"
+            hint="As the schedule prints it: 1.25 means 1.25 %"
+          />
+        ) : null}
       </div>
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField idPrefix={idPrefix} path={`lines.${index}.minimumUsd`} label="Minimum ($, optional)" hint="The fee is never less than this" />
-        <TextField idPrefix={idPrefix} path={`lines.${index}.maximumUsd`} label="Maximum ($, optional)" hint="The fee is never more than this" />
+        <TextField
+          idPrefix={idPrefix}
+          path={`lines.${index}.minimumUsd`}
+          label="Minimum ($, optional)"
+          hint="The fee is never less than this"
+        />
+        <TextField
+          idPrefix={idPrefix}
+          path={`lines.${index}.maximumUsd`}
+          label="Maximum ($, optional)"
+          hint="The fee is never more than this"
+        />
       </div>
       <Button type="button" variant="quiet" className="px-2" onClick={onRemove}>
         Remove fee line {number}
@@ -148,13 +194,18 @@ function TierRows({ idPrefix, index, kind }: { idPrefix: string; index: number; 
   const isBracket = kind === "bracket-tiers";
   const [noun, Noun] = isBracket ? ["bracket", "Bracket"] : ["tier", "Tier"];
   const listError = errorAt(tiersPath);
-  const addRow = (at: number) => tiers.insert(at, isBracket ? { upToKw: "", amountUsd: "" } : { upToKw: "", rateUsdPerKw: "" }, { focusName: `${tiersPath}.${at}.upToKw` });
+  const addRow = (at: number) =>
+    tiers.insert(at, isBracket ? { upToKw: "", amountUsd: "" } : { upToKw: "", rateUsdPerKw: "" }, {
+      focusName: `${tiersPath}.${at}.upToKw`,
+    });
 
   return (
     <div className="space-y-3 sm:col-span-2">
       <p className="text-xs text-ink-faint">
-        {isBracket ? "The whole fee is the amount of the bracket the size falls in." : "Each tier's rate applies only to the kW within that tier; the parts are added."} A size exactly on an edge belongs to
-        the row that ends there: up to 10 kW includes 10 kW.
+        {isBracket
+          ? "The whole fee is the amount of the bracket the size falls in."
+          : "Each tier's rate applies only to the kW within that tier; the parts are added."}{" "}
+        A size exactly on an edge belongs to the row that ends there: up to 10 kW includes 10 kW.
       </p>
       {listError ? (
         <p className="text-sm text-result-fail" role="alert">
@@ -164,7 +215,10 @@ function TierRows({ idPrefix, index, kind }: { idPrefix: string; index: number; 
       {tiers.fields.map((field, t) => {
         const isLast = t === tiers.fields.length - 1;
         return (
-          <fieldset key={field.id} className="grid items-start gap-3 rounded border border-paper-edge/70 bg-paper/40 p-3 sm:grid-cols-[1fr_1fr_auto]">
+          <fieldset
+            key={field.id}
+            className="grid items-start gap-3 rounded border border-paper-edge/70 bg-paper/40 p-3 sm:grid-cols-[1fr_1fr_auto]"
+          >
             <legend className="px-1 text-xs font-semibold text-ink-soft">
               {Noun} {t + 1}
             </legend>
@@ -180,7 +234,13 @@ function TierRows({ idPrefix, index, kind }: { idPrefix: string; index: number; 
             ) : (
               <TextField idPrefix={idPrefix} path={`${tiersPath}.${t}.rateUsdPerKw`} label="Rate ($ per kW)" />
             )}
-            <Button type="button" variant="quiet" className="px-2 sm:mt-6" disabled={tiers.fields.length === 1} onClick={() => tiers.remove(t)}>
+            <Button
+              type="button"
+              variant="quiet"
+              className="px-2 sm:mt-6"
+              disabled={tiers.fields.length === 1}
+              onClick={() => tiers.remove(t)}
+            >
               Remove {noun} {t + 1}
             </Button>
           </fieldset>

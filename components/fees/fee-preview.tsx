@@ -16,7 +16,13 @@ type Preview = { kind: "hint"; text: string } | { kind: "fees"; computation: Fee
  * "Try it": the schedule as typed, worked out for a system the admin describes, with the same
  * arithmetic a project's fees use. Shown only while every line parses; nothing here is saved.
  */
-export function FeePreview({ control, authorityName }: { control: Control<FeeScheduleFormInput, unknown, FeeScheduleFormValues>; authorityName: string }) {
+export function FeePreview({
+  control,
+  authorityName,
+}: {
+  control: Control<FeeScheduleFormInput, unknown, FeeScheduleFormValues>;
+  authorityName: string;
+}) {
   const id = useId();
   const lines = useWatch({ control, name: "lines" });
   // The server has no say in "today" for this box: it is read once the page runs in the browser.
@@ -33,13 +39,17 @@ export function FeePreview({ control, authorityName }: { control: Control<FeeSch
     if (!parsed.success) {
       const [issue] = parsed.error.issues;
       const where = typeof issue?.path[0] === "number" ? `Fee line ${issue.path[0] + 1} – ` : "";
-      return { kind: "hint", text: `The preview shows once every line is complete and valid. Next to fix: ${where}${issue?.message ?? "check the lines"}.` };
+      return {
+        kind: "hint",
+        text: `The preview shows once every line is complete and valid. Next to fix: ${where}${issue?.message ?? "check the lines"}.`,
+      };
     }
     const dc = readKw(dcKw);
     const ac = readKw(acKw);
     const valuationCents = valuation.trim() === "" ? null : parseUsd(valuation);
     if (dc === null || ac === null) return { kind: "hint", text: "Enter the sizes in kW, e.g. 7.6." };
-    if (valuationCents === null && valuation.trim() !== "") return { kind: "hint", text: "Enter the valuation in dollars, e.g. 25000, or leave it blank." };
+    if (valuationCents === null && valuation.trim() !== "")
+      return { kind: "hint", text: "Enter the valuation in dollars, e.g. 25000, or leave it blank." };
     if (!date) return { kind: "hint", text: "Loading the preview…" }; // before the browser has said which day it is
     try {
       const computation = computeFees({ lines: parsed.data, facts: { dcKw: dc, acKw: ac, valuationCents, asOf: date } });
@@ -55,18 +65,31 @@ export function FeePreview({ control, authorityName }: { control: Control<FeeSch
       <label className="label" htmlFor={`${id}-${key}`}>
         {label}
       </label>
-      <input id={`${id}-${key}`} type={type} inputMode={type === "text" ? "decimal" : undefined} autoComplete="off" className="input measure" value={value} onChange={(e) => set(e.target.value)} />
+      <input
+        id={`${id}-${key}`}
+        type={type}
+        inputMode={type === "text" ? "decimal" : undefined}
+        autoComplete="off"
+        className="input measure"
+        value={value}
+        onChange={(e) => set(e.target.value)}
+      />
       {hint ? <p className="mt-1 text-xs text-ink-faint">{hint}</p> : null}
     </div>
   );
 
   return (
-    <section aria-labelledby={`${id}-title`} className="space-y-3 rounded-md border border-dashed border-copper/40 bg-copper-light/20 p-3 sm:p-4">
+    <section
+      aria-labelledby={`${id}-title`}
+      className="space-y-3 rounded-md border border-dashed border-copper/40 bg-copper-light/20 p-3 sm:p-4"
+    >
       <div>
         <h3 id={`${id}-title`} className="font-semibold">
           Try it
         </h3>
-        <p className="text-xs text-ink-soft">What {authorityName} would charge a system like this under the lines above, as typed. Nothing here is saved.</p>
+        <p className="text-xs text-ink-soft">
+          What {authorityName} would charge a system like this under the lines above, as typed. Nothing here is saved.
+        </p>
       </div>
       <div className="grid gap-3 sm:grid-cols-4">
         {input("dc", "DC size (kW)", dcKw, setDcKw, "Module nameplate total")}

@@ -14,9 +14,19 @@ import { FeePreview } from "./fee-preview";
 import { FeeScheduleForm, newFeeLine, type FeeScheduleFormInput, type FeeScheduleFormValues } from "./fee-schedule-form";
 
 /** The server action that replaces a schedule, handed down by the page that shows the editor. */
-export type SaveFeeSchedule = (input: { authorityKind: FeeAuthorityKind; authorityId: string; lines: FeeScheduleFormInput["lines"] }) => Promise<ActionResult<{ lineCount: number }>>;
+export type SaveFeeSchedule = (input: {
+  authorityKind: FeeAuthorityKind;
+  authorityId: string;
+  lines: FeeScheduleFormInput["lines"];
+}) => Promise<ActionResult<{ lineCount: number }>>;
 
-type Props = { authorityKind: FeeAuthorityKind; authorityId: string; authorityName: string; initialLines: FeeLine[]; save: SaveFeeSchedule };
+type Props = {
+  authorityKind: FeeAuthorityKind;
+  authorityId: string;
+  authorityName: string;
+  initialLines: FeeLine[];
+  save: SaveFeeSchedule;
+};
 
 /**
  * An AHJ's or a utility's fee schedule, line by line, with a preview of what it charges.
@@ -53,11 +63,19 @@ export function FeeScheduleEditor({ authorityKind, authorityId, authorityName, i
               {listError}
             </p>
           ) : null}
-          {lines.fields.length === 0 ? <p className="text-sm text-ink-soft">No fee lines yet. Add one for each fee {who} charges; a new version of a fee is a line with the same name and a later start.</p> : null}
+          {lines.fields.length === 0 ? (
+            <p className="text-sm text-ink-soft">
+              No fee lines yet. Add one for each fee {who} charges; a new version of a fee is a line with the same name and a later start.
+            </p>
+          ) : null}
           {lines.fields.map((field, index) => (
             <FeeLineFields key={field.id} idPrefix={formId} index={index} onRemove={() => lines.remove(index)} />
           ))}
-          <Button type="button" variant="secondary" onClick={() => lines.append(newFeeLine(), { focusName: `lines.${lines.fields.length}.name` })}>
+          <Button
+            type="button"
+            variant="secondary"
+            onClick={() => lines.append(newFeeLine(), { focusName: `lines.${lines.fields.length}.name` })}
+          >
             Add fee line
           </Button>
         </form>

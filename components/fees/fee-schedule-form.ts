@@ -20,7 +20,15 @@ export function newLineId(): string {
 }
 
 export function newFeeLine(): FeeLineInput {
-  return { id: newLineId(), name: "", effectiveFrom: todayIso(), effectiveUntil: "", basis: { kind: "flat", amountUsd: "" }, minimumUsd: "", maximumUsd: "" };
+  return {
+    id: newLineId(),
+    name: "",
+    effectiveFrom: todayIso(),
+    effectiveUntil: "",
+    basis: { kind: "flat", amountUsd: "" },
+    minimumUsd: "",
+    maximumUsd: "",
+  };
 }
 
 /**
@@ -29,7 +37,10 @@ export function newFeeLine(): FeeLineInput {
  */
 export function basisFor(kind: FeeBasisKind, previous: FeeBasisInput | undefined): FeeBasisInput {
   const size: SizeRating = previous && "size" in previous && previous.size === "ac" ? "ac" : "dc";
-  const edges = previous && "tiers" in previous && Array.isArray(previous.tiers) && previous.tiers.length > 0 ? previous.tiers.map((tier) => tier.upToKw ?? "") : ["", ""];
+  const edges =
+    previous && "tiers" in previous && Array.isArray(previous.tiers) && previous.tiers.length > 0
+      ? previous.tiers.map((tier) => tier.upToKw ?? "")
+      : ["", ""];
   switch (kind) {
     case "flat":
       return { kind, amountUsd: "" };

@@ -11,7 +11,11 @@ import { applyFieldErrors } from "./apply-field-errors";
  * beside their fields and keeps every typed value.
  */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- any transformed output type will do
-export function useActionSubmit<T extends FieldValues, R>(form: UseFormReturn<T, any, any>, send: (raw: T) => Promise<ActionResult<R>>, onDone: (data: R) => void) {
+export function useActionSubmit<T extends FieldValues, R>(
+  form: UseFormReturn<T, any, any>,
+  send: (raw: T) => Promise<ActionResult<R>>,
+  onDone: (data: R) => void,
+) {
   const [message, setMessage] = useState<string>();
   const submit = form.handleSubmit(async () => {
     setMessage(undefined);

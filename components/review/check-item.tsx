@@ -1,7 +1,8 @@
 import type { CheckResult } from "@/lib/engineering";
 import { CheckStatusChip } from "./check-status";
 
-const fmt = (v: number | null, unit: string) => (v === null ? "—" : `${v.toLocaleString("en-US", { maximumFractionDigits: 2 })}${unit ? ` ${unit}` : ""}`);
+const fmt = (v: number | null, unit: string) =>
+  v === null ? "—" : `${v.toLocaleString("en-US", { maximumFractionDigits: 2 })}${unit ? ` ${unit}` : ""}`;
 
 export function CheckItem({ check }: { check: CheckResult }) {
   return (

@@ -9,5 +9,14 @@ const TONE: Record<CheckStatus, string> = {
 
 /** A result chip: the word is always shown, so colour is never the only signal. */
 export function CheckStatusChip({ status }: { status: CheckStatus }) {
-  return <span className={clsx("inline-block min-w-[3.2rem] rounded border px-1.5 py-0.5 text-center text-xs font-semibold uppercase tracking-wide", TONE[status])}>{status}</span>;
+  return (
+    <span
+      className={clsx(
+        "inline-block min-w-[3.2rem] rounded border px-1.5 py-0.5 text-center text-xs font-semibold uppercase tracking-wide",
+        TONE[status],
+      )}
+    >
+      {status}
+    </span>
+  );
 }

@@ -11,5 +11,14 @@ const VARIANTS: Record<Variant, string> = {
 };
 
 export function Button({ variant = "primary", className, ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
-  return <button className={clsx("inline-flex items-center justify-center gap-2 rounded px-4 py-2 text-sm font-medium transition-colors disabled:cursor-not-allowed", VARIANTS[variant], className)} {...props} />;
+  return (
+    <button
+      className={clsx(
+        "inline-flex items-center justify-center gap-2 rounded px-4 py-2 text-sm font-medium transition-colors disabled:cursor-not-allowed",
+        VARIANTS[variant],
+        className,
+      )}
+      {...props}
+    />
+  );
 }

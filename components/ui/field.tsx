@@ -1,7 +1,19 @@
 import type { ReactNode } from "react";
 
 /** A labelled form control with its error shown right under it. */
-export function Field({ label, htmlFor, error, hint, children }: { label: string; htmlFor: string; error?: string; hint?: string; children: ReactNode }) {
+export function Field({
+  label,
+  htmlFor,
+  error,
+  hint,
+  children,
+}: {
+  label: string;
+  htmlFor: string;
+  error?: string;
+  hint?: string;
+  children: ReactNode;
+}) {
   return (
     <div>
       <label className="label" htmlFor={htmlFor}>

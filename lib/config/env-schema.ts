@@ -11,15 +11,24 @@ const EnvSchema = z.object({
   S3_BUCKET: z.string({ error: "S3_BUCKET is required" }).min(3),
   S3_ACCESS_KEY_ID: z.string({ error: "S3_ACCESS_KEY_ID is required" }).min(1),
   S3_SECRET_ACCESS_KEY: z.string({ error: "S3_SECRET_ACCESS_KEY is required" }).min(1),
-  S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
+  S3_FORCE_PATH_STYLE: z
+    .enum(["true", "false"])
+    .default("false")
+    .transform((v) => v === "true"),
   SMTP_URL: url("SMTP_URL").refine((v) => /^smtps?:\/\//.test(v), "SMTP_URL must start with smtp:// or smtps://"),
   MAIL_FROM: z.string({ error: "MAIL_FROM is required" }).min(3),
   // Set only when the local fakes run: it turns the mailbox page on.
   MAILBOX_URL: url("MAILBOX_URL").optional(),
   // Fees: a Stripe secret key and the webhook endpoint's signing secret (the local fake's are not secrets).
   // STRIPE_API_URL points the SDK at the local fake; leave it unset to talk to Stripe itself.
-  STRIPE_SECRET_KEY: z.string().regex(/^(sk|rk)_(test|live)_\w+$/, "STRIPE_SECRET_KEY must look like sk_test_…").optional(),
-  STRIPE_WEBHOOK_SECRET: z.string().regex(/^whsec_\w+$/, "STRIPE_WEBHOOK_SECRET must look like whsec_…").optional(),
+  STRIPE_SECRET_KEY: z
+    .string()
+    .regex(/^(sk|rk)_(test|live)_\w+$/, "STRIPE_SECRET_KEY must look like sk_test_…")
+    .optional(),
+  STRIPE_WEBHOOK_SECRET: z
+    .string()
+    .regex(/^whsec_\w+$/, "STRIPE_WEBHOOK_SECRET must look like whsec_…")
+    .optional(),
   STRIPE_API_URL: url("STRIPE_API_URL").optional(),
 });
 

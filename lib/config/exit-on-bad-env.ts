@@ -5,7 +5,9 @@ export function exitOnBadEnv() {
   try {
     parseEnv(process.env);
   } catch (error) {
-    console.error(`\n${error instanceof Error ? error.message : String(error)}\nSet these variables (see README.md, "Configuration") and start again.\n`);
+    console.error(
+      `\n${error instanceof Error ? error.message : String(error)}\nSet these variables (see README.md, "Configuration") and start again.\n`,
+    );
     process.exit(1);
   }
 }
@@ -17,6 +19,8 @@ export function exitOnBadEnv() {
  */
 export function exitOutsideFrontDoor() {
   if (process.env.OHMSTEAD_FRONT_DOOR === "1") return;
-  console.error("\nStart Ohmstead with `npm run serve` (scripts/serve.mjs), not `next start`: it takes each client's address from the connection or from TRUSTED_PROXY_HOPS proxies (see README.md, \"Configuration for production\").\n");
+  console.error(
+    '\nStart Ohmstead with `npm run serve` (scripts/serve.mjs), not `next start`: it takes each client\'s address from the connection or from TRUSTED_PROXY_HOPS proxies (see README.md, "Configuration for production").\n',
+  );
   process.exit(1);
 }

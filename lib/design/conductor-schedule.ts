@@ -24,7 +24,11 @@ const NUMBER = new Intl.NumberFormat("en-US", { maximumFractionDigits: 2 });
 const RACEWAY_NAMES: Record<string, string> = { EMT: "EMT", "PVC-40": "PVC Sch 40" };
 
 /** What a run carries, in the schedule's words. */
-function carriesText(circuit: string, inverterLines: { lineId: string; quantity: number; model: string }[], circuits: number | null): string {
+function carriesText(
+  circuit: string,
+  inverterLines: { lineId: string; quantity: number; model: string }[],
+  circuits: number | null,
+): string {
   const [kind, ref] = circuit.split(":");
   const count = circuits && circuits > 1 ? ` (${circuits} circuits)` : "";
   if (kind === "dc") return `${ref === "all" ? "Every DC string" : `String ${ref}`}${count}`;
@@ -34,7 +38,11 @@ function carriesText(circuit: string, inverterLines: { lineId: string; quantity:
 }
 
 /** One row per conductor run, its conductor count taken from the circuits it holds (or the entered count when higher). */
-export function conductorSchedule(designInput: DesignInput, design: Design, inverterLines: { lineId: string; quantity: number; model: string }[]): ConductorRow[] {
+export function conductorSchedule(
+  designInput: DesignInput,
+  design: Design,
+  inverterLines: { lineId: string; quantity: number; model: string }[],
+): ConductorRow[] {
   return designInput.runs.map((r, index) => {
     const run = design.runs.find((x) => x.id === r.lineId);
     const circuits = run ? counted(() => runCircuits(design, run).length) : null;
@@ -42,7 +50,13 @@ export function conductorSchedule(designInput: DesignInput, design: Design, inve
     const currentCarrying = own === null ? (r.currentCarryingConductors ?? null) : Math.max(own, r.currentCarryingConductors ?? 0);
     const [kind] = r.circuit.split(":");
     const enclosure =
-      r.racewayType === "none" ? (r.onRoof ? "Free air on the roof" : "None") : r.racewayType === "MC" ? "Type MC cable" : `${r.tradeSize || "?"} in ${RACEWAY_NAMES[r.racewayType] ?? r.racewayType}`;
+      r.racewayType === "none"
+        ? r.onRoof
+          ? "Free air on the roof"
+          : "None"
+        : r.racewayType === "MC"
+          ? "Type MC cable"
+          : `${r.tradeSize || "?"} in ${RACEWAY_NAMES[r.racewayType] ?? r.racewayType}`;
     return {
       number: String(index + 1),
       runId: r.lineId,

@@ -18,7 +18,10 @@ export function jsonPath(path: readonly PropertyKey[]): string {
 export function problemsOfZod(error: z.ZodError): DesignProblem[] {
   return error.issues.flatMap((issue) =>
     issue.code === "unrecognized_keys"
-      ? issue.keys.map((key) => ({ path: jsonPath([...issue.path, key]), message: "Unknown field; check its spelling against the document format" }))
+      ? issue.keys.map((key) => ({
+          path: jsonPath([...issue.path, key]),
+          message: "Unknown field; check its spelling against the document format",
+        }))
       : [{ path: jsonPath(issue.path), message: issue.message }],
   );
 }

@@ -7,7 +7,11 @@ import type { DesignProblem } from "./to-engine";
 
 export type DocumentReviewOutcome = { ok: true; review: ReviewJson } | { ok: false; problems: DesignProblem[] };
 
-const SITE_PATHS: Record<string, string> = { "site.necEdition": "codeEdition", "site.recordLowTempC": "site.recordLowC", "site.highDesignTempC": "site.highAmbientC" };
+const SITE_PATHS: Record<string, string> = {
+  "site.necEdition": "codeEdition",
+  "site.recordLowTempC": "site.recordLowC",
+  "site.highDesignTempC": "site.highAmbientC",
+};
 
 /** Points an engine input error back at the document field it came from. */
 function documentPathOf(field: string, sources: DocumentSources): string {

@@ -25,7 +25,8 @@ type Report = (path: string, message: string) => void;
 /** Where the engine's single module and device came from, to point engine errors back at the document. */
 export type DocumentSources = { moduleIndex: number; deviceIndex: number | null; roofPlanesGiven: boolean };
 
-export type EngineFromDocument = { ok: true; design: Design; site: Site; sources: DocumentSources } | { ok: false; problems: DesignProblem[] };
+export type EngineFromDocument =
+  { ok: true; design: Design; site: Site; sources: DocumentSources } | { ok: false; problems: DesignProblem[] };
 
 // Only the roof-load checks read a module's size and weight. Without roof planes those
 // checks are left out of the review (see review-json.ts), so any positive stand-in will do.
@@ -37,7 +38,6 @@ export const WHOLE_ARRAY_PLANE_ID = "whole-array";
 export function parallelStringIds(lineId: string, parallel: number): string[] {
   return parallel === 1 ? [lineId] : Array.from({ length: parallel }, (_, k) => `${lineId}.${k + 1}`);
 }
-
 
 /**
  * A parsed design document as the review engine's input. Problems zod cannot see
@@ -77,7 +77,10 @@ export function documentToEngine(doc: Doc): EngineFromDocument {
     attachmentRatedLoadLb: doc.attachmentRatedLoadLb,
     pvDisconnect: doc.pvDisconnect,
     rapidShutdownInitiator: doc.rapidShutdownInitiator,
-    groundingElectrodeConductor: doc.groundingElectrodeConductor && { ...doc.groundingElectrodeConductor, size: sizeFromLabel(doc.groundingElectrodeConductor.size) },
+    groundingElectrodeConductor: doc.groundingElectrodeConductor && {
+      ...doc.groundingElectrodeConductor,
+      size: sizeFromLabel(doc.groundingElectrodeConductor.size),
+    },
     acCombiner: doc.acCombiner,
   };
   return { ok: true, design, site, sources: { moduleIndex, deviceIndex, roofPlanesGiven } };
@@ -94,7 +97,13 @@ function uniqueIds(items: readonly { id: string }[], key: string, report: Report
 function toSite(doc: Doc, report: Report): Site {
   const s = doc.site;
   if (s.recordLowC > s.highAmbientC) report("site.recordLowC", "The record low is above the high ambient temperature; check the two");
-  return { recordLowTempC: s.recordLowC, highDesignTempC: s.highAmbientC, necEdition: Number(doc.codeEdition) as NecEdition, isDwelling: s.isDwelling ?? true, peakSunHours: s.peakSunHours };
+  return {
+    recordLowTempC: s.recordLowC,
+    highDesignTempC: s.highAmbientC,
+    necEdition: Number(doc.codeEdition) as NecEdition,
+    isDwelling: s.isDwelling ?? true,
+    peakSunHours: s.peakSunHours,
+  };
 }
 
 /** The engine reviews one module model: the one every string names, or the only one listed when there are no strings. */
@@ -109,7 +118,11 @@ function chooseModule(doc: Doc, report: Report): number | null {
     const index = doc.modules.findIndex((m) => m.id === s.moduleId);
     if (index < 0) return report(`strings[${i}].moduleId`, `No module with id "${s.moduleId}" is in modules`);
     if (chosen === null) chosen = index;
-    else if (index !== chosen) report(`strings[${i}].moduleId`, `The review takes one module model per design; this string uses "${s.moduleId}", an earlier one "${doc.modules[chosen]!.id}"`);
+    else if (index !== chosen)
+      report(
+        `strings[${i}].moduleId`,
+        `The review takes one module model per design; this string uses "${s.moduleId}", an earlier one "${doc.modules[chosen]!.id}"`,
+      );
   });
   return chosen;
 }
@@ -117,7 +130,8 @@ function chooseModule(doc: Doc, report: Report): number | null {
 /** Likewise one module-level device, or none, for every string. */
 function chooseDevice(doc: Doc, report: Report): number | null {
   if (doc.strings.length === 0) {
-    if (doc.optimizers.length > 1) report("optimizers", "Without strings the review cannot tell which module-level device the design uses; list at most one");
+    if (doc.optimizers.length > 1)
+      report("optimizers", "Without strings the review cannot tell which module-level device the design uses; list at most one");
     return doc.optimizers.length === 1 ? 0 : null;
   }
   const first = doc.strings[0]!;
@@ -125,7 +139,11 @@ function chooseDevice(doc: Doc, report: Report): number | null {
     if (s.optimizerId !== undefined && !doc.optimizers.some((o) => o.id === s.optimizerId)) {
       return report(`strings[${i}].optimizerId`, `No module-level device with id "${s.optimizerId}" is in optimizers`);
     }
-    if (s.optimizerId !== first.optimizerId) report(`strings[${i}].optimizerId`, `The review takes one module-level device, or none, for every string; this string differs from "${first.id}"`);
+    if (s.optimizerId !== first.optimizerId)
+      report(
+        `strings[${i}].optimizerId`,
+        `The review takes one module-level device, or none, for every string; this string differs from "${first.id}"`,
+      );
   });
   const index = doc.optimizers.findIndex((o) => o.id === first.optimizerId);
   return index < 0 ? null : index;
@@ -133,16 +151,20 @@ function chooseDevice(doc: Doc, report: Report): number | null {
 
 function toModule(m: Doc["modules"][number], index: number, needsRoofData: boolean, report: Report): PvModule {
   const at = `modules[${index}]`;
-  if (m.vocTempCoeffPctPerC !== undefined && m.vocTempCoeffVPerC !== undefined) report(`${at}.vocTempCoeffVPerC`, "Give the Voc coefficient in %/°C or in V/°C, not both");
-  if (m.vmpTempCoeffPctPerC !== undefined && m.vmpTempCoeffVPerC !== undefined) report(`${at}.vmpTempCoeffVPerC`, "Give the Vmp coefficient in %/°C or in V/°C, not both");
+  if (m.vocTempCoeffPctPerC !== undefined && m.vocTempCoeffVPerC !== undefined)
+    report(`${at}.vocTempCoeffVPerC`, "Give the Voc coefficient in %/°C or in V/°C, not both");
+  if (m.vmpTempCoeffPctPerC !== undefined && m.vmpTempCoeffVPerC !== undefined)
+    report(`${at}.vmpTempCoeffVPerC`, "Give the Vmp coefficient in %/°C or in V/°C, not both");
   if (m.vmpV > m.vocV) report(`${at}.vmpV`, "Vmp must not exceed Voc; check the data sheet entries");
   if (m.impA > m.iscA) report(`${at}.impA`, "Imp must not exceed Isc; check the data sheet entries");
-  if ((m.lengthIn === undefined) !== (m.widthIn === undefined)) report(`${at}.${m.lengthIn === undefined ? "lengthIn" : "widthIn"}`, "Give both lengthIn and widthIn, or areaFt2 alone");
+  if ((m.lengthIn === undefined) !== (m.widthIn === undefined))
+    report(`${at}.${m.lengthIn === undefined ? "lengthIn" : "widthIn"}`, "Give both lengthIn and widthIn, or areaFt2 alone");
   // The roof load reads only the area, so a square of the same area stands in for the outline.
   const side = m.areaFt2 === undefined ? undefined : Math.sqrt(m.areaFt2) * 12;
   const lengthIn = m.lengthIn !== undefined && m.widthIn !== undefined ? m.lengthIn : side;
   const widthIn = m.lengthIn !== undefined && m.widthIn !== undefined ? m.widthIn : side;
-  if (needsRoofData && lengthIn === undefined) report(`${at}.areaFt2`, "The roof load needs the module's area (areaFt2, or lengthIn and widthIn)");
+  if (needsRoofData && lengthIn === undefined)
+    report(`${at}.areaFt2`, "The roof load needs the module's area (areaFt2, or lengthIn and widthIn)");
   if (needsRoofData && m.weightLb === undefined) report(`${at}.weightLb`, "The roof load needs the module's weight");
   return {
     maker: m.maker ?? "",
@@ -169,7 +191,8 @@ function coefficient(pctPerC: number | undefined, vPerC: number | undefined): Te
 }
 
 function toInverter(inv: Doc["inverters"][number], index: number, isDwelling: boolean, report: Report): Inverter {
-  if (inv.maxDcInputV === undefined && inv.kind === "micro") report(`inverters[${index}].maxDcInputV`, "Micro-inverters need maxDcInputV: each module's cold Voc is checked against it");
+  if (inv.maxDcInputV === undefined && inv.kind === "micro")
+    report(`inverters[${index}].maxDcInputV`, "Micro-inverters need maxDcInputV: each module's cold Voc is checked against it");
   return {
     id: inv.id,
     maker: inv.maker ?? "",
@@ -217,11 +240,18 @@ function toStrings(doc: Doc, report: Report): Strings {
     const inverter = doc.inverters.find((inv) => inv.id === s.inverterId);
     if (!inverter) return report(`strings[${i}].inverterId`, `No inverter with id "${s.inverterId}" is in inverters`);
     if (inverter.kind === "micro") {
-      return report(`strings[${i}].inverterId`, `"${s.inverterId}" is a micro-inverter: each module has its own, so there are no DC strings; leave them out (the module count comes from roofPlanes or the micro-inverters' quantity)`);
+      return report(
+        `strings[${i}].inverterId`,
+        `"${s.inverterId}" is a micro-inverter: each module has its own, so there are no DC strings; leave them out (the module count comes from roofPlanes or the micro-inverters' quantity)`,
+      );
     }
     const ids = parallelStringIds(s.id, s.parallel);
     const clash = ids.find((id) => taken.has(id));
-    if (clash) return report(`strings[${i}].id`, `Another string already uses the id "${clash}"${s.parallel > 1 ? ` (parallel copies are numbered "${s.id}.1", "${s.id}.2", …)` : ""}`);
+    if (clash)
+      return report(
+        `strings[${i}].id`,
+        `Another string already uses the id "${clash}"${s.parallel > 1 ? ` (parallel copies are numbered "${s.id}.1", "${s.id}.2", …)` : ""}`,
+      );
     ids.forEach((id) => taken.add(id));
     idsByLine.set(s.id, ids);
     for (const id of ids) list.push({ id, inverterId: s.inverterId, mpptIndex: s.mpptIndex, modulesInSeries: s.modulesInSeries });
@@ -231,8 +261,10 @@ function toStrings(doc: Doc, report: Report): Strings {
 
 function toCircuit(doc: Doc, run: Doc["runs"][number], at: string, strings: Strings, report: Report): CircuitRef | null {
   if (run.circuit === "dc-string") {
-    if (run.inverterId !== undefined) report(`${at}.inverterId`, "A dc-string run carries the string named by stringId; leave inverterId out");
-    if (run.stringId !== undefined && run.stringIds !== undefined) report(`${at}.stringIds`, "Give stringId for one string or stringIds for several, not both");
+    if (run.inverterId !== undefined)
+      report(`${at}.inverterId`, "A dc-string run carries the string named by stringId; leave inverterId out");
+    if (run.stringId !== undefined && run.stringIds !== undefined)
+      report(`${at}.stringIds`, "Give stringId for one string or stringIds for several, not both");
     const lines = run.stringIds ?? (run.stringId === undefined ? [] : [run.stringId]);
     if (lines.length === 0) report(`${at}.stringId`, "Name the string this run carries (stringId), or the strings sharing it (stringIds)");
     const ids: string[] = [];
@@ -243,7 +275,11 @@ function toCircuit(doc: Doc, run: Doc["runs"][number], at: string, strings: Stri
     });
     return ids.length > 0 ? { kind: "dc-strings", stringIds: ids, combined: run.combined ?? false } : null;
   }
-  if (run.stringId !== undefined || run.stringIds !== undefined) report(`${at}.${run.stringId !== undefined ? "stringId" : "stringIds"}`, `Only dc-string runs name strings; a ${run.circuit} run names an inverter, or none for all of them`);
+  if (run.stringId !== undefined || run.stringIds !== undefined)
+    report(
+      `${at}.${run.stringId !== undefined ? "stringId" : "stringIds"}`,
+      `Only dc-string runs name strings; a ${run.circuit} run names an inverter, or none for all of them`,
+    );
   if (run.inverterId !== undefined && !doc.inverters.some((i) => i.id === run.inverterId)) {
     report(`${at}.inverterId`, `No inverter with id "${run.inverterId}" is in inverters`);
     return null;
@@ -254,7 +290,12 @@ function toCircuit(doc: Doc, run: Doc["runs"][number], at: string, strings: Stri
   }
   const stringIds = strings.list.filter((s) => run.inverterId === undefined || s.inverterId === run.inverterId).map((s) => s.id);
   if (stringIds.length === 0) {
-    report(run.inverterId === undefined ? `${at}.circuit` : `${at}.inverterId`, run.inverterId === undefined ? "A dc-output run carries strings, but the design has none" : `No string feeds inverter "${run.inverterId}"`);
+    report(
+      run.inverterId === undefined ? `${at}.circuit` : `${at}.inverterId`,
+      run.inverterId === undefined
+        ? "A dc-output run carries strings, but the design has none"
+        : `No string feeds inverter "${run.inverterId}"`,
+    );
     return null;
   }
   return { kind: "dc-strings", stringIds, combined: run.combined ?? true };
@@ -263,7 +304,8 @@ function toCircuit(doc: Doc, run: Doc["runs"][number], at: string, strings: Stri
 function toRun(doc: Doc, run: Doc["runs"][number], index: number, strings: Strings, report: Report): ConductorRun {
   const at = `runs[${index}]`;
   const circuit = toCircuit(doc, run, at, strings, report);
-  if (run.insulationC === 60) report(`${at}.insulationC`, "The review's correction tables cover 75 °C and 90 °C insulation; 60 °C insulation cannot be checked");
+  if (run.insulationC === 60)
+    report(`${at}.insulationC`, "The review's correction tables cover 75 °C and 90 °C insulation; 60 °C insulation cannot be checked");
   if (run.mcCable && run.conduit) report(`${at}.mcCable`, "A run is in a conduit or in Type MC cable, not both");
   const size = sizeFromLabel(run.size);
   const egc = run.egc ? { size: sizeFromLabel(run.egc.size), material: run.egc.material ?? run.material } : undefined;
@@ -273,7 +315,13 @@ function toRun(doc: Doc, run: Doc["runs"][number], index: number, strings: Strin
     label: run.label || run.id,
     circuit: circuit ?? { kind: "dc-strings", stringIds: [] },
     lengthFt: run.lengthFt,
-    conductor: { size, material: run.material, stranding: run.stranded ? "stranded" : "solid", insulationTempC: run.insulationC as 75 | 90, insulation: run.insulation || undefined },
+    conductor: {
+      size,
+      material: run.material,
+      stranding: run.stranded ? "stranded" : "solid",
+      insulationTempC: run.insulationC as 75 | 90,
+      insulation: run.insulation || undefined,
+    },
     terminalTempC: run.terminalC,
     currentCarryingConductors: run.currentCarrying,
     ambientTempC: run.ambientC,
@@ -285,7 +333,12 @@ function toRun(doc: Doc, run: Doc["runs"][number], index: number, strings: Strin
     raceway: c && {
       type: c.type,
       tradeSize: c.tradeSize,
-      wires: c.wires?.map((w) => ({ size: sizeFromLabel(w.size), count: w.count, insulation: w.insulation || undefined, areaIn2: w.areaIn2 })),
+      wires: c.wires?.map((w) => ({
+        size: sizeFromLabel(w.size),
+        count: w.count,
+        insulation: w.insulation || undefined,
+        areaIn2: w.areaIn2,
+      })),
     },
     wireAreaIn2: run.wireAreaIn2,
     mcCable: run.mcCable,
@@ -295,7 +348,9 @@ function toRun(doc: Doc, run: Doc["runs"][number], index: number, strings: Strin
 
 function checkPaths(doc: Doc, report: Report) {
   const runIds = new Set(doc.runs.map((r) => r.id));
-  doc.paths?.forEach((p, i) => p.runIds.forEach((id, j) => runIds.has(id) || report(`paths[${i}].runIds[${j}]`, `No run with id "${id}" is in runs`)));
+  doc.paths?.forEach((p, i) =>
+    p.runIds.forEach((id, j) => runIds.has(id) || report(`paths[${i}].runIds[${j}]`, `No run with id "${id}" is in runs`)),
+  );
 }
 
 function toService(s: Doc["service"], inverters: Inverter[], report: Report): ServicePanel {
@@ -331,7 +386,14 @@ function toService(s: Doc["service"], inverters: Inverter[], report: Report): Se
 
 /** The document's roof planes, or one made-up plane holding every module so the ratings still count them. */
 function toRoofPlanes(doc: Doc, strings: PvString[], inverters: Inverter[]): RoofPlane[] {
-  if (doc.roofPlanes) return doc.roofPlanes.map((p) => ({ id: p.id, label: p.label || p.id, moduleCount: p.moduleCount, attachmentCount: p.attachmentCount, rackingWeightLb: p.rackingWeightLb }));
+  if (doc.roofPlanes)
+    return doc.roofPlanes.map((p) => ({
+      id: p.id,
+      label: p.label || p.id,
+      moduleCount: p.moduleCount,
+      attachmentCount: p.attachmentCount,
+      rackingWeightLb: p.rackingWeightLb,
+    }));
   const inStrings = strings.reduce((n, s) => n + s.modulesInSeries, 0);
   const onMicros = inverters.filter((i) => i.kind === "micro").reduce((n, i) => n + i.quantity, 0);
   return [{ id: WHOLE_ARRAY_PLANE_ID, label: "Whole array", moduleCount: inStrings || onMicros, attachmentCount: 1, rackingWeightLb: 0 }];

@@ -12,20 +12,28 @@ const r = (min: number, max: number, unit = ""): Range => ({ min, max, unit });
 const num = numberField;
 const optNum = optionalNumberField;
 const whole = (label: string, range: Range) => num(label, range).refine(Number.isInteger, `${label} must be a whole number`);
-const optWhole = (label: string, range: Range) => optNum(label, range).refine((v) => v === undefined || Number.isInteger(v), `${label} must be a whole number`);
-const id = safeString({ error: "Give an id (text of 1 to 40 characters)" }).trim().min(1, "The id must not be blank").max(40, "Ids are at most 40 characters");
+const optWhole = (label: string, range: Range) =>
+  optNum(label, range).refine((v) => v === undefined || Number.isInteger(v), `${label} must be a whole number`);
+const id = safeString({ error: "Give an id (text of 1 to 40 characters)" })
+  .trim()
+  .min(1, "The id must not be blank")
+  .max(40, "Ids are at most 40 characters");
 const text = (max: number) => safeString({ error: "Must be text" }).trim().max(max, `At most ${max} characters`).optional();
 const flag = (label: string) => z.boolean({ error: `${label} must be true or false` }).optional();
-const oneOf = <const T extends readonly [string, ...string[]]>(values: T) => z.enum(values, { error: `Use one of: ${values.map((v) => `"${v}"`).join(", ")}` });
+const oneOf = <const T extends readonly [string, ...string[]]>(values: T) =>
+  z.enum(values, { error: `Use one of: ${values.map((v) => `"${v}"`).join(", ")}` });
 const oneOfNumbers = <const T extends readonly [number, ...number[]]>(values: T) =>
   z.union(values.map((v) => z.literal(v)) as unknown as [z.ZodLiteral<T[number]>], { error: `Use one of: ${values.join(", ")}` });
-const list = <T extends z.ZodType>(item: T, max: number, what: string) => z.array(item, { error: `Give ${what} as a list` }).max(max, `At most ${max} ${what}`);
+const list = <T extends z.ZodType>(item: T, max: number, what: string) =>
+  z.array(item, { error: `Give ${what} as a list` }).max(max, `At most ${max} ${what}`);
 
 /** "10 AWG", "1/0 AWG", "250 kcmil": the labels a coordinator reads, one per engine size. */
 export const SIZE_LABELS = CONDUCTOR_SIZES.map(sizeLabel) as [string, ...string[]];
 const SIZE_BY_LABEL = new Map<string, ConductorSize>(CONDUCTOR_SIZES.map((s) => [sizeLabel(s), s]));
 export const sizeFromLabel = (label: string): ConductorSize => SIZE_BY_LABEL.get(label)!;
-const size = z.enum(SIZE_LABELS, { error: 'Use a conductor size from 14 AWG to 300 kcmil, written like "10 AWG", "1/0 AWG" or "250 kcmil"' });
+const size = z.enum(SIZE_LABELS, {
+  error: 'Use a conductor size from 14 AWG to 300 kcmil, written like "10 AWG", "1/0 AWG" or "250 kcmil"',
+});
 
 export const CODE_EDITIONS = ["2017", "2020", "2023"] as const;
 
@@ -128,12 +136,19 @@ const Service = z.strictObject({
   panelFeed: oneOf(["end", "center"]).optional(), // default end-fed
   loadSideAt: oneOf(["busbar", "feeder", "feed-through"]).optional(), // default the busbar
   feeder: Feeder.optional(),
-  supplySideConductors: z.strictObject({ size, material: oneOf(["Cu", "Al"]), lengthToOcpdFt: optNum("The length to the overcurrent device", r(0, 500, "ft")) }).optional(),
+  supplySideConductors: z
+    .strictObject({ size, material: oneOf(["Cu", "Al"]), lengthToOcpdFt: optNum("The length to the overcurrent device", r(0, 500, "ft")) })
+    .optional(),
   serviceLocation: text(120),
   pvDisconnectLocation: text(120),
 });
 
-const Wire = z.strictObject({ size, count: whole("The wire count", r(1, 100)), insulation: text(30), areaIn2: optNum("The wire area", r(0.001, 5, "in²")) });
+const Wire = z.strictObject({
+  size,
+  count: whole("The wire count", r(1, 100)),
+  insulation: text(30),
+  areaIn2: optNum("The wire area", r(0.001, 5, "in²")),
+});
 
 const Run = z.strictObject({
   id,

@@ -1,4 +1,13 @@
-import { sizeLabel, type ConductorRun, type Design, type Inverter, type ModuleLevelDevice, type PvModule, type PvString, type Site } from "@/lib/engineering";
+import {
+  sizeLabel,
+  type ConductorRun,
+  type Design,
+  type Inverter,
+  type ModuleLevelDevice,
+  type PvModule,
+  type PvString,
+  type Site,
+} from "@/lib/engineering";
 import type { DesignDocument } from "./document";
 import type { DesignProblem } from "./to-engine";
 
@@ -24,7 +33,12 @@ export function engineToDocument(design: Design, site: Site): DocumentFromEngine
   const lines = stringLines(design.strings);
   const document: Doc = {
     codeEdition: String(site.necEdition) as Doc["codeEdition"],
-    site: { recordLowC: site.recordLowTempC, highAmbientC: site.highDesignTempC, isDwelling: site.isDwelling, peakSunHours: site.peakSunHours },
+    site: {
+      recordLowC: site.recordLowTempC,
+      highAmbientC: site.highDesignTempC,
+      isDwelling: site.isDwelling,
+      peakSunHours: site.peakSunHours,
+    },
     mount: design.mount,
     listedRapidShutdownSystem: design.listedRapidShutdownSystem,
     modules: [fromModule(design.module)],
@@ -40,15 +54,29 @@ export function engineToDocument(design: Design, site: Site): DocumentFromEngine
       parallel,
     })),
     service: fromService(design.service),
-    runs: design.runs.map((run, i) => fromRun(design, site, run, lines, (message) => problems.push({ path: `runs.${i}.circuit`, message }))),
-    roofPlanes: design.roofPlanes.map((p) => ({ id: p.id, label: p.label, moduleCount: p.moduleCount, attachmentCount: p.attachmentCount, rackingWeightLb: p.rackingWeightLb })),
+    runs: design.runs.map((run, i) =>
+      fromRun(design, site, run, lines, (message) => problems.push({ path: `runs.${i}.circuit`, message })),
+    ),
+    roofPlanes: design.roofPlanes.map((p) => ({
+      id: p.id,
+      label: p.label,
+      moduleCount: p.moduleCount,
+      attachmentCount: p.attachmentCount,
+      rackingWeightLb: p.rackingWeightLb,
+    })),
     attachmentRatedLoadLb: design.attachmentRatedLoadLb,
     cellTempRiseC: design.cellTempRiseC,
     paths: design.paths?.map((p) => ({ id: p.id, label: p.label, runIds: p.runIds })),
     pvDisconnect: design.pvDisconnect,
     rapidShutdownInitiator: design.rapidShutdownInitiator,
-    groundingElectrodeConductor: design.groundingElectrodeConductor && { ...design.groundingElectrodeConductor, size: sizeLabel(design.groundingElectrodeConductor.size) },
-    acCombiner: design.acCombiner && { busbarA: design.acCombiner.busbarA, breakersA: design.acCombiner.breakersA && [...design.acCombiner.breakersA] },
+    groundingElectrodeConductor: design.groundingElectrodeConductor && {
+      ...design.groundingElectrodeConductor,
+      size: sizeLabel(design.groundingElectrodeConductor.size),
+    },
+    acCombiner: design.acCombiner && {
+      busbarA: design.acCombiner.busbarA,
+      breakersA: design.acCombiner.breakersA && [...design.acCombiner.breakersA],
+    },
   };
   return problems.length > 0 ? { ok: false, problems } : { ok: true, document };
 }
@@ -56,9 +84,10 @@ export function engineToDocument(design: Design, site: Site): DocumentFromEngine
 /** Groups consecutive engine strings "X.1" … "X.n" of one inverter input and length back into one line with parallel n. */
 function stringLines(strings: PvString[]): StringLine[] {
   const ids = new Set(strings.map((s) => s.id));
-  const sameLine = (a: PvString, b: PvString) => a.inverterId === b.inverterId && a.mpptIndex === b.mpptIndex && a.modulesInSeries === b.modulesInSeries;
+  const sameLine = (a: PvString, b: PvString) =>
+    a.inverterId === b.inverterId && a.mpptIndex === b.mpptIndex && a.modulesInSeries === b.modulesInSeries;
   const lines: StringLine[] = [];
-  for (let i = 0; i < strings.length; ) {
+  for (let i = 0; i < strings.length;) {
     const first = strings[i]!;
     const base = /^(.+)\.1$/.exec(first.id)?.[1];
     let n = 1;
@@ -124,8 +153,15 @@ function fromInverter(inv: Inverter): Doc["inverters"][number] {
 
 function fromDevice(d: ModuleLevelDevice): Doc["optimizers"][number] {
   return {
-    id: DEVICE_ID, kind: d.kind, maker: d.maker, model: d.model, maxInputV: d.maxInputV, maxInputCurrentA: d.maxInputIscA,
-    maxOutputCurrentA: d.maxOutputCurrentA, shutdownOutputV: d.shutdownOutputV, maxSystemVoltageV: d.maxSystemVoltageV,
+    id: DEVICE_ID,
+    kind: d.kind,
+    maker: d.maker,
+    model: d.model,
+    maxInputV: d.maxInputV,
+    maxInputCurrentA: d.maxInputIscA,
+    maxOutputCurrentA: d.maxOutputCurrentA,
+    shutdownOutputV: d.shutdownOutputV,
+    maxSystemVoltageV: d.maxSystemVoltageV,
   };
 }
 
@@ -159,29 +195,57 @@ function fromCircuit(design: Design, run: ConductorRun, lines: StringLine[]): Ci
     const combined = run.circuit.combined ?? false;
     // Whole string lines, in order: one line is stringId, several are stringIds.
     const picked: StringLine[] = [];
-    for (let at = 0; at < ids.length; ) {
+    for (let at = 0; at < ids.length;) {
       const line = lines.find((l) => l.ids[0] === ids[at] && sameJson(l.ids, ids.slice(at, at + l.ids.length)));
       if (!line) break;
       picked.push(line);
       at += line.ids.length;
     }
     if (picked.reduce((n, l) => n + l.ids.length, 0) === ids.length) {
-      return picked.length === 1 ? { circuit: "dc-string", stringId: picked[0]!.id, combined } : { circuit: "dc-string", stringIds: picked.map((l) => l.id), combined };
+      return picked.length === 1
+        ? { circuit: "dc-string", stringId: picked[0]!.id, combined }
+        : { circuit: "dc-string", stringIds: picked.map((l) => l.id), combined };
     }
-    if (sameJson(ids, design.strings.map((s) => s.id))) return { circuit: "dc-output", combined };
-    const inverter = design.inverters.find((inv) => sameJson(ids, design.strings.filter((s) => s.inverterId === inv.id).map((s) => s.id)));
+    if (
+      sameJson(
+        ids,
+        design.strings.map((s) => s.id),
+      )
+    )
+      return { circuit: "dc-output", combined };
+    const inverter = design.inverters.find((inv) =>
+      sameJson(
+        ids,
+        design.strings.filter((s) => s.inverterId === inv.id).map((s) => s.id),
+      ),
+    );
     return inverter ? { circuit: "dc-output", inverterId: inverter.id, combined } : null;
   }
   const sources = run.circuit.sources;
   const combined = run.circuit.combined ?? true;
   if (sources.some((s) => s.units !== undefined)) return null;
-  if (sameJson(sources.map((s) => s.inverterId), design.inverters.map((i) => i.id))) return { circuit: "ac-output", combined };
+  if (
+    sameJson(
+      sources.map((s) => s.inverterId),
+      design.inverters.map((i) => i.id),
+    )
+  )
+    return { circuit: "ac-output", combined };
   return sources.length === 1 ? { circuit: "ac-output", inverterId: sources[0]!.inverterId, combined } : null;
 }
 
-function fromRun(design: Design, site: Site, run: ConductorRun, lines: StringLine[], report: (message: string) => void): Doc["runs"][number] {
+function fromRun(
+  design: Design,
+  site: Site,
+  run: ConductorRun,
+  lines: StringLine[],
+  report: (message: string) => void,
+): Doc["runs"][number] {
   const circuit = fromCircuit(design, run, lines);
-  if (!circuit) report(`Run "${run.label}" carries strings or inverter units a design document cannot name: whole strings, one inverter's strings or output, or all of them`);
+  if (!circuit)
+    report(
+      `Run "${run.label}" carries strings or inverter units a design document cannot name: whole strings, one inverter's strings or output, or all of them`,
+    );
   const { conductor: c, raceway, egc } = run;
   return {
     id: run.id,

@@ -5,9 +5,21 @@ import { worstStatus } from "@/lib/engineering/check-result";
 export type ReviewJson = {
   status: CheckStatus;
   ratings: { dcKw: number; acKw: number; dcAcRatio: number; annualKwh?: number };
-  strings: { id: string; moduleVocColdV: number | null; stringVocColdV: number | null; maxCircuitCurrentA: number | null; minOcpdA: number | null; shutdownStringV?: number }[];
+  strings: {
+    id: string;
+    moduleVocColdV: number | null;
+    stringVocColdV: number | null;
+    maxCircuitCurrentA: number | null;
+    minOcpdA: number | null;
+    shutdownStringV?: number;
+  }[];
   inverterOutputs: { inverterId: string; continuousA: number; minOcpdA: number | null }[];
-  pointOfConnection: { method: "load-side" | "supply-side"; rule: "100%" | "120%" | "sum" | "service-rating" | "feeder" | null; maxPvBreakerA: number | null; status: CheckStatus };
+  pointOfConnection: {
+    method: "load-side" | "supply-side";
+    rule: "100%" | "120%" | "sum" | "service-rating" | "feeder" | null;
+    maxPvBreakerA: number | null;
+    status: CheckStatus;
+  };
   runs: {
     id: string;
     circuits: number | null; // separate circuits sharing the run's raceway or cable
@@ -22,8 +34,27 @@ export type ReviewJson = {
     fillPct?: number | null;
     status: CheckStatus;
   }[];
-  checks: { id: string; subject: string; codeRef: string; status: CheckStatus; value: number | null; limit: number | null; unit: string; message: string; fix?: string; field?: string }[];
-  labels: { codeRef: string; title: string; text: string; prescribedWording: boolean; explanation: string; placement: string; values: Record<string, number> }[];
+  checks: {
+    id: string;
+    subject: string;
+    codeRef: string;
+    status: CheckStatus;
+    value: number | null;
+    limit: number | null;
+    unit: string;
+    message: string;
+    fix?: string;
+    field?: string;
+  }[];
+  labels: {
+    codeRef: string;
+    title: string;
+    text: string;
+    prescribedWording: boolean;
+    explanation: string;
+    placement: string;
+    values: Record<string, number>;
+  }[];
 };
 
 // Checks that compare against roof planes; a document without roof planes has nothing for them to read.
@@ -39,25 +70,56 @@ export function toReviewJson(result: ReviewResult, { roofPlanesGiven }: { roofPl
   const { strings, inverterOutputs, pointOfConnection, runs } = result.figures;
   return {
     status: worstStatus(kept.map((c) => c.status)),
-    ratings: { dcKw: ratings.dcKw, acKw: ratings.acKw, dcAcRatio: ratings.dcToAcRatio, ...(annualProductionKwh === null ? {} : { annualKwh: annualProductionKwh }) },
+    ratings: {
+      dcKw: ratings.dcKw,
+      acKw: ratings.acKw,
+      dcAcRatio: ratings.dcToAcRatio,
+      ...(annualProductionKwh === null ? {} : { annualKwh: annualProductionKwh }),
+    },
     strings: strings.map(({ shutdownStringV, ...s }) => ({ ...s, ...(shutdownStringV === null ? {} : { shutdownStringV }) })),
     inverterOutputs,
-    pointOfConnection: { method: pointOfConnection.method, rule: pointOfConnection.rule, maxPvBreakerA: result.summary.largestPvBreakerA, status: pointOfConnection.status },
+    pointOfConnection: {
+      method: pointOfConnection.method,
+      rule: pointOfConnection.rule,
+      maxPvBreakerA: result.summary.largestPvBreakerA,
+      status: pointOfConnection.status,
+    },
     runs: runs.map(toRunJson),
     checks: kept.map(toCheckJson),
-    labels: result.labels.map((l) => ({ codeRef: l.clause, title: l.title, text: l.text, prescribedWording: l.prescribed, explanation: l.explanation, placement: l.placement, values: l.values })),
+    labels: result.labels.map((l) => ({
+      codeRef: l.clause,
+      title: l.title,
+      text: l.text,
+      prescribedWording: l.prescribed,
+      explanation: l.explanation,
+      placement: l.placement,
+      values: l.values,
+    })),
   };
 }
 
 // The API answers the figures it always has; how the terminal rating and the EGC device were chosen is for the calculation sheet.
-function toRunJson({ terminalSource: _source, egcDeviceA: _device, egcDeviceAssumed: _assumed, fillPct, ...r }: RunFigures): ReviewJson["runs"][number] {
+function toRunJson({
+  terminalSource: _source,
+  egcDeviceA: _device,
+  egcDeviceAssumed: _assumed,
+  fillPct,
+  ...r
+}: RunFigures): ReviewJson["runs"][number] {
   const { status, ...figures } = r;
   return { ...figures, ...(fillPct === null ? {} : { fillPct }), status };
 }
 
 function toCheckJson(c: CheckResult): ReviewJson["checks"][number] {
   return {
-    id: c.id, subject: c.title, codeRef: c.clause, status: c.status, value: c.value, limit: c.limit, unit: c.unit, message: c.message,
+    id: c.id,
+    subject: c.title,
+    codeRef: c.clause,
+    status: c.status,
+    value: c.value,
+    limit: c.limit,
+    unit: c.unit,
+    message: c.message,
     ...(c.fix === undefined ? {} : { fix: c.fix }),
     ...(c.field === undefined ? {} : { field: c.field }),
   };

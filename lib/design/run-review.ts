@@ -1,4 +1,12 @@
-import { DesignInputError, reviewArray, reviewDesign, type CheckResult, type Design, type ReviewResult, type Site } from "@/lib/engineering";
+import {
+  DesignInputError,
+  reviewArray,
+  reviewDesign,
+  type CheckResult,
+  type Design,
+  type ReviewResult,
+  type Site,
+} from "@/lib/engineering";
 import { DesignInput } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 import { toArrayDesign, toEngineInput, type DesignProblem, type SiteConditions } from "./to-engine";
@@ -8,16 +16,22 @@ export type DesignReviewOutcome =
   | { status: "reviewed"; review: ReviewResult; design: Design; site: Site };
 
 const at = (value: unknown, ...keys: (string | number)[]): unknown =>
-  keys.reduce<unknown>((node, key) => (node && typeof node === "object" ? (node as Record<string | number, unknown>)[key] : undefined), value);
+  keys.reduce<unknown>(
+    (node, key) => (node && typeof node === "object" ? (node as Record<string | number, unknown>)[key] : undefined),
+    value,
+  );
 const text = (v: unknown) => (typeof v === "string" && v.trim() ? v.trim() : null);
 
 /** What a problem's path points at, in the words of the form: a run by its name, a string by its id. */
 function subjectOf(values: unknown, path: (string | number)[]): string | null {
   const [part, list, index] = path;
   if (part === "runs" && typeof list === "number") return `Run "${text(at(values, "runs", list, "label")) ?? list + 1}"`;
-  if (part === "array" && list === "strings" && typeof index === "number") return `String ${text(at(values, "array", "strings", index, "lineId")) ?? index + 1}`;
-  if (part === "array" && list === "roofPlanes" && typeof index === "number") return `Roof plane "${text(at(values, "array", "roofPlanes", index, "label")) ?? index + 1}"`;
-  if (part === "equipment" && list === "inverters" && typeof index === "number") return `Inverter line ${text(at(values, "equipment", "inverters", index, "lineId")) ?? index + 1}`;
+  if (part === "array" && list === "strings" && typeof index === "number")
+    return `String ${text(at(values, "array", "strings", index, "lineId")) ?? index + 1}`;
+  if (part === "array" && list === "roofPlanes" && typeof index === "number")
+    return `Roof plane "${text(at(values, "array", "roofPlanes", index, "label")) ?? index + 1}"`;
+  if (part === "equipment" && list === "inverters" && typeof index === "number")
+    return `Inverter line ${text(at(values, "equipment", "inverters", index, "lineId")) ?? index + 1}`;
   return null;
 }
 
@@ -61,16 +75,26 @@ function partialChecks(values: unknown, catalog: EquipmentDto[], conditions: Sit
  */
 export function runDesignReview(draft: unknown, catalog: EquipmentDto[], conditions: SiteConditions | null): DesignReviewOutcome {
   const parsed = DesignInput.safeParse(draft);
-  const problems: DesignProblem[] = parsed.success ? [] : parsed.error.issues.map((i) => named(draft, i.path as (string | number)[], i.message));
-  if (!conditions) problems.unshift({ path: "project.jurisdiction", message: "Choose the project's AHJ (edit the project) so the review knows the NEC edition and design temperatures" });
+  const problems: DesignProblem[] = parsed.success
+    ? []
+    : parsed.error.issues.map((i) => named(draft, i.path as (string | number)[], i.message));
+  if (!conditions)
+    problems.unshift({
+      path: "project.jurisdiction",
+      message: "Choose the project's AHJ (edit the project) so the review knows the NEC edition and design temperatures",
+    });
   if (!parsed.success || !conditions) return { status: "incomplete", problems, partial: partialChecks(draft, catalog, conditions) };
   const input = toEngineInput(parsed.data, catalog, conditions);
   if (!input.ok) return { status: "incomplete", problems: input.problems, partial: partialChecks(draft, catalog, conditions) };
   try {
     return { status: "reviewed", review: reviewDesign(input.design, input.site), design: input.design, site: input.site };
   } catch (error) {
-    if (error instanceof DesignInputError) return { status: "incomplete", problems: [{ path: error.field ?? "", message: error.message }], partial: partialChecks(draft, catalog, conditions) };
+    if (error instanceof DesignInputError)
+      return {
+        status: "incomplete",
+        problems: [{ path: error.field ?? "", message: error.message }],
+        partial: partialChecks(draft, catalog, conditions),
+      };
     throw error;
   }
 }
-

@@ -4,7 +4,12 @@ import { SLD_COLORS, fitScale, shapeAttributes, type SldPrimitive, type SldScene
 // the scale that fits the drawing box worked out here, so the layout only places the primitives.
 
 export type PaintedShape = { kind: Exclude<SldPrimitive["kind"], "text">; attributes: Record<string, string | number> };
-export type PaintedText = Pick<SldText, "x" | "y" | "anchor" | "size" | "text"> & { kind: "text"; fill: string; mono: boolean; bold: boolean };
+export type PaintedText = Pick<SldText, "x" | "y" | "anchor" | "size" | "text"> & {
+  kind: "text";
+  fill: string;
+  mono: boolean;
+  bold: boolean;
+};
 export type PaintedItem = PaintedShape | PaintedText;
 
 /** A scene scaled to a box: the drawn size in points, the scene's own viewBox and its painted items. */
@@ -19,7 +24,17 @@ export function paintScene(scene: SldScene, width: number, height: number): Pain
     viewBox: `0 0 ${scene.width} ${scene.height}`,
     items: scene.items.map((item): PaintedItem =>
       item.kind === "text"
-        ? { kind: "text", x: item.x, y: item.y, anchor: item.anchor, size: item.size, text: item.text, fill: SLD_COLORS[item.tone], mono: Boolean(item.mono), bold: item.weight === "bold" }
+        ? {
+            kind: "text",
+            x: item.x,
+            y: item.y,
+            anchor: item.anchor,
+            size: item.size,
+            text: item.text,
+            fill: SLD_COLORS[item.tone],
+            mono: Boolean(item.mono),
+            bold: item.weight === "bold",
+          }
         : { kind: item.kind, attributes: shapeAttributes(item) },
     ),
   };

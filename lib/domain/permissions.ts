@@ -30,8 +30,37 @@ export type Permission =
   | "organization:edit";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
-  admin: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "users:manage", "catalog:view", "catalog:edit", "reference:edit", "mailbox:view", "design:review", "api-tokens:manage", "field:record", "fees:pay", "fees:refund", "filings:edit", "organization:edit"],
-  coordinator: ["project:view", "project:create", "project:edit", "project:change-stage", "settings:view", "catalog:view", "design:review", "field:record", "fees:pay", "filings:edit"],
+  admin: [
+    "project:view",
+    "project:create",
+    "project:edit",
+    "project:change-stage",
+    "settings:view",
+    "users:manage",
+    "catalog:view",
+    "catalog:edit",
+    "reference:edit",
+    "mailbox:view",
+    "design:review",
+    "api-tokens:manage",
+    "field:record",
+    "fees:pay",
+    "fees:refund",
+    "filings:edit",
+    "organization:edit",
+  ],
+  coordinator: [
+    "project:view",
+    "project:create",
+    "project:edit",
+    "project:change-stage",
+    "settings:view",
+    "catalog:view",
+    "design:review",
+    "field:record",
+    "fees:pay",
+    "filings:edit",
+  ],
   installer: ["project:view", "design:review", "field:record"],
 };
 
@@ -44,7 +73,11 @@ type ProjectScope = { organizationId: string; installerId: string | null };
  * The one permission rule. With a project, it also checks that the project is
  * the viewer's organization's and, for installers, assigned to them.
  */
-export function can(viewer: Pick<Viewer, "id" | "role" | "organizationId" | "apiTokenId">, permission: Permission, project?: ProjectScope): boolean {
+export function can(
+  viewer: Pick<Viewer, "id" | "role" | "organizationId" | "apiTokenId">,
+  permission: Permission,
+  project?: ProjectScope,
+): boolean {
   const grants = viewer.apiTokenId ? API_TOKEN_GRANTS : GRANTS[viewer.role];
   if (!grants?.includes(permission)) return false;
   if (!project) return true;

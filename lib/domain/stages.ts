@@ -54,7 +54,10 @@ export type DesignReviewState = "incomplete" | "pass" | "warn" | "fail" | null;
 export function nextActionFor(stage: Stage, review: DesignReviewState): string {
   const passes = review === "pass" || review === "warn";
   if (stage === "draft") {
-    if (passes) return review === "warn" ? "Read the checks that need review, then mark the design checked" : "The review passes: mark the design checked";
+    if (passes)
+      return review === "warn"
+        ? "Read the checks that need review, then mark the design checked"
+        : "The review passes: mark the design checked";
     if (review === "fail") return "Fix the failing checks of the design review";
     return NEXT_ACTION.draft;
   }

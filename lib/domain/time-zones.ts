@@ -16,7 +16,16 @@ export const DEFAULT_TIME_ZONE: UsTimeZone = "America/New_York";
 /** "2026-11-20 09:30 MST": a calendar date and 24-hour time in the zone, with its abbreviation. */
 export function localDateTime(iso: string, timeZone: string): string {
   const parts = Object.fromEntries(
-    new Intl.DateTimeFormat("en-US", { timeZone, year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", hourCycle: "h23", timeZoneName: "short" })
+    new Intl.DateTimeFormat("en-US", {
+      timeZone,
+      year: "numeric",
+      month: "2-digit",
+      day: "2-digit",
+      hour: "2-digit",
+      minute: "2-digit",
+      hourCycle: "h23",
+      timeZoneName: "short",
+    })
       .formatToParts(new Date(iso))
       .map((p) => [p.type, p.value]),
   );
@@ -43,6 +52,13 @@ export type TimeStyle = keyof typeof STYLES;
 /** "Nov 15, 2026, 5:11 PM" in the zone: the same on the server and in any browser, so pages hydrate cleanly. */
 export function formatInZone(iso: string, timeZone: string, style: TimeStyle = "datetime"): string {
   return new Intl.DateTimeFormat("en-US", { ...STYLES[style], timeZone }).format(new Date(iso));
+}
+
+/** The calendar day (YYYY-MM-DD) so many days after another: arithmetic on days, no instant and no zone. */
+export function addCalendarDays(day: string, days: number): string {
+  const [y, m, d] = day.split("-").map(Number) as [number, number, number];
+  const t = new Date(Date.UTC(y, m - 1, d + days));
+  return `${t.getUTCFullYear()}-${String(t.getUTCMonth() + 1).padStart(2, "0")}-${String(t.getUTCDate()).padStart(2, "0")}`;
 }
 
 /** "Mar 2, 2026" for a calendar day (YYYY-MM-DD) that is already the organization's own: no zone to apply. */

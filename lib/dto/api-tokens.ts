@@ -1,1 +1,8 @@
-export type ApiTokenDto = { id: string; name: string; createdAt: string; createdByName: string | null; lastUsedAt: string | null; revokedAt: string | null };
+export type ApiTokenDto = {
+  id: string;
+  name: string;
+  createdAt: string;
+  createdByName: string | null;
+  lastUsedAt: string | null;
+  revokedAt: string | null;
+};

@@ -15,4 +15,9 @@ export type CommissioningDto = {
   completedAt: string | null;
 };
 export type SaveCommissioningResult = CommissioningDto & { completeRefused: string | null };
-export type FieldSummaryDto = { status: CommissioningStatus | "not-started"; completedAt: string | null; signedForms: number; photos: number };
+export type FieldSummaryDto = {
+  status: CommissioningStatus | "not-started";
+  completedAt: string | null;
+  signedForms: number;
+  photos: number;
+};

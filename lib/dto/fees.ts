@@ -31,7 +31,15 @@ export type PaymentDto = {
   createdAt: string;
   createdBy: string | null;
   lines: { feeKey: string; name: string; authority: string; amountCents: number; refunded: boolean }[];
-  refunds: { id: string; amountCents: number; lineNames: string[]; reason: string | null; createdAt: string; createdBy: string | null; failed: boolean }[];
+  refunds: {
+    id: string;
+    amountCents: number;
+    lineNames: string[];
+    reason: string | null;
+    createdAt: string;
+    createdBy: string | null;
+    failed: boolean;
+  }[];
   /** A failed attempt whose fees are still unpaid: the page tells the payer to try another card. */
   failureStillOpen: boolean;
 };

@@ -1,7 +1,21 @@
 // What the filings read answers: the API's shape (README, "Filings API") with the ids and labels screens need.
-import type { FilingKind, FilingStatus, InspectionKind, InspectionResult, SubmissionChannel, WaitingParty } from "@/lib/domain/stored-values";
+import type {
+  FilingKind,
+  FilingStatus,
+  InspectionKind,
+  InspectionResult,
+  SubmissionChannel,
+  WaitingParty,
+} from "@/lib/domain/stored-values";
 
-export type FilingItemDto = { id: string; text: string; reference: string; response: string; designRevision: number | null; resolved: boolean };
+export type FilingItemDto = {
+  id: string;
+  text: string;
+  reference: string;
+  response: string;
+  designRevision: number | null;
+  resolved: boolean;
+};
 
 export type CorrectionRoundDto = {
   id: string;
@@ -52,4 +66,9 @@ export type FilingDto = {
   inspections: InspectionDto[];
 };
 
-export type ProjectFilingsDto = { waitingOn: WaitingParty | null; waitingSince: string | null; waitingWhy: string | null; filings: FilingDto[] };
+export type ProjectFilingsDto = {
+  waitingOn: WaitingParty | null;
+  waitingSince: string | null;
+  waitingWhy: string | null;
+  filings: FilingDto[];
+};

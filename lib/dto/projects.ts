@@ -34,4 +34,12 @@ export type ProjectDto = {
   createdAt: string;
   updatedAt: string;
 };
-export type StageChangeDto = { id: string; fromStage: Stage | null; toStage: Stage; toLabel: string; note: string; changedBy: string | null; createdAt: string };
+export type StageChangeDto = {
+  id: string;
+  fromStage: Stage | null;
+  toStage: Stage;
+  toLabel: string;
+  note: string;
+  changedBy: string | null;
+  createdAt: string;
+};

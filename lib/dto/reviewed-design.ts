@@ -29,4 +29,5 @@ export type ReviewedDesign = {
 };
 
 /** A design that cannot be reviewed yet says why, first problem first. */
-export type DesignSnapshot = { status: "reviewed"; reviewed: ReviewedDesign } | { status: "incomplete"; project: ProjectDto; problems: DesignProblem[] };
+export type DesignSnapshot =
+  { status: "reviewed"; reviewed: ReviewedDesign } | { status: "incomplete"; project: ProjectDto; problems: DesignProblem[] };

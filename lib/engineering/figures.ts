@@ -19,9 +19,20 @@ import type { CheckResult, CheckStatus, ConductorRun, Design, PvString, Site } f
 // print these rather than working them out again, so they cannot drift from the checks. A figure the
 // engine cannot compute for this input is null; a check has already said why.
 
-export type StringFigures = { id: string; moduleVocColdV: number | null; stringVocColdV: number | null; maxCircuitCurrentA: number | null; minOcpdA: number | null; shutdownStringV: number | null };
+export type StringFigures = {
+  id: string;
+  moduleVocColdV: number | null;
+  stringVocColdV: number | null;
+  maxCircuitCurrentA: number | null;
+  minOcpdA: number | null;
+  shutdownStringV: number | null;
+};
 export type InverterOutputFigures = { inverterId: string; continuousA: number; minOcpdA: number | null };
-export type ConnectionFigures = { method: "load-side" | "supply-side"; rule: "100%" | "120%" | "sum" | "service-rating" | "feeder" | null; status: CheckStatus };
+export type ConnectionFigures = {
+  method: "load-side" | "supply-side";
+  rule: "100%" | "120%" | "sum" | "service-rating" | "feeder" | null;
+  status: CheckStatus;
+};
 export type RunFigures = {
   id: string;
   circuits: number | null; // separate circuits sharing the run's raceway or cable
@@ -39,14 +50,35 @@ export type RunFigures = {
   fillPct: number | null; // null without a raceway
   status: CheckStatus;
 };
-export type ReviewFigures = { strings: StringFigures[]; inverterOutputs: InverterOutputFigures[]; pointOfConnection: ConnectionFigures; runs: RunFigures[] };
+export type ReviewFigures = {
+  strings: StringFigures[];
+  inverterOutputs: InverterOutputFigures[];
+  pointOfConnection: ConnectionFigures;
+  runs: RunFigures[];
+};
 
 const RUN_CHECKS = [
-  "current-carrying-count", "ampacity-terminal", "ampacity-conditions", "ocpd-rating", "ocpd-protects", "egc", "voltage-drop", "conduit-fill",
-  "wiring-exposed", "wiring-inside", "egc-protection", "input:run",
+  "current-carrying-count",
+  "ampacity-terminal",
+  "ampacity-conditions",
+  "ocpd-rating",
+  "ocpd-protects",
+  "egc",
+  "voltage-drop",
+  "conduit-fill",
+  "wiring-exposed",
+  "wiring-inside",
+  "egc-protection",
+  "input:run",
 ];
 const CONNECTION_CHECKS = [
-  "pv-breaker-size", "point-of-connection", "feeder-connection", "feeder-taps", "supply-side-conductors", "supply-side-ocpd-location", "ac-combiner-busbar",
+  "pv-breaker-size",
+  "point-of-connection",
+  "feeder-connection",
+  "feeder-taps",
+  "supply-side-conductors",
+  "supply-side-ocpd-location",
+  "ac-combiner-busbar",
   "input:point-of-connection",
 ];
 
@@ -64,7 +96,11 @@ function stringFigures(design: Design, site: Site, s: PvString): StringFigures {
   const moduleVocV = figure(() => coldModuleVoc(design.module, site.recordLowTempC).vocV);
   // Optimizers hold the string at the inverter's fixed voltage (690.7(B)); otherwise N × the module's cold Voc (690.7(A)).
   const optimized = design.moduleLevelDevice?.kind === "optimizer";
-  const stringV = optimized ? (design.inverters.find((i) => i.id === s.inverterId)?.regulatedStringV ?? null) : moduleVocV === null ? null : s.modulesInSeries * moduleVocV;
+  const stringV = optimized
+    ? (design.inverters.find((i) => i.id === s.inverterId)?.regulatedStringV ?? null)
+    : moduleVocV === null
+      ? null
+      : s.modulesInSeries * moduleVocV;
   const maxA = figure(() => stringMaxCurrentA(design));
   return {
     id: s.id,
@@ -96,7 +132,11 @@ function runFigures(design: Design, site: Site, run: ConductorRun, checks: Check
     minEgc: figure(() => sizeLabel(egcRequirement(design, site, run, run.egc?.material ?? "Cu").required)),
     egcDeviceA: egcBasis?.ocpdA ?? null,
     egcDeviceAssumed: egcBasis?.assumed ?? null,
-    fillPct: raceway ? figure(() => round(racewayFill({ type: raceway.type, tradeSize: raceway.tradeSize, wires: runRacewayWires(design, run) }).fillPercent)) : null,
+    fillPct: raceway
+      ? figure(() =>
+          round(racewayFill({ type: raceway.type, tradeSize: raceway.tradeSize, wires: runRacewayWires(design, run) }).fillPercent),
+        )
+      : null,
     status: worstStatus(checks.filter((c) => isCheckOfRun(c, run.id)).map((c) => c.status)),
   };
 }
@@ -104,9 +144,11 @@ function runFigures(design: Design, site: Site, run: ConductorRun, checks: Check
 function connectionFigures(design: Design, site: Site, checks: CheckResult[]): ConnectionFigures {
   const s = design.service;
   const rule =
-    s.connection === "supply-side" ? "service-rating"
-    : s.loadSideAt === "feeder" ? "feeder"
-    : (governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design), { isDwelling: site.isDwelling }))?.rule ?? null);
+    s.connection === "supply-side"
+      ? "service-rating"
+      : s.loadSideAt === "feeder"
+        ? "feeder"
+        : (governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design), { isDwelling: site.isDwelling }))?.rule ?? null);
   return { method: s.connection, rule, status: worstStatus(checks.filter(isConnectionCheck).map((c) => c.status)) };
 }
 
@@ -116,7 +158,11 @@ export function reviewFigures(design: Design, site: Site, checks: CheckResult[])
     strings: design.strings.map((s) => stringFigures(design, site, s)),
     inverterOutputs: design.inverters.map((inv) => {
       const continuousA = inv.quantity * inv.acOutputCurrentA;
-      return { inverterId: inv.id, continuousA: round(continuousA), minOcpdA: figure(() => requiredOcpdA(continuousA, { edition: site.necEdition })) };
+      return {
+        inverterId: inv.id,
+        continuousA: round(continuousA),
+        minOcpdA: figure(() => requiredOcpdA(continuousA, { edition: site.necEdition })),
+      };
     }),
     pointOfConnection: connectionFigures(design, site, checks),
     runs: design.runs.map((run) => runFigures(design, site, run, checks)),

@@ -1,17 +1,49 @@
 // The design review engine: pure functions over plain data, no I/O.
 export * from "./types";
 export { DesignInputError, unlessInputError } from "./errors";
-export { CLAUSES, EDITION_ONLY_CLAUSES, NON_CODE_BASES, type ClauseId, type EditionOnlyClauseId, clause, clauseInEdition, clauses } from "./clauses";
+export {
+  CLAUSES,
+  EDITION_ONLY_CLAUSES,
+  NON_CODE_BASES,
+  type ClauseId,
+  type EditionOnlyClauseId,
+  clause,
+  clauseInEdition,
+  clauses,
+} from "./clauses";
 export { reviewArray, reviewDesign, type ReviewResult, type ReviewSummary } from "./review";
-export { isCheckOfRun, isConnectionCheck, type ConnectionFigures, type InverterOutputFigures, type ReviewFigures, type RunFigures, type StringFigures } from "./figures";
+export {
+  isCheckOfRun,
+  isConnectionCheck,
+  type ConnectionFigures,
+  type InverterOutputFigures,
+  type ReviewFigures,
+  type RunFigures,
+  type StringFigures,
+} from "./figures";
 export { validateArrayDesign, validateDesign, validateSite } from "./validate";
 export { requiredLabels, type LabelFacts, type WarningLabel } from "./labels";
 export { article, withArticle, plural, countAgrees } from "./check-result";
 
-export { DWELLING_MAX_V, OTHER_BUILDING_MAX_V, coldModuleVoc, stringVoltageLimit, checkStringVoltage, type ColdVoc } from "./checks/string-voltage";
+export {
+  DWELLING_MAX_V,
+  OTHER_BUILDING_MAX_V,
+  coldModuleVoc,
+  stringVoltageLimit,
+  checkStringVoltage,
+  type ColdVoc,
+} from "./checks/string-voltage";
 export { checkModuleLevelInputs } from "./checks/module-level-inputs";
 export { CELL_TEMP_RISE_C, cellTempC, hotModuleVmpV, checkMpptWindow, checkMicroMpptWindow } from "./checks/mppt-window";
-export { stringMaxCurrentA, runMaxCurrentA, runCircuits, circuitConductorCount, stringsOnSameInput, checkInverterInputCurrent, type RunCircuit } from "./checks/circuit-current";
+export {
+  stringMaxCurrentA,
+  runMaxCurrentA,
+  runCircuits,
+  circuitConductorCount,
+  stringsOnSameInput,
+  checkInverterInputCurrent,
+  type RunCircuit,
+} from "./checks/circuit-current";
 export { rooftopAdderC, conditionsOfUse, type ConditionsOfUse } from "./checks/conditions-of-use";
 export {
   evaluateConductor,
@@ -36,7 +68,13 @@ export { checkFeederConnection } from "./checks/feeder-connection";
 export { checkSupplySideConductors } from "./checks/supply-side";
 export { checkAcCombiner, hasAcCombiner } from "./checks/ac-combiner";
 export { checkStringsHaveRuns } from "./checks/string-runs";
-export { evaluateLoadSideRules, largestPvBreakerA, largestMainBreakerA, type LoadSideRule, type LoadSideOutcome } from "./checks/busbar-rules";
+export {
+  evaluateLoadSideRules,
+  largestPvBreakerA,
+  largestMainBreakerA,
+  type LoadSideRule,
+  type LoadSideOutcome,
+} from "./checks/busbar-rules";
 export { checkPointOfConnection } from "./checks/point-of-connection";
 export {
   VOLTAGE_DROP_WARN_PERCENT,

@@ -40,7 +40,8 @@ export interface LabelFacts {
 // The wording each edition prescribes, from memory (none of the editions' text was at hand; the tests
 // say so row by row). 690.13(B): the disconnect's marking and, where both sides can be live, its warning.
 export const PV_DISCONNECT_WORDS = "PV SYSTEM DISCONNECT";
-export const BOTH_SIDES_LIVE_WORDS = "WARNING\nELECTRIC SHOCK HAZARD\nTERMINALS ON THE LINE AND LOAD SIDES MAY BE ENERGIZED IN THE OPEN POSITION";
+export const BOTH_SIDES_LIVE_WORDS =
+  "WARNING\nELECTRIC SHOCK HAZARD\nTERMINALS ON THE LINE AND LOAD SIDES MAY BE ENERGIZED IN THE OPEN POSITION";
 // 690.56(C)(1)(a) in 2017 and 2020, 690.12(D) in 2023: a system that shuts down the array and the conductors leaving it.
 export const RAPID_SHUTDOWN_WORDS: Readonly<Record<NecEdition, string>> = {
   2017: 'SOLAR PV SYSTEM IS EQUIPPED WITH RAPID SHUTDOWN.\nTURN RAPID SHUTDOWN SWITCH TO THE "OFF" POSITION TO SHUT DOWN PV SYSTEM AND REDUCE SHOCK HAZARD IN THE ARRAY.',
@@ -74,9 +75,22 @@ const RAPID_SHUTDOWN_FORMAT: Readonly<Record<NecEdition, string>> = {
 /** The warning labels a design needs: the code's wording where it prescribes one, and our explanation beside every label. */
 export function requiredLabels(f: LabelFacts): WarningLabel[] {
   const labels: WarningLabel[] = [];
-  type Label = Omit<WarningLabel, "id" | "title" | "clause" | "edition" | "values" | "prescribed"> & { values?: Record<string, number>; prescribed?: boolean };
+  type Label = Omit<WarningLabel, "id" | "title" | "clause" | "edition" | "values" | "prescribed"> & {
+    values?: Record<string, number>;
+    prescribed?: boolean;
+  };
   const addCited = (id: string, title: string, citation: string, l: Label) =>
-    labels.push({ id, title, clause: citation, edition: f.edition, placement: l.placement, text: l.text, prescribed: l.prescribed ?? false, explanation: l.explanation, values: l.values ?? {} });
+    labels.push({
+      id,
+      title,
+      clause: citation,
+      edition: f.edition,
+      placement: l.placement,
+      text: l.text,
+      prescribed: l.prescribed ?? false,
+      explanation: l.explanation,
+      values: l.values ?? {},
+    });
   const add = (id: string, title: string, clauseId: ClauseId, l: Label) => addCited(id, title, clause(clauseId, f.edition), l);
 
   if (f.maxDcVoltageV !== null) {
@@ -113,7 +127,8 @@ export function requiredLabels(f: LabelFacts): WarningLabel[] {
   }
   if (f.onBuilding && f.rapidShutdown !== "none") {
     add("rapid-shutdown", "Rapid shutdown", "rapidShutdownLabel", {
-      placement: "At each service equipment location the system connects to, or where the AHJ directs; it says where the rapid shutdown switch is",
+      placement:
+        "At each service equipment location the system connects to, or where the AHJ directs; it says where the rapid shutdown switch is",
       text: RAPID_SHUTDOWN_WORDS[f.edition],
       prescribed: true,
       explanation: `Tells firefighters the array shuts down: turning the rapid shutdown switch off lowers the voltage of the wiring in and leaving the array within 30 seconds. ${RAPID_SHUTDOWN_FORMAT[f.edition]}`,
@@ -127,7 +142,8 @@ export function requiredLabels(f: LabelFacts): WarningLabel[] {
   }
   if (f.onBuilding && f.hasDcRuns) {
     add("dc-circuit-marking", "Solar DC wiring", "dcCircuitMarking", {
-      placement: "On DC raceways, cable assemblies, enclosures and junction boxes: every 10 ft, within 1 ft of turns and bends, and above and below walls, floors and roofs they pass through",
+      placement:
+        "On DC raceways, cable assemblies, enclosures and junction boxes: every 10 ft, within 1 ft of turns and bends, and above and below walls, floors and roofs they pass through",
       text: DC_CIRCUIT_WORDS[f.edition],
       prescribed: true,
       explanation: "Marks wiring that carries solar DC and stays live in daylight, so nobody cuts into it believing it is off.",
@@ -137,7 +153,8 @@ export function requiredLabels(f: LabelFacts): WarningLabel[] {
     add("multiple-sources", "Panel fed by more than one source", "multipleSourcesMarking", {
       placement: "On the panel the solar system feeds",
       text: `CAUTION: THIS PANEL IS FED BY TWO SOURCES\nUTILITY SERVICE AND SOLAR PV SYSTEM (${fmt(f.inverterOutputA)} A AT ${f.acVoltageV} V AC THROUGH THE ${f.pvBreakerA} A PV BREAKER)`,
-      explanation: "The panel stays live from the solar system when the utility is off, and the other way round. The code asks that every source be named, not for set words.",
+      explanation:
+        "The panel stays live from the solar system when the utility is off, and the other way round. The code asks that every source be named, not for set words.",
       values: { inverterOutputA: f.inverterOutputA, acVoltageV: f.acVoltageV, pvBreakerA: f.pvBreakerA },
     });
   }
@@ -146,7 +163,8 @@ export function requiredLabels(f: LabelFacts): WarningLabel[] {
       placement: "Next to the PV breaker",
       text: DO_NOT_RELOCATE_WORDS[f.edition],
       prescribed: true,
-      explanation: "The busbar is loaded up to 120 % of its rating only because the PV breaker sits at the end away from the main; moved, the bus could overheat.",
+      explanation:
+        "The busbar is loaded up to 120 % of its rating only because the PV breaker sits at the end away from the main; moved, the bus could overheat.",
       values: { pvBreakerA: f.pvBreakerA },
     });
   }
@@ -162,7 +180,8 @@ export function requiredLabels(f: LabelFacts): WarningLabel[] {
   add("power-source-directory", "Power sources at this building", "directory", {
     placement: "At the service equipment and at each PV system disconnect",
     text: `POWER SOURCES AT THIS BUILDING\nUTILITY SERVICE: ${(f.serviceLocation ?? "see the site plan").toUpperCase()}\nSOLAR PV SYSTEM DISCONNECT: ${(f.pvDisconnectLocation ?? "see the site plan").toUpperCase()}`,
-    explanation: "A permanent plaque or directory showing where every source's disconnect is. The code asks for the locations, not for set words.",
+    explanation:
+      "A permanent plaque or directory showing where every source's disconnect is. The code asks for the locations, not for set words.",
   });
   return labels;
 }

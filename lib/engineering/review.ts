@@ -59,10 +59,21 @@ function collector(edition: NecEdition): { checks: CheckResult[]; attempt: Attem
       checks.push(...fn());
     } catch (err) {
       if (!(err instanceof DesignInputError)) throw err;
-      checks.push(makeCheck({
-        id: `input:${key}`, title: `Could not check ${what}`, status: "fail", value: null, limit: null, unit: "",
-        clause: "input", edition, message: err.message, fix: "Correct this entry and run the review again.", field: err.field,
-      }));
+      checks.push(
+        makeCheck({
+          id: `input:${key}`,
+          title: `Could not check ${what}`,
+          status: "fail",
+          value: null,
+          limit: null,
+          unit: "",
+          clause: "input",
+          edition,
+          message: err.message,
+          fix: "Correct this entry and run the review again.",
+          field: err.field,
+        }),
+      );
     }
   };
   return { checks, attempt };
@@ -77,7 +88,9 @@ function arrayChecks(design: ArrayDesign, site: Site, attempt: Attempt): void {
   attempt("module-level inputs", "module-level", () => [...checkModuleLevelInputs(design, site), ...checkMicroMpptWindow(design, site)]);
   attempt("inverter input current", "inverter-input", () => checkInverterInputCurrent(design, site));
   attempt("equipment voltage ratings", "system-voltage", () => checkSystemVoltageRatings(design, site));
-  attempt("arc-fault and ground-fault protection", "protection", () => checkProtectionFunctions(design, site, coldModuleVoc(design.module, site.recordLowTempC).vocV));
+  attempt("arc-fault and ground-fault protection", "protection", () =>
+    checkProtectionFunctions(design, site, coldModuleVoc(design.module, site.recordLowTempC).vocV),
+  );
 }
 
 /**
@@ -165,7 +178,10 @@ function maxDcCurrentA(design: Design): number | null {
 
 function labelsFor(design: Design, site: Site, summary: ReviewSummary): WarningLabel[] {
   const s = design.service;
-  const rule = s.connection === "load-side" ? governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design), { isDwelling: site.isDwelling })) : null;
+  const rule =
+    s.connection === "load-side"
+      ? governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design), { isDwelling: site.isDwelling }))
+      : null;
   return requiredLabels({
     edition: site.necEdition,
     onBuilding: design.mount !== "ground",

@@ -225,7 +225,10 @@ export interface Design {
 }
 
 /** The part of a design the string checks read: enough to review strings before the rest is entered. */
-export type ArrayDesign = Pick<Design, "module" | "inverters" | "moduleLevelDevice" | "strings" | "mount" | "cellTempRiseC" | "listedRapidShutdownSystem">;
+export type ArrayDesign = Pick<
+  Design,
+  "module" | "inverters" | "moduleLevelDevice" | "strings" | "mount" | "cellTempRiseC" | "listedRapidShutdownSystem"
+>;
 
 export interface Site {
   recordLowTempC: number;

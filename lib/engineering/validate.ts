@@ -3,14 +3,29 @@ import { type ArrayDesign, type Design, NEC_EDITIONS, type Site } from "./types"
 
 // Data-sheet names for the fields, so an error reads the way the entry form does.
 const NAMES: Record<string, string> = {
-  powerW: "rated power", vocV: "open-circuit voltage (Voc)", vmpV: "maximum-power voltage (Vmp)",
-  iscA: "short-circuit current (Isc)", impA: "maximum-power current (Imp)", lengthIn: "length", widthIn: "width",
-  weightLb: "weight", vocTempCoeff: "Voc temperature coefficient", vmpTempCoeff: "Vmp temperature coefficient",
-  pmaxTempCoeffPctPerC: "Pmax temperature coefficient", acPowerW: "AC power rating",
-  acOutputCurrentA: "continuous output current", acVoltageV: "AC voltage", maxDcInputV: "maximum DC input voltage",
-  mpptMinV: "MPPT minimum voltage", mpptMaxV: "MPPT maximum voltage", maxInputIscA: "maximum input short-circuit current",
-  regulatedStringV: "regulated string voltage", maxStringPowerW: "maximum power per string",
-  maxOutputCurrentA: "maximum output current", shutdownOutputV: "voltage in shutdown", maxSystemVoltageV: "maximum system voltage",
+  powerW: "rated power",
+  vocV: "open-circuit voltage (Voc)",
+  vmpV: "maximum-power voltage (Vmp)",
+  iscA: "short-circuit current (Isc)",
+  impA: "maximum-power current (Imp)",
+  lengthIn: "length",
+  widthIn: "width",
+  weightLb: "weight",
+  vocTempCoeff: "Voc temperature coefficient",
+  vmpTempCoeff: "Vmp temperature coefficient",
+  pmaxTempCoeffPctPerC: "Pmax temperature coefficient",
+  acPowerW: "AC power rating",
+  acOutputCurrentA: "continuous output current",
+  acVoltageV: "AC voltage",
+  maxDcInputV: "maximum DC input voltage",
+  mpptMinV: "MPPT minimum voltage",
+  mpptMaxV: "MPPT maximum voltage",
+  maxInputIscA: "maximum input short-circuit current",
+  regulatedStringV: "regulated string voltage",
+  maxStringPowerW: "maximum power per string",
+  maxOutputCurrentA: "maximum output current",
+  shutdownOutputV: "voltage in shutdown",
+  maxSystemVoltageV: "maximum system voltage",
 };
 
 /** Site data every check depends on; throws DesignInputError naming the field. */
@@ -21,7 +36,10 @@ export function validateSite(site: Site): void {
   requireFinite(site.recordLowTempC, "site.recordLowTempC", "The record low temperature");
   requireFinite(site.highDesignTempC, "site.highDesignTempC", "The high design temperature");
   if (site.recordLowTempC > site.highDesignTempC) {
-    throw new DesignInputError("site.recordLowTempC", "The record low temperature is above the high design temperature; check the two entries.");
+    throw new DesignInputError(
+      "site.recordLowTempC",
+      "The record low temperature is above the high design temperature; check the two entries.",
+    );
   }
   if (site.peakSunHours !== undefined) requirePositive(site.peakSunHours, "site.peakSunHours", "Peak sun hours");
 }
@@ -49,11 +67,15 @@ export function validateDesign(design: Design): void {
   if (s.mainBreakerA !== null) requirePositive(s.mainBreakerA, "service.mainBreakerA", "The main breaker rating");
   for (const b of s.otherBreakersA ?? []) requirePositive(b, "service.otherBreakersA", "Each breaker rating on the bus");
   optionalPositive(s.serviceConductorAmpacityA, "service.serviceConductorAmpacityA", "The service conductor ampacity");
-  if (design.roofPlanes.length === 0) throw new DesignInputError("roofPlanes", "The design has no modules: add a roof plane with its module count.");
+  if (design.roofPlanes.length === 0)
+    throw new DesignInputError("roofPlanes", "The design has no modules: add a roof plane with its module count.");
   // The plane counts add up to the system's size, so a blank or fractional one spoils every rating.
   for (const p of design.roofPlanes) {
     if (!Number.isInteger(p.moduleCount) || p.moduleCount < 0) {
-      throw new DesignInputError(`roofPlanes.${p.id}.moduleCount`, `The number of modules on ${p.label} must be a whole number, zero or more.`);
+      throw new DesignInputError(
+        `roofPlanes.${p.id}.moduleCount`,
+        `The number of modules on ${p.label} must be a whole number, zero or more.`,
+      );
     }
   }
   const modules = design.roofPlanes.reduce((sum, p) => sum + p.moduleCount, 0);

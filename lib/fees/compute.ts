@@ -4,7 +4,17 @@
 import { applicableLines } from "./effective";
 import { divideRoundHalfUp, formatUsd, formatUsdExact, toCents } from "./money";
 import { formatKw, kwToWatts, parsePercent } from "./quantities";
-import type { BracketTier, FeeBasis, FeeComputation, FeeFacts, FeeLineProblem, FeeLineResult, MarginalTier, ScheduledFeeLine, SizeRating } from "./types";
+import type {
+  BracketTier,
+  FeeBasis,
+  FeeComputation,
+  FeeFacts,
+  FeeLineProblem,
+  FeeLineResult,
+  MarginalTier,
+  ScheduledFeeLine,
+  SizeRating,
+} from "./types";
 import { assertValidFacts, assertValidFeeLines } from "./validate";
 
 type Sizes = Record<SizeRating, number | null>; // whole watts; null while the design is not complete
@@ -93,7 +103,10 @@ const RATING_LABEL: Record<SizeRating, string> = { dc: "DC", ac: "AC" };
 function rateTimesSize(rateCentsPerKw: number, watts: number, size: SizeRating, note = ""): { cents: number; text: string } {
   const exact = BigInt(rateCentsPerKw) * BigInt(watts);
   const cents = toCents(divideRoundHalfUp(exact, 1000n));
-  return { cents, text: `${formatKw(watts)} ${RATING_LABEL[size]} × ${formatUsd(rateCentsPerKw)}/kW${note} = ${exactThenRounded(exact, 3, cents)}` };
+  return {
+    cents,
+    text: `${formatKw(watts)} ${RATING_LABEL[size]} × ${formatUsd(rateCentsPerKw)}/kW${note} = ${exactThenRounded(exact, 3, cents)}`,
+  };
 }
 
 /** "$95.025, rounded to $95.03" when rounding changed the figure; just "$95.03" when it did not. */
@@ -104,7 +117,8 @@ function exactThenRounded(exact: bigint, scale: number, cents: number): string {
 }
 
 /** Upper edges in watts; the last tier's is Infinity. */
-const edgesW = (tiers: readonly { upToKw: number | null }[]) => tiers.map((tier) => (tier.upToKw === null ? Infinity : kwToWatts(tier.upToKw)));
+const edgesW = (tiers: readonly { upToKw: number | null }[]) =>
+  tiers.map((tier) => (tier.upToKw === null ? Infinity : kwToWatts(tier.upToKw)));
 
 // A size on an upper edge belongs to that tier: "up to 10 kW" includes 10.000 kW.
 function bracketWorking(tiers: readonly BracketTier[], watts: number, size: SizeRating): Working {
@@ -114,7 +128,10 @@ function bracketWorking(tiers: readonly BracketTier[], watts: number, size: Size
   const over = index > 0 ? `over ${formatKw(edges[index - 1]!)}` : "";
   const upTo = tier.upToKw !== null ? `up to ${formatKw(edges[index]!)}` : "";
   const bracket = [over, upTo].filter(Boolean).join(" ") || "of every size";
-  return { amountCents: tier.amountCents, arithmetic: [`${formatKw(watts)} ${RATING_LABEL[size]} is in the bracket ${bracket} → ${formatUsd(tier.amountCents)}`] };
+  return {
+    amountCents: tier.amountCents,
+    arithmetic: [`${formatKw(watts)} ${RATING_LABEL[size]} is in the bracket ${bracket} → ${formatUsd(tier.amountCents)}`],
+  };
 }
 
 // Each tier's rate applies to the kW between the tier below's edge and its own; each tier's part
@@ -145,5 +162,8 @@ function valuationWorking(ratePercent: string, valuationCents: number | null): W
   }
   const exact = BigInt(valuationCents) * parsePercent(ratePercent)!;
   const cents = toCents(divideRoundHalfUp(exact, 1_000_000n));
-  return { amountCents: cents, arithmetic: [`${formatUsd(valuationCents)} valuation × ${ratePercent}% = ${exactThenRounded(exact, 6, cents)}`] };
+  return {
+    amountCents: cents,
+    arithmetic: [`${formatUsd(valuationCents)} valuation × ${ratePercent}% = ${exactThenRounded(exact, 6, cents)}`],
+  };
 }

@@ -20,7 +20,10 @@ export function formatUsdExact(numerator: bigint, scale: number): string {
   const digits = scale + 2; // decimals of the dollar figure
   const text = numerator.toString().padStart(digits + 1, "0");
   const whole = BigInt(text.slice(0, text.length - digits));
-  const fraction = text.slice(text.length - digits).replace(/0+$/, "").padEnd(2, "0");
+  const fraction = text
+    .slice(text.length - digits)
+    .replace(/0+$/, "")
+    .padEnd(2, "0");
   return `$${GROUPED.format(whole)}.${fraction}`;
 }
 

@@ -40,6 +40,10 @@ export function planLineRefund(payment: PaidPayment, feeKeys: readonly string[])
   if (again) return { ok: false, message: `${again.name} was already refunded.` };
   const amountCents = lines.reduce((sum, l) => sum + l.amountCents, 0);
   const left = refundableCents(payment);
-  if (amountCents > left) return { ok: false, message: `The chosen fees come to ${formatUsd(amountCents)}, but only ${formatUsd(left)} of this payment is left to refund.` };
+  if (amountCents > left)
+    return {
+      ok: false,
+      message: `The chosen fees come to ${formatUsd(amountCents)}, but only ${formatUsd(left)} of this payment is left to refund.`,
+    };
   return { ok: true, amountCents, lines };
 }

@@ -53,10 +53,14 @@ export function tierBoundsProblem(upToKw: readonly unknown[]): RuleProblem | nul
       return { path, message: "Only the last tier is open-ended; enter the size this tier ends at" };
     }
     if (isLast) return { path, message: "Leave the last tier's upper size blank so it covers every larger system" };
-    if (typeof kw !== "number" || !isWholeWatts(kw)) return { path, message: "Enter the tier's upper size in kW with at most three decimals" };
+    if (typeof kw !== "number" || !isWholeWatts(kw))
+      return { path, message: "Enter the tier's upper size in kW with at most three decimals" };
     const watts = kwToWatts(kw);
     if (watts <= previousW) {
-      return { path, message: index === 0 ? "The first tier must end above 0 kW" : `Tiers must ascend: this tier must end above ${formatKw(previousW)}` };
+      return {
+        path,
+        message: index === 0 ? "The first tier must end above 0 kW" : `Tiers must ascend: this tier must end above ${formatKw(previousW)}`,
+      };
     }
     previousW = watts;
   }
@@ -73,7 +77,10 @@ export function versionClashes(lines: readonly { name: string; effectiveFrom: st
   for (const [index, line] of lines.entries()) {
     const key = JSON.stringify([line.authority ?? "", feeNameKey(line.name), line.effectiveFrom]);
     if (seen.has(key)) {
-      problems.push({ path: [index, "effectiveFrom"], message: `Another version of "${line.name.trim()}" already takes effect on ${line.effectiveFrom}` });
+      problems.push({
+        path: [index, "effectiveFrom"],
+        message: `Another version of "${line.name.trim()}" already takes effect on ${line.effectiveFrom}`,
+      });
     }
     seen.add(key);
   }

@@ -37,7 +37,13 @@ export type FeeBasis =
   | { kind: "valuation-percent"; ratePercent: string };
 
 export type FeeBasisKind = FeeBasis["kind"];
-export const FEE_BASIS_KINDS = ["flat", "per-kw", "bracket-tiers", "marginal-tiers", "valuation-percent"] as const satisfies readonly FeeBasisKind[];
+export const FEE_BASIS_KINDS = [
+  "flat",
+  "per-kw",
+  "bracket-tiers",
+  "marginal-tiers",
+  "valuation-percent",
+] as const satisfies readonly FeeBasisKind[];
 export const FEE_BASIS_LABELS: Record<FeeBasisKind, string> = {
   flat: "Flat fee",
   "per-kw": "Rate per kW",

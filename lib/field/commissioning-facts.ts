@@ -52,8 +52,14 @@ const DEVICE_WORDS = { micro: "microinverters", optimizer: "optimizers", "shutdo
 
 /** One line per string inverter unit: "Inverter", or numbered when there are several, with its maker and model. */
 function inverterUnits(design: Design): CommissioningFacts["inverters"] {
-  const units = design.inverters.filter((i) => i.kind === "string").flatMap((i) => Array.from({ length: i.quantity }, (_, k) => ({ inverter: i, id: i.quantity === 1 ? i.id : `${i.id}.${k + 1}` })));
-  return units.map(({ inverter, id }, n) => ({ id, label: `Inverter${units.length > 1 ? ` ${n + 1}` : ""}`, model: `${inverter.maker} ${inverter.model}` }));
+  const units = design.inverters
+    .filter((i) => i.kind === "string")
+    .flatMap((i) => Array.from({ length: i.quantity }, (_, k) => ({ inverter: i, id: i.quantity === 1 ? i.id : `${i.id}.${k + 1}` })));
+  return units.map(({ inverter, id }, n) => ({
+    id,
+    label: `Inverter${units.length > 1 ? ` ${n + 1}` : ""}`,
+    model: `${inverter.maker} ${inverter.model}`,
+  }));
 }
 
 function pairingFacts(design: Design, moduleCount: number, moduleMonitoring: boolean): CommissioningFacts["pairing"] {
@@ -61,10 +67,21 @@ function pairingFacts(design: Design, moduleCount: number, moduleMonitoring: boo
   const micros = design.inverters.filter((i) => i.kind === "micro");
   if (micros.length > 0) return { word: DEVICE_WORDS.micro, installed: micros.reduce((sum, i) => sum + i.quantity, 0), strings: [] };
   if (!design.moduleLevelDevice) return null;
-  return { word: DEVICE_WORDS[design.moduleLevelDevice.kind], installed: moduleCount, strings: design.strings.map((s) => ({ id: s.id, installed: s.modulesInSeries })) };
+  return {
+    word: DEVICE_WORDS[design.moduleLevelDevice.kind],
+    installed: moduleCount,
+    strings: design.strings.map((s) => ({ id: s.id, installed: s.modulesInSeries })),
+  };
 }
 
-export function commissioningFacts({ design, edition, acceptedGridProfiles, moduleCount, acKw, moduleMonitoring }: CommissioningFactsInput): CommissioningFacts {
+export function commissioningFacts({
+  design,
+  edition,
+  acceptedGridProfiles,
+  moduleCount,
+  acKw,
+  moduleMonitoring,
+}: CommissioningFactsInput): CommissioningFacts {
   const stringInverterIds = new Set(design.inverters.filter((i) => i.kind === "string").map((i) => i.id));
   // Optimizers hold each module low until the inverter runs, so their strings show no Voc to test.
   const vocApplies = design.moduleLevelDevice?.kind !== "optimizer";
@@ -76,7 +93,13 @@ export function commissioningFacts({ design, edition, acceptedGridProfiles, modu
     nominalServiceV: design.service.voltageV,
     stringTests: design.strings
       .filter((s) => stringInverterIds.has(s.inverterId))
-      .map((s) => ({ id: s.id, modulesInSeries: s.modulesInSeries, moduleVocV: design.module.vocV, ...(design.module.vocTempCoeff ? { vocTempCoeff: design.module.vocTempCoeff } : {}), vocApplies })),
+      .map((s) => ({
+        id: s.id,
+        modulesInSeries: s.modulesInSeries,
+        moduleVocV: design.module.vocV,
+        ...(design.module.vocTempCoeff ? { vocTempCoeff: design.module.vocTempCoeff } : {}),
+        vocApplies,
+      })),
     inverters: inverterUnits(design),
     pairing: pairingFacts(design, moduleCount, moduleMonitoring),
     strings,
@@ -100,7 +123,11 @@ export function toCommissioningRecord(facts: CommissioningFacts, readings: Commi
   const byString = new Map(readings.strings.map((s) => [s.id, s]));
   const byUnit = new Map(readings.inverters.map((u) => [u.id, u]));
   const pairing: DevicePairingReading | null = facts.pairing
-    ? { ...facts.pairing, found: readings.devicesFound, strings: facts.pairing.strings.map((s) => ({ ...s, found: byString.get(s.id)?.devicesFound ?? null })) }
+    ? {
+        ...facts.pairing,
+        found: readings.devicesFound,
+        strings: facts.pairing.strings.map((s) => ({ ...s, found: byString.get(s.id)?.devicesFound ?? null })),
+      }
     : null;
   return {
     edition: facts.edition,
@@ -125,6 +152,10 @@ export function toCommissioningRecord(facts: CommissioningFacts, readings: Commi
     acRatingW: facts.acRatingW,
     firstPowerW: readings.firstPowerW,
     firstPowerTime: readings.firstPowerTime,
-    rapidShutdownTest: { boundary: readings.rapidShutdown.boundary, measuredV: readings.rapidShutdown.measuredV, seconds: readings.rapidShutdown.seconds },
+    rapidShutdownTest: {
+      boundary: readings.rapidShutdown.boundary,
+      measuredV: readings.rapidShutdown.measuredV,
+      seconds: readings.rapidShutdown.seconds,
+    },
   };
 }

@@ -4,7 +4,8 @@
 // out of the text; anything else is offered as read for the crew to check.
 
 // "SN" alone needs a separator after it, or a serial like "SN4471" would lose its first letters.
-const LABELLED = /(?:^|[\s;,|])(?:S\/N\s*[:#=]?|SN\s*[:#=]|SN\s+|SERIAL(?:\s*(?:NO\.?|NUMBER))?\s*[:#=]?)\s*([\p{L}\p{N}][\p{L}\p{N}-]{3,})/iu;
+const LABELLED =
+  /(?:^|[\s;,|])(?:S\/N\s*[:#=]?|SN\s*[:#=]|SN\s+|SERIAL(?:\s*(?:NO\.?|NUMBER))?\s*[:#=]?)\s*([\p{L}\p{N}][\p{L}\p{N}-]{3,})/iu;
 // GS1 element string in its printed form: "(21)" then the serial, up to the next "(".
 const GS1_SERIAL = /\(21\)([^()\s]{1,20})/;
 // GS1 raw form: FNC1 (group separator) or the start, "21", the serial up to the next separator.

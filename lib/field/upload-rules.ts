@@ -61,7 +61,11 @@ export const FIELD_WORK_ENDS_AT: Stage = "pto_received";
  * a project assigned to them) and either uploaded it or runs the project's office work (a coordinator or
  * an admin of its organization), while the field work is open. API tokens only read.
  */
-export function mayRemoveUpload(viewer: Pick<Viewer, "id" | "role" | "organizationId" | "apiTokenId">, project: { organizationId: string; installerId: string | null; stage: Stage }, file: { uploadedById: string | null }): boolean {
+export function mayRemoveUpload(
+  viewer: Pick<Viewer, "id" | "role" | "organizationId" | "apiTokenId">,
+  project: { organizationId: string; installerId: string | null; stage: Stage },
+  file: { uploadedById: string | null },
+): boolean {
   if (stageIndex(project.stage) >= stageIndex(FIELD_WORK_ENDS_AT)) return false;
   if (!can(viewer, "field:record", project)) return false;
   return file.uploadedById === viewer.id || can(viewer, "project:edit", project);

@@ -1,3 +1,7 @@
 export declare const CLIENT_ADDRESS_HEADER: string;
 export declare function trustedProxyHops(value: string | undefined): number;
-export declare function clientAddressOf(input: { socketAddress: string | undefined; forwardedFor: string | string[] | undefined; hops: number }): string;
+export declare function clientAddressOf(input: {
+  socketAddress: string | undefined;
+  forwardedFor: string | string[] | undefined;
+  hops: number;
+}): string;

@@ -11,7 +11,8 @@ export const CLIENT_ADDRESS_HEADER = "x-ohmstead-client-address";
 export function trustedProxyHops(value) {
   if (value === undefined || value === "") return 0;
   const hops = Number(value);
-  if (!Number.isInteger(hops) || hops < 0 || hops > 10) throw new Error(`TRUSTED_PROXY_HOPS must be a whole number from 0 to 10, not "${value}"`);
+  if (!Number.isInteger(hops) || hops < 0 || hops > 10)
+    throw new Error(`TRUSTED_PROXY_HOPS must be a whole number from 0 to 10, not "${value}"`);
   return hops;
 }
 
@@ -30,7 +31,7 @@ function normalize(address) {
 export function clientAddressOf({ socketAddress, forwardedFor, hops }) {
   const peer = normalize(socketAddress) || "unknown";
   if (hops === 0) return peer;
-  const header = Array.isArray(forwardedFor) ? forwardedFor.join(",") : forwardedFor ?? "";
+  const header = Array.isArray(forwardedFor) ? forwardedFor.join(",") : (forwardedFor ?? "");
   const chain = header.split(",").map(normalize).filter(Boolean);
   // The nearest proxy is the peer itself; it appended the hop before it, and so on.
   const index = chain.length - hops;

@@ -38,7 +38,10 @@ const text = (max: number) =>
 /** One string's readings: the tests before energizing, the devices the inverter found on it, its voltage with the array shut down. */
 const StringReadings = z.object({
   id: safeString().trim().min(1).max(80),
-  polarity: z.enum(POLARITIES, { error: "Choose correct or reversed" }).nullish().transform((v) => v ?? null),
+  polarity: z
+    .enum(POLARITIES, { error: "Choose correct or reversed" })
+    .nullish()
+    .transform((v) => v ?? null),
   vocV: reading,
   insulationMohm: reading,
   devicesFound: wholeReading,
@@ -71,7 +74,11 @@ export const CommissioningReadings = z.object({
     .transform((v) => (v ? v : null))
     .refine((v) => v === null || /^([01]?\d|2[0-3]):[0-5]\d$/.test(v), "Enter the time as HH:MM, 24-hour"),
   rapidShutdown: z
-    .object({ boundary: z.enum(BOUNDARIES, { error: "Choose where the test was read" }).default("outside"), measuredV: reading, seconds: reading })
+    .object({
+      boundary: z.enum(BOUNDARIES, { error: "Choose where the test was read" }).default("outside"),
+      measuredV: reading,
+      seconds: reading,
+    })
     .default({ boundary: "outside", measuredV: null, seconds: null }),
 });
 export type CommissioningReadingsInput = z.input<typeof CommissioningReadings>;

@@ -23,10 +23,16 @@ function numberIn(label: string, min: number, max: number, unit = "", { integer 
 /** "Busbar rating" → "busbar rating", but "PV breaker" stays "PV breaker" and "MPPT input" stays "MPPT input". */
 const inSentence = (label: string) => (/^[A-Z]{2}/.test(label) ? label : label[0]!.toLowerCase() + label.slice(1));
 const required = (label: string, min: number, max: number, unit = "", opts = {}) =>
-  z.preprocess(blankToUndefined, numberIn(label, min, max, unit, opts).optional()).refine((v) => v !== undefined, `Enter the ${inSentence(label)}`) as unknown as z.ZodType<number, string | number>;
+  z
+    .preprocess(blankToUndefined, numberIn(label, min, max, unit, opts).optional())
+    .refine((v) => v !== undefined, `Enter the ${inSentence(label)}`) as unknown as z.ZodType<number, string | number>;
 const optional = (label: string, min: number, max: number, unit = "", opts = {}) =>
-  z.preprocess(blankToUndefined, numberIn(label, min, max, unit, opts).optional()) as unknown as z.ZodType<number | undefined, string | number | undefined>;
-const choice = <const T extends readonly [string, ...string[]]>(values: T, label: string) => z.enum(values, { error: `Choose the ${label}` });
+  z.preprocess(blankToUndefined, numberIn(label, min, max, unit, opts).optional()) as unknown as z.ZodType<
+    number | undefined,
+    string | number | undefined
+  >;
+const choice = <const T extends readonly [string, ...string[]]>(values: T, label: string) =>
+  z.enum(values, { error: `Choose the ${label}` });
 const text = (label: string, max: number) => safeString().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
 const optionalText = (max: number) => safeString().trim().max(max, `At most ${max} characters`).optional();
 const catalogId = (label: string) => safeString({ error: `Choose ${withArticle(label)}` }).uuid(`Choose ${withArticle(label)}`);
@@ -44,7 +50,10 @@ export const DesignInput = z.object({
       .array(z.object({ lineId, equipmentId: catalogId("inverter"), quantity: required("Quantity", 1, 200, "", { integer: true }) }))
       .min(1, "Add at least one inverter")
       .max(6, "At most 6 inverter lines"),
-    deviceId: z.union([safeString().uuid("Choose a module-level device, or none"), z.literal("")]).optional().transform((v) => v || null),
+    deviceId: z
+      .union([safeString().uuid("Choose a module-level device, or none"), z.literal("")])
+      .optional()
+      .transform((v) => v || null),
     listedRapidShutdownSystem: flag,
   }),
   array: z.object({
@@ -67,7 +76,9 @@ export const DesignInput = z.object({
       .array(
         z.object({
           lineId,
-          inverterLineId: safeString({ error: "Choose the inverter this string feeds" }).min(1, "Choose the inverter this string feeds").max(20),
+          inverterLineId: safeString({ error: "Choose the inverter this string feeds" })
+            .min(1, "Choose the inverter this string feeds")
+            .max(20),
           mpptIndex: optional("MPPT input", 1, 12, "", { integer: true }),
           modulesInSeries: required("Modules in series", 1, 40, "", { integer: true }),
           parallelCount: required("Strings in parallel", 1, 8, "", { integer: true }),
@@ -87,7 +98,10 @@ export const DesignInput = z.object({
       .max(200)
       .optional()
       .transform((v, ctx) => {
-        const parts = (v ?? "").split(/[,\s]+/).filter(Boolean).map(Number);
+        const parts = (v ?? "")
+          .split(/[,\s]+/)
+          .filter(Boolean)
+          .map(Number);
         if (parts.some((n) => !Number.isInteger(n) || n <= 0 || n > 1200)) {
           ctx.addIssue({ code: "custom", message: "List the other breakers in whole amperes separated by commas, e.g. 20, 20, 30" });
           return z.NEVER;
@@ -115,7 +129,9 @@ export const DesignInput = z.object({
     pvDisconnectRatingA: optional("Disconnect rating", 1, 1200, "A", { integer: true }),
     pvDisconnectVoltageV: optional("Disconnect voltage rating", 100, 1000, "V", { integer: true }),
     pvDisconnectAccessible: yesNo,
-    rsdInitiatorKind: z.enum(["", "service-disconnect", "pv-disconnect", "switch"], { error: "Choose the rapid shutdown initiator" }).optional(),
+    rsdInitiatorKind: z
+      .enum(["", "service-disconnect", "pv-disconnect", "switch"], { error: "Choose the rapid shutdown initiator" })
+      .optional(),
     rsdInitiatorOutside: yesNo,
     // A grounding electrode conductor the design adds (690.47).
     gecSize: sizeOrBlank,
@@ -126,32 +142,37 @@ export const DesignInput = z.object({
   }),
   runs: z
     .array(
-      z.object({
-        lineId,
-        label: text("run name", 60),
-        circuit: safeString({ error: "Choose what this run carries" }).regex(/^(dc|ac):[\w.-]+$/, "Choose what this run carries"),
-        lengthFt: required("Length", 1, 2000, "ft"),
-        material: choice(["Cu", "Al"], "conductor material"),
-        size: choice(CONDUCTOR_SIZES, "conductor size"),
-        stranding: choice(["stranded", "solid"], "stranding"),
-        insulation: choice(INSULATIONS, "insulation"),
-        wireAreaIn2: optional("Wire area", 0.001, 1, "in²"),
-        insulationTempC: choice(["75", "90"], "insulation temperature rating"),
-        // Blank: the inverter's marked rating, else 110.14(C) (60 °C up to 100 A).
-        terminalTempC: z.enum(["", "60", "75", "90"], { error: "Choose the terminal temperature rating" }).optional(),
-        ambientTempC: optional("Ambient temperature", -40, 70, "°C"),
-        onRoof: flag,
-        roofClearanceIn: optional("Height above the roof", 0, 36, "in"),
-        // Blank: counted from the circuits the run carries.
-        currentCarryingConductors: optional("Current-carrying conductors", 1, 40, "", { integer: true }),
-        // Strings keep their own circuits unless joined in parallel before the run; inverter outputs leave a combiner as one.
-        arrangement: z.enum(["", "separate", "combined"], { error: "Choose how the circuits run" }).optional(),
-        racewayType: choice(RACEWAY_TYPES, "conduit type"),
-        tradeSize: z.union([z.enum(TRADE_SIZES), z.literal("")]).optional(),
-        route: z.enum(["", "outdoors", "inside"], { error: "Choose whether the run enters the building" }).optional(),
-        ocpdA: optional("Overcurrent device", 1, 1200, "A", { integer: true }),
-        egcSize: z.union([z.enum(CONDUCTOR_SIZES), z.literal("")]).optional(),
-      }).refine((r) => !(r.racewayType === "EMT" || r.racewayType === "PVC-40") || Boolean(r.tradeSize), { path: ["tradeSize"], message: "Choose the conduit's trade size" }),
+      z
+        .object({
+          lineId,
+          label: text("run name", 60),
+          circuit: safeString({ error: "Choose what this run carries" }).regex(/^(dc|ac):[\w.-]+$/, "Choose what this run carries"),
+          lengthFt: required("Length", 1, 2000, "ft"),
+          material: choice(["Cu", "Al"], "conductor material"),
+          size: choice(CONDUCTOR_SIZES, "conductor size"),
+          stranding: choice(["stranded", "solid"], "stranding"),
+          insulation: choice(INSULATIONS, "insulation"),
+          wireAreaIn2: optional("Wire area", 0.001, 1, "in²"),
+          insulationTempC: choice(["75", "90"], "insulation temperature rating"),
+          // Blank: the inverter's marked rating, else 110.14(C) (60 °C up to 100 A).
+          terminalTempC: z.enum(["", "60", "75", "90"], { error: "Choose the terminal temperature rating" }).optional(),
+          ambientTempC: optional("Ambient temperature", -40, 70, "°C"),
+          onRoof: flag,
+          roofClearanceIn: optional("Height above the roof", 0, 36, "in"),
+          // Blank: counted from the circuits the run carries.
+          currentCarryingConductors: optional("Current-carrying conductors", 1, 40, "", { integer: true }),
+          // Strings keep their own circuits unless joined in parallel before the run; inverter outputs leave a combiner as one.
+          arrangement: z.enum(["", "separate", "combined"], { error: "Choose how the circuits run" }).optional(),
+          racewayType: choice(RACEWAY_TYPES, "conduit type"),
+          tradeSize: z.union([z.enum(TRADE_SIZES), z.literal("")]).optional(),
+          route: z.enum(["", "outdoors", "inside"], { error: "Choose whether the run enters the building" }).optional(),
+          ocpdA: optional("Overcurrent device", 1, 1200, "A", { integer: true }),
+          egcSize: z.union([z.enum(CONDUCTOR_SIZES), z.literal("")]).optional(),
+        })
+        .refine((r) => !(r.racewayType === "EMT" || r.racewayType === "PVC-40") || Boolean(r.tradeSize), {
+          path: ["tradeSize"],
+          message: "Choose the conduit's trade size",
+        }),
     )
     .min(1, "Add at least one conductor run")
     .max(20, "At most 20 conductor runs"),
@@ -170,7 +191,8 @@ const LOOSE_LEAF = z.union([safeString().max(200), z.number(), z.boolean(), z.nu
 /** The same shape with every leaf accepting whatever was typed: drafts are saved as they are. */
 function loosen(schema: z.ZodType): z.ZodType {
   const def = (schema as unknown as { _zod: { def: { type: string; shape?: Record<string, z.ZodType>; element?: z.ZodType } } })._zod.def;
-  if (def.type === "object" && def.shape) return z.object(Object.fromEntries(Object.entries(def.shape).map(([k, v]) => [k, loosen(v)]))).partial();
+  if (def.type === "object" && def.shape)
+    return z.object(Object.fromEntries(Object.entries(def.shape).map(([k, v]) => [k, loosen(v)]))).partial();
   if (def.type === "array" && def.element) return z.array(loosen(def.element)).max(50).optional();
   return LOOSE_LEAF;
 }

@@ -10,7 +10,10 @@ export const TempCoefficientSchema = z
     unit: z.enum(["%/C", "V/C"], { error: "Choose %/°C or V/°C" }),
   })
   .refine((c) => c.value < 0, { path: ["value"], message: "Voc falls as modules warm, so the coefficient is negative (e.g. −0.27 %/°C)" })
-  .refine((c) => c.value > (c.unit === "%/C" ? -2 : -1), { path: ["value"], message: "That coefficient is too large; check the unit (%/°C or V/°C)" });
+  .refine((c) => c.value > (c.unit === "%/C" ? -2 : -1), {
+    path: ["value"],
+    message: "That coefficient is too large; check the unit (%/°C or V/°C)",
+  });
 
 export const ModuleSpecs = z
   .object({
@@ -41,7 +44,10 @@ export const ModuleSpecs = z
   });
 export type ModuleSpecs = z.output<typeof ModuleSpecs>;
 
-const booleanish = z.preprocess((v) => (v === "true" || v === "on" ? true : v === "false" || v === "" || v === undefined ? false : v), z.boolean({ error: "Answer yes or no" }));
+const booleanish = z.preprocess(
+  (v) => (v === "true" || v === "on" ? true : v === "false" || v === "" || v === undefined ? false : v),
+  z.boolean({ error: "Answer yes or no" }),
+);
 /** A data-sheet yes or no that may be unknown: blank stays unknown, and the review then asks for it. */
 const yesNoUnknown = z.preprocess(
   (v) => (v === "yes" || v === "true" ? true : v === "no" || v === "false" ? false : v === "" || v === null ? undefined : v),
@@ -118,7 +124,11 @@ export const DeviceSpecs = z.object({
 });
 export type DeviceSpecs = z.output<typeof DeviceSpecs>;
 
-export const EQUIPMENT_KIND_LABELS: Record<EquipmentKind, string> = { module: "PV module", inverter: "Inverter", device: "Module-level device" };
+export const EQUIPMENT_KIND_LABELS: Record<EquipmentKind, string> = {
+  module: "PV module",
+  inverter: "Inverter",
+  device: "Module-level device",
+};
 
 const common = { maker: requiredText("maker", 80), model: requiredText("model", 80), listing: optionalText(120) };
 
@@ -157,10 +167,16 @@ const kindFilter = z.union([z.enum(EQUIPMENT_KINDS), z.literal("")], { error: `k
 /** Query of GET /api/v1/equipment. */
 export const EquipmentListQuery = z.object({
   kind: kindFilter.default("").transform((v) => v || undefined),
-  includeArchived: z.enum(["true", "false"], { error: "includeArchived must be true or false" }).default("false").transform((v) => v === "true"),
+  includeArchived: z
+    .enum(["true", "false"], { error: "includeArchived must be true or false" })
+    .default("false")
+    .transform((v) => v === "true"),
 });
 
-export const SetArchivedInput = z.object({ equipmentId: safeString().uuid("Unknown catalog item"), isArchived: z.boolean({ error: "isArchived must be true or false" }) });
+export const SetArchivedInput = z.object({
+  equipmentId: safeString().uuid("Unknown catalog item"),
+  isArchived: z.boolean({ error: "isArchived must be true or false" }),
+});
 
 /** Data sheets: PDFs only, small enough to merge into a permit packet. */
 export const DATASHEET_MAX_BYTES = 20 * 1024 * 1024;

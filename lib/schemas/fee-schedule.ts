@@ -35,11 +35,15 @@ function dollarsToCents(label: string, value: string | number, ctx: z.Refinement
   const text = asText(value);
   const cents = parseUsd(text);
   const message =
-    text === "" ? `Enter the ${label}`
-    : text.startsWith("-") ? `The ${label} cannot be negative`
-    : cents === null ? `Enter the ${label} in dollars and cents, e.g. 150.00`
-    : cents > MAX_FEE_CENTS ? `The ${label} must be at most ${formatUsd(MAX_FEE_CENTS)}`
-    : null;
+    text === ""
+      ? `Enter the ${label}`
+      : text.startsWith("-")
+        ? `The ${label} cannot be negative`
+        : cents === null
+          ? `Enter the ${label} in dollars and cents, e.g. 150.00`
+          : cents > MAX_FEE_CENTS
+            ? `The ${label} must be at most ${formatUsd(MAX_FEE_CENTS)}`
+            : null;
   if (message === null) return cents!;
   ctx.addIssue({ code: "custom", message });
   return z.NEVER;
@@ -81,12 +85,15 @@ const upToKw = z
     if (isBlank(value)) return null;
     const text = asText(value!).replaceAll(",", "");
     const kw = /^\d*\.?\d+$/.test(text) ? Number(text) : NaN;
-    const message =
-      text.startsWith("-") ? "A tier's upper size cannot be negative"
-      : Number.isNaN(kw) ? "Enter the tier's upper size in kW, e.g. 10 or 25.5"
-      : !isWholeWatts(kw) ? "Enter the tier's upper size with at most three decimals (whole watts)"
-      : kw > MAX_TIER_KW ? `A tier's upper size must be at most ${MAX_TIER_KW.toLocaleString("en-US")} kW`
-      : null;
+    const message = text.startsWith("-")
+      ? "A tier's upper size cannot be negative"
+      : Number.isNaN(kw)
+        ? "Enter the tier's upper size in kW, e.g. 10 or 25.5"
+        : !isWholeWatts(kw)
+          ? "Enter the tier's upper size with at most three decimals (whole watts)"
+          : kw > MAX_TIER_KW
+            ? `A tier's upper size must be at most ${MAX_TIER_KW.toLocaleString("en-US")} kW`
+            : null;
     if (message === null) return kw;
     ctx.addIssue({ code: "custom", message });
     return z.NEVER;
@@ -98,12 +105,15 @@ const ratePercent = z.union([safeString(), z.number()], { error: "Enter the perc
   const [whole = "", decimals = ""] = text.split(".");
   const significant = decimals.replace(/0+$/, "");
   const canonical = [String(Number(whole || "0")), significant].filter(Boolean).join(".");
-  const message =
-    text.startsWith("-") ? "The percent cannot be negative"
-    : !/^\d*\.?\d+$/.test(text) ? "Enter the percent as a number, e.g. 1.25"
-    : significant.length > 4 ? "Enter the percent with at most four decimals"
-    : parsePercent(canonical) === null ? "The percent must be at most 100"
-    : null;
+  const message = text.startsWith("-")
+    ? "The percent cannot be negative"
+    : !/^\d*\.?\d+$/.test(text)
+      ? "Enter the percent as a number, e.g. 1.25"
+      : significant.length > 4
+        ? "Enter the percent with at most four decimals"
+        : parsePercent(canonical) === null
+          ? "The percent must be at most 100"
+          : null;
   if (message === null) return canonical;
   ctx.addIssue({ code: "custom", message });
   return z.NEVER;
@@ -142,7 +152,11 @@ function toStoredBasis(basis: z.output<typeof BasisInput>): FeeBasis {
     case "bracket-tiers":
       return { kind: "bracket-tiers", size: basis.size, tiers: basis.tiers.map((t) => ({ upToKw: t.upToKw, amountCents: t.amountUsd })) };
     case "marginal-tiers":
-      return { kind: "marginal-tiers", size: basis.size, tiers: basis.tiers.map((t) => ({ upToKw: t.upToKw, rateCentsPerKw: t.rateUsdPerKw })) };
+      return {
+        kind: "marginal-tiers",
+        size: basis.size,
+        tiers: basis.tiers.map((t) => ({ upToKw: t.upToKw, rateCentsPerKw: t.rateUsdPerKw })),
+      };
     case "valuation-percent":
       return { kind: "valuation-percent", ratePercent: basis.ratePercent };
   }
@@ -173,17 +187,15 @@ export const FeeLineInput = z
     },
     { when: whenValid("minimumUsd", "maximumUsd") },
   )
-  .transform(
-    (line): FeeLine => ({
-      id: line.id,
-      name: line.name,
-      effectiveFrom: line.effectiveFrom,
-      effectiveUntil: line.effectiveUntil,
-      basis: toStoredBasis(line.basis),
-      minimumCents: line.minimumUsd,
-      maximumCents: line.maximumUsd,
-    }),
-  );
+  .transform((line): FeeLine => ({
+    id: line.id,
+    name: line.name,
+    effectiveFrom: line.effectiveFrom,
+    effectiveUntil: line.effectiveUntil,
+    basis: toStoredBasis(line.basis),
+    minimumCents: line.minimumUsd,
+    maximumCents: line.maximumUsd,
+  }));
 export type FeeLineInput = z.input<typeof FeeLineInput>;
 export type FeeLineValues = z.output<typeof FeeLineInput>;
 
@@ -215,10 +227,22 @@ export function feeLineToFormValues(line: FeeLine): FeeLineInput {
     minimumUsd: usd(line.minimumCents),
     maximumUsd: usd(line.maximumCents),
     basis:
-      basis.kind === "flat" ? { kind: "flat", amountUsd: usd(basis.amountCents) }
-      : basis.kind === "per-kw" ? { kind: "per-kw", size: basis.size, rateUsdPerKw: usd(basis.rateCentsPerKw) }
-      : basis.kind === "bracket-tiers" ? { kind: "bracket-tiers", size: basis.size, tiers: basis.tiers.map((t) => ({ upToKw: kw(t.upToKw), amountUsd: usd(t.amountCents) })) }
-      : basis.kind === "marginal-tiers" ? { kind: "marginal-tiers", size: basis.size, tiers: basis.tiers.map((t) => ({ upToKw: kw(t.upToKw), rateUsdPerKw: usd(t.rateCentsPerKw) })) }
-      : { kind: "valuation-percent", ratePercent: basis.ratePercent },
+      basis.kind === "flat"
+        ? { kind: "flat", amountUsd: usd(basis.amountCents) }
+        : basis.kind === "per-kw"
+          ? { kind: "per-kw", size: basis.size, rateUsdPerKw: usd(basis.rateCentsPerKw) }
+          : basis.kind === "bracket-tiers"
+            ? {
+                kind: "bracket-tiers",
+                size: basis.size,
+                tiers: basis.tiers.map((t) => ({ upToKw: kw(t.upToKw), amountUsd: usd(t.amountCents) })),
+              }
+            : basis.kind === "marginal-tiers"
+              ? {
+                  kind: "marginal-tiers",
+                  size: basis.size,
+                  tiers: basis.tiers.map((t) => ({ upToKw: kw(t.upToKw), rateUsdPerKw: usd(t.rateCentsPerKw) })),
+                }
+              : { kind: "valuation-percent", ratePercent: basis.ratePercent },
   };
 }

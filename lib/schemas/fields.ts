@@ -64,9 +64,17 @@ export const numberField = (label: string, range: Range) =>
 
 /** Like numberField, but blank means "not given". */
 export const optionalNumberField = (label: string, range: Range) =>
-  z.preprocess(toNumber, z.number({ error: `${label} must be a number` }).min(range.min, between(label, range)).max(range.max, between(label, range)).optional());
+  z.preprocess(
+    toNumber,
+    z
+      .number({ error: `${label} must be a number` })
+      .min(range.min, between(label, range))
+      .max(range.max, between(label, range))
+      .optional(),
+  );
 
-export const requiredText = (label: string, max: number) => safeString().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
+export const requiredText = (label: string, max: number) =>
+  safeString().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
 
 export const optionalText = (max: number) => safeString().trim().max(max, `At most ${max} characters`).default("");
 

@@ -4,7 +4,11 @@ import { blankToUndefined, optionalText, requiredText, safeString } from "./fiel
 
 const uuid = (what: string) => safeString().uuid(`Choose ${what}`);
 /** A calendar day as the form's date input gives it. */
-const day = (label: string) => safeString().trim().regex(/^\d{4}-\d{2}-\d{2}$/, `Enter the ${label} as a date`).refine((v) => !Number.isNaN(Date.parse(`${v}T00:00:00Z`)), `Enter the ${label} as a real date`);
+const day = (label: string) =>
+  safeString()
+    .trim()
+    .regex(/^\d{4}-\d{2}-\d{2}$/, `Enter the ${label} as a date`)
+    .refine((v) => !Number.isNaN(Date.parse(`${v}T00:00:00Z`)), `Enter the ${label} as a real date`);
 const optionalDay = (label: string) => z.preprocess(blankToUndefined, day(label).optional());
 const optionalUuid = (what: string) => z.preprocess(blankToUndefined, uuid(what).optional());
 
@@ -43,7 +47,10 @@ export type RecordRoundInput = z.infer<typeof RecordRoundInput>;
 export const AnswerItemInput = z.object({
   itemId: uuid("a comment"),
   response: requiredText("response", 2000),
-  designRevision: z.preprocess(blankToUndefined, z.coerce.number({ error: "The design revision must be a number" }).int().min(1).max(10_000).optional()),
+  designRevision: z.preprocess(
+    blankToUndefined,
+    z.coerce.number({ error: "The design revision must be a number" }).int().min(1).max(10_000).optional(),
+  ),
 });
 export type AnswerItemInput = z.infer<typeof AnswerItemInput>;
 

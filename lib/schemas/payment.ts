@@ -3,18 +3,16 @@ import { safeString, whenValid } from "./fields";
 import { parseUsd } from "@/lib/fees/money";
 
 const dollars = (label: string, { allowEmpty }: { allowEmpty: boolean }) =>
-  z
-    .union([safeString(), z.number()])
-    .transform((v, ctx): number | null => {
-      const text = String(v).trim();
-      if (text === "" && allowEmpty) return null;
-      const cents = parseUsd(text);
-      if (cents === null) {
-        ctx.addIssue({ code: "custom", message: `Enter the ${label} in dollars, e.g. 25,000 or 1250.50` });
-        return z.NEVER;
-      }
-      return cents;
-    });
+  z.union([safeString(), z.number()]).transform((v, ctx): number | null => {
+    const text = String(v).trim();
+    if (text === "" && allowEmpty) return null;
+    const cents = parseUsd(text);
+    if (cents === null) {
+      ctx.addIssue({ code: "custom", message: `Enter the ${label} in dollars, e.g. 25,000 or 1250.50` });
+      return z.NEVER;
+    }
+    return cents;
+  });
 
 /** The lines to pay, by key; the amounts are worked out on the server, never taken from here. */
 export const PayFeesInput = z.object({

@@ -43,8 +43,13 @@ export const ProjectInput = z
     customerPhone: optionalText(40),
     street: text("street address", 200),
     city: text("city", 100),
-    state: safeString().trim().toUpperCase().regex(/^[A-Z]{2}$/, "Use the two-letter state code"),
-    postalCode: safeString().trim().regex(/^\d{5}(-\d{4})?$/, "Use a 5-digit ZIP code"),
+    state: safeString()
+      .trim()
+      .toUpperCase()
+      .regex(/^[A-Z]{2}$/, "Use the two-letter state code"),
+    postalCode: safeString()
+      .trim()
+      .regex(/^\d{5}(-\d{4})?$/, "Use a 5-digit ZIP code"),
     jurisdictionId: optionalId,
     utilityId: optionalId,
     utilityAccountNumber: optionalText(40),

@@ -8,16 +8,29 @@ import { numberField, optionalNumberField, optionalText, requiredText, safeStrin
  * list; left out, the usual ones.
  */
 const requiredInspections = <K extends readonly [string, ...string[]]>(kinds: K, usual: K[number][]) =>
-  z.preprocess((v) => (v === undefined ? usual : v === false || v === null ? [] : typeof v === "string" ? [v] : v), z.array(z.enum(kinds, { error: "Choose from the inspections listed" })).transform((list) => [...new Set(list)]));
+  z.preprocess(
+    (v) => (v === undefined ? usual : v === false || v === null ? [] : typeof v === "string" ? [v] : v),
+    z.array(z.enum(kinds, { error: "Choose from the inspections listed" })).transform((list) => [...new Set(list)]),
+  );
 
 /** Days an authority usually takes to answer; left out, the given default. */
-const days = (label: string, range: { min: number; max: number }, usual: number) => optionalNumberField(label, { ...range, unit: "days" }).transform((v) => v ?? usual);
+const days = (label: string, range: { min: number; max: number }, usual: number) =>
+  optionalNumberField(label, { ...range, unit: "days" }).transform((v) => v ?? usual);
 
 export const JurisdictionInput = z
   .object({
     name: requiredText("authority's name", 160),
-    state: safeString().trim().toUpperCase().regex(/^[A-Z]{2}$/, "Use the two-letter state code"),
-    necEdition: z.preprocess(toNumber, z.union(NEC_EDITIONS.map((e) => z.literal(e)), { error: `Choose the adopted NEC edition: ${NEC_EDITIONS.join(", ")}` })),
+    state: safeString()
+      .trim()
+      .toUpperCase()
+      .regex(/^[A-Z]{2}$/, "Use the two-letter state code"),
+    necEdition: z.preprocess(
+      toNumber,
+      z.union(
+        NEC_EDITIONS.map((e) => z.literal(e)),
+        { error: `Choose the adopted NEC edition: ${NEC_EDITIONS.join(", ")}` },
+      ),
+    ),
     // ASHRAE extreme annual mean minimum design dry-bulb temperature of the nearest station.
     recordLowTempC: numberField("Record low", { min: -60, max: 20, unit: "°C" }),
     highDesignTempC: numberField("High design temperature", { min: 10, max: 60, unit: "°C" }),
@@ -38,7 +51,9 @@ export type JurisdictionValues = z.output<typeof JurisdictionInput>;
 const serviceVoltages = z.preprocess(
   (v) => (typeof v === "string" ? v.split(/\r?\n/) : v),
   z
-    .array(safeString({ error: "Each service voltage is text" }).trim().max(40, "Each service voltage is at most 40 characters"), { error: "List the service voltages" })
+    .array(safeString({ error: "Each service voltage is text" }).trim().max(40, "Each service voltage is at most 40 characters"), {
+      error: "List the service voltages",
+    })
     .transform((list) => list.filter(Boolean))
     .pipe(z.array(safeString()).min(1, "Enter at least one service voltage").max(8, "At most 8 service voltages")),
 );
@@ -47,7 +62,9 @@ const serviceVoltages = z.preprocess(
 const acceptedGridProfiles = z.preprocess(
   (v) => (typeof v === "string" ? v.split(/\r?\n/) : (v ?? [])),
   z
-    .array(safeString({ error: "Each grid profile is text" }).trim().max(300, "Each grid profile is at most 300 characters"), { error: "List the accepted grid profiles" })
+    .array(safeString({ error: "Each grid profile is text" }).trim().max(300, "Each grid profile is at most 300 characters"), {
+      error: "List the accepted grid profiles",
+    })
     .transform((list) => [...new Set(list.filter(Boolean))])
     .pipe(z.array(safeString()).max(12, "At most 12 grid profiles")),
 );

@@ -10,6 +10,11 @@ export async function attachDemoDatasheets() {
     const key = `orgs/${item.organizationId}/datasheets/${item.id}/demo.pdf`;
     await putObject({ key, body: bytes, contentType: "application/pdf" });
     const fileName = `${item.maker}-${item.model}`.toLowerCase().replace(/[^a-z0-9]+/g, "-") + ".pdf";
-    await item.update({ datasheetKey: key, datasheetFileName: fileName, datasheetSizeBytes: bytes.byteLength, datasheetUploadedAt: new Date() });
+    await item.update({
+      datasheetKey: key,
+      datasheetFileName: fileName,
+      datasheetSizeBytes: bytes.byteLength,
+      datasheetUploadedAt: new Date(),
+    });
   }
 }

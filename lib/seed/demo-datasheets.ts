@@ -4,12 +4,37 @@ import { PDFDocument, StandardFonts, rgb } from "pdf-lib";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 
 const LABELS: Record<string, string> = {
-  powerW: "Rated power Pmax (W, STC)", vocV: "Open-circuit voltage Voc (V)", vmpV: "Voltage at Pmax Vmp (V)", iscA: "Short-circuit current Isc (A)", impA: "Current at Pmax Imp (A)", vocTempCoeff: "Voc temperature coefficient",
-  pmaxTempCoeffPctPerC: "Pmax temperature coefficient (%/°C)", maxSeriesFuseA: "Maximum series fuse (A)", lengthIn: "Length (in)", widthIn: "Width (in)", weightLb: "Weight (lb)",
-  inverterKind: "Type", acPowerW: "Rated AC power (W)", acOutputCurrentA: "Maximum continuous output current (A)", acVoltageV: "Nominal AC voltage (V)", phase: "Phases",
-  maxDcInputV: "Maximum DC input voltage (V)", mpptMinV: "MPPT window minimum (V)", mpptMaxV: "MPPT window maximum (V)", maxInputIscA: "Maximum input current per MPPT (A)", mpptCount: "Number of MPPTs",
-  regulatedStringV: "Regulated string voltage (V)", maxStringPowerW: "Maximum power per string (W)", certification: "Certification", meetsRapidShutdownWithDevices: "Rapid shutdown with matching devices", reportsPerModule: "Module-level monitoring",
-  deviceKind: "Type", ratedInputPowerW: "Rated input power (W)", maxInputV: "Maximum input voltage (V)", maxOutputCurrentA: "Maximum output current (A)", shutdownOutputV: "Output while shut down (V)",
+  powerW: "Rated power Pmax (W, STC)",
+  vocV: "Open-circuit voltage Voc (V)",
+  vmpV: "Voltage at Pmax Vmp (V)",
+  iscA: "Short-circuit current Isc (A)",
+  impA: "Current at Pmax Imp (A)",
+  vocTempCoeff: "Voc temperature coefficient",
+  pmaxTempCoeffPctPerC: "Pmax temperature coefficient (%/°C)",
+  maxSeriesFuseA: "Maximum series fuse (A)",
+  lengthIn: "Length (in)",
+  widthIn: "Width (in)",
+  weightLb: "Weight (lb)",
+  inverterKind: "Type",
+  acPowerW: "Rated AC power (W)",
+  acOutputCurrentA: "Maximum continuous output current (A)",
+  acVoltageV: "Nominal AC voltage (V)",
+  phase: "Phases",
+  maxDcInputV: "Maximum DC input voltage (V)",
+  mpptMinV: "MPPT window minimum (V)",
+  mpptMaxV: "MPPT window maximum (V)",
+  maxInputIscA: "Maximum input current per MPPT (A)",
+  mpptCount: "Number of MPPTs",
+  regulatedStringV: "Regulated string voltage (V)",
+  maxStringPowerW: "Maximum power per string (W)",
+  certification: "Certification",
+  meetsRapidShutdownWithDevices: "Rapid shutdown with matching devices",
+  reportsPerModule: "Module-level monitoring",
+  deviceKind: "Type",
+  ratedInputPowerW: "Rated input power (W)",
+  maxInputV: "Maximum input voltage (V)",
+  maxOutputCurrentA: "Maximum output current (A)",
+  shutdownOutputV: "Output while shut down (V)",
 };
 
 const text = (value: unknown): string => {
@@ -32,7 +57,13 @@ export async function demoDatasheetPdf(item: Pick<EquipmentDto, "kind" | "maker"
   page.drawRectangle({ x: 0, y: 712, width: 612, height: 80, color: rgb(0.23, 0.29, 0.36) });
   page.drawText(item.maker.toUpperCase(), { x: 48, y: 752, size: 22, font: bold, color: rgb(1, 1, 1) });
   page.drawText(`${item.model} · data sheet`, { x: 48, y: 728, size: 13, font: regular, color: rgb(1, 1, 1) });
-  page.drawText("Invented equipment for the Ohmstead demo. Not a real product.", { x: 48, y: 680, size: 10, font: regular, color: rgb(0.6, 0.2, 0.1) });
+  page.drawText("Invented equipment for the Ohmstead demo. Not a real product.", {
+    x: 48,
+    y: 680,
+    size: 10,
+    font: regular,
+    color: rgb(0.6, 0.2, 0.1),
+  });
   let y = 640;
   const row = (label: string, value: string) => {
     page.drawText(label, { x: 48, y, size: 11, font: regular, color: ink });

@@ -14,16 +14,38 @@ import { DESIGN_MODELS, demoDesign, type CatalogIds } from "./demo-designs";
  */
 export async function seedDemoDesigns(organizationId: string, transaction: Transaction) {
   const items = await Equipment.findAll({ where: { organizationId }, transaction });
-  const catalog = items.map((e) => ({ id: e.id, kind: e.kind, maker: e.maker, model: e.model, listing: e.listing, specs: e.specs, isArchived: false, datasheet: null }) as EquipmentDto);
-  const ids = Object.fromEntries(Object.entries(DESIGN_MODELS).map(([key, model]) => [key, catalog.find((c) => c.model === model)?.id ?? ""])) as CatalogIds;
+  const catalog = items.map(
+    (e) =>
+      ({
+        id: e.id,
+        kind: e.kind,
+        maker: e.maker,
+        model: e.model,
+        listing: e.listing,
+        specs: e.specs,
+        isArchived: false,
+        datasheet: null,
+      }) as EquipmentDto,
+  );
+  const ids = Object.fromEntries(
+    Object.entries(DESIGN_MODELS).map(([key, model]) => [key, catalog.find((c) => c.model === model)?.id ?? ""]),
+  ) as CatalogIds;
   const jurisdictions = new Map((await Jurisdiction.findAll({ where: { organizationId }, transaction })).map((j) => [j.id, j]));
   const utilities = new Map((await Utility.findAll({ where: { organizationId }, transaction })).map((u) => [u.id, u]));
-  const projects = await Project.findAll({ where: { organizationId, stage: { [Op.ne]: "draft" } }, order: [["number", "ASC"]], transaction });
+  const projects = await Project.findAll({
+    where: { organizationId, stage: { [Op.ne]: "draft" } },
+    order: [["number", "ASC"]],
+    transaction,
+  });
 
   for (const [i, project] of projects.entries()) {
     const draft = demoDesign(ids, { busbarA: project.busbarA ?? 200, mainBreakerA: project.mainBreakerA ?? 200 }, i);
     const j = project.jurisdictionId ? jurisdictions.get(project.jurisdictionId) : undefined;
-    const outcome = runDesignReview(draft, catalog, j ? { recordLowTempC: j.recordLowTempC, highDesignTempC: j.highDesignTempC, necEdition: j.necEdition as NecEdition } : null);
+    const outcome = runDesignReview(
+      draft,
+      catalog,
+      j ? { recordLowTempC: j.recordLowTempC, highDesignTempC: j.highDesignTempC, necEdition: j.necEdition as NecEdition } : null,
+    );
     await Design.create(
       {
         organizationId,
@@ -39,13 +61,30 @@ export async function seedDemoDesigns(organizationId: string, transaction: Trans
       const { ratings } = outcome.review.summary;
       const acceptedGridProfiles = (project.utilityId ? utilities.get(project.utilityId)?.acceptedGridProfiles : null) ?? [];
       const moduleMonitoring = moduleMonitoringOf(demoEquipment(draft, catalog));
-      const facts = commissioningFacts({ design: outcome.design, edition: j.necEdition as NecEdition, acceptedGridProfiles, moduleCount: ratings.moduleCount, acKw: ratings.acKw, moduleMonitoring });
+      const facts = commissioningFacts({
+        design: outcome.design,
+        edition: j.necEdition as NecEdition,
+        acceptedGridProfiles,
+        moduleCount: ratings.moduleCount,
+        acKw: ratings.acKw,
+        moduleMonitoring,
+      });
       const readings = passingDemoReadings(facts, i);
       // Completed on the day the timeline says the project was commissioned.
       const commissioned = await StageChange.findOne({ where: { projectId: project.id, toStage: "commissioned" }, transaction });
       const completedAt = commissioned?.createdAt ?? project.stageChangedAt;
       await CommissioningRecord.create(
-        { organizationId, projectId: project.id, readings: readings as unknown as Record<string, unknown>, status: "complete", completedAt, completedById: project.installerId, updatedById: project.installerId, createdAt: completedAt, updatedAt: completedAt },
+        {
+          organizationId,
+          projectId: project.id,
+          readings: readings as unknown as Record<string, unknown>,
+          status: "complete",
+          completedAt,
+          completedById: project.installerId,
+          updatedById: project.installerId,
+          createdAt: completedAt,
+          updatedAt: completedAt,
+        },
         { transaction, silent: true },
       );
     }

@@ -1,26 +1,57 @@
 import type { Transaction } from "sequelize";
 import { CorrectionRound, Filing, FilingItem, Inspection, Jurisdiction, Project, StageChange, Utility } from "@/models";
 import { stageIndex, type Stage } from "@/lib/domain/stages";
+import { localIsoDate } from "@/lib/domain/time-zones";
 import { refreshProjectFacts } from "@/lib/server/data/project-facts";
 
 const DAY_MS = 86_400_000;
-const day = (d: Date) => d.toISOString().slice(0, 10);
+// The demo company keeps Denver's time (demo-scenario); its calendar days are Denver's.
+const day = (d: Date) => localIsoDate(d.toISOString(), "America/Denver");
 const plus = (d: Date, days: number) => new Date(d.getTime() + days * DAY_MS);
 
 // Invented plan-review comments and inspection corrections for the demo.
 const ROUND_ITEMS = [
   [
-    { text: "Show the rapid shutdown initiator's location on the site plan.", reference: "PV-1", response: "Initiator added beside the service disconnect on PV-1.", designRevision: 2 },
-    { text: "Provide the structural letter for the rafter spans.", reference: "PV-5", response: "Letter from the engineer of record attached." },
+    {
+      text: "Show the rapid shutdown initiator's location on the site plan.",
+      reference: "PV-1",
+      response: "Initiator added beside the service disconnect on PV-1.",
+      designRevision: 2,
+    },
+    {
+      text: "Provide the structural letter for the rafter spans.",
+      reference: "PV-5",
+      response: "Letter from the engineer of record attached.",
+    },
   ],
   [
-    { text: "The AC disconnect label must state the rated current and voltage.", reference: "NEC 690.54", response: "Label sheet updated with the inverter output ratings.", designRevision: 2 },
-    { text: "Conduit run across the roof needs its height above the roof shown.", reference: "PV-3", response: "Height noted on the single-line diagram.", designRevision: 2 },
+    {
+      text: "The AC disconnect label must state the rated current and voltage.",
+      reference: "NEC 690.54",
+      response: "Label sheet updated with the inverter output ratings.",
+      designRevision: 2,
+    },
+    {
+      text: "Conduit run across the roof needs its height above the roof shown.",
+      reference: "PV-3",
+      response: "Height noted on the single-line diagram.",
+      designRevision: 2,
+    },
     { text: "Include the module data sheet.", reference: "", response: "Data sheet appended to the packet." },
   ],
   [
-    { text: "Point of connection: show the breaker position at the opposite end of the busbar.", reference: "NEC 705.12(B)", response: "Breaker position shown on PV-3.", designRevision: 2 },
-    { text: "Add the fire setbacks from the ridge.", reference: "PV-1", response: "Setbacks dimensioned on the roof plan.", designRevision: 2 },
+    {
+      text: "Point of connection: show the breaker position at the opposite end of the busbar.",
+      reference: "NEC 705.12(B)",
+      response: "Breaker position shown on PV-3.",
+      designRevision: 2,
+    },
+    {
+      text: "Add the fire setbacks from the ridge.",
+      reference: "PV-1",
+      response: "Setbacks dimensioned on the roof plan.",
+      designRevision: 2,
+    },
   ],
 ];
 
@@ -75,11 +106,27 @@ export async function seedDemoFilings(organizationId: string, t: Transaction) {
       const items = ROUND_ITEMS[rounds++]!;
       const received = plus(permitFiled, 1);
       const round = await CorrectionRound.create(
-        { organizationId, filingId: permit.id, number: 1, receivedOn: day(received), revisionAtReceipt: null, answeredAt: plus(received, 1) },
+        {
+          organizationId,
+          filingId: permit.id,
+          number: 1,
+          receivedOn: day(received),
+          revisionAtReceipt: null,
+          answeredAt: plus(received, 1),
+        },
         { transaction: t },
       );
       await FilingItem.bulkCreate(
-        items.map((item, position) => ({ organizationId, roundId: round.id, position, text: item.text, reference: item.reference, response: item.response, designRevision: item.designRevision ?? null, resolved: true })),
+        items.map((item, position) => ({
+          organizationId,
+          roundId: round.id,
+          position,
+          text: item.text,
+          reference: item.reference,
+          response: item.response,
+          designRevision: item.designRevision ?? null,
+          resolved: true,
+        })),
         { transaction: t },
       );
     }
@@ -88,19 +135,60 @@ export async function seedDemoFilings(organizationId: string, t: Transaction) {
       if (failed < 2) {
         failed++;
         const first = await Inspection.create(
-          { organizationId, filingId: permit.id, kind: "final", scheduledFor: day(plus(inspected, -7)), timeWindow: "8–12", inspectorName: "M. Okafor-Lind", result: "failed", resultOn: day(plus(inspected, -7)), recordedAt: plus(inspected, -7) },
+          {
+            organizationId,
+            filingId: permit.id,
+            kind: "final",
+            scheduledFor: day(plus(inspected, -7)),
+            timeWindow: "8–12",
+            inspectorName: "M. Okafor-Lind",
+            result: "failed",
+            resultOn: day(plus(inspected, -7)),
+            recordedAt: plus(inspected, -7),
+          },
           { transaction: t },
         );
         await FilingItem.bulkCreate(
-          INSPECTION_CORRECTIONS.map((item, position) => ({ organizationId, inspectionId: first.id, position, ...item, response: "Corrected on site.", resolved: true })),
+          INSPECTION_CORRECTIONS.map((item, position) => ({
+            organizationId,
+            inspectionId: first.id,
+            position,
+            ...item,
+            response: "Corrected on site.",
+            resolved: true,
+          })),
           { transaction: t },
         );
         await Inspection.create(
-          { organizationId, filingId: permit.id, kind: "final", scheduledFor: day(inspected), timeWindow: "12–4", inspectorName: "M. Okafor-Lind", result: "passed", resultOn: day(inspected), recordedAt: inspected, reinspectionOfId: first.id },
+          {
+            organizationId,
+            filingId: permit.id,
+            kind: "final",
+            scheduledFor: day(inspected),
+            timeWindow: "12–4",
+            inspectorName: "M. Okafor-Lind",
+            result: "passed",
+            resultOn: day(inspected),
+            recordedAt: inspected,
+            reinspectionOfId: first.id,
+          },
           { transaction: t },
         );
       } else {
-        await Inspection.create({ organizationId, filingId: permit.id, kind: "final", scheduledFor: day(inspected), timeWindow: "8–12", inspectorName: "J. Petrakis", result: "passed", resultOn: day(inspected), recordedAt: inspected }, { transaction: t });
+        await Inspection.create(
+          {
+            organizationId,
+            filingId: permit.id,
+            kind: "final",
+            scheduledFor: day(inspected),
+            timeWindow: "8–12",
+            inspectorName: "J. Petrakis",
+            result: "passed",
+            resultOn: day(inspected),
+            recordedAt: inspected,
+          },
+          { transaction: t },
+        );
       }
     }
 

@@ -20,19 +20,40 @@ function rng(seed: number) {
   };
 }
 
-async function seedOrganization(key: "main" | "other", projectCount: number, t: Transaction, passwordHash: string, rand: () => number, now: number) {
+async function seedOrganization(
+  key: "main" | "other",
+  projectCount: number,
+  t: Transaction,
+  passwordHash: string,
+  rand: () => number,
+  now: number,
+) {
   const organization = await Organization.create({ ...ORGANIZATIONS[key] }, { transaction: t });
   const organizationId = organization.id;
   const users: User[] = [];
   for (const u of DEMO_SIGN_INS.users.filter((x) => x.org === key)) {
-    users.push(await User.create({ organizationId, email: u.email, name: u.name, role: u.role, passwordHash, lastSignInAt: null }, { transaction: t }));
+    users.push(
+      await User.create(
+        { organizationId, email: u.email, name: u.name, role: u.role, passwordHash, lastSignInAt: null },
+        { transaction: t },
+      ),
+    );
   }
   const jurisdictions = new Map<string, Jurisdiction>();
-  for (const { key: k, ...j } of JURISDICTIONS) jurisdictions.set(k, await Jurisdiction.create({ organizationId, ...j }, { transaction: t }));
+  for (const { key: k, ...j } of JURISDICTIONS)
+    jurisdictions.set(k, await Jurisdiction.create({ organizationId, ...j }, { transaction: t }));
   const utilities = new Map<string, Utility>();
   for (const { key: k, ...u } of UTILITIES) utilities.set(k, await Utility.create({ organizationId, ...u }, { transaction: t }));
-  for (const [k, j] of jurisdictions) await FeeSchedule.create({ organizationId, authorityKind: "jurisdiction", authorityId: j.id, lines: DEMO_JURISDICTION_FEES[k] ?? [], updatedById: null }, { transaction: t });
-  for (const [k, u] of utilities) await FeeSchedule.create({ organizationId, authorityKind: "utility", authorityId: u.id, lines: DEMO_UTILITY_FEES[k] ?? [], updatedById: null }, { transaction: t });
+  for (const [k, j] of jurisdictions)
+    await FeeSchedule.create(
+      { organizationId, authorityKind: "jurisdiction", authorityId: j.id, lines: DEMO_JURISDICTION_FEES[k] ?? [], updatedById: null },
+      { transaction: t },
+    );
+  for (const [k, u] of utilities)
+    await FeeSchedule.create(
+      { organizationId, authorityKind: "utility", authorityId: u.id, lines: DEMO_UTILITY_FEES[k] ?? [], updatedById: null },
+      { transaction: t },
+    );
   await seedDemoCatalog(organizationId, t);
 
   const coordinators = users.filter((u) => u.role === "coordinator");

@@ -31,9 +31,16 @@ export function defineAction<S extends z.ZodType, T>(
       }
       // Parsing is inside the try: a schema that throws on hostile input is still answered, never a 500.
       const unstorable = findUnstorableInput(raw);
-      if (unstorable) return { ok: false, code: "INVALID_INPUT", message: "Check the highlighted fields.", fieldErrors: { [unstorable.path]: [unstorable.message] } };
+      if (unstorable)
+        return {
+          ok: false,
+          code: "INVALID_INPUT",
+          message: "Check the highlighted fields.",
+          fieldErrors: { [unstorable.path]: [unstorable.message] },
+        };
       const parsed = schema.safeParse(raw);
-      if (!parsed.success) return { ok: false, code: "INVALID_INPUT", message: "Check the highlighted fields.", fieldErrors: fieldErrorsOf(parsed.error) };
+      if (!parsed.success)
+        return { ok: false, code: "INVALID_INPUT", message: "Check the highlighted fields.", fieldErrors: fieldErrorsOf(parsed.error) };
       return { ok: true, data: await handler(parsed.data, { viewer: viewer as Viewer }) };
     } catch (error) {
       if (isAppError(error)) return { ok: false, code: error.code, message: error.message, fieldErrors: error.fieldErrors };

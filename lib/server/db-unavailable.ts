@@ -11,7 +11,10 @@ export function isDatabaseUnavailable(error: unknown): boolean {
   if (error instanceof ConnectionError) return true;
   const parent = (error as { parent?: { code?: string; message?: string } } | null)?.parent;
   if (error instanceof DatabaseError && parent) {
-    return UNAVAILABLE_CODES.test(parent.code ?? "") || /Connection terminated|ECONNREFUSED|ECONNRESET|the database system is (starting up|shutting down)/i.test(parent.message ?? "");
+    return (
+      UNAVAILABLE_CODES.test(parent.code ?? "") ||
+      /Connection terminated|ECONNREFUSED|ECONNRESET|the database system is (starting up|shutting down)/i.test(parent.message ?? "")
+    );
   }
   return false;
 }

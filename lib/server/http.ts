@@ -16,13 +16,22 @@ import { getViewerByApiToken } from "./data/api-tokens";
 /** The one mapping from thrown errors to JSON responses. */
 export function toErrorResponse(error: unknown): NextResponse {
   if (error instanceof z.ZodError) {
-    return NextResponse.json({ error: { code: "INVALID_INPUT", message: "The request has invalid fields.", fieldErrors: fieldErrorsOf(error) } }, { status: 422 });
+    return NextResponse.json(
+      { error: { code: "INVALID_INPUT", message: "The request has invalid fields.", fieldErrors: fieldErrorsOf(error) } },
+      { status: 422 },
+    );
   }
   if (isAppError(error)) {
-    return NextResponse.json({ error: { code: error.code, message: error.message, ...(error.fieldErrors ? { fieldErrors: error.fieldErrors } : {}) } }, { status: ERROR_STATUS[error.code] });
+    return NextResponse.json(
+      { error: { code: error.code, message: error.message, ...(error.fieldErrors ? { fieldErrors: error.fieldErrors } : {}) } },
+      { status: ERROR_STATUS[error.code] },
+    );
   }
   if (isDatabaseUnavailable(error)) {
-    return NextResponse.json({ error: { code: "UNAVAILABLE", message: DATABASE_UNAVAILABLE_MESSAGE } }, { status: 503, headers: { "retry-after": "30" } });
+    return NextResponse.json(
+      { error: { code: "UNAVAILABLE", message: DATABASE_UNAVAILABLE_MESSAGE } },
+      { status: 503, headers: { "retry-after": "30" } },
+    );
   }
   const reference = randomUUID().slice(0, 8);
   console.error(`[api ${reference}]`, error);
@@ -95,13 +104,20 @@ type Handler<P> = (request: NextRequest, context: { viewer: Viewer; params: P })
  * Wraps a route handler: signed-in viewer or API token with the permission, params resolved, errors
  * mapped. Writes by a session are checked for their origin and body type first (see assertBrowserWrite).
  */
-export function withAuth<P = Record<string, never>>(handler: Handler<P>, { permission, body = "json" }: { permission: Permission; body?: BodyKind }) {
+export function withAuth<P = Record<string, never>>(
+  handler: Handler<P>,
+  { permission, body = "json" }: { permission: Permission; body?: BodyKind },
+) {
   return async (request: NextRequest, context: { params: Promise<P> }) => {
     try {
       const { viewer, byToken } = await requestViewer(request);
       if (!viewer) throw new AppError("UNAUTHORIZED", "Sign in first, or send an API token.");
       if (!byToken && !SAFE_METHODS.has(request.method)) assertBrowserWrite(request, body);
-      if (!can(viewer, permission)) throw new AppError("FORBIDDEN", viewer.apiTokenId ? "API tokens may only read projects and review designs." : "Your role does not allow this.");
+      if (!can(viewer, permission))
+        throw new AppError(
+          "FORBIDDEN",
+          viewer.apiTokenId ? "API tokens may only read projects and review designs." : "Your role does not allow this.",
+        );
       return await handler(request, { viewer, params: await context.params });
     } catch (error) {
       return toErrorResponse(error);
@@ -113,7 +129,15 @@ export function withAuth<P = Record<string, never>>(handler: Handler<P>, { permi
  * Headers for sending stored bytes as a download, never shown inline: an uploaded file is
  * only ever handed back as an attachment of the type its bytes were judged to be.
  */
-export function attachmentHeaders({ fileName, contentType, length }: { fileName: string; contentType: string; length: number }): Record<string, string> {
+export function attachmentHeaders({
+  fileName,
+  contentType,
+  length,
+}: {
+  fileName: string;
+  contentType: string;
+  length: number;
+}): Record<string, string> {
   const ascii = fileName.replace(/[^\x20-\x7e]|["\\]/g, "_");
   return {
     "content-type": contentType,

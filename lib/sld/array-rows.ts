@@ -40,7 +40,8 @@ function unitWidth(device: DeviceKind | undefined): number {
 /** Where each drawn unit starts, and the chain's width. */
 function chainPlan(count: number, device: DeviceKind | undefined): { starts: number[]; width: number } {
   const step = unitWidth(device) + UNIT_GAP;
-  if (count <= 3) return { starts: Array.from({ length: Math.max(count, 1) }, (_, i) => i * step), width: Math.max(count, 1) * step - UNIT_GAP };
+  if (count <= 3)
+    return { starts: Array.from({ length: Math.max(count, 1) }, (_, i) => i * step), width: Math.max(count, 1) * step - UNIT_GAP };
   const last = 2 * step + DOTTED_GAP;
   return { starts: [0, step, last], width: last + unitWidth(device) };
 }
@@ -76,7 +77,9 @@ export function drawChain(b: SceneBuilder, x: number, y: number, count: number, 
 /** What the array box says about its modules and their module-level devices. */
 export function arrayHeaderLines(design: Design, model: CircuitModel): string[] {
   const m = design.module;
-  const count = design.roofPlanes.reduce((sum, p) => sum + p.moduleCount, 0) || model.groups.flatMap((g): (StringRow | BranchRow)[] => g.rows).reduce((sum, r) => sum + rowCount(r), 0);
+  const count =
+    design.roofPlanes.reduce((sum, p) => sum + p.moduleCount, 0) ||
+    model.groups.flatMap((g): (StringRow | BranchRow)[] => g.rows).reduce((sum, r) => sum + rowCount(r), 0);
   const lines = [`${count} × ${m.maker} ${m.model}, ${m.powerW} W`];
   const micro = design.inverters.find((i) => i.kind === "micro");
   const device = design.moduleLevelDevice;

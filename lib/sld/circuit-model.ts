@@ -24,8 +24,7 @@ export interface BranchRow {
 export type SourceRow = StringRow | BranchRow;
 
 export type SourceGroup =
-  | { kind: "string-inverter"; inverter: Inverter; rows: StringRow[]; outputRuns: ConductorRun[] }
-  | { kind: "micro"; rows: BranchRow[] };
+  { kind: "string-inverter"; inverter: Inverter; rows: StringRow[]; outputRuns: ConductorRun[] } | { kind: "micro"; rows: BranchRow[] };
 
 export interface CircuitModel {
   groups: SourceGroup[];
@@ -95,7 +94,11 @@ export function readCircuits(design: Design): CircuitModel {
 function stringRows(design: Design, inverter: Inverter): StringRow[] {
   const rows: StringRow[] = design.strings
     .filter((s) => s.inverterId === inverter.id)
-    .map((string) => ({ kind: "string", string, runs: design.runs.filter((r) => r.circuit.kind === "dc-strings" && r.circuit.stringIds.includes(string.id)) }));
+    .map((string) => ({
+      kind: "string",
+      string,
+      runs: design.runs.filter((r) => r.circuit.kind === "dc-strings" && r.circuit.stringIds.includes(string.id)),
+    }));
   const lastRun = (row: StringRow) => row.runs[row.runs.length - 1];
   const firstSharing = (row: StringRow) => rows.findIndex((other) => lastRun(other) !== undefined && lastRun(other) === lastRun(row));
   return rows

@@ -67,7 +67,14 @@ export function combinerCaption(feedCount: number, microUnits: number, microW: n
 }
 
 /** A breaker per feed (when the feed's run has one), a bus, one output at outY. */
-export function drawCombiner(b: SceneBuilder, x: number, top: number, height: number, feeds: { y: number; ocpdA?: number }[], outY: number): { x: number; y: number } {
+export function drawCombiner(
+  b: SceneBuilder,
+  x: number,
+  top: number,
+  height: number,
+  feeds: { y: number; ocpdA?: number }[],
+  outY: number,
+): { x: number; y: number } {
   b.rect(x, top, COMBINER_W, height, { strokeWidth: 1.1 });
   const busX = x + 56;
   for (const feed of feeds) {

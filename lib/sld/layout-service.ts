@@ -7,7 +7,18 @@ import { textWidthPt } from "./scene";
 import type { SceneBuilder } from "./scene-builder";
 import { LINE_GAP, SIZE, wrapWords } from "./style";
 import { BOX_GAP, boxLabel, type BoxCounter } from "./run-columns";
-import { breakerH, breakerV, fuseH, groundSymbol, initiatorSymbol, junctionBox, junctionDot, meterSymbol, switchH, utilitySymbol } from "./symbols";
+import {
+  breakerH,
+  breakerV,
+  fuseH,
+  groundSymbol,
+  initiatorSymbol,
+  junctionBox,
+  junctionDot,
+  meterSymbol,
+  switchH,
+  utilitySymbol,
+} from "./symbols";
 
 export interface ServiceInput {
   design: Design;
@@ -64,7 +75,14 @@ function lineTo(b: SceneBuilder, x1: number, x2: number, y: number): number {
 }
 
 /** One labelled column per run, in series, with a junction box between two runs; returns the x after the last. */
-function runColumns(b: SceneBuilder, design: Design, runs: (ConductorRun | undefined)[], x: number, y: number, { numbers, boxes }: Pick<ServiceInput, "numbers" | "boxes">): number {
+function runColumns(
+  b: SceneBuilder,
+  design: Design,
+  runs: (ConductorRun | undefined)[],
+  x: number,
+  y: number,
+  { numbers, boxes }: Pick<ServiceInput, "numbers" | "boxes">,
+): number {
   runs.forEach((run, i) => {
     const lines = runLabelLines(design, run);
     const width = runLabelWidth(lines) + 28;

@@ -55,7 +55,9 @@ export function layoutSingleLine(design: Design, options: SingleLineOptions = {}
     frame.text(MARGIN, MARGIN + SIZE.heading, options.title ?? "SINGLE-LINE DIAGRAM", { size: SIZE.heading, weight: "bold" });
     frame.text(MARGIN, MARGIN + SIZE.heading + 13, ratingsLine(design), { size: SIZE.subheading, tone: "soft" });
   }
-  const bottom = withNotes ? drawNotes(frame, diagramNotes(design, options.necEdition), MARGIN, diagramBottom + NOTES_GAP, width) : diagramBottom;
+  const bottom = withNotes
+    ? drawNotes(frame, diagramNotes(design, options.necEdition), MARGIN, diagramBottom + NOTES_GAP, width)
+    : diagramBottom;
 
   return {
     unit: "pt",
@@ -107,9 +109,14 @@ function ratingsLine(design: Design): string {
 function describe(design: Design, model: CircuitModel): string {
   const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
   const parts = model.groups.map((g) =>
-    g.kind === "micro" ? plural(g.rows.length, "microinverter branch circuit") : `${plural(g.rows.length, "string")} into ${g.inverter.maker} ${g.inverter.model}`,
+    g.kind === "micro"
+      ? plural(g.rows.length, "microinverter branch circuit")
+      : `${plural(g.rows.length, "string")} into ${g.inverter.maker} ${g.inverter.model}`,
   );
   const s = design.service;
-  const connection = s.connection === "supply-side" ? `a supply-side connection with ${s.pvBreakerA} A fuses` : `a ${s.pvBreakerA} A PV breaker on a ${s.busbarA} A busbar`;
+  const connection =
+    s.connection === "supply-side"
+      ? `a supply-side connection with ${s.pvBreakerA} A fuses`
+      : `a ${s.pvBreakerA} A PV breaker on a ${s.busbarA} A busbar`;
   return `Single-line diagram: ${parts.join(", ") || "no PV sources yet"}, to ${connection}.`;
 }

@@ -3,9 +3,34 @@
 // placed first (top to bottom), then columns are sized from their texts so
 // no label can run into its neighbour.
 import type { Design } from "@/lib/engineering";
-import { arrayHeaderHeight, arrayHeaderLines, arrayHeaderWidth, chainWidth, drawArrayBox, drawChain, rowCount, rowDevice, rowLabel, ROW_ABOVE, ROW_BELOW, ROW_H } from "./array-rows";
+import {
+  arrayHeaderHeight,
+  arrayHeaderLines,
+  arrayHeaderWidth,
+  chainWidth,
+  drawArrayBox,
+  drawChain,
+  rowCount,
+  rowDevice,
+  rowLabel,
+  ROW_ABOVE,
+  ROW_BELOW,
+  ROW_H,
+} from "./array-rows";
 import type { CircuitModel, SourceGroup, SourceRow } from "./circuit-model";
-import { COMBINER_W, INVERTER_BOX_W, MIN_BODY_H, captionHeight, captionWidth, combinerCaption, drawCaption, drawCombiner, drawInverter, inverterCaption, type Caption } from "./collectors";
+import {
+  COMBINER_W,
+  INVERTER_BOX_W,
+  MIN_BODY_H,
+  captionHeight,
+  captionWidth,
+  combinerCaption,
+  drawCaption,
+  drawCombiner,
+  drawInverter,
+  inverterCaption,
+  type Caption,
+} from "./collectors";
 import { NO_RUN_LABEL as NO_RUN } from "./conductor-label";
 import { drawRunColumns, planColumns, runLabels, type BoxCounter } from "./run-columns";
 import { textWidthPt } from "./scene";
@@ -36,7 +61,9 @@ function expand(span: Span, minHeight: number): Span {
 export function layoutSources(b: SceneBuilder, design: Design, model: CircuitModel, boxes: BoxCounter): SourcesLayout {
   const headerLines = arrayHeaderLines(design, model);
   const stringGroups = model.groups.filter((g): g is StringGroup => g.kind === "string-inverter");
-  const captions = new Map<SourceGroup, Caption>(stringGroups.map((g, i) => [g, inverterCaption(g.inverter, stringGroups.length > 1 ? i + 1 : null)]));
+  const captions = new Map<SourceGroup, Caption>(
+    stringGroups.map((g, i) => [g, inverterCaption(g.inverter, stringGroups.length > 1 ? i + 1 : null)]),
+  );
 
   // Rows, top to bottom; a string inverter's caption sits under its body.
   const rowY = new Map<Row, number>();
@@ -59,10 +86,21 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
   if (rows.length === 0 && stringGroups.length === 0) return { output: null, nextX: 0, collector: { top: 0, bottom: 0, right: 0 } };
 
   // Columns, left to right: the array, the runs along the rows, the inverters.
-  const arrayInner = Math.max(arrayHeaderWidth(headerLines), ...rows.map((r) => Math.max(textWidthPt(rowLabel(r), SIZE.label), chainWidth(rowCount(r), rowDevice(design, r)))));
+  const arrayInner = Math.max(
+    arrayHeaderWidth(headerLines),
+    ...rows.map((r) => Math.max(textWidthPt(rowLabel(r), SIZE.label), chainWidth(rowCount(r), rowDevice(design, r)))),
+  );
   const arrayRight = ROW_X + arrayInner + 12;
-  const labels = runLabels(design, rows.flatMap((r) => r.runs));
-  const plan = planColumns(rows.map((r) => r.runs), labels, arrayRight + 16, NO_RUN);
+  const labels = runLabels(
+    design,
+    rows.flatMap((r) => r.runs),
+  );
+  const plan = planColumns(
+    rows.map((r) => r.runs),
+    labels,
+    arrayRight + 16,
+    NO_RUN,
+  );
   const invX = plan.end;
   const invRight = stringGroups.length ? invX + Math.max(INVERTER_BOX_W, ...[...captions.values()].map(captionWidth)) + 20 : invX;
 
@@ -70,8 +108,19 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
   for (const row of rows) b.text(ROW_X, rowY.get(row)! - 24, rowLabel(row), { size: SIZE.label });
 
   // Feeds into the combiner (each string inverter's output runs, then each branch) decide where rows end.
-  const outputLabels = runLabels(design, stringGroups.flatMap((g) => g.outputRuns));
-  const feedPlan = model.hasCombiner && stringGroups.length ? planColumns(stringGroups.map((g) => g.outputRuns), outputLabels, invRight, NO_RUN) : null;
+  const outputLabels = runLabels(
+    design,
+    stringGroups.flatMap((g) => g.outputRuns),
+  );
+  const feedPlan =
+    model.hasCombiner && stringGroups.length
+      ? planColumns(
+          stringGroups.map((g) => g.outputRuns),
+          outputLabels,
+          invRight,
+          NO_RUN,
+        )
+      : null;
   const combX = feedPlan ? feedPlan.end : invRight;
 
   // Every string keeps its own wire to its own inverter input; branches run on to the combiner.
@@ -80,12 +129,29 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
     const end = drawChain(b, ROW_X, ry, rowCount(row), rowDevice(design, row));
     b.line(end, ry, row.kind === "string" ? invX : combX, ry);
   }
-  drawRunColumns(b, rows.map((r) => ({ y: rowY.get(r)!, runs: r.runs })), plan, labels, model.numbers, boxes, NO_RUN);
+  drawRunColumns(
+    b,
+    rows.map((r) => ({ y: rowY.get(r)!, runs: r.runs })),
+    plan,
+    labels,
+    model.numbers,
+    boxes,
+    NO_RUN,
+  );
 
   const inverterOut = new Map<SourceGroup, { x: number; y: number }>();
   for (const group of stringGroups) {
     const body = bodies.get(group)!;
-    inverterOut.set(group, drawInverter(b, invX, body.top, body.bottom - body.top, group.rows.map((r) => rowY.get(r)!)));
+    inverterOut.set(
+      group,
+      drawInverter(
+        b,
+        invX,
+        body.top,
+        body.bottom - body.top,
+        group.rows.map((r) => rowY.get(r)!),
+      ),
+    );
     drawCaption(b, invX, body.bottom, captions.get(group)!);
   }
 
@@ -102,10 +168,22 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
     b.line(out.x, out.y, combX, out.y);
     feeds.push({ y: out.y, ocpdA: g.outputRuns[g.outputRuns.length - 1]?.ocpdA });
   });
-  if (feedPlan) drawRunColumns(b, stringGroups.map((g) => ({ y: inverterOut.get(g)!.y, runs: g.outputRuns })), feedPlan, outputLabels, model.numbers, boxes, NO_RUN);
+  if (feedPlan)
+    drawRunColumns(
+      b,
+      stringGroups.map((g) => ({ y: inverterOut.get(g)!.y, runs: g.outputRuns })),
+      feedPlan,
+      outputLabels,
+      model.numbers,
+      boxes,
+      NO_RUN,
+    );
   const branches = model.groups.flatMap((g) => (g.kind === "micro" ? g.rows : []));
   for (const row of branches) feeds.push({ y: rowY.get(row)!, ocpdA: row.runs.find((r) => r.ocpdA)?.ocpdA });
-  const body = expand({ top: Math.min(...feeds.map((f) => f.y)) - ROW_ABOVE, bottom: Math.max(...feeds.map((f) => f.y)) + ROW_BELOW }, MIN_BODY_H);
+  const body = expand(
+    { top: Math.min(...feeds.map((f) => f.y)) - ROW_ABOVE, bottom: Math.max(...feeds.map((f) => f.y)) + ROW_BELOW },
+    MIN_BODY_H,
+  );
   const outY = (body.top + body.bottom) / 2;
   const output = drawCombiner(b, combX, body.top, body.bottom - body.top, feeds, outY);
   const microUnits = branches.reduce((sum, r) => sum + r.units, 0);

@@ -27,7 +27,8 @@ export function diagramNotes(design: Design, necEdition?: NecEdition): string[] 
 
 function rapidShutdownNote(design: Design): string {
   const head = "Rapid shutdown per 690.12:";
-  if (design.inverters.some((i) => i.kind === "micro")) return `${head} the microinverters stop exporting when the PV disconnect or the PV breaker opens.`;
+  if (design.inverters.some((i) => i.kind === "micro"))
+    return `${head} the microinverters stop exporting when the PV disconnect or the PV breaker opens.`;
   const device = design.moduleLevelDevice;
   if (device?.kind === "optimizer") return `${head} the optimizer on each module drops to a safe output when the initiator is operated.`;
   if (device) return `${head} the shutdown device on each module opens when the initiator is operated.`;

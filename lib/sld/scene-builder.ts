@@ -36,7 +36,10 @@ export class SceneBuilder {
 
   /** Connected straight segments through the points, as one path. */
   polyline(points: [number, number][], o: StrokeOptions = {}): void {
-    this.path(points.map(([x, y], i) => ({ op: i === 0 ? "M" : "L", x, y })), { ...o, fill: "none" });
+    this.path(
+      points.map(([x, y], i) => ({ op: i === 0 ? "M" : "L", x, y })),
+      { ...o, fill: "none" },
+    );
   }
 
   rect(x: number, y: number, width: number, height: number, o: ShapeOptions = {}): void {
@@ -52,7 +55,17 @@ export class SceneBuilder {
   }
 
   text(x: number, y: number, text: string, o: TextOptions = {}): void {
-    this.drafts.push({ kind: "text", x, y, text, size: o.size ?? 7, anchor: o.anchor ?? "start", weight: o.weight ?? "normal", tone: o.tone ?? "ink", ...(o.mono ? { mono: true } : {}) });
+    this.drafts.push({
+      kind: "text",
+      x,
+      y,
+      text,
+      size: o.size ?? 7,
+      anchor: o.anchor ?? "start",
+      weight: o.weight ?? "normal",
+      tone: o.tone ?? "ink",
+      ...(o.mono ? { mono: true } : {}),
+    });
   }
 
   /** Lines of text going down from a first baseline; returns the last baseline. */

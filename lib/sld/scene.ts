@@ -139,7 +139,11 @@ export type SldShape = Exclude<SldPrimitive, SldText>;
 /** A shape's attributes as SVG names them; react-pdf's Svg elements take the same names. */
 export function shapeAttributes(item: SldShape): Record<string, string | number> {
   const paint = (fill: SldFill) => (fill === "none" ? "none" : SLD_COLORS[fill]);
-  const stroke = { stroke: SLD_COLORS[item.stroke], strokeWidth: item.strokeWidth, ...(item.dash ? { strokeDasharray: item.dash.join(" ") } : {}) };
+  const stroke = {
+    stroke: SLD_COLORS[item.stroke],
+    strokeWidth: item.strokeWidth,
+    ...(item.dash ? { strokeDasharray: item.dash.join(" ") } : {}),
+  };
   switch (item.kind) {
     case "line":
       return { ...stroke, x1: item.x1, y1: item.y1, x2: item.x2, y2: item.y2 };

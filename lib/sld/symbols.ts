@@ -108,7 +108,10 @@ export function breakerH(b: SceneBuilder, x1: number, x2: number, y: number): vo
   const [c1, c2] = contacts(x1, x2);
   b.line(x1, y, c1 - CONTACT_R, y);
   b.circle(c1, y, CONTACT_R, { fill: "white", strokeWidth: 0.8 });
-  b.path([{ op: "M", x: c1, y: y - CONTACT_R }, { op: "A", r: (c2 - c1) * 0.6, sweep: 1, x: c2, y: y - CONTACT_R }]);
+  b.path([
+    { op: "M", x: c1, y: y - CONTACT_R },
+    { op: "A", r: (c2 - c1) * 0.6, sweep: 1, x: c2, y: y - CONTACT_R },
+  ]);
   b.circle(c2, y, CONTACT_R, { fill: "white", strokeWidth: 0.8 });
   b.line(c2 + CONTACT_R, y, x2, y);
 }
@@ -118,7 +121,10 @@ export function breakerV(b: SceneBuilder, x: number, y1: number, y2: number): vo
   const [c1, c2] = contacts(y1, y2);
   b.line(x, y1, x, c1 - CONTACT_R);
   b.circle(x, c1, CONTACT_R, { fill: "white", strokeWidth: 0.8 });
-  b.path([{ op: "M", x: x + CONTACT_R, y: c1 }, { op: "A", r: (c2 - c1) * 0.6, sweep: 1, x: x + CONTACT_R, y: c2 }]);
+  b.path([
+    { op: "M", x: x + CONTACT_R, y: c1 },
+    { op: "A", r: (c2 - c1) * 0.6, sweep: 1, x: x + CONTACT_R, y: c2 },
+  ]);
   b.circle(x, c2, CONTACT_R, { fill: "white", strokeWidth: 0.8 });
   b.line(x, c2 + CONTACT_R, x, y2);
 }

@@ -16,7 +16,10 @@ export function drawUnplacedRuns(b: SceneBuilder, design: Design, model: Circuit
   const x = Number.isFinite(drawn.minX) ? drawn.minX : 0;
   const top = (Number.isFinite(drawn.maxY) ? drawn.maxY : 0) + 30;
   b.text(x, top, "RUNS NOT CONNECTED ON THIS DRAWING", { size: SIZE.title, weight: "bold" });
-  b.text(x, top + 10, "Each names a string or inverter the design does not have; correct the run in the design.", { size: SIZE.label, tone: "soft" });
+  b.text(x, top + 10, "Each names a string or inverter the design does not have; correct the run in the design.", {
+    size: SIZE.label,
+    tone: "soft",
+  });
   model.unplaced.forEach((run, i) => {
     const wireY = top + 10 + 38 + i * ENTRY_H;
     const lines = runLabelLines(design, run);

@@ -35,20 +35,33 @@ async function sessionCookie(base) {
   keep(csrf);
   const { csrfToken } = await csrf.json();
   const form = new URLSearchParams({ csrfToken, email: "dana@quillmoor.example", password: "ohmstead-demo", json: "true" });
-  keep(await fetch(`${base}/api/auth/callback/credentials`, { method: "POST", body: form, headers: { "content-type": "application/x-www-form-urlencoded", cookie: cookie() }, redirect: "manual" }));
+  keep(
+    await fetch(`${base}/api/auth/callback/credentials`, {
+      method: "POST",
+      body: form,
+      headers: { "content-type": "application/x-www-form-urlencoded", cookie: cookie() },
+      redirect: "manual",
+    }),
+  );
   return cookie();
 }
 
 const cluster = await startCluster({ apps: 2, workers: 2, build: true });
 try {
   const cookies = await Promise.all(cluster.urls.map(sessionCookie));
-  const { items } = await (await fetch(`${cluster.urls[0]}/api/v1/projects?stage=permit_filed&pageSize=1`, { headers: { cookie: cookies[0] } })).json();
-  const document = await (await fetch(`${cluster.urls[0]}/api/v1/projects/${items[0].id}/design-document`, { headers: { cookie: cookies[0] } })).json();
+  const { items } = await (
+    await fetch(`${cluster.urls[0]}/api/v1/projects?stage=permit_filed&pageSize=1`, { headers: { cookie: cookies[0] } })
+  ).json();
+  const document = await (
+    await fetch(`${cluster.urls[0]}/api/v1/projects/${items[0].id}/design-document`, { headers: { cookie: cookies[0] } })
+  ).json();
   const routes = [
     { name: "GET /api/v1/projects?page=1&pageSize=50", method: "GET", path: "/api/v1/projects?page=1&pageSize=50" },
     { name: "POST /api/v1/design-review", method: "POST", path: "/api/v1/design-review", body: JSON.stringify(document) },
   ];
-  console.log(`\n${connections} connections for ${seconds} s per route, split over ${cluster.urls.length} app servers (${cluster.urls.join(", ")}), two workers running.\n`);
+  console.log(
+    `\n${connections} connections for ${seconds} s per route, split over ${cluster.urls.length} app servers (${cluster.urls.join(", ")}), two workers running.\n`,
+  );
   console.log("| route | req/s | p50 | p99 | errors | non-2xx |\n|---|---|---|---|---|---|");
   for (const route of routes) {
     const results = await Promise.all(
@@ -65,7 +78,9 @@ try {
     );
     const sum = (f) => results.reduce((total, r) => total + f(r), 0);
     const max = (f) => Math.max(...results.map(f));
-    console.log(`| \`${route.name}\` | ${Math.round(sum((r) => r.requests.average))} | ${max((r) => r.latency.p50)} ms | ${max((r) => r.latency.p99)} ms | ${sum((r) => r.errors + r.timeouts)} | ${sum((r) => r.non2xx)} |`);
+    console.log(
+      `| \`${route.name}\` | ${Math.round(sum((r) => r.requests.average))} | ${max((r) => r.latency.p50)} ms | ${max((r) => r.latency.p99)} ms | ${sum((r) => r.errors + r.timeouts)} | ${sum((r) => r.non2xx)} |`,
+    );
   }
 } finally {
   await cluster.stop();

@@ -1,10 +1,18 @@
 // A "use client" module is shipped to the browser: it may not import a server-only module, not even
 // for its types (DTO types live in lib/dto, beside no server code).
-const SERVER_ONLY = [/^server-only$/, /^@\/lib\/server(\/|$)/, /^@\/lib\/db(\/|$)/, /^@\/models(\/|$)/, /^(sequelize|pg|pg-boss|nodemailer|stripe)$/, /^node:/];
+const SERVER_ONLY = [
+  /^server-only$/,
+  /^@\/lib\/server(\/|$)/,
+  /^@\/lib\/db(\/|$)/,
+  /^@\/models(\/|$)/,
+  /^(sequelize|pg|pg-boss|nodemailer|stripe)$/,
+  /^node:/,
+];
 
 // A route's server actions ("actions.ts", "share-actions.ts"…) reach a client component as props from its page.
 const ACTIONS = /(^|\/)([\w-]+-)?actions$/;
-const typeOnly = (node) => node.importKind === "type" || (node.specifiers?.length > 0 && node.specifiers.every((s) => s.importKind === "type"));
+const typeOnly = (node) =>
+  node.importKind === "type" || (node.specifiers?.length > 0 && node.specifiers.every((s) => s.importKind === "type"));
 
 const isClientModule = (program) =>
   program.body.some((statement) => statement.type === "ExpressionStatement" && statement.directive === "use client");
@@ -15,8 +23,8 @@ export const clientBoundary = {
     type: "problem",
     docs: { description: "Client components import no server-only module" },
     messages: {
-      serverOnly: "A client component cannot import \"{{source}}\": take the type from lib/dto or the value as a prop.",
-      action: "A client component takes server actions as props from its page: import only their types from \"{{source}}\".",
+      serverOnly: 'A client component cannot import "{{source}}": take the type from lib/dto or the value as a prop.',
+      action: 'A client component takes server actions as props from its page: import only their types from "{{source}}".',
     },
     schema: [],
   },

@@ -37,7 +37,10 @@ export async function startCluster({ apps = 2, workers = 2, build = false, quiet
     await migrateAndSeed(ROOT, stack.env);
     if (build) await buildIfNeeded(ROOT, stack.env);
     // Each process writes to its own log in the profile's folder (or to this terminal).
-    const stdio = (name) => (quiet ? ["ignore", openSync(path.join(stack.dataRoot, `${name}.log`), "w"), openSync(path.join(stack.dataRoot, `${name}.log`), "a")] : "inherit");
+    const stdio = (name) =>
+      quiet
+        ? ["ignore", openSync(path.join(stack.dataRoot, `${name}.log`), "w"), openSync(path.join(stack.dataRoot, `${name}.log`), "a")]
+        : "inherit";
     const workerLogs = [];
     for (let i = 0; i < workers; i++) {
       processes.push(startWorker(ROOT, stack.env, { stdio: stdio(`worker-${i + 1}`) }));
@@ -52,7 +55,11 @@ export async function startCluster({ apps = 2, workers = 2, build = false, quiet
       await waitForApp(urls[i], app.child);
     }
     // Faults are injected only once every worker is taking jobs.
-    if (quiet) await waitFor(() => workerLogs.every((file) => readFileSync(file, "utf8").includes("Packet worker is taking jobs")), "the workers to take jobs");
+    if (quiet)
+      await waitFor(
+        () => workerLogs.every((file) => readFileSync(file, "utf8").includes("Packet worker is taking jobs")),
+        "the workers to take jobs",
+      );
     return {
       urls,
       env: stack.env,

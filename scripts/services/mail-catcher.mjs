@@ -36,7 +36,11 @@ export async function startMailCatcher({ smtpPort, httpPort, directory }) {
             text: mail.text ?? "",
             html: typeof mail.html === "string" ? mail.html : "",
             // Names, types and sizes only: enough to see that a receipt was attached.
-            attachments: (mail.attachments ?? []).map((a) => ({ fileName: a.filename ?? "", contentType: a.contentType, sizeBytes: a.size })),
+            attachments: (mail.attachments ?? []).map((a) => ({
+              fileName: a.filename ?? "",
+              contentType: a.contentType,
+              sizeBytes: a.size,
+            })),
           };
           writeFileSync(path.join(directory, `${id}.json`), JSON.stringify(message));
           callback();

@@ -60,7 +60,9 @@ export async function startPostgres({ bin, dataDir: wanted, port }) {
     return { port, dataDir, stop: async () => {}, startedHere: false };
   }
   if (await isPortTaken(port)) {
-    fail(`Port ${port} on 127.0.0.1 is taken by another program (perhaps a PostgreSQL left running by an earlier run).\n  Find it with: ss -ltnp 'sport = :${port}'`);
+    fail(
+      `Port ${port} on 127.0.0.1 is taken by another program (perhaps a PostgreSQL left running by an earlier run).\n  Find it with: ss -ltnp 'sport = :${port}'`,
+    );
   }
   const options = `-p ${port} -h 127.0.0.1 -k ${dataDir}`;
   const start = asOwner(pgCtl, ["-D", dataDir, "-l", path.join(dataDir, "server.log"), "-o", options, "-w", "start"]);

@@ -68,7 +68,11 @@ export async function startStack({ root, profile, postgresBin, fresh = false }) 
 
     const appUrl = `http://127.0.0.1:${ports.app}`;
     // Webhooks go to the app as Stripe would send them; until the app is up the fake retries, then resends after a restart.
-    const payments = await startPaymentsFake({ port: ports.payments, directory: path.join(dataRoot, "payments"), webhookUrl: `${appUrl}/api/webhooks/stripe` });
+    const payments = await startPaymentsFake({
+      port: ports.payments,
+      directory: path.join(dataRoot, "payments"),
+      webhookUrl: `${appUrl}/api/webhooks/stripe`,
+    });
     stops.push(payments.stop);
 
     const mail = await startMailCatcher({ smtpPort: ports.smtp, httpPort: ports.mailbox, directory: path.join(dataRoot, "mail") });

@@ -1,7 +1,21 @@
 import { renderEmail } from "./layout";
 
 /** To the project's coordinator when the installer sends back the signed completion form. */
-export function completionReceivedEmail({ installerName, projectNumber, siteAddress, fileName, commissioning, url }: { installerName: string; projectNumber: number; siteAddress: string; fileName: string; commissioning: string; url: string }) {
+export function completionReceivedEmail({
+  installerName,
+  projectNumber,
+  siteAddress,
+  fileName,
+  commissioning,
+  url,
+}: {
+  installerName: string;
+  projectNumber: number;
+  siteAddress: string;
+  fileName: string;
+  commissioning: string;
+  url: string;
+}) {
   const subject = `Signed completion form received: project ${projectNumber}, ${siteAddress}`;
   const body = renderEmail({
     paragraphs: [

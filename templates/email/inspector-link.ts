@@ -1,6 +1,22 @@
 import { renderEmail } from "./layout";
 
-export function inspectorLinkEmail({ organizationName, senderName, siteAddress, revisions, note, url, expiresOn }: { organizationName: string; senderName: string; siteAddress: string; revisions: string[]; note: string; url: string; expiresOn: string }) {
+export function inspectorLinkEmail({
+  organizationName,
+  senderName,
+  siteAddress,
+  revisions,
+  note,
+  url,
+  expiresOn,
+}: {
+  organizationName: string;
+  senderName: string;
+  siteAddress: string;
+  revisions: string[];
+  note: string;
+  url: string;
+  expiresOn: string;
+}) {
   const subject = `Solar PV packet for ${siteAddress}`;
   const body = renderEmail({
     paragraphs: [

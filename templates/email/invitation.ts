@@ -1,6 +1,18 @@
 import { renderEmail } from "./layout";
 
-export function invitationEmail({ name, organizationName, inviterName, url, days }: { name: string; organizationName: string; inviterName: string; url: string; days: number }) {
+export function invitationEmail({
+  name,
+  organizationName,
+  inviterName,
+  url,
+  days,
+}: {
+  name: string;
+  organizationName: string;
+  inviterName: string;
+  url: string;
+  days: number;
+}) {
   const subject = `You are invited to ${organizationName} on Ohmstead`;
   const body = renderEmail({
     paragraphs: [

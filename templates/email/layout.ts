@@ -1,4 +1,5 @@
-export const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
+export const escapeHtml = (s: string) =>
+  s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
 /** Wraps paragraphs and one call-to-action link into the plain, printable HTML every Ohmstead e-mail uses. */
 export function renderEmail({ paragraphs, action }: { paragraphs: string[]; action?: { label: string; url: string } }) {

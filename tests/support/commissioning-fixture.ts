@@ -20,8 +20,20 @@ export type CommissioningScenario = "complete" | "open";
 /** Two strings: one 7.6 kW inverter on a 240 V service. More: a larger system of 8-module strings and three inverters on 208 V. */
 function systemSize(strings: number) {
   return strings <= 2
-    ? { modulesPerString: 11, nominalServiceV: 240, acV: { open: 253.1, complete: 243.6 }, acRatingW: 7600, inverters: "1 × Quillon QS-7600 (7,600 W AC)" }
-    : { modulesPerString: 8, nominalServiceV: 208, acV: { open: 219.4, complete: 210.2 }, acRatingW: 34200, inverters: "3 × Quillon QS-11400 (11,400 W AC)" };
+    ? {
+        modulesPerString: 11,
+        nominalServiceV: 240,
+        acV: { open: 253.1, complete: 243.6 },
+        acRatingW: 7600,
+        inverters: "1 × Quillon QS-7600 (7,600 W AC)",
+      }
+    : {
+        modulesPerString: 8,
+        nominalServiceV: 208,
+        acV: { open: 219.4, complete: 210.2 },
+        acRatingW: 34200,
+        inverters: "3 × Quillon QS-11400 (11,400 W AC)",
+      };
 }
 
 // The demo module (Larkspur LK-405M-54H): Voc 37.2 V, −0.27 %/°C. At a 45 °C module, 11 in series:
@@ -29,7 +41,11 @@ function systemSize(strings: number) {
 const MODULE_TEMP_C = 45;
 const stringVocAt45 = (modules: number) => Math.round(modules * 37.2 * (1 + (20 * -0.27) / 100) * 10) / 10;
 
-export function commissioningRecord({ scenario = "open", strings = 2, monitoring = false }: { scenario?: CommissioningScenario; strings?: number; monitoring?: boolean } = {}): CommissioningRecord {
+export function commissioningRecord({
+  scenario = "open",
+  strings = 2,
+  monitoring = false,
+}: { scenario?: CommissioningScenario; strings?: number; monitoring?: boolean } = {}): CommissioningRecord {
   const open = scenario === "open";
   const size = systemSize(strings);
   const modulesPerString = size.modulesPerString;
@@ -37,12 +53,37 @@ export function commissioningRecord({ scenario = "open", strings = 2, monitoring
   const ids = Array.from({ length: strings }, (_, i) => stringId(i));
   return {
     edition: 2023,
-    stringTests: ids.map((id) => ({ id, modulesInSeries: modulesPerString, moduleVocV: 37.2, vocTempCoeff: { value: -0.27, unit: "%/C" }, vocApplies: true, polarity: "correct", vocV: stringVocAt45(modulesPerString) - 0.6, insulationMohm: 220 })),
+    stringTests: ids.map((id) => ({
+      id,
+      modulesInSeries: modulesPerString,
+      moduleVocV: 37.2,
+      vocTempCoeff: { value: -0.27, unit: "%/C" },
+      vocApplies: true,
+      polarity: "correct",
+      vocV: stringVocAt45(modulesPerString) - 0.6,
+      insulationMohm: 220,
+    })),
     vocTemperature: { tempC: MODULE_TEMP_C, source: "module" },
-    inverters: [{ id: "inv-1", label: "Inverter", model: "Quillon QS-7600", serial: "QN0730411", cardSerial: open ? "QN0730412" : "qn-0730411", activated: !open }],
+    inverters: [
+      {
+        id: "inv-1",
+        label: "Inverter",
+        model: "Quillon QS-7600",
+        serial: "QN0730411",
+        cardSerial: open ? "QN0730412" : "qn-0730411",
+        activated: !open,
+      },
+    ],
     acceptedGridProfiles: [REQUIRED_PROFILE, "IEEE 1547-2018 Category B, volt-watt on"],
     gridProfileSet: "IEEE 1547-2018 category B, utility default settings",
-    pairing: monitoring ? { word: "optimizers", installed: modules, found: open ? modules - 2 : modules, strings: ids.map((id) => ({ id, installed: modulesPerString, found: null })) } : null,
+    pairing: monitoring
+      ? {
+          word: "optimizers",
+          installed: modules,
+          found: open ? modules - 2 : modules,
+          strings: ids.map((id) => ({ id, installed: modulesPerString, found: null })),
+        }
+      : null,
     nominalServiceV: size.nominalServiceV,
     acVoltageV: size.acV[scenario],
     strings: ids.map((id, i) => ({
@@ -66,7 +107,12 @@ export function commissioningFixture({
   scenario = "open",
   strings = 2,
   monitoring = false,
-}: { kind?: CommissioningDocumentKind; scenario?: CommissioningScenario; strings?: number; monitoring?: boolean } = {}): CommissioningDocumentInput {
+}: {
+  kind?: CommissioningDocumentKind;
+  scenario?: CommissioningScenario;
+  strings?: number;
+  monitoring?: boolean;
+} = {}): CommissioningDocumentInput {
   const record = commissioningRecord({ scenario, strings, monitoring });
   const results = checkCommissioning(record);
   const completion = commissioningComplete(results);
@@ -74,7 +120,12 @@ export function commissioningFixture({
     kind,
     // 8:05 pm on December 3 in Denver (the organization's zone), already December 4 in UTC.
     generatedAt: "2026-12-04T03:05:00.000Z",
-    organization: { name: "Quillmoor Solar Electric", licenseNumber: "EC-40718 (demo)", phone: "(555) 014-2210", timeZone: "America/Denver" },
+    organization: {
+      name: "Quillmoor Solar Electric",
+      licenseNumber: "EC-40718 (demo)",
+      phone: "(555) 014-2210",
+      timeZone: "America/Denver",
+    },
     project: {
       number: 1042,
       customerName: "Imogen Halvorsen",

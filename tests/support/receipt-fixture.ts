@@ -24,7 +24,10 @@ export const RECEIPT_LINES: ReceiptInput["lines"] = [
 ];
 
 /** `refunds`: "none", one "partial" refund, or "full" (two refunds adding up to the total). */
-export function receiptFixture({ refunds = "none", lines = RECEIPT_LINES }: { refunds?: "none" | "partial" | "full"; lines?: ReceiptInput["lines"] } = {}): ReceiptInput {
+export function receiptFixture({
+  refunds = "none",
+  lines = RECEIPT_LINES,
+}: { refunds?: "none" | "partial" | "full"; lines?: ReceiptInput["lines"] } = {}): ReceiptInput {
   const totalCents = lines.reduce((sum, l) => sum + l.amountCents, 0);
   const refundLines: ReceiptInput["refunds"] =
     refunds === "none"

@@ -17,7 +17,10 @@ const sql = <T = Record<string, unknown>>(text: string, params: unknown[] = []) 
 
 /** What a signed-in browser shows at a path: the page's visible text once it has settled. */
 async function shownInBrowser(path: string): Promise<string> {
-  const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking"] });
+  const browser = await chromium.launch({
+    executablePath: "/usr/bin/chromium",
+    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking"],
+  });
   try {
     const context = await browser.newContext({ baseURL: office.base });
     await context.addCookies(office.cookieList());
@@ -56,7 +59,10 @@ describe("PostgreSQL stopped and started during a run", () => {
       const read = await office.json("/api/v1/projects");
       expect(read.status).toBe(503);
       expect(read.body.error.message).toMatch(/database is not answering/);
-      const write = await office.json(`/api/v1/projects/${project.id}/stage`, { method: "POST", json: { toStage: "permit_filed", note: "during the outage" } });
+      const write = await office.json(`/api/v1/projects/${project.id}/stage`, {
+        method: "POST",
+        json: { toStage: "permit_filed", note: "during the outage" },
+      });
       expect(write.status).toBe(503);
       // A page: the framework answers 500 and the browser shows the app's apology with a reference.
       const page = await office.request(`/projects/${project.id}`);
@@ -74,14 +80,22 @@ describe("PostgreSQL stopped and started during a run", () => {
     expect(await sql("select count(*) as n from audit_events where entity_id = $1", [project.id])).toEqual(auditsBefore);
     expect((await office.json(`/api/v1/projects/${project.id}`)).body.stage).toBe("design_checked");
     // And the same write now goes through once.
-    const again = await office.json(`/api/v1/projects/${project.id}/stage`, { method: "POST", json: { toStage: "permit_filed", note: "after the outage" } });
+    const again = await office.json(`/api/v1/projects/${project.id}/stage`, {
+      method: "POST",
+      json: { toStage: "permit_filed", note: "after the outage" },
+    });
     expect(again.status).toBe(200);
-    expect(Number((await sql<{ n: string }>("select count(*) as n from stage_changes where project_id = $1", [project.id]))[0]!.n)).toBe(Number(changesBefore[0]!.n) + 1);
+    expect(Number((await sql<{ n: string }>("select count(*) as n from stage_changes where project_id = $1", [project.id]))[0]!.n)).toBe(
+      Number(changesBefore[0]!.n) + 1,
+    );
     // The worker came back too: the stage change's e-mail to the project's people is sent.
-    await eventually(async () => {
-      const pending = await sql<{ n: string }>("select count(*) as n from outbox_messages where status <> 'sent'");
-      expect(Number(pending[0]!.n)).toBe(0);
-    }, { timeoutMs: 90_000 });
+    await eventually(
+      async () => {
+        const pending = await sql<{ n: string }>("select count(*) as n from outbox_messages where status <> 'sent'");
+        expect(Number(pending[0]!.n)).toBe(0);
+      },
+      { timeoutMs: 90_000 },
+    );
     report.push("database started again: the app and the worker recovered without a restart; the refused write left nothing");
   });
 });
@@ -111,13 +125,20 @@ describe("storage down during packet generation", () => {
 
     await cluster.services.storage.start();
     expect((await office.json(`/api/v1/packets/${packetId}/retry`, { method: "POST" })).status).toBe(202);
-    await eventually(async () => {
-      const { body } = await office.json(`/api/v1/projects/${project.id}/packets`);
-      expect(body.items.find((p: { id: string }) => p.id === packetId).status).toBe("ready");
-    }, { timeoutMs: 120_000 });
+    await eventually(
+      async () => {
+        const { body } = await office.json(`/api/v1/projects/${project.id}/packets`);
+        expect(body.items.find((p: { id: string }) => p.id === packetId).status).toBe("ready");
+      },
+      { timeoutMs: 120_000 },
+    );
     const file = await office.request(`/api/v1/packets/${packetId}/file`);
     expect(file.status).toBe(200);
-    expect(Buffer.from(await file.arrayBuffer()).subarray(0, 5).toString()).toBe("%PDF-");
+    expect(
+      Buffer.from(await file.arrayBuffer())
+        .subarray(0, 5)
+        .toString(),
+    ).toBe("%PDF-");
     report.push("storage started again: the retried packet is ready and its PDF downloads");
   });
 });

@@ -11,7 +11,11 @@ export default async function DashboardPage() {
     <div className="space-y-4">
       <div>
         <h1>Projects</h1>
-        <p className="text-sm text-ink-soft">{viewer.role === "installer" ? "Projects assigned to you." : "Every project of your company, from draft to permission to operate."}</p>
+        <p className="text-sm text-ink-soft">
+          {viewer.role === "installer"
+            ? "Projects assigned to you."
+            : "Every project of your company, from draft to permission to operate."}
+        </p>
       </div>
       <ProjectsTable canCreate={can(viewer, "project:create")} />
     </div>

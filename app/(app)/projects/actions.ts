@@ -20,8 +20,11 @@ export const updateProjectAction = defineAction(
   },
 );
 
-export const changeStageAction = defineAction({ schema: ChangeStageInput, permission: "project:change-stage" }, async ({ projectId, toStage, note }, { viewer }) => {
-  const project = await changeProjectStage({ viewer, projectId, toStage, note });
-  revalidatePath(`/projects/${projectId}`);
-  return { stage: project.stage };
-});
+export const changeStageAction = defineAction(
+  { schema: ChangeStageInput, permission: "project:change-stage" },
+  async ({ projectId, toStage, note }, { viewer }) => {
+    const project = await changeProjectStage({ viewer, projectId, toStage, note });
+    revalidatePath(`/projects/${projectId}`);
+    return { stage: project.stage };
+  },
+);

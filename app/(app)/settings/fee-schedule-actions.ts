@@ -14,8 +14,11 @@ const SaveFeeScheduleInput = z.object({
 });
 
 /** Replaces an AHJ's or a utility's fee schedule; field errors come back under `lines.<n>.<field>`. */
-export const saveFeeScheduleAction = defineAction({ schema: SaveFeeScheduleInput, permission: "reference:edit" }, async ({ authorityKind, authorityId, lines }, { viewer }) => {
-  const saved = await saveFeeSchedule({ viewer, authorityKind, authorityId, lines });
-  revalidatePath(authorityKind === "jurisdiction" ? `/settings/jurisdictions/${authorityId}` : `/settings/utilities/${authorityId}`);
-  return { lineCount: saved.length };
-});
+export const saveFeeScheduleAction = defineAction(
+  { schema: SaveFeeScheduleInput, permission: "reference:edit" },
+  async ({ authorityKind, authorityId, lines }, { viewer }) => {
+    const saved = await saveFeeSchedule({ viewer, authorityKind, authorityId, lines });
+    revalidatePath(authorityKind === "jurisdiction" ? `/settings/jurisdictions/${authorityId}` : `/settings/utilities/${authorityId}`);
+    return { lineCount: saved.length };
+  },
+);

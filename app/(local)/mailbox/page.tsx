@@ -38,7 +38,9 @@ export default async function MailboxPage() {
     <main className="mx-auto max-w-3xl space-y-4 px-4 py-8">
       <div>
         <h1>Local mailbox</h1>
-        <p className="text-sm text-ink-soft">Every e-mail your organization sent while running with the local fakes. Nothing here left this machine.</p>
+        <p className="text-sm text-ink-soft">
+          Every e-mail your organization sent while running with the local fakes. Nothing here left this machine.
+        </p>
       </div>
       {messages.length === 0 ? <p className="text-ink-faint">No mail caught yet.</p> : null}
       {messages.map((m) => (
@@ -46,7 +48,8 @@ export default async function MailboxPage() {
           <header className="mb-2 border-b border-paper-edge pb-2 text-sm">
             <p className="font-semibold">{m.subject}</p>
             <p className="text-ink-soft">
-              To <span className="measure">{m.to.join(", ")}</span> · from {m.from} · <time dateTime={m.receivedAt}>{formatInZone(m.receivedAt, organization.timeZone, "datetime")}</time>
+              To <span className="measure">{m.to.join(", ")}</span> · from {m.from} ·{" "}
+              <time dateTime={m.receivedAt}>{formatInZone(m.receivedAt, organization.timeZone, "datetime")}</time>
             </p>
           </header>
           <div className="whitespace-pre-wrap text-sm">
@@ -56,7 +59,8 @@ export default async function MailboxPage() {
             <ul className="mt-2 border-t border-paper-edge pt-2 text-sm text-ink-soft" aria-label="Attachments">
               {m.attachments.map((a, i) => (
                 <li key={i}>
-                  Attached: <span className="measure">{a.fileName}</span> ({a.contentType}, {Math.max(1, Math.round(a.sizeBytes / 1024))} KB)
+                  Attached: <span className="measure">{a.fileName}</span> ({a.contentType}, {Math.max(1, Math.round(a.sizeBytes / 1024))}{" "}
+                  KB)
                 </li>
               ))}
             </ul>

@@ -180,8 +180,10 @@ function readingText(check: CommissioningCheck, record: CommissioningRecord): st
     case "first-power": {
       const w = record.firstPowerW;
       const time = record.firstPowerTime?.trim() ?? "";
-      if (check.reading === "invalid") return typeof w === "number" && Number.isFinite(w) ? `${formatQuantity(w, "W")}, time "${time}" not valid` : "Not valid";
-      if (check.reading === "missing") return typeof w === "number" && Number.isFinite(w) ? `${formatQuantity(w, "W")}, time not recorded` : NOT_RECORDED;
+      if (check.reading === "invalid")
+        return typeof w === "number" && Number.isFinite(w) ? `${formatQuantity(w, "W")}, time "${time}" not valid` : "Not valid";
+      if (check.reading === "missing")
+        return typeof w === "number" && Number.isFinite(w) ? `${formatQuantity(w, "W")}, time not recorded` : NOT_RECORDED;
       return `${formatQuantity(check.value, "W")} at ${time}`;
     }
     case "modules-reporting":
@@ -196,12 +198,17 @@ function readingText(check: CommissioningCheck, record: CommissioningRecord): st
       if (check.reading === "missing") return NOT_RECORDED;
       if (check.reading === "invalid") {
         const raw =
-          check.kind === "ac-voltage" ? record.acVoltageV
-          : check.kind === "string-shutdown" ? stringOf(record, check)?.measuredV
-          : check.kind === "string-insulation" ? stringTestOf(record, check)?.insulationMohm
-          : check.kind === "rapid-shutdown-voltage" ? record.rapidShutdownTest?.measuredV
-          : check.kind === "rapid-shutdown-time" ? record.rapidShutdownTest?.seconds
-          : null;
+          check.kind === "ac-voltage"
+            ? record.acVoltageV
+            : check.kind === "string-shutdown"
+              ? stringOf(record, check)?.measuredV
+              : check.kind === "string-insulation"
+                ? stringTestOf(record, check)?.insulationMohm
+                : check.kind === "rapid-shutdown-voltage"
+                  ? record.rapidShutdownTest?.measuredV
+                  : check.kind === "rapid-shutdown-time"
+                    ? record.rapidShutdownTest?.seconds
+                    : null;
         return notValid(raw, unit);
       }
       return formatQuantity(check.value, unit);
@@ -223,7 +230,8 @@ function expectedText(check: CommissioningCheck, record: CommissioningRecord): s
         const s = stringTestOf(record, check);
         const t = record.vocTemperature;
         if (!s) return fallback;
-        if (t?.tempC === null || t?.tempC === undefined || !Number.isFinite(t.tempC)) return `${count(s.modulesInSeries, "module")}, corrected to the temperature read`;
+        if (t?.tempC === null || t?.tempC === undefined || !Number.isFinite(t.tempC))
+          return `${count(s.modulesInSeries, "module")}, corrected to the temperature read`;
         const w = stringVocWindow(s, { tempC: t.tempC, source: t.source });
         return `${formatNumber(Math.round(w.lowV * 10) / 10)}–${formatNumber(Math.round(w.highV * 10) / 10)} V for ${count(s.modulesInSeries, "module")}`;
       }
@@ -242,7 +250,12 @@ function expectedText(check: CommissioningCheck, record: CommissioningRecord): s
         return p ? `All ${p.installed} installed` : fallback;
       }
       case "grid-profile":
-        return record.acceptedGridProfiles.map((p) => p.trim()).filter(Boolean).join(" or ") || "Not on file";
+        return (
+          record.acceptedGridProfiles
+            .map((p) => p.trim())
+            .filter(Boolean)
+            .join(" or ") || "Not on file"
+        );
       case "ac-voltage": {
         const { nominalV, rangeA, rangeB } = serviceVoltageRanges(record.nominalServiceV);
         return `${range(rangeA.lowV, rangeA.highV, "V")} on ${nominalV} V; ${range(rangeB.lowV, rangeB.highV, "V")} at times`;
@@ -303,7 +316,10 @@ export function certificateReadings(input: CommissioningDocumentInput): { label:
   lines.push({ label: "Grid profile", value: record.gridProfileSet?.trim() || "Not recorded" });
   if (record.pairing) {
     const found = record.pairing.found;
-    lines.push({ label: `${record.pairing.word[0]!.toUpperCase()}${record.pairing.word.slice(1)} found`, value: typeof found === "number" ? `${found} of ${record.pairing.installed}` : "Not recorded" });
+    lines.push({
+      label: `${record.pairing.word[0]!.toUpperCase()}${record.pairing.word.slice(1)} found`,
+      value: typeof found === "number" ? `${found} of ${record.pairing.installed}` : "Not recorded",
+    });
   }
   const tests = record.stringTests ?? [];
   if (tests.length) {
@@ -313,7 +329,11 @@ export function certificateReadings(input: CommissioningDocumentInput): { label:
   }
   lines.push({
     label: "Modules reporting",
-    value: record.moduleMonitoring ? (typeof record.modulesReporting === "number" ? `${record.modulesReporting} of ${record.modulesInstalled}` : "Not recorded") : "No module-level monitoring",
+    value: record.moduleMonitoring
+      ? typeof record.modulesReporting === "number"
+        ? `${record.modulesReporting} of ${record.modulesInstalled}`
+        : "Not recorded"
+      : "No module-level monitoring",
   });
   return lines;
 }

@@ -14,5 +14,9 @@ export async function renderCommissioningPdf(input: CommissioningDocumentInput):
   // Typed text (grid profiles, names) may hold characters the PDF fonts cannot draw.
   const printable = printableDeep(input);
   const document = { ...printable, facts: commissioningFacts(printable) };
-  return renderPdf(document.kind === "certificate" ? createElement(CompletionCertificate, { input: document }) : createElement(CommissioningReport, { input: document }));
+  return renderPdf(
+    document.kind === "certificate"
+      ? createElement(CompletionCertificate, { input: document })
+      : createElement(CommissioningReport, { input: document }),
+  );
 }

@@ -28,8 +28,14 @@ export function estimateCheckRowPt(check: CheckResult, design: Design, site: Sit
   const w = CALC_COLUMNS;
   const checkCol =
     height(lines(check.title, w.check, CALC_TITLE_PT), CALC_TITLE_PT) +
-    height(lines(check.message, w.check, CALC_FONT_PT) + lines(check.fix ? `Suggested: ${check.fix}` : "", w.check, CALC_FONT_PT), CALC_FONT_PT);
-  const inputsCol = height(inputs.reduce((n, t) => n + lines(t, w.inputs, CALC_FONT_PT), 0), CALC_FONT_PT);
+    height(
+      lines(check.message, w.check, CALC_FONT_PT) + lines(check.fix ? `Suggested: ${check.fix}` : "", w.check, CALC_FONT_PT),
+      CALC_FONT_PT,
+    );
+  const inputsCol = height(
+    inputs.reduce((n, t) => n + lines(t, w.inputs, CALC_FONT_PT), 0),
+    CALC_FONT_PT,
+  );
   const methodCol = height(lines(method, w.method, CALC_FONT_PT), CALC_FONT_PT);
   const clauseCol = height(lines(check.clause, w.clause, CALC_FONT_PT) + 1, CALC_FONT_PT);
   return Math.max(checkCol, inputsCol, methodCol, clauseCol) + CELL_PADDING_Y_PT;

@@ -6,7 +6,8 @@ type Snapshot = Pick<PacketInput, "designInput" | "review" | "equipment">;
 function equipmentNames(...snapshots: Snapshot[]): Map<string, string> {
   const names = new Map<string, string>();
   for (const { equipment } of snapshots) {
-    for (const item of [equipment.module, equipment.device, ...equipment.inverters.map((l) => l.item)]) if (item) names.set(item.id, `${item.maker} ${item.model}`);
+    for (const item of [equipment.module, equipment.device, ...equipment.inverters.map((l) => l.item)])
+      if (item) names.set(item.id, `${item.maker} ${item.model}`);
   }
   return names;
 }
@@ -54,14 +55,21 @@ export function describeChanges(previous: Snapshot | null, next: Snapshot): stri
     const a = before.get(path);
     const b = after.get(path);
     if (a === b) continue;
-    lines.push(a === undefined ? `${nameOf(path)}: added ${b}` : b === undefined ? `${nameOf(path)}: removed (was ${a})` : `${nameOf(path)}: ${a} → ${b}`);
+    lines.push(
+      a === undefined
+        ? `${nameOf(path)}: added ${b}`
+        : b === undefined
+          ? `${nameOf(path)}: removed (was ${a})`
+          : `${nameOf(path)}: ${a} → ${b}`,
+    );
   }
   const oldChecks = new Map(previous.review.checks.map((c) => [c.id, c]));
   for (const check of next.review.checks) {
     const old = oldChecks.get(check.id);
     if (!old) lines.push(`Check “${check.title}”: new, ${check.status}`);
     else if (old.status !== check.status) lines.push(`Check “${check.title}”: ${old.status} → ${check.status}`);
-    else if (old.value !== check.value && check.value !== null) lines.push(`Check “${check.title}”: ${old.value ?? "—"} → ${check.value} ${check.unit}`.trim());
+    else if (old.value !== check.value && check.value !== null)
+      lines.push(`Check “${check.title}”: ${old.value ?? "—"} → ${check.value} ${check.unit}`.trim());
   }
   const newIds = new Set(next.review.checks.map((c) => c.id));
   for (const old of previous.review.checks) if (!newIds.has(old.id)) lines.push(`Check “${old.title}”: no longer applies`);

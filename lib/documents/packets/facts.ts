@@ -41,9 +41,15 @@ export function scopeOfWork(input: PacketInput): string[] {
   const m = input.equipment.module;
   const dc = formatNumber(ratings.dcKw);
   const planes = input.designInput.array.roofPlanes;
-  const mount = input.designInput.array.mount === "ground" ? "a ground-mounted array" : `${planes.length} roof ${planes.length === 1 ? "plane" : "planes"}`;
+  const mount =
+    input.designInput.array.mount === "ground"
+      ? "a ground-mounted array"
+      : `${planes.length} roof ${planes.length === 1 ? "plane" : "planes"}`;
   const inverters = inverterCounts(input)
-    .map(({ item, quantity }) => `${quantity} × ${item.maker} ${item.model} ${inverterKindWords[item.specs.inverterKind]}${quantity === 1 ? "" : "s"}`)
+    .map(
+      ({ item, quantity }) =>
+        `${quantity} × ${item.maker} ${item.model} ${inverterKindWords[item.specs.inverterKind]}${quantity === 1 ? "" : "s"}`,
+    )
     .join(" and ");
   const s = input.designInput.service;
   const connection =
@@ -95,17 +101,31 @@ export function ratingLines(input: PacketInput): RatingLine[] {
     { name: "Highest DC voltage", value: formatQuantity(summary.maxDcVoltageV, "V") },
     { name: "Highest DC circuit current", value: formatQuantity(summary.maxDcCircuitCurrentA, "A") },
     { name: "Inverter output current", value: formatQuantity(totalInverterOutputA(input.design), "A") },
-    { name: "Service", value: `${s.voltageV} V, ${s.phase === "3" ? "three" : "single"} phase, ${s.busbarA} A busbar${s.mainBreakerA ? `, ${s.mainBreakerA} A main` : ", no main breaker"}` },
-    { name: "Point of connection", value: s.connection === "load-side" ? `Load side, ${s.pvBreakerA} A PV breaker` : `Supply side, ${s.pvBreakerA} A PV disconnect` },
+    {
+      name: "Service",
+      value: `${s.voltageV} V, ${s.phase === "3" ? "three" : "single"} phase, ${s.busbarA} A busbar${s.mainBreakerA ? `, ${s.mainBreakerA} A main` : ", no main breaker"}`,
+    },
+    {
+      name: "Point of connection",
+      value: s.connection === "load-side" ? `Load side, ${s.pvBreakerA} A PV breaker` : `Supply side, ${s.pvBreakerA} A PV disconnect`,
+    },
     { name: "Largest PV breaker the busbar allows", value: formatQuantity(summary.largestPvBreakerA, "A") },
   ];
-  if (summary.annualProductionKwh !== null) lines.push({ name: "Estimated annual energy", value: formatQuantity(summary.annualProductionKwh, "kWh") });
+  if (summary.annualProductionKwh !== null)
+    lines.push({ name: "Estimated annual energy", value: formatQuantity(summary.annualProductionKwh, "kWh") });
   return lines;
 }
 
 /** Listing and certification in one line, each standard once ("UL 1741 SB; IEEE 1547-2018 Category B"). */
 export function listingText(...parts: (string | undefined | null)[]): string {
-  const unique = [...new Set(parts.flatMap((p) => (p ?? "").split(";")).map((p) => p.trim()).filter(Boolean))];
+  const unique = [
+    ...new Set(
+      parts
+        .flatMap((p) => (p ?? "").split(";"))
+        .map((p) => p.trim())
+        .filter(Boolean),
+    ),
+  ];
   return unique.join("; ") || "—";
 }
 
@@ -117,22 +137,33 @@ export function equipmentSchedule(input: PacketInput): EquipmentRow[] {
   const moduleCount = input.review.summary.ratings.moduleCount;
   const rows: EquipmentRow[] = [
     {
-      item: "PV module", quantity: moduleCount, maker: module.maker, model: module.model,
-      rating: `${module.specs.powerW} W, Voc ${module.specs.vocV} V, Isc ${module.specs.iscA} A`, listing: listingText(module.listing),
+      item: "PV module",
+      quantity: moduleCount,
+      maker: module.maker,
+      model: module.model,
+      rating: `${module.specs.powerW} W, Voc ${module.specs.vocV} V, Isc ${module.specs.iscA} A`,
+      listing: listingText(module.listing),
     },
   ];
   for (const { item, quantity } of inverterCounts(input)) {
     const s = item.specs;
     rows.push({
-      item: s.inverterKind === "micro" ? "Microinverter" : "Inverter", quantity, maker: item.maker, model: item.model,
+      item: s.inverterKind === "micro" ? "Microinverter" : "Inverter",
+      quantity,
+      maker: item.maker,
+      model: item.model,
       rating: `${formatNumber(s.acPowerW)} W AC, ${s.acOutputCurrentA} A, ${s.acVoltageV} V`,
       listing: listingText(item.listing, s.certification),
     });
   }
   if (device) {
     rows.push({
-      item: device.specs.deviceKind === "optimizer" ? "DC optimizer" : "Rapid shutdown device", quantity: moduleCount, maker: device.maker, model: device.model,
-      rating: `${device.specs.maxInputV} V max input${device.specs.maxInputIscA ? `, ${device.specs.maxInputIscA} A` : ""}`, listing: listingText(device.listing),
+      item: device.specs.deviceKind === "optimizer" ? "DC optimizer" : "Rapid shutdown device",
+      quantity: moduleCount,
+      maker: device.maker,
+      model: device.model,
+      rating: `${device.specs.maxInputV} V max input${device.specs.maxInputIscA ? `, ${device.specs.maxInputIscA} A` : ""}`,
+      listing: listingText(device.listing),
     });
   }
   return rows;
@@ -142,7 +173,11 @@ export type { ConductorRow } from "@/lib/design/conductor-schedule";
 
 /** The conductor runs as the summary sheet lists them: one row per raceway, with its circuits and conductor count. */
 export function conductorSchedule(input: PacketInput): ConductorRow[] {
-  return scheduleOf(input.designInput, input.design, input.equipment.inverters.map((l) => ({ lineId: l.lineId, quantity: l.quantity, model: l.item.model })));
+  return scheduleOf(
+    input.designInput,
+    input.design,
+    input.equipment.inverters.map((l) => ({ lineId: l.lineId, quantity: l.quantity, model: l.item.model })),
+  );
 }
 
 // Names and units for the computed values a label carries (WarningLabel.values keys).

@@ -28,14 +28,25 @@ function fit(text: string): string {
  * Every step of one generation, in the order the worker takes them: each sheet drawn, each data sheet
  * read, the pages put together, the PDF stored, the stored copy checked. Progress only grows.
  */
-export function planGenerationSteps({ sheetTitles, datasheetTitles }: { sheetTitles: readonly string[]; datasheetTitles: readonly string[] }): GenerationStep[] {
+export function planGenerationSteps({
+  sheetTitles,
+  datasheetTitles,
+}: {
+  sheetTitles: readonly string[];
+  datasheetTitles: readonly string[];
+}): GenerationStep[] {
   const pageWord = (n: number) => `${n} ${n === 1 ? "sheet" : "sheets"}`;
   const steps: Omit<GenerationStep, "progress">[] = [
     ...sheetTitles.map((title, i) => ({ kind: "sheet" as const, text: `Drawing sheet ${i + 1} of ${sheetTitles.length}: ${title}` })),
-    ...datasheetTitles.map((title, i) => ({ kind: "datasheet" as const, text: `Reading data sheet ${i + 1} of ${datasheetTitles.length}: ${title}` })),
+    ...datasheetTitles.map((title, i) => ({
+      kind: "datasheet" as const,
+      text: `Reading data sheet ${i + 1} of ${datasheetTitles.length}: ${title}`,
+    })),
     {
       kind: "assemble",
-      text: datasheetTitles.length ? `Putting ${pageWord(sheetTitles.length)} and ${datasheetTitles.length === 1 ? "1 data sheet" : `${datasheetTitles.length} data sheets`} together` : `Putting ${pageWord(sheetTitles.length)} together`,
+      text: datasheetTitles.length
+        ? `Putting ${pageWord(sheetTitles.length)} and ${datasheetTitles.length === 1 ? "1 data sheet" : `${datasheetTitles.length} data sheets`} together`
+        : `Putting ${pageWord(sheetTitles.length)} together`,
     },
     { kind: "store", text: "Storing the PDF" },
     { kind: "verify", text: "Checking the stored copy against its checksum" },

@@ -4,7 +4,6 @@ import type { EquipmentDto } from "@/lib/schemas/equipment";
 import type { ProjectDto } from "@/lib/dto/projects";
 import type { PacketKind } from "@/lib/domain/stored-values";
 
-
 export const PACKET_TITLES: Record<PacketKind, string> = {
   permit: "Permit packet",
   interconnection: "Interconnection packet",
@@ -19,7 +18,19 @@ export type PacketInput = {
   revision: number;
   generatedAt: string; // ISO date-time
   preparedBy: { name: string; organizationName: string; licenseNumber: string | null; phone: string | null; timeZone?: string }; // IANA zone the packet's dates print in
-  project: Pick<ProjectDto, "number" | "customerName" | "customerEmail" | "customerPhone" | "street" | "city" | "state" | "postalCode" | "utilityAccountNumber" | "meterNumber">;
+  project: Pick<
+    ProjectDto,
+    | "number"
+    | "customerName"
+    | "customerEmail"
+    | "customerPhone"
+    | "street"
+    | "city"
+    | "state"
+    | "postalCode"
+    | "utilityAccountNumber"
+    | "meterNumber"
+  >;
   jurisdiction: { name: string; state: string; necEdition: NecEdition; recordLowTempC: number; highDesignTempC: number };
   utility: { name: string; acceptedGridProfiles: string[] } | null;
   /** The editor's parsed design (tilt, azimuth, locations, line ids) and the engine's view of it. */

@@ -15,7 +15,11 @@ export async function countPages(bytes: Uint8Array): Promise<number> {
  * `skipped` rather than failing the whole packet: the cover already lists what was meant to
  * follow, so a reviewer sees what is missing.
  */
-export async function appendPdfs(base: Uint8Array, extra: AppendedPdf[], { footer }: { footer?: string } = {}): Promise<{ bytes: Uint8Array; pageCount: number; skipped: SkippedPdf[] }> {
+export async function appendPdfs(
+  base: Uint8Array,
+  extra: AppendedPdf[],
+  { footer }: { footer?: string } = {},
+): Promise<{ bytes: Uint8Array; pageCount: number; skipped: SkippedPdf[] }> {
   const merged = await PDFDocument.load(base, { updateMetadata: false });
   const font = footer ? await merged.embedFont(StandardFonts.Helvetica) : null;
   const skipped: SkippedPdf[] = [];
@@ -27,7 +31,14 @@ export async function appendPdfs(base: Uint8Array, extra: AppendedPdf[], { foote
       pages.forEach((page, i) => {
         merged.addPage(page);
         // Loose sheets still say which packet and revision they belong to.
-        if (font && footer) page.drawText(`${footer} · ${item.title} · page ${i + 1} of ${pages.length}`.replace(/[^\x20-\x7e·]/g, "-"), { x: 24, y: 10, size: 7, font, color: rgb(0.3, 0.28, 0.24) });
+        if (font && footer)
+          page.drawText(`${footer} · ${item.title} · page ${i + 1} of ${pages.length}`.replace(/[^\x20-\x7e·]/g, "-"), {
+            x: 24,
+            y: 10,
+            size: 7,
+            font,
+            color: rgb(0.3, 0.28, 0.24),
+          });
       });
     } catch (error) {
       skipped.push({ title: item.title, reason: error instanceof Error ? error.message : String(error) });

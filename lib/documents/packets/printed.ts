@@ -30,7 +30,11 @@ import { PACKET_TITLES, type PacketInput } from "./input";
 // A packet's printed facts gathered once, from the (printable) input, for the sheet layouts in
 // templates/pdf/packets: every string and figure as it prints, the check methods and the diagram.
 
-export type PrintedStructuralRow = Omit<StructuralRow, "deadLoad" | "perAttachment"> & { deadLoad: string; perAttachment: string; status: CheckStatus };
+export type PrintedStructuralRow = Omit<StructuralRow, "deadLoad" | "perAttachment"> & {
+  deadLoad: string;
+  perAttachment: string;
+  status: CheckStatus;
+};
 
 /** What a calculation row prints beside the check's own words. */
 export type PrintedCheck = { inputs: string[]; method: string; result: string; limit: string };
@@ -50,7 +54,13 @@ export type PacketFacts = {
   conductorSchedule: ConductorRow[];
   /** The computed values of each label, in the order of the review's labels. */
   labelValues: { name: string; value: string }[][];
-  structural: { rows: PrintedStructuralRow[]; moduleWeight: string; moduleLength: string; moduleWidth: string; expeditedDeadLoadPsf: number };
+  structural: {
+    rows: PrintedStructuralRow[];
+    moduleWeight: string;
+    moduleLength: string;
+    moduleWidth: string;
+    expeditedDeadLoadPsf: number;
+  };
   /** Inverter lines of the same model together, as the application lists them. */
   inverterLines: { quantity: string; makerModel: string; ratedOutput: string; certification: string }[];
   ratings: { dcKw: string; acKw: string; inverterOutputA: string; maxDcVoltage: string };
@@ -73,7 +83,12 @@ export function packetFacts(input: PacketInput): PacketFacts {
   const label = projectLabel(input);
   return {
     documentTitle: PACKET_TITLES[input.kind],
-    documentInfo: { title: `${PACKET_TITLES[input.kind]}, ${label}, ${revisionLabel(input.revision)}`, author: input.preparedBy.organizationName, creator: "Ohmstead", producer: "Ohmstead" },
+    documentInfo: {
+      title: `${PACKET_TITLES[input.kind]}, ${label}, ${revisionLabel(input.revision)}`,
+      author: input.preparedBy.organizationName,
+      creator: "Ohmstead",
+      producer: "Ohmstead",
+    },
     projectLabel: label,
     siteAddress: siteAddress(input),
     revisionLabel: revisionLabel(input.revision),
@@ -112,9 +127,17 @@ export function packetFacts(input: PacketInput): PacketFacts {
     checks: Object.fromEntries(
       input.review.checks.map((check) => [
         check.id,
-        { ...describeCheck(check, input.design, input.site, figures), result: formatQuantity(check.value, check.unit), limit: formatQuantity(check.limit, check.unit) },
+        {
+          ...describeCheck(check, input.design, input.site, figures),
+          result: formatQuantity(check.value, check.unit),
+          limit: formatQuantity(check.limit, check.unit),
+        },
       ]),
     ),
-    singleLine: paintScene(layoutSingleLine(input.design, { necEdition: input.jurisdiction.necEdition }), DIAGRAM_BOX.widthPt, DIAGRAM_BOX.heightPt),
+    singleLine: paintScene(
+      layoutSingleLine(input.design, { necEdition: input.jurisdiction.necEdition }),
+      DIAGRAM_BOX.widthPt,
+      DIAGRAM_BOX.heightPt,
+    ),
   };
 }

@@ -16,7 +16,9 @@ function printedPacket(input: PacketInput): PrintedPacket {
 }
 
 const sheetsOf = (packet: PrintedPacket): DrawnSheet[] =>
-  packet.kind === "permit" ? permitSheetPages(packet, planPermitSheets(packet)) : interconnectionSheetPages(packet, planInterconnectionSheets());
+  packet.kind === "permit"
+    ? permitSheetPages(packet, planPermitSheets(packet))
+    : interconnectionSheetPages(packet, planInterconnectionSheets());
 
 /** The titles of a packet's generated sheets, in order: what the worker will draw. */
 export function packetSheetTitles(input: PacketInput): string[] {
@@ -30,7 +32,10 @@ export function packetSheetTitles(input: PacketInput): string[] {
  * caller can report each sheet as it starts (`onSheet`, with its index). Pure apart from reading the
  * shipped font files once.
  */
-export async function renderPacketPdf(input: PacketInput, { onSheet }: { onSheet?: (index: number) => Promise<void> | void } = {}): Promise<Uint8Array> {
+export async function renderPacketPdf(
+  input: PacketInput,
+  { onSheet }: { onSheet?: (index: number) => Promise<void> | void } = {},
+): Promise<Uint8Array> {
   const packet = printedPacket(input);
   const { documentInfo: info } = packet.facts;
   const merged = await PDFDocument.create({ updateMetadata: false });

@@ -94,9 +94,18 @@ export function receiptFacts(input: ReceiptInput): ReceiptFacts {
     status: totals.status,
     total: money(input.totalCents),
     refunded: input.refunds.length > 0 ? { total: deduction(totals.refundedCents), net: money(totals.netCents) } : null,
-    lines: input.lines.map((l) => ({ name: l.name, authority: l.authority, arithmetic: l.arithmetic.map(arithmeticText), amount: money(l.amountCents) })),
+    lines: input.lines.map((l) => ({
+      name: l.name,
+      authority: l.authority,
+      arithmetic: l.arithmetic.map(arithmeticText),
+      amount: money(l.amountCents),
+    })),
     method: methodText(input.method),
     processorReference: input.processorReference,
-    refunds: input.refunds.map((r) => ({ date: longDate(r.createdAt, zone), reason: refundReason(r.reason), amount: deduction(r.amountCents) })),
+    refunds: input.refunds.map((r) => ({
+      date: longDate(r.createdAt, zone),
+      reason: refundReason(r.reason),
+      amount: deduction(r.amountCents),
+    })),
   };
 }

@@ -31,8 +31,18 @@ const approved = (filing: FilingFacts | null) => filing?.status === "approved" &
 const RULES: Partial<Record<Stage, Rule>> = {
   draft: { holds: () => true, fact: "Project created", at: () => null },
   design_checked: { holds: (f) => f.designChecked, fact: "The design passes its review", at: () => null },
-  permit_filed: { holds: (f) => Boolean(f.permit && isFiled(f.permit.status)), fact: "Permit application submitted", at: (f) => f.permit?.submittedAt ?? null, implies: ["design_checked"] },
-  permit_issued: { holds: (f) => approved(f.permit), fact: "Permit issued with its number", at: (f) => f.permit?.decidedAt ?? null, implies: ["design_checked", "permit_filed"] },
+  permit_filed: {
+    holds: (f) => Boolean(f.permit && isFiled(f.permit.status)),
+    fact: "Permit application submitted",
+    at: (f) => f.permit?.submittedAt ?? null,
+    implies: ["design_checked"],
+  },
+  permit_issued: {
+    holds: (f) => approved(f.permit),
+    fact: "Permit issued with its number",
+    at: (f) => f.permit?.decidedAt ?? null,
+    implies: ["design_checked", "permit_filed"],
+  },
   installed: { holds: (f) => f.installedAt !== null, fact: "Installation under way", at: (f) => f.installedAt },
   inspection_passed: {
     holds: (f) => f.finalInspectionPassedAt !== null,
@@ -40,10 +50,29 @@ const RULES: Partial<Record<Stage, Rule>> = {
     at: (f) => f.finalInspectionPassedAt,
     implies: ["design_checked", "permit_filed", "permit_issued", "installed"],
   },
-  utility_filed: { holds: (f) => Boolean(f.interconnection && isFiled(f.interconnection.status)), fact: "Interconnection application submitted", at: (f) => f.interconnection?.submittedAt ?? null },
-  utility_approved: { holds: (f) => approved(f.interconnection), fact: "Interconnection approved", at: (f) => f.interconnection?.decidedAt ?? null, implies: ["utility_filed"] },
-  commissioned: { holds: (f) => f.commissionedAt !== null, fact: "Field record completed", at: (f) => f.commissionedAt, implies: ["installed"] },
-  pto_received: { holds: (f) => f.ptoAt !== null, fact: "Permission to operate received", at: (f) => f.ptoAt, implies: STAGES.slice(0, stageIndex("pto_received")) },
+  utility_filed: {
+    holds: (f) => Boolean(f.interconnection && isFiled(f.interconnection.status)),
+    fact: "Interconnection application submitted",
+    at: (f) => f.interconnection?.submittedAt ?? null,
+  },
+  utility_approved: {
+    holds: (f) => approved(f.interconnection),
+    fact: "Interconnection approved",
+    at: (f) => f.interconnection?.decidedAt ?? null,
+    implies: ["utility_filed"],
+  },
+  commissioned: {
+    holds: (f) => f.commissionedAt !== null,
+    fact: "Field record completed",
+    at: (f) => f.commissionedAt,
+    implies: ["installed"],
+  },
+  pto_received: {
+    holds: (f) => f.ptoAt !== null,
+    fact: "Permission to operate received",
+    at: (f) => f.ptoAt,
+    implies: STAGES.slice(0, stageIndex("pto_received")),
+  },
 };
 
 /**

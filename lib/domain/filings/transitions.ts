@@ -25,20 +25,35 @@ export function filingChangeProblem(change: FilingChange): FilingChangeProblem |
   const { from, to } = change;
   if (from === to) return { field: "status", message: `The filing is already ${FILING_STATUS_LABELS[to].toLowerCase()}.` };
   if (!NEXT_STATUSES[from].includes(to)) {
-    return { field: "status", message: `A filing that is ${FILING_STATUS_LABELS[from].toLowerCase()} cannot become ${FILING_STATUS_LABELS[to].toLowerCase()}.` };
+    return {
+      field: "status",
+      message: `A filing that is ${FILING_STATUS_LABELS[from].toLowerCase()} cannot become ${FILING_STATUS_LABELS[to].toLowerCase()}.`,
+    };
   }
   const needsPacket = change.kind !== "other";
   if (to === "submitted" && needsPacket && change.packetRevision === null) {
     return { field: "packetRevision", message: "Choose the packet revision that was submitted." };
   }
   if (to === "approved" && !change.referenceNumber?.trim()) {
-    return { field: "referenceNumber", message: "Enter the authority's reference number (the permit or application number) before marking the filing approved." };
+    return {
+      field: "referenceNumber",
+      message: "Enter the authority's reference number (the permit or application number) before marking the filing approved.",
+    };
   }
   if (to === "resubmitted") {
     if (!change.latestRoundAnswered) return { field: "rounds", message: "Answer every item of the correction round before resubmitting." };
-    if (needsPacket && change.packetRevision === null) return { field: "packetRevision", message: "Choose the packet revision that was resubmitted." };
-    if (needsPacket && change.revisionAtLatestRound !== null && change.packetRevision !== null && change.packetRevision < change.revisionAtLatestRound) {
-      return { field: "packetRevision", message: `Rev ${change.packetRevision} is older than Rev ${change.revisionAtLatestRound}, the revision the corrections were about.` };
+    if (needsPacket && change.packetRevision === null)
+      return { field: "packetRevision", message: "Choose the packet revision that was resubmitted." };
+    if (
+      needsPacket &&
+      change.revisionAtLatestRound !== null &&
+      change.packetRevision !== null &&
+      change.packetRevision < change.revisionAtLatestRound
+    ) {
+      return {
+        field: "packetRevision",
+        message: `Rev ${change.packetRevision} is older than Rev ${change.revisionAtLatestRound}, the revision the corrections were about.`,
+      };
     }
   }
   return null;

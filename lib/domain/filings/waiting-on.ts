@@ -31,7 +31,8 @@ export type WaitingFiling = {
 };
 
 export type WaitingFacts = {
-  now: string;
+  /** The organization's calendar day (YYYY-MM-DD), against which booked inspections are read. */
+  today: string;
   createdAt: string;
   hold: "on_hold" | "cancelled" | null;
   ptoAt: string | null;
@@ -45,14 +46,13 @@ export type WaitingOn = { party: WaitingParty; since: string; why: string } | nu
 
 type Claim = { party: WaitingParty; since: string; why: string };
 
-const DAY = (iso: string) => iso.slice(0, 10);
-
 /** Who must act on one filing, if anyone. */
 function claimOf(filing: WaitingFiling, facts: WaitingFacts): Claim | null {
   const authority: WaitingParty = filing.authority === "utility" ? "utility" : filing.authority === "ahj" ? "ahj" : "office";
   if (filing.status === "withdrawn") return null;
   if (filing.customerSince) return { party: "customer", since: filing.customerSince, why: "Waiting for the customer" };
-  if (filing.revisionNeeded) return { party: "office", since: filing.since, why: "The design changed after submission: a new revision is due" };
+  if (filing.revisionNeeded)
+    return { party: "office", since: filing.since, why: "The design changed after submission: a new revision is due" };
   if (filing.status === "preparing") return { party: "office", since: filing.since, why: "Filing being prepared" };
   if (filing.status === "corrections_requested") return { party: "office", since: filing.since, why: "Corrections to answer" };
   if (filing.status === "rejected") return { party: "office", since: filing.since, why: "Rejected: decide how to refile" };
@@ -62,10 +62,13 @@ function claimOf(filing: WaitingFiling, facts: WaitingFacts): Claim | null {
   const open = filing.inspections.filter((i) => i.result === null && i.scheduledFor);
   const next = open.sort((a, b) => a.scheduledFor!.localeCompare(b.scheduledFor!))[0];
   if (next) {
-    if (DAY(facts.now) <= DAY(next.scheduledFor!)) return { party: "crew", since: filing.since, why: `Inspection booked for ${DAY(next.scheduledFor!)}` };
+    if (facts.today <= next.scheduledFor!) return { party: "crew", since: filing.since, why: `Inspection booked for ${next.scheduledFor}` };
     return { party: authority, since: next.scheduledFor!, why: "Inspection result to come" };
   }
-  const lastResult = filing.inspections.filter((i) => i.result !== null).sort((a, b) => (a.recordedAt ?? "").localeCompare(b.recordedAt ?? "")).at(-1);
+  const lastResult = filing.inspections
+    .filter((i) => i.result !== null)
+    .sort((a, b) => (a.recordedAt ?? "").localeCompare(b.recordedAt ?? ""))
+    .at(-1);
   if (lastResult && (lastResult.result === "failed" || lastResult.result === "partial")) {
     return { party: "crew", since: lastResult.recordedAt ?? filing.since, why: "Inspection corrections to fix on site" };
   }

@@ -40,7 +40,11 @@ export function feedThroughLimitsToFullRating(service: ServicePanel): boolean {
  * away from the main; on a center-fed bus it may sit at either end, but only at dwellings
  * (705.12 center-fed panelboards, from memory).
  */
-export function evaluateLoadSideRules(service: ServicePanel, inverterOutputA: number, context: { isDwelling?: boolean } = {}): LoadSideOutcome[] {
+export function evaluateLoadSideRules(
+  service: ServicePanel,
+  inverterOutputA: number,
+  context: { isDwelling?: boolean } = {},
+): LoadSideOutcome[] {
   const sourceA = CONTINUOUS_MULTIPLIER * inverterOutputA;
   const main = service.mainBreakerA;
   const centerFed = service.panelFeed === "center";
@@ -56,6 +60,12 @@ export function evaluateLoadSideRules(service: ServicePanel, inverterOutputA: nu
   const others = service.otherBreakersA;
   const sumA = (others ?? []).reduce((a, b) => a + b, 0) + service.pvBreakerA;
   const sumApplies = others !== undefined && !fullRatingOnly;
-  outcomes.push({ rule: "sum", applies: sumApplies, passes: sumApplies && atMost(sumA, service.busbarA), valueA: sumA, limitA: service.busbarA });
+  outcomes.push({
+    rule: "sum",
+    applies: sumApplies,
+    passes: sumApplies && atMost(sumA, service.busbarA),
+    valueA: sumA,
+    limitA: service.busbarA,
+  });
   return outcomes;
 }

@@ -73,7 +73,9 @@ export function smallestPassingSize(
 
 /** The inverters whose terminals a run lands on: those its strings feed, or those whose output it carries. */
 function runInverters(design: Design, run: ConductorRun): Inverter[] {
-  const ids = new Set(isDcRun(run) ? runStrings(design, run).map((s) => s.inverterId) : runInverterUnits(design, run).map((u) => u.inverter.id));
+  const ids = new Set(
+    isDcRun(run) ? runStrings(design, run).map((s) => s.inverterId) : runInverterUnits(design, run).map((u) => u.inverter.id),
+  );
   return design.inverters.filter((i) => ids.has(i.id));
 }
 
@@ -86,7 +88,8 @@ export type TerminalBasis = { tempC: TerminalTempC; source: "run" | "equipment" 
 export function terminalBasis(design: Design, run: ConductorRun, maxCurrentA: number): TerminalBasis {
   if (run.terminalTempC !== undefined) return { tempC: run.terminalTempC, source: "run" };
   const marked = runInverters(design, run).map((i) => i.terminalTempC);
-  if (marked.length > 0 && marked.every((t) => t !== undefined)) return { tempC: Math.min(...(marked as number[])) as TerminalTempC, source: "equipment" };
+  if (marked.length > 0 && marked.every((t) => t !== undefined))
+    return { tempC: Math.min(...(marked as number[])) as TerminalTempC, source: "equipment" };
   const circuitRatingA = run.ocpdA ?? (isDcRun(run) ? CONTINUOUS_MULTIPLIER * maxCurrentA : design.service.pvBreakerA);
   return { tempC: circuitRatingA > SMALL_CIRCUIT_LIMIT_A ? 75 : 60, source: "code" };
 }
@@ -108,7 +111,8 @@ export function conductorName(c: ConductorSpec): string {
 
 function terminalWords(t: TerminalBasis): string {
   if (t.source === "run") return `its ${t.tempC} °C terminals`;
-  if (t.source === "equipment") return `the inverter's ${t.tempC} °C terminals (as marked; every other termination must be rated at least as high)`;
+  if (t.source === "equipment")
+    return `the inverter's ${t.tempC} °C terminals (as marked; every other termination must be rated at least as high)`;
   return `${t.tempC} °C terminals (no terminal rating is entered, so 110.14(C)(1) applies: 60 °C up to 100 A, 75 °C above)`;
 }
 
@@ -116,8 +120,11 @@ export function checkConductorAmpacity(design: Design, site: Site, run: Conducto
   const edition = site.necEdition;
   const { evaluation: e, conditions: c, terminal } = evaluateRun(design, site, run);
   const sizing: ClauseId = isDcRun(run) ? "conductorSizing" : "acConductorSizing";
-  const smallest = e.passesTerminal && e.passesConditions ? null : smallestPassingSize(run.conductor, terminal.tempC, e.maxCurrentA, c, edition);
-  const fix = smallest ? `Use ${conductorName({ ...run.conductor, size: smallest })} or larger.` : "No conductor in the table is large enough; split the circuit or lower its current.";
+  const smallest =
+    e.passesTerminal && e.passesConditions ? null : smallestPassingSize(run.conductor, terminal.tempC, e.maxCurrentA, c, edition);
+  const fix = smallest
+    ? `Use ${conductorName({ ...run.conductor, size: smallest })} or larger.`
+    : "No conductor in the table is large enough; split the circuit or lower its current.";
   const name = `Run "${run.label}" (${conductorName(run.conductor)})`;
   const circuits = runCircuits(design, run).length;
   const each = circuits > 1 ? `each of its ${circuits} circuits` : "the circuit";
@@ -125,7 +132,9 @@ export function checkConductorAmpacity(design: Design, site: Site, run: Conducto
   const conditionIds: ClauseId[] = [sizing, "tempCorrection"];
   if (c.rooftopAdderC > 0) conditionIds.push("rooftopAdder");
   if (c.adjustmentFactor < 1) conditionIds.push("cccAdjustment");
-  const why = [`${fmt(c.effectiveAmbientC, 1)} °C${c.rooftopAdderC > 0 ? ` (${fmt(c.ambientC, 1)} °C air plus ${c.rooftopAdderC} °C on the roof)` : ""} × ${c.correctionFactor}`];
+  const why = [
+    `${fmt(c.effectiveAmbientC, 1)} °C${c.rooftopAdderC > 0 ? ` (${fmt(c.ambientC, 1)} °C air plus ${c.rooftopAdderC} °C on the roof)` : ""} × ${c.correctionFactor}`,
+  ];
   if (c.adjustmentFactor < 1) why.push(`${c.currentCarryingConductors} current-carrying conductors together × ${c.adjustmentFactor}`);
   const terminalClauses: ClauseId[] = [sizing, terminal.source === "code" ? "terminals60" : "terminals", "ampacityTable"];
 

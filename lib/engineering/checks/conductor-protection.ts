@@ -9,7 +9,12 @@ const NEXT_SIZE_UP_LIMIT_A = 800;
  * The largest OCPD that still protects a conductor: its ampacity, or the next standard
  * rating above it (240.4(B)), but never above the 240.4(D) small-conductor limit.
  */
-export function maxProtectiveOcpdA(usableAmpacityA: number, size: ConductorSize, material: ConductorMaterial, edition?: NecEdition): number {
+export function maxProtectiveOcpdA(
+  usableAmpacityA: number,
+  size: ConductorSize,
+  material: ConductorMaterial,
+  edition?: NecEdition,
+): number {
   if (!(usableAmpacityA > 0)) return 0;
   let allowed: number;
   if (isStandardRatingA(usableAmpacityA, { edition })) allowed = usableAmpacityA;

@@ -39,7 +39,8 @@ export interface RacewayFill {
 
 /** A wire's area: as entered from its data sheet, else Chapter 9 Table 5 for its insulation, else null (not known). */
 export function wireAreaIn2(wire: RacewayWire): number | null {
-  if (wire.areaIn2 !== undefined) return requirePositive(wire.areaIn2, "raceway.wires.areaIn2", `The area of the ${sizeLabel(wire.size)} wire`);
+  if (wire.areaIn2 !== undefined)
+    return requirePositive(wire.areaIn2, "raceway.wires.areaIn2", `The area of the ${sizeLabel(wire.size)} wire`);
   return table5AreaIn2(wire.insulation, wire.size);
 }
 
@@ -56,7 +57,10 @@ export function racewayFill(raceway: FilledRaceway): RacewayFill {
     const count = requireWholePositive(wire.count, "raceway.wires.count", "The number of wires");
     const area = wireAreaIn2(wire);
     if (area === null) {
-      throw new DesignInputError("raceway.wires.areaIn2", `Enter the area of the ${sizeLabel(wire.size)} ${wire.insulation ?? "wire"} from its data sheet; Chapter 9 Table 5 does not list it.`);
+      throw new DesignInputError(
+        "raceway.wires.areaIn2",
+        `Enter the area of the ${sizeLabel(wire.size)} ${wire.insulation ?? "wire"} from its data sheet; Chapter 9 Table 5 does not list it.`,
+      );
     }
     conductorCount += count;
     conductorAreaIn2 += count * area;
@@ -76,7 +80,13 @@ export function checkConduitFill(design: Design, site: Site, run: ConductorRun):
   if (!run.raceway) return [];
   const raceway: FilledRaceway = { type: run.raceway.type, tradeSize: run.raceway.tradeSize, wires: runRacewayWires(design, run) };
   for (const wire of raceway.wires) requireWholePositive(wire.count, "raceway.wires.count", "The number of wires");
-  const base = { id: `conduit-fill:${run.id}`, title: `Run "${run.label}" conduit fill`, unit: "%", clause: `${clause("conduitFill", site.necEdition)}, Tables 4 and 5`, edition: site.necEdition };
+  const base = {
+    id: `conduit-fill:${run.id}`,
+    title: `Run "${run.label}" conduit fill`,
+    unit: "%",
+    clause: `${clause("conduitFill", site.necEdition)}, Tables 4 and 5`,
+    edition: site.necEdition,
+  };
   const unknown = wiresWithoutArea(raceway);
   if (unknown.length > 0) {
     // Never a guessed area: an insulation Table 5 does not list needs the maker's figure.

@@ -40,8 +40,30 @@ const unitText = (c: TempCoefficient) => `${c.value} ${c.unit === "%/C" ? "%/°C
 function moduleProblems(m: PvModule, site: Site): CheckResult[] {
   const out: CheckResult[] = [];
   const edition = site.necEdition;
-  const problem = (key: string, title: string, status: CheckStatus, value: number | null, message: string, fix: string, basis = DESIGN_GUIDELINE) =>
-    out.push(makeCheck({ id: `data-sheet:module.${key}`, title, status, value, limit: null, unit: "", clause: basis, edition, message, fix, field: `module.${key}` }));
+  const problem = (
+    key: string,
+    title: string,
+    status: CheckStatus,
+    value: number | null,
+    message: string,
+    fix: string,
+    basis = DESIGN_GUIDELINE,
+  ) =>
+    out.push(
+      makeCheck({
+        id: `data-sheet:module.${key}`,
+        title,
+        status,
+        value,
+        limit: null,
+        unit: "",
+        clause: basis,
+        edition,
+        message,
+        fix,
+        field: `module.${key}`,
+      }),
+    );
 
   if (m.vocTempCoeff) {
     const pct = coefficientPctPerC(m.vocTempCoeff, m.vocV);
@@ -60,33 +82,58 @@ function moduleProblems(m: PvModule, site: Site): CheckResult[] {
     }
   }
   if (m.pmaxTempCoeffPctPerC !== undefined && !within(m.pmaxTempCoeffPctPerC, PMAX_COEFF_PLAUSIBLE_PCT)) {
-    problem("pmaxTempCoeffPctPerC", `${m.model} Pmax temperature coefficient`, "warn", m.pmaxTempCoeffPctPerC,
+    problem(
+      "pmaxTempCoeffPctPerC",
+      `${m.model} Pmax temperature coefficient`,
+      "warn",
+      m.pmaxTempCoeffPctPerC,
       `The module's Pmax coefficient, ${m.pmaxTempCoeffPctPerC} %/°C, is outside the usual −0.15 to −0.7 %/°C; the hot-day voltage check leans on it.`,
-      "Check the data sheet's Pmax coefficient and its unit (%/°C).");
+      "Check the data sheet's Pmax coefficient and its unit (%/°C).",
+    );
   }
   if (m.vmpTempCoeff) {
     const pct = coefficientPctPerC(m.vmpTempCoeff, m.vmpV);
     if (!within(pct, PMAX_COEFF_PLAUSIBLE_PCT)) {
-      problem("vmpTempCoeff", `${m.model} Vmp temperature coefficient`, "warn", pct,
+      problem(
+        "vmpTempCoeff",
+        `${m.model} Vmp temperature coefficient`,
+        "warn",
+        pct,
         `The module's Vmp coefficient, ${unitText(m.vmpTempCoeff)}, is outside the usual −0.15 to −0.7 %/°C; the hot-day voltage check leans on it.`,
-        "Check the data sheet's Vmp coefficient and its unit.");
+        "Check the data sheet's Vmp coefficient and its unit.",
+      );
     }
   }
   const product = m.vmpV * m.impA;
   if (Math.abs(product - m.powerW) > PMAX_PRODUCT_TOLERANCE * m.powerW) {
-    problem("powerW", `${m.model} Pmax, Vmp and Imp`, "warn", m.powerW,
+    problem(
+      "powerW",
+      `${m.model} Pmax, Vmp and Imp`,
+      "warn",
+      m.powerW,
       `Vmp × Imp = ${fmt(product, 1)} W is not within 5 % of the ${m.powerW} W Pmax; one of the three figures is likely mistyped.`,
-      "Check Pmax, Vmp and Imp against the data sheet.");
+      "Check Pmax, Vmp and Imp against the data sheet.",
+    );
   }
   if (!within(m.vmpV / m.vocV, VMP_TO_VOC)) {
-    problem("vmpV", `${m.model} Vmp against Voc`, "warn", m.vmpV,
+    problem(
+      "vmpV",
+      `${m.model} Vmp against Voc`,
+      "warn",
+      m.vmpV,
       `Vmp ${m.vmpV} V is ${fmt((m.vmpV / m.vocV) * 100, 1)} % of Voc ${m.vocV} V; crystalline modules work at about 70 to 95 % of Voc.`,
-      "Check Voc and Vmp against the data sheet.");
+      "Check Voc and Vmp against the data sheet.",
+    );
   }
   if (!within(m.impA / m.iscA, IMP_TO_ISC)) {
-    problem("impA", `${m.model} Imp against Isc`, "warn", m.impA,
+    problem(
+      "impA",
+      `${m.model} Imp against Isc`,
+      "warn",
+      m.impA,
       `Imp ${m.impA} A is ${fmt((m.impA / m.iscA) * 100, 1)} % of Isc ${m.iscA} A; crystalline modules work at about 85 to 99.5 % of Isc.`,
-      "Check Isc and Imp against the data sheet.");
+      "Check Isc and Imp against the data sheet.",
+    );
   }
   return out;
 }
@@ -97,18 +144,42 @@ function inverterProblems(inv: Inverter, site: Site): CheckResult[] {
   const neededA = inv.acPowerW / (inv.acVoltageV * (inv.phase === 3 ? Math.sqrt(3) : 1));
   if (inv.acOutputCurrentA < neededA * (1 - INVERTER_CURRENT_TOLERANCE)) {
     // A current below what the rated power needs understates the breaker and conductors sized from it.
-    out.push(makeCheck({
-      id: `data-sheet:inverters.${inv.id}.acOutputCurrentA`, title: `${inv.model} output current`, status: "fail", value: inv.acOutputCurrentA, limit: neededA, unit: "A",
-      clause: `${DESIGN_GUIDELINE}; ${clause("acCurrent", edition)}`, edition,
-      message: `The ${inv.model}'s ${inv.acOutputCurrentA} A output current cannot carry its ${inv.acPowerW} W at ${inv.acVoltageV} V${inv.phase === 3 ? " three-phase" : ""}, which needs ${fmt(neededA)} A; the breaker and conductors are sized from this figure.`,
-      fix: "Enter the maximum continuous output current from the data sheet.",
-      field: `inverters.${inv.id}.acOutputCurrentA`,
-    }));
+    out.push(
+      makeCheck({
+        id: `data-sheet:inverters.${inv.id}.acOutputCurrentA`,
+        title: `${inv.model} output current`,
+        status: "fail",
+        value: inv.acOutputCurrentA,
+        limit: neededA,
+        unit: "A",
+        clause: `${DESIGN_GUIDELINE}; ${clause("acCurrent", edition)}`,
+        edition,
+        message: `The ${inv.model}'s ${inv.acOutputCurrentA} A output current cannot carry its ${inv.acPowerW} W at ${inv.acVoltageV} V${inv.phase === 3 ? " three-phase" : ""}, which needs ${fmt(neededA)} A; the breaker and conductors are sized from this figure.`,
+        fix: "Enter the maximum continuous output current from the data sheet.",
+        field: `inverters.${inv.id}.acOutputCurrentA`,
+      }),
+    );
   }
   const window = (key: string, message: string) =>
-    out.push(makeCheck({ id: `data-sheet:inverters.${inv.id}.${key}`, title: `${inv.model} MPPT window`, status: "warn", value: null, limit: null, unit: "", clause: DESIGN_GUIDELINE, edition, message, fix: "Check the MPPT window and the maximum DC input voltage against the data sheet.", field: `inverters.${inv.id}.${key}` }));
-  if (inv.mpptMinV !== undefined && inv.mpptMaxV !== undefined && inv.mpptMinV >= inv.mpptMaxV) window("mpptMaxV", `The ${inv.model}'s MPPT maximum ${inv.mpptMaxV} V is not above its minimum ${inv.mpptMinV} V.`);
-  if (inv.mpptMaxV !== undefined && inv.mpptMaxV > inv.maxDcInputV) window("mpptMaxV", `The ${inv.model}'s MPPT maximum ${inv.mpptMaxV} V is above its ${inv.maxDcInputV} V maximum DC input.`);
+    out.push(
+      makeCheck({
+        id: `data-sheet:inverters.${inv.id}.${key}`,
+        title: `${inv.model} MPPT window`,
+        status: "warn",
+        value: null,
+        limit: null,
+        unit: "",
+        clause: DESIGN_GUIDELINE,
+        edition,
+        message,
+        fix: "Check the MPPT window and the maximum DC input voltage against the data sheet.",
+        field: `inverters.${inv.id}.${key}`,
+      }),
+    );
+  if (inv.mpptMinV !== undefined && inv.mpptMaxV !== undefined && inv.mpptMinV >= inv.mpptMaxV)
+    window("mpptMaxV", `The ${inv.model}'s MPPT maximum ${inv.mpptMaxV} V is not above its minimum ${inv.mpptMinV} V.`);
+  if (inv.mpptMaxV !== undefined && inv.mpptMaxV > inv.maxDcInputV)
+    window("mpptMaxV", `The ${inv.model}'s MPPT maximum ${inv.mpptMaxV} V is above its ${inv.maxDcInputV} V maximum DC input.`);
   return out;
 }
 
@@ -116,23 +187,43 @@ function deviceProblems(design: ArrayDesign, site: Site): CheckResult[] {
   const d = design.moduleLevelDevice;
   if (d?.shutdownOutputV === undefined || within(d.shutdownOutputV, SHUTDOWN_HOLD_V)) return [];
   // The rapid shutdown check and the field record's expected string voltage are built from this figure.
-  return [makeCheck({
-    id: "data-sheet:moduleLevelDevice.shutdownOutputV", title: `${d.model} voltage while shut down`, status: "warn", value: d.shutdownOutputV, limit: null, unit: "V",
-    clause: `${DESIGN_GUIDELINE}; ${clause("rapidShutdown", site.necEdition)}`, edition: site.necEdition,
-    message: `The ${d.model} is entered as holding ${d.shutdownOutputV} V while shut down; such devices hold about 0.1 to 3 V, most about 1 V.`,
-    fix: "Check the device's shutdown output voltage on its data sheet.",
-    field: "moduleLevelDevice.shutdownOutputV",
-  })];
+  return [
+    makeCheck({
+      id: "data-sheet:moduleLevelDevice.shutdownOutputV",
+      title: `${d.model} voltage while shut down`,
+      status: "warn",
+      value: d.shutdownOutputV,
+      limit: null,
+      unit: "V",
+      clause: `${DESIGN_GUIDELINE}; ${clause("rapidShutdown", site.necEdition)}`,
+      edition: site.necEdition,
+      message: `The ${d.model} is entered as holding ${d.shutdownOutputV} V while shut down; such devices hold about 0.1 to 3 V, most about 1 V.`,
+      fix: "Check the device's shutdown output voltage on its data sheet.",
+      field: "moduleLevelDevice.shutdownOutputV",
+    }),
+  ];
 }
 
 /** Each data-sheet figure the review leans on, against the range it can plausibly take; one passing result when all are plausible. */
 export function checkDataSheets(design: ArrayDesign, site: Site): CheckResult[] {
-  const problems = [...moduleProblems(design.module, site), ...design.inverters.flatMap((i) => inverterProblems(i, site)), ...deviceProblems(design, site)];
+  const problems = [
+    ...moduleProblems(design.module, site),
+    ...design.inverters.flatMap((i) => inverterProblems(i, site)),
+    ...deviceProblems(design, site),
+  ];
   if (problems.length > 0) return problems;
   return [
     makeCheck({
-      id: "data-sheet", title: "Data-sheet figures", status: "pass", value: null, limit: null, unit: "", clause: DESIGN_GUIDELINE, edition: site.necEdition,
-      message: "The module's and inverters' figures the review uses (coefficients, Voc and Vmp, Isc and Imp, output current) are within their usual ranges.",
+      id: "data-sheet",
+      title: "Data-sheet figures",
+      status: "pass",
+      value: null,
+      limit: null,
+      unit: "",
+      clause: DESIGN_GUIDELINE,
+      edition: site.necEdition,
+      message:
+        "The module's and inverters' figures the review uses (coefficients, Voc and Vmp, Isc and Imp, output current) are within their usual ranges.",
     }),
   ];
 }

@@ -25,7 +25,12 @@ export function egcBasisA(design: Design, run: ConductorRun, edition: NecEdition
 }
 
 /** Table 250.122 size, but never larger than the circuit conductors of the same material (250.122(A)). */
-export function requiredEgcSize(ocpdA: number, egcMaterial: ConductorMaterial, circuitSize: ConductorSize, circuitMaterial: ConductorMaterial): ConductorSize {
+export function requiredEgcSize(
+  ocpdA: number,
+  egcMaterial: ConductorMaterial,
+  circuitSize: ConductorSize,
+  circuitMaterial: ConductorMaterial,
+): ConductorSize {
   const fromTable = minimumEgcSize(ocpdA, egcMaterial);
   if (egcMaterial === circuitMaterial && sizeIndex(fromTable) > sizeIndex(circuitSize)) return circuitSize;
   return fromTable;
@@ -45,7 +50,8 @@ function minimumAmpacitySize(design: Design, site: Site, run: ConductorRun, ocpd
   for (const size of CONDUCTOR_SIZES) {
     try {
       const { evaluation: e } = evaluateRun(design, site, { ...run, conductor: { ...run.conductor, size } });
-      const protectedOk = ocpdA === null || maxProtectiveOcpdA(e.usableAmpacityA, size, run.conductor.material, site.necEdition) >= ocpdA - 1e-9;
+      const protectedOk =
+        ocpdA === null || maxProtectiveOcpdA(e.usableAmpacityA, size, run.conductor.material, site.necEdition) >= ocpdA - 1e-9;
       if (e.passesTerminal && e.passesConditions && protectedOk) return size;
     } catch (err) {
       if (!(err instanceof DesignInputError)) throw err;
@@ -92,10 +98,16 @@ const kcmil = (size: ConductorSize) => areaCmil(size) / 1000;
 export function checkEgc(design: Design, site: Site, run: ConductorRun): CheckResult[] {
   const edition = site.necEdition;
   if (!isConductorSize(run.conductor.size)) {
-    throw new DesignInputError(`runs.${run.id}.conductor.size`, `Run "${run.label}" has conductor size "${run.conductor.size}", which our tables do not hold.`);
+    throw new DesignInputError(
+      `runs.${run.id}.conductor.size`,
+      `Run "${run.label}" has conductor size "${run.conductor.size}", which our tables do not hold.`,
+    );
   }
   if (run.egc && !isConductorSize(run.egc.size)) {
-    throw new DesignInputError(`runs.${run.id}.egc.size`, `Run "${run.label}" has grounding conductor size "${run.egc.size}", which our tables do not hold.`);
+    throw new DesignInputError(
+      `runs.${run.id}.egc.size`,
+      `Run "${run.label}" has grounding conductor size "${run.egc.size}", which our tables do not hold.`,
+    );
   }
   const material = run.egc?.material ?? "Cu";
   const req = egcRequirement(design, site, run, material);

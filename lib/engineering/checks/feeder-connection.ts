@@ -20,43 +20,88 @@ export function checkFeederConnection(design: Design, site: Site): CheckResult[]
   const f = s.feeder;
   const feedThrough = s.loadSideAt === "feed-through";
   const what = feedThrough ? "feed-through conductors" : "feeder";
-  const ref = feedThrough ? (clauseInEdition("feedThrough", edition) ?? clause("feederConnection", edition)) : clause("feederConnection", edition);
-  const base = { id: "feeder-connection", title: feedThrough ? "Feed-through conductors" : "Connection on a feeder", unit: "A", clause: ref, edition };
+  const ref = feedThrough
+    ? (clauseInEdition("feedThrough", edition) ?? clause("feederConnection", edition))
+    : clause("feederConnection", edition);
+  const base = {
+    id: "feeder-connection",
+    title: feedThrough ? "Feed-through conductors" : "Connection on a feeder",
+    unit: "A",
+    clause: ref,
+    edition,
+  };
   const sourceA = CONTINUOUS_MULTIPLIER * totalInverterOutputA(design);
   // A feed-through pair starts at the panel's main: that device protects it from the utility side.
   const ocpdA = f?.ocpdA ?? (feedThrough ? (s.mainBreakerA ?? undefined) : undefined);
   if (!f || f.ampacityA === undefined || ocpdA === undefined) {
-    return [makeCheck({
-      ...base, status: "warn", value: null, limit: null, field: f?.ampacityA === undefined ? "service.feeder.ampacityA" : "service.feeder.ocpdA",
-      message: `The ${what}' ampacity and the device protecting them must both be entered to check a connection on them.`,
-      fix: `Enter the ${what}' ampacity and the rating of the device at their supply end.`,
-    })];
+    return [
+      makeCheck({
+        ...base,
+        status: "warn",
+        value: null,
+        limit: null,
+        field: f?.ampacityA === undefined ? "service.feeder.ampacityA" : "service.feeder.ocpdA",
+        message: `The ${what}' ampacity and the device protecting them must both be entered to check a connection on them.`,
+        fix: `Enter the ${what}' ampacity and the rating of the device at their supply end.`,
+      }),
+    ];
   }
   const results: CheckResult[] = [];
   const neededA = ocpdA + sourceA;
   if (f.atOppositeEnd && !feedThrough) {
-    results.push(makeCheck({ ...base, status: "pass", value: null, limit: f.ampacityA,
-      message: `The inverters connect at the end of the feeder away from its ${ocpdA} A device, so no part of the feeder carries both sources.` }));
+    results.push(
+      makeCheck({
+        ...base,
+        status: "pass",
+        value: null,
+        limit: f.ampacityA,
+        message: `The inverters connect at the end of the feeder away from its ${ocpdA} A device, so no part of the feeder carries both sources.`,
+      }),
+    );
   } else if (f.loadSideOcpdA !== undefined) {
     const ok = atMost(f.loadSideOcpdA, f.ampacityA);
-    results.push(makeCheck({ ...base, status: ok ? "pass" : "fail", value: f.loadSideOcpdA, limit: f.ampacityA,
-      message: `A ${f.loadSideOcpdA} A device on the load side of the connection ${ok ? "protects" : "is too large to protect"} the ${fmt(f.ampacityA)} A ${what}.`,
-      fix: ok ? undefined : `Use a device of at most ${fmt(f.ampacityA)} A there, or larger ${what}.` }));
+    results.push(
+      makeCheck({
+        ...base,
+        status: ok ? "pass" : "fail",
+        value: f.loadSideOcpdA,
+        limit: f.ampacityA,
+        message: `A ${f.loadSideOcpdA} A device on the load side of the connection ${ok ? "protects" : "is too large to protect"} the ${fmt(f.ampacityA)} A ${what}.`,
+        fix: ok ? undefined : `Use a device of at most ${fmt(f.ampacityA)} A there, or larger ${what}.`,
+      }),
+    );
   } else {
     const ok = atLeast(f.ampacityA, neededA);
-    results.push(makeCheck({ ...base, status: ok ? "pass" : "fail", value: f.ampacityA, limit: neededA,
-      message: `The ${what} can carry ${fmt(f.ampacityA)} A; with the ${ocpdA} A device and 1.25 × ${fmt(totalInverterOutputA(design))} A of inverter current both feeding them they need ${fmt(neededA)} A.`,
-      fix: ok ? undefined : `Use ${what} of at least ${fmt(neededA)} A, or add a device of at most ${fmt(f.ampacityA)} A on the load side of the connection.` }));
+    results.push(
+      makeCheck({
+        ...base,
+        status: ok ? "pass" : "fail",
+        value: f.ampacityA,
+        limit: neededA,
+        message: `The ${what} can carry ${fmt(f.ampacityA)} A; with the ${ocpdA} A device and 1.25 × ${fmt(totalInverterOutputA(design))} A of inverter current both feeding them they need ${fmt(neededA)} A.`,
+        fix: ok
+          ? undefined
+          : `Use ${what} of at least ${fmt(neededA)} A, or add a device of at most ${fmt(f.ampacityA)} A on the load side of the connection.`,
+      }),
+    );
   }
   if (f.tapAmpacityA !== undefined) {
     const tapNeededA = neededA * TAP_25_FT_FRACTION;
     const ok = atLeast(f.tapAmpacityA, tapNeededA);
-    results.push(makeCheck({
-      id: "feeder-taps", title: "Taps from the feeder", status: ok ? "pass" : "fail", value: f.tapAmpacityA, limit: tapNeededA, unit: "A",
-      clause: `${clause("tapConnection", edition)}, 240.21(B)`, edition,
-      message: `Taps are sized as if protected by ${fmt(neededA)} A (the feeder's device plus 125 % of the inverter current): a tap up to 25 ft needs a third of that, ${fmt(tapNeededA)} A; the smallest tap carries ${fmt(f.tapAmpacityA)} A.`,
-      fix: ok ? undefined : `Use tap conductors of at least ${fmt(tapNeededA)} A, or a 10 ft tap as 240.21(B)(1) allows.`,
-    }));
+    results.push(
+      makeCheck({
+        id: "feeder-taps",
+        title: "Taps from the feeder",
+        status: ok ? "pass" : "fail",
+        value: f.tapAmpacityA,
+        limit: tapNeededA,
+        unit: "A",
+        clause: `${clause("tapConnection", edition)}, 240.21(B)`,
+        edition,
+        message: `Taps are sized as if protected by ${fmt(neededA)} A (the feeder's device plus 125 % of the inverter current): a tap up to 25 ft needs a third of that, ${fmt(tapNeededA)} A; the smallest tap carries ${fmt(f.tapAmpacityA)} A.`,
+        fix: ok ? undefined : `Use tap conductors of at least ${fmt(tapNeededA)} A, or a 10 ft tap as 240.21(B)(1) allows.`,
+      }),
+    );
   }
   return results;
 }

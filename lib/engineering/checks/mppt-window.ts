@@ -43,8 +43,14 @@ function windowChecks(design: ArrayDesign, site: Site, inverter: Inverter, n: nu
     if (vmpHot === null) {
       results.push(
         makeCheck({
-          id: `mppt-min:${key}`, title: `${who} voltage on a hot day`, status: "warn", value: null,
-          limit: inverter.mpptMinV, unit: "V", clause: clauseText, edition,
+          id: `mppt-min:${key}`,
+          title: `${who} voltage on a hot day`,
+          status: "warn",
+          value: null,
+          limit: inverter.mpptMinV,
+          unit: "V",
+          clause: clauseText,
+          edition,
           message: `${who} could not be checked against the ${inverter.model}'s ${inverter.mpptMinV} V MPPT minimum because the module's Vmp or Pmax temperature coefficient is missing.`,
           fix: "Enter the module's Vmp or Pmax temperature coefficient from its data sheet.",
         }),
@@ -54,10 +60,20 @@ function windowChecks(design: ArrayDesign, site: Site, inverter: Inverter, n: nu
       const ok = atLeast(stringV, inverter.mpptMinV);
       results.push(
         makeCheck({
-          id: `mppt-min:${key}`, title: `${who} voltage on a hot day`, status: ok ? "pass" : "warn", value: stringV,
-          limit: inverter.mpptMinV, unit: "V", clause: clauseText, edition,
+          id: `mppt-min:${key}`,
+          title: `${who} voltage on a hot day`,
+          status: ok ? "pass" : "warn",
+          value: stringV,
+          limit: inverter.mpptMinV,
+          unit: "V",
+          clause: clauseText,
+          edition,
           message: `${who} works at about ${fmt(stringV, 1)} V with cells at ${fmt(tCell, 1)} °C (${site.highDesignTempC} °C air plus the usual rise), ${ok ? "at or above" : "below"} the ${inverter.model}'s ${inverter.mpptMinV} V MPPT minimum${ok ? "" : ", so it will lose energy on hot days"}.`,
-          fix: ok ? undefined : n > 1 ? `Use at least ${Math.ceil(inverter.mpptMinV / vmpHot - 1e-9)} modules in this string.` : "Choose a micro-inverter whose MPPT range suits this module.",
+          fix: ok
+            ? undefined
+            : n > 1
+              ? `Use at least ${Math.ceil(inverter.mpptMinV / vmpHot - 1e-9)} modules in this string.`
+              : "Choose a micro-inverter whose MPPT range suits this module.",
         }),
       );
     }
@@ -67,10 +83,20 @@ function windowChecks(design: ArrayDesign, site: Site, inverter: Inverter, n: nu
     const ok = atMost(stcV, inverter.mpptMaxV);
     results.push(
       makeCheck({
-        id: `mppt-max:${key}`, title: `${who} working voltage`, status: ok ? "pass" : "warn", value: stcV,
-        limit: inverter.mpptMaxV, unit: "V", clause: clauseText, edition,
+        id: `mppt-max:${key}`,
+        title: `${who} working voltage`,
+        status: ok ? "pass" : "warn",
+        value: stcV,
+        limit: inverter.mpptMaxV,
+        unit: "V",
+        clause: clauseText,
+        edition,
         message: `${who} works at ${fmt(stcV, 1)} V at standard test conditions, ${ok ? "within" : "above"} the ${inverter.model}'s ${inverter.mpptMaxV} V MPPT maximum.`,
-        fix: ok ? undefined : n > 1 ? `Use at most ${Math.floor(inverter.mpptMaxV / design.module.vmpV + 1e-9)} modules in this string.` : "Choose a micro-inverter whose MPPT range suits this module.",
+        fix: ok
+          ? undefined
+          : n > 1
+            ? `Use at most ${Math.floor(inverter.mpptMaxV / design.module.vmpV + 1e-9)} modules in this string.`
+            : "Choose a micro-inverter whose MPPT range suits this module.",
       }),
     );
   }

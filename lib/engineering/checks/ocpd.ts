@@ -44,7 +44,10 @@ function ratingCheck(site: Site, run: ConductorRun, e: ConductorEvaluation, ocpd
     clause: clauses(edition, isDcRun(run) ? "dcOcpd" : "acOcpd", "standardRatings"),
     edition,
     message,
-    fix: bigEnough && standard ? undefined : `Use a ${requiredOcpdA(e.maxCurrentA, { fuse, edition })} A ${device} (the next standard rating).`,
+    fix:
+      bigEnough && standard
+        ? undefined
+        : `Use a ${requiredOcpdA(e.maxCurrentA, { fuse, edition })} A ${device} (the next standard rating).`,
   });
 }
 
@@ -59,7 +62,9 @@ function protectionCheck(design: Design, site: Site, run: ConductorRun, e: Condu
   if (moduleLimits) allowedA = seriesFuseA;
   const ok = atMost(ocpdA, allowedA);
   const bigger = ok ? null : conductorProtectedBy(run, e, ocpdA, site);
-  const reason = moduleLimits ? `the module's ${seriesFuseA} A maximum series fuse` : `${sizeLabel(size)} with ${fmt(e.usableAmpacityA)} A usable ampacity`;
+  const reason = moduleLimits
+    ? `the module's ${seriesFuseA} A maximum series fuse`
+    : `${sizeLabel(size)} with ${fmt(e.usableAmpacityA)} A usable ampacity`;
   return makeCheck({
     id: `ocpd-protects:${run.id}`,
     title: `Run "${run.label}" protected by its overcurrent device`,
@@ -79,7 +84,10 @@ function conductorProtectedBy(run: ConductorRun, e: ConductorEvaluation, ocpdA: 
   const { material, insulationTempC } = run.conductor;
   const derate = e.correctedAmpacityA / tableAmpacityA(run.conductor.size, material, insulationTempC, site.necEdition);
   for (const size of CONDUCTOR_SIZES.slice(sizeIndex(run.conductor.size) + 1)) {
-    const usable = Math.min(tableAmpacityA(size, material, insulationTempC, site.necEdition) * derate, tableAmpacityA(size, material, e.terminalColumnC, site.necEdition));
+    const usable = Math.min(
+      tableAmpacityA(size, material, insulationTempC, site.necEdition) * derate,
+      tableAmpacityA(size, material, e.terminalColumnC, site.necEdition),
+    );
     if (atMost(ocpdA, maxProtectiveOcpdA(usable, size, material))) return size;
   }
   return null;
@@ -116,7 +124,11 @@ function dcWithoutOcpd(design: Design, site: Site, run: ConductorRun, e: Conduct
         : missingRating
           ? `${plural(parallel, "string")} join in parallel at one inverter input; without the module's maximum series fuse rating we cannot tell whether fuses are needed.`
           : `With ${plural(parallel, "string")} in parallel at one inverter input, a fault can draw ${fmt(backfeedA)} A from the other strings; the modules and conductors withstand ${fmt(limitA ?? 0)} A${ok ? ", so no fuse is needed" : ""}.`,
-    fix: ok ? undefined : missingRating ? "Enter the module's maximum series fuse rating from its data sheet." : `Fuse each string at ${fuseA} A.`,
+    fix: ok
+      ? undefined
+      : missingRating
+        ? "Enter the module's maximum series fuse rating from its data sheet."
+        : `Fuse each string at ${fuseA} A.`,
     field: missingRating ? "module.maxSeriesFuseA" : undefined,
   });
 }

@@ -69,10 +69,16 @@ function loadSide(design: Design, site: Site): CheckResult {
     const breakerSumA = s.pvBreakerA + (s.mainBreakerA ?? 0);
     // Code arithmetic uses 125 % of inverter current; many AHJs add the breaker rating instead.
     const breakerOver = governing.rule === "120%" && !atMost(breakerSumA, governing.limitA);
-    const where = governing.rule === "120%" ? (s.panelFeed === "center" ? ", with the PV breaker at one end of the center-fed bus" : ", with the PV breaker at the far end of the bus from the main") : "";
-    const sum = governing.rule === "sum"
-      ? `its breakers other than the main total ${fmt(governing.valueA)} A`
-      : `1.25 × ${fmt(outputA)} A of inverter current plus the ${s.mainBreakerA} A main is ${fmt(governing.valueA)} A`;
+    const where =
+      governing.rule === "120%"
+        ? s.panelFeed === "center"
+          ? ", with the PV breaker at one end of the center-fed bus"
+          : ", with the PV breaker at the far end of the bus from the main"
+        : "";
+    const sum =
+      governing.rule === "sum"
+        ? `its breakers other than the main total ${fmt(governing.valueA)} A`
+        : `1.25 × ${fmt(outputA)} A of inverter current plus the ${s.mainBreakerA} A main is ${fmt(governing.valueA)} A`;
     return makeCheck({
       ...base,
       status: breakerOver ? "warn" : "pass",
@@ -87,7 +93,11 @@ function loadSide(design: Design, site: Site): CheckResult {
   const shown = outcomes.find((o) => o.rule === "120%")!;
   const fixes = [pvBreakerFix(s.busbarA, s.mainBreakerA, requiredOcpdA(outputA)), mainFix(s.busbarA, s.mainBreakerA, s.pvBreakerA)];
   if (!s.pvBreakerAtOppositeEnd) {
-    fixes.unshift(s.panelFeed === "center" ? "Move the PV breaker to one end of the center-fed bus to use the 120 % rule." : "Move the PV breaker to the end of the bus opposite the main to use the 120 % rule.");
+    fixes.unshift(
+      s.panelFeed === "center"
+        ? "Move the PV breaker to one end of the center-fed bus to use the 120 % rule."
+        : "Move the PV breaker to the end of the bus opposite the main to use the 120 % rule.",
+    );
   }
   fixes.push("Or connect on the supply side of the main.");
   return makeCheck({
@@ -102,7 +112,12 @@ function loadSide(design: Design, site: Site): CheckResult {
 }
 
 /** A panel without a main breaker: only the sum rule can apply. */
-function mainLugOnly(outcomes: LoadSideOutcome[], base: Pick<CheckResult, "id" | "title" | "unit" | "edition">, busbarA: number, edition: Site["necEdition"]): CheckResult {
+function mainLugOnly(
+  outcomes: LoadSideOutcome[],
+  base: Pick<CheckResult, "id" | "title" | "unit" | "edition">,
+  busbarA: number,
+  edition: Site["necEdition"],
+): CheckResult {
   const sum = outcomes.find((o) => o.rule === "sum")!;
   return makeCheck({
     ...base,

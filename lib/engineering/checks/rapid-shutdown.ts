@@ -52,7 +52,10 @@ export function checkRapidShutdown(design: Design, site: Site): CheckResult[] {
     );
   }
   if (method === "micro-inverters") {
-    return whole("pass", "Micro-inverters stop when the grid or the shutdown switch opens, and no DC wiring leaves the modules, so the array meets rapid shutdown.");
+    return whole(
+      "pass",
+      "Micro-inverters stop when the grid or the shutdown switch opens, and no DC wiring leaves the modules, so the array meets rapid shutdown.",
+    );
   }
   if (method === "listed-system") {
     return whole("pass", "The design relies on a listed rapid shutdown system; install it as its listing requires.");
@@ -72,9 +75,15 @@ export function checkRapidShutdown(design: Design, site: Site): CheckResult[] {
       edition,
       clause: `${clauses(edition, "rapidShutdownOutside", "rapidShutdownInside")}; ${perDeviceV} V per device in shutdown`,
       message: `With the array shut down, string ${s.id}'s ${s.modulesInSeries} devices should hold about ${fmt(v)} V: ${
-        outside ? "within 30 V, so its wiring may leave the array" : inside ? "within 80 V inside the array but above 30 V for wiring outside it" : "above the 80 V allowed even inside the array"
+        outside
+          ? "within 30 V, so its wiring may leave the array"
+          : inside
+            ? "within 80 V inside the array but above 30 V for wiring outside it"
+            : "above the 80 V allowed even inside the array"
       }.`,
-      fix: outside ? undefined : `Keep at most ${Math.floor(OUTSIDE_BOUNDARY_MAX_V / perDeviceV)} devices in series, or keep this string's wiring within 1 ft of the array.`,
+      fix: outside
+        ? undefined
+        : `Keep at most ${Math.floor(OUTSIDE_BOUNDARY_MAX_V / perDeviceV)} devices in series, or keep this string's wiring within 1 ft of the array.`,
     });
   });
 }

@@ -16,7 +16,11 @@ export interface RoofPlaneLoad {
 /** Distributed dead load = (modules + racking) / array area; load per attachment = the same weight / attachments. */
 export function roofPlaneLoad(design: Design, plane: RoofPlane): RoofPlaneLoad {
   const modules = requireWholePositive(plane.moduleCount, `roofPlanes.${plane.id}.moduleCount`, `The number of modules on ${plane.label}`);
-  const attachments = requireWholePositive(plane.attachmentCount, `roofPlanes.${plane.id}.attachmentCount`, `The number of attachments on ${plane.label}`);
+  const attachments = requireWholePositive(
+    plane.attachmentCount,
+    `roofPlanes.${plane.id}.attachmentCount`,
+    `The number of attachments on ${plane.label}`,
+  );
   const racking = requireNonNegative(plane.rackingWeightLb, `roofPlanes.${plane.id}.rackingWeightLb`, "The racking weight");
   const arrayAreaFt2 = (modules * design.module.lengthIn * design.module.widthIn) / 144;
   const totalWeightLb = modules * design.module.weightLb + racking;

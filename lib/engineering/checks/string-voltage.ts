@@ -32,7 +32,10 @@ export function coldModuleVoc(module: PvModule, recordLowTempC: number): ColdVoc
   const fromTable = (): ColdVoc => fromTableAt(module, recordLowTempC);
   if (!coeff) return fromTable();
   if (!(coeff.value < 0)) {
-    throw new DesignInputError("module.vocTempCoeff", "The Voc temperature coefficient must be negative: module voltage rises as it gets colder.");
+    throw new DesignInputError(
+      "module.vocTempCoeff",
+      "The Voc temperature coefficient must be negative: module voltage rises as it gets colder.",
+    );
   }
   const deltaC = recordLowTempC - 25;
   const vocV = module.vocV * (1 + (deltaC * coefficientPctPerC(coeff, module.vocV)) / 100);
@@ -67,7 +70,10 @@ export function checkStringVoltage(design: ArrayDesign, site: Site, string: PvSt
   const n = requireWholePositive(string.modulesInSeries, `strings.${string.id}.modulesInSeries`, "The number of modules in a string");
   const inverter = inverterById(design, string.inverterId);
   if (inverter.kind === "micro") {
-    throw new DesignInputError(`strings.${string.id}.inverterId`, `String ${string.id} is wired to a micro-inverter; micro-inverter designs have no DC strings.`);
+    throw new DesignInputError(
+      `strings.${string.id}.inverterId`,
+      `String ${string.id} is wired to a micro-inverter; micro-inverter designs have no DC strings.`,
+    );
   }
   return usesOptimizers(design) ? optimizerString(design, site, string, inverter, n) : seriesString(design, site, string, inverter, n);
 }
@@ -97,7 +103,10 @@ function seriesString(design: ArrayDesign, site: Site, string: PvString, inverte
 function optimizerString(design: ArrayDesign, site: Site, string: PvString, inverter: Inverter, n: number): CheckResult[] {
   const regulatedV = inverter.regulatedStringV;
   if (regulatedV === undefined || !(regulatedV > 0)) {
-    throw new DesignInputError(`inverters.${inverter.id}.regulatedStringV`, `Optimizer strings need the ${inverter.model}'s fixed string voltage.`);
+    throw new DesignInputError(
+      `inverters.${inverter.id}.regulatedStringV`,
+      `Optimizer strings need the ${inverter.model}'s fixed string voltage.`,
+    );
   }
   const { limitV, why } = stringVoltageLimit(inverter, site);
   const voltageOk = atMost(regulatedV, limitV);

@@ -19,11 +19,22 @@ export function checkSupplySideConductors(design: Design, site: Site): CheckResu
   const c = design.service.supplySideConductors;
   const ref = clauses(edition, "supplySide", "supplySideAllowed");
   if (!c) {
-    return [makeCheck({
-      id: "supply-side-conductors", title: "Supply-side conductors", status: "warn", value: null, limit: null, unit: "", clause: ref, edition, field: "service.supplySideConductors",
-      message: "The conductors from the service tap to the PV overcurrent device are not entered, so their size and length are not checked.",
-      fix: "Enter their size, material and length to the overcurrent device.",
-    })];
+    return [
+      makeCheck({
+        id: "supply-side-conductors",
+        title: "Supply-side conductors",
+        status: "warn",
+        value: null,
+        limit: null,
+        unit: "",
+        clause: ref,
+        edition,
+        field: "service.supplySideConductors",
+        message:
+          "The conductors from the service tap to the PV overcurrent device are not entered, so their size and length are not checked.",
+        fix: "Enter their size, material and length to the overcurrent device.",
+      }),
+    ];
   }
   const results: CheckResult[] = [];
   const ocpdA = design.service.pvBreakerA;
@@ -33,24 +44,44 @@ export function checkSupplySideConductors(design: Design, site: Site): CheckResu
   const bigEnough = minimum === null || sizeIndex(c.size) >= sizeIndex(minimum);
   const ampOk = atLeast(ampacityA, neededA);
   const metal = c.material === "Cu" ? "copper" : "aluminum";
-  results.push(makeCheck({
-    id: "supply-side-conductors", title: "Supply-side conductors", status: bigEnough && ampOk ? "pass" : "fail", value: ampacityA, limit: neededA, unit: "A",
-    clause: `${ref}, 240.4`, edition,
-    message: `The ${sizeLabel(c.size)} ${metal} supply-side conductors carry ${ampacityA} A at 75 °C; they need at least ${fmt(neededA)} A (125 % of the inverter output, and the ${ocpdA} A device that protects them)${minimum ? ` and at least ${sizeLabel(minimum)} ${metal}` : ""}.`,
-    fix: bigEnough && ampOk ? undefined : `Use larger conductors: at least ${minimum && !bigEnough ? withArticle(sizeLabel(minimum)) : `${fmt(neededA)} A of ampacity`}.`,
-  }));
+  results.push(
+    makeCheck({
+      id: "supply-side-conductors",
+      title: "Supply-side conductors",
+      status: bigEnough && ampOk ? "pass" : "fail",
+      value: ampacityA,
+      limit: neededA,
+      unit: "A",
+      clause: `${ref}, 240.4`,
+      edition,
+      message: `The ${sizeLabel(c.size)} ${metal} supply-side conductors carry ${ampacityA} A at 75 °C; they need at least ${fmt(neededA)} A (125 % of the inverter output, and the ${ocpdA} A device that protects them)${minimum ? ` and at least ${sizeLabel(minimum)} ${metal}` : ""}.`,
+      fix:
+        bigEnough && ampOk
+          ? undefined
+          : `Use larger conductors: at least ${minimum && !bigEnough ? withArticle(sizeLabel(minimum)) : `${fmt(neededA)} A of ampacity`}.`,
+    }),
+  );
   if (edition !== 2017) {
     const len = c.lengthToOcpdFt;
     const ok = len !== undefined && atMost(len, SUPPLY_SIDE_MAX_TAP_FT);
-    results.push(makeCheck({
-      id: "supply-side-ocpd-location", title: "Supply-side overcurrent device location", status: len === undefined ? "warn" : ok ? "pass" : "fail",
-      value: len ?? null, limit: SUPPLY_SIDE_MAX_TAP_FT, unit: "ft", clause: clause("supplySide", edition), edition,
-      message: len === undefined
-        ? "The length from the service tap to the PV overcurrent device is not entered; the device must be within 10 ft of the connection."
-        : `The PV overcurrent device is ${fmt(len)} ft from the service tap, ${ok ? "within" : "beyond"} the 10 ft allowed.`,
-      fix: ok ? undefined : "Place the PV overcurrent device within 10 ft of the connection to the service conductors.",
-      field: ok ? undefined : "service.supplySideConductors.lengthToOcpdFt",
-    }));
+    results.push(
+      makeCheck({
+        id: "supply-side-ocpd-location",
+        title: "Supply-side overcurrent device location",
+        status: len === undefined ? "warn" : ok ? "pass" : "fail",
+        value: len ?? null,
+        limit: SUPPLY_SIDE_MAX_TAP_FT,
+        unit: "ft",
+        clause: clause("supplySide", edition),
+        edition,
+        message:
+          len === undefined
+            ? "The length from the service tap to the PV overcurrent device is not entered; the device must be within 10 ft of the connection."
+            : `The PV overcurrent device is ${fmt(len)} ft from the service tap, ${ok ? "within" : "beyond"} the 10 ft allowed.`,
+        fix: ok ? undefined : "Place the PV overcurrent device within 10 ft of the connection to the service conductors.",
+        field: ok ? undefined : "service.supplySideConductors.lengthToOcpdFt",
+      }),
+    );
   }
   return results;
 }

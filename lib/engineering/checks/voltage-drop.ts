@@ -26,7 +26,11 @@ export function voltageDropStatus(percent: number): CheckStatus {
 }
 
 /** Working voltage and current of one circuit: Vmp and Imp for strings, regulated voltage for optimizer strings, rated output for AC. */
-export function circuitOperatingPoint(design: Design, run: ConductorRun, circuit: RunCircuit): { voltageV: number; currentA: number; system: VoltageDropSystem } {
+export function circuitOperatingPoint(
+  design: Design,
+  run: ConductorRun,
+  circuit: RunCircuit,
+): { voltageV: number; currentA: number; system: VoltageDropSystem } {
   if (circuit.units.length > 0) {
     const units = circuit.units;
     const { acVoltageV, phase } = units[0]!.inverter;
@@ -69,7 +73,8 @@ function largerSizeFix(design: Design, site: Site, run: ConductorRun, size: Cond
   if (run.egc) {
     try {
       const needed = egcRequirement(design, site, upsized, run.egc.material).required;
-      if (sizeIndex(needed) > sizeIndex(run.egc.size)) egcNote = ` with ${withArticle(sizeLabel(needed))} grounding conductor (250.122(B) grows it with the conductors)`;
+      if (sizeIndex(needed) > sizeIndex(run.egc.size))
+        egcNote = ` with ${withArticle(sizeLabel(needed))} grounding conductor (250.122(B) grows it with the conductors)`;
     } catch (err) {
       if (!(err instanceof DesignInputError)) throw err;
     }
@@ -80,14 +85,17 @@ function largerSizeFix(design: Design, site: Site, run: ConductorRun, size: Cond
 export function checkRunVoltageDrop(design: Design, site: Site, run: ConductorRun): CheckResult[] {
   const { dropV, percent } = runVoltageDrop(design, run);
   const status = voltageDropStatus(percent);
-  const better = status === "pass" ? undefined : CONDUCTOR_SIZES.slice(sizeIndex(run.conductor.size) + 1).find((size) => {
-    try {
-      return atMost(runVoltageDrop(design, run, size).percent, VOLTAGE_DROP_WARN_PERCENT);
-    } catch (err) {
-      if (err instanceof DesignInputError) return false; // a size the resistance table lacks for this stranding
-      throw err;
-    }
-  });
+  const better =
+    status === "pass"
+      ? undefined
+      : CONDUCTOR_SIZES.slice(sizeIndex(run.conductor.size) + 1).find((size) => {
+          try {
+            return atMost(runVoltageDrop(design, run, size).percent, VOLTAGE_DROP_WARN_PERCENT);
+          } catch (err) {
+            if (err instanceof DesignInputError) return false; // a size the resistance table lacks for this stranding
+            throw err;
+          }
+        });
   return [
     makeCheck({
       id: `voltage-drop:${run.id}`,

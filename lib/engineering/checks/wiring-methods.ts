@@ -34,49 +34,79 @@ export function checkWiringMethods(site: Site, run: ConductorRun): CheckResult[]
   if (enclosure === "exposed") {
     const ok = isExposedArrayConductor(run.conductor.insulation);
     const unknown = run.conductor.insulation === undefined;
-    results.push(makeCheck({
-      id: `wiring-exposed:${run.id}`, title: `${name} exposed conductors`, status: ok ? "pass" : unknown ? "warn" : "fail", value: null, limit: null, unit: "",
-      clause: clause("exposedWiring", edition), edition,
-      message: ok
-        ? `${name} runs exposed in ${run.conductor.insulation}, a conductor type allowed exposed within the array.`
-        : unknown
-          ? `${name} runs exposed, and its conductor type is not entered; exposed array wiring must be PV wire or USE-2.`
-          : `${name} runs exposed in ${run.conductor.insulation}; exposed single conductors in the array must be PV wire or USE-2.`,
-      fix: ok ? undefined : "Use PV wire (or USE-2), or put the conductors in a raceway.",
-      field: ok ? undefined : `runs.${run.id}.insulation`,
-    }));
+    results.push(
+      makeCheck({
+        id: `wiring-exposed:${run.id}`,
+        title: `${name} exposed conductors`,
+        status: ok ? "pass" : unknown ? "warn" : "fail",
+        value: null,
+        limit: null,
+        unit: "",
+        clause: clause("exposedWiring", edition),
+        edition,
+        message: ok
+          ? `${name} runs exposed in ${run.conductor.insulation}, a conductor type allowed exposed within the array.`
+          : unknown
+            ? `${name} runs exposed, and its conductor type is not entered; exposed array wiring must be PV wire or USE-2.`
+            : `${name} runs exposed in ${run.conductor.insulation}; exposed single conductors in the array must be PV wire or USE-2.`,
+        fix: ok ? undefined : "Use PV wire (or USE-2), or put the conductors in a raceway.",
+        field: ok ? undefined : `runs.${run.id}.insulation`,
+      }),
+    );
     const egc = run.egc;
     if (egc && sizeIndex(egc.size) < sizeIndex(SMALLEST_UNPROTECTED_EGC)) {
-      results.push(makeCheck({
-        id: `egc-protection:${run.id}`, title: `${name} grounding conductor protection`, status: "fail", value: null, limit: null, unit: "",
-        clause: clauses(edition, "arrayEgc", "egcProtection"), edition,
-        message: `${name} has an exposed ${sizeLabel(egc.size)} grounding conductor; one smaller than 6 AWG must be protected by a raceway or cable armor.`,
-        fix: "Use a 6 AWG grounding conductor, or run it in the raceway.",
-        field: `runs.${run.id}.egc`,
-      }));
+      results.push(
+        makeCheck({
+          id: `egc-protection:${run.id}`,
+          title: `${name} grounding conductor protection`,
+          status: "fail",
+          value: null,
+          limit: null,
+          unit: "",
+          clause: clauses(edition, "arrayEgc", "egcProtection"),
+          edition,
+          message: `${name} has an exposed ${sizeLabel(egc.size)} grounding conductor; one smaller than 6 AWG must be protected by a raceway or cable armor.`,
+          fix: "Use a 6 AWG grounding conductor, or run it in the raceway.",
+          field: `runs.${run.id}.egc`,
+        }),
+      );
     }
   }
   const inside = run.insideBuilding;
   const metal = enclosure === "metal-raceway" || enclosure === "mc-cable";
-  const insideBase = { id: `wiring-inside:${run.id}`, title: `${name} inside the building`, value: null, limit: null, unit: "", clause: clause("dcInsideBuilding", edition), edition };
+  const insideBase = {
+    id: `wiring-inside:${run.id}`,
+    title: `${name} inside the building`,
+    value: null,
+    limit: null,
+    unit: "",
+    clause: clause("dcInsideBuilding", edition),
+    edition,
+  };
   if (inside === undefined) {
-    results.push(makeCheck({
-      ...insideBase, status: metal ? "pass" : "warn",
-      message: metal
-        ? `${name} is in ${enclosure === "mc-cable" ? "Type MC cable" : "metal raceway"}, which DC circuits inside a building need, wherever it runs.`
-        : `The design does not say whether ${name} passes inside the building; DC circuits inside a building must be in metal raceway or Type MC cable.`,
-      fix: metal ? undefined : "Say whether the run enters the building (attic, walls, garage).",
-      field: metal ? undefined : `runs.${run.id}.insideBuilding`,
-    }));
+    results.push(
+      makeCheck({
+        ...insideBase,
+        status: metal ? "pass" : "warn",
+        message: metal
+          ? `${name} is in ${enclosure === "mc-cable" ? "Type MC cable" : "metal raceway"}, which DC circuits inside a building need, wherever it runs.`
+          : `The design does not say whether ${name} passes inside the building; DC circuits inside a building must be in metal raceway or Type MC cable.`,
+        fix: metal ? undefined : "Say whether the run enters the building (attic, walls, garage).",
+        field: metal ? undefined : `runs.${run.id}.insideBuilding`,
+      }),
+    );
   } else if (inside) {
-    results.push(makeCheck({
-      ...insideBase, status: metal ? "pass" : "fail",
-      message: metal
-        ? `${name} passes inside the building in ${enclosure === "mc-cable" ? "Type MC cable" : "metal raceway"}.`
-        : `${name} passes inside the building ${enclosure === "exposed" ? "without a raceway" : "in nonmetallic raceway"}; DC circuits inside a building must be in metal raceway or Type MC cable up to the first readily accessible disconnect.`,
-      fix: metal ? undefined : "Run it in EMT (or another metal raceway) or in Type MC cable inside the building.",
-      field: metal ? undefined : `runs.${run.id}.racewayType`,
-    }));
+    results.push(
+      makeCheck({
+        ...insideBase,
+        status: metal ? "pass" : "fail",
+        message: metal
+          ? `${name} passes inside the building in ${enclosure === "mc-cable" ? "Type MC cable" : "metal raceway"}.`
+          : `${name} passes inside the building ${enclosure === "exposed" ? "without a raceway" : "in nonmetallic raceway"}; DC circuits inside a building must be in metal raceway or Type MC cable up to the first readily accessible disconnect.`,
+        fix: metal ? undefined : "Run it in EMT (or another metal raceway) or in Type MC cable inside the building.",
+        field: metal ? undefined : `runs.${run.id}.racewayType`,
+      }),
+    );
   }
   return results;
 }

@@ -17,9 +17,19 @@ export function checkAcVoltage(record: Pick<CommissioningRecord, "edition" | "no
   const state = readingState(v);
   const rangeAText = `${fmt(rangeA.lowV)}–${fmt(rangeA.highV)} V`;
   const rangeBText = `${fmt(rangeB.lowV)}–${fmt(rangeB.highV)} V`;
-  const base = { id: "ac-voltage", title: "AC voltage at the point of connection", unit: "V", clause: ANSI_C84_1_BASIS, edition: record.edition };
+  const base = {
+    id: "ac-voltage",
+    title: "AC voltage at the point of connection",
+    unit: "V",
+    clause: ANSI_C84_1_BASIS,
+    edition: record.edition,
+  };
   if (state !== "recorded") {
-    return unrecorded("ac-voltage", state, base, { missing: `Not recorded yet: measure the AC voltage at the point of connection (expected ${rangeAText} on a ${nominalV} V service).`, invalid: "The AC voltage reading must be a number of zero or more.", fix: ENTER_AGAIN });
+    return unrecorded("ac-voltage", state, base, {
+      missing: `Not recorded yet: measure the AC voltage at the point of connection (expected ${rangeAText} on a ${nominalV} V service).`,
+      invalid: "The AC voltage reading must be a number of zero or more.",
+      fix: ENTER_AGAIN,
+    });
   }
   const reading = v as number;
   const high = reading > nominalV;

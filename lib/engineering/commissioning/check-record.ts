@@ -23,7 +23,11 @@ import type { CommissioningCheck, CommissioningRecord } from "./types";
 export function checkCommissioning(record: CommissioningRecord): CommissioningCheck[] {
   const { edition } = record;
   return [
-    ...(record.stringTests ?? []).flatMap((s) => [checkPolarity(s, edition), ...(s.vocApplies ? [checkStringVoc(s, record.vocTemperature, edition)] : []), checkInsulation(s, edition)]),
+    ...(record.stringTests ?? []).flatMap((s) => [
+      checkPolarity(s, edition),
+      ...(s.vocApplies ? [checkStringVoc(s, record.vocTemperature, edition)] : []),
+      checkInsulation(s, edition),
+    ]),
     ...(record.inverters ?? []).flatMap((unit) => [checkInverterSerial(unit, edition), checkActivation(unit, edition)]),
     checkGridProfile(record),
     ...(record.pairing ? checkDevicePairing(record.pairing, edition) : []),

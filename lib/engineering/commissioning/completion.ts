@@ -3,7 +3,13 @@
 import type { CommissioningCheck, CommissioningKind } from "./types";
 
 /** Readings every record needs; the others are needed for each string, unit or device the record lists. */
-export const REQUIRED_COMMISSIONING_KINDS: readonly CommissioningKind[] = ["grid-profile", "ac-voltage", "first-power", "rapid-shutdown-voltage", "rapid-shutdown-time"];
+export const REQUIRED_COMMISSIONING_KINDS: readonly CommissioningKind[] = [
+  "grid-profile",
+  "ac-voltage",
+  "first-power",
+  "rapid-shutdown-voltage",
+  "rapid-shutdown-time",
+];
 
 export interface CommissioningCompletion {
   complete: boolean;

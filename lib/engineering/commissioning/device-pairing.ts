@@ -12,7 +12,15 @@ import type { CommissioningCheck, DevicePairingReading } from "./types";
 
 export const PAIRING_BASIS = "the design's device count";
 
-function pairingCheck(id: string, title: string, what: string, word: string, installed: number, found: number | null | undefined, edition: NecEdition): CommissioningCheck {
+function pairingCheck(
+  id: string,
+  title: string,
+  what: string,
+  word: string,
+  installed: number,
+  found: number | null | undefined,
+  edition: NecEdition,
+): CommissioningCheck {
   requireWholePositive(installed, "pairing", `The number of ${word} installed`);
   const base = { id, title, unit: word, clause: PAIRING_BASIS, edition };
   const state = countState(found);
@@ -26,7 +34,14 @@ function pairingCheck(id: string, title: string, what: string, word: string, ins
   }
   const n = found as number;
   const said = `${n} of ${installed} ${word} ${what} found`;
-  if (n === installed) return build("device-pairing", "recorded", { ...base, status: "pass", value: n, limit: installed, message: `All ${installed} ${word} ${what} found.` });
+  if (n === installed)
+    return build("device-pairing", "recorded", {
+      ...base,
+      status: "pass",
+      value: n,
+      limit: installed,
+      message: `All ${installed} ${word} ${what} found.`,
+    });
   if (n > installed) {
     return build("device-pairing", "recorded", {
       ...base,
@@ -58,6 +73,8 @@ export function checkDevicePairing(p: DevicePairingReading, edition: NecEdition)
   const perString = p.strings
     // Per string only where the inverter shows it: a count not entered is not asked for.
     .filter((s) => s.found !== null && s.found !== undefined)
-    .map((s) => pairingCheck(`device-pairing:${s.id}`, `String ${s.id}: ${p.word} found`, `on string ${s.id}`, p.word, s.installed, s.found, edition));
+    .map((s) =>
+      pairingCheck(`device-pairing:${s.id}`, `String ${s.id}: ${p.word} found`, `on string ${s.id}`, p.word, s.installed, s.found, edition),
+    );
   return [whole, ...perString];
 }

@@ -19,10 +19,18 @@ export function parseTimeOfDay(text: string): number | null {
 }
 
 /** First power against the AC rating: above zero, at most 1.05 × the rating; very low at midday warns (common practice). */
-export function checkFirstPower(record: Pick<CommissioningRecord, "edition" | "acRatingW" | "firstPowerW" | "firstPowerTime">): CommissioningCheck {
+export function checkFirstPower(
+  record: Pick<CommissioningRecord, "edition" | "acRatingW" | "firstPowerW" | "firstPowerTime">,
+): CommissioningCheck {
   const ratingW = requirePositive(record.acRatingW, "acRatingW", "The system's AC rating");
   const maxW = FIRST_POWER_MAX_FRACTION * ratingW;
-  const base = { id: "first-power", title: "First power reading", unit: "W", clause: `the system's AC rating (${fmt(ratingW)} W)`, edition: record.edition };
+  const base = {
+    id: "first-power",
+    title: "First power reading",
+    unit: "W",
+    clause: `the system's AC rating (${fmt(ratingW)} W)`,
+    edition: record.edition,
+  };
   const w = record.firstPowerW;
   const time = record.firstPowerTime?.trim() ?? "";
   const powerState: ReadingState = w === null || w === undefined ? "missing" : Number.isFinite(w) ? "recorded" : "invalid";
@@ -34,7 +42,10 @@ export function checkFirstPower(record: Pick<CommissioningRecord, "edition" | "a
       status: "fail",
       value: null,
       limit: maxW,
-      message: powerState === "invalid" ? "The first power reading must be a number of watts." : `"${time}" is not a time of day; use HH:MM, 24-hour.`,
+      message:
+        powerState === "invalid"
+          ? "The first power reading must be a number of watts."
+          : `"${time}" is not a time of day; use HH:MM, 24-hour.`,
       fix: "Enter the power in watts and the time as HH:MM.",
     });
   }
@@ -71,9 +82,7 @@ export function checkFirstPower(record: Pick<CommissioningRecord, "edition" | "a
     status: low ? "warn" : "pass",
     value: watts,
     limit: low ? MIDDAY_LOW_FRACTION * ratingW : maxW,
-    message: low
-      ? `${at} is under 10 % of the ${fmt(ratingW)} W rating at midday.`
-      : `${at} is plausible for a ${fmt(ratingW)} W system.`,
+    message: low ? `${at} is under 10 % of the ${fmt(ratingW)} W rating at midday.` : `${at} is plausible for a ${fmt(ratingW)} W system.`,
     fix: low ? "If the sky is clear, check for strings not producing, shading or a setting that limits output." : undefined,
   });
 }

@@ -9,11 +9,30 @@ export const UTILITY_PROFILE_BASIS = "utility interconnection requirement";
 
 /** Lower case, letters and digits only: "IEEE 1547-2018" and "ieee1547 2018" are the same text. */
 export function normalizeProfile(text: string | null | undefined): string {
-  return (text ?? "").normalize("NFKC").toLowerCase().replace(/[^\p{L}\p{N}]+/gu, "");
+  return (text ?? "")
+    .normalize("NFKC")
+    .toLowerCase()
+    .replace(/[^\p{L}\p{N}]+/gu, "");
 }
 
 // Words that name a profile without changing which one it is. Not "a": Category A is a profile.
-const FILLER = new Set(["the", "utility", "utilities", "s", "default", "defaults", "setting", "settings", "profile", "grid", "mode", "and", "per", "its", "with"]);
+const FILLER = new Set([
+  "the",
+  "utility",
+  "utilities",
+  "s",
+  "default",
+  "defaults",
+  "setting",
+  "settings",
+  "profile",
+  "grid",
+  "mode",
+  "and",
+  "per",
+  "its",
+  "with",
+]);
 const ROMAN: Record<string, string> = { i: "1", ii: "2", iii: "3" };
 
 /**
@@ -39,7 +58,10 @@ export function profileWords(text: string | null | undefined): string[] {
 }
 
 /** The accepted profile a text names, or null: exactly the same letters and digits, or the same deciding words. */
-export function matchAcceptedProfile(set: string | null | undefined, accepted: readonly string[]): { profile: string; exact: boolean } | null {
+export function matchAcceptedProfile(
+  set: string | null | undefined,
+  accepted: readonly string[],
+): { profile: string; exact: boolean } | null {
   const exact = accepted.find((p) => normalizeProfile(p) !== "" && normalizeProfile(p) === normalizeProfile(set));
   if (exact) return { profile: exact, exact: true };
   const words = profileWords(set).join(" ");
@@ -50,25 +72,48 @@ export function matchAcceptedProfile(set: string | null | undefined, accepted: r
 
 const listed = (profiles: readonly string[]) => profiles.map((p) => `"${p.trim()}"`).join(" or ");
 
-export function checkGridProfile(record: Pick<CommissioningRecord, "edition" | "acceptedGridProfiles" | "gridProfileSet">): CommissioningCheck {
-  const base: CheckBase = { id: "grid-profile", title: "Grid profile on the inverter", unit: "", clause: UTILITY_PROFILE_BASIS, edition: record.edition };
+export function checkGridProfile(
+  record: Pick<CommissioningRecord, "edition" | "acceptedGridProfiles" | "gridProfileSet">,
+): CommissioningCheck {
+  const base: CheckBase = {
+    id: "grid-profile",
+    title: "Grid profile on the inverter",
+    unit: "",
+    clause: UTILITY_PROFILE_BASIS,
+    edition: record.edition,
+  };
   const accepted = record.acceptedGridProfiles.map((p) => p.trim()).filter((p) => normalizeProfile(p) !== "");
   const set = record.gridProfileSet?.trim() ?? "";
   const reading = normalizeProfile(set) === "" ? "missing" : "recorded";
-  const result = (status: "pass" | "warn" | "fail", message: string, fix?: string) => build("grid-profile", reading, { ...base, status, value: null, limit: null, message, fix });
+  const result = (status: "pass" | "warn" | "fail", message: string, fix?: string) =>
+    build("grid-profile", reading, { ...base, status, value: null, limit: null, message, fix });
   if (accepted.length === 0) {
-    return result("fail", "The profiles the utility accepts are not on file, so the inverter's setting cannot be checked.", "Ask the office to enter the utility's accepted grid profiles (Settings → Utilities).");
+    return result(
+      "fail",
+      "The profiles the utility accepts are not on file, so the inverter's setting cannot be checked.",
+      "Ask the office to enter the utility's accepted grid profiles (Settings → Utilities).",
+    );
   }
   if (reading === "missing") {
     // Like every reading not taken yet, this warns: the record can be saved and finished later.
-    return result("warn", `The grid profile chosen on the inverter is not recorded; the utility accepts ${listed(accepted)}.`, "Choose the profile on the inverter's settings screen or app, read it back and record it.");
+    return result(
+      "warn",
+      `The grid profile chosen on the inverter is not recorded; the utility accepts ${listed(accepted)}.`,
+      "Choose the profile on the inverter's settings screen or app, read it back and record it.",
+    );
   }
   const match = matchAcceptedProfile(set, accepted);
   if (!match) {
-    return result("fail", `The inverter is set to "${set}", which is not a profile the utility accepts (${listed(accepted)}).`, `Change the inverter's grid profile to ${listed(accepted)} and read it back.`);
+    return result(
+      "fail",
+      `The inverter is set to "${set}", which is not a profile the utility accepts (${listed(accepted)}).`,
+      `Change the inverter's grid profile to ${listed(accepted)} and read it back.`,
+    );
   }
   return result(
     "pass",
-    match.exact ? `The inverter is set to "${set}", a profile the utility accepts.` : `The inverter is set to "${set}", which names the accepted profile "${match.profile}".`,
+    match.exact
+      ? `The inverter is set to "${set}", a profile the utility accepts.`
+      : `The inverter is set to "${set}", which names the accepted profile "${match.profile}".`,
   );
 }

@@ -31,7 +31,13 @@ export function insulationRequirement(stringVocV: number): { testV: number; minM
 
 export function checkInsulation(s: StringTestReading, edition: NecEdition): CommissioningCheck {
   const { testV, minMohm } = insulationRequirement(s.modulesInSeries * s.moduleVocV);
-  const base = { id: `string-insulation:${s.id}`, title: `String ${s.id} insulation resistance`, unit: "MΩ", clause: INSULATION_BASIS, edition };
+  const base = {
+    id: `string-insulation:${s.id}`,
+    title: `String ${s.id} insulation resistance`,
+    unit: "MΩ",
+    clause: INSULATION_BASIS,
+    edition,
+  };
   const state = readingState(s.insulationMohm);
   if (state !== "recorded") {
     return unrecorded("string-insulation", state, base, {

@@ -16,22 +16,41 @@ export const MIN_SERIAL_CHARS = 4;
  * alike (O and 0) are not merged: they are different serials.
  */
 export function normalizeSerial(text: string | null | undefined): string {
-  return (text ?? "")
-    .normalize("NFKC")
-    .trim()
-    // "SN" alone needs a separator after it, or the first letters of a serial like "SN4471" would go.
-    .replace(/^(?:s\/n\s*[:#.]?\s*|sn\s*[:#]\s*|sn\s+|serial(?:\s*(?:no\.?|number))?\s*[:#.]?\s*)/i, "")
-    .toUpperCase()
-    .replace(/[^\p{L}\p{N}]+/gu, "");
+  return (
+    (text ?? "")
+      .normalize("NFKC")
+      .trim()
+      // "SN" alone needs a separator after it, or the first letters of a serial like "SN4471" would go.
+      .replace(/^(?:s\/n\s*[:#.]?\s*|sn\s*[:#]\s*|sn\s+|serial(?:\s*(?:no\.?|number))?\s*[:#.]?\s*)/i, "")
+      .toUpperCase()
+      .replace(/[^\p{L}\p{N}]+/gu, "")
+  );
 }
 
 export function checkInverterSerial(unit: InverterUnitReading, edition: NecEdition): CommissioningCheck {
-  const base = { id: `inverter-serial:${unit.id}`, title: `${unit.label} serial against its activation card`, unit: "", clause: ACTIVATION_BASIS, edition, value: null, limit: null };
+  const base = {
+    id: `inverter-serial:${unit.id}`,
+    title: `${unit.label} serial against its activation card`,
+    unit: "",
+    clause: ACTIVATION_BASIS,
+    edition,
+    value: null,
+    limit: null,
+  };
   const serial = normalizeSerial(unit.serial);
   const card = normalizeSerial(unit.cardSerial);
   if (serial === "" || card === "") {
-    const which = serial === "" && card === "" ? "the serial on the unit's label and the one on its activation card" : serial === "" ? "the serial on the unit's label" : "the serial printed on the activation card";
-    return build("inverter-serial", "missing", { ...base, status: "warn", message: `Not recorded yet: ${which}. Type it or scan its barcode.` });
+    const which =
+      serial === "" && card === ""
+        ? "the serial on the unit's label and the one on its activation card"
+        : serial === ""
+          ? "the serial on the unit's label"
+          : "the serial printed on the activation card";
+    return build("inverter-serial", "missing", {
+      ...base,
+      status: "warn",
+      message: `Not recorded yet: ${which}. Type it or scan its barcode.`,
+    });
   }
   const tooShort = [serial, card].find((s) => s.length < MIN_SERIAL_CHARS);
   if (tooShort) {
@@ -46,7 +65,11 @@ export function checkInverterSerial(unit: InverterUnitReading, edition: NecEditi
   return build("inverter-serial", "recorded", {
     ...base,
     status: ok ? "pass" : "fail",
-    message: ok ? `The activation card names this unit's serial, ${serial}.` : `The activation card names serial ${card}, but this unit's label says ${serial}: the card belongs to another unit.`,
-    fix: ok ? undefined : "Do not activate with this card. Find the card that shipped in this unit's box (or ask the maker for this serial's key), and check that the label you read is this unit's.",
+    message: ok
+      ? `The activation card names this unit's serial, ${serial}.`
+      : `The activation card names serial ${card}, but this unit's label says ${serial}: the card belongs to another unit.`,
+    fix: ok
+      ? undefined
+      : "Do not activate with this card. Find the card that shipped in this unit's box (or ask the maker for this serial's key), and check that the label you read is this unit's.",
   });
 }

@@ -10,9 +10,17 @@ import type { CommissioningCheck, CommissioningRecord, ReadingState } from "./ty
 export const MODULE_COUNT_BASIS = "the design's module count";
 
 /** Every module installed reports in the monitoring (common practice); asked only where the system has module-level monitoring. */
-export function checkModulesReporting(record: Pick<CommissioningRecord, "edition" | "modulesInstalled" | "modulesReporting">): CommissioningCheck {
+export function checkModulesReporting(
+  record: Pick<CommissioningRecord, "edition" | "modulesInstalled" | "modulesReporting">,
+): CommissioningCheck {
   const installed = requireWholePositive(record.modulesInstalled, "modulesInstalled", "The number of modules installed");
-  const base = { id: "modules-reporting", title: "Modules reporting", unit: "modules", clause: MODULE_COUNT_BASIS, edition: record.edition };
+  const base = {
+    id: "modules-reporting",
+    title: "Modules reporting",
+    unit: "modules",
+    clause: MODULE_COUNT_BASIS,
+    edition: record.edition,
+  };
   const n = record.modulesReporting;
   const state: ReadingState = countState(n);
   if (state !== "recorded") {

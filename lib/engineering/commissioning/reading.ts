@@ -11,7 +11,12 @@ export function readingState(value: Reading): ReadingState {
   return Number.isFinite(value) && value >= 0 ? "recorded" : "invalid";
 }
 
-export function build(kind: CommissioningKind, reading: ReadingState, input: CheckInput, extra: { waiting?: boolean } = {}): CommissioningCheck {
+export function build(
+  kind: CommissioningKind,
+  reading: ReadingState,
+  input: CheckInput,
+  extra: { waiting?: boolean } = {},
+): CommissioningCheck {
   return { ...makeCheck(input), kind, reading, ...(extra.waiting ? { waiting: true } : {}) };
 }
 
@@ -20,7 +25,12 @@ export const ENTER_AGAIN = "Enter the voltage as read on the meter, in volts.";
 export type CheckBase = Omit<CheckInput, "status" | "value" | "limit" | "message" | "fix">;
 
 /** A reading not taken yet warns (the record can be saved and resumed); one that is not a number fails. */
-export function unrecorded(kind: CommissioningKind, state: Exclude<ReadingState, "recorded">, base: CheckBase, text: { missing: string; invalid: string; fix?: string; limit?: number }): CommissioningCheck {
+export function unrecorded(
+  kind: CommissioningKind,
+  state: Exclude<ReadingState, "recorded">,
+  base: CheckBase,
+  text: { missing: string; invalid: string; fix?: string; limit?: number },
+): CommissioningCheck {
   return build(kind, state, {
     ...base,
     status: state === "missing" ? "warn" : "fail",

@@ -4,7 +4,12 @@
 import { atLeast, atMost, fmt, plural } from "../check-result";
 import { clause } from "../clauses";
 import { requirePositive, requireWholePositive } from "../errors";
-import { DEFAULT_SHUTDOWN_V_PER_DEVICE, INSIDE_BOUNDARY_MAX_V, OUTSIDE_BOUNDARY_MAX_V, shutdownStringVoltageV } from "../checks/rapid-shutdown";
+import {
+  DEFAULT_SHUTDOWN_V_PER_DEVICE,
+  INSIDE_BOUNDARY_MAX_V,
+  OUTSIDE_BOUNDARY_MAX_V,
+  shutdownStringVoltageV,
+} from "../checks/rapid-shutdown";
 import type { Design, NecEdition } from "../types";
 import { ENTER_AGAIN, build, readingState, unrecorded } from "./reading";
 import type { CommissioningCheck, ShutdownStringReading } from "./types";
@@ -58,7 +63,11 @@ export function checkShutdownString(s: ShutdownStringReading, edition: NecEditio
   };
   const state = readingState(s.measuredV);
   if (state !== "recorded") {
-    return unrecorded("string-shutdown", state, base, { missing: `Not recorded yet: with the array shut down, string ${s.id}'s ${devices} should read about ${fmt(expectedV)} V (${windowText}).`, invalid: `String ${s.id}'s reading must be a number of zero or more.`, fix: ENTER_AGAIN });
+    return unrecorded("string-shutdown", state, base, {
+      missing: `Not recorded yet: with the array shut down, string ${s.id}'s ${devices} should read about ${fmt(expectedV)} V (${windowText}).`,
+      invalid: `String ${s.id}'s reading must be a number of zero or more.`,
+      fix: ENTER_AGAIN,
+    });
   }
   const v = s.measuredV as number;
   const overCode = !atMost(v, codeLimitV);

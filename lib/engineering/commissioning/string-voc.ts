@@ -33,7 +33,10 @@ export interface VocWindow {
 }
 
 /** The string Voc to expect at the temperature read, ±5 %; from an air temperature the cells may be up to 30 °C warmer. */
-export function stringVocWindow(s: Pick<StringTestReading, "modulesInSeries" | "moduleVocV" | "vocTempCoeff">, t: { tempC: number; source: VocTemperature["source"] }): VocWindow {
+export function stringVocWindow(
+  s: Pick<StringTestReading, "modulesInSeries" | "moduleVocV" | "vocTempCoeff">,
+  t: { tempC: number; source: VocTemperature["source"] },
+): VocWindow {
   const n = requireWholePositive(s.modulesInSeries, "strings", "The number of modules in series");
   const voc = requirePositive(s.moduleVocV, "strings", "The module's Voc");
   const coeff = s.vocTempCoeff ?? TYPICAL_VOC_COEFF;
@@ -46,7 +49,13 @@ export function stringVocWindow(s: Pick<StringTestReading, "modulesInSeries" | "
 export const VOC_BASIS = "module data sheet Voc, corrected as in";
 
 export function checkStringVoc(s: StringTestReading, temperature: VocTemperature | undefined, edition: NecEdition): CommissioningCheck {
-  const base = { id: `string-voc:${s.id}`, title: `String ${s.id} open-circuit voltage`, unit: "V", clause: `${VOC_BASIS} ${clause("maxVoltage", edition)}(1)`, edition };
+  const base = {
+    id: `string-voc:${s.id}`,
+    title: `String ${s.id} open-circuit voltage`,
+    unit: "V",
+    clause: `${VOC_BASIS} ${clause("maxVoltage", edition)}(1)`,
+    edition,
+  };
   const modules = plural(s.modulesInSeries, "module");
   const tempC = temperature?.tempC;
   const v = s.vocV;
@@ -62,9 +71,19 @@ export function checkStringVoc(s: StringTestReading, temperature: VocTemperature
   }
   if (v === null || v === undefined || !Number.isFinite(v)) {
     const state = v === null || v === undefined ? "missing" : "invalid";
-    return unrecorded("string-voc", state, base, { missing: `Not recorded yet: measure string ${s.id}'s open-circuit voltage (${modules}) before connecting it, with the temperature.`, invalid: `String ${s.id}'s Voc must be a number.`, fix: ENTER_AGAIN });
+    return unrecorded("string-voc", state, base, {
+      missing: `Not recorded yet: measure string ${s.id}'s open-circuit voltage (${modules}) before connecting it, with the temperature.`,
+      invalid: `String ${s.id}'s Voc must be a number.`,
+      fix: ENTER_AGAIN,
+    });
   }
-  if (tempC === null || tempC === undefined || !Number.isFinite(tempC) || tempC < VOC_TEMPERATURE_RANGE_C.min || tempC > VOC_TEMPERATURE_RANGE_C.max) {
+  if (
+    tempC === null ||
+    tempC === undefined ||
+    !Number.isFinite(tempC) ||
+    tempC < VOC_TEMPERATURE_RANGE_C.min ||
+    tempC > VOC_TEMPERATURE_RANGE_C.max
+  ) {
     const missing = tempC === null || tempC === undefined;
     return build("string-voc", missing ? "missing" : "invalid", {
       ...base,
@@ -78,7 +97,10 @@ export function checkStringVoc(s: StringTestReading, temperature: VocTemperature
     });
   }
   const w = stringVocWindow(s, { tempC, source: temperature!.source });
-  const at = temperature!.source === "ambient" ? `cells at ${fmt(w.cellC.low)}–${fmt(w.cellC.high)} °C (air ${fmt(tempC)} °C)` : `a module at ${fmt(tempC)} °C`;
+  const at =
+    temperature!.source === "ambient"
+      ? `cells at ${fmt(w.cellC.low)}–${fmt(w.cellC.high)} °C (air ${fmt(tempC)} °C)`
+      : `a module at ${fmt(tempC)} °C`;
   const windowText = `${fmt(w.lowV, 1)}–${fmt(w.highV, 1)} V`;
   const ok = atLeast(v, w.lowV) && atMost(v, w.highV);
   const moduleAt = moduleVocAtV(s.moduleVocV, s.vocTempCoeff ?? TYPICAL_VOC_COEFF, (w.cellC.low + w.cellC.high) / 2);

@@ -13,7 +13,10 @@ const ROWS: readonly { upTo: number; factor: number }[] = [
 
 export function conductorCountAdjustmentFactor(currentCarryingConductors: number): number {
   if (!Number.isInteger(currentCarryingConductors) || currentCarryingConductors < 1) {
-    throw new DesignInputError("currentCarryingConductors", "The number of current-carrying conductors must be a whole number of at least 1.");
+    throw new DesignInputError(
+      "currentCarryingConductors",
+      "The number of current-carrying conductors must be a whole number of at least 1.",
+    );
   }
   return ROWS.find((r) => currentCarryingConductors <= r.upTo)!.factor;
 }

@@ -37,18 +37,16 @@ const COLUMN: Record<ConductorMaterial, Record<TerminalTempC, number>> = {
 };
 
 /** Allowable ampacity before conditions of use, from the column of the given temperature. */
-export function tableAmpacityA(
-  size: string,
-  material: ConductorMaterial,
-  columnC: TerminalTempC,
-  edition: NecEdition = 2023,
-): number {
+export function tableAmpacityA(size: string, material: ConductorMaterial, columnC: TerminalTempC, edition: NecEdition = 2023): number {
   if (!isConductorSize(size)) {
     throw new DesignInputError("conductor.size", `Conductor size "${size}" is not in the ampacity table (14 AWG to 300 kcmil).`);
   }
   const value = TABLE_BY_EDITION[edition][size][COLUMN[material][columnC]]!;
   if (value === 0) {
-    throw new DesignInputError("conductor.size", `${size} AWG ${material === "Al" ? "aluminum" : "copper"} is not listed in the ampacity table.`);
+    throw new DesignInputError(
+      "conductor.size",
+      `${size} AWG ${material === "Al" ? "aluminum" : "copper"} is not listed in the ampacity table.`,
+    );
   }
   return value;
 }

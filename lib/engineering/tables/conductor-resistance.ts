@@ -39,16 +39,23 @@ export function resistanceOhmPerKft(
     throw new DesignInputError("conductor.size", `Conductor size "${size}" is not in Chapter 9 Table 8 (14 AWG to 300 kcmil).`);
   }
   const row = TABLE_8[size];
-  const r = material === "Al" ? (stranding === "solid" ? row.alSolid : row.alStranded) : stranding === "solid" ? row.cuSolid : row.cuStranded;
+  const r =
+    material === "Al" ? (stranding === "solid" ? row.alSolid : row.alStranded) : stranding === "solid" ? row.cuSolid : row.cuStranded;
   if (r === null) {
-    throw new DesignInputError("conductor.stranding", `Chapter 9 Table 8 lists ${size} AWG ${material === "Al" ? "aluminum" : "copper"} as stranded only.`);
+    throw new DesignInputError(
+      "conductor.stranding",
+      `Chapter 9 Table 8 lists ${size} AWG ${material === "Al" ? "aluminum" : "copper"} as stranded only.`,
+    );
   }
   if (conductorTempC === undefined) return r;
   requireFinite(conductorTempC, "conductor.conductorTempC", "The conductor temperature");
   const corrected = r * (1 + RESISTANCE_TEMP_COEFF_PER_C[material] * (conductorTempC - 75));
   // The linear correction goes negative far below any outdoor temperature; refuse rather than report a gain.
   if (!(corrected > 0)) {
-    throw new DesignInputError("conductor.conductorTempC", `A conductor temperature of ${conductorTempC} °C is outside the range Table 8 can be corrected to.`);
+    throw new DesignInputError(
+      "conductor.conductorTempC",
+      `A conductor temperature of ${conductorTempC} °C is outside the range Table 8 can be corrected to.`,
+    );
   }
   return corrected;
 }

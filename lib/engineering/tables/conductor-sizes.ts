@@ -1,7 +1,5 @@
 // Conductor sizes in the order of NEC Table 310.16 rows (AWG, then kcmil), smallest first.
-export const CONDUCTOR_SIZES = [
-  "14", "12", "10", "8", "6", "4", "3", "2", "1", "1/0", "2/0", "3/0", "4/0", "250", "300",
-] as const;
+export const CONDUCTOR_SIZES = ["14", "12", "10", "8", "6", "4", "3", "2", "1", "1/0", "2/0", "3/0", "4/0", "250", "300"] as const;
 
 export type ConductorSize = (typeof CONDUCTOR_SIZES)[number];
 

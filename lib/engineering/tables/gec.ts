@@ -12,7 +12,10 @@ const TABLE_250_66: readonly { cuUpTo: ConductorSize; alUpTo: ConductorSize; Cu:
 ];
 
 /** Table 250.66 size for a GEC of `gecMaterial`, given the largest service-entrance conductor. */
-export function table250_66GecSize(service: { size: ConductorSize; material: ConductorMaterial }, gecMaterial: ConductorMaterial): ConductorSize {
+export function table250_66GecSize(
+  service: { size: ConductorSize; material: ConductorMaterial },
+  gecMaterial: ConductorMaterial,
+): ConductorSize {
   const row = TABLE_250_66.find((r) => sizeIndex(service.size) <= sizeIndex(service.material === "Cu" ? r.cuUpTo : r.alUpTo))!;
   return row[gecMaterial];
 }

@@ -4,8 +4,8 @@ import type { NecEdition } from "../types";
 // NEC 240.6(A) standard ampere ratings of fuses and inverse-time breakers. 15–1000 A confirmed for 2017
 // (REFERENCE.md); 1200–6000 A from memory. 2020 kept the list (from memory).
 export const STANDARD_OCPD_RATINGS_A: readonly number[] = [
-  15, 20, 25, 30, 35, 40, 45, 50, 60, 70, 80, 90, 100, 110, 125, 150, 175, 200, 225, 250, 300,
-  350, 400, 450, 500, 600, 700, 800, 1000, 1200, 1600, 2000, 2500, 3000, 4000, 5000, 6000,
+  15, 20, 25, 30, 35, 40, 45, 50, 60, 70, 80, 90, 100, 110, 125, 150, 175, 200, 225, 250, 300, 350, 400, 450, 500, 600, 700, 800, 1000,
+  1200, 1600, 2000, 2500, 3000, 4000, 5000, 6000,
 ];
 
 // NEC 2023 made the list Table 240.6(A) and added 10 A for breakers as well as fuses, to go with

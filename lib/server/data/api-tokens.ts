@@ -17,7 +17,14 @@ const MAX_ACTIVE_TOKENS = 25;
 const LAST_USED_PRECISION_MS = 60_000;
 
 function toDto(row: ApiToken, createdByName: string | null): ApiTokenDto {
-  return { id: row.id, name: row.name, createdAt: row.createdAt.toISOString(), createdByName, lastUsedAt: row.lastUsedAt?.toISOString() ?? null, revokedAt: row.revokedAt?.toISOString() ?? null };
+  return {
+    id: row.id,
+    name: row.name,
+    createdAt: row.createdAt.toISOString(),
+    createdByName,
+    lastUsedAt: row.lastUsedAt?.toISOString() ?? null,
+    revokedAt: row.revokedAt?.toISOString() ?? null,
+  };
 }
 
 function assertManager(viewer: Viewer) {
@@ -25,14 +32,33 @@ function assertManager(viewer: Viewer) {
 }
 
 /** Makes a token for the viewer's organization. The token is in this answer only; the database keeps its SHA-256. */
-export async function createApiToken({ viewer, input }: { viewer: Viewer; input: CreateApiTokenInput }): Promise<{ token: string; apiToken: ApiTokenDto }> {
+export async function createApiToken({
+  viewer,
+  input,
+}: {
+  viewer: Viewer;
+  input: CreateApiTokenInput;
+}): Promise<{ token: string; apiToken: ApiTokenDto }> {
   assertManager(viewer);
   const token = `${API_TOKEN_PREFIX}${newToken().token}`;
   const row = await db().transaction(async (transaction) => {
     const active = await ApiToken.count({ where: { organizationId: viewer.organizationId, revokedAt: null }, transaction });
-    if (active >= MAX_ACTIVE_TOKENS) throw new AppError("LIMIT_EXCEEDED", `An organization can hold ${MAX_ACTIVE_TOKENS} active tokens; revoke one you no longer use.`);
-    const created = await ApiToken.create({ organizationId: viewer.organizationId, name: input.name, tokenHash: hashToken(token), createdById: viewer.id }, { transaction });
-    await recordAudit({ viewer, action: "api-token.created", entityType: "api-token", entityId: created.id, changes: { name: { before: null, after: input.name } } }, { transaction });
+    if (active >= MAX_ACTIVE_TOKENS)
+      throw new AppError("LIMIT_EXCEEDED", `An organization can hold ${MAX_ACTIVE_TOKENS} active tokens; revoke one you no longer use.`);
+    const created = await ApiToken.create(
+      { organizationId: viewer.organizationId, name: input.name, tokenHash: hashToken(token), createdById: viewer.id },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        viewer,
+        action: "api-token.created",
+        entityType: "api-token",
+        entityId: created.id,
+        changes: { name: { before: null, after: input.name } },
+      },
+      { transaction },
+    );
     return created;
   });
   return { token, apiToken: toDto(row, viewer.name) };
@@ -56,11 +82,26 @@ export async function revokeApiToken({ viewer, apiTokenId }: { viewer: Viewer; a
   assertManager(viewer);
   return db().transaction(async (transaction) => {
     // A malformed id is just another token the viewer cannot see.
-    const row = isUuid(apiTokenId) ? await ApiToken.findOne({ where: { id: apiTokenId, organizationId: viewer.organizationId }, transaction, lock: transaction.LOCK.UPDATE }) : null;
+    const row = isUuid(apiTokenId)
+      ? await ApiToken.findOne({
+          where: { id: apiTokenId, organizationId: viewer.organizationId },
+          transaction,
+          lock: transaction.LOCK.UPDATE,
+        })
+      : null;
     if (!row) throw new AppError("NOT_FOUND", "No such API token.");
     if (!row.revokedAt) {
       await row.update({ revokedAt: new Date() }, { transaction });
-      await recordAudit({ viewer, action: "api-token.revoked", entityType: "api-token", entityId: row.id, changes: { revokedAt: { before: null, after: row.revokedAt!.toISOString() } } }, { transaction });
+      await recordAudit(
+        {
+          viewer,
+          action: "api-token.revoked",
+          entityType: "api-token",
+          entityId: row.id,
+          changes: { revokedAt: { before: null, after: row.revokedAt!.toISOString() } },
+        },
+        { transaction },
+      );
     }
     const creator = row.createdById ? await User.findByPk(row.createdById, { attributes: ["name"], transaction }) : null;
     return toDto(row, creator?.name ?? null);
@@ -82,5 +123,12 @@ export async function getViewerByApiToken(token: string): Promise<Viewer | null>
     await ApiToken.update({ lastUsedAt: new Date() }, { where: { id: row.id } });
   }
   // The role only sets the scope (the whole organization, not an installer's projects); apiTokenId limits what it may do.
-  return { id: row.id, organizationId: row.organizationId, role: "coordinator", name: `API token "${row.name}"`, email: "", apiTokenId: row.id };
+  return {
+    id: row.id,
+    organizationId: row.organizationId,
+    role: "coordinator",
+    name: `API token "${row.name}"`,
+    email: "",
+    apiTokenId: row.id,
+  };
 }

@@ -22,16 +22,33 @@ export type AuditActor = Pick<Viewer, "organizationId"> & { id: string | null };
 
 /** Writes one audit event; pass the caller's transaction so it commits or rolls back with the change. */
 export async function recordAudit(
-  { viewer, action, entityType, entityId, changes = {} }: { viewer: AuditActor | null; action: string; entityType: string; entityId: string; changes?: AuditChanges },
+  {
+    viewer,
+    action,
+    entityType,
+    entityId,
+    changes = {},
+  }: { viewer: AuditActor | null; action: string; entityType: string; entityId: string; changes?: AuditChanges },
   { transaction }: { transaction?: Transaction } = {},
 ) {
   db();
   if (!viewer) throw new Error("recordAudit needs a viewer");
-  await AuditEvent.create({ organizationId: viewer.organizationId, actorId: viewer.id, action, entityType, entityId, changes }, { transaction });
+  await AuditEvent.create(
+    { organizationId: viewer.organizationId, actorId: viewer.id, action, entityType, entityId, changes },
+    { transaction },
+  );
 }
 
 /** The audit trail of one entity, newest first, within the viewer's organization. */
-export async function listAuditEvents({ viewer, entityType, entityId }: { viewer: Viewer; entityType: string; entityId: string }): Promise<AuditEventDto[]> {
+export async function listAuditEvents({
+  viewer,
+  entityType,
+  entityId,
+}: {
+  viewer: Viewer;
+  entityType: string;
+  entityId: string;
+}): Promise<AuditEventDto[]> {
   db();
   const rows = await AuditEvent.findAll({
     where: { organizationId: viewer.organizationId, entityType, entityId },

@@ -25,7 +25,15 @@ export type JurisdictionDto = {
   requiredInspections: string[];
   notes: string;
 };
-export type UtilityDto = { id: string; name: string; serviceVoltages: string[]; acceptedGridProfiles: string[]; reviewDays: number; requiredInspections: string[]; notes: string };
+export type UtilityDto = {
+  id: string;
+  name: string;
+  serviceVoltages: string[];
+  acceptedGridProfiles: string[];
+  reviewDays: number;
+  requiredInspections: string[];
+  notes: string;
+};
 export type AuthorityDto<K extends AuthorityKind> = K extends "jurisdiction" ? JurisdictionDto : UtilityDto;
 export type AuthorityValues<K extends AuthorityKind> = K extends "jurisdiction" ? JurisdictionValues : UtilityValues;
 
@@ -43,7 +51,8 @@ const STORES: Record<AuthorityKind, KindStore> = {
     list: (organizationId) => Jurisdiction.findAll({ where: { organizationId }, order: [["name", "ASC"]] }),
     create: (values, transaction) => Jurisdiction.create(values as never, { transaction }),
     toDto: (row) => {
-      const { id, name, state, necEdition, recordLowTempC, highDesignTempC, reviewDays, permitValidDays, requiredInspections, notes } = row as Jurisdiction;
+      const { id, name, state, necEdition, recordLowTempC, highDesignTempC, reviewDays, permitValidDays, requiredInspections, notes } =
+        row as Jurisdiction;
       return { id, name, state, necEdition, recordLowTempC, highDesignTempC, reviewDays, permitValidDays, requiredInspections, notes };
     },
   },
@@ -72,7 +81,15 @@ export async function listAuthorities<K extends AuthorityKind>({ viewer, kind }:
 }
 
 /** One authority of the viewer's organization; NOT_FOUND for missing and foreign ids alike. */
-export async function getAuthorityById<K extends AuthorityKind>({ viewer, kind, authorityId }: { viewer: Viewer; kind: K; authorityId: string }): Promise<AuthorityDto<K>> {
+export async function getAuthorityById<K extends AuthorityKind>({
+  viewer,
+  kind,
+  authorityId,
+}: {
+  viewer: Viewer;
+  kind: K;
+  authorityId: string;
+}): Promise<AuthorityDto<K>> {
   db();
   return STORES[kind].toDto(await findOwn(kind, viewer, authorityId)) as AuthorityDto<K>;
 }
@@ -81,14 +98,31 @@ export async function getAuthorityById<K extends AuthorityKind>({ viewer, kind, 
  * Adds an authority (no id) or changes one (admins), audited in the same transaction. Reviews read an
  * AHJ's edition and temperatures from their next run on; the field record reads a utility's profiles.
  */
-export async function saveAuthority<K extends AuthorityKind>({ viewer, kind, authorityId, values }: { viewer: Viewer; kind: K; authorityId?: string; values: AuthorityValues<K> }): Promise<AuthorityDto<K>> {
+export async function saveAuthority<K extends AuthorityKind>({
+  viewer,
+  kind,
+  authorityId,
+  values,
+}: {
+  viewer: Viewer;
+  kind: K;
+  authorityId?: string;
+  values: AuthorityValues<K>;
+}): Promise<AuthorityDto<K>> {
   if (!can(viewer, "reference:edit")) throw new AppError("FORBIDDEN", "Only admins can change jurisdictions and utilities.");
   const store = STORES[kind];
-  const row = await writeWithAudit({ viewer, action: `${kind}.${authorityId ? "updated" : "created"}`, entityType: kind }, async (transaction) => {
-    if (!authorityId) return { row: await store.create({ organizationId: viewer.organizationId, ...values }, transaction), changes: diffFields<Record<string, unknown>>({}, values) };
-    const found = await findOwn(kind, viewer, authorityId, transaction);
-    const changes = diffFields<Record<string, unknown>>(store.toDto(found), values);
-    return { row: await (found as Jurisdiction).update(values as never, { transaction }), changes };
-  });
+  const row = await writeWithAudit(
+    { viewer, action: `${kind}.${authorityId ? "updated" : "created"}`, entityType: kind },
+    async (transaction) => {
+      if (!authorityId)
+        return {
+          row: await store.create({ organizationId: viewer.organizationId, ...values }, transaction),
+          changes: diffFields<Record<string, unknown>>({}, values),
+        };
+      const found = await findOwn(kind, viewer, authorityId, transaction);
+      const changes = diffFields<Record<string, unknown>>(store.toDto(found), values);
+      return { row: await (found as Jurisdiction).update(values as never, { transaction }), changes };
+    },
+  );
   return store.toDto(row) as AuthorityDto<K>;
 }

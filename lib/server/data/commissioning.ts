@@ -3,7 +3,13 @@ import { CommissioningRecord, Project, ProjectFile, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { checkCommissioning, commissioningComplete, type CommissioningCompletion } from "@/lib/engineering/commissioning";
 import { AppError } from "@/lib/errors";
-import { commissioningFacts, emptyReadings, moduleMonitoringOf, toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
+import {
+  commissioningFacts,
+  emptyReadings,
+  moduleMonitoringOf,
+  toCommissioningRecord,
+  type CommissioningFacts,
+} from "@/lib/field/commissioning-facts";
 import type { CommissioningDocumentInput, CommissioningDocumentKind } from "@/lib/documents/commissioning/input";
 import { openCountsInWords } from "@/lib/field/completion-words";
 import type { ReviewedDesign } from "@/lib/dto/reviewed-design";
@@ -21,7 +27,11 @@ export type CommissioningContext = { reviewed: ReviewedDesign; facts: Commission
 /** The design facts a record is checked against; CONFLICT while the design cannot be reviewed. */
 export async function getCommissioningContext({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<CommissioningContext> {
   const snapshot = await getReviewedDesign({ viewer, projectId });
-  if (snapshot.status !== "reviewed") throw new AppError("CONFLICT", "Commissioning is checked against the project's design, and the design is not complete yet. Ask the office to finish it.");
+  if (snapshot.status !== "reviewed")
+    throw new AppError(
+      "CONFLICT",
+      "Commissioning is checked against the project's design, and the design is not complete yet. Ask the office to finish it.",
+    );
   const { reviewed } = snapshot;
   const { ratings } = reviewed.review.summary;
   const facts = commissioningFacts({
@@ -41,7 +51,12 @@ function storedReadings(row: CommissioningRecord | null, facts: CommissioningFac
   return parsed?.success ? parsed.data : emptyReadings(facts);
 }
 
-function toDto(projectId: string, facts: CommissioningFacts, readings: CommissioningReadings, row: CommissioningRecord | null): CommissioningDto {
+function toDto(
+  projectId: string,
+  facts: CommissioningFacts,
+  readings: CommissioningReadings,
+  row: CommissioningRecord | null,
+): CommissioningDto {
   const record = toCommissioningRecord(facts, readings);
   const results = checkCommissioning(record);
   return {
@@ -58,7 +73,13 @@ function toDto(projectId: string, facts: CommissioningFacts, readings: Commissio
 }
 
 /** The project's commissioning record (empty until first saved), checked against the current design. */
-export async function getCommissioning({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<CommissioningDto & { context: CommissioningContext }> {
+export async function getCommissioning({
+  viewer,
+  projectId,
+}: {
+  viewer: Viewer;
+  projectId: string;
+}): Promise<CommissioningDto & { context: CommissioningContext }> {
   db();
   const context = await getCommissioningContext({ viewer, projectId });
   const row = await CommissioningRecord.findOne({ where: { projectId, organizationId: viewer.organizationId } });
@@ -70,14 +91,24 @@ export async function getCommissioning({ viewer, projectId }: { viewer: Viewer; 
  * complete is refused, with the reason, while any check fails or a reading is missing; a complete
  * record whose readings change is checked again and reopens if it no longer passes.
  */
-export async function saveCommissioning({ viewer, input }: { viewer: Viewer; input: SaveCommissioningInput }): Promise<SaveCommissioningResult> {
+export async function saveCommissioning({
+  viewer,
+  input,
+}: {
+  viewer: Viewer;
+  input: SaveCommissioningInput;
+}): Promise<SaveCommissioningResult> {
   const sequelize = db();
   const { projectId, readings, complete } = SaveCommissioningInput.parse(input);
   const { facts } = await getCommissioningContext({ viewer, projectId });
   const dto = toDto(projectId, facts, readings, null);
   const passes = dto.completion.complete;
   const row = await sequelize.transaction(async (transaction) => {
-    const project = await Project.findOne({ where: { id: projectId, organizationId: viewer.organizationId }, transaction, lock: transaction.LOCK.UPDATE });
+    const project = await Project.findOne({
+      where: { id: projectId, organizationId: viewer.organizationId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!project || !can(viewer, "field:record", project)) throw new AppError("NOT_FOUND", "No such project.");
     const existing = await CommissioningRecord.findOne({ where: { projectId }, transaction });
     const before: CommissioningStatus = existing?.status ?? "open";
@@ -90,9 +121,20 @@ export async function saveCommissioning({ viewer, input }: { viewer: Viewer; inp
       completedById: status === "complete" ? (wasComplete ? existing!.completedById : viewer.id) : null,
       updatedById: viewer.id,
     };
-    const saved = existing ? await existing.update(values, { transaction }) : await CommissioningRecord.create({ organizationId: viewer.organizationId, projectId, ...values }, { transaction });
+    const saved = existing
+      ? await existing.update(values, { transaction })
+      : await CommissioningRecord.create({ organizationId: viewer.organizationId, projectId, ...values }, { transaction });
     if (status !== before) {
-      await recordAudit({ viewer, action: status === "complete" ? "commissioning.completed" : "commissioning.reopened", entityType: "project", entityId: projectId, changes: { status: { before, after: status } } }, { transaction });
+      await recordAudit(
+        {
+          viewer,
+          action: status === "complete" ? "commissioning.completed" : "commissioning.reopened",
+          entityType: "project",
+          entityId: projectId,
+          changes: { status: { before, after: status } },
+        },
+        { transaction },
+      );
     }
     return saved;
   });
@@ -106,17 +148,35 @@ function refusal({ failing, missing, waiting }: CommissioningCompletion): string
 }
 
 /** What the certificate of completion and the commissioning report print, from the saved record and the current design. */
-export async function buildCommissioningDocumentInput({ viewer, projectId, kind }: { viewer: Viewer; projectId: string; kind: CommissioningDocumentKind }): Promise<CommissioningDocumentInput> {
+export async function buildCommissioningDocumentInput({
+  viewer,
+  projectId,
+  kind,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  kind: CommissioningDocumentKind;
+}): Promise<CommissioningDocumentInput> {
   const dto = await getCommissioning({ viewer, projectId });
   const input = dto.context.reviewed;
-  const [organization, installer] = await Promise.all([getOrganization({ viewer }), input.project.installer ? User.findOne({ where: { id: input.project.installer.id, organizationId: viewer.organizationId }, attributes: ["name", "email"] }) : null]);
+  const [organization, installer] = await Promise.all([
+    getOrganization({ viewer }),
+    input.project.installer
+      ? User.findOne({ where: { id: input.project.installer.id, organizationId: viewer.organizationId }, attributes: ["name", "email"] })
+      : null,
+  ]);
   const { ratings } = input.review.summary;
   const m = input.equipment.module;
   const device = input.equipment.device;
   return {
     kind,
     generatedAt: new Date().toISOString(),
-    organization: { name: organization.name, licenseNumber: organization.licenseNumber, phone: organization.phone, timeZone: organization.timeZone },
+    organization: {
+      name: organization.name,
+      licenseNumber: organization.licenseNumber,
+      phone: organization.phone,
+      timeZone: organization.timeZone,
+    },
     project: {
       number: input.project.number,
       customerName: input.project.customerName,
@@ -131,8 +191,12 @@ export async function buildCommissioningDocumentInput({ viewer, projectId, kind 
       acKw: ratings.acKw,
       moduleCount: ratings.moduleCount,
       moduleSummary: `${ratings.moduleCount} × ${m.maker} ${m.model} (${m.specs.powerW} W)`,
-      inverterSummary: input.equipment.inverters.map((l) => `${l.quantity} × ${l.item.maker} ${l.item.model} (${l.item.specs.acPowerW.toLocaleString("en-US")} W AC)`).join("; "),
-      shutdownSummary: device ? `${device.maker} ${device.model} ${device.specs.deviceKind === "optimizer" ? "optimizers" : "rapid shutdown devices"}, one per module` : null,
+      inverterSummary: input.equipment.inverters
+        .map((l) => `${l.quantity} × ${l.item.maker} ${l.item.model} (${l.item.specs.acPowerW.toLocaleString("en-US")} W AC)`)
+        .join("; "),
+      shutdownSummary: device
+        ? `${device.maker} ${device.model} ${device.specs.deviceKind === "optimizer" ? "optimizers" : "rapid shutdown devices"}, one per module`
+        : null,
     },
     installer: installer ? { name: installer.name, email: installer.email } : null,
     record: dto.record,

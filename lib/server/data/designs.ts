@@ -31,12 +31,30 @@ export function referencedIds(draft: DesignDraft): string[] {
 
 export async function savedOrNewDesign(viewer: Viewer, project: ProjectDto): Promise<DesignDto> {
   const row = await Design.findOne({ where: { projectId: project.id, organizationId: viewer.organizationId } });
-  if (!row) return { projectId: project.id, draft: newDesignDraft(project) as DesignDraft, isSaved: false, revision: 0, reviewStatus: "incomplete", updatedAt: null };
-  return { projectId: project.id, draft: row.draft as DesignDraft, isSaved: true, revision: row.revision, reviewStatus: row.reviewStatus, updatedAt: row.updatedAt.toISOString() };
+  if (!row)
+    return {
+      projectId: project.id,
+      draft: newDesignDraft(project) as DesignDraft,
+      isSaved: false,
+      revision: 0,
+      reviewStatus: "incomplete",
+      updatedAt: null,
+    };
+  return {
+    projectId: project.id,
+    draft: row.draft as DesignDraft,
+    isSaved: true,
+    revision: row.revision,
+    reviewStatus: row.reviewStatus,
+    updatedAt: row.updatedAt.toISOString(),
+  };
 }
 
 async function contextFor(viewer: Viewer, project: ProjectDto, draft: DesignDraft) {
-  const [catalog, conditions] = await Promise.all([getEquipmentByIds({ viewer, ids: referencedIds(draft) }), siteConditions(viewer, project.jurisdiction?.id ?? null)]);
+  const [catalog, conditions] = await Promise.all([
+    getEquipmentByIds({ viewer, ids: referencedIds(draft) }),
+    siteConditions(viewer, project.jurisdiction?.id ?? null),
+  ]);
   return { catalog: catalog as EquipmentDto[], conditions };
 }
 
@@ -80,16 +98,42 @@ export async function saveDesignDraft({ viewer, projectId, draft: raw }: { viewe
   const reviewStatus = outcome.status === "reviewed" ? outcome.review.summary.status : "incomplete";
   const reviewSummary = outcome.status === "reviewed" ? { ...outcome.review.summary } : null;
   const saved = await sequelize.transaction(async (transaction) => {
-    const project = await Project.findOne({ where: { id: projectId, organizationId: viewer.organizationId }, transaction, lock: transaction.LOCK.UPDATE });
+    const project = await Project.findOne({
+      where: { id: projectId, organizationId: viewer.organizationId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!project || !can(viewer, "project:edit", project)) throw new AppError("NOT_FOUND", "No such project.");
     const existing = await Design.findOne({ where: { projectId }, transaction });
     const before = existing?.reviewStatus ?? null;
     const row = existing
-      ? await existing.update({ draft: draft as Record<string, unknown>, reviewStatus, reviewSummary, revision: existing.revision + 1, updatedById: viewer.id }, { transaction })
-      : await Design.create({ organizationId: viewer.organizationId, projectId, draft: draft as Record<string, unknown>, reviewStatus, reviewSummary, updatedById: viewer.id }, { transaction });
+      ? await existing.update(
+          { draft: draft as Record<string, unknown>, reviewStatus, reviewSummary, revision: existing.revision + 1, updatedById: viewer.id },
+          { transaction },
+        )
+      : await Design.create(
+          {
+            organizationId: viewer.organizationId,
+            projectId,
+            draft: draft as Record<string, unknown>,
+            reviewStatus,
+            reviewSummary,
+            updatedById: viewer.id,
+          },
+          { transaction },
+        );
     // Autosave writes often; the trail records what matters: the review's outcome changing.
     if (before !== reviewStatus) {
-      await recordAudit({ viewer, action: "design.review-changed", entityType: "project", entityId: projectId, changes: { reviewStatus: { before, after: reviewStatus } } }, { transaction });
+      await recordAudit(
+        {
+          viewer,
+          action: "design.review-changed",
+          entityType: "project",
+          entityId: projectId,
+          changes: { reviewStatus: { before, after: reviewStatus } },
+        },
+        { transaction },
+      );
     }
     return row;
   });
@@ -103,7 +147,12 @@ export async function getDesignStatus({ viewer, projectId }: { viewer: Viewer; p
   const row = await Design.findOne({ where: { projectId, organizationId: viewer.organizationId } });
   if (!row) return null;
   const s = row.reviewSummary as { pass?: number; warn?: number; fail?: number } | null;
-  return { reviewStatus: row.reviewStatus, revision: row.revision, updatedAt: row.updatedAt.toISOString(), counts: s ? { pass: s.pass ?? 0, warn: s.warn ?? 0, fail: s.fail ?? 0 } : null };
+  return {
+    reviewStatus: row.reviewStatus,
+    revision: row.revision,
+    updatedAt: row.updatedAt.toISOString(),
+    counts: s ? { pass: s.pass ?? 0, warn: s.warn ?? 0, fail: s.fail ?? 0 } : null,
+  };
 }
 
 /** The saved design as the review engine reads it, for drawing its single-line diagram; null while incomplete. */

@@ -4,7 +4,14 @@ import { Op, UniqueConstraintError, type Transaction } from "sequelize";
 import { Equipment } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
-import { DATASHEET_MAX_BYTES, DatasheetFileName, EQUIPMENT_KIND_LABELS, EquipmentInput, type EquipmentDto, type EquipmentValues } from "@/lib/schemas/equipment";
+import {
+  DATASHEET_MAX_BYTES,
+  DatasheetFileName,
+  EQUIPMENT_KIND_LABELS,
+  EquipmentInput,
+  type EquipmentDto,
+  type EquipmentValues,
+} from "@/lib/schemas/equipment";
 import type { EquipmentKind } from "@/lib/domain/stored-values";
 import { db } from "../db";
 import { deleteObject, putObject } from "../services/storage";
@@ -25,7 +32,9 @@ function toEquipmentDto(row: Equipment): EquipmentDto {
     ...parsed.data,
     id: row.id,
     isArchived: row.isArchived,
-    datasheet: hasDatasheet ? { fileName: row.datasheetFileName!, sizeBytes: row.datasheetSizeBytes ?? 0, uploadedAt: row.datasheetUploadedAt!.toISOString() } : null,
+    datasheet: hasDatasheet
+      ? { fileName: row.datasheetFileName!, sizeBytes: row.datasheetSizeBytes ?? 0, uploadedAt: row.datasheetUploadedAt!.toISOString() }
+      : null,
   };
 }
 
@@ -33,10 +42,18 @@ function assertCanEdit(viewer: Viewer) {
   if (!can(viewer, "catalog:edit")) throw new AppError("FORBIDDEN", "Only admins can change the equipment catalog.");
 }
 
-async function findOwnEquipment(viewer: Viewer, equipmentId: string, { transaction, forUpdate = false }: WithTransaction & { forUpdate?: boolean } = {}) {
+async function findOwnEquipment(
+  viewer: Viewer,
+  equipmentId: string,
+  { transaction, forUpdate = false }: WithTransaction & { forUpdate?: boolean } = {},
+) {
   // A malformed id is just another item the viewer cannot see.
   if (!isUuid(equipmentId)) throw notFound();
-  const row = await Equipment.findOne({ where: { id: equipmentId, organizationId: viewer.organizationId }, transaction, lock: forUpdate ? transaction?.LOCK.UPDATE : undefined });
+  const row = await Equipment.findOne({
+    where: { id: equipmentId, organizationId: viewer.organizationId },
+    transaction,
+    lock: forUpdate ? transaction?.LOCK.UPDATE : undefined,
+  });
   if (!row) throw notFound();
   return row;
 }
@@ -47,28 +64,48 @@ async function refusingDuplicates<T>(values: EquipmentValues, work: () => Promis
     return await work();
   } catch (error) {
     if (!(error instanceof UniqueConstraintError)) throw error;
-    throw new AppError("CONFLICT", `${values.maker} ${values.model} is already in the catalog (${EQUIPMENT_KIND_LABELS[values.kind]}).`, { model: ["Already in the catalog"] });
+    throw new AppError("CONFLICT", `${values.maker} ${values.model} is already in the catalog (${EQUIPMENT_KIND_LABELS[values.kind]}).`, {
+      model: ["Already in the catalog"],
+    });
   }
 }
 
-const auditFields = ({ maker, model, listing, specs }: Pick<EquipmentValues, "maker" | "model" | "listing" | "specs">) => ({ maker, model, listing, specs });
+const auditFields = ({ maker, model, listing, specs }: Pick<EquipmentValues, "maker" | "model" | "listing" | "specs">) => ({
+  maker,
+  model,
+  listing,
+  specs,
+});
 
 /**
  * The viewer's organization's catalog, by kind, maker and model; archived items only when asked.
  * Callers check "catalog:view"; the design editor reads through here too.
  */
-export async function listEquipment({ viewer, kind, includeArchived = false, transaction }: { viewer: Viewer; kind?: EquipmentKind; includeArchived?: boolean } & WithTransaction): Promise<EquipmentDto[]> {
+export async function listEquipment({
+  viewer,
+  kind,
+  includeArchived = false,
+  transaction,
+}: { viewer: Viewer; kind?: EquipmentKind; includeArchived?: boolean } & WithTransaction): Promise<EquipmentDto[]> {
   db();
   const rows = await Equipment.findAll({
     where: { organizationId: viewer.organizationId, ...(kind ? { kind } : {}), ...(includeArchived ? {} : { isArchived: false }) },
-    order: [["kind", "ASC"], ["maker", "ASC"], ["model", "ASC"]],
+    order: [
+      ["kind", "ASC"],
+      ["maker", "ASC"],
+      ["model", "ASC"],
+    ],
     transaction,
   });
   return rows.map(toEquipmentDto);
 }
 
 /** One catalog item, archived or not; NOT_FOUND for missing and foreign ids alike. */
-export async function getEquipmentById({ viewer, equipmentId, transaction }: { viewer: Viewer; equipmentId: string } & WithTransaction): Promise<EquipmentDto> {
+export async function getEquipmentById({
+  viewer,
+  equipmentId,
+  transaction,
+}: { viewer: Viewer; equipmentId: string } & WithTransaction): Promise<EquipmentDto> {
   db();
   return toEquipmentDto(await findOwnEquipment(viewer, equipmentId, { transaction }));
 }
@@ -78,7 +115,11 @@ export async function getEquipmentById({ viewer, equipmentId, transaction }: { v
  * because saved designs may still use them. Missing, malformed and other organizations' ids
  * are left out alike, so the caller reports them as "not chosen" and learns nothing more.
  */
-export async function getEquipmentByIds({ viewer, ids, transaction }: { viewer: Viewer; ids: readonly string[] } & WithTransaction): Promise<EquipmentDto[]> {
+export async function getEquipmentByIds({
+  viewer,
+  ids,
+  transaction,
+}: { viewer: Viewer; ids: readonly string[] } & WithTransaction): Promise<EquipmentDto[]> {
   db();
   const wanted = [...new Set(ids.map((id) => id.toLowerCase()))].filter(isUuid);
   if (wanted.length === 0) return [];
@@ -104,13 +145,27 @@ export async function createEquipment({ viewer, values }: { viewer: Viewer; valu
 }
 
 /** Replaces an item's maker, model, listing and figures. Its kind stays: designs refer to it as that kind. */
-export async function updateEquipment({ viewer, equipmentId, values }: { viewer: Viewer; equipmentId: string; values: EquipmentValues }): Promise<EquipmentDto> {
+export async function updateEquipment({
+  viewer,
+  equipmentId,
+  values,
+}: {
+  viewer: Viewer;
+  equipmentId: string;
+  values: EquipmentValues;
+}): Promise<EquipmentDto> {
   assertCanEdit(viewer);
   const row = await refusingDuplicates(values, () =>
     writeWithAudit({ viewer, action: "equipment.updated", entityType: "equipment" }, async (transaction) => {
       const found = await findOwnEquipment(viewer, equipmentId, { transaction, forUpdate: true });
-      if (found.kind !== values.kind) throw new AppError("INVALID_INPUT", "A catalog item keeps its kind; add a new item instead.", { kind: [`Cannot change from ${EQUIPMENT_KIND_LABELS[found.kind]}`] });
-      const changes = diffFields(auditFields({ ...found.get({ plain: true }), specs: found.specs as EquipmentValues["specs"] }), auditFields(values));
+      if (found.kind !== values.kind)
+        throw new AppError("INVALID_INPUT", "A catalog item keeps its kind; add a new item instead.", {
+          kind: [`Cannot change from ${EQUIPMENT_KIND_LABELS[found.kind]}`],
+        });
+      const changes = diffFields(
+        auditFields({ ...found.get({ plain: true }), specs: found.specs as EquipmentValues["specs"] }),
+        auditFields(values),
+      );
       return { row: await found.update(auditFields(values), { transaction }), changes };
     }),
   );
@@ -118,13 +173,24 @@ export async function updateEquipment({ viewer, equipmentId, values }: { viewer:
 }
 
 /** Archived items leave the pickers of new designs but stay readable for saved ones. */
-export async function setEquipmentArchived({ viewer, equipmentId, isArchived }: { viewer: Viewer; equipmentId: string; isArchived: boolean }): Promise<EquipmentDto> {
+export async function setEquipmentArchived({
+  viewer,
+  equipmentId,
+  isArchived,
+}: {
+  viewer: Viewer;
+  equipmentId: string;
+  isArchived: boolean;
+}): Promise<EquipmentDto> {
   assertCanEdit(viewer);
-  const row = await writeWithAudit({ viewer, action: isArchived ? "equipment.archived" : "equipment.restored", entityType: "equipment" }, async (transaction) => {
-    const found = await findOwnEquipment(viewer, equipmentId, { transaction, forUpdate: true });
-    const changes = { isArchived: { before: found.isArchived, after: isArchived } };
-    return { row: await found.update({ isArchived }, { transaction }), changes };
-  });
+  const row = await writeWithAudit(
+    { viewer, action: isArchived ? "equipment.archived" : "equipment.restored", entityType: "equipment" },
+    async (transaction) => {
+      const found = await findOwnEquipment(viewer, equipmentId, { transaction, forUpdate: true });
+      const changes = { isArchived: { before: found.isArchived, after: isArchived } };
+      return { row: await found.update({ isArchived }, { transaction }), changes };
+    },
+  );
   return toEquipmentDto(row);
 }
 
@@ -151,7 +217,17 @@ const safeFileName = (fileName: string) => fileName.trim().replace(/[^\w .()-]+/
  * replaces the previous one. The row and its audit event commit together; the object
  * of a failed commit is removed again.
  */
-export async function attachDatasheet({ viewer, equipmentId, fileName, bytes }: { viewer: Viewer; equipmentId: string; fileName: string; bytes: Uint8Array }): Promise<EquipmentDto> {
+export async function attachDatasheet({
+  viewer,
+  equipmentId,
+  fileName,
+  bytes,
+}: {
+  viewer: Viewer;
+  equipmentId: string;
+  fileName: string;
+  bytes: Uint8Array;
+}): Promise<EquipmentDto> {
   db();
   assertCanEdit(viewer);
   assertPdf(fileName, bytes);
@@ -164,18 +240,31 @@ export async function attachDatasheet({ viewer, equipmentId, fileName, bytes }: 
     const found = await findOwnEquipment(viewer, equipmentId, { transaction, forUpdate: true });
     previousKey = found.datasheetKey;
     const changes = { datasheet: { before: found.datasheetFileName, after: name } };
-    return { row: await found.update({ datasheetKey: key, datasheetFileName: name, datasheetSizeBytes: bytes.byteLength, datasheetUploadedAt: new Date() }, { transaction }), changes };
+    return {
+      row: await found.update(
+        { datasheetKey: key, datasheetFileName: name, datasheetSizeBytes: bytes.byteLength, datasheetUploadedAt: new Date() },
+        { transaction },
+      ),
+      changes,
+    };
   }).catch(async (error: unknown) => {
     await deleteObject(key).catch(() => undefined);
     throw error;
   });
   // A leftover object costs storage, not correctness: log it and carry on.
-  if (previousKey) await deleteObject(previousKey).catch((error: unknown) => console.error("could not remove a replaced data sheet", previousKey, error));
+  if (previousKey)
+    await deleteObject(previousKey).catch((error: unknown) => console.error("could not remove a replaced data sheet", previousKey, error));
   return toEquipmentDto(row);
 }
 
 /** Where an item's data sheet lives, for the authorized download route only; NOT_FOUND when there is none. */
-export async function getDatasheetLocation({ viewer, equipmentId }: { viewer: Viewer; equipmentId: string }): Promise<{ key: string; fileName: string }> {
+export async function getDatasheetLocation({
+  viewer,
+  equipmentId,
+}: {
+  viewer: Viewer;
+  equipmentId: string;
+}): Promise<{ key: string; fileName: string }> {
   db();
   const row = await findOwnEquipment(viewer, equipmentId);
   if (!row.datasheetKey) throw new AppError("NOT_FOUND", "This catalog item has no data sheet yet.");

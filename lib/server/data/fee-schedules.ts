@@ -16,7 +16,15 @@ async function assertAuthority(viewer: Viewer, kind: FeeAuthorityKind, authority
 }
 
 /** The schedule's stored lines (every version); empty when none was entered. */
-export async function getFeeSchedule({ viewer, authorityKind, authorityId }: { viewer: Viewer; authorityKind: FeeAuthorityKind; authorityId: string }): Promise<FeeLine[]> {
+export async function getFeeSchedule({
+  viewer,
+  authorityKind,
+  authorityId,
+}: {
+  viewer: Viewer;
+  authorityKind: FeeAuthorityKind;
+  authorityId: string;
+}): Promise<FeeLine[]> {
   db();
   await assertAuthority(viewer, authorityKind, authorityId);
   const row = await FeeSchedule.findOne({ where: { organizationId: viewer.organizationId, authorityKind, authorityId } });
@@ -27,7 +35,17 @@ export async function getFeeSchedule({ viewer, authorityKind, authorityId }: { v
  * Replaces the schedule's lines, already parsed by the shared schema (FeeScheduleInput) at the edge,
  * and checked once more against the arithmetic's own rules; the audit trail keeps the before and after.
  */
-export async function saveFeeSchedule({ viewer, authorityKind, authorityId, lines }: { viewer: Viewer; authorityKind: FeeAuthorityKind; authorityId: string; lines: FeeLine[] }): Promise<FeeLine[]> {
+export async function saveFeeSchedule({
+  viewer,
+  authorityKind,
+  authorityId,
+  lines,
+}: {
+  viewer: Viewer;
+  authorityKind: FeeAuthorityKind;
+  authorityId: string;
+  lines: FeeLine[];
+}): Promise<FeeLine[]> {
   const sequelize = db();
   try {
     assertValidFeeLines(lines);
@@ -37,21 +55,44 @@ export async function saveFeeSchedule({ viewer, authorityKind, authorityId, line
   }
   await assertAuthority(viewer, authorityKind, authorityId);
   await sequelize.transaction(async (transaction) => {
-    const existing = await FeeSchedule.findOne({ where: { organizationId: viewer.organizationId, authorityKind, authorityId }, transaction, lock: transaction.LOCK.UPDATE });
+    const existing = await FeeSchedule.findOne({
+      where: { organizationId: viewer.organizationId, authorityKind, authorityId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     const before = existing?.lines ?? [];
     if (existing) await existing.update({ lines, updatedById: viewer.id }, { transaction });
-    else await FeeSchedule.create({ organizationId: viewer.organizationId, authorityKind, authorityId, lines, updatedById: viewer.id }, { transaction });
-    await recordAudit({ viewer, action: "fee-schedule.saved", entityType: authorityKind, entityId: authorityId, changes: diffFields({ lines: before }, { lines }) }, { transaction });
+    else
+      await FeeSchedule.create(
+        { organizationId: viewer.organizationId, authorityKind, authorityId, lines, updatedById: viewer.id },
+        { transaction },
+      );
+    await recordAudit(
+      {
+        viewer,
+        action: "fee-schedule.saved",
+        entityType: authorityKind,
+        entityId: authorityId,
+        changes: diffFields({ lines: before }, { lines }),
+      },
+      { transaction },
+    );
   });
   return lines;
 }
 
 /** Both schedules that apply to a project, each line labelled with its authority. */
-export async function schedulesForProject(viewer: Viewer, project: { jurisdiction: { id: string; name: string } | null; utility: { id: string; name: string } | null }) {
+export async function schedulesForProject(
+  viewer: Viewer,
+  project: { jurisdiction: { id: string; name: string } | null; utility: { id: string; name: string } | null },
+) {
   const sources = [
     project.jurisdiction ? { kind: "jurisdiction" as const, id: project.jurisdiction.id, name: project.jurisdiction.name } : null,
     project.utility ? { kind: "utility" as const, id: project.utility.id, name: project.utility.name } : null,
   ].filter((s) => s !== null);
   const rows = await FeeSchedule.findAll({ where: { organizationId: viewer.organizationId, authorityId: sources.map((s) => s.id) } });
-  return sources.map((source) => ({ ...source, lines: ((rows.find((r) => r.authorityKind === source.kind && r.authorityId === source.id)?.lines ?? []) as FeeLine[]) }));
+  return sources.map((source) => ({
+    ...source,
+    lines: (rows.find((r) => r.authorityKind === source.kind && r.authorityId === source.id)?.lines ?? []) as FeeLine[],
+  }));
 }

@@ -1,6 +1,18 @@
 import "server-only";
 import { Op, type Transaction } from "sequelize";
-import { CorrectionRound, Design, Filing, FilingItem, Inspection, Jurisdiction, Packet, Payment, Project, ProjectFile, Utility } from "@/models";
+import {
+  CorrectionRound,
+  Design,
+  Filing,
+  FilingItem,
+  Inspection,
+  Jurisdiction,
+  Packet,
+  Payment,
+  Project,
+  ProjectFile,
+  Utility,
+} from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import {
   FILING_STATUS_LABELS,
@@ -13,9 +25,17 @@ import {
   type FilingKind,
   type FilingStatus,
 } from "@/lib/domain/filings";
-import { localIsoDate } from "@/lib/domain/time-zones";
+import { addCalendarDays, localIsoDate } from "@/lib/domain/time-zones";
 import { AppError } from "@/lib/errors";
-import type { ChangeFilingStatusInput, FilingDetailsInput, InspectionResultInput, RecordPtoInput, RecordRoundInput, ScheduleInspectionInput, AnswerItemInput } from "@/lib/schemas/filings";
+import type {
+  ChangeFilingStatusInput,
+  FilingDetailsInput,
+  InspectionResultInput,
+  RecordPtoInput,
+  RecordRoundInput,
+  ScheduleInspectionInput,
+  AnswerItemInput,
+} from "@/lib/schemas/filings";
 import type { CorrectionRoundDto, FilingDto, FilingItemDto, InspectionDto, ProjectFilingsDto } from "@/lib/dto/filings";
 import { db } from "../db";
 import { recordAudit } from "./audit";
@@ -24,8 +44,6 @@ import { getOrganization } from "./organizations";
 import { refreshProjectFacts } from "./project-facts";
 
 const NOT_FOUND = () => new AppError("NOT_FOUND", "No such filing.");
-
-const addDays = (isoDay: string, days: number) => new Date(Date.parse(`${isoDay}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 
 async function todayFor(viewer: Viewer, now = new Date()) {
   const { timeZone } = await getOrganization({ viewer });
@@ -69,7 +87,11 @@ function toFilingDto(f: Filing, revisionOf: Map<string, number>): FilingDto {
     id: f.id,
     kind: f.kind,
     title: f.title,
-    authority: { kind: f.authorityKind === "jurisdiction" ? "ahj" : f.authorityKind === "utility" ? "utility" : "other", id: f.authorityId, name: f.authorityName },
+    authority: {
+      kind: f.authorityKind === "jurisdiction" ? "ahj" : f.authorityKind === "utility" ? "utility" : "other",
+      id: f.authorityId,
+      name: f.authorityName,
+    },
     status: f.status,
     statusSince: f.statusSince.toISOString(),
     referenceNumber: f.referenceNumber,
@@ -110,14 +132,18 @@ export async function listProjectFilings({ viewer, projectId }: { viewer: Viewer
   db();
   const project = await visibleProject(viewer, projectId);
   const filings = await Filing.findAll({ where: { projectId, organizationId: viewer.organizationId }, include: FILING_INCLUDE });
-  const packetIds = filings.flatMap((f) => [f.packetId, ...(f.rounds ?? []).map((r) => r.resubmittedPacketId)]).filter((id): id is string => Boolean(id));
+  const packetIds = filings
+    .flatMap((f) => [f.packetId, ...(f.rounds ?? []).map((r) => r.resubmittedPacketId)])
+    .filter((id): id is string => Boolean(id));
   const packets = packetIds.length ? await Packet.findAll({ where: { id: packetIds }, attributes: ["id", "revision"] }) : [];
   const revisionOf = new Map(packets.map((p) => [p.id, p.revision]));
   return {
     waitingOn: project.waitingOn,
     waitingSince: project.waitingSince?.toISOString() ?? null,
     waitingWhy: null,
-    filings: filings.sort((a, b) => KIND_ORDER[a.kind] - KIND_ORDER[b.kind] || a.createdAt.getTime() - b.createdAt.getTime()).map((f) => toFilingDto(f, revisionOf)),
+    filings: filings
+      .sort((a, b) => KIND_ORDER[a.kind] - KIND_ORDER[b.kind] || a.createdAt.getTime() - b.createdAt.getTime())
+      .map((f) => toFilingDto(f, revisionOf)),
   };
 }
 
@@ -125,24 +151,57 @@ export async function listProjectFilings({ viewer, projectId }: { viewer: Viewer
  * The permit and the interconnection filings every project has, for the AHJ and the utility it names.
  * Called where a project is created or its authorities change; an existing filing keeps its history.
  */
-export async function ensureDefaultFilings(project: Project, { transaction, actorId }: { transaction: Transaction; actorId: string | null }) {
+export async function ensureDefaultFilings(
+  project: Project,
+  { transaction, actorId }: { transaction: Transaction; actorId: string | null },
+) {
   const existing = await Filing.findAll({ where: { projectId: project.id, kind: ["permit", "interconnection"] }, transaction });
   const has = (kind: FilingKind) => existing.some((f) => f.kind === kind);
   const now = new Date();
   if (project.jurisdictionId && !has("permit")) {
     const ahj = await Jurisdiction.findOne({ where: { id: project.jurisdictionId, organizationId: project.organizationId }, transaction });
-    if (ahj) await Filing.create({ organizationId: project.organizationId, projectId: project.id, kind: "permit", authorityKind: "jurisdiction", authorityId: ahj.id, authorityName: ahj.name, statusSince: now, createdById: actorId }, { transaction });
+    if (ahj)
+      await Filing.create(
+        {
+          organizationId: project.organizationId,
+          projectId: project.id,
+          kind: "permit",
+          authorityKind: "jurisdiction",
+          authorityId: ahj.id,
+          authorityName: ahj.name,
+          statusSince: now,
+          createdById: actorId,
+        },
+        { transaction },
+      );
   }
   if (project.utilityId && !has("interconnection")) {
     const utility = await Utility.findOne({ where: { id: project.utilityId, organizationId: project.organizationId }, transaction });
-    if (utility) await Filing.create({ organizationId: project.organizationId, projectId: project.id, kind: "interconnection", authorityKind: "utility", authorityId: utility.id, authorityName: utility.name, statusSince: now, createdById: actorId }, { transaction });
+    if (utility)
+      await Filing.create(
+        {
+          organizationId: project.organizationId,
+          projectId: project.id,
+          kind: "interconnection",
+          authorityKind: "utility",
+          authorityId: utility.id,
+          authorityName: utility.name,
+          statusSince: now,
+          createdById: actorId,
+        },
+        { transaction },
+      );
   }
 }
 
 /** One filing the viewer may change, locked for the change, with its project. */
 async function editableFiling(viewer: Viewer, filingId: string, transaction: Transaction) {
   if (!isUuid(filingId)) throw NOT_FOUND();
-  const filing = await Filing.findOne({ where: { id: filingId, organizationId: viewer.organizationId }, lock: transaction.LOCK.UPDATE, transaction });
+  const filing = await Filing.findOne({
+    where: { id: filingId, organizationId: viewer.organizationId },
+    lock: transaction.LOCK.UPDATE,
+    transaction,
+  });
   if (!filing) throw NOT_FOUND();
   const project = await Project.findOne({ where: { id: filing.projectId, organizationId: viewer.organizationId }, transaction });
   if (!project || !can(viewer, "project:view", project)) throw NOT_FOUND();
@@ -153,12 +212,21 @@ async function editableFiling(viewer: Viewer, filingId: string, transaction: Tra
 /** A ready packet of this project of the kind the filing sends. */
 async function submittablePacket(filing: Filing, packetId: string | undefined, transaction: Transaction) {
   if (!packetId) return null;
-  const packet = await Packet.findOne({ where: { id: packetId, projectId: filing.projectId, organizationId: filing.organizationId }, transaction });
-  if (!packet) throw new AppError("INVALID_INPUT", "Choose one of this project's packet revisions.", { packetId: ["Choose one of this project's packet revisions"] });
+  const packet = await Packet.findOne({
+    where: { id: packetId, projectId: filing.projectId, organizationId: filing.organizationId },
+    transaction,
+  });
+  if (!packet)
+    throw new AppError("INVALID_INPUT", "Choose one of this project's packet revisions.", {
+      packetId: ["Choose one of this project's packet revisions"],
+    });
   if (filing.kind !== "other" && packet.kind !== filing.kind) {
-    throw new AppError("INVALID_INPUT", `Choose a ${filing.kind} packet for this filing.`, { packetId: [`Choose a ${filing.kind} packet`] });
+    throw new AppError("INVALID_INPUT", `Choose a ${filing.kind} packet for this filing.`, {
+      packetId: [`Choose a ${filing.kind} packet`],
+    });
   }
-  if (packet.status !== "ready") throw new AppError("INVALID_INPUT", "That revision is not ready yet.", { packetId: ["That revision is not ready yet"] });
+  if (packet.status !== "ready")
+    throw new AppError("INVALID_INPUT", "That revision is not ready yet.", { packetId: ["That revision is not ready yet"] });
   return packet;
 }
 
@@ -175,7 +243,12 @@ async function reviewDaysOf(filing: Filing, transaction: Transaction): Promise<{
 }
 
 async function latestRound(filingId: string, transaction: Transaction) {
-  return CorrectionRound.findOne({ where: { filingId }, include: [{ model: FilingItem, as: "items" }], order: [["number", "DESC"]], transaction });
+  return CorrectionRound.findOne({
+    where: { filingId },
+    include: [{ model: FilingItem, as: "items" }],
+    order: [["number", "DESC"]],
+    transaction,
+  });
 }
 
 function invalid(field: string, message: string): AppError {
@@ -187,7 +260,15 @@ function invalid(field: string, message: string): AppError {
  * resubmission, the authority's number on approval. Follow-up and expiry dates come from the authority's
  * profile; the audit row and the project's new stage and waiting-on commit with the change.
  */
-export async function changeFilingStatus({ viewer, input, now = new Date() }: { viewer: Viewer; input: ChangeFilingStatusInput; now?: Date }): Promise<void> {
+export async function changeFilingStatus({
+  viewer,
+  input,
+  now = new Date(),
+}: {
+  viewer: Viewer;
+  input: ChangeFilingStatusInput;
+  now?: Date;
+}): Promise<void> {
   const sequelize = db();
   const today = await todayFor(viewer, now);
   await sequelize.transaction(async (transaction) => {
@@ -204,7 +285,9 @@ export async function changeFilingStatus({ viewer, input, now = new Date() }: { 
       from: filing.status,
       to,
       referenceNumber,
-      packetRevision: sending ? (packet?.revision ?? (to === "submitted" ? (current?.revision ?? null) : null)) : (current?.revision ?? null),
+      packetRevision: sending
+        ? (packet?.revision ?? (to === "submitted" ? (current?.revision ?? null) : null))
+        : (current?.revision ?? null),
       latestRoundAnswered: !roundOpen || (round.items ?? []).every((i) => i.resolved),
       revisionAtLatestRound: round?.revisionAtReceipt ?? null,
     });
@@ -215,11 +298,22 @@ export async function changeFilingStatus({ viewer, input, now = new Date() }: { 
     const before = { status: filing.status, referenceNumber: filing.referenceNumber, packetId: filing.packetId };
     const changes: Partial<Filing> = { status: to, statusSince: now, referenceNumber: referenceNumber ?? null };
     if (sending) {
-      Object.assign(changes, { packetId: packet?.id ?? filing.packetId, nextFollowUpOn: addDays(on, reviewDays), revisionNeededSince: null });
-      if (to === "submitted") Object.assign(changes, { submittedOn: on, channel: input.channel ?? filing.channel, sentTo: input.sentTo || filing.sentTo });
-      if (to === "resubmitted" && round) await round.update({ resubmittedPacketId: packet?.id ?? filing.packetId, answeredAt: round.answeredAt ?? now }, { transaction });
+      Object.assign(changes, {
+        packetId: packet?.id ?? filing.packetId,
+        nextFollowUpOn: addCalendarDays(on, reviewDays),
+        revisionNeededSince: null,
+      });
+      if (to === "submitted")
+        Object.assign(changes, { submittedOn: on, channel: input.channel ?? filing.channel, sentTo: input.sentTo || filing.sentTo });
+      if (to === "resubmitted" && round)
+        await round.update({ resubmittedPacketId: packet?.id ?? filing.packetId, answeredAt: round.answeredAt ?? now }, { transaction });
     }
-    if (to === "approved") Object.assign(changes, { decidedOn: on, expiresOn: filing.kind === "permit" && permitValidDays ? addDays(on, permitValidDays) : null, nextFollowUpOn: null });
+    if (to === "approved")
+      Object.assign(changes, {
+        decidedOn: on,
+        expiresOn: filing.kind === "permit" && permitValidDays ? addCalendarDays(on, permitValidDays) : null,
+        nextFollowUpOn: null,
+      });
     if (to === "rejected") Object.assign(changes, { decidedOn: on, nextFollowUpOn: null });
     if (to === "withdrawn") Object.assign(changes, { nextFollowUpOn: null });
     if (to === "preparing") Object.assign(changes, { decidedOn: null, expiresOn: null });
@@ -233,7 +327,9 @@ export async function changeFilingStatus({ viewer, input, now = new Date() }: { 
         entityId: filing.id,
         changes: {
           status: { before: before.status, after: to },
-          ...(referenceNumber !== before.referenceNumber ? { referenceNumber: { before: before.referenceNumber, after: referenceNumber } } : {}),
+          ...(referenceNumber !== before.referenceNumber
+            ? { referenceNumber: { before: before.referenceNumber, after: referenceNumber } }
+            : {}),
           ...(filing.packetId !== before.packetId ? { packetId: { before: before.packetId, after: filing.packetId } } : {}),
           ...(input.note ? { note: { before: null, after: input.note } } : {}),
         },
@@ -245,17 +341,41 @@ export async function changeFilingStatus({ viewer, input, now = new Date() }: { 
 }
 
 /** The filing's own facts that are not a status: its number, follow-up date, fee payment, the customer's turn, notes. */
-export async function updateFilingDetails({ viewer, input, now = new Date() }: { viewer: Viewer; input: FilingDetailsInput; now?: Date }): Promise<void> {
+export async function updateFilingDetails({
+  viewer,
+  input,
+  now = new Date(),
+}: {
+  viewer: Viewer;
+  input: FilingDetailsInput;
+  now?: Date;
+}): Promise<void> {
   const sequelize = db();
   await sequelize.transaction(async (transaction) => {
     const { filing } = await editableFiling(viewer, input.filingId, transaction);
-    if (input.paymentId && !(await Payment.findOne({ where: { id: input.paymentId, projectId: filing.projectId, organizationId: viewer.organizationId }, transaction }))) {
-      throw new AppError("INVALID_INPUT", "Choose one of this project's payments.", { paymentId: ["Choose one of this project's payments"] });
+    if (
+      input.paymentId &&
+      !(await Payment.findOne({
+        where: { id: input.paymentId, projectId: filing.projectId, organizationId: viewer.organizationId },
+        transaction,
+      }))
+    ) {
+      throw new AppError("INVALID_INPUT", "Choose one of this project's payments.", {
+        paymentId: ["Choose one of this project's payments"],
+      });
     }
     if (filing.status === "approved" && !input.referenceNumber) {
-      throw new AppError("INVALID_INPUT", "An approved filing keeps its reference number.", { referenceNumber: ["An approved filing keeps its reference number"] });
+      throw new AppError("INVALID_INPUT", "An approved filing keeps its reference number.", {
+        referenceNumber: ["An approved filing keeps its reference number"],
+      });
     }
-    const before = { referenceNumber: filing.referenceNumber, nextFollowUpOn: filing.nextFollowUpOn, paymentId: filing.paymentId, waitingOnCustomer: filing.customerSince !== null, notes: filing.notes };
+    const before = {
+      referenceNumber: filing.referenceNumber,
+      nextFollowUpOn: filing.nextFollowUpOn,
+      paymentId: filing.paymentId,
+      waitingOnCustomer: filing.customerSince !== null,
+      notes: filing.notes,
+    };
     await filing.update(
       {
         referenceNumber: input.referenceNumber ?? null,
@@ -266,7 +386,13 @@ export async function updateFilingDetails({ viewer, input, now = new Date() }: {
       },
       { transaction },
     );
-    const after = { referenceNumber: filing.referenceNumber, nextFollowUpOn: filing.nextFollowUpOn, paymentId: filing.paymentId, waitingOnCustomer: input.waitingOnCustomer, notes: filing.notes };
+    const after = {
+      referenceNumber: filing.referenceNumber,
+      nextFollowUpOn: filing.nextFollowUpOn,
+      paymentId: filing.paymentId,
+      waitingOnCustomer: input.waitingOnCustomer,
+      notes: filing.notes,
+    };
     const changes = Object.fromEntries(
       Object.entries(after)
         .filter(([k, v]) => before[k as keyof typeof before] !== v)
@@ -277,34 +403,78 @@ export async function updateFilingDetails({ viewer, input, now = new Date() }: {
   });
 }
 
-async function createItems(viewer: Viewer, parent: { roundId?: string; inspectionId?: string }, items: { text: string; reference: string }[], transaction: Transaction) {
+async function createItems(
+  viewer: Viewer,
+  parent: { roundId?: string; inspectionId?: string },
+  items: { text: string; reference: string }[],
+  transaction: Transaction,
+) {
   await FilingItem.bulkCreate(
-    items.map((item, position) => ({ organizationId: viewer.organizationId, ...parent, position, text: item.text, reference: item.reference })),
+    items.map((item, position) => ({
+      organizationId: viewer.organizationId,
+      ...parent,
+      position,
+      text: item.text,
+      reference: item.reference,
+    })),
     { transaction },
   );
 }
 
 /** Round N of the authority's comments: the filing now waits on the office to answer them. */
-export async function recordCorrectionRound({ viewer, input, now = new Date() }: { viewer: Viewer; input: RecordRoundInput; now?: Date }): Promise<{ roundId: string; number: number }> {
+export async function recordCorrectionRound({
+  viewer,
+  input,
+  now = new Date(),
+}: {
+  viewer: Viewer;
+  input: RecordRoundInput;
+  now?: Date;
+}): Promise<{ roundId: string; number: number }> {
   const sequelize = db();
   return sequelize.transaction(async (transaction) => {
     const { filing } = await editableFiling(viewer, input.filingId, transaction);
     if (!WITH_THE_AUTHORITY.includes(filing.status)) {
-      throw new AppError("CONFLICT", `Corrections come back on a filing the authority has; this one is ${FILING_STATUS_LABELS[filing.status as FilingStatus].toLowerCase()}.`);
+      throw new AppError(
+        "CONFLICT",
+        `Corrections come back on a filing the authority has; this one is ${FILING_STATUS_LABELS[filing.status as FilingStatus].toLowerCase()}.`,
+      );
     }
-    if (input.letterFileId && !(await ProjectFile.findOne({ where: { id: input.letterFileId, projectId: filing.projectId, organizationId: viewer.organizationId }, transaction }))) {
-      throw new AppError("INVALID_INPUT", "Choose a file uploaded to this project.", { letterFileId: ["Choose a file uploaded to this project"] });
+    if (
+      input.letterFileId &&
+      !(await ProjectFile.findOne({
+        where: { id: input.letterFileId, projectId: filing.projectId, organizationId: viewer.organizationId },
+        transaction,
+      }))
+    ) {
+      throw new AppError("INVALID_INPUT", "Choose a file uploaded to this project.", {
+        letterFileId: ["Choose a file uploaded to this project"],
+      });
     }
-    const number = ((await CorrectionRound.max<number, CorrectionRound>("number", { where: { filingId: filing.id }, transaction })) ?? 0) + 1;
+    const number =
+      ((await CorrectionRound.max<number, CorrectionRound>("number", { where: { filingId: filing.id }, transaction })) ?? 0) + 1;
     const packet = filing.packetId ? await Packet.findByPk(filing.packetId, { attributes: ["revision"], transaction }) : null;
     const round = await CorrectionRound.create(
-      { organizationId: viewer.organizationId, filingId: filing.id, number, receivedOn: input.receivedOn, letterFileId: input.letterFileId ?? null, revisionAtReceipt: packet?.revision ?? null },
+      {
+        organizationId: viewer.organizationId,
+        filingId: filing.id,
+        number,
+        receivedOn: input.receivedOn,
+        letterFileId: input.letterFileId ?? null,
+        revisionAtReceipt: packet?.revision ?? null,
+      },
       { transaction },
     );
     await createItems(viewer, { roundId: round.id }, input.items, transaction);
     await filing.update({ status: "corrections_requested", statusSince: now }, { transaction });
     await recordAudit(
-      { viewer, action: "filing.corrections-recorded", entityType: "filing", entityId: filing.id, changes: { round: { before: null, after: number }, items: { before: null, after: input.items.length } } },
+      {
+        viewer,
+        action: "filing.corrections-recorded",
+        entityType: "filing",
+        entityId: filing.id,
+        changes: { round: { before: null, after: number }, items: { before: null, after: input.items.length } },
+      },
       { transaction },
     );
     await refreshProjectFacts(filing.projectId, { transaction, actorId: viewer.id, now });
@@ -313,7 +483,15 @@ export async function recordCorrectionRound({ viewer, input, now = new Date() }:
 }
 
 /** The office's answer to one comment or correction, with the design revision that answers it when the design changed. */
-export async function answerFilingItem({ viewer, input, now = new Date() }: { viewer: Viewer; input: AnswerItemInput; now?: Date }): Promise<void> {
+export async function answerFilingItem({
+  viewer,
+  input,
+  now = new Date(),
+}: {
+  viewer: Viewer;
+  input: AnswerItemInput;
+  now?: Date;
+}): Promise<void> {
   const sequelize = db();
   await sequelize.transaction(async (transaction) => {
     if (!isUuid(input.itemId)) throw new AppError("NOT_FOUND", "No such comment.");
@@ -327,7 +505,9 @@ export async function answerFilingItem({ viewer, input, now = new Date() }: { vi
     if (input.designRevision !== undefined) {
       const design = await Design.findOne({ where: { projectId: filing.projectId }, attributes: ["revision"], transaction });
       if (!design || input.designRevision > design.revision) {
-        throw new AppError("INVALID_INPUT", `The design is at revision ${design?.revision ?? 0}.`, { designRevision: [`The design is at revision ${design?.revision ?? 0}`] });
+        throw new AppError("INVALID_INPUT", `The design is at revision ${design?.revision ?? 0}.`, {
+          designRevision: [`The design is at revision ${design?.revision ?? 0}`],
+        });
       }
     }
     const before = { response: item.response, designRevision: item.designRevision };
@@ -342,7 +522,10 @@ export async function answerFilingItem({ viewer, input, now = new Date() }: { vi
         action: "filing.item-answered",
         entityType: "filing",
         entityId: filing.id,
-        changes: { response: { before: before.response, after: input.response }, designRevision: { before: before.designRevision, after: input.designRevision ?? null } },
+        changes: {
+          response: { before: before.response, after: input.response },
+          designRevision: { before: before.designRevision, after: input.designRevision ?? null },
+        },
       },
       { transaction },
     );
@@ -351,20 +534,34 @@ export async function answerFilingItem({ viewer, input, now = new Date() }: { vi
 }
 
 /** Books an inspection (or the utility's witness test or meter set) under the filing it belongs to. */
-export async function scheduleInspection({ viewer, input, now = new Date() }: { viewer: Viewer; input: ScheduleInspectionInput; now?: Date }): Promise<{ inspectionId: string }> {
+export async function scheduleInspection({
+  viewer,
+  input,
+  now = new Date(),
+}: {
+  viewer: Viewer;
+  input: ScheduleInspectionInput;
+  now?: Date;
+}): Promise<{ inspectionId: string }> {
   const sequelize = db();
   return sequelize.transaction(async (transaction) => {
     const { filing } = await editableFiling(viewer, input.filingId, transaction);
     const kinds: readonly string[] = INSPECTION_KINDS_BY_FILING[filing.kind];
     if (!kinds.includes(input.kind)) {
-      throw new AppError("INVALID_INPUT", `A ${INSPECTION_KIND_LABELS[input.kind].toLowerCase()} does not belong to this filing.`, { kind: ["Choose a kind this authority carries out"] });
+      throw new AppError("INVALID_INPUT", `A ${INSPECTION_KIND_LABELS[input.kind].toLowerCase()} does not belong to this filing.`, {
+        kind: ["Choose a kind this authority carries out"],
+      });
     }
-    if (filing.kind === "permit" && filing.status !== "approved") throw new AppError("CONFLICT", "Inspections are booked once the permit is issued.");
-    if (filing.kind === "interconnection" && !isFiled(filing.status)) throw new AppError("CONFLICT", "Book the utility's visit once the application is in.");
+    if (filing.kind === "permit" && filing.status !== "approved")
+      throw new AppError("CONFLICT", "Inspections are booked once the permit is issued.");
+    if (filing.kind === "interconnection" && !isFiled(filing.status))
+      throw new AppError("CONFLICT", "Book the utility's visit once the application is in.");
     if (input.reinspectionOfId) {
       const failed = await Inspection.findOne({ where: { id: input.reinspectionOfId, filingId: filing.id }, transaction });
       if (!failed || !needsReinspection(failed.result)) {
-        throw new AppError("INVALID_INPUT", "A re-inspection repeats a failed or partly passed inspection of this filing.", { reinspectionOfId: ["Choose a failed inspection of this filing"] });
+        throw new AppError("INVALID_INPUT", "A re-inspection repeats a failed or partly passed inspection of this filing.", {
+          reinspectionOfId: ["Choose a failed inspection of this filing"],
+        });
       }
     }
     const inspection = await Inspection.create(
@@ -380,7 +577,13 @@ export async function scheduleInspection({ viewer, input, now = new Date() }: { 
       { transaction },
     );
     await recordAudit(
-      { viewer, action: "inspection.scheduled", entityType: "filing", entityId: filing.id, changes: { inspection: { before: null, after: `${input.kind} on ${input.scheduledFor}` } } },
+      {
+        viewer,
+        action: "inspection.scheduled",
+        entityType: "filing",
+        entityId: filing.id,
+        changes: { inspection: { before: null, after: `${input.kind} on ${input.scheduledFor}` } },
+      },
       { transaction },
     );
     await refreshProjectFacts(filing.projectId, { transaction, actorId: viewer.id, now });
@@ -389,7 +592,15 @@ export async function scheduleInspection({ viewer, input, now = new Date() }: { 
 }
 
 /** The inspector's verdict with any corrections; a passed final inspection moves the stage by itself. */
-export async function recordInspectionResult({ viewer, input, now = new Date() }: { viewer: Viewer; input: InspectionResultInput; now?: Date }): Promise<void> {
+export async function recordInspectionResult({
+  viewer,
+  input,
+  now = new Date(),
+}: {
+  viewer: Viewer;
+  input: InspectionResultInput;
+  now?: Date;
+}): Promise<void> {
   const sequelize = db();
   await sequelize.transaction(async (transaction) => {
     if (!isUuid(input.inspectionId)) throw new AppError("NOT_FOUND", "No such inspection.");
@@ -398,12 +609,29 @@ export async function recordInspectionResult({ viewer, input, now = new Date() }
     const { filing } = await editableFiling(viewer, inspection.filingId, transaction);
     if (inspection.result) throw new AppError("CONFLICT", "This inspection's result is already recorded: book a re-inspection instead.");
     if (needsReinspection(input.result) && input.items.length === 0) {
-      throw new AppError("INVALID_INPUT", "List the corrections the inspector asked for.", { items: ["List the corrections the inspector asked for"] });
+      throw new AppError("INVALID_INPUT", "List the corrections the inspector asked for.", {
+        items: ["List the corrections the inspector asked for"],
+      });
     }
-    await inspection.update({ result: input.result, resultOn: input.resultOn, recordedAt: now, notes: input.notes, ...(input.inspectorName ? { inspectorName: input.inspectorName } : {}) }, { transaction });
+    await inspection.update(
+      {
+        result: input.result,
+        resultOn: input.resultOn,
+        recordedAt: now,
+        notes: input.notes,
+        ...(input.inspectorName ? { inspectorName: input.inspectorName } : {}),
+      },
+      { transaction },
+    );
     if (input.items.length) await createItems(viewer, { inspectionId: inspection.id }, input.items, transaction);
     await recordAudit(
-      { viewer, action: "inspection.result-recorded", entityType: "filing", entityId: filing.id, changes: { [inspection.kind]: { before: null, after: input.result } } },
+      {
+        viewer,
+        action: "inspection.result-recorded",
+        entityType: "filing",
+        entityId: filing.id,
+        changes: { [inspection.kind]: { before: null, after: input.result } },
+      },
       { transaction },
     );
     await refreshProjectFacts(filing.projectId, { transaction, actorId: viewer.id, now });
@@ -419,7 +647,16 @@ export async function recordPto({ viewer, input, now = new Date() }: { viewer: V
     if (filing.status !== "approved") throw new AppError("CONFLICT", "Record PTO once the interconnection application is approved.");
     const before = filing.ptoOn;
     await filing.update({ ptoOn: input.ptoOn }, { transaction });
-    await recordAudit({ viewer, action: "filing.pto-recorded", entityType: "filing", entityId: filing.id, changes: { ptoOn: { before, after: input.ptoOn } } }, { transaction });
+    await recordAudit(
+      {
+        viewer,
+        action: "filing.pto-recorded",
+        entityType: "filing",
+        entityId: filing.id,
+        changes: { ptoOn: { before, after: input.ptoOn } },
+      },
+      { transaction },
+    );
     await refreshProjectFacts(filing.projectId, { transaction, actorId: viewer.id, now });
   });
 }
@@ -431,7 +668,15 @@ export async function recordPto({ viewer, input, now = new Date() }: { viewer: V
 export async function markRevisionNeeded(projectId: string, { transaction, now = new Date() }: { transaction: Transaction; now?: Date }) {
   const [count] = await Filing.update(
     { revisionNeededSince: now },
-    { where: { projectId, packetId: { [Op.ne]: null }, revisionNeededSince: null, status: { [Op.in]: ["submitted", "in_review", "corrections_requested", "resubmitted", "approved"] } }, transaction },
+    {
+      where: {
+        projectId,
+        packetId: { [Op.ne]: null },
+        revisionNeededSince: null,
+        status: { [Op.in]: ["submitted", "in_review", "corrections_requested", "resubmitted", "approved"] },
+      },
+      transaction,
+    },
   );
   return count;
 }

@@ -8,7 +8,13 @@ import { db } from "../db";
 import { diffFields, recordAudit } from "./audit";
 import type { OrganizationDto } from "@/lib/dto/organizations";
 
-const toDto = ({ id, name, licenseNumber, phone, timeZone }: Organization): OrganizationDto => ({ id, name, licenseNumber, phone, timeZone });
+const toDto = ({ id, name, licenseNumber, phone, timeZone }: Organization): OrganizationDto => ({
+  id,
+  name,
+  licenseNumber,
+  phone,
+  timeZone,
+});
 
 // Read once per request: the app layout (for the time zone) and the page both ask for it.
 const loadOrganization = cache(async (organizationId: string): Promise<OrganizationDto> => {
@@ -32,7 +38,8 @@ export async function updateOrganization({ viewer, values }: { viewer: Viewer; v
     if (!row) throw new AppError("NOT_FOUND", "No such organization.");
     const changes = diffFields(toDto(row), values);
     await row.update(values, { transaction });
-    if (Object.keys(changes).length) await recordAudit({ viewer, action: "organization.updated", entityType: "organization", entityId: row.id, changes }, { transaction });
+    if (Object.keys(changes).length)
+      await recordAudit({ viewer, action: "organization.updated", entityType: "organization", entityId: row.id, changes }, { transaction });
     return toDto(row);
   });
 }

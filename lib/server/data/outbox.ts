@@ -5,7 +5,14 @@ import type { OutboxAttachment } from "@/lib/domain/stored-values";
 import { afterFailedAttempt } from "@/lib/domain/mail-retry";
 import { db } from "../db";
 
-export type QueuedMail = { to: string; subject: string; text: string; html: string; organizationId?: string | null; attachments?: OutboxAttachment[] };
+export type QueuedMail = {
+  to: string;
+  subject: string;
+  text: string;
+  html: string;
+  organizationId?: string | null;
+  attachments?: OutboxAttachment[];
+};
 
 /**
  * Puts one e-mail in the outbox. Pass the transaction of the change that causes the mail:
@@ -14,7 +21,15 @@ export type QueuedMail = { to: string; subject: string; text: string; html: stri
 export async function enqueueMail(mail: QueuedMail, { transaction }: { transaction?: Transaction } = {}): Promise<{ id: string }> {
   db();
   const row = await OutboxMessage.create(
-    { organizationId: mail.organizationId ?? null, toAddress: mail.to, subject: mail.subject, textBody: mail.text, htmlBody: mail.html, attachments: mail.attachments ?? [], nextAttemptAt: new Date() },
+    {
+      organizationId: mail.organizationId ?? null,
+      toAddress: mail.to,
+      subject: mail.subject,
+      textBody: mail.text,
+      htmlBody: mail.html,
+      attachments: mail.attachments ?? [],
+      nextAttemptAt: new Date(),
+    },
     { transaction },
   );
   return { id: row.id };
@@ -28,7 +43,13 @@ export async function enqueueMail(mail: QueuedMail, { transaction }: { transacti
  * so two changes at once merge rather than race.
  */
 export async function holdOrMergeMail(
-  { coalesceKey, holdSeconds, organizationId, to, startedAt }: { coalesceKey: string; holdSeconds: number; organizationId: string; to: string; startedAt: Date },
+  {
+    coalesceKey,
+    holdSeconds,
+    organizationId,
+    to,
+    startedAt,
+  }: { coalesceKey: string; holdSeconds: number; organizationId: string; to: string; startedAt: Date },
   compose: (since: Date) => Promise<Pick<QueuedMail, "subject" | "text" | "html">>,
   { transaction }: { transaction: Transaction },
 ): Promise<{ id: string; merged: boolean }> {
@@ -46,7 +67,16 @@ export async function holdOrMergeMail(
     return { id: held.id, merged: true };
   }
   const row = await OutboxMessage.create(
-    { organizationId, toAddress: to, subject: mail.subject, textBody: mail.text, htmlBody: mail.html, attachments: [], nextAttemptAt: new Date(startedAt.getTime() + holdSeconds * 1000), coalesceKey },
+    {
+      organizationId,
+      toAddress: to,
+      subject: mail.subject,
+      textBody: mail.text,
+      htmlBody: mail.html,
+      attachments: [],
+      nextAttemptAt: new Date(startedAt.getTime() + holdSeconds * 1000),
+      coalesceKey,
+    },
     { transaction },
   );
   return { id: row.id, merged: false };
@@ -65,14 +95,25 @@ export async function claimDueMail(transaction: Transaction): Promise<OutboxMess
 }
 
 /** Marks a claimed message sent, with the mail server's reply. */
-export async function markMailSent(row: OutboxMessage, { attempts, response }: { attempts: number; response: string }, transaction: Transaction): Promise<void> {
+export async function markMailSent(
+  row: OutboxMessage,
+  { attempts, response }: { attempts: number; response: string },
+  transaction: Transaction,
+): Promise<void> {
   await row.update({ status: "sent", attempts, smtpResponse: response, sentAt: new Date(), lastError: null }, { transaction });
 }
 
 /** Records a failed attempt: the message waits for its next try, or is failed for good after its last one. */
-export async function markMailAttemptFailed(row: OutboxMessage, { attempts, error }: { attempts: number; error: unknown }, transaction: Transaction): Promise<"retried" | "failed"> {
+export async function markMailAttemptFailed(
+  row: OutboxMessage,
+  { attempts, error }: { attempts: number; error: unknown },
+  transaction: Transaction,
+): Promise<"retried" | "failed"> {
   const next = afterFailedAttempt(attempts, new Date());
   const lastError = (error instanceof Error ? error.message : String(error)).slice(0, 2000);
-  await row.update({ attempts, lastError, ...(next.status === "failed" ? { status: "failed" as const } : { nextAttemptAt: next.nextAttemptAt }) }, { transaction });
+  await row.update(
+    { attempts, lastError, ...(next.status === "failed" ? { status: "failed" as const } : { nextAttemptAt: next.nextAttemptAt }) },
+    { transaction },
+  );
   return next.status === "failed" ? "failed" : "retried";
 }

@@ -16,11 +16,25 @@ export function reviewedOrConflict(snapshot: DesignSnapshot): ReviewedDesign {
 }
 
 /** Gathers everything a packet prints from the reviewed design, the organization and the data sheets' locations. */
-export async function buildPacketInput({ viewer, reviewed, kind }: { viewer: Viewer; reviewed: ReviewedDesign; kind: PacketKind }): Promise<Omit<PacketInput, "revision" | "changes" | "override">> {
+export async function buildPacketInput({
+  viewer,
+  reviewed,
+  kind,
+}: {
+  viewer: Viewer;
+  reviewed: ReviewedDesign;
+  kind: PacketKind;
+}): Promise<Omit<PacketInput, "revision" | "changes" | "override">> {
   const { project, jurisdiction, utility, equipment } = reviewed;
   const organization = await getOrganization({ viewer });
   // Each data sheet once, in the order of the equipment schedule.
-  const withSheets = [...new Map([equipment.module, ...equipment.inverters.map((l) => l.item), equipment.device].filter((e): e is EquipmentDto => Boolean(e?.datasheet)).map((e) => [e.id, e])).values()];
+  const withSheets = [
+    ...new Map(
+      [equipment.module, ...equipment.inverters.map((l) => l.item), equipment.device]
+        .filter((e): e is EquipmentDto => Boolean(e?.datasheet))
+        .map((e) => [e.id, e]),
+    ).values(),
+  ];
   const datasheets = [];
   if (kind === "permit") {
     for (const e of withSheets) {
@@ -32,12 +46,32 @@ export async function buildPacketInput({ viewer, reviewed, kind }: { viewer: Vie
   return {
     kind,
     generatedAt: new Date().toISOString(),
-    preparedBy: { name: viewer.name, organizationName: organization.name, licenseNumber: organization.licenseNumber, phone: organization.phone, timeZone: organization.timeZone },
-    project: {
-      number: project.number, customerName: project.customerName, customerEmail: project.customerEmail, customerPhone: project.customerPhone, street: project.street,
-      city: project.city, state: project.state, postalCode: project.postalCode, utilityAccountNumber: project.utilityAccountNumber, meterNumber: project.meterNumber,
+    preparedBy: {
+      name: viewer.name,
+      organizationName: organization.name,
+      licenseNumber: organization.licenseNumber,
+      phone: organization.phone,
+      timeZone: organization.timeZone,
     },
-    jurisdiction: { name: jurisdiction.name, state: jurisdiction.state, necEdition: jurisdiction.necEdition, recordLowTempC: jurisdiction.recordLowTempC, highDesignTempC: jurisdiction.highDesignTempC },
+    project: {
+      number: project.number,
+      customerName: project.customerName,
+      customerEmail: project.customerEmail,
+      customerPhone: project.customerPhone,
+      street: project.street,
+      city: project.city,
+      state: project.state,
+      postalCode: project.postalCode,
+      utilityAccountNumber: project.utilityAccountNumber,
+      meterNumber: project.meterNumber,
+    },
+    jurisdiction: {
+      name: jurisdiction.name,
+      state: jurisdiction.state,
+      necEdition: jurisdiction.necEdition,
+      recordLowTempC: jurisdiction.recordLowTempC,
+      highDesignTempC: jurisdiction.highDesignTempC,
+    },
     utility: utility ? { name: utility.name, acceptedGridProfiles: utility.acceptedGridProfiles } : null,
     designInput: reviewed.designInput,
     design: reviewed.design,

@@ -17,16 +17,33 @@ import type { PacketDto } from "@/lib/dto/packets";
 
 // Far longer than any generation takes; a row still in flight after this was abandoned.
 const STALE_AFTER_MS = 10 * 60_000;
-const ABANDONED = { status: "failed" as const, progress: 0, step: "Failed", error: "The generation stopped without finishing (the worker may have restarted). Retry it." };
+const ABANDONED = {
+  status: "failed" as const,
+  progress: 0,
+  step: "Failed",
+  error: "The generation stopped without finishing (the worker may have restarted). Retry it.",
+};
 const isAbandoned = (p: Packet) => (p.status === "queued" || p.status === "running") && p.updatedAt.getTime() < Date.now() - STALE_AFTER_MS;
 
 function toPacketDto(p: Packet): PacketDto {
   // Shown as failed as soon as it is stale, even before the worker's maintenance writes it so.
   const { status, progress, step, error } = isAbandoned(p) ? ABANDONED : p;
   return {
-    id: p.id, kind: p.kind, revision: p.revision, status, progress, step, changes: p.changes, overrideReason: p.overrideReason,
-    sizeBytes: p.sizeBytes, pageCount: p.pageCount, sha256: p.sha256, error, requestedBy: p.requestedBy?.name ?? null,
-    readyAt: p.readyAt?.toISOString() ?? null, createdAt: p.createdAt.toISOString(),
+    id: p.id,
+    kind: p.kind,
+    revision: p.revision,
+    status,
+    progress,
+    step,
+    changes: p.changes,
+    overrideReason: p.overrideReason,
+    sizeBytes: p.sizeBytes,
+    pageCount: p.pageCount,
+    sha256: p.sha256,
+    error,
+    requestedBy: p.requestedBy?.name ?? null,
+    readyAt: p.readyAt?.toISOString() ?? null,
+    createdAt: p.createdAt.toISOString(),
   };
 }
 
@@ -36,7 +53,13 @@ function toPacketDto(p: Packet): PacketDto {
  */
 export async function failAbandonedPackets({ projectId }: { projectId?: string } = {}): Promise<number> {
   db();
-  const [count] = await Packet.update(ABANDONED, { where: { ...(projectId ? { projectId } : {}), status: { [Op.in]: ["queued", "running"] }, updatedAt: { [Op.lt]: new Date(Date.now() - STALE_AFTER_MS) } } });
+  const [count] = await Packet.update(ABANDONED, {
+    where: {
+      ...(projectId ? { projectId } : {}),
+      status: { [Op.in]: ["queued", "running"] },
+      updatedAt: { [Op.lt]: new Date(Date.now() - STALE_AFTER_MS) },
+    },
+  });
   return count;
 }
 
@@ -44,7 +67,14 @@ export async function failAbandonedPackets({ projectId }: { projectId?: string }
 export async function listPackets({ viewer, projectId }: { viewer: Viewer; projectId: string }): Promise<PacketDto[]> {
   db();
   await getProjectById({ viewer, projectId });
-  const rows = await Packet.findAll({ where: { projectId, organizationId: viewer.organizationId }, include: [{ model: User, as: "requestedBy", attributes: ["name"] }], order: [["revision", "DESC"], ["createdAt", "DESC"]] });
+  const rows = await Packet.findAll({
+    where: { projectId, organizationId: viewer.organizationId },
+    include: [{ model: User, as: "requestedBy", attributes: ["name"] }],
+    order: [
+      ["revision", "DESC"],
+      ["createdAt", "DESC"],
+    ],
+  });
   return rows.map(toPacketDto);
 }
 
@@ -54,17 +84,30 @@ export async function listPackets({ viewer, projectId }: { viewer: Viewer; proje
  * revision number is the next after the last ready one; a failed attempt
  * is replaced, so revisions stay consecutive.
  */
-export async function requestPacket({ viewer, projectId, kind, overrideReason }: { viewer: Viewer; projectId: string; kind: PacketKind; overrideReason?: string | null }): Promise<PacketDto> {
+export async function requestPacket({
+  viewer,
+  projectId,
+  kind,
+  overrideReason,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  kind: PacketKind;
+  overrideReason?: string | null;
+}): Promise<PacketDto> {
   const sequelize = db();
   const project = await getProjectById({ viewer, projectId });
-  if (!can(viewer, "project:edit", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null })) throw new AppError("FORBIDDEN", "Your role cannot generate packets.");
+  if (!can(viewer, "project:edit", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }))
+    throw new AppError("FORBIDDEN", "Your role cannot generate packets.");
   await failAbandonedPackets({ projectId });
   const reviewed = reviewedOrConflict(await getReviewedDesign({ viewer, projectId, project }));
   const base = await buildPacketInput({ viewer, reviewed, kind });
   const failing = base.review.summary.status === "fail";
   const reason = overrideReason?.trim() || null;
   if (failing && !reason) {
-    throw new AppError("CONFLICT", "The design review has failing checks. Fix them first, or write why the packet must go out anyway.", { overrideReason: ["Write the reason for generating with failing checks"] });
+    throw new AppError("CONFLICT", "The design review has failing checks. Fix them first, or write why the packet must go out anyway.", {
+      overrideReason: ["Write the reason for generating with failing checks"],
+    });
   }
 
   const created = await sequelize.transaction(async (transaction) => {
@@ -78,9 +121,31 @@ export async function requestPacket({ viewer, projectId, kind, overrideReason }:
     const override = failing ? { reason: reason!, byName: viewer.name } : null;
     const changes = describeChanges(previous ? (previous.input as unknown as PacketInput) : null, base as PacketInput);
     const input: PacketInput = { ...base, revision, changes, override };
-    const row = await Packet.create({ organizationId: viewer.organizationId, projectId, kind, revision, input: input as unknown as Record<string, unknown>, changes, overrideReason: override?.reason ?? null, requestedById: viewer.id, step: "Waiting for a worker" }, { transaction });
+    const row = await Packet.create(
+      {
+        organizationId: viewer.organizationId,
+        projectId,
+        kind,
+        revision,
+        input: input as unknown as Record<string, unknown>,
+        changes,
+        overrideReason: override?.reason ?? null,
+        requestedById: viewer.id,
+        step: "Waiting for a worker",
+      },
+      { transaction },
+    );
     await recordAudit(
-      { viewer, action: override ? "packet.requested-with-override" : "packet.requested", entityType: "project", entityId: projectId, changes: { [`${kind} packet`]: { before: previous ? `Rev ${previous.revision}` : null, after: `Rev ${revision}` }, ...(override ? { overrideReason: { before: null, after: override.reason } } : {}) } },
+      {
+        viewer,
+        action: override ? "packet.requested-with-override" : "packet.requested",
+        entityType: "project",
+        entityId: projectId,
+        changes: {
+          [`${kind} packet`]: { before: previous ? `Rev ${previous.revision}` : null, after: `Rev ${revision}` },
+          ...(override ? { overrideReason: { before: null, after: override.reason } } : {}),
+        },
+      },
       { transaction },
     );
     return row;
@@ -125,7 +190,11 @@ export async function getPacketFile({ viewer, packetId }: { viewer: Viewer; pack
   const packet = await findVisiblePacket(viewer, packetId);
   if (packet.status !== "ready" || !packet.objectKey) throw new AppError("NOT_FOUND", "This packet is not ready.");
   const input = packet.input as unknown as PacketInput;
-  return { key: packet.objectKey, fileName: `ohmstead-${input.project.number}-${packet.kind}-rev${packet.revision}.pdf`, sizeBytes: packet.sizeBytes };
+  return {
+    key: packet.objectKey,
+    fileName: `ohmstead-${input.project.number}-${packet.kind}-rev${packet.revision}.pdf`,
+    sizeBytes: packet.sizeBytes,
+  };
 }
 
 /** One attempt at generating a packet, as the worker sees it: what to print and how to report each step. */
@@ -147,19 +216,43 @@ export async function startPacketGeneration(packetId: string): Promise<PacketGen
   await row.update({ attempts: row.attempts + 1, error: null, steps: [] });
   const logged = (progress: number, text: string) => [...row.steps, { at: new Date().toISOString(), progress, text }];
   return {
-    packet: { id: row.id, organizationId: row.organizationId, projectId: row.projectId, kind: row.kind, revision: row.revision, input: row.input as unknown as PacketInput },
+    packet: {
+      id: row.id,
+      organizationId: row.organizationId,
+      projectId: row.projectId,
+      kind: row.kind,
+      revision: row.revision,
+      input: row.input as unknown as PacketInput,
+    },
     async begin(step) {
       const progress = Math.max(row.progress, step.progress);
       await row.update({ status: "running", progress, step: step.text, steps: logged(progress, step.text) });
     },
     async markReady({ objectKey, sha256, sizeBytes, pageCount, doneText }) {
       const committed = sequelize.transaction(async (transaction) => {
-        await row.update({ status: "ready", progress: 100, step: doneText, steps: logged(100, doneText), objectKey, sha256, sizeBytes, pageCount, readyAt: new Date() }, { transaction });
+        await row.update(
+          {
+            status: "ready",
+            progress: 100,
+            step: doneText,
+            steps: logged(100, doneText),
+            objectKey,
+            sha256,
+            sizeBytes,
+            pageCount,
+            readyAt: new Date(),
+          },
+          { transaction },
+        );
         await recordAudit(
           {
             viewer: { organizationId: row.organizationId, id: row.requestedById },
-            action: "packet.generated", entityType: "project", entityId: row.projectId,
-            changes: { [`${row.kind} packet`]: { before: null, after: `Rev ${row.revision}, ${pageCount} pages, SHA-256 ${sha256.slice(0, 12)}…` } },
+            action: "packet.generated",
+            entityType: "project",
+            entityId: row.projectId,
+            changes: {
+              [`${row.kind} packet`]: { before: null, after: `Rev ${row.revision}, ${pageCount} pages, SHA-256 ${sha256.slice(0, 12)}…` },
+            },
           },
           { transaction },
         );

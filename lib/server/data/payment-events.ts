@@ -11,19 +11,34 @@ export type EventOutcome = "applied" | "duplicate" | "ignored";
 const idOf = (v: string | { id: string } | null | undefined) => (typeof v === "string" ? v : (v?.id ?? null));
 
 /** The payment an object belongs to: by our id in its metadata, else by the processor's ids we stored. */
-async function findPayment(transaction: Transaction, { paymentId, sessionId, paymentIntentId }: { paymentId?: string | null; sessionId?: string | null; paymentIntentId?: string | null }) {
+async function findPayment(
+  transaction: Transaction,
+  { paymentId, sessionId, paymentIntentId }: { paymentId?: string | null; sessionId?: string | null; paymentIntentId?: string | null },
+) {
   // Metadata can come from payments Ohmstead did not start; an id that is not ours is simply not found.
-  const where = paymentId && isUuid(paymentId) ? { id: paymentId } : sessionId ? { checkoutSessionId: sessionId } : paymentIntentId ? { paymentIntentId } : null;
+  const where =
+    paymentId && isUuid(paymentId)
+      ? { id: paymentId }
+      : sessionId
+        ? { checkoutSessionId: sessionId }
+        : paymentIntentId
+          ? { paymentIntentId }
+          : null;
   if (!where) return null;
   return Payment.findOne({ where, transaction, lock: transaction.LOCK.UPDATE });
 }
 
 /** Moves a payment to paid once; later or repeated news of the same payment changes nothing. */
-async function markPaid(payment: Payment, facts: { paymentIntentId: string | null; card?: { brand?: string | null; last4?: string | null } | null }, transaction: Transaction) {
+async function markPaid(
+  payment: Payment,
+  facts: { paymentIntentId: string | null; card?: { brand?: string | null; last4?: string | null } | null },
+  transaction: Transaction,
+) {
   const values: Partial<Payment> = {};
   if (facts.paymentIntentId && !payment.paymentIntentId) values.paymentIntentId = facts.paymentIntentId;
   if (facts.card?.last4 && !payment.cardLast4) Object.assign(values, { cardBrand: facts.card.brand ?? null, cardLast4: facts.card.last4 });
-  if (payment.status === "pending" || payment.status === "expired") Object.assign(values, { status: "paid", paidAt: new Date(), failureMessage: null });
+  if (payment.status === "pending" || payment.status === "expired")
+    Object.assign(values, { status: "paid", paidAt: new Date(), failureMessage: null });
   if (Object.keys(values).length) await payment.update(values, { transaction });
 }
 
@@ -39,7 +54,8 @@ export async function applySessionState(session: Stripe.Checkout.Session): Promi
     if (!payment) return false;
     const before = payment.status;
     const intent = typeof session.payment_intent === "object" ? session.payment_intent : null;
-    if (session.payment_status === "paid") await markPaid(payment, { paymentIntentId: idOf(session.payment_intent), card: cardOf(intent?.latest_charge) }, transaction);
+    if (session.payment_status === "paid")
+      await markPaid(payment, { paymentIntentId: idOf(session.payment_intent), card: cardOf(intent?.latest_charge) }, transaction);
     else if (session.status === "expired" && payment.status === "pending") await payment.update({ status: "expired" }, { transaction });
     return payment.status !== before;
   });
@@ -52,7 +68,11 @@ export async function applySessionState(session: Stripe.Checkout.Session): Promi
  */
 export async function applyProcessorEvent(event: Stripe.Event): Promise<EventOutcome> {
   return db().transaction(async (transaction) => {
-    const [, fresh] = await ProcessorEvent.findOrCreate({ where: { id: event.id }, defaults: { id: event.id, type: event.type, receivedAt: new Date() }, transaction });
+    const [, fresh] = await ProcessorEvent.findOrCreate({
+      where: { id: event.id },
+      defaults: { id: event.id, type: event.type, receivedAt: new Date() },
+      transaction,
+    });
     if (!fresh) return "duplicate";
     switch (event.type) {
       case "checkout.session.completed":
@@ -82,12 +102,22 @@ export async function applyProcessorEvent(event: Stripe.Event): Promise<EventOut
         const payment = await findPayment(transaction, { paymentId: intent.metadata?.paymentId, paymentIntentId: intent.id });
         if (!payment) return "ignored";
         // A decline leaves the fees unpaid and the checkout open for another card; the office sees why.
-        if (payment.status === "pending") await payment.update({ failureMessage: intent.last_payment_error?.message ?? "The payment was not completed.", paymentIntentId: payment.paymentIntentId ?? intent.id }, { transaction });
+        if (payment.status === "pending")
+          await payment.update(
+            {
+              failureMessage: intent.last_payment_error?.message ?? "The payment was not completed.",
+              paymentIntentId: payment.paymentIntentId ?? intent.id,
+            },
+            { transaction },
+          );
         return "applied";
       }
       case "charge.succeeded": {
         const charge = event.data.object;
-        const payment = await findPayment(transaction, { paymentId: charge.metadata?.paymentId, paymentIntentId: idOf(charge.payment_intent) });
+        const payment = await findPayment(transaction, {
+          paymentId: charge.metadata?.paymentId,
+          paymentIntentId: idOf(charge.payment_intent),
+        });
         if (!payment) return "ignored";
         const card = cardOf(charge);
         if (card?.last4 && !payment.cardLast4) await payment.update({ cardBrand: card.brand, cardLast4: card.last4 }, { transaction });
@@ -95,7 +125,10 @@ export async function applyProcessorEvent(event: Stripe.Event): Promise<EventOut
       }
       case "charge.refunded": {
         const charge = event.data.object;
-        const payment = await findPayment(transaction, { paymentId: charge.metadata?.paymentId, paymentIntentId: idOf(charge.payment_intent) });
+        const payment = await findPayment(transaction, {
+          paymentId: charge.metadata?.paymentId,
+          paymentIntentId: idOf(charge.payment_intent),
+        });
         if (!payment) return "ignored";
         // A refund proves the charge went through, even if its success event has not arrived yet. The
         // amounts come from the refund events, one per refund, so a refund that fails later stops counting.
@@ -106,7 +139,10 @@ export async function applyProcessorEvent(event: Stripe.Event): Promise<EventOut
       case "refund.updated":
       case "refund.failed": {
         const refund = event.data.object;
-        const payment = await findPayment(transaction, { paymentId: refund.metadata?.paymentId, paymentIntentId: idOf(refund.payment_intent) });
+        const payment = await findPayment(transaction, {
+          paymentId: refund.metadata?.paymentId,
+          paymentIntentId: idOf(refund.payment_intent),
+        });
         if (!payment) return "ignored";
         await markPaid(payment, { paymentIntentId: idOf(refund.payment_intent) }, transaction);
         await recordRefund(payment.id, refund, { reason: refund.metadata?.note ?? null, createdById: null }, transaction);

@@ -15,11 +15,43 @@ import { getProjectById } from "./projects";
 export type PaymentRef = { id: string; checkoutSessionId: string | null };
 
 /** Records a pending payment of the chosen fee lines, with its lines and audit row, in one transaction. */
-export async function createPendingPayment({ viewer, projectId, lines, amountCents }: { viewer: Viewer; projectId: string; lines: ProjectFeeLineDto[]; amountCents: number }): Promise<{ id: string }> {
+export async function createPendingPayment({
+  viewer,
+  projectId,
+  lines,
+  amountCents,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  lines: ProjectFeeLineDto[];
+  amountCents: number;
+}): Promise<{ id: string }> {
   return db().transaction(async (transaction) => {
-    const created = await Payment.create({ organizationId: viewer.organizationId, projectId, amountCents, createdById: viewer.id }, { transaction });
-    await PaymentLine.bulkCreate(lines.map((l) => ({ paymentId: created.id, feeKey: l.feeKey, authority: l.authority, name: l.name, arithmetic: l.arithmetic, amountCents: l.amountCents })), { transaction });
-    await recordAudit({ viewer, action: "payment.started", entityType: "project", entityId: projectId, changes: { payment: { before: null, after: `${formatUsd(amountCents)} for ${lines.map((l) => l.name).join(", ")}` } } }, { transaction });
+    const created = await Payment.create(
+      { organizationId: viewer.organizationId, projectId, amountCents, createdById: viewer.id },
+      { transaction },
+    );
+    await PaymentLine.bulkCreate(
+      lines.map((l) => ({
+        paymentId: created.id,
+        feeKey: l.feeKey,
+        authority: l.authority,
+        name: l.name,
+        arithmetic: l.arithmetic,
+        amountCents: l.amountCents,
+      })),
+      { transaction },
+    );
+    await recordAudit(
+      {
+        viewer,
+        action: "payment.started",
+        entityType: "project",
+        entityId: projectId,
+        changes: { payment: { before: null, after: `${formatUsd(amountCents)} for ${lines.map((l) => l.name).join(", ")}` } },
+      },
+      { transaction },
+    );
     return { id: created.id };
   });
 }
@@ -39,7 +71,10 @@ export async function expirePayment(paymentId: string, failureMessage?: string):
 /** The organization's payments by id, for ending their unfinished checkouts. */
 export async function getPaymentRefs({ viewer, paymentIds }: { viewer: Viewer; paymentIds: string[] }): Promise<PaymentRef[]> {
   db();
-  const rows = await Payment.findAll({ where: { id: paymentIds, organizationId: viewer.organizationId }, attributes: ["id", "checkoutSessionId"] });
+  const rows = await Payment.findAll({
+    where: { id: paymentIds, organizationId: viewer.organizationId },
+    attributes: ["id", "checkoutSessionId"],
+  });
   return rows.map(({ id, checkoutSessionId }) => ({ id, checkoutSessionId }));
 }
 
@@ -56,10 +91,19 @@ export type RefundablePayment = {
 /** NOT_FOUND for a payment of another organization or of a project the viewer cannot see; CONFLICT unless it holds money. */
 export async function getRefundablePayment({ viewer, paymentId }: { viewer: Viewer; paymentId: string }): Promise<RefundablePayment> {
   db();
-  const payment = isUuid(paymentId) ? await Payment.findOne({ where: { id: paymentId, organizationId: viewer.organizationId }, include: [{ model: PaymentLine, as: "lines" }, { model: Refund, as: "refunds" }] }) : null;
+  const payment = isUuid(paymentId)
+    ? await Payment.findOne({
+        where: { id: paymentId, organizationId: viewer.organizationId },
+        include: [
+          { model: PaymentLine, as: "lines" },
+          { model: Refund, as: "refunds" },
+        ],
+      })
+    : null;
   if (!payment) throw new AppError("NOT_FOUND", "No such payment.");
   await getProjectById({ viewer, projectId: payment.projectId });
-  if (payment.status !== "paid" && payment.status !== "partially_refunded") throw new AppError("CONFLICT", "Only a paid payment can be refunded.");
+  if (payment.status !== "paid" && payment.status !== "partially_refunded")
+    throw new AppError("CONFLICT", "Only a paid payment can be refunded.");
   return {
     id: payment.id,
     projectId: payment.projectId,
@@ -96,7 +140,10 @@ export async function getPaymentDto(paymentId: string): Promise<PaymentDto> {
 /** Pending payments with a checkout, untouched for `olderThanMs`: their webhook may never have come. */
 export async function listStalePendingPayments({ olderThanMs }: { olderThanMs: number }): Promise<PaymentRef[]> {
   db();
-  const rows = await Payment.findAll({ where: { status: "pending", checkoutSessionId: { [Op.ne]: null }, updatedAt: { [Op.lt]: new Date(Date.now() - olderThanMs) } }, limit: 50 });
+  const rows = await Payment.findAll({
+    where: { status: "pending", checkoutSessionId: { [Op.ne]: null }, updatedAt: { [Op.lt]: new Date(Date.now() - olderThanMs) } },
+    limit: 50,
+  });
   return rows.map(({ id, checkoutSessionId }) => ({ id, checkoutSessionId }));
 }
 

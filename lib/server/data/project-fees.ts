@@ -45,8 +45,22 @@ export function toPaymentDto(p: Payment, { failureStillOpen = false }: { failure
     paidAt: p.paidAt?.toISOString() ?? null,
     createdAt: p.createdAt.toISOString(),
     createdBy: p.createdBy?.name ?? null,
-    lines: (p.lines ?? []).map((l) => ({ feeKey: l.feeKey, name: l.name, authority: l.authority, amountCents: l.amountCents, refunded: returned.has(l.feeKey) })),
-    refunds: (p.refunds ?? []).map((r) => ({ id: r.id, amountCents: r.amountCents, lineNames: r.feeKeys.map((k) => nameOf.get(k)).filter((n): n is string => Boolean(n)), reason: r.reason, createdAt: r.createdAt.toISOString(), createdBy: r.createdBy?.name ?? null, failed: r.status === "failed" })),
+    lines: (p.lines ?? []).map((l) => ({
+      feeKey: l.feeKey,
+      name: l.name,
+      authority: l.authority,
+      amountCents: l.amountCents,
+      refunded: returned.has(l.feeKey),
+    })),
+    refunds: (p.refunds ?? []).map((r) => ({
+      id: r.id,
+      amountCents: r.amountCents,
+      lineNames: r.feeKeys.map((k) => nameOf.get(k)).filter((n): n is string => Boolean(n)),
+      reason: r.reason,
+      createdAt: r.createdAt.toISOString(),
+      createdBy: r.createdBy?.name ?? null,
+      failed: r.status === "failed",
+    })),
     failureStillOpen: Boolean(p.failureMessage) && failureStillOpen,
   };
 }
@@ -73,18 +87,32 @@ export type DesignSizes = ProjectFeesDto["sizes"];
 /** The ratings fees are priced from: the reviewed design's DC and AC size, null while the design cannot be reviewed. */
 export async function designSizes({ viewer, project }: { viewer: Viewer; project: ProjectDto }): Promise<DesignSizes> {
   const snapshot = await getReviewedDesign({ viewer, projectId: project.id, project });
-  return snapshot.status === "reviewed" ? { dcKw: snapshot.reviewed.review.summary.ratings.dcKw, acKw: snapshot.reviewed.review.summary.ratings.acKw } : null;
+  return snapshot.status === "reviewed"
+    ? { dcKw: snapshot.reviewed.review.summary.ratings.dcKw, acKw: snapshot.reviewed.review.summary.ratings.acKw }
+    : null;
 }
 
 /** The fees of a project already read, priced from sizes already worked out: what changes between two looks is only the payments. */
-export async function feesForProject({ viewer, project, sizes }: { viewer: Viewer; project: ProjectDto; sizes: DesignSizes }): Promise<ProjectFeesDto> {
+export async function feesForProject({
+  viewer,
+  project,
+  sizes,
+}: {
+  viewer: Viewer;
+  project: ProjectDto;
+  sizes: DesignSizes;
+}): Promise<ProjectFeesDto> {
   db();
   const projectId = project.id;
   const valuationCents = project.declaredValuationCents;
   const asOf = localIsoDate(new Date().toISOString(), (await getOrganization({ viewer })).timeZone);
 
   const schedules = await schedulesForProject(viewer, project);
-  const payments = await Payment.findAll({ where: { projectId, organizationId: viewer.organizationId }, include: PAYMENT_INCLUDE, order: [["createdAt", "DESC"]] });
+  const payments = await Payment.findAll({
+    where: { projectId, organizationId: viewer.organizationId },
+    include: PAYMENT_INCLUDE,
+    order: [["createdAt", "DESC"]],
+  });
   // Which payment holds each line (a paid one before a pending one), and which lines refunds gave back.
   const holding = new Map<string, Payment>();
   const refundedBy = new Map<string, Payment>();
@@ -93,7 +121,10 @@ export async function feesForProject({ viewer, project, sizes }: { viewer: Viewe
     for (const l of p.lines ?? []) {
       if (returned.has(l.feeKey)) {
         if (!refundedBy.has(l.feeKey)) refundedBy.set(l.feeKey, p);
-      } else if (HOLDS_LINES.includes(p.status) && (!holding.has(l.feeKey) || (holding.get(l.feeKey)!.status === "pending" && p.status !== "pending"))) {
+      } else if (
+        HOLDS_LINES.includes(p.status) &&
+        (!holding.has(l.feeKey) || (holding.get(l.feeKey)!.status === "pending" && p.status !== "pending"))
+      ) {
         holding.set(l.feeKey, p);
       }
     }
@@ -101,14 +132,23 @@ export async function feesForProject({ viewer, project, sizes }: { viewer: Viewe
 
   const lines: ProjectFeeLineDto[] = [];
   for (const schedule of schedules) {
-    const computed = computeFees({ lines: schedule.lines.map((l) => ({ ...l, authority: schedule.name })), facts: { dcKw: sizes?.dcKw ?? null, acKw: sizes?.acKw ?? null, valuationCents, asOf } });
+    const computed = computeFees({
+      lines: schedule.lines.map((l) => ({ ...l, authority: schedule.name })),
+      facts: { dcKw: sizes?.dcKw ?? null, acKw: sizes?.acKw ?? null, valuationCents, asOf },
+    });
     for (const line of computed.lines) {
       const feeKey = feeKeyOf(schedule.kind, schedule.id, line.name);
       const payment = holding.get(feeKey) ?? null;
       const paidLine = payment && payment.status !== "pending" ? payment.lines!.find((l) => l.feeKey === feeKey)! : null;
       // A declined card leaves its checkout open but the fee unpaid; paying again replaces that checkout.
-      const state: FeeLineState = paidLine ? "paid" : payment && !payment.failureMessage ? "in-progress" : refundedBy.has(feeKey) ? "refunded" : "unpaid";
-      const problem = paidLine ? null : line.problem ?? null;
+      const state: FeeLineState = paidLine
+        ? "paid"
+        : payment && !payment.failureMessage
+          ? "in-progress"
+          : refundedBy.has(feeKey)
+            ? "refunded"
+            : "unpaid";
+      const problem = paidLine ? null : (line.problem ?? null);
       const amountCents = paidLine ? paidLine.amountCents : line.amountCents;
       lines.push({
         feeKey,
@@ -129,7 +169,9 @@ export async function feesForProject({ viewer, project, sizes }: { viewer: Viewe
   const unpaidTotalCents = owed.reduce((sum, l) => sum + l.amountCents, 0);
   const stateOf = new Map(lines.map((l) => [l.feeKey, l.state]));
   // A failed attempt matters while one of its fees is still owed and no other checkout is under way for it.
-  const failureStillOpen = (p: Payment) => !MONEY_HELD.includes(p.status) && (p.lines ?? []).some((l) => stateOf.get(l.feeKey) === "unpaid" || stateOf.get(l.feeKey) === "refunded");
+  const failureStillOpen = (p: Payment) =>
+    !MONEY_HELD.includes(p.status) &&
+    (p.lines ?? []).some((l) => stateOf.get(l.feeKey) === "unpaid" || stateOf.get(l.feeKey) === "refunded");
   return {
     asOf,
     sizes,
@@ -142,13 +184,34 @@ export async function feesForProject({ viewer, project, sizes }: { viewer: Viewe
 }
 
 /** The valuation the owner declared for the work; fees that are a percentage of it follow. */
-export async function setDeclaredValuation({ viewer, projectId, valuationCents }: { viewer: Viewer; projectId: string; valuationCents: number | null }) {
+export async function setDeclaredValuation({
+  viewer,
+  projectId,
+  valuationCents,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  valuationCents: number | null;
+}) {
   const sequelize = db();
   await sequelize.transaction(async (transaction) => {
-    const project = await Project.findOne({ where: { id: projectId, organizationId: viewer.organizationId }, transaction, lock: transaction.LOCK.UPDATE });
+    const project = await Project.findOne({
+      where: { id: projectId, organizationId: viewer.organizationId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!project || !can(viewer, "project:edit", project)) throw new AppError("NOT_FOUND", "No such project.");
     const before = project.declaredValuationCents;
     await project.update({ declaredValuationCents: valuationCents }, { transaction });
-    await recordAudit({ viewer, action: "project.valuation-declared", entityType: "project", entityId: projectId, changes: { declaredValuationCents: { before, after: valuationCents } } }, { transaction });
+    await recordAudit(
+      {
+        viewer,
+        action: "project.valuation-declared",
+        entityType: "project",
+        entityId: projectId,
+        changes: { declaredValuationCents: { before, after: valuationCents } },
+      },
+      { transaction },
+    );
   });
 }

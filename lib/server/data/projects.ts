@@ -65,7 +65,9 @@ function toProjectDto(p: Project, now = Date.now()): ProjectDto {
 
 /** The rows a viewer may see: their organization's, and for installers only those assigned to them. */
 function visibleTo(viewer: Viewer): WhereOptions<Project> {
-  return viewer.role === "installer" ? { organizationId: viewer.organizationId, installerId: viewer.id } : { organizationId: viewer.organizationId };
+  return viewer.role === "installer"
+    ? { organizationId: viewer.organizationId, installerId: viewer.id }
+    : { organizationId: viewer.organizationId };
 }
 
 /**
@@ -74,7 +76,8 @@ function visibleTo(viewer: Viewer): WhereOptions<Project> {
  */
 function orderFor({ sort, direction }: Pick<ProjectListQuery, "sort" | "direction">): OrderItem {
   const dir = direction === "asc" ? "ASC" : "DESC";
-  if (sort === "stage") return [literal(`array_position(array[${STAGES.map((s) => `'${s}'`).join(",")}]::varchar[], "Project"."stage")`), dir];
+  if (sort === "stage")
+    return [literal(`array_position(array[${STAGES.map((s) => `'${s}'`).join(",")}]::varchar[], "Project"."stage")`), dir];
   if (sort === "daysInStage") return ["stageChangedAt", dir === "ASC" ? "DESC" : "ASC"];
   return [sort, dir];
 }
@@ -106,7 +109,13 @@ export async function listProjects({ viewer, query }: { viewer: Viewer; query: P
     distinct: true,
   });
   const now = Date.now();
-  return { items: rows.map((r) => toProjectDto(r, now)), total: count, page: query.page, pageSize: query.pageSize, pageCount: Math.max(1, Math.ceil(count / query.pageSize)) };
+  return {
+    items: rows.map((r) => toProjectDto(r, now)),
+    total: count,
+    page: query.page,
+    pageSize: query.pageSize,
+    pageCount: Math.max(1, Math.ceil(count / query.pageSize)),
+  };
 }
 
 async function findVisibleProject(viewer: Viewer, projectId: string, transaction?: Transaction) {
@@ -144,8 +153,16 @@ async function assertReferences(viewer: Viewer, values: ProjectValues) {
   await Promise.all([
     check("jurisdictionId", (id) => Jurisdiction.findOne({ where: { id, organizationId: org } }), "Choose one of your jurisdictions"),
     check("utilityId", (id) => Utility.findOne({ where: { id, organizationId: org } }), "Choose one of your utilities"),
-    check("coordinatorId", (id) => User.findOne({ where: { id, organizationId: org, role: { [Op.in]: ["admin", "coordinator"] }, isActive: true } }), "Choose an active coordinator"),
-    check("installerId", (id) => User.findOne({ where: { id, organizationId: org, role: "installer", isActive: true } }), "Choose an active installer"),
+    check(
+      "coordinatorId",
+      (id) => User.findOne({ where: { id, organizationId: org, role: { [Op.in]: ["admin", "coordinator"] }, isActive: true } }),
+      "Choose an active coordinator",
+    ),
+    check(
+      "installerId",
+      (id) => User.findOne({ where: { id, organizationId: org, role: "installer", isActive: true } }),
+      "Choose an active installer",
+    ),
   ]);
   if (Object.keys(fieldErrors).length) throw new AppError("INVALID_INPUT", "Some choices are not valid.", fieldErrors);
 }
@@ -155,16 +172,40 @@ export async function createProject({ viewer, values }: { viewer: Viewer; values
   if (!can(viewer, "project:create")) throw new AppError("FORBIDDEN", "You cannot create projects.");
   await assertReferences(viewer, values);
   const id = await sequelize.transaction(async (transaction) => {
-    const project = await Project.create({ ...values, organizationId: viewer.organizationId, stage: "draft", stageChangedAt: new Date() }, { transaction });
-    await StageChange.create({ organizationId: viewer.organizationId, projectId: project.id, fromStage: null, toStage: "draft", changedById: viewer.id, note: "Project created" }, { transaction });
-    await recordAudit({ viewer, action: "project.created", entityType: "project", entityId: project.id, changes: diffFields({}, values) }, { transaction });
+    const project = await Project.create(
+      { ...values, organizationId: viewer.organizationId, stage: "draft", stageChangedAt: new Date() },
+      { transaction },
+    );
+    await StageChange.create(
+      {
+        organizationId: viewer.organizationId,
+        projectId: project.id,
+        fromStage: null,
+        toStage: "draft",
+        changedById: viewer.id,
+        note: "Project created",
+      },
+      { transaction },
+    );
+    await recordAudit(
+      { viewer, action: "project.created", entityType: "project", entityId: project.id, changes: diffFields({}, values) },
+      { transaction },
+    );
     await ensureDefaultFilings(project, { transaction, actorId: viewer.id });
     return project.id;
   });
   return readFreshProject(viewer, id);
 }
 
-export async function updateProject({ viewer, projectId, values }: { viewer: Viewer; projectId: string; values: ProjectValues }): Promise<ProjectDto> {
+export async function updateProject({
+  viewer,
+  projectId,
+  values,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  values: ProjectValues;
+}): Promise<ProjectDto> {
   const sequelize = db();
   await sequelize.transaction(async (transaction) => {
     // Who may edit is decided before what they sent is judged, so a stranger learns nothing from the answer.
@@ -173,7 +214,10 @@ export async function updateProject({ viewer, projectId, values }: { viewer: Vie
     await assertReferences(viewer, values);
     const before = project.get({ plain: true }) as Record<string, unknown>;
     await project.update(values, { transaction });
-    await recordAudit({ viewer, action: "project.updated", entityType: "project", entityId: project.id, changes: diffFields(before, values) }, { transaction });
+    await recordAudit(
+      { viewer, action: "project.updated", entityType: "project", entityId: project.id, changes: diffFields(before, values) },
+      { transaction },
+    );
     await ensureDefaultFilings(project, { transaction, actorId: viewer.id });
   });
   return readFreshProject(viewer, projectId);
@@ -191,7 +235,17 @@ async function fieldWorkMissing(projectId: string, transaction: Transaction): Pr
 export const STAGE_MAIL_HOLD_SECONDS = 45;
 
 /** Moves a project to another stage; the stage change and its audit event commit together or not at all. */
-export async function changeProjectStage({ viewer, projectId, toStage, note }: { viewer: Viewer; projectId: string; toStage: Stage; note: string }): Promise<ProjectDto> {
+export async function changeProjectStage({
+  viewer,
+  projectId,
+  toStage,
+  note,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  toStage: Stage;
+  note: string;
+}): Promise<ProjectDto> {
   const sequelize = db();
   await sequelize.transaction(async (transaction) => {
     const project = await findVisibleProject(viewer, projectId, transaction);
@@ -204,24 +258,57 @@ export async function changeProjectStage({ viewer, projectId, toStage, note }: {
     if (fromStage === toStage) throw new AppError("CONFLICT", `The project is already in “${STAGE_LABELS[toStage]}”.`);
     if (toStage === "commissioned" && !note.trim()) {
       const missing = await fieldWorkMissing(projectId, transaction);
-      if (missing) throw new AppError("CONFLICT", `${missing} Move it anyway only with a note saying why.`, { note: [`Say why: ${missing.toLowerCase()}`] });
+      if (missing)
+        throw new AppError("CONFLICT", `${missing} Move it anyway only with a note saying why.`, {
+          note: [`Say why: ${missing.toLowerCase()}`],
+        });
     }
     const at = new Date();
     // A stage set by hand stands until the facts of the filings pass it (lib/domain/filings).
     await project.update({ stage: toStage, stageChangedAt: at, handStage: toStage }, { transaction });
-    await StageChange.create({ organizationId: viewer.organizationId, projectId, fromStage, toStage, changedById: viewer.id, note }, { transaction });
-    await recordAudit({ viewer, action: "project.stage-changed", entityType: "project", entityId: projectId, changes: { stage: { before: fromStage, after: toStage }, ...(note ? { note: { before: null, after: note } } : {}) } }, { transaction });
+    await StageChange.create(
+      { organizationId: viewer.organizationId, projectId, fromStage, toStage, changedById: viewer.id, note },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        viewer,
+        action: "project.stage-changed",
+        entityType: "project",
+        entityId: projectId,
+        changes: { stage: { before: fromStage, after: toStage }, ...(note ? { note: { before: null, after: note } } : {}) },
+      },
+      { transaction },
+    );
     // The coordinator and installer hear of it, unless they made the change themselves.
     const people = [project.coordinatorId, project.installerId].filter((id): id is string => Boolean(id) && id !== viewer.id);
-    const recipients = people.length ? await User.findAll({ where: { id: people, organizationId: viewer.organizationId, isActive: true }, transaction }) : [];
+    const recipients = people.length
+      ? await User.findAll({ where: { id: people, organizationId: viewer.organizationId, isActive: true }, transaction })
+      : [];
     // Held briefly: further moves of this project in the next moments join the same message.
     const stepsSince = async (since: Date): Promise<StageStep[]> => {
-      const rows = await StageChange.findAll({ where: { projectId, createdAt: { [Op.gte]: since } }, include: [{ model: User, as: "changedBy", attributes: ["name"] }], order: [["createdAt", "ASC"]], transaction });
-      return rows.map((r) => ({ fromLabel: STAGE_LABELS[r.fromStage as Stage] ?? r.fromStage ?? "—", toLabel: STAGE_LABELS[r.toStage as Stage], changedBy: r.changedBy?.name ?? "Someone", note: r.note ?? "" }));
+      const rows = await StageChange.findAll({
+        where: { projectId, createdAt: { [Op.gte]: since } },
+        include: [{ model: User, as: "changedBy", attributes: ["name"] }],
+        order: [["createdAt", "ASC"]],
+        transaction,
+      });
+      return rows.map((r) => ({
+        fromLabel: STAGE_LABELS[r.fromStage as Stage] ?? r.fromStage ?? "—",
+        toLabel: STAGE_LABELS[r.toStage as Stage],
+        changedBy: r.changedBy?.name ?? "Someone",
+        note: r.note ?? "",
+      }));
     };
     for (const person of recipients) {
       await holdOrMergeMail(
-        { coalesceKey: `stage-change:${projectId}`, holdSeconds: STAGE_MAIL_HOLD_SECONDS, organizationId: viewer.organizationId, to: person.email, startedAt: at },
+        {
+          coalesceKey: `stage-change:${projectId}`,
+          holdSeconds: STAGE_MAIL_HOLD_SECONDS,
+          organizationId: viewer.organizationId,
+          to: person.email,
+          startedAt: at,
+        },
         async (since) =>
           stageChangedEmail({
             projectNumber: project.number,
@@ -247,5 +334,13 @@ export async function listStageChanges({ viewer, projectId }: { viewer: Viewer; 
     include: [{ model: User, as: "changedBy", attributes: ["name"] }],
     order: [["createdAt", "ASC"]],
   });
-  return rows.map((r) => ({ id: r.id, fromStage: r.fromStage, toStage: r.toStage, toLabel: STAGE_LABELS[r.toStage], note: r.note, changedBy: r.changedBy?.name ?? null, createdAt: r.createdAt.toISOString() }));
+  return rows.map((r) => ({
+    id: r.id,
+    fromStage: r.fromStage,
+    toStage: r.toStage,
+    toLabel: STAGE_LABELS[r.toStage],
+    note: r.note,
+    changedBy: r.changedBy?.name ?? null,
+    createdAt: r.createdAt.toISOString(),
+  }));
 }

@@ -13,7 +13,14 @@ export function receiptNumberFor(payment: { id: string; paidAt: Date | null }, p
 }
 
 /** A paid payment still without its receipt, with what the receipt prints and who it goes to. */
-export type DueReceipt = { paymentId: string; organizationId: string; projectId: string; objectKey: string; payerEmail: string | null; input: ReceiptInput };
+export type DueReceipt = {
+  paymentId: string;
+  organizationId: string;
+  projectId: string;
+  objectKey: string;
+  payerEmail: string | null;
+  input: ReceiptInput;
+};
 
 /**
  * Takes the oldest paid payment that has no receipt yet, locked (FOR UPDATE SKIP LOCKED) for the
@@ -21,7 +28,13 @@ export type DueReceipt = { paymentId: string; organizationId: string; projectId:
  */
 export async function claimDueReceipt(transaction: Transaction): Promise<DueReceipt | null> {
   db();
-  const payment = await Payment.findOne({ where: { status: { [Op.in]: RECEIPTED }, receiptKey: null }, order: [["paidAt", "ASC"]], lock: transaction.LOCK.UPDATE, skipLocked: true, transaction });
+  const payment = await Payment.findOne({
+    where: { status: { [Op.in]: RECEIPTED }, receiptKey: null },
+    order: [["paidAt", "ASC"]],
+    lock: transaction.LOCK.UPDATE,
+    skipLocked: true,
+    transaction,
+  });
   if (!payment) return null;
   // One after another: a transaction has one connection, which runs one query at a time.
   const project = await Project.findByPk(payment.projectId, { transaction });
@@ -39,8 +52,16 @@ export async function claimDueReceipt(transaction: Transaction): Promise<DueRece
     input: {
       receiptNumber,
       issuedAt: (payment.paidAt ?? new Date()).toISOString(),
-      organization: { name: organization?.name ?? "", phone: organization?.phone ?? null, timeZone: organization?.timeZone ?? DEFAULT_TIME_ZONE },
-      project: { number: project!.number, customerName: project!.customerName, address: `${project!.street}, ${project!.city}, ${project!.state} ${project!.postalCode}` },
+      organization: {
+        name: organization?.name ?? "",
+        phone: organization?.phone ?? null,
+        timeZone: organization?.timeZone ?? DEFAULT_TIME_ZONE,
+      },
+      project: {
+        number: project!.number,
+        customerName: project!.customerName,
+        address: `${project!.street}, ${project!.city}, ${project!.state} ${project!.postalCode}`,
+      },
       paidBy: { name: payer?.name ?? "", email: payer?.email ?? "" },
       lines: lines.map((l) => ({ name: l.name, authority: l.authority, arithmetic: l.arithmetic, amountCents: l.amountCents })),
       totalCents: payment.amountCents,
@@ -53,6 +74,9 @@ export async function claimDueReceipt(transaction: Transaction): Promise<DueRece
 }
 
 /** Writes the issued receipt's number and stored object on its payment. */
-export async function markReceiptIssued({ paymentId, receiptNumber, objectKey }: { paymentId: string; receiptNumber: string; objectKey: string }, transaction: Transaction): Promise<void> {
+export async function markReceiptIssued(
+  { paymentId, receiptNumber, objectKey }: { paymentId: string; receiptNumber: string; objectKey: string },
+  transaction: Transaction,
+): Promise<void> {
   await Payment.update({ receiptNumber, receiptKey: objectKey }, { where: { id: paymentId }, transaction });
 }

@@ -4,7 +4,8 @@ import type Stripe from "stripe";
 import { Payment, Refund } from "@/models";
 import type { RefundStatus } from "@/lib/domain/stored-values";
 
-const refundStatusOf = (status: string | null): RefundStatus => (status === "failed" || status === "canceled" ? "failed" : status === "succeeded" ? "succeeded" : "pending");
+const refundStatusOf = (status: string | null): RefundStatus =>
+  status === "failed" || status === "canceled" ? "failed" : status === "succeeded" ? "succeeded" : "pending";
 
 /** Fee keys a refund carries in the processor's metadata (a JSON list), for a refund the webhook records before the admin's call does. */
 function feeKeysOf(refund: { metadata?: Stripe.Metadata | null }): string[] {
@@ -31,12 +32,26 @@ export async function recordRefund(
   if (!payment) return { attributed: false };
   const status = refundStatusOf(refund.status);
   const feeKeys = extra.feeKeys ?? feeKeysOf(refund);
-  const [row, created] = await Refund.findOrCreate({ where: { processorRefundId: refund.id }, defaults: { paymentId, processorRefundId: refund.id, amountCents: refund.amount, reason: extra.reason, createdById: extra.createdById, status, feeKeys }, transaction });
+  const [row, created] = await Refund.findOrCreate({
+    where: { processorRefundId: refund.id },
+    defaults: {
+      paymentId,
+      processorRefundId: refund.id,
+      amountCents: refund.amount,
+      reason: extra.reason,
+      createdById: extra.createdById,
+      status,
+      feeKeys,
+    },
+    transaction,
+  });
   const changes: Partial<Refund> = {};
-  if (!created && row.status !== "failed" && status !== row.status && (status === "failed" || row.status === "pending")) changes.status = status;
+  if (!created && row.status !== "failed" && status !== row.status && (status === "failed" || row.status === "pending"))
+    changes.status = status;
   const attributed = Boolean(extra.createdById) && (created || !row.createdById);
   // The webhook may have recorded it first; the admin's own call then adds who asked, why and for which fees.
-  if (!created && attributed) Object.assign(changes, { reason: extra.reason, createdById: extra.createdById, ...(feeKeys.length ? { feeKeys } : {}) });
+  if (!created && attributed)
+    Object.assign(changes, { reason: extra.reason, createdById: extra.createdById, ...(feeKeys.length ? { feeKeys } : {}) });
   if (Object.keys(changes).length) await row.update(changes, { transaction });
   await settleRefunded(payment, transaction);
   return { attributed };

@@ -18,7 +18,15 @@ type Item<K extends EquipmentDto["kind"]> = Extract<EquipmentDto, { kind: K }>;
  * The project's saved design (or the new draft), reviewed once: one read of the project (pass it when the
  * caller has it already), of the design, of the catalog items it names, of its AHJ and of its utility.
  */
-export async function getReviewedDesign({ viewer, projectId, project: known }: { viewer: Viewer; projectId: string; project?: ProjectDto }): Promise<DesignSnapshot> {
+export async function getReviewedDesign({
+  viewer,
+  projectId,
+  project: known,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  project?: ProjectDto;
+}): Promise<DesignSnapshot> {
   db();
   const project = known ?? (await getProjectById({ viewer, projectId }));
   const design = await savedOrNewDesign(viewer, project);
@@ -27,9 +35,16 @@ export async function getReviewedDesign({ viewer, projectId, project: known }: {
     project.jurisdiction ? Jurisdiction.findOne({ where: { id: project.jurisdiction.id, organizationId: viewer.organizationId } }) : null,
     project.utility ? Utility.findOne({ where: { id: project.utility.id, organizationId: viewer.organizationId } }) : null,
   ]);
-  const conditions = jurisdiction ? { recordLowTempC: jurisdiction.recordLowTempC, highDesignTempC: jurisdiction.highDesignTempC, necEdition: jurisdiction.necEdition as NecEdition } : null;
+  const conditions = jurisdiction
+    ? {
+        recordLowTempC: jurisdiction.recordLowTempC,
+        highDesignTempC: jurisdiction.highDesignTempC,
+        necEdition: jurisdiction.necEdition as NecEdition,
+      }
+    : null;
   const outcome = runDesignReview(design.draft, catalog, conditions);
-  if (outcome.status !== "reviewed" || !jurisdiction) return { status: "incomplete", project, problems: outcome.status === "incomplete" ? outcome.problems : [] };
+  if (outcome.status !== "reviewed" || !jurisdiction)
+    return { status: "incomplete", project, problems: outcome.status === "incomplete" ? outcome.problems : [] };
 
   const designInput = DesignInput.parse(design.draft);
   const byId = new Map(catalog.map((c) => [c.id, c]));
@@ -44,7 +59,11 @@ export async function getReviewedDesign({ viewer, projectId, project: known }: {
     review: outcome.review,
     equipment: {
       module: item<"module">(designInput.equipment.moduleId)!,
-      inverters: designInput.equipment.inverters.map((line) => ({ lineId: line.lineId, quantity: line.quantity, item: item<"inverter">(line.equipmentId)! })),
+      inverters: designInput.equipment.inverters.map((line) => ({
+        lineId: line.lineId,
+        quantity: line.quantity,
+        item: item<"inverter">(line.equipmentId)!,
+      })),
       device: item<"device">(designInput.equipment.deviceId),
     },
   };

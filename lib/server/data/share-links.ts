@@ -39,10 +39,22 @@ function toShareLinkDto(link: ShareLink): ShareLinkDto {
   const labels = new Map(packets.map((p) => [p.id, revisionLabel(p)]));
   const accesses = [...(link.accesses ?? [])].sort((a, b) => b.createdAt.getTime() - a.createdAt.getTime());
   return {
-    id: link.id, recipientEmail: link.recipientEmail, note: link.note, status: statusOf(link), expiresAt: link.expiresAt.toISOString(), revokedAt: link.revokedAt?.toISOString() ?? null,
-    createdBy: link.createdBy?.name ?? null, createdAt: link.createdAt.toISOString(),
+    id: link.id,
+    recipientEmail: link.recipientEmail,
+    note: link.note,
+    status: statusOf(link),
+    expiresAt: link.expiresAt.toISOString(),
+    revokedAt: link.revokedAt?.toISOString() ?? null,
+    createdBy: link.createdBy?.name ?? null,
+    createdAt: link.createdAt.toISOString(),
     revisions: packets.map((p) => ({ packetId: p.id, label: labels.get(p.id)! })),
-    accesses: accesses.map((a) => ({ kind: a.kind, revision: a.packetId ? (labels.get(a.packetId) ?? null) : null, address: a.address, userAgent: a.userAgent, at: a.createdAt.toISOString() })),
+    accesses: accesses.map((a) => ({
+      kind: a.kind,
+      revision: a.packetId ? (labels.get(a.packetId) ?? null) : null,
+      address: a.address,
+      userAgent: a.userAgent,
+      at: a.createdAt.toISOString(),
+    })),
   };
 }
 
@@ -56,15 +68,31 @@ async function assertCanShare(viewer: Viewer, projectId: string) {
  * once and only its hash is stored; with a recipient, the link goes out through the outbox
  * in the same transaction.
  */
-export async function createShareLink({ viewer, projectId, input }: { viewer: Viewer; projectId: string; input: CreateShareLinkInput }): Promise<{ link: ShareLinkDto; url: string }> {
+export async function createShareLink({
+  viewer,
+  projectId,
+  input,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  input: CreateShareLinkInput;
+}): Promise<{ link: ShareLinkDto; url: string }> {
   const sequelize = db();
   await assertCanShare(viewer, projectId);
   const parsed = CreateShareLinkInput.safeParse(input);
-  if (!parsed.success) throw new AppError("INVALID_INPUT", "Check the highlighted fields.", z.flattenError(parsed.error).fieldErrors as Record<string, string[]>);
+  if (!parsed.success)
+    throw new AppError(
+      "INVALID_INPUT",
+      "Check the highlighted fields.",
+      z.flattenError(parsed.error).fieldErrors as Record<string, string[]>,
+    );
   const values = parsed.data;
   const packetIds = [...new Set(values.packetIds)];
   const packets = await Packet.findAll({ where: { id: packetIds, projectId, organizationId: viewer.organizationId, status: "ready" } });
-  if (packets.length !== packetIds.length) throw new AppError("INVALID_INPUT", "Only ready revisions of this project can be shared.", { packetIds: ["Choose ready revisions of this project"] });
+  if (packets.length !== packetIds.length)
+    throw new AppError("INVALID_INPUT", "Only ready revisions of this project can be shared.", {
+      packetIds: ["Choose ready revisions of this project"],
+    });
 
   const { token, tokenHash } = newToken();
   const url = `${env().APP_URL}/share/${token}`;
@@ -73,15 +101,40 @@ export async function createShareLink({ viewer, projectId, input }: { viewer: Vi
   const organization = await getOrganization({ viewer });
   const zone = organization.timeZone;
   const id = await sequelize.transaction(async (transaction) => {
-    const link = await ShareLink.create({ organizationId: viewer.organizationId, projectId, tokenHash, recipientEmail, note: values.note, expiresAt, createdById: viewer.id }, { transaction });
-    await ShareLinkPacket.bulkCreate(packets.map((p) => ({ shareLinkId: link.id, packetId: p.id })), { transaction });
+    const link = await ShareLink.create(
+      { organizationId: viewer.organizationId, projectId, tokenHash, recipientEmail, note: values.note, expiresAt, createdById: viewer.id },
+      { transaction },
+    );
+    await ShareLinkPacket.bulkCreate(
+      packets.map((p) => ({ shareLinkId: link.id, packetId: p.id })),
+      { transaction },
+    );
     await recordAudit(
-      { viewer, action: "share-link.created", entityType: "project", entityId: projectId, changes: { inspectorLink: { before: null, after: `${packets.map(revisionLabel).join(", ")} to ${recipientEmail ?? "no recipient"}, until ${localIsoDate(expiresAt.toISOString(), zone)}` } } },
+      {
+        viewer,
+        action: "share-link.created",
+        entityType: "project",
+        entityId: projectId,
+        changes: {
+          inspectorLink: {
+            before: null,
+            after: `${packets.map(revisionLabel).join(", ")} to ${recipientEmail ?? "no recipient"}, until ${localIsoDate(expiresAt.toISOString(), zone)}`,
+          },
+        },
+      },
       { transaction },
     );
     if (recipientEmail) {
       const input = packets[0].input as unknown as PacketInput;
-      const mail = inspectorLinkEmail({ organizationName: organization.name, senderName: viewer.name, siteAddress: siteAddress(input), revisions: packets.map(revisionLabel), note: values.note, url, expiresOn: localLongDate(expiresAt.toISOString(), zone) });
+      const mail = inspectorLinkEmail({
+        organizationName: organization.name,
+        senderName: viewer.name,
+        siteAddress: siteAddress(input),
+        revisions: packets.map(revisionLabel),
+        note: values.note,
+        url,
+        expiresOn: localLongDate(expiresAt.toISOString(), zone),
+      });
       await enqueueMail({ to: recipientEmail, ...mail, organizationId: viewer.organizationId }, { transaction });
     }
     return link.id;
@@ -92,7 +145,11 @@ export async function createShareLink({ viewer, projectId, input }: { viewer: Vi
 async function loadLink(viewer: Viewer, shareLinkId: string) {
   const link = await ShareLink.findOne({
     where: { id: shareLinkId, organizationId: viewer.organizationId },
-    include: [{ model: Packet, as: "packets", attributes: ["id", "kind", "revision"] }, { model: ShareLinkAccess, as: "accesses" }, { model: User, as: "createdBy", attributes: ["name"] }],
+    include: [
+      { model: Packet, as: "packets", attributes: ["id", "kind", "revision"] },
+      { model: ShareLinkAccess, as: "accesses" },
+      { model: User, as: "createdBy", attributes: ["name"] },
+    ],
   });
   if (!link) throw new AppError("NOT_FOUND", "No such link.");
   return link;
@@ -104,7 +161,11 @@ export async function listShareLinks({ viewer, projectId }: { viewer: Viewer; pr
   await assertCanShare(viewer, projectId);
   const links = await ShareLink.findAll({
     where: { projectId, organizationId: viewer.organizationId },
-    include: [{ model: Packet, as: "packets", attributes: ["id", "kind", "revision"] }, { model: ShareLinkAccess, as: "accesses" }, { model: User, as: "createdBy", attributes: ["name"] }],
+    include: [
+      { model: Packet, as: "packets", attributes: ["id", "kind", "revision"] },
+      { model: ShareLinkAccess, as: "accesses" },
+      { model: User, as: "createdBy", attributes: ["name"] },
+    ],
     order: [["createdAt", "DESC"]],
   });
   return links.map(toShareLinkDto);
@@ -120,7 +181,16 @@ export async function revokeShareLink({ viewer, shareLinkId }: { viewer: Viewer;
   if (!found.revokedAt) {
     await sequelize.transaction(async (transaction) => {
       await found.update({ revokedAt: new Date() }, { transaction });
-      await recordAudit({ viewer, action: "share-link.revoked", entityType: "project", entityId: found.projectId, changes: { inspectorLink: { before: found.recipientEmail ?? "link without recipient", after: "revoked" } } }, { transaction });
+      await recordAudit(
+        {
+          viewer,
+          action: "share-link.revoked",
+          entityType: "project",
+          entityId: found.projectId,
+          changes: { inspectorLink: { before: found.recipientEmail ?? "link without recipient", after: "revoked" } },
+        },
+        { transaction },
+      );
     });
   }
   return toShareLinkDto(await loadLink(viewer, shareLinkId));
@@ -134,7 +204,14 @@ export type SharedView = {
   expiresAt: string;
   note: string;
   input: PacketInput;
-  revisions: { packetId: string; kind: PacketKind; label: string; pageCount: number | null; sizeBytes: number | null; readyAt: string | null }[];
+  revisions: {
+    packetId: string;
+    kind: PacketKind;
+    label: string;
+    pageCount: number | null;
+    sizeBytes: number | null;
+    readyAt: string | null;
+  }[];
 };
 
 const clip = (client: ClientInfo) => ({ address: client.address.slice(0, 100), userAgent: client.userAgent.slice(0, 500) });
@@ -148,7 +225,11 @@ async function liveLinkByToken(token: string, client: ClientInfo) {
   const { address } = clip(client);
   const since = new Date(Date.now() - SHARE_THROTTLE.windowMinutes * 60_000);
   const misses = await ShareLinkMiss.count({ where: { address, createdAt: { [Op.gte]: since } } });
-  if (misses >= SHARE_THROTTLE.maxMisses) throw new AppError("LIMIT_EXCEEDED", `Too many unknown links were tried from your network. Wait ${SHARE_THROTTLE.windowMinutes} minutes and try again.`);
+  if (misses >= SHARE_THROTTLE.maxMisses)
+    throw new AppError(
+      "LIMIT_EXCEEDED",
+      `Too many unknown links were tried from your network. Wait ${SHARE_THROTTLE.windowMinutes} minutes and try again.`,
+    );
   const link = /^[A-Za-z0-9_-]{16,100}$/.test(token) ? await ShareLink.findOne({ where: { tokenHash: hashToken(token) } }) : null;
   if (!link) {
     await ShareLinkMiss.create({ address });
@@ -157,10 +238,14 @@ async function liveLinkByToken(token: string, client: ClientInfo) {
     throw new AppError("NOT_FOUND", "This link does not exist. Check that it was copied whole.");
   }
   const status = statusOf(link);
-  if (status === "revoked") throw new AppError("GONE", "This link was withdrawn by the sender. Ask them for a new one if you still need the documents.");
+  if (status === "revoked")
+    throw new AppError("GONE", "This link was withdrawn by the sender. Ask them for a new one if you still need the documents.");
   if (status === "expired") {
     const organization = await Organization.findByPk(link.organizationId, { attributes: ["timeZone"] });
-    throw new AppError("GONE", `This link expired on ${localLongDate(link.expiresAt.toISOString(), organization?.timeZone ?? DEFAULT_TIME_ZONE)}. Ask the sender for a new one if you still need the documents.`);
+    throw new AppError(
+      "GONE",
+      `This link expired on ${localLongDate(link.expiresAt.toISOString(), organization?.timeZone ?? DEFAULT_TIME_ZONE)}. Ask the sender for a new one if you still need the documents.`,
+    );
   }
   return link;
 }
@@ -180,7 +265,14 @@ export async function openShareLink(token: string, client: ClientInfo): Promise<
   db();
   const link = await liveLinkByToken(token, client);
   const [packets, organization] = await Promise.all([
-    Packet.findAll({ include: [{ model: ShareLink, as: "shareLinks", where: { id: link.id }, attributes: [] }], where: { organizationId: link.organizationId, status: "ready" }, order: [["kind", "DESC"], ["revision", "DESC"]] }),
+    Packet.findAll({
+      include: [{ model: ShareLink, as: "shareLinks", where: { id: link.id }, attributes: [] }],
+      where: { organizationId: link.organizationId, status: "ready" },
+      order: [
+        ["kind", "DESC"],
+        ["revision", "DESC"],
+      ],
+    }),
     Organization.findByPk(link.organizationId),
   ]);
   if (packets.length === 0) throw new AppError("GONE", "The documents behind this link are no longer available.");
@@ -192,7 +284,14 @@ export async function openShareLink(token: string, client: ClientInfo): Promise<
     expiresAt: link.expiresAt.toISOString(),
     note: link.note,
     input: newest.input as unknown as PacketInput,
-    revisions: packets.map((p) => ({ packetId: p.id, kind: p.kind, label: revisionLabel(p), pageCount: p.pageCount, sizeBytes: p.sizeBytes, readyAt: p.readyAt?.toISOString() ?? null })),
+    revisions: packets.map((p) => ({
+      packetId: p.id,
+      kind: p.kind,
+      label: revisionLabel(p),
+      pageCount: p.pageCount,
+      sizeBytes: p.sizeBytes,
+      readyAt: p.readyAt?.toISOString() ?? null,
+    })),
   };
 }
 

@@ -13,7 +13,15 @@ const knownKey = (email: string, address: string) => `known:${email.toLowerCase(
 /** How long an address stays "known" to an account after a successful sign-in from it. */
 const KNOWN_DAYS = 90;
 
-type Row = { pair_count: string; pair_latest: Date | null; account_count: string; account_latest: Date | null; address_count: string; address_oldest: Date | null; known: boolean };
+type Row = {
+  pair_count: string;
+  pair_latest: Date | null;
+  account_count: string;
+  account_latest: Date | null;
+  address_count: string;
+  address_oldest: Date | null;
+  known: boolean;
+};
 
 async function recentFailures(email: string, address: string, now: Date, transaction: Transaction): Promise<RecentFailures> {
   const since = new Date(now.getTime() - SIGN_IN_THROTTLE.windowMinutes * 60_000);
@@ -30,7 +38,15 @@ async function recentFailures(email: string, address: string, now: Date, transac
     {
       type: QueryTypes.SELECT,
       transaction,
-      replacements: { pair: pairKey(email, address), account: accountKey(email), address: addressKey(address), known: knownKey(email, address), since, knownSince, limit: SIGN_IN_THROTTLE.maxAddressFailures },
+      replacements: {
+        pair: pairKey(email, address),
+        account: accountKey(email),
+        address: addressKey(address),
+        known: knownKey(email, address),
+        since,
+        knownSince,
+        limit: SIGN_IN_THROTTLE.maxAddressFailures,
+      },
     },
   );
   return {
@@ -47,7 +63,10 @@ async function recentFailures(email: string, address: string, now: Date, transac
  * `check` verifies the password and says whether it matched; a throttled attempt is not checked
  * and not counted. The transaction commits either way, so a failure is always recorded.
  */
-export async function throttledSignIn<T>({ email, address }: { email: string; address: string }, check: (transaction: Transaction) => Promise<{ matched: boolean; value: T }>): Promise<{ decision: SignInDecision; matched: boolean; value?: T }> {
+export async function throttledSignIn<T>(
+  { email, address }: { email: string; address: string },
+  check: (transaction: Transaction) => Promise<{ matched: boolean; value: T }>,
+): Promise<{ decision: SignInDecision; matched: boolean; value?: T }> {
   const sequelize = db();
   return sequelize.transaction(async (transaction) => {
     await sequelize.query("SELECT pg_advisory_xact_lock(hashtext(:key))", { replacements: { key: accountKey(email) }, transaction });
@@ -60,7 +79,9 @@ export async function throttledSignIn<T>({ email, address }: { email: string; ad
       await SignInAttempt.destroy({ where: { key: knownKey(email, address) }, transaction });
       await SignInAttempt.create({ key: knownKey(email, address) }, { transaction });
     } else {
-      await SignInAttempt.bulkCreate([{ key: accountKey(email) }, { key: addressKey(address) }, { key: pairKey(email, address) }], { transaction });
+      await SignInAttempt.bulkCreate([{ key: accountKey(email) }, { key: addressKey(address) }, { key: pairKey(email, address) }], {
+        transaction,
+      });
     }
     return { decision, matched, value };
   });

@@ -12,7 +12,10 @@ import { deleteObject } from "../services/storage";
 export async function queueStorageRemovals(objectKeys: string[], { transaction }: { transaction: Transaction }): Promise<void> {
   if (!objectKeys.length) return;
   const now = new Date();
-  await StorageRemoval.bulkCreate(objectKeys.map((objectKey) => ({ objectKey, nextAttemptAt: now })), { transaction, ignoreDuplicates: true });
+  await StorageRemoval.bulkCreate(
+    objectKeys.map((objectKey) => ({ objectKey, nextAttemptAt: now })),
+    { transaction, ignoreDuplicates: true },
+  );
 }
 
 /**
@@ -21,9 +24,16 @@ export async function queueStorageRemovals(objectKeys: string[], { transaction }
  * until storage takes it; removing an object that is already gone succeeds. Never throws for a storage
  * failure: the caller's request has already done its work.
  */
-export async function sweepStorageRemovals({ objectKeys, limit = 50 }: { objectKeys?: string[]; limit?: number } = {}): Promise<{ removed: number; failed: number }> {
+export async function sweepStorageRemovals({ objectKeys, limit = 50 }: { objectKeys?: string[]; limit?: number } = {}): Promise<{
+  removed: number;
+  failed: number;
+}> {
   db();
-  const due = await StorageRemoval.findAll({ where: { nextAttemptAt: { [Op.lte]: new Date() }, ...(objectKeys ? { objectKey: objectKeys } : {}) }, order: [["nextAttemptAt", "ASC"]], limit });
+  const due = await StorageRemoval.findAll({
+    where: { nextAttemptAt: { [Op.lte]: new Date() }, ...(objectKeys ? { objectKey: objectKeys } : {}) },
+    order: [["nextAttemptAt", "ASC"]],
+    limit,
+  });
   let removed = 0;
   let failed = 0;
   for (const row of due) {
@@ -36,7 +46,9 @@ export async function sweepStorageRemovals({ objectKeys, limit = 50 }: { objectK
       const attempts = row.attempts + 1;
       const message = error instanceof Error ? error.message : String(error);
       console.error(`storage removal of ${row.objectKey} failed (try ${attempts}); will try again`, message);
-      await row.update({ attempts, lastError: message.slice(0, 1000), nextAttemptAt: new Date(Date.now() + mailRetryDelayMs(attempts)) }).catch((e: unknown) => console.error("storage removal bookkeeping", e));
+      await row
+        .update({ attempts, lastError: message.slice(0, 1000), nextAttemptAt: new Date(Date.now() + mailRetryDelayMs(attempts)) })
+        .catch((e: unknown) => console.error("storage removal bookkeeping", e));
     }
   }
   return { removed, failed };

@@ -24,7 +24,14 @@ function toViewer(user: User): Viewer {
 
 function toUserDto(user: User): UserDto {
   const status: UserStatus = !user.isActive ? "deactivated" : user.passwordHash ? "active" : "invited";
-  return { id: user.id, name: user.name, email: user.email, role: user.role, status, lastSignInAt: user.lastSignInAt?.toISOString() ?? null };
+  return {
+    id: user.id,
+    name: user.name,
+    email: user.email,
+    role: user.role,
+    status,
+    lastSignInAt: user.lastSignInAt?.toISOString() ?? null,
+  };
 }
 
 const NO_MATCH = "That e-mail address and password do not match an account.";
@@ -35,7 +42,14 @@ const NO_MATCH = "That e-mail address and password do not match an account.";
  * can hold a password while active (a unique index).
  */
 async function findSignInAccount(email: string, transaction: Transaction) {
-  const accounts = await User.findAll({ where: { email: email.toLowerCase(), passwordHash: { [Op.ne]: null } }, order: [["isActive", "DESC"], ["updatedAt", "DESC"]], transaction });
+  const accounts = await User.findAll({
+    where: { email: email.toLowerCase(), passwordHash: { [Op.ne]: null } },
+    order: [
+      ["isActive", "DESC"],
+      ["updatedAt", "DESC"],
+    ],
+    transaction,
+  });
   return accounts[0] ?? null;
 }
 
@@ -80,7 +94,13 @@ async function getUserInOrganization(viewer: Viewer, userId: string) {
 async function enqueueInvitationEmail({ viewer, user, token }: { viewer: Viewer; user: User; token: string }, transaction: Transaction) {
   const organization = await Organization.findByPk(viewer.organizationId, { transaction });
   const url = `${env().APP_URL}/invitation/${token}`;
-  const mail = invitationEmail({ name: user.name, organizationName: organization?.name ?? "", inviterName: viewer.name, url, days: INVITATION_DAYS });
+  const mail = invitationEmail({
+    name: user.name,
+    organizationName: organization?.name ?? "",
+    inviterName: viewer.name,
+    url,
+    days: INVITATION_DAYS,
+  });
   await enqueueMail({ to: user.email, organizationId: viewer.organizationId, ...mail }, { transaction });
 }
 
@@ -95,17 +115,49 @@ export async function inviteUser({ viewer, input }: { viewer: Viewer; input: Inv
   const { token, tokenHash } = newToken();
   const user = await sequelize.transaction(async (transaction) => {
     const existing = await User.findOne({ where: { email: input.email, organizationId: viewer.organizationId }, transaction });
-    if (existing) throw new AppError("CONFLICT", "Someone in your organization already has this e-mail address.", { email: ["Already in your organization"] });
-    const created = await User.create({ organizationId: viewer.organizationId, email: input.email, name: input.name, role: input.role, passwordHash: null, lastSignInAt: null }, { transaction }).catch((error: unknown) => {
+    if (existing)
+      throw new AppError("CONFLICT", "Someone in your organization already has this e-mail address.", {
+        email: ["Already in your organization"],
+      });
+    const created = await User.create(
+      {
+        organizationId: viewer.organizationId,
+        email: input.email,
+        name: input.name,
+        role: input.role,
+        passwordHash: null,
+        lastSignInAt: null,
+      },
+      { transaction },
+    ).catch((error: unknown) => {
       // Two admins inviting the same address at once: the unique (organization, e-mail) index decides.
-      if (error instanceof UniqueConstraintError) throw new AppError("CONFLICT", "Someone in your organization already has this e-mail address.", { email: ["Already in your organization"] });
+      if (error instanceof UniqueConstraintError)
+        throw new AppError("CONFLICT", "Someone in your organization already has this e-mail address.", {
+          email: ["Already in your organization"],
+        });
       throw error;
     });
     await Invitation.create(
-      { organizationId: viewer.organizationId, userId: created.id, tokenHash, expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000), usedAt: null, createdById: viewer.id },
+      {
+        organizationId: viewer.organizationId,
+        userId: created.id,
+        tokenHash,
+        expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+        usedAt: null,
+        createdById: viewer.id,
+      },
       { transaction },
     );
-    await recordAudit({ viewer, action: "user.invited", entityType: "user", entityId: created.id, changes: { email: { before: null, after: created.email }, role: { before: null, after: created.role } } }, { transaction });
+    await recordAudit(
+      {
+        viewer,
+        action: "user.invited",
+        entityType: "user",
+        entityId: created.id,
+        changes: { email: { before: null, after: created.email }, role: { before: null, after: created.role } },
+      },
+      { transaction },
+    );
     await enqueueInvitationEmail({ viewer, user: created, token }, transaction);
     return created;
   });
@@ -119,7 +171,10 @@ export async function updateUserRole({ viewer, userId, role }: { viewer: Viewer;
     const user = await getUserInOrganization(viewer, userId);
     const before = user.role;
     await user.update({ role }, { transaction });
-    await recordAudit({ viewer, action: "user.role-changed", entityType: "user", entityId: user.id, changes: { role: { before, after: role } } }, { transaction });
+    await recordAudit(
+      { viewer, action: "user.role-changed", entityType: "user", entityId: user.id, changes: { role: { before, after: role } } },
+      { transaction },
+    );
     return toUserDto(user);
   });
 }
@@ -132,10 +187,23 @@ export async function setUserActive({ viewer, userId, isActive }: { viewer: View
     const before = user.isActive;
     await user.update({ isActive }, { transaction }).catch((error: unknown) => {
       // Its address has since been given a password in another organization: one active account per address.
-      if (error instanceof UniqueConstraintError) throw new AppError("CONFLICT", "This account cannot be reactivated while its e-mail address signs in for another account. Invite the person with another address.");
+      if (error instanceof UniqueConstraintError)
+        throw new AppError(
+          "CONFLICT",
+          "This account cannot be reactivated while its e-mail address signs in for another account. Invite the person with another address.",
+        );
       throw error;
     });
-    await recordAudit({ viewer, action: isActive ? "user.reactivated" : "user.deactivated", entityType: "user", entityId: user.id, changes: { isActive: { before, after: isActive } } }, { transaction });
+    await recordAudit(
+      {
+        viewer,
+        action: isActive ? "user.reactivated" : "user.deactivated",
+        entityType: "user",
+        entityId: user.id,
+        changes: { isActive: { before, after: isActive } },
+      },
+      { transaction },
+    );
     return toUserDto(user);
   });
 }
@@ -149,7 +217,10 @@ async function findOpenInvitation(token: string) {
 
 /** Another organization's active account that already signs in with this address, if any. */
 async function signInAccountElsewhere(user: User, transaction?: Transaction) {
-  return User.findOne({ where: { email: user.email, id: { [Op.ne]: user.id }, isActive: true, passwordHash: { [Op.ne]: null } }, transaction });
+  return User.findOne({
+    where: { email: user.email, id: { [Op.ne]: user.id }, isActive: true, passwordHash: { [Op.ne]: null } },
+    transaction,
+  });
 }
 
 const ADDRESS_IN_USE =
@@ -184,7 +255,10 @@ export async function acceptInvitation({ token, password }: { token: string; pas
       if (error instanceof UniqueConstraintError) throw new AppError("CONFLICT", ADDRESS_IN_USE);
       throw error;
     });
-    await recordAudit({ viewer: toViewer(found.user), action: "user.password-set", entityType: "user", entityId: found.user.id }, { transaction });
+    await recordAudit(
+      { viewer: toViewer(found.user), action: "user.password-set", entityType: "user", entityId: found.user.id },
+      { transaction },
+    );
     return { email: found.user.email };
   });
 }
@@ -195,9 +269,20 @@ export async function renewInvitation({ viewer, userId }: { viewer: Viewer; user
   const { token, tokenHash } = newToken();
   const user = await sequelize.transaction(async (transaction) => {
     const found = await getUserInOrganization(viewer, userId);
-    if (found.passwordHash || !found.isActive) throw new AppError("CONFLICT", "Only active users who have not set a password can get a new invitation.");
+    if (found.passwordHash || !found.isActive)
+      throw new AppError("CONFLICT", "Only active users who have not set a password can get a new invitation.");
     await Invitation.update({ usedAt: new Date() }, { where: { userId, usedAt: null }, transaction });
-    await Invitation.create({ organizationId: viewer.organizationId, userId, tokenHash, expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000), usedAt: null, createdById: viewer.id }, { transaction });
+    await Invitation.create(
+      {
+        organizationId: viewer.organizationId,
+        userId,
+        tokenHash,
+        expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+        usedAt: null,
+        createdById: viewer.id,
+      },
+      { transaction },
+    );
     await recordAudit({ viewer, action: "user.invitation-renewed", entityType: "user", entityId: userId }, { transaction });
     await enqueueInvitationEmail({ viewer, user: found, token }, transaction);
     return found;

@@ -31,8 +31,24 @@ async function deliverOne(transaction: Transaction, transport: Transporter | und
   try {
     // A Message-ID fixed per row lets a receiving server spot the rare resend after a lost commit.
     // Attachments are read from storage at send time, so the outbox row stays small; a storage failure retries like SMTP's.
-    const attachments = await Promise.all((row.attachments ?? []).map(async (a) => ({ filename: a.fileName, contentType: a.contentType, content: Buffer.from(await getObjectBytes(a.objectKey)) })));
-    const { response } = await sendMail({ to: row.toAddress, subject: row.subject, text: row.textBody, html: row.htmlBody, attachments, messageId: `<${row.id}@outbox.ohmstead>` }, transport);
+    const attachments = await Promise.all(
+      (row.attachments ?? []).map(async (a) => ({
+        filename: a.fileName,
+        contentType: a.contentType,
+        content: Buffer.from(await getObjectBytes(a.objectKey)),
+      })),
+    );
+    const { response } = await sendMail(
+      {
+        to: row.toAddress,
+        subject: row.subject,
+        text: row.textBody,
+        html: row.htmlBody,
+        attachments,
+        messageId: `<${row.id}@outbox.ohmstead>`,
+      },
+      transport,
+    );
     await markMailSent(row, { attempts, response }, transaction);
     return "sent";
   } catch (error) {

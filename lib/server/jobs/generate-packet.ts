@@ -38,7 +38,9 @@ export async function generatePacket(packetId: string): Promise<void> {
       extras.push({ title: sheet.title, bytes: await getObjectBytes(sheet.objectKey!) });
     }
     await begin(stepOf("assemble"));
-    const merged = await appendPdfs(sheets, extras, { footer: `Attachment to project ${input.project.number}, ${PACKET_TITLES[packet.kind].toLowerCase()} Rev ${packet.revision}` });
+    const merged = await appendPdfs(sheets, extras, {
+      footer: `Attachment to project ${input.project.number}, ${PACKET_TITLES[packet.kind].toLowerCase()} Rev ${packet.revision}`,
+    });
 
     await begin(stepOf("store"));
     const checksum = sha256(merged.bytes);
@@ -50,7 +52,13 @@ export async function generatePacket(packetId: string): Promise<void> {
     if (sha256(await getObjectBytes(key)) !== checksum) throw new Error("The stored copy does not match the generated PDF.");
 
     const left = merged.skipped.length ? ` (${merged.skipped.map((x) => x.title).join(", ")}: data sheet unreadable, left out)` : "";
-    await generation.markReady({ objectKey: key, sha256: checksum, sizeBytes: merged.bytes.length, pageCount: merged.pageCount, doneText: `Ready${left}`.slice(0, 80) });
+    await generation.markReady({
+      objectKey: key,
+      sha256: checksum,
+      sizeBytes: merged.bytes.length,
+      pageCount: merged.pageCount,
+      doneText: `Ready${left}`.slice(0, 80),
+    });
   } catch (error) {
     console.error(`packet ${packetId} failed`, error);
     if (storedKey) await deleteObject(storedKey).catch(() => undefined);

@@ -22,8 +22,22 @@ export async function issueDueReceipts({ limit = 10 }: { limit?: number } = {}):
       await putObject({ key: objectKey, body: await renderReceiptPdf(input), contentType: "application/pdf" });
       await markReceiptIssued({ paymentId: due.paymentId, receiptNumber: input.receiptNumber, objectKey }, transaction);
       if (due.payerEmail) {
-        const mail = receiptEmail({ receiptNumber: input.receiptNumber, projectNumber: input.project.number, siteAddress: input.project.address, total: formatUsd(input.totalCents), lines: input.lines.map((l) => `${l.authority}: ${l.name}, ${formatUsd(l.amountCents)}`) });
-        await enqueueMail({ to: due.payerEmail, ...mail, organizationId: due.organizationId, attachments: [{ fileName: `${input.receiptNumber}.pdf`, objectKey, contentType: "application/pdf" }] }, { transaction });
+        const mail = receiptEmail({
+          receiptNumber: input.receiptNumber,
+          projectNumber: input.project.number,
+          siteAddress: input.project.address,
+          total: formatUsd(input.totalCents),
+          lines: input.lines.map((l) => `${l.authority}: ${l.name}, ${formatUsd(l.amountCents)}`),
+        });
+        await enqueueMail(
+          {
+            to: due.payerEmail,
+            ...mail,
+            organizationId: due.organizationId,
+            attachments: [{ fileName: `${input.receiptNumber}.pdf`, objectKey, contentType: "application/pdf" }],
+          },
+          { transaction },
+        );
       }
       return true;
     });

@@ -8,10 +8,17 @@ export type ServiceHealth = { status: "up" | "down"; latencyMs: number; error?: 
 async function probe(check: () => Promise<unknown>, timeoutMs = 3000): Promise<ServiceHealth> {
   const started = performance.now();
   try {
-    await Promise.race([check(), new Promise((_, reject) => setTimeout(() => reject(new Error(`no answer within ${timeoutMs} ms`)), timeoutMs))]);
+    await Promise.race([
+      check(),
+      new Promise((_, reject) => setTimeout(() => reject(new Error(`no answer within ${timeoutMs} ms`)), timeoutMs)),
+    ]);
     return { status: "up", latencyMs: Math.round(performance.now() - started) };
   } catch (error) {
-    return { status: "down", latencyMs: Math.round(performance.now() - started), error: error instanceof Error ? error.message : String(error) };
+    return {
+      status: "down",
+      latencyMs: Math.round(performance.now() - started),
+      error: error instanceof Error ? error.message : String(error),
+    };
   }
 }
 

@@ -2,7 +2,13 @@ import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
 import { env } from "../env";
 
-export type OutgoingMail = { to: string; subject: string; text: string; html: string; attachments?: { filename: string; content: Buffer; contentType: string }[] };
+export type OutgoingMail = {
+  to: string;
+  subject: string;
+  text: string;
+  html: string;
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
+};
 
 let transporter: Transporter | undefined;
 

@@ -17,7 +17,13 @@ export function stripe(): Stripe {
     client = new Stripe(e.STRIPE_SECRET_KEY, {
       maxNetworkRetries: 2,
       telemetry: false,
-      ...(base ? { host: base.hostname, port: Number(base.port || (base.protocol === "https:" ? 443 : 80)), protocol: base.protocol.replace(":", "") as "http" | "https" } : {}),
+      ...(base
+        ? {
+            host: base.hostname,
+            port: Number(base.port || (base.protocol === "https:" ? 443 : 80)),
+            protocol: base.protocol.replace(":", "") as "http" | "https",
+          }
+        : {}),
     });
   }
   return client;

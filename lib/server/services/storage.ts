@@ -43,7 +43,11 @@ export function presignedDownloadUrl(
   const disposition = inline ? "inline" : "attachment";
   return getSignedUrl(
     s3(),
-    new GetObjectCommand({ Bucket: env().S3_BUCKET, Key: key, ...(fileName ? { ResponseContentDisposition: `${disposition}; filename="${fileName.replace(/"/g, "")}"` } : {}) }),
+    new GetObjectCommand({
+      Bucket: env().S3_BUCKET,
+      Key: key,
+      ...(fileName ? { ResponseContentDisposition: `${disposition}; filename="${fileName.replace(/"/g, "")}"` } : {}),
+    }),
     { expiresIn: expiresInSeconds },
   );
 }

@@ -11,7 +11,16 @@ import { recordAudit } from "../data/audit";
 import { enqueueMail } from "../data/outbox";
 import { applySessionState } from "../data/payment-events";
 import {
-  createPendingPayment, expirePayment, getPaymentDto, getPaymentRefs, getRefundablePayment, getRefundMailFacts, listStalePendingPayments, setCheckoutSession, touchPayment, type PaymentRef,
+  createPendingPayment,
+  expirePayment,
+  getPaymentDto,
+  getPaymentRefs,
+  getRefundablePayment,
+  getRefundMailFacts,
+  listStalePendingPayments,
+  setCheckoutSession,
+  touchPayment,
+  type PaymentRef,
 } from "../data/payments";
 import { designSizes, feesForProject } from "../data/project-fees";
 import { getProjectById } from "../data/projects";
@@ -35,20 +44,39 @@ async function releasePending(payment: PaymentRef) {
  * reviewed once; after unfinished checkouts are ended, only the payments are read again. Returns the
  * hosted checkout page.
  */
-export async function startPayment({ viewer, projectId, feeKeys }: { viewer: Viewer; projectId: string; feeKeys: string[] }): Promise<{ paymentId: string; checkoutUrl: string }> {
+export async function startPayment({
+  viewer,
+  projectId,
+  feeKeys,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  feeKeys: string[];
+}): Promise<{ paymentId: string; checkoutUrl: string }> {
   const project = await getProjectById({ viewer, projectId });
   if (!can(viewer, "fees:pay")) throw new AppError("FORBIDDEN", "Your role cannot pay fees.");
   const sizes = await designSizes({ viewer, project });
   let fees = await feesForProject({ viewer, project, sizes });
-  const stale = fees.payments.filter((p) => p.status === "pending" && fees.lines.some((l) => feeKeys.includes(l.feeKey) && l.paymentId === p.id));
+  const stale = fees.payments.filter(
+    (p) => p.status === "pending" && fees.lines.some((l) => feeKeys.includes(l.feeKey) && l.paymentId === p.id),
+  );
   if (stale.length) {
     for (const p of await getPaymentRefs({ viewer, paymentIds: stale.map((s) => s.id) })) await releasePending(p);
     fees = await feesForProject({ viewer, project, sizes });
   }
   const chosen = fees.lines.filter((l) => feeKeys.includes(l.feeKey));
-  if (chosen.length !== new Set(feeKeys).size) throw new AppError("CONFLICT", "Some of the chosen fees no longer apply to this project. Reload the page.");
+  if (chosen.length !== new Set(feeKeys).size)
+    throw new AppError("CONFLICT", "Some of the chosen fees no longer apply to this project. Reload the page.");
   const blocked = chosen.find((l) => !l.payable);
-  if (blocked) throw new AppError("CONFLICT", blocked.state === "paid" ? `${blocked.name} is already paid.` : blocked.problem ? `${blocked.name}: ${blocked.problem}` : `${blocked.name} has nothing to pay.`);
+  if (blocked)
+    throw new AppError(
+      "CONFLICT",
+      blocked.state === "paid"
+        ? `${blocked.name} is already paid.`
+        : blocked.problem
+          ? `${blocked.name}: ${blocked.problem}`
+          : `${blocked.name} has nothing to pay.`,
+    );
   const amountCents = chosen.reduce((sum, l) => sum + l.amountCents, 0);
 
   const payment = await createPendingPayment({ viewer, projectId, lines: chosen, amountCents });
@@ -58,7 +86,10 @@ export async function startPayment({ viewer, projectId, feeKeys }: { viewer: Vie
     const session = await stripe().checkout.sessions.create(
       {
         mode: "payment",
-        line_items: chosen.map((l) => ({ quantity: 1, price_data: { currency: "usd", unit_amount: l.amountCents, product_data: { name: `${l.authority}: ${l.name}` } } })),
+        line_items: chosen.map((l) => ({
+          quantity: 1,
+          price_data: { currency: "usd", unit_amount: l.amountCents, product_data: { name: `${l.authority}: ${l.name}` } },
+        })),
         success_url: `${base}?checkout=done`,
         cancel_url: `${base}?checkout=cancelled`,
         client_reference_id: payment.id,
@@ -80,7 +111,12 @@ export async function startPayment({ viewer, projectId, feeKeys }: { viewer: Vie
 /** The processor's refusal, in its own words, for the admin to read. */
 function refusalOf(error: unknown): AppError {
   const message = error instanceof Error && error.message ? error.message : "no reason given";
-  const declined = typeof error === "object" && error !== null && "type" in error && String((error as { type: unknown }).type).startsWith("Stripe") && (error as { type: string }).type !== "StripeConnectionError";
+  const declined =
+    typeof error === "object" &&
+    error !== null &&
+    "type" in error &&
+    String((error as { type: unknown }).type).startsWith("Stripe") &&
+    (error as { type: string }).type !== "StripeConnectionError";
   if (declined) return new AppError("CONFLICT", `The payment service refused the refund: ${message}`);
   console.error("refund", error);
   return new AppError("CONFLICT", "The payment service did not answer. Nothing was refunded; try again in a minute.");
@@ -98,7 +134,12 @@ const METADATA_VALUE_MAX = 500;
  * admins pressing Refund at once make one refund (the same idempotency key), and only the request that
  * records it audits it and e-mails the payer, in the transaction that records it.
  */
-export async function refundPayment({ viewer, paymentId, reason, ...request }: { viewer: Viewer; paymentId: string; reason: string } & RefundRequest): Promise<PaymentDto> {
+export async function refundPayment({
+  viewer,
+  paymentId,
+  reason,
+  ...request
+}: { viewer: Viewer; paymentId: string; reason: string } & RefundRequest): Promise<PaymentDto> {
   if (!can(viewer, "fees:refund")) throw new AppError("FORBIDDEN", "Only an admin can refund.");
   const payment = await getRefundablePayment({ viewer, paymentId });
   const left = refundableCents(payment.paid);
@@ -122,24 +163,54 @@ export async function refundPayment({ viewer, paymentId, reason, ...request }: {
         payment_intent: payment.paymentIntentId!,
         amount: amountCents,
         reason: "requested_by_customer",
-        metadata: { paymentId: payment.id, note: reason.slice(0, 450), ...(keysText && keysText.length <= METADATA_VALUE_MAX ? { feeKeys: keysText } : {}) },
+        metadata: {
+          paymentId: payment.id,
+          note: reason.slice(0, 450),
+          ...(keysText && keysText.length <= METADATA_VALUE_MAX ? { feeKeys: keysText } : {}),
+        },
       },
-      { idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${amountCents}${keysText ? `-${createHash("sha256").update(keysText).digest("hex").slice(0, 16)}` : ""}` },
+      {
+        idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${amountCents}${keysText ? `-${createHash("sha256").update(keysText).digest("hex").slice(0, 16)}` : ""}`,
+      },
     )
     .catch((error: unknown) => {
       throw refusalOf(error);
     });
   if (refund.status === "failed" || refund.status === "canceled") {
-    throw new AppError("CONFLICT", `The payment service could not return the money${refund.failure_reason ? ` (${refund.failure_reason.replace(/_/g, " ")})` : ""}. Nothing was refunded.`);
+    throw new AppError(
+      "CONFLICT",
+      `The payment service could not return the money${refund.failure_reason ? ` (${refund.failure_reason.replace(/_/g, " ")})` : ""}. Nothing was refunded.`,
+    );
   }
   await db().transaction(async (transaction) => {
     const { attributed } = await recordRefund(payment.id, refund, { reason, createdById: viewer.id, feeKeys }, transaction);
     if (!attributed) return;
-    const what = feeKeys.length ? `${formatUsd(amountCents)} for ${payment.lines.filter((l) => feeKeys.includes(l.feeKey)).map((l) => l.name).join(", ")}` : formatUsd(amountCents);
-    await recordAudit({ viewer, action: "payment.refunded", entityType: "project", entityId: payment.projectId, changes: { refund: { before: null, after: `${what}: ${reason}` } } }, { transaction });
+    const what = feeKeys.length
+      ? `${formatUsd(amountCents)} for ${payment.lines
+          .filter((l) => feeKeys.includes(l.feeKey))
+          .map((l) => l.name)
+          .join(", ")}`
+      : formatUsd(amountCents);
+    await recordAudit(
+      {
+        viewer,
+        action: "payment.refunded",
+        entityType: "project",
+        entityId: payment.projectId,
+        changes: { refund: { before: null, after: `${what}: ${reason}` } },
+      },
+      { transaction },
+    );
     const facts = await getRefundMailFacts(payment.id, transaction);
     if (facts) {
-      const mail = refundEmail({ receiptNumber: facts.receiptNumber, projectNumber: facts.projectNumber, siteAddress: facts.siteAddress, refunded: formatUsd(amountCents), remaining: formatUsd(facts.remainingCents), reason });
+      const mail = refundEmail({
+        receiptNumber: facts.receiptNumber,
+        projectNumber: facts.projectNumber,
+        siteAddress: facts.siteAddress,
+        refunded: formatUsd(amountCents),
+        remaining: formatUsd(facts.remainingCents),
+        reason,
+      });
       await enqueueMail({ to: facts.to, ...mail, organizationId: facts.organizationId }, { transaction });
     }
   });

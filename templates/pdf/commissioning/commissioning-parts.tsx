@@ -30,10 +30,20 @@ function bandCells(input: PrintedCommissioning, documentLine: string): TitleCell
   const person = [input.installer?.name, org.licenseNumber ? `License ${org.licenseNumber}` : null].filter(Boolean).join(" · ");
   return [
     { label: "Project", flex: 2.3, main: input.facts.projectLabel, lines: [input.project.address] },
-    { label: "Authority having jurisdiction", flex: 1.7, main: input.project.jurisdictionName ?? "Not set", lines: [`NEC ${input.record.edition} as adopted`] },
+    {
+      label: "Authority having jurisdiction",
+      flex: 1.7,
+      main: input.project.jurisdictionName ?? "Not set",
+      lines: [`NEC ${input.record.edition} as adopted`],
+    },
     { label: "Installer", flex: 2, main: org.name, lines: [person, org.phone].filter((l): l is string => Boolean(l)) },
     { label: "Document", flex: 1.6, main: input.facts.title, lines: [documentLine] },
-    { label: "Commissioning", flex: 0.9, main: input.completion.complete ? "Complete" : "Open", lines: [`Printed ${input.facts.printedDate}`] },
+    {
+      label: "Commissioning",
+      flex: 0.9,
+      main: input.completion.complete ? "Complete" : "Open",
+      lines: [`Printed ${input.facts.printedDate}`],
+    },
   ];
 }
 
@@ -59,7 +69,12 @@ export function CommissioningDocument({
         title={title}
         subtitle={subtitle}
         footer={({ pageNumber, totalPages }) => (
-          <TitleBand cells={bandCells(input, documentLine)} count={{ page: pageNumber, total: totalPages }} caution={bandCaution ? input.facts.bandCaution : undefined} compact />
+          <TitleBand
+            cells={bandCells(input, documentLine)}
+            count={{ page: pageNumber, total: totalPages }}
+            caution={bandCaution ? input.facts.bandCaution : undefined}
+            compact
+          />
         )}
       >
         {children}
@@ -113,7 +128,15 @@ export function CompletionPanel({
 }
 
 /** The cautions in full, boxed; `columns` 2 sets them side by side to save height. */
-export function CautionNotice({ cautions, fontSize = 8, columns = 1 }: { cautions: readonly string[]; fontSize?: number; columns?: 1 | 2 }) {
+export function CautionNotice({
+  cautions,
+  fontSize = 8,
+  columns = 1,
+}: {
+  cautions: readonly string[];
+  fontSize?: number;
+  columns?: 1 | 2;
+}) {
   const items = cautions.map((text, i) => ({ text, n: i + 1 }));
   const per = Math.ceil(items.length / columns);
   const groups = Array.from({ length: columns }, (_, c) => items.slice(c * per, (c + 1) * per));
@@ -136,7 +159,15 @@ export function CautionNotice({ cautions, fontSize = 8, columns = 1 }: { caution
 }
 
 /** The equipment line both documents print: modules, inverters and the rapid shutdown equipment. */
-export function EquipmentRow({ system, rowStyle, cellStyle }: { system: PrintedCommissioning["system"]; rowStyle: Style; cellStyle: Style }) {
+export function EquipmentRow({
+  system,
+  rowStyle,
+  cellStyle,
+}: {
+  system: PrintedCommissioning["system"];
+  rowStyle: Style;
+  cellStyle: Style;
+}) {
   return (
     <View style={rowStyle}>
       <Field label="Modules" value={system.moduleSummary} style={cellStyle} />

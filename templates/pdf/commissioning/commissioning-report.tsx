@@ -18,7 +18,15 @@ const s = StyleSheet.create({
   intro: { fontSize: 8.5, lineHeight: 1.35, marginBottom: 8 },
   legend: { fontSize: 7.5, lineHeight: 1.3, color: COLORS.inkSoft, marginBottom: 5 },
   head: { flexDirection: "row", backgroundColor: COLORS.paperTint, borderTopWidth: 1, borderBottomWidth: 1, borderColor: COLORS.ink },
-  headCell: { paddingVertical: 3, paddingHorizontal: 4, fontSize: 6.8, fontWeight: 600, textTransform: "uppercase", letterSpacing: 0.4, color: COLORS.inkSoft },
+  headCell: {
+    paddingVertical: 3,
+    paddingHorizontal: 4,
+    fontSize: 6.8,
+    fontWeight: 600,
+    textTransform: "uppercase",
+    letterSpacing: 0.4,
+    color: COLORS.inkSoft,
+  },
   tableRow: { flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: COLORS.rule },
   cellPad: { paddingVertical: 3.5, paddingHorizontal: 4, fontSize: 7.5, lineHeight: 1.3 },
   title: { fontSize: 7.8, fontWeight: 600 },
@@ -30,7 +38,12 @@ const s = StyleSheet.create({
 // Column widths in points; the letter page gives 540.
 const W = { index: 18, check: 208, reading: 78, expected: 92, result: 56, basis: 88 } as const;
 const COLUMNS: [keyof typeof W, string][] = [
-  ["index", "#"], ["check", "What was checked, and the finding"], ["reading", "Reading"], ["expected", "Expected"], ["result", "Result"], ["basis", "Basis"],
+  ["index", "#"],
+  ["check", "What was checked, and the finding"],
+  ["reading", "Reading"],
+  ["expected", "Expected"],
+  ["result", "Result"],
+  ["basis", "Basis"],
 ];
 
 function TableHead() {
@@ -56,7 +69,9 @@ function ReadingLine({ row, index }: { row: ReadingRow; index: number }) {
         {row.finding ? <Text style={s.finding}>{row.finding}</Text> : null}
         {row.fix ? <Text style={s.fix}>To do: {row.fix}</Text> : null}
       </View>
-      <Text style={[s.cellPad, s.figure, unread ? base.faint : check.kind === "grid-profile" ? {} : base.measure, { width: W.reading }]}>{row.reading}</Text>
+      <Text style={[s.cellPad, s.figure, unread ? base.faint : check.kind === "grid-profile" ? {} : base.measure, { width: W.reading }]}>
+        {row.reading}
+      </Text>
       <Text style={[s.cellPad, { width: W.expected }]}>{row.expected}</Text>
       <View style={[s.cellPad, { width: W.result }]}>
         <StatusBadge status={check.status} fontSize={7} />
@@ -77,8 +92,9 @@ export function CommissioningReport({ input }: { input: PrintedCommissioning }) 
   return (
     <CommissioningDocument input={input} subtitle={`Grid-tied PV system · Project ${p.number}`} documentLine="Readings and results">
       <Text style={s.intro}>
-        The installer's readings at start-up, each beside what the approved design, the NEC {input.record.edition} and the utility's requirements lead one to expect. A reading not yet taken can be
-        added later; the record is complete only when every reading is in, none fails and none is still waiting.
+        The installer's readings at start-up, each beside what the approved design, the NEC {input.record.edition} and the utility's
+        requirements lead one to expect. A reading not yet taken can be added later; the record is complete only when every reading is in,
+        none fails and none is still waiting.
       </Text>
       <Section title="1  Project and system">
         <View style={s.row}>
@@ -101,17 +117,22 @@ export function CommissioningReport({ input }: { input: PrintedCommissioning }) 
       <Section title="2  Commissioning result">
         <CompletionPanel input={input} />
         <View style={s.row}>
-          <Field label="Readings by" value={input.installer ? `${input.installer.name} (${input.installer.email})` : "Not assigned"} style={s.wide} />
+          <Field
+            label="Readings by"
+            value={input.installer ? `${input.installer.name} (${input.installer.email})` : "Not assigned"}
+            style={s.wide}
+          />
           <Field label="Last recorded" value={input.facts.lastRecorded} style={s.cell} />
           <Field label="Marked complete" value={input.facts.markedComplete} style={s.cell} />
         </View>
       </Section>
       <Text style={base.sectionTitle} minPresenceAhead={90}>
-        3  Readings
+        3 Readings
       </Text>
       <Text style={s.legend}>
-        Pass: within what was expected. Review: recorded outside the usual range, not recorded yet, or waiting (devices still being found). Fail: must be put right before the record can be completed. Times are local to the
-        organization's time zone; the first power time is as entered on site.
+        Pass: within what was expected. Review: recorded outside the usual range, not recorded yet, or waiting (devices still being found).
+        Fail: must be put right before the record can be completed. Times are local to the organization's time zone; the first power time is
+        as entered on site.
       </Text>
       <View>
         <View fixed>

@@ -38,14 +38,23 @@ export function CompletionCertificate({ input }: { input: PrintedCommissioning }
   const { ratings, summary, readings, certificateFootnote: footnote } = input.facts;
   const org = input.organization;
   return (
-    <CommissioningDocument input={input} subtitle={`Grid-tied PV system · Project ${p.number}`} documentLine="For signature and upload" bandCaution={false}>
+    <CommissioningDocument
+      input={input}
+      subtitle={`Grid-tied PV system · Project ${p.number}`}
+      documentLine="For signature and upload"
+      bandCaution={false}
+    >
       <Section title="1  Installation and system">
         <View style={s.row}>
           <Field label="Customer" value={p.customerName} style={s.cell} />
           <Field label="Site address" value={p.address} style={s.wide} />
         </View>
         <View style={s.row}>
-          <Field label={`Authority having jurisdiction · NEC ${input.record.edition}`} value={p.jurisdictionName ?? "Not set"} style={s.cell} />
+          <Field
+            label={`Authority having jurisdiction · NEC ${input.record.edition}`}
+            value={p.jurisdictionName ?? "Not set"}
+            style={s.cell}
+          />
           <Field label="Utility" value={p.utilityName ?? "Not set"} style={s.cell} />
           <Field label="Ratings" value={`${ratings.dc} DC (STC) · ${ratings.ac} AC`} mono style={s.cell} />
         </View>

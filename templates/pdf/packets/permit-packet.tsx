@@ -13,14 +13,22 @@ export type DrawnSheet = { sheet: PlannedSheet<string>; page: ReactElement };
 /** The permit packet's generated sheets (11 × 17 landscape) as planned, each as its own page element, in order. */
 export function permitSheetPages(input: PrintedPacket, sheets: PlannedSheet<PermitSheetKey>[]): DrawnSheet[] {
   let checkIndex = 1;
-  return sheets.map((sheet) => ({ sheet, page: permitSheetPage(input, sheet, sheets, () => {
-    const first = checkIndex;
-    checkIndex += sheet.checks.length;
-    return first;
-  }) }));
+  return sheets.map((sheet) => ({
+    sheet,
+    page: permitSheetPage(input, sheet, sheets, () => {
+      const first = checkIndex;
+      checkIndex += sheet.checks.length;
+      return first;
+    }),
+  }));
 }
 
-function permitSheetPage(input: PrintedPacket, sheet: PlannedSheet<PermitSheetKey>, sheets: PlannedSheet<PermitSheetKey>[], nextCheckIndex: () => number): ReactElement {
+function permitSheetPage(
+  input: PrintedPacket,
+  sheet: PlannedSheet<PermitSheetKey>,
+  sheets: PlannedSheet<PermitSheetKey>[],
+  nextCheckIndex: () => number,
+): ReactElement {
   switch (sheet.key) {
     case "cover":
       return <CoverSheet key={sheet.number} input={input} sheet={sheet} sheets={sheets} />;

@@ -134,8 +134,8 @@ export function PaymentReceipt({ receipt: r }: { receipt: ReceiptFacts }) {
           </View>
         ) : null}
         <Text style={s.note}>
-          Amounts in US dollars. Each fee was worked out from the authority's fee schedule on file for the project, as shown under it. Refunds go back to the card that paid. Keep this receipt
-          with the project's records.
+          Amounts in US dollars. Each fee was worked out from the authority's fee schedule on file for the project, as shown under it.
+          Refunds go back to the card that paid. Keep this receipt with the project's records.
         </Text>
       </LetterPage>
     </Document>

@@ -14,7 +14,8 @@ function fontPath(pkg: string, file: string): string {
   return existsSync(local) ? local : nodeRequire.resolve([pkg, "files", file].join("/"));
 }
 // Registered as data URLs of the unwrapped TrueType bytes: see woff-to-sfnt.ts for why.
-const fontFile = (pkg: string, file: string) => `data:font/ttf;base64,${Buffer.from(woffToSfnt(readFileSync(fontPath(pkg, file)))).toString("base64")}`;
+const fontFile = (pkg: string, file: string) =>
+  `data:font/ttf;base64,${Buffer.from(woffToSfnt(readFileSync(fontPath(pkg, file)))).toString("base64")}`;
 
 /** Text face. */
 export const TEXT_FONT = "Inter";
@@ -35,15 +36,24 @@ export function registerPdfFonts(): void {
   if (registered) return;
   Font.register({
     family: TEXT_FONT,
-    fonts: ([400, 600, 700] as const).map((weight) => ({ src: fontFile("@fontsource/inter", `inter-latin-${weight}-normal.woff`), fontWeight: weight })),
+    fonts: ([400, 600, 700] as const).map((weight) => ({
+      src: fontFile("@fontsource/inter", `inter-latin-${weight}-normal.woff`),
+      fontWeight: weight,
+    })),
   });
   Font.register({
     family: MEASURE_FONT,
-    fonts: ([400, 500] as const).map((weight) => ({ src: fontFile("@fontsource/ibm-plex-mono", `ibm-plex-mono-latin-${weight}-normal.woff`), fontWeight: weight })),
+    fonts: ([400, 500] as const).map((weight) => ({
+      src: fontFile("@fontsource/ibm-plex-mono", `ibm-plex-mono-latin-${weight}-normal.woff`),
+      fontWeight: weight,
+    })),
   });
   Font.register({
     family: GREEK_FALLBACK,
-    fonts: ([400, 700] as const).map((weight) => ({ src: fontFile("@fontsource/inter", `inter-greek-${weight}-normal.woff`), fontWeight: weight })),
+    fonts: ([400, 700] as const).map((weight) => ({
+      src: fontFile("@fontsource/inter", `inter-greek-${weight}-normal.woff`),
+      fontWeight: weight,
+    })),
   });
   // Hyphenation would split model numbers and values such as "LK-405M-54H" across lines.
   Font.registerHyphenationCallback((word) => [word]);

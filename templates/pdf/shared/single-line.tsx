@@ -24,7 +24,13 @@ function PdfPrimitive({ item, fonts }: { item: PaintedItem; fonts: PdfDiagramFon
 }
 
 /** A painted scene at its fitted size. */
-export function PdfSingleLine({ drawing, fonts = { text: TEXT_FONT, mono: MEASURE_FONT } }: { drawing: PaintedScene; fonts?: PdfDiagramFonts }) {
+export function PdfSingleLine({
+  drawing,
+  fonts = { text: TEXT_FONT, mono: MEASURE_FONT },
+}: {
+  drawing: PaintedScene;
+  fonts?: PdfDiagramFonts;
+}) {
   return (
     <Svg width={drawing.width} height={drawing.height} viewBox={drawing.viewBox}>
       <G>

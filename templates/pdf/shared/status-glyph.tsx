@@ -19,7 +19,14 @@ export function StatusGlyph({ status, size = 8 }: { status: CheckStatus; size?: 
       {status === "pass" ? (
         <>
           <Circle cx={5} cy={5} r={5} fill={color} />
-          <Path d="M2.6 5.2 L4.3 6.9 L7.5 3.4" stroke="#ffffff" strokeWidth={1.4} fill="none" strokeLinecap="round" strokeLinejoin="round" />
+          <Path
+            d="M2.6 5.2 L4.3 6.9 L7.5 3.4"
+            stroke="#ffffff"
+            strokeWidth={1.4}
+            fill="none"
+            strokeLinecap="round"
+            strokeLinejoin="round"
+          />
         </>
       ) : status === "warn" ? (
         <>

@@ -38,7 +38,14 @@ export const base = StyleSheet.create({
   soft: { color: COLORS.inkSoft },
   faint: { color: COLORS.inkFaint },
   caps: { fontSize: 6.5, letterSpacing: 0.6, color: COLORS.inkFaint, fontWeight: 600, textTransform: "uppercase" },
-  sectionTitle: { fontSize: 10, fontWeight: 700, marginBottom: 5, paddingBottom: 2, borderBottomWidth: 1.2, borderBottomColor: COLORS.copper },
+  sectionTitle: {
+    fontSize: 10,
+    fontWeight: 700,
+    marginBottom: 5,
+    paddingBottom: 2,
+    borderBottomWidth: 1.2,
+    borderBottomColor: COLORS.copper,
+  },
   // react-pdf scales a unitless lineHeight by the font size set on the same element (18 when
   // none is), so every style with a lineHeight carries its own fontSize.
   paragraph: { fontSize: 8.5, marginBottom: 4, lineHeight: 1.35 },

@@ -19,7 +19,14 @@ const s = StyleSheet.create({
   main: { fontSize: 8.5, fontWeight: 600, marginTop: 1.5 },
   sheetCell: { backgroundColor: COLORS.copperLight, borderRightWidth: 0, alignItems: "center", justifyContent: "center" },
   sheetNumber: { fontSize: 20, fontWeight: 700, color: COLORS.copperDark, lineHeight: 1 },
-  caution: { fontSize: 6.3, color: COLORS.inkSoft, paddingHorizontal: 6, paddingVertical: 3, borderTopWidth: 0.6, borderTopColor: COLORS.rule },
+  caution: {
+    fontSize: 6.3,
+    color: COLORS.inkSoft,
+    paddingHorizontal: 6,
+    paddingVertical: 3,
+    borderTopWidth: 0.6,
+    borderTopColor: COLORS.rule,
+  },
 });
 
 function Cell({ label, flex, compact, children }: { label: string; flex: number; compact: boolean; children: ReactNode }) {
@@ -44,7 +51,10 @@ export type TitleCount = { sheet: SheetInfo } | { page: number; total: number };
 type TitleBandProps = { cells: TitleCell[]; count: TitleCount; caution?: string; compact?: boolean };
 
 function CountCell({ count, compact }: { count: TitleCount; compact: boolean }) {
-  const [number, words] = "sheet" in count ? [count.sheet.number, `Sheet ${count.sheet.number} of ${count.sheet.total}`] : [count.page, `Page ${count.page} of ${count.total}`];
+  const [number, words] =
+    "sheet" in count
+      ? [count.sheet.number, `Sheet ${count.sheet.number} of ${count.sheet.total}`]
+      : [count.page, `Page ${count.page} of ${count.total}`];
   return (
     <View style={compact ? [s.cell, s.compactCell, s.sheetCell] : [s.cell, s.sheetCell, { flex: 0.9 }]}>
       <Text style={s.sheetNumber}>{number}</Text>
@@ -85,7 +95,12 @@ export function TitleBlock({ input, sheet, compact = false }: { input: PrintedPa
   const person = [p.name, p.licenseNumber ? `License ${p.licenseNumber}` : null].filter(Boolean).join(" · ");
   const cells: TitleCell[] = [
     { label: "Project", flex: 2.3, main: f.projectLabel, lines: [f.siteAddress] },
-    { label: "Authority having jurisdiction", flex: 1.7, main: input.jurisdiction.name, lines: [`NEC ${input.jurisdiction.necEdition} as adopted`] },
+    {
+      label: "Authority having jurisdiction",
+      flex: 1.7,
+      main: input.jurisdiction.name,
+      lines: [`NEC ${input.jurisdiction.necEdition} as adopted`],
+    },
     { label: "Prepared by", flex: 2, main: p.organizationName, lines: p.phone ? [person, p.phone] : [person] },
     { label: "Document", flex: 1.6, main: f.documentTitle, lines: [sheet.title] },
     { label: "Revision", flex: 0.9, main: f.revisionLabel, lines: [<>Issued {f.issuedDate}</>] },

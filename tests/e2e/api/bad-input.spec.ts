@@ -7,13 +7,52 @@ test("API refuses bad input with a readable 4xx and changes nothing", async ({ p
   const before = await (await page.request.get(`/api/v1/projects/${target.id}`)).json();
 
   const cases: { what: string; send: () => ReturnType<typeof page.request.post>; status: number; message: RegExp }[] = [
-    { what: "malformed JSON", send: () => page.request.post(`/api/v1/projects/${target.id}/stage`, { headers: { "content-type": "application/json" }, data: Buffer.from("{not json") }), status: 400, message: /not valid JSON/ },
-    { what: "unknown stage", send: () => page.request.post(`/api/v1/projects/${target.id}/stage`, { data: { toStage: "approved" } }), status: 422, message: /invalid fields/ },
-    { what: "wrong type", send: () => page.request.post(`/api/v1/projects/${target.id}/stage`, { data: { toStage: 7, note: ["x"] } }), status: 422, message: /invalid fields/ },
-    { what: "oversize note", send: () => page.request.post(`/api/v1/projects/${target.id}/stage`, { data: { toStage: "closed", note: "n".repeat(2001) } }), status: 422, message: /invalid fields/ },
-    { what: "oversize body", send: () => page.request.put(`/api/v1/projects/${target.id}`, { data: { customerName: "x".repeat(70_000) } }), status: 413, message: /larger than 64 KiB/ },
-    { what: "wrong field types on update", send: () => page.request.put(`/api/v1/projects/${target.id}`, { data: { ...before, customerName: 42, mainBreakerA: "lots" } }), status: 422, message: /invalid fields/ },
-    { what: "unknown stage filter", send: () => page.request.get(`/api/v1/projects?stage=approved`), status: 422, message: /invalid fields/ },
+    {
+      what: "malformed JSON",
+      send: () =>
+        page.request.post(`/api/v1/projects/${target.id}/stage`, {
+          headers: { "content-type": "application/json" },
+          data: Buffer.from("{not json"),
+        }),
+      status: 400,
+      message: /not valid JSON/,
+    },
+    {
+      what: "unknown stage",
+      send: () => page.request.post(`/api/v1/projects/${target.id}/stage`, { data: { toStage: "approved" } }),
+      status: 422,
+      message: /invalid fields/,
+    },
+    {
+      what: "wrong type",
+      send: () => page.request.post(`/api/v1/projects/${target.id}/stage`, { data: { toStage: 7, note: ["x"] } }),
+      status: 422,
+      message: /invalid fields/,
+    },
+    {
+      what: "oversize note",
+      send: () => page.request.post(`/api/v1/projects/${target.id}/stage`, { data: { toStage: "closed", note: "n".repeat(2001) } }),
+      status: 422,
+      message: /invalid fields/,
+    },
+    {
+      what: "oversize body",
+      send: () => page.request.put(`/api/v1/projects/${target.id}`, { data: { customerName: "x".repeat(70_000) } }),
+      status: 413,
+      message: /larger than 64 KiB/,
+    },
+    {
+      what: "wrong field types on update",
+      send: () => page.request.put(`/api/v1/projects/${target.id}`, { data: { ...before, customerName: 42, mainBreakerA: "lots" } }),
+      status: 422,
+      message: /invalid fields/,
+    },
+    {
+      what: "unknown stage filter",
+      send: () => page.request.get(`/api/v1/projects?stage=approved`),
+      status: 422,
+      message: /invalid fields/,
+    },
   ];
   for (const c of cases) {
     const res = await c.send();

@@ -44,16 +44,25 @@ test("admin's API token reviews an exported design exactly as the project's revi
   const invalid = await json(request, "post", "/api/v1/design-review", token, broken);
   expect(invalid.status).toBe(422);
   expect(Object.keys(invalid.body.error.fieldErrors).sort()).toEqual(["modules[0].vocV", "runs[0].size"]);
-  const unknownRef = await json(request, "post", "/api/v1/design-review", token, { ...exported.body, strings: [{ ...exported.body.strings[0], inverterId: "no-such-inverter" }] });
+  const unknownRef = await json(request, "post", "/api/v1/design-review", token, {
+    ...exported.body,
+    strings: [{ ...exported.body.strings[0], inverterId: "no-such-inverter" }],
+  });
   expect(unknownRef.status).toBe(422);
   expect(unknownRef.body.error.fieldErrors["strings[0].inverterId"][0]).toContain("no-such-inverter");
 
   // Odd bodies are refused, never a server error: JSON that is not a design is 422, text that is not JSON 400.
   for (const body of [null, [], "design", 42, {}, { codeEdition: "2020", modules: "x" }]) {
-    const res = await request.post("/api/v1/design-review", { headers: { ...bearer(token), "content-type": "application/json" }, data: Buffer.from(JSON.stringify(body)) });
+    const res = await request.post("/api/v1/design-review", {
+      headers: { ...bearer(token), "content-type": "application/json" },
+      data: Buffer.from(JSON.stringify(body)),
+    });
     expect(res.status(), JSON.stringify(body)).toBe(422);
   }
-  const notJson = await request.post("/api/v1/design-review", { headers: { ...bearer(token), "content-type": "application/json" }, data: Buffer.from("design") });
+  const notJson = await request.post("/api/v1/design-review", {
+    headers: { ...bearer(token), "content-type": "application/json" },
+    data: Buffer.from("design"),
+  });
   expect(notJson.status()).toBe(400);
 
   // The token only reads.
@@ -74,7 +83,9 @@ test("admin's API token reviews an exported design exactly as the project's revi
 
 test("installer's session may review a design document but not manage tokens", async ({ page }) => {
   await signIn(page, DEMO.installer);
-  const mine = (await (await page.request.get("/api/v1/projects?pageSize=100")).json()).items.find((p: { stage: string }) => p.stage !== "draft");
+  const mine = (await (await page.request.get("/api/v1/projects?pageSize=100")).json()).items.find(
+    (p: { stage: string }) => p.stage !== "draft",
+  );
   const exported = await page.request.get(`/api/v1/projects/${mine.id}/design-document`);
   expect(exported.status()).toBe(200);
   const posted = await page.request.post("/api/v1/design-review", { data: await exported.json() });

@@ -11,7 +11,9 @@ test("visitor without a session is sent to sign-in and back to the page asked fo
   await expect(page.getByRole("cell", { name: "2017" })).toBeVisible();
 });
 
-test("repeated wrong passwords slow further tries from that place with a plain message, and the right password then works", async ({ page }) => {
+test("repeated wrong passwords slow further tries from that place with a plain message, and the right password then works", async ({
+  page,
+}) => {
   await page.goto("/sign-in");
   await page.getByLabel("E-mail address").fill("priya@quillmoor.example");
   for (let attempt = 1; attempt <= 5; attempt++) {
@@ -21,7 +23,9 @@ test("repeated wrong passwords slow further tries from that place with a plain m
   }
   await page.getByLabel("Password").fill("ohmstead-demo");
   await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page.getByTestId("form-message")).toContainText(/each new try waits a little longer\. Try again in \d+ seconds?\. The account is not locked\./);
+  await expect(page.getByTestId("form-message")).toContainText(
+    /each new try waits a little longer\. Try again in \d+ seconds?\. The account is not locked\./,
+  );
   // No lock to wait out: after the short pause the owner's password signs in.
   await page.waitForTimeout(2_500);
   await page.getByRole("button", { name: "Sign in" }).click();

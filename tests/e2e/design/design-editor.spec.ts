@@ -96,7 +96,9 @@ test("installer sees an assigned project's design read-only", async ({ browser }
   expect(put.status()).toBe(403);
 });
 
-test("coordinator sees a 25-module string flagged on step 2, a missing length named, and two strings in one raceway scheduled as one run", async ({ page }) => {
+test("coordinator sees a 25-module string flagged on step 2, a missing length named, and two strings in one raceway scheduled as one run", async ({
+  page,
+}) => {
   // A draft project in Wendle County: NEC 2017, record low −28 °C, 200 A service.
   const { review } = await openDraftDesign(page, "Wilhelmina Coe");
 

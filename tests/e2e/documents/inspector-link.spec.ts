@@ -2,11 +2,16 @@ import { expect, test } from "@playwright/test";
 import { generatePacket } from "../support/packets";
 import { DEMO, listProjectsAs, mailboxFor, signIn } from "../support/session";
 
-test("coordinator shares a permit packet with an inspector, who opens and downloads it without an account, until the link is revoked", async ({ page, browser }) => {
+test("coordinator shares a permit packet with an inspector, who opens and downloads it without an account, until the link is revoked", async ({
+  page,
+  browser,
+}) => {
   test.setTimeout(180_000);
   const inspector = `inspector.${Date.now()}@ahj.example`;
   await signIn(page, DEMO.coordinator);
-  const [project] = (await listProjectsAs(page)).filter((p) => p.stage !== "draft" && !["Rafael Quintero-Bask", "Imogen Halvorsen"].includes(p.customerName));
+  const [project] = (await listProjectsAs(page)).filter(
+    (p) => p.stage !== "draft" && !["Rafael Quintero-Bask", "Imogen Halvorsen"].includes(p.customerName),
+  );
   await page.goto(`/projects/${project.id}/documents`);
 
   // Reuse Rev 1 if an earlier run made it; otherwise generate it through the worker.
@@ -37,7 +42,10 @@ test("coordinator shares a permit packet with an inspector, who opens and downlo
   }).toPass({ timeout: 30_000 });
   const message = inbox.getByTestId("caught-message").filter({ hasText: inspector }).first();
   await expect(message).toContainText("Rough-in inspection on Thursday.");
-  const mailedUrl = await message.getByRole("link", { name: /\/share\// }).first().getAttribute("href");
+  const mailedUrl = await message
+    .getByRole("link", { name: /\/share\// })
+    .first()
+    .getAttribute("href");
   expect(mailedUrl).toBe(shownUrl);
   const context = await browser.newContext();
   const guest = await context.newPage();
@@ -54,7 +62,10 @@ test("coordinator shares a permit packet with an inspector, who opens and downlo
   await expect(guest.getByTestId("read-only-note")).toContainText("read only");
   await expect(guest.getByRole("button")).toHaveCount(0); // nothing to press but links
 
-  const button = guest.getByTestId("shared-revision").filter({ hasText: "Permit packet Rev 1" }).getByRole("link", { name: "Download PDF" });
+  const button = guest
+    .getByTestId("shared-revision")
+    .filter({ hasText: "Permit packet Rev 1" })
+    .getByRole("link", { name: "Download PDF" });
   const [download] = await Promise.all([guest.waitForEvent("download"), button.click()]);
   expect(download.suggestedFilename()).toMatch(/-permit-rev1\.pdf$/);
   const file = await guest.request.get((await button.getAttribute("href"))!);

@@ -9,7 +9,14 @@ import { DEMO, listProjectsAs, signIn } from "../support/session";
 const generate = generatePacket;
 
 async function download(page: Page, card: ReturnType<Page["getByTestId"]>, revision: number) {
-  const [file] = await Promise.all([page.waitForEvent("download"), card.getByTestId("packet-revision").filter({ hasText: `Rev ${revision}` }).getByRole("link", { name: "Download PDF" }).click()]);
+  const [file] = await Promise.all([
+    page.waitForEvent("download"),
+    card
+      .getByTestId("packet-revision")
+      .filter({ hasText: `Rev ${revision}` })
+      .getByRole("link", { name: "Download PDF" })
+      .click(),
+  ]);
   const target = path.join(mkdtempSync(path.join(tmpdir(), "ohmstead-")), file.suggestedFilename());
   await file.saveAs(target);
   return target;
@@ -24,7 +31,15 @@ test("coordinator generates both packets, downloads them, and regenerates after 
   const permit = await generate(page, "permit", 1);
   // The bar reported the worker's real steps on the way, and never went back.
   const seen = permit.seenProgress;
-  expect(seen.some((s) => s.value > 0 && s.value < 100 && /^(Drawing sheet \d+ of \d+|Reading data sheet|Putting \d+ sheets|Storing the PDF|Checking the stored copy)/.test(s.step)), JSON.stringify(seen)).toBe(true);
+  expect(
+    seen.some(
+      (s) =>
+        s.value > 0 &&
+        s.value < 100 &&
+        /^(Drawing sheet \d+ of \d+|Reading data sheet|Putting \d+ sheets|Storing the PDF|Checking the stored copy)/.test(s.step),
+    ),
+    JSON.stringify(seen),
+  ).toBe(true);
   seen.slice(1).forEach((s, i) => expect(s.value, JSON.stringify(seen)).toBeGreaterThanOrEqual(seen[i]!.value));
   const interconnection = await generate(page, "interconnection", 1);
 

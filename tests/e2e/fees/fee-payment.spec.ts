@@ -2,12 +2,19 @@ import { expect, test } from "@playwright/test";
 import { payByCard } from "../support/api";
 import { DEMO, listProjectsAs, mailboxFor, pageFor, signIn } from "../support/session";
 
-test("coordinator pays fees: a fee waiting for the valuation counts at its minimum, a declined card leaves them unpaid, the succeeding card marks them paid and the receipt arrives; an admin refunds one fee and part of the money", async ({ page, browser }) => {
+test("coordinator pays fees: a fee waiting for the valuation counts at its minimum, a declined card leaves them unpaid, the succeeding card marks them paid and the receipt arrives; an admin refunds one fee and part of the money", async ({
+  page,
+  browser,
+}) => {
   test.setTimeout(180_000);
   await signIn(page, DEMO.coordinator);
   // A Brackenford project: its AHJ's invented schedule has a size bracket and a share of the valuation.
-  const candidates = (await listProjectsAs(page)) as (Awaited<ReturnType<typeof listProjectsAs>>[number] & { jurisdiction: { name: string } | null })[];
-  const project = candidates.find((p) => p.jurisdiction?.name.startsWith("City of Brackenford") && ["design_checked", "permit_filed", "permit_issued"].includes(p.stage));
+  const candidates = (await listProjectsAs(page)) as (Awaited<ReturnType<typeof listProjectsAs>>[number] & {
+    jurisdiction: { name: string } | null;
+  })[];
+  const project = candidates.find(
+    (p) => p.jurisdiction?.name.startsWith("City of Brackenford") && ["design_checked", "permit_filed", "permit_issued"].includes(p.stage),
+  );
   expect(project).toBeDefined();
   await page.goto(`/projects/${project!.id}`);
   await page.getByRole("link", { name: "Fees", exact: true }).click();
@@ -63,12 +70,17 @@ test("coordinator pays fees: a fee waiting for the valuation counts at its minim
 
   // The receipt reaches the mailbox and the page.
   const mailbox = await mailboxFor(browser);
-  const receipt = mailbox.getByTestId("caught-message").filter({ hasText: /Receipt R-\d{4}-/ }).filter({ hasText: DEMO.coordinator });
+  const receipt = mailbox
+    .getByTestId("caught-message")
+    .filter({ hasText: /Receipt R-\d{4}-/ })
+    .filter({ hasText: DEMO.coordinator });
   await expect(async () => {
     await mailbox.reload();
     await expect(receipt.first()).toBeVisible({ timeout: 2_000 });
   }).toPass({ timeout: 30_000 });
-  await expect(receipt.first().getByRole("list", { name: "Attachments" })).toContainText(/Attached: R-\d{4}-[\w-]+\.pdf \(application\/pdf/);
+  await expect(receipt.first().getByRole("list", { name: "Attachments" })).toContainText(
+    /Attached: R-\d{4}-[\w-]+\.pdf \(application\/pdf/,
+  );
   await page.reload();
   const receiptLink = paid.getByRole("link", { name: /^Receipt R-/ });
   const response = await page.request.get((await receiptLink.getAttribute("href"))!);
@@ -102,7 +114,12 @@ test("coordinator pays fees: a fee waiting for the valuation counts at its minim
   await expect(payment.getByTestId("payment-status")).toHaveText("Partly refunded");
   const adminLines = admin.getByTestId("fee-line");
   await expect(adminLines.filter({ hasText: "Plan review" }).getByTestId("fee-line-state")).toHaveText("Refunded, unpaid again");
-  await expect(adminLines.filter({ hasNotText: "Plan review" }).getByTestId("fee-line-state").filter({ hasText: /^Paid$/ })).toHaveCount(count - 1);
+  await expect(
+    adminLines
+      .filter({ hasNotText: "Plan review" })
+      .getByTestId("fee-line-state")
+      .filter({ hasText: /^Paid$/ }),
+  ).toHaveCount(count - 1);
   await expect(admin.getByTestId("unpaid-total")).toHaveText("$159.25");
 
   // Then $10.00 of money, not tied to a fee: the other fees stay paid.
@@ -116,14 +133,21 @@ test("coordinator pays fees: a fee waiting for the valuation counts at its minim
   await expect(second).toContainText("The fees stay paid.");
   await second.getByRole("button", { name: "Refund $10.00" }).click();
   await expect(payment.getByTestId("refunds")).toContainText("Refunded $10.00 on");
-  await expect(adminLines.filter({ hasNotText: "Plan review" }).getByTestId("fee-line-state").filter({ hasText: /^Paid$/ })).toHaveCount(count - 1);
+  await expect(
+    adminLines
+      .filter({ hasNotText: "Plan review" })
+      .getByTestId("fee-line-state")
+      .filter({ hasText: /^Paid$/ }),
+  ).toHaveCount(count - 1);
 });
 
 test("coordinator pays with the card that asks for extra authentication, completes it, and the fees are paid", async ({ page }) => {
   test.setTimeout(120_000);
   await signIn(page, DEMO.coordinator);
   // A Quillan Springs project: its invented schedule needs no valuation.
-  const candidates = (await listProjectsAs(page)) as (Awaited<ReturnType<typeof listProjectsAs>>[number] & { jurisdiction: { name: string } | null })[];
+  const candidates = (await listProjectsAs(page)) as (Awaited<ReturnType<typeof listProjectsAs>>[number] & {
+    jurisdiction: { name: string } | null;
+  })[];
   const project = candidates.find((p) => p.jurisdiction?.name.startsWith("Town of Quillan Springs") && p.stage !== "draft");
   expect(project).toBeDefined();
   await page.goto(`/projects/${project!.id}/fees`);

@@ -36,14 +36,19 @@ function qrSvg(text: string): Buffer {
   const cell = 8;
   const size = matrix.getWidth() * cell;
   const squares: string[] = [];
-  for (let y = 0; y < matrix.getHeight(); y++) for (let x = 0; x < matrix.getWidth(); x++) if (matrix.get(x, y)) squares.push(`<rect x="${x * cell}" y="${y * cell}" width="${cell}" height="${cell}"/>`);
-  return Buffer.from(`<svg xmlns="http://www.w3.org/2000/svg" width="${size}" height="${size}" viewBox="0 0 ${size} ${size}"><rect width="100%" height="100%" fill="#fff"/><g fill="#000">${squares.join("")}</g></svg>`);
+  for (let y = 0; y < matrix.getHeight(); y++)
+    for (let x = 0; x < matrix.getWidth(); x++)
+      if (matrix.get(x, y)) squares.push(`<rect x="${x * cell}" y="${y * cell}" width="${cell}" height="${cell}"/>`);
+  return Buffer.from(
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${size}" height="${size}" viewBox="0 0 ${size} ${size}"><rect width="100%" height="100%" fill="#fff"/><g fill="#000">${squares.join("")}</g></svg>`,
+  );
 }
 
 /** Polarity, Voc at the temperature typed, and insulation for every string, from what the page expects. */
 async function testStringsBeforeEnergizing(phone: Page) {
   const step = phone.getByTestId("step-before-energizing");
-  if ((await step.getByLabel("Temperature during the Voc tests (°C)").count()) > 0) await enter(step.getByLabel("Temperature during the Voc tests (°C)"), "41");
+  if ((await step.getByLabel("Temperature during the Voc tests (°C)").count()) > 0)
+    await enter(step.getByLabel("Temperature during the Voc tests (°C)"), "41");
   for (const group of await step.locator("fieldset[data-testid^=string-tests-]").all()) {
     await group.getByLabel("Correct (+ to +)").check();
     const voc = group.locator("input[id$='.vocV']");
@@ -53,7 +58,9 @@ async function testStringsBeforeEnergizing(phone: Page) {
     }
     await enter(group.locator("input[id$='.insulationMohm']"), "240");
   }
-  await expect(step.locator("[data-testid^=result-string-][data-status=pass]")).toHaveCount(await step.locator("[data-testid^=result-string-]").count());
+  await expect(step.locator("[data-testid^=result-string-][data-status=pass]")).toHaveCount(
+    await step.locator("[data-testid^=result-string-]").count(),
+  );
 }
 
 async function shutDownStrings(phone: Page, belowExpectedV: number) {
@@ -73,7 +80,9 @@ async function acSideAndRapidShutdown(phone: Page) {
   await enter(byId(phone, "rapidShutdown.seconds"), "8");
 }
 
-test("installer on a phone records commissioning in the order of the work: strings tested, the serial read from its barcode and checked against the card, the grid profile chosen from the utility's list, completed without module-level monitoring; then uploads the signed form and the coordinator is notified", async ({ browser }) => {
+test("installer on a phone records commissioning in the order of the work: strings tested, the serial read from its barcode and checked against the card, the grid profile chosen from the utility's list, completed without module-level monitoring; then uploads the signed form and the coordinator is notified", async ({
+  browser,
+}) => {
   test.setTimeout(240_000);
   const phone = await pageFor(browser, DEMO.installer);
   const project = await fieldProject(phone, { stages: ["utility_approved"], pairing: false });
@@ -99,7 +108,9 @@ test("installer on a phone records commissioning in the order of the work: strin
 
   // The unit's serial, read from a photo of its barcode; the card in the box is for another unit.
   const unit = phone.getByTestId("step-inverter").locator("fieldset").first();
-  await unit.getByLabel("Photo of the barcode of Inverter's label").setInputFiles({ name: "label.svg", mimeType: "image/svg+xml", buffer: qrSvg("S/N: QN0730499") });
+  await unit
+    .getByLabel("Photo of the barcode of Inverter's label")
+    .setInputFiles({ name: "label.svg", mimeType: "image/svg+xml", buffer: qrSvg("S/N: QN0730499") });
   await expect(unit.locator("input[id$='.serial']")).toHaveValue("QN0730499");
   await enter(unit.locator("input[id$='.cardSerial']"), "QN0730498");
   const serial = phone.locator("[data-testid^=result-inverter-serial]");
@@ -125,7 +136,9 @@ test("installer on a phone records commissioning in the order of the work: strin
   await expect(profile).toHaveAttribute("data-status", "pass");
 
   await shutDownStrings(phone, 0.2);
-  await expect(phone.locator("[data-testid^=result-string-shutdown][data-status=pass]")).toHaveCount(await phone.locator("[data-testid^=result-string-shutdown]").count());
+  await expect(phone.locator("[data-testid^=result-string-shutdown][data-status=pass]")).toHaveCount(
+    await phone.locator("[data-testid^=result-string-shutdown]").count(),
+  );
 
   // One failing value: flagged with its reason, then corrected.
   await enter(phone.getByLabel("AC voltage (V)"), "262");
@@ -151,7 +164,10 @@ test("installer on a phone records commissioning in the order of the work: strin
   await expect(phone.getByTestId("commissioning-status")).toContainText("Complete");
 
   // The pre-filled certificate downloads as a PDF.
-  const [download] = await Promise.all([phone.waitForEvent("download"), phone.getByRole("link", { name: "Certificate of completion (PDF)" }).click()]);
+  const [download] = await Promise.all([
+    phone.waitForEvent("download"),
+    phone.getByRole("link", { name: "Certificate of completion (PDF)" }).click(),
+  ]);
   expect(download.suggestedFilename()).toMatch(/^certificate-of-completion-project-\d+\.pdf$/);
 
   // A renamed executable is refused by its bytes; nothing is listed.
@@ -170,13 +186,20 @@ test("installer on a phone records commissioning in the order of the work: strin
 
   // The coordinator's notice arrives through the outbox.
   const inbox = await mailboxFor(browser);
-  const notice = inbox.getByTestId("caught-message").filter({ hasText: "Signed completion form received" }).filter({ hasText: "signed-certificate.pdf" });
+  const notice = inbox
+    .getByTestId("caught-message")
+    .filter({ hasText: "Signed completion form received" })
+    .filter({ hasText: "signed-certificate.pdf" });
   await expect(async () => {
     await inbox.reload();
     await expect(notice.first()).toBeVisible({ timeout: 2_000 });
   }).toPass({ timeout: 30_000 });
   const office = await pageFor(browser, DEMO.coordinator);
-  const link = await notice.first().getByRole("link", { name: /\/field$/ }).first().getAttribute("href");
+  const link = await notice
+    .first()
+    .getByRole("link", { name: /\/field$/ })
+    .first()
+    .getAttribute("href");
   expect(new URL(link!).pathname).toBe(`/projects/${project.id}/field`);
 
   // The office downloads the signed form as an attachment of the type its bytes showed.
@@ -198,7 +221,9 @@ test("installer on a phone records commissioning in the order of the work: strin
   await expect(office.getByRole("region", { name: "Current stage" })).toContainText("Commissioned");
 });
 
-test("installer on a phone with optimizers that report: devices found short of installed wait and hold the record open, a shut-down reading a little under the expected voltage passes, and every module must report", async ({ browser }) => {
+test("installer on a phone with optimizers that report: devices found short of installed wait and hold the record open, a shut-down reading a little under the expected voltage passes, and every module must report", async ({
+  browser,
+}) => {
   test.setTimeout(180_000);
   const phone = await pageFor(browser, DEMO.installer);
   await fieldProject(phone, { stages: ON_SITE, pairing: true });
@@ -240,7 +265,9 @@ test("installer on a phone with optimizers that report: devices found short of i
   await enter(first, (expectedV - 1.5).toFixed(1));
   await expect(phone.locator("[data-testid^=result-string-shutdown]").first()).toHaveAttribute("data-status", "fail");
   await shutDownStrings(phone, 0.4);
-  await expect(phone.locator("[data-testid^=result-string-shutdown][data-status=pass]")).toHaveCount(await phone.locator("[data-testid^=result-string-shutdown]").count());
+  await expect(phone.locator("[data-testid^=result-string-shutdown][data-status=pass]")).toHaveCount(
+    await phone.locator("[data-testid^=result-string-shutdown]").count(),
+  );
 
   await acSideAndRapidShutdown(phone);
   const modules = phone.locator("#modulesReporting");

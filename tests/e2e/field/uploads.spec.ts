@@ -14,7 +14,9 @@ const photo = (hue: number) =>
     .withMetadata({ orientation: 6 })
     .toBuffer();
 
-test("installer on a phone sees site photos as thumbnails and removes a wrong one after confirming; the coordinator removes one the crew sent; nobody outside the project reaches them", async ({ browser }) => {
+test("installer on a phone sees site photos as thumbnails and removes a wrong one after confirming; the coordinator removes one the crew sent; nobody outside the project reaches them", async ({
+  browser,
+}) => {
   test.setTimeout(120_000);
   const phone = await pageFor(browser, DEMO.installer);
   const [project] = (await listProjectsAs(phone)).filter((p) => BEFORE_PTO.includes(p.stage));
@@ -39,7 +41,11 @@ test("installer on a phone sees site photos as thumbnails and removes a wrong on
   expect(src).toMatch(/\/files\/[0-9a-f-]{36}\?size=thumbnail$/);
   const answer = await phone.request.get(src);
   expect(answer.status()).toBe(200);
-  expect(answer.headers()).toMatchObject({ "content-type": "image/jpeg", "x-content-type-options": "nosniff", "cache-control": "private, max-age=86400" });
+  expect(answer.headers()).toMatchObject({
+    "content-type": "image/jpeg",
+    "x-content-type-options": "nosniff",
+    "cache-control": "private, max-age=86400",
+  });
   expect((await phone.request.get(src.replace("size=thumbnail", "size=huge"))).status()).toBe(422);
 
   // Nobody outside the project reaches the thumbnail or can remove the photo.

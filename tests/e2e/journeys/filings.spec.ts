@@ -46,7 +46,8 @@ async function generatePacket(page: Page, kind: "permit" | "interconnection", re
   await expect(card.getByTestId("packet-revision").filter({ hasText: `Rev ${revision}` })).toBeVisible({ timeout: 90_000 });
 }
 
-const task = (card: Locator, title: string | RegExp) => card.locator("details").filter({ has: card.page().locator("summary", { hasText: title }) });
+const task = (card: Locator, title: string | RegExp) =>
+  card.locator("details").filter({ has: card.page().locator("summary", { hasText: title }) });
 
 async function open(card: Locator, title: string | RegExp) {
   const details = task(card, title);
@@ -87,7 +88,9 @@ test("a permit and an interconnection application run side by side, and the stag
     await form.getByLabel("Packet revision sent").selectOption({ label: "Rev 1" });
     await form.getByLabel("Sent to").fill("Plan review counter");
   });
-  await changeStatus(interconnection, "Submitted", async (form) => form.getByLabel("Packet revision sent").selectOption({ label: "Rev 1" }));
+  await changeStatus(interconnection, "Submitted", async (form) =>
+    form.getByLabel("Packet revision sent").selectOption({ label: "Rev 1" }),
+  );
   await expect(page.getByTestId("waiting-on")).toContainText("Waiting on AHJ");
 
   // Approving without the number is refused, and nothing moves.
@@ -167,7 +170,9 @@ test("a permit and an interconnection application run side by side, and the stag
   const api = await clientFor(DEMO.coordinator);
   const filings = await (await api.get(`/api/v1/projects/${projectId}/filings`)).json();
   expect(filings.waitingOn).toBeNull();
-  expect(filings.filings.map((f: { kind: string; status: string; referenceNumber: string }) => [f.kind, f.status, f.referenceNumber])).toEqual([
+  expect(
+    filings.filings.map((f: { kind: string; status: string; referenceNumber: string }) => [f.kind, f.status, f.referenceNumber]),
+  ).toEqual([
     ["permit", "approved", "BP-26-77120"],
     ["interconnection", "approved", "IA-88120"],
   ]);

@@ -11,7 +11,8 @@ import { pageTexts } from "../../unit/documents/read-pdf";
 
 const ZONE = "America/Denver"; // the demo company's zone (Settings → Organization)
 const NEVER = ["[object Object]", "(from memory)", "common practice", "undefined", "NaN"];
-const todayThere = () => new Intl.DateTimeFormat("en-CA", { timeZone: ZONE, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date());
+const todayThere = () =>
+  new Intl.DateTimeFormat("en-CA", { timeZone: ZONE, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date());
 const mediumDateThere = () => new Intl.DateTimeFormat("en-US", { timeZone: ZONE, dateStyle: "medium" }).format(new Date());
 
 async function expectCleanPage(page: Page, where: string) {
@@ -25,7 +26,10 @@ async function pdfTexts(page: Page, href: string): Promise<string[]> {
   return pageTexts(new Uint8Array(await res.body()));
 }
 
-test("a new coordinator, inspector and installer go from a new project to fees paid and refunded without meeting a wrong date or a broken text", async ({ page, browser }) => {
+test("a new coordinator, inspector and installer go from a new project to fees paid and refunded without meeting a wrong date or a broken text", async ({
+  page,
+  browser,
+}) => {
   test.setTimeout(300_000);
   await page.setViewportSize({ width: 1366, height: 900 });
   await signIn(page, DEMO.coordinator);
@@ -37,7 +41,9 @@ test("a new coordinator, inspector and installer go from a new project to fees p
   await expect(page.locator('link[rel="icon"]')).toHaveCount(1);
 
   // A demo project in the same town whose design passes: the new project gets its service and, below, its design.
-  const [source] = (await listProjectsAs(page, { stage: "permit_filed" })).filter((p) => (p as { jurisdiction?: { name: string } }).jurisdiction?.name.startsWith("City of Brackenford")) as unknown as { id: string; mainBreakerA: number; busbarA: number }[];
+  const [source] = (await listProjectsAs(page, { stage: "permit_filed" })).filter((p) =>
+    (p as { jurisdiction?: { name: string } }).jurisdiction?.name.startsWith("City of Brackenford"),
+  ) as unknown as { id: string; mainBreakerA: number; busbarA: number }[];
 
   // Create: the coordinator making it looks after it unless they choose otherwise.
   await page.goto("/projects/new");
@@ -96,7 +102,11 @@ test("a new coordinator, inspector and installer go from a new project to fees p
   await expect(shareable).toHaveCount(0);
   const card = await generatePacket(page, "permit", 1);
   await expect(shareable).toBeVisible({ timeout: 15_000 });
-  const permitHref = (await card.getByTestId("packet-revision").filter({ hasText: "Rev 1" }).getByRole("link", { name: "Download PDF" }).getAttribute("href"))!;
+  const permitHref = (await card
+    .getByTestId("packet-revision")
+    .filter({ hasText: "Rev 1" })
+    .getByRole("link", { name: "Download PDF" })
+    .getAttribute("href"))!;
   const permit = await pdfTexts(page, permitHref);
   expect(permit[1], "sheet 2").toContain(`240 V, single phase, ${source!.busbarA} A busbar, ${source!.mainBreakerA} A main`);
   for (const [i, text] of permit.entries()) {
@@ -160,7 +170,9 @@ test("a new coordinator, inspector and installer go from a new project to fees p
   await expect(dialog.getByTestId("refund-confirmation")).toContainText("visa •••• 4242");
   await dialog.getByRole("button", { name: /^Refund \$/ }).click();
   await expect(paid.getByTestId("refunds")).toContainText(`Refunded`);
-  await expect(admin.getByTestId("fee-line").filter({ hasText: feeName }).first().getByTestId("fee-line-state")).toHaveText("Refunded, unpaid again");
+  await expect(admin.getByTestId("fee-line").filter({ hasText: feeName }).first().getByTestId("fee-line-state")).toHaveText(
+    "Refunded, unpaid again",
+  );
   await expectCleanPage(admin, "fees page after a refund");
 
   // API tokens: a revoked token says when, as a date.

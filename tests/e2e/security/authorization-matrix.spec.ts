@@ -94,7 +94,16 @@ test("route handlers refuse everyone who may not use them and show nothing of th
     const write = WRITE.test(key);
     const url = entry.url!(targets);
     const upload = entry.upload;
-    const payload = upload ? { multipart: { ...(upload.kind ? { kind: upload.kind } : {}), file: { name: upload.name, mimeType: upload.mimeType, buffer: upload.mimeType === "image/png" ? PNG : PDF } } } : entry.body ? { data: entry.body(targets) } : {};
+    const payload = upload
+      ? {
+          multipart: {
+            ...(upload.kind ? { kind: upload.kind } : {}),
+            file: { name: upload.name, mimeType: upload.mimeType, buffer: upload.mimeType === "image/png" ? PNG : PDF },
+          },
+        }
+      : entry.body
+        ? { data: entry.body(targets) }
+        : {};
     const send = (client: APIRequestContext) => client[method](url, { ...payload, maxRedirects: 0 });
     if (!write) {
       const res = await send(clients.get(allowedPersona(entry))!);

@@ -27,7 +27,12 @@ test("pages carry a nonce-based Content-Security-Policy that the app runs under 
 
   // The app works under it: sign in, open a project, its design and documents.
   await signIn(page, DEMO.coordinator);
-  for (const path of [`/projects/${targets.projectId}`, `/projects/${targets.projectId}/design`, `/projects/${targets.projectId}/documents`, `/projects/${targets.projectId}/fees`]) {
+  for (const path of [
+    `/projects/${targets.projectId}`,
+    `/projects/${targets.projectId}/design`,
+    `/projects/${targets.projectId}/documents`,
+    `/projects/${targets.projectId}/fees`,
+  ]) {
     await page.goto(path);
     await expect(page.getByRole("main")).toBeVisible();
   }
@@ -73,7 +78,10 @@ test("a session write needs this app's origin and the route's content type; an A
   expect((await none.get(`/api/v1/projects/${targets.projectId}`)).status()).toBe(200);
   // An API token carries no cookie to ride on: its review call needs neither header.
   const token = await tokenClient(targets.apiToken);
-  const review = await token.post("/api/v1/design-review", { headers: { origin: "http://elsewhere.example", "content-type": "text/plain" }, data: "{}" });
+  const review = await token.post("/api/v1/design-review", {
+    headers: { origin: "http://elsewhere.example", "content-type": "text/plain" },
+    data: "{}",
+  });
   expect(review.status()).toBe(422);
   expect((await (await coordinator.get(`/api/v1/projects/${targets.projectId}`)).json()).stage).toBe("draft");
   for (const c of [coordinator, foreign, none, token]) await c.dispose();
@@ -98,10 +106,15 @@ test("a plain HTML form on another site of the same host cannot move a project's
       document.body.append(form);
       form.submit();
     },
-    { action: `${new URL(page.url()).protocol}//${new URL(process.env.BASE_URL ?? "http://127.0.0.1:3100").host}/api/v1/projects/${targets.projectId}/stage`, payload: JSON.stringify({ toStage: "closed", note: "x" }) },
+    {
+      action: `${new URL(page.url()).protocol}//${new URL(process.env.BASE_URL ?? "http://127.0.0.1:3100").host}/api/v1/projects/${targets.projectId}/stage`,
+      payload: JSON.stringify({ toStage: "closed", note: "x" }),
+    },
   );
   expect([403, 415]).toContain((await answered).status());
-  const after = await page.request.get(`/api/v1/projects/${targets.projectId}`.replace(/^/, process.env.BASE_URL ?? "http://127.0.0.1:3100"));
+  const after = await page.request.get(
+    `/api/v1/projects/${targets.projectId}`.replace(/^/, process.env.BASE_URL ?? "http://127.0.0.1:3100"),
+  );
   expect((await after.json()).stage).toBe(before.stage);
 });
 
@@ -111,22 +124,38 @@ test("an X-Forwarded-For written by the client changes neither the sign-in throt
   for (let i = 0; i < 5; i++) {
     const client = await clientFor(null);
     const { csrfToken } = await (await client.get("/api/auth/csrf")).json();
-    await client.post("/api/auth/callback/credentials", { headers: { "x-forwarded-for": `203.0.113.${i}` }, form: { csrfToken, email, password: `wrong-${i}`, json: "true" } });
+    await client.post("/api/auth/callback/credentials", {
+      headers: { "x-forwarded-for": `203.0.113.${i}` },
+      form: { csrfToken, email, password: `wrong-${i}`, json: "true" },
+    });
     await client.dispose();
   }
   const last = await clientFor(null);
   const { csrfToken } = await (await last.get("/api/auth/csrf")).json();
-  const answer = await last.post("/api/auth/callback/credentials", { headers: { "x-forwarded-for": "198.51.100.250" }, form: { csrfToken, email, password: "ohmstead-demo", json: "true" } });
-  expect(decodeURIComponent(new URL((await answer.json()).url).searchParams.get("error") ?? "")).toMatch(/each new try waits a little longer/);
+  const answer = await last.post("/api/auth/callback/credentials", {
+    headers: { "x-forwarded-for": "198.51.100.250" },
+    form: { csrfToken, email, password: "ohmstead-demo", json: "true" },
+  });
+  expect(decodeURIComponent(new URL((await answer.json()).url).searchParams.get("error") ?? "")).toMatch(
+    /each new try waits a little longer/,
+  );
   await last.dispose();
 
   // The inspector's visit is logged with the connection's address, not the one the client wrote.
   const coordinator = await clientFor(DEMO.coordinator);
-  const created = await callAction(coordinator, { id: actionIds().get("app/(app)/projects/[projectId]/documents/share-actions.ts#createShareLinkAction")!, page: `/projects/${targets.projectId}/documents`, args: [{ projectId: targets.projectId, packetIds: [targets.packetId] }] });
+  const created = await callAction(coordinator, {
+    id: actionIds().get("app/(app)/projects/[projectId]/documents/share-actions.ts#createShareLinkAction")!,
+    page: `/projects/${targets.projectId}/documents`,
+    args: [{ projectId: targets.projectId, packetIds: [targets.packetId] }],
+  });
   const { url, link } = (created.result as { data: { url: string; link: { id: string } } }).data;
   const inspector = await clientFor(null);
   expect((await inspector.get(new URL(url).pathname, { headers: { "x-forwarded-for": "6.6.6.6" } })).status()).toBe(200);
-  const logged = await query<{ address: string }>(process.env.DATABASE_URL!, "select address from share_link_accesses where share_link_id = $1", [link.id]);
+  const logged = await query<{ address: string }>(
+    process.env.DATABASE_URL!,
+    "select address from share_link_accesses where share_link_id = $1",
+    [link.id],
+  );
   expect(logged.map((row) => row.address)).toEqual(["127.0.0.1"]);
   for (const c of [coordinator, inspector]) await c.dispose();
 });

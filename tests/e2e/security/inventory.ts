@@ -15,7 +15,10 @@ function walk(dir: string): string[] {
 
 /** "app/(app)/projects/[projectId]/page.tsx" → "/projects/:projectId" */
 function urlOf(file: string): string {
-  const parts = path.dirname(path.relative(APP, file)).split(path.sep).filter((p) => p !== "." && !/^\(.*\)$/.test(p));
+  const parts = path
+    .dirname(path.relative(APP, file))
+    .split(path.sep)
+    .filter((p) => p !== "." && !/^\(.*\)$/.test(p));
   return "/" + parts.map((p) => p.replace(/^\[\.\.\.(\w+)\]$/, ":$1*").replace(/^\[(\w+)\]$/, ":$1")).join("/");
 }
 
@@ -29,10 +32,14 @@ export function routeKeys(): string[] {
       const source = readFileSync(file, "utf8");
       const exported = new Set<string>();
       for (const m of source.matchAll(/export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE)\b/g)) exported.add(m[1]!);
-      for (const m of source.matchAll(/export\s*\{([^}]*)\}/g)) for (const name of m[1]!.split(",")) {
-        const alias = name.trim().split(/\s+as\s+/).pop()!;
-        if (METHODS.includes(alias)) exported.add(alias);
-      }
+      for (const m of source.matchAll(/export\s*\{([^}]*)\}/g))
+        for (const name of m[1]!.split(",")) {
+          const alias = name
+            .trim()
+            .split(/\s+as\s+/)
+            .pop()!;
+          if (METHODS.includes(alias)) exported.add(alias);
+        }
       return [...exported].map((method) => `${method} ${urlOf(file)}`);
     })
     .sort();
@@ -42,7 +49,11 @@ export function routeKeys(): string[] {
 export function actionKeys(): string[] {
   return walk(APP)
     .filter((f) => /\.tsx?$/.test(f) && /^["']use server["']/.test(readFileSync(f, "utf8").trimStart()))
-    .flatMap((file) => [...readFileSync(file, "utf8").matchAll(/export\s+(?:const|async\s+function)\s+(\w+)/g)].map((m) => `${path.relative(".", file).split(path.sep).join("/")}#${m[1]}`))
+    .flatMap((file) =>
+      [...readFileSync(file, "utf8").matchAll(/export\s+(?:const|async\s+function)\s+(\w+)/g)].map(
+        (m) => `${path.relative(".", file).split(path.sep).join("/")}#${m[1]}`,
+      ),
+    )
     .sort();
 }
 

@@ -11,7 +11,10 @@ import { ACTIONS, ROUTES, type Entry } from "./route-matrix";
 // a refusal the form can show); a 5xx or an action's INTERNAL fails the test.
 
 const PROTOTYPE_KEYS = ["constructor", "__proto__", "toString", "valueOf", "hasOwnProperty"];
-const hostileString = fc.oneof(fc.string(), fc.constantFrom("\u0000", "a\u0000b", "\ud800", "x\udfffy", "", "NaN", "1e400", "<script>alert(1)</script>", "x".repeat(70_000)));
+const hostileString = fc.oneof(
+  fc.string(),
+  fc.constantFrom("\u0000", "a\u0000b", "\ud800", "x\udfffy", "", "NaN", "1e400", "<script>alert(1)</script>", "x".repeat(70_000)),
+);
 const leaf = fc.oneof(hostileString, fc.double(), fc.integer(), fc.boolean(), fc.constant(null));
 const key = fc.oneof(fc.string({ maxLength: 10 }), fc.constantFrom(...PROTOTYPE_KEYS, "projectId", "kind", "draft", "values", "lines"));
 const { value: hostile } = fc.letrec((tie) => ({
@@ -111,7 +114,9 @@ test("every project sort, both ways, answers", async () => {
       expect(res.status(), `sort=${sort}&direction=${direction}`).toBe(200);
     }
   }
-  const stages = (await (await client.get("/api/v1/projects?sort=stage&direction=asc&pageSize=100")).json()).items.map((p: { stage: string }) => p.stage);
+  const stages = (await (await client.get("/api/v1/projects?sort=stage&direction=asc&pageSize=100")).json()).items.map(
+    (p: { stage: string }) => p.stage,
+  );
   expect(stages.indexOf("draft")).toBeLessThan(stages.lastIndexOf("closed"));
 });
 
@@ -134,7 +139,9 @@ test("server actions answer hostile arguments with a refusal the form can show, 
   expect(tally.serverErrors).toEqual([]);
 });
 
-test("the framework's own parsing of actions is screened: foreign origin 403, oversize 413, unreadable 400, odd type 415", async ({ targets }) => {
+test("the framework's own parsing of actions is screened: foreign origin 403, oversize 413, unreadable 400, odd type 415", async ({
+  targets,
+}) => {
   // Defect: each of these was a 500 from inside the framework.
   const ids = actionIds();
   const id = ids.get("app/(app)/projects/actions.ts#changeStageAction")!;
@@ -147,7 +154,12 @@ test("the framework's own parsing of actions is screened: foreign origin 403, ov
     { what: "oversize, declared", args: Buffer.alloc(1_100_000, "a"), status: 413 },
     { what: "not JSON", args: "not json", status: 400 },
     { what: "a reference to a part that is not there", args: '[{"projectId":"$@7","toStage":"$Q1"}]', status: 400 },
-    { what: "multipart, which no action takes", args: "garbage", headers: { "content-type": "multipart/form-data; boundary=zz" }, status: 415 },
+    {
+      what: "multipart, which no action takes",
+      args: "garbage",
+      headers: { "content-type": "multipart/form-data; boundary=zz" },
+      status: 415,
+    },
     { what: "unknown content type", args: "[{}]", headers: { "content-type": "application/x-made-up" }, status: 415 },
   ];
   for (const c of cases) {
@@ -160,7 +172,13 @@ test("the framework's own parsing of actions is screened: foreign origin 403, ov
 test("addresses with a broken percent-escape answer 400", async ({ targets }) => {
   // Defect: a broken escape in an API path was a 500.
   const client = clients.get("coordinator")!;
-  for (const path of ["/api/v1/projects/%E0%A4%A", `/api/v1/projects/${targets.projectId}/files/%zz`, "/projects/%E0%A4%A", "/settings/equipment/%", "/share/%E0%A4%A"]) {
+  for (const path of [
+    "/api/v1/projects/%E0%A4%A",
+    `/api/v1/projects/${targets.projectId}/files/%zz`,
+    "/projects/%E0%A4%A",
+    "/settings/equipment/%",
+    "/share/%E0%A4%A",
+  ]) {
     const res = await client.get(path, { maxRedirects: 0 });
     record(`GET ${path}`, res.status());
     expect(res.status(), path).toBe(400);

@@ -25,7 +25,13 @@ export type Targets = {
   /** Texts that only the first company may read. */
   markers: string[];
   /** Valid bodies for writes, so that a refusal can only come from who is asking. */
-  bodies: { project: Record<string, unknown>; draft: unknown; equipment: Record<string, unknown>; jurisdiction: Record<string, unknown>; utility: Record<string, unknown> };
+  bodies: {
+    project: Record<string, unknown>;
+    draft: unknown;
+    equipment: Record<string, unknown>;
+    jurisdiction: Record<string, unknown>;
+    utility: Record<string, unknown>;
+  };
 };
 
 const query = <T>(sql: string, params: unknown[] = []) => queryDatabase<T>(process.env.DATABASE_URL!, sql, params);
@@ -80,14 +86,27 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
 
   // A share link for it, with a note only the company knows.
   const linkNote = `matrix-note-${stamp}`;
-  const shared = await callAction(coordinator, { id: ids.get("app/(app)/projects/[projectId]/documents/share-actions.ts#createShareLinkAction")!, page: `/projects/${projectId}/documents`, args: [{ projectId, packetIds: [packetId], note: linkNote }] });
+  const shared = await callAction(coordinator, {
+    id: ids.get("app/(app)/projects/[projectId]/documents/share-actions.ts#createShareLinkAction")!,
+    page: `/projects/${projectId}/documents`,
+    args: [{ projectId, packetIds: [packetId], note: linkNote }],
+  });
   expect(shared.result?.ok, shared.text.slice(0, 300)).toBe(true);
   const [{ id: shareLinkId }] = await query<{ id: string }>("select id from share_links where note = $1", [linkNote]);
 
   // A site photo uploaded by the assigned installer.
-  const png = Buffer.from("89504e470d0a1a0a0000000d4948445200000001000000010806000000" + "1f15c4890000000d49444154789c6360000002000154a24f5d0000000049454e44ae426082", "hex");
+  const png = Buffer.from(
+    "89504e470d0a1a0a0000000d4948445200000001000000010806000000" +
+      "1f15c4890000000d49444154789c6360000002000154a24f5d0000000049454e44ae426082",
+    "hex",
+  );
   const fileName = `matrix-photo-${stamp}.png`;
-  const uploaded = await ok(await crew.post(`/api/v1/projects/${projectId}/files`, { multipart: { kind: "site-photo", file: { name: fileName, mimeType: "image/png", buffer: png } } }), "upload");
+  const uploaded = await ok(
+    await crew.post(`/api/v1/projects/${projectId}/files`, {
+      multipart: { kind: "site-photo", file: { name: fileName, mimeType: "image/png", buffer: png } },
+    }),
+    "upload",
+  );
   const fileId: string = uploaded.file.id;
 
   // A paid payment with its receipt, paid through the hosted checkout page as a coordinator would.
@@ -100,7 +119,10 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
   await expect(page).toHaveURL(/\/fees\?checkout=done$/);
   let paymentId = "";
   await expect(async () => {
-    const rows = await query<{ id: string; receipt_key: string | null }>("select id, receipt_key from payments where project_id = $1 and status = 'paid'", [projectId]);
+    const rows = await query<{ id: string; receipt_key: string | null }>(
+      "select id, receipt_key from payments where project_id = $1 and status = 'paid'",
+      [projectId],
+    );
     expect(rows[0]?.receipt_key).toBeTruthy();
     paymentId = rows[0]!.id;
   }).toPass({ timeout: 60_000 });
@@ -108,14 +130,24 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
 
   // An API token of the company's admin.
   const tokenName = `matrix-token-${stamp}`;
-  const token = await callAction(admin, { id: ids.get("app/(app)/settings/api-tokens/actions.ts#createApiTokenAction")!, page: "/settings/api-tokens", args: [{ name: tokenName }] });
+  const token = await callAction(admin, {
+    id: ids.get("app/(app)/settings/api-tokens/actions.ts#createApiTokenAction")!,
+    page: "/settings/api-tokens",
+    args: [{ name: tokenName }],
+  });
   expect(token.result?.ok, token.text.slice(0, 300)).toBe(true);
   const { token: apiToken, apiToken: apiTokenDto } = (token.result as { data: { token: string; apiToken: { id: string } } }).data;
 
   // Catalog and authority records, with their current values as valid bodies for writes.
   const equipment = (await ok(await admin.get("/api/v1/equipment"), "equipment")).items[0];
-  const [jurisdiction] = await query<Record<string, unknown>>("select id, name, state, nec_edition as \"necEdition\", record_low_temp_c as \"recordLowTempC\", high_design_temp_c as \"highDesignTempC\", coalesce(notes, '') as notes from jurisdictions where id = $1", [source.jurisdiction.id]);
-  const [utility] = await query<Record<string, unknown>>("select id, name, service_voltages as \"serviceVoltages\", accepted_grid_profiles as \"acceptedGridProfiles\", coalesce(notes, '') as notes from utilities where id = $1", [source.utility.id]);
+  const [jurisdiction] = await query<Record<string, unknown>>(
+    'select id, name, state, nec_edition as "necEdition", record_low_temp_c as "recordLowTempC", high_design_temp_c as "highDesignTempC", coalesce(notes, \'\') as notes from jurisdictions where id = $1',
+    [source.jurisdiction.id],
+  );
+  const [utility] = await query<Record<string, unknown>>(
+    'select id, name, service_voltages as "serviceVoltages", accepted_grid_profiles as "acceptedGridProfiles", coalesce(notes, \'\') as notes from utilities where id = $1',
+    [source.utility.id],
+  );
   const [user] = await query<{ name: string; email: string }>("select name, email from users where id = $1", [userId]);
   const [filing] = await query<{ id: string }>("select id from filings where project_id = $1 and kind = 'permit'", [projectId]);
 
@@ -138,9 +170,27 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
     bodies: {
       project,
       draft,
-      equipment: { kind: equipment.kind, maker: equipment.maker, model: equipment.model, listing: equipment.listing ?? "", specs: equipment.specs },
-      jurisdiction: { name: jurisdiction!.name, state: jurisdiction!.state, necEdition: jurisdiction!.necEdition, recordLowTempC: Number(jurisdiction!.recordLowTempC), highDesignTempC: Number(jurisdiction!.highDesignTempC), notes: jurisdiction!.notes },
-      utility: { name: utility!.name, serviceVoltages: utility!.serviceVoltages, acceptedGridProfiles: utility!.acceptedGridProfiles, notes: utility!.notes },
+      equipment: {
+        kind: equipment.kind,
+        maker: equipment.maker,
+        model: equipment.model,
+        listing: equipment.listing ?? "",
+        specs: equipment.specs,
+      },
+      jurisdiction: {
+        name: jurisdiction!.name,
+        state: jurisdiction!.state,
+        necEdition: jurisdiction!.necEdition,
+        recordLowTempC: Number(jurisdiction!.recordLowTempC),
+        highDesignTempC: Number(jurisdiction!.highDesignTempC),
+        notes: jurisdiction!.notes,
+      },
+      utility: {
+        name: utility!.name,
+        serviceVoltages: utility!.serviceVoltages,
+        acceptedGridProfiles: utility!.acceptedGridProfiles,
+        notes: utility!.notes,
+      },
     },
   };
 }

@@ -2,7 +2,11 @@ import { expect, test } from "@playwright/test";
 import { DEMO, pageFor } from "../support/session";
 
 // A tiny but well-formed start of a PDF: the server checks the marker, not the layout.
-const DATASHEET = { name: "mv-415-datasheet.pdf", mimeType: "application/pdf", buffer: Buffer.from("%PDF-1.4\n% invented data sheet\n1 0 obj << >> endobj\n%%EOF\n") };
+const DATASHEET = {
+  name: "mv-415-datasheet.pdf",
+  mimeType: "application/pdf",
+  buffer: Buffer.from("%PDF-1.4\n% invented data sheet\n1 0 obj << >> endobj\n%%EOF\n"),
+};
 
 test("admin adds a module with a data sheet and a coordinator sees it", async ({ browser }) => {
   const model = `MV-415 Duo ${Date.now().toString(36)}`;
@@ -15,7 +19,16 @@ test("admin adds a module with a data sheet and a coordinator sees it", async ({
   await admin.getByLabel("Maker").fill("Merrowvale");
   await admin.getByLabel("Model").fill(model);
   await admin.getByLabel("Listing").fill("UL 61730");
-  for (const [label, value] of [["Pmax (W)", "415"], ["Voc (V)", "38.1"], ["Vmp (V)", "39.0"], ["Isc (A)", "13.92"], ["Imp (A)", "13.11"], ["Voc temperature coefficient", "-0.26"], ["Length (in)", "67.8"], ["Width (in)", "44.6"]] as const) {
+  for (const [label, value] of [
+    ["Pmax (W)", "415"],
+    ["Voc (V)", "38.1"],
+    ["Vmp (V)", "39.0"],
+    ["Isc (A)", "13.92"],
+    ["Imp (A)", "13.11"],
+    ["Voc temperature coefficient", "-0.26"],
+    ["Length (in)", "67.8"],
+    ["Width (in)", "44.6"],
+  ] as const) {
     await admin.getByLabel(label, { exact: true }).fill(value);
   }
   await admin.getByRole("button", { name: "Add to catalog" }).click();

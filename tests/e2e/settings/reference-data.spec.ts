@@ -29,14 +29,19 @@ test("admin adds a jurisdiction and a utility with its accepted grid profiles, a
   await admin.getByRole("link", { name: `Edit Ivel Valley Power ${tag}` }).click();
   await expect(admin.getByLabel("Service voltages")).toHaveValue("120/240 V split-phase\n120/208 V three-phase");
   await expect(admin.getByLabel("Accepted grid profiles")).toHaveValue("IEEE 1547-2018 Category B, utility's default settings");
-  await admin.getByLabel("Accepted grid profiles").fill("IEEE 1547-2018 Category B, utility's default settings\n\nIEEE 1547-2018 Category B, volt-var on");
+  await admin
+    .getByLabel("Accepted grid profiles")
+    .fill("IEEE 1547-2018 Category B, utility's default settings\n\nIEEE 1547-2018 Category B, volt-var on");
   await admin.getByRole("button", { name: "Save changes" }).click();
   await expect(admin).toHaveURL(/\/settings\/utilities$/);
 
   const coordinator = await pageFor(browser, DEMO.coordinator);
   await coordinator.goto("/settings/utilities");
   const utilityRow = coordinator.getByRole("row", { name: new RegExp(`Ivel Valley Power ${tag}`) });
-  await expect(utilityRow.getByRole("cell").nth(2).getByRole("listitem")).toHaveText(["IEEE 1547-2018 Category B, utility's default settings", "IEEE 1547-2018 Category B, volt-var on"]);
+  await expect(utilityRow.getByRole("cell").nth(2).getByRole("listitem")).toHaveText([
+    "IEEE 1547-2018 Category B, utility's default settings",
+    "IEEE 1547-2018 Category B, volt-var on",
+  ]);
   await expect(coordinator.getByRole("link", { name: `Edit Ivel Valley Power ${tag}` })).toHaveCount(0);
   await expect(coordinator.getByRole("button", { name: "Add utility" })).toHaveCount(0);
   await coordinator.goto("/settings/jurisdictions");

@@ -10,7 +10,9 @@ export async function clientFor(email: string | null, { origin = BASE_URL }: { o
   const context = await playwrightRequest.newContext({ baseURL: BASE_URL, extraHTTPHeaders: origin ? { origin } : {} });
   if (email) {
     const { csrfToken } = await (await context.get("/api/auth/csrf")).json();
-    const res = await context.post("/api/auth/callback/credentials", { form: { csrfToken, email, password: DEMO_SIGN_INS.password, json: "true" } });
+    const res = await context.post("/api/auth/callback/credentials", {
+      form: { csrfToken, email, password: DEMO_SIGN_INS.password, json: "true" },
+    });
     expect(res.status(), `sign-in of ${email}`).toBeLessThan(400);
     const session = await (await context.get("/api/auth/session")).json();
     expect(session?.user?.email, `session of ${email}`).toBe(email);
@@ -21,8 +23,23 @@ export async function clientFor(email: string | null, { origin = BASE_URL }: { o
 /** A client with a session cookie the app did not sign: past the proxy's convenience redirect, so the app's own checks answer. */
 export async function forgedSessionClient(): Promise<APIRequestContext> {
   const { hostname } = new URL(BASE_URL);
-  const cookies = [{ name: "next-auth.session-token", value: "forged.session.token", domain: hostname, path: "/", expires: -1, httpOnly: true, secure: false, sameSite: "Lax" as const }];
-  return playwrightRequest.newContext({ baseURL: BASE_URL, extraHTTPHeaders: { origin: BASE_URL }, storageState: { cookies, origins: [] } });
+  const cookies = [
+    {
+      name: "next-auth.session-token",
+      value: "forged.session.token",
+      domain: hostname,
+      path: "/",
+      expires: -1,
+      httpOnly: true,
+      secure: false,
+      sameSite: "Lax" as const,
+    },
+  ];
+  return playwrightRequest.newContext({
+    baseURL: BASE_URL,
+    extraHTTPHeaders: { origin: BASE_URL },
+    storageState: { cookies, origins: [] },
+  });
 }
 
 /** A client that carries only an API token. */
@@ -37,18 +54,29 @@ export function actionIds(): Map<string, string> {
   const file = path.join(process.env.NEXT_DIST_DIR ?? ".next", "server", "server-reference-manifest.json");
   const manifest = JSON.parse(readFileSync(file, "utf8")) as { node: Record<string, ManifestEntry> };
   const ids = new Map<string, string>();
-  for (const [id, entry] of Object.entries(manifest.node)) if (entry.filename && entry.exportedName) ids.set(`${entry.filename}#${entry.exportedName}`, id);
+  for (const [id, entry] of Object.entries(manifest.node))
+    if (entry.filename && entry.exportedName) ids.set(`${entry.filename}#${entry.exportedName}`, id);
   return ids;
 }
 
-export type ActionAnswer = { status: number; result: { ok: boolean; code?: string; message?: string; data?: unknown } | null; text: string };
+export type ActionAnswer = {
+  status: number;
+  result: { ok: boolean; code?: string; message?: string; data?: unknown } | null;
+  text: string;
+};
 
 /** Calls a server action the way the client library does: POST to a page with its id and the arguments as JSON. */
-export async function callAction(client: APIRequestContext, { id, page, args, headers = {} }: { id: string; page: string; args: unknown[] | string | Buffer; headers?: Record<string, string> }): Promise<ActionAnswer> {
+export async function callAction(
+  client: APIRequestContext,
+  { id, page, args, headers = {} }: { id: string; page: string; args: unknown[] | string | Buffer; headers?: Record<string, string> },
+): Promise<ActionAnswer> {
   const res = await client.post(page, {
     headers: { "next-action": id, "content-type": "text/plain;charset=UTF-8", accept: "text/x-component", ...headers },
     // Strings beginning with "$" are escaped as "$$", as the client library's reply encoding does.
-    data: typeof args === "string" || Buffer.isBuffer(args) ? args : JSON.stringify(args, (_key, value) => (typeof value === "string" && value.startsWith("$") ? `$${value}` : value)),
+    data:
+      typeof args === "string" || Buffer.isBuffer(args)
+        ? args
+        : JSON.stringify(args, (_key, value) => (typeof value === "string" && value.startsWith("$") ? `$${value}` : value)),
     maxRedirects: 0,
   });
   const text = await res.text();

@@ -17,20 +17,45 @@ export async function makeOrganization(label = "Test") {
   const tag = randomUUID().slice(0, 8);
   const organization = await Organization.create({ name: `${label} ${tag}`, licenseNumber: null, phone: null });
   const user = async (role: Role, name: string) =>
-    User.create({ organizationId: organization.id, email: `${name.split(" ")[0].toLowerCase()}-${tag}@fixture.example`, name, role, passwordHash: passwordHash!, lastSignInAt: null });
+    User.create({
+      organizationId: organization.id,
+      email: `${name.split(" ")[0].toLowerCase()}-${tag}@fixture.example`,
+      name,
+      role,
+      passwordHash: passwordHash!,
+      lastSignInAt: null,
+    });
   const admin = await user("admin", "Ada Admin");
   const coordinator = await user("coordinator", "Cora Coordinator");
   const installer = await user("installer", "Ivo Installer");
   const otherInstaller = await user("installer", "Ines Installer");
-  const jurisdiction = await Jurisdiction.create({ organizationId: organization.id, name: `Fixture AHJ ${tag}`, state: "CO", necEdition: 2020, recordLowTempC: -20, highDesignTempC: 33, notes: "" });
-  const utility = await Utility.create({ organizationId: organization.id, name: `Fixture Utility ${tag}`, serviceVoltages: ["120/240 V"], notes: "" });
+  const jurisdiction = await Jurisdiction.create({
+    organizationId: organization.id,
+    name: `Fixture AHJ ${tag}`,
+    state: "CO",
+    necEdition: 2020,
+    recordLowTempC: -20,
+    highDesignTempC: 33,
+    notes: "",
+  });
+  const utility = await Utility.create({
+    organizationId: organization.id,
+    name: `Fixture Utility ${tag}`,
+    serviceVoltages: ["120/240 V"],
+    notes: "",
+  });
   return {
     organization,
     tag,
     jurisdiction,
     utility,
     users: { admin, coordinator, installer, otherInstaller },
-    viewers: { admin: asViewer(admin), coordinator: asViewer(coordinator), installer: asViewer(installer), otherInstaller: asViewer(otherInstaller) },
+    viewers: {
+      admin: asViewer(admin),
+      coordinator: asViewer(coordinator),
+      installer: asViewer(installer),
+      otherInstaller: asViewer(otherInstaller),
+    },
   };
 }
 

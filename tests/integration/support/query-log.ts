@@ -15,4 +15,5 @@ export async function sqlDuring<T>(work: () => Promise<T>): Promise<{ result: T;
 }
 
 /** Reads of one table (a SELECT whose FROM names it), leaving out row locks taken to order writers (FOR UPDATE). */
-export const readsOf = (sql: string[], table: string) => sql.filter((s) => /\bSELECT\b/.test(s) && s.includes(`FROM "${table}"`) && !/FOR UPDATE/.test(s));
+export const readsOf = (sql: string[], table: string) =>
+  sql.filter((s) => /\bSELECT\b/.test(s) && s.includes(`FROM "${table}"`) && !/FOR UPDATE/.test(s));

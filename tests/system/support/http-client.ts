@@ -45,7 +45,11 @@ export class AppClient {
   async signIn(email: string, password: string = DEMO_SIGN_INS.password): Promise<string | null> {
     const { body } = await this.json<{ csrfToken: string }>("/api/auth/csrf");
     const form = new URLSearchParams({ csrfToken: body.csrfToken, email, password, json: "true" });
-    const res = await this.request("/api/auth/callback/credentials", { method: "POST", body: form, headers: { "content-type": "application/x-www-form-urlencoded" } });
+    const res = await this.request("/api/auth/callback/credentials", {
+      method: "POST",
+      body: form,
+      headers: { "content-type": "application/x-www-form-urlencoded" },
+    });
     const answer = await res.text();
     const url = (() => {
       try {

@@ -17,8 +17,21 @@ describe("conductor schedule", () => {
   it("prints two strings in one raceway as one run with 4 current-carrying conductors", () => {
     // completeDraft: string line S1 with 2 in parallel, carried by run-1
     const [dc, ac] = schedule();
-    expect(dc).toMatchObject({ label: "Array to junction box", carries: "String S1 (2 circuits)", circuits: 2, currentCarrying: 4, conductors: "4 × 10 AWG Cu PV wire, 90 °C" });
-    expect(ac).toMatchObject({ carries: "Inverter output", circuits: 1, currentCarrying: 2, conductors: "2 × 8 AWG Cu THWN-2, 90 °C", raceway: "3/4 in EMT", ocpd: "PV breaker" });
+    expect(dc).toMatchObject({
+      label: "Array to junction box",
+      carries: "String S1 (2 circuits)",
+      circuits: 2,
+      currentCarrying: 4,
+      conductors: "4 × 10 AWG Cu PV wire, 90 °C",
+    });
+    expect(ac).toMatchObject({
+      carries: "Inverter output",
+      circuits: 1,
+      currentCarrying: 2,
+      conductors: "2 × 8 AWG Cu THWN-2, 90 °C",
+      raceway: "3/4 in EMT",
+      ocpd: "PV breaker",
+    });
   });
 
   it("strings joined before the run are one circuit of two conductors", () => {

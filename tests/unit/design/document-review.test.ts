@@ -38,8 +38,17 @@ describe("reviewDocument: a hand-worked example", () => {
     // EGC: no fuse, so NEC 2020 690.45 assumes a device per 690.9(B): 1.25 × 15.25 = 19.06 → 20 A; Table 250.122 up to 20 A: 12 AWG copper.
     // One string alone in the run: one circuit, two current-carrying conductors; the 75 °C terminals as entered.
     expect(r.runs[0]).toEqual({
-      id: "r1", circuits: 1, currentCarrying: 2, terminalC: 75, designCurrentA: 15.25, requiredAmpacityA: 19.06, correctedAmpacityA: 38.4,
-      voltageDropV: 2.95, voltageDropPct: 0.88, minEgc: "12 AWG", status: "warn",
+      id: "r1",
+      circuits: 1,
+      currentCarrying: 2,
+      terminalC: 75,
+      designCurrentA: 15.25,
+      requiredAmpacityA: 19.06,
+      correctedAmpacityA: 38.4,
+      voltageDropV: 2.95,
+      voltageDropPct: 0.88,
+      minEgc: "12 AWG",
+      status: "warn",
     });
     expect(check(r, "ampacity-conditions:r1")).toMatchObject({ value: 38.4, limit: 15.25 });
     expect(check(r, "voltage-drop:r1").value).toBe(0.88);
@@ -50,7 +59,15 @@ describe("reviewDocument: a hand-worked example", () => {
     // 32 A continuous; 1.25 × 32 = 40 A; 8 AWG Cu 55 A × 0.96 = 52.8 A.
     // Drop: 2 × 50 × 0.778 × 32 / 1000 = 2.49 V of 240 V = 1.04 %.
     // Fill: 2 × 0.0366 in² over 3/4 EMT's 0.213 / 0.4 = 0.5325 in² = 13.75 % (31 % allowed for two wires).
-    expect(r.runs[2]).toMatchObject({ designCurrentA: 32, requiredAmpacityA: 40, correctedAmpacityA: 52.8, voltageDropV: 2.49, voltageDropPct: 1.04, minEgc: "10 AWG", fillPct: 13.75 });
+    expect(r.runs[2]).toMatchObject({
+      designCurrentA: 32,
+      requiredAmpacityA: 40,
+      correctedAmpacityA: 52.8,
+      voltageDropV: 2.49,
+      voltageDropPct: 1.04,
+      minEgc: "10 AWG",
+      fillPct: 13.75,
+    });
     expect(check(r, "conduit-fill:r3")).toMatchObject({ value: 13.75, limit: 31 });
   });
 
@@ -86,7 +103,14 @@ describe("reviewDocument: a hand-worked example", () => {
 
   it("has labels in the code's words with our explanation, and no roof checks without roof planes", () => {
     expect(r.checks.some((c) => c.id.startsWith("roof-") || c.id === "module-count")).toBe(false);
-    expect(r.labels).toContainEqual(expect.objectContaining({ codeRef: "NEC 2020 690.53", title: "Solar DC circuit ratings", values: { maxDcVoltageV: 450.4 }, prescribedWording: false }));
+    expect(r.labels).toContainEqual(
+      expect.objectContaining({
+        codeRef: "NEC 2020 690.53",
+        title: "Solar DC circuit ratings",
+        values: { maxDcVoltageV: 450.4 },
+        prescribedWording: false,
+      }),
+    );
     const rsd = r.labels.find((l) => l.codeRef === "NEC 2020 690.56(C)(1)(a)")!;
     expect(rsd).toMatchObject({ prescribedWording: true });
     expect(rsd.text).toContain("SOLAR PV SYSTEM IS EQUIPPED WITH RAPID SHUTDOWN");
@@ -98,7 +122,11 @@ describe("reviewDocument: a hand-worked example", () => {
     doc.modules[0] = { ...doc.modules[0]!, maxSystemVoltageV: 1000, maxSeriesFuseA: 25 };
     doc.optimizers![0] = { ...doc.optimizers![0]!, maxSystemVoltageV: 1000 };
     doc.inverters[0] = { ...doc.inverters[0]!, dcArcFaultProtection: true, dcGroundFaultProtection: true, dcDisconnect: true };
-    doc.runs = doc.runs!.map((run) => ({ ...run, egc: { size: run.circuit === "ac-output" ? "10 AWG" : "6 AWG" }, ...(run.circuit === "ac-output" ? {} : { insideBuilding: false }) }));
+    doc.runs = doc.runs!.map((run) => ({
+      ...run,
+      egc: { size: run.circuit === "ac-output" ? "10 AWG" : "6 AWG" },
+      ...(run.circuit === "ac-output" ? {} : { insideBuilding: false }),
+    }));
     doc.pvDisconnect = { kind: "pv-breaker" };
     doc.rapidShutdownInitiator = { kind: "service-disconnect", outsideReadilyAccessible: true };
     const ok = review(doc);
@@ -110,7 +138,16 @@ describe("reviewDocument: a hand-worked example", () => {
   it("two strings in one raceway: one run, two circuits, four current-carrying conductors, each string's own current", () => {
     const doc = exampleDocument();
     doc.runs = [
-      { ...doc.runs![0]!, id: "r1", stringId: undefined, stringIds: ["S1", "S2"], currentCarrying: undefined, conduit: { type: "EMT", tradeSize: "3/4" }, insulation: "THWN-2", aboveRoofIn: undefined },
+      {
+        ...doc.runs![0]!,
+        id: "r1",
+        stringId: undefined,
+        stringIds: ["S1", "S2"],
+        currentCarrying: undefined,
+        conduit: { type: "EMT", tradeSize: "3/4" },
+        insulation: "THWN-2",
+        aboveRoofIn: undefined,
+      },
       doc.runs![2]!,
     ];
     const two = review(doc);
@@ -160,7 +197,10 @@ describe("reviewDocument: refusals", () => {
     doc.strings = [];
     doc.runs = [];
     doc.optimizers = [];
-    expect(reviewDocument(doc)).toEqual({ ok: false, problems: [{ path: "strings", message: "The design has a string inverter but no strings." }] });
+    expect(reviewDocument(doc)).toEqual({
+      ok: false,
+      problems: [{ path: "strings", message: "The design has a string inverter but no strings." }],
+    });
   });
 
   it("throws a 422 AppError with every problem under its path", () => {
@@ -182,7 +222,10 @@ describe("reviewDocument: refusals", () => {
 
 describe("reviewDocument never throws for any JSON", () => {
   it("whatever the body", () => {
-    fc.assert(fc.property(fc.jsonValue(), (body) => typeof reviewDocument(body).ok === "boolean"), { numRuns: 300 });
+    fc.assert(
+      fc.property(fc.jsonValue(), (body) => typeof reviewDocument(body).ok === "boolean"),
+      { numRuns: 300 },
+    );
   });
 
   // Replace one field anywhere in a valid document with any JSON value or an extreme number.
@@ -193,7 +236,11 @@ describe("reviewDocument never throws for any JSON", () => {
   const base = exampleDocument();
   base.roofPlanes = [{ id: "south", moduleCount: 20, attachmentCount: 24, rackingWeightLb: 180 }];
   const paths = leafPaths(base);
-  const extreme = fc.oneof(fc.jsonValue(), fc.double({ noNaN: true }), fc.constantFrom(0, -1, 1e-9, 1e9, 0.5, 60, 75, 90, "1/0 AWG", "dc-output", "ac-output", "micro", "supply-side", "S1", "inv-1", null));
+  const extreme = fc.oneof(
+    fc.jsonValue(),
+    fc.double({ noNaN: true }),
+    fc.constantFrom(0, -1, 1e-9, 1e9, 0.5, 60, 75, 90, "1/0 AWG", "dc-output", "ac-output", "micro", "supply-side", "S1", "inv-1", null),
+  );
 
   it("whatever one field holds", () => {
     fc.assert(
@@ -214,20 +261,23 @@ describe("reviewDocument never throws for any JSON", () => {
 
 describe("keys named like Object's own properties", () => {
   // Defect: a document with a key such as "constructor" crashed the problem collector (a 500 from the API).
-  test.each(["constructor", "__proto__", "toString", "hasOwnProperty", "valueOf"])("%s is named as an unknown field, not a crash", (key) => {
-    const body = JSON.parse(`{"${key}": 1, "codeEdition": "2020"}`);
-    let thrown: unknown;
-    try {
-      reviewDocumentOrThrow(body);
-    } catch (error) {
-      thrown = error;
-    }
-    expect(thrown).toBeInstanceOf(AppError);
-    const fieldErrors = (thrown as AppError).fieldErrors!;
-    expect(Object.prototype.hasOwnProperty.call(fieldErrors, key)).toBe(true);
-    expect(fieldErrors[key]).toEqual(["Unknown field; check its spelling against the document format"]);
-    expect(JSON.parse(JSON.stringify(fieldErrors))[key]).toBeDefined();
-  });
+  test.each(["constructor", "__proto__", "toString", "hasOwnProperty", "valueOf"])(
+    "%s is named as an unknown field, not a crash",
+    (key) => {
+      const body = JSON.parse(`{"${key}": 1, "codeEdition": "2020"}`);
+      let thrown: unknown;
+      try {
+        reviewDocumentOrThrow(body);
+      } catch (error) {
+        thrown = error;
+      }
+      expect(thrown).toBeInstanceOf(AppError);
+      const fieldErrors = (thrown as AppError).fieldErrors!;
+      expect(Object.prototype.hasOwnProperty.call(fieldErrors, key)).toBe(true);
+      expect(fieldErrors[key]).toEqual(["Unknown field; check its spelling against the document format"]);
+      expect(JSON.parse(JSON.stringify(fieldErrors))[key]).toBeDefined();
+    },
+  );
 });
 
 describe("reviewDocument: where the connection lands", () => {

@@ -33,27 +33,45 @@ function explicit(design: Design, site: Site): Design {
     conductor: { ...run.conductor, stranding: run.conductor.stranding ?? "stranded" },
     ambientTempC: run.ambientTempC ?? site.highDesignTempC,
     // strings keep their own circuits unless joined; inverter outputs leave a combiner as one
-    circuit: run.circuit.kind === "dc-strings" ? { ...run.circuit, combined: run.circuit.combined ?? false } : { ...run.circuit, combined: run.circuit.combined ?? true },
+    circuit:
+      run.circuit.kind === "dc-strings"
+        ? { ...run.circuit, combined: run.circuit.combined ?? false }
+        : { ...run.circuit, combined: run.circuit.combined ?? true },
   }));
   return { ...design, runs };
 }
 
 const optimizerDesign = () =>
-  stringDesign({ inverters: [northmereOptimizerInverter], moduleLevelDevice: fenwickOptimizer, strings: [{ id: "S1", inverterId: "inv-opt", modulesInSeries: 10 }, { id: "S2", inverterId: "inv-opt", modulesInSeries: 10 }], runs: [], paths: [] });
+  stringDesign({
+    inverters: [northmereOptimizerInverter],
+    moduleLevelDevice: fenwickOptimizer,
+    strings: [
+      { id: "S1", inverterId: "inv-opt", modulesInSeries: 10 },
+      { id: "S2", inverterId: "inv-opt", modulesInSeries: 10 },
+    ],
+    runs: [],
+    paths: [],
+  });
 
 describe("engine → document → engine", () => {
   it.each([
     ["string inverter with shutdown devices", () => stringDesign()],
     ["optimizer strings", optimizerDesign],
     ["micro-inverters", () => microDesign()],
-    ["V/°C coefficient, main-lug panel, strings in parallel", () =>
-      stringDesign({
-        module: { ...stringDesign().module, vocTempCoeff: { value: -0.112, unit: "V/C" } },
-        strings: [{ id: "A.1", inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 }, { id: "A.2", inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 }],
-        runs: [{ ...stringDesign().runs[0], circuit: { kind: "dc-strings", stringIds: ["A.1", "A.2"] } }],
-        paths: [],
-        service: { ...stringDesign().service, mainBreakerA: null, otherBreakersA: [20, 20, 30] },
-      })],
+    [
+      "V/°C coefficient, main-lug panel, strings in parallel",
+      () =>
+        stringDesign({
+          module: { ...stringDesign().module, vocTempCoeff: { value: -0.112, unit: "V/C" } },
+          strings: [
+            { id: "A.1", inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 },
+            { id: "A.2", inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 },
+          ],
+          runs: [{ ...stringDesign().runs[0], circuit: { kind: "dc-strings", stringIds: ["A.1", "A.2"] } }],
+          paths: [],
+          service: { ...stringDesign().service, mainBreakerA: null, otherBreakersA: [20, 20, 30] },
+        }),
+    ],
   ])("gives back the same design: %s", (_what, make) => {
     const design = explicit(make(), coldSite);
     const back = backToEngine(overTheWire(design, coldSite));
@@ -72,12 +90,19 @@ describe("engine → document → engine", () => {
   });
 
   it("names several whole strings sharing a run, and refuses a run carrying part of a parallel set", () => {
-    const design = stringDesign({ strings: [...stringDesign().strings, { id: "S3", inverterId: "inv-1", mpptIndex: 2, modulesInSeries: 10 }] });
+    const design = stringDesign({
+      strings: [...stringDesign().strings, { id: "S3", inverterId: "inv-1", mpptIndex: 2, modulesInSeries: 10 }],
+    });
     design.runs = [{ ...design.runs[0]!, circuit: { kind: "dc-strings", stringIds: ["S1", "S3"] } }];
     const named = engineToDocument(design, coldSite);
     expect(named.ok && named.document.runs[0]).toMatchObject({ circuit: "dc-string", stringIds: ["S1", "S3"], combined: false });
 
-    const parallel = stringDesign({ strings: [{ id: "A.1", inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 }, { id: "A.2", inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 }] });
+    const parallel = stringDesign({
+      strings: [
+        { id: "A.1", inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 },
+        { id: "A.2", inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 },
+      ],
+    });
     parallel.runs = [{ ...parallel.runs[0]!, circuit: { kind: "dc-strings", stringIds: ["A.1"] } }];
     const out = engineToDocument(parallel, coldSite);
     expect(out.ok ? [] : out.problems.map((p) => p.path)).toEqual(["runs.0.circuit"]);
@@ -85,24 +110,39 @@ describe("engine → document → engine", () => {
 });
 
 // The demo catalog as DTOs with stable fake ids, and the demo designs as the editor saves them.
-const catalog = DEMO_CATALOG.map((item, i) => ({ ...EquipmentInput.parse(item), id: `00000000-0000-4000-8000-${String(i).padStart(12, "0")}`, isArchived: false, datasheet: null }) as EquipmentDto);
-const ids = Object.fromEntries(Object.entries(DESIGN_MODELS).map(([k, model]) => [k, catalog.find((c) => c.model === model)!.id])) as CatalogIds;
-const demoCases = JURISDICTIONS.flatMap((j) => [100, 150, 200].flatMap((mainBreakerA) => [0, 1].map((variant) => ({ j, mainBreakerA, variant }))));
+const catalog = DEMO_CATALOG.map(
+  (item, i) =>
+    ({
+      ...EquipmentInput.parse(item),
+      id: `00000000-0000-4000-8000-${String(i).padStart(12, "0")}`,
+      isArchived: false,
+      datasheet: null,
+    }) as EquipmentDto,
+);
+const ids = Object.fromEntries(
+  Object.entries(DESIGN_MODELS).map(([k, model]) => [k, catalog.find((c) => c.model === model)!.id]),
+) as CatalogIds;
+const demoCases = JURISDICTIONS.flatMap((j) =>
+  [100, 150, 200].flatMap((mainBreakerA) => [0, 1].map((variant) => ({ j, mainBreakerA, variant }))),
+);
 
 describe("a saved demo design exported and posted back", () => {
-  it.each(demoCases)("reviews the same in $j.name (NEC $j.necEdition), $mainBreakerA A main, variant $variant", ({ j, mainBreakerA, variant }) => {
-    const draft = demoDesign(ids, { busbarA: mainBreakerA, mainBreakerA }, variant);
-    const exported = draftToDocument(draft, catalog, j);
-    if (!exported.ok) throw new Error(JSON.stringify(exported.problems));
-    const posted = reviewDocument(JSON.parse(JSON.stringify(exported.document)));
-    if (!posted.ok) throw new Error(JSON.stringify(posted.problems));
+  it.each(demoCases)(
+    "reviews the same in $j.name (NEC $j.necEdition), $mainBreakerA A main, variant $variant",
+    ({ j, mainBreakerA, variant }) => {
+      const draft = demoDesign(ids, { busbarA: mainBreakerA, mainBreakerA }, variant);
+      const exported = draftToDocument(draft, catalog, j);
+      if (!exported.ok) throw new Error(JSON.stringify(exported.problems));
+      const posted = reviewDocument(JSON.parse(JSON.stringify(exported.document)));
+      if (!posted.ok) throw new Error(JSON.stringify(posted.problems));
 
-    const input = toEngineInput(DesignInput.parse(draft), catalog, j);
-    if (!input.ok) throw new Error(JSON.stringify(input.problems));
-    const direct = toReviewJson(reviewDesign(input.design, input.site), { roofPlanesGiven: true });
-    expect(posted.review).toEqual(direct);
-    expect(posted.review.status).toBe("pass");
-  });
+      const input = toEngineInput(DesignInput.parse(draft), catalog, j);
+      if (!input.ok) throw new Error(JSON.stringify(input.problems));
+      const direct = toReviewJson(reviewDesign(input.design, input.site), { roofPlanesGiven: true });
+      expect(posted.review).toEqual(direct);
+      expect(posted.review.status).toBe("pass");
+    },
+  );
 
   it("says what is missing when the saved design is incomplete", () => {
     const draft = demoDesign(ids, { busbarA: 200, mainBreakerA: 200 }, 1);

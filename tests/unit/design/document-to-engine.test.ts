@@ -23,12 +23,23 @@ describe("documentToEngine", () => {
     expect(design.module).toMatchObject({ powerW: 400, vocV: 40, vocTempCoeff: { value: -0.28, unit: "%/C" }, weightLb: 48.5 });
     // A square of the same area stands in for the outline: the roof load reads only the area.
     expect((design.module.lengthIn * design.module.widthIn) / 144).toBeCloseTo(21.4, 9);
-    expect(design.inverters[0]).toMatchObject({ id: "inv-1", quantity: 1, acPowerW: 7600, acOutputCurrentA: 32, acVoltageV: 240, phase: 1, maxInputIscA: 26 });
+    expect(design.inverters[0]).toMatchObject({
+      id: "inv-1",
+      quantity: 1,
+      acPowerW: 7600,
+      acOutputCurrentA: 32,
+      acVoltageV: 240,
+      phase: 1,
+      maxInputIscA: 26,
+    });
     expect(design.moduleLevelDevice).toMatchObject({ kind: "shutdown-device", maxInputV: 80, maxInputIscA: 15, shutdownOutputV: 1 });
     expect(design.runs[0]).toMatchObject({
       circuit: { kind: "dc-strings", stringIds: ["S1"], combined: false },
       conductor: { size: "10", material: "Cu", stranding: "stranded", insulationTempC: 90 },
-      terminalTempC: 75, ambientTempC: 33, roofClearanceIn: 1, currentCarryingConductors: 2,
+      terminalTempC: 75,
+      ambientTempC: 33,
+      roofClearanceIn: 1,
+      currentCarryingConductors: 2,
     });
     expect(design.runs[2].circuit).toEqual({ kind: "ac-output", sources: [{ inverterId: "inv-1" }], combined: true });
     // Without a wires list the engine fills the raceway from the run's circuits (see runRacewayWires).
@@ -69,7 +80,9 @@ describe("documentToEngine", () => {
   });
 
   it("counts modules from the strings when the document gives no roof planes, and takes given planes as they are", () => {
-    expect(engine().design.roofPlanes).toEqual([{ id: WHOLE_ARRAY_PLANE_ID, label: "Whole array", moduleCount: 20, attachmentCount: 1, rackingWeightLb: 0 }]);
+    expect(engine().design.roofPlanes).toEqual([
+      { id: WHOLE_ARRAY_PLANE_ID, label: "Whole array", moduleCount: 20, attachmentCount: 1, rackingWeightLb: 0 },
+    ]);
     const { design, sources } = engine((d) => {
       d.roofPlanes = [{ id: "south", moduleCount: 20, attachmentCount: 24, rackingWeightLb: 180 }];
     });
@@ -79,7 +92,9 @@ describe("documentToEngine", () => {
 
   it("counts micro-inverter units as modules when there are no strings", () => {
     const { design } = engine((d) => {
-      d.inverters = [{ id: "micro", kind: "micro", quantity: 16, acRatedW: 320, acMaxContinuousA: 1.33, acNominalV: 240, phases: 1, maxDcInputV: 60 }];
+      d.inverters = [
+        { id: "micro", kind: "micro", quantity: 16, acRatedW: 320, acMaxContinuousA: 1.33, acNominalV: 240, phases: 1, maxDcInputV: 60 },
+      ];
       d.optimizers = [];
       d.strings = [];
       d.runs = [{ ...d.runs![2], inverterId: "micro" }];
@@ -88,26 +103,149 @@ describe("documentToEngine", () => {
     expect(design.roofPlanes[0].moduleCount).toBe(16);
   });
 
-  const micro = { id: "micro", kind: "micro" as const, acRatedW: 320, acMaxContinuousA: 1.33, acNominalV: 240, phases: 1 as const, maxDcInputV: 60 };
+  const micro = {
+    id: "micro",
+    kind: "micro" as const,
+    acRatedW: 320,
+    acMaxContinuousA: 1.33,
+    acNominalV: 240,
+    phases: 1 as const,
+    maxDcInputV: 60,
+  };
   const second = { id: "nm-380", pmaxW: 380, vocV: 41.6, vmpV: 34.5, iscA: 11.62, impA: 11.02 };
 
   it.each<[string, Edit, string, RegExp]>([
-    ["a string names an unknown inverter", (d) => { d.strings![0].inverterId = "inv-9"; }, "strings[0].inverterId", /No inverter with id "inv-9"/],
-    ["two module models are mixed", (d) => { d.modules.push(second); d.strings![1].moduleId = "nm-380"; }, "strings[1].moduleId", /one module model per design/],
-    ["one string has no device and the other has one", (d) => { delete d.strings![1].optimizerId; }, "strings[1].optimizerId", /one module-level device, or none/],
-    ["a string is wired to a micro-inverter", (d) => { d.inverters.push(micro); d.strings![1].inverterId = "micro"; }, "strings[1].inverterId", /micro-inverter/],
-    ["a micro-inverter has no input limit", (d) => { d.inverters.push({ ...micro, maxDcInputV: undefined }); }, "inverters[1].maxDcInputV", /cold Voc/],
-    ["two strings share an id", (d) => { d.strings![1].id = "S1"; }, "strings[1].id", /already uses the id "S1"/],
-    ["two runs share an id", (d) => { d.runs![1].id = "r1"; }, "runs[1].id", /already uses the id "r1"/],
-    ["a dc-string run names no string", (d) => { delete d.runs![0].stringId; }, "runs[0].stringId", /Name the string/],
-    ["a run names an unknown string", (d) => { d.runs![0].stringId = "S7"; }, "runs[0].stringId", /No string with id "S7"/],
-    ["an AC run names a string", (d) => { d.runs![2].stringId = "S1"; }, "runs[2].stringId", /Only dc-string runs/],
-    ["a run uses 60 °C insulation", (d) => { d.runs![1].insulationC = 60; }, "runs[1].insulationC", /75 °C and 90 °C/],
-    ["both Voc coefficient units are given", (d) => { d.modules[0].vocTempCoeffVPerC = -0.11; }, "modules[0].vocTempCoeffVPerC", /not both/],
-    ["Vmp is above Voc", (d) => { d.modules[0].vmpV = 41; }, "modules[0].vmpV", /Vmp must not exceed Voc/],
-    ["roof planes need the module weight", (d) => { d.roofPlanes = [{ id: "p", moduleCount: 20, attachmentCount: 20, rackingWeightLb: 100 }]; delete d.modules[0].weightLb; }, "modules[0].weightLb", /weight/],
-    ["the record low is above the high ambient", (d) => { d.site.recordLowC = 40; }, "site.recordLowC", /above the high ambient/],
-    ["a voltage-drop path names an unknown run", (d) => { d.paths = [{ id: "p1", runIds: ["r1", "r9"] }]; }, "paths[0].runIds[1]", /No run with id "r9"/],
+    [
+      "a string names an unknown inverter",
+      (d) => {
+        d.strings![0].inverterId = "inv-9";
+      },
+      "strings[0].inverterId",
+      /No inverter with id "inv-9"/,
+    ],
+    [
+      "two module models are mixed",
+      (d) => {
+        d.modules.push(second);
+        d.strings![1].moduleId = "nm-380";
+      },
+      "strings[1].moduleId",
+      /one module model per design/,
+    ],
+    [
+      "one string has no device and the other has one",
+      (d) => {
+        delete d.strings![1].optimizerId;
+      },
+      "strings[1].optimizerId",
+      /one module-level device, or none/,
+    ],
+    [
+      "a string is wired to a micro-inverter",
+      (d) => {
+        d.inverters.push(micro);
+        d.strings![1].inverterId = "micro";
+      },
+      "strings[1].inverterId",
+      /micro-inverter/,
+    ],
+    [
+      "a micro-inverter has no input limit",
+      (d) => {
+        d.inverters.push({ ...micro, maxDcInputV: undefined });
+      },
+      "inverters[1].maxDcInputV",
+      /cold Voc/,
+    ],
+    [
+      "two strings share an id",
+      (d) => {
+        d.strings![1].id = "S1";
+      },
+      "strings[1].id",
+      /already uses the id "S1"/,
+    ],
+    [
+      "two runs share an id",
+      (d) => {
+        d.runs![1].id = "r1";
+      },
+      "runs[1].id",
+      /already uses the id "r1"/,
+    ],
+    [
+      "a dc-string run names no string",
+      (d) => {
+        delete d.runs![0].stringId;
+      },
+      "runs[0].stringId",
+      /Name the string/,
+    ],
+    [
+      "a run names an unknown string",
+      (d) => {
+        d.runs![0].stringId = "S7";
+      },
+      "runs[0].stringId",
+      /No string with id "S7"/,
+    ],
+    [
+      "an AC run names a string",
+      (d) => {
+        d.runs![2].stringId = "S1";
+      },
+      "runs[2].stringId",
+      /Only dc-string runs/,
+    ],
+    [
+      "a run uses 60 °C insulation",
+      (d) => {
+        d.runs![1].insulationC = 60;
+      },
+      "runs[1].insulationC",
+      /75 °C and 90 °C/,
+    ],
+    [
+      "both Voc coefficient units are given",
+      (d) => {
+        d.modules[0].vocTempCoeffVPerC = -0.11;
+      },
+      "modules[0].vocTempCoeffVPerC",
+      /not both/,
+    ],
+    [
+      "Vmp is above Voc",
+      (d) => {
+        d.modules[0].vmpV = 41;
+      },
+      "modules[0].vmpV",
+      /Vmp must not exceed Voc/,
+    ],
+    [
+      "roof planes need the module weight",
+      (d) => {
+        d.roofPlanes = [{ id: "p", moduleCount: 20, attachmentCount: 20, rackingWeightLb: 100 }];
+        delete d.modules[0].weightLb;
+      },
+      "modules[0].weightLb",
+      /weight/,
+    ],
+    [
+      "the record low is above the high ambient",
+      (d) => {
+        d.site.recordLowC = 40;
+      },
+      "site.recordLowC",
+      /above the high ambient/,
+    ],
+    [
+      "a voltage-drop path names an unknown run",
+      (d) => {
+        d.paths = [{ id: "p1", runIds: ["r1", "r9"] }];
+      },
+      "paths[0].runIds[1]",
+      /No run with id "r9"/,
+    ],
   ])("names the field when %s", (_what, edit, path, message) => {
     const out = convert(edit);
     expect(out.ok).toBe(false);

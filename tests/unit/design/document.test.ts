@@ -46,7 +46,13 @@ describe("DesignDocument", () => {
     doc.codeEdition = "2014";
     doc.strings[1].parallel = 1.5;
     const problems = problemsOf(doc);
-    expect(problems.map((p) => p.path).sort()).toEqual(["codeEdition", "modules[0].vocV", "runs[2].size", "service.connection", "strings[1].parallel"]);
+    expect(problems.map((p) => p.path).sort()).toEqual([
+      "codeEdition",
+      "modules[0].vocV",
+      "runs[2].size",
+      "service.connection",
+      "strings[1].parallel",
+    ]);
     expect(problems.find((p) => p.path === "runs[2].size")?.message).toMatch(/"10 AWG", "1\/0 AWG" or "250 kcmil"/);
     expect(problems.find((p) => p.path === "modules[0].vocV")?.message).toBe("Voc is required");
     expect(problems.find((p) => p.path === "strings[1].parallel")?.message).toBe("Strings in parallel must be a whole number");

@@ -4,15 +4,58 @@ import type { EquipmentDto } from "@/lib/schemas/equipment";
 
 // Invented equipment with realistic figures, for tests only.
 export const MODULE: EquipmentDto = {
-  id: "11111111-1111-4111-8111-111111111111", kind: "module", maker: "Larkspur", model: "LS-400", listing: "UL 61730", isArchived: false, datasheet: null,
-  specs: { powerW: 400, vocV: 40, vmpV: 33.5, iscA: 12.5, impA: 11.9, vocTempCoeff: { value: -0.28, unit: "%/C" }, pmaxTempCoeffPctPerC: -0.35, maxSeriesFuseA: 25, lengthIn: 68, widthIn: 40, weightLb: 46 },
+  id: "11111111-1111-4111-8111-111111111111",
+  kind: "module",
+  maker: "Larkspur",
+  model: "LS-400",
+  listing: "UL 61730",
+  isArchived: false,
+  datasheet: null,
+  specs: {
+    powerW: 400,
+    vocV: 40,
+    vmpV: 33.5,
+    iscA: 12.5,
+    impA: 11.9,
+    vocTempCoeff: { value: -0.28, unit: "%/C" },
+    pmaxTempCoeffPctPerC: -0.35,
+    maxSeriesFuseA: 25,
+    lengthIn: 68,
+    widthIn: 40,
+    weightLb: 46,
+  },
 };
 export const INVERTER: EquipmentDto = {
-  id: "22222222-2222-4222-8222-222222222222", kind: "inverter", maker: "Northmere", model: "NM-7600", listing: "UL 1741", isArchived: false, datasheet: null,
-  specs: { inverterKind: "string", acPowerW: 7600, acOutputCurrentA: 32, acVoltageV: 240, phase: 1, maxDcInputV: 600, mpptMinV: 150, mpptMaxV: 480, maxInputIscA: 20, mpptCount: 2, certification: "UL 1741 / IEEE 1547-2018", meetsRapidShutdownWithDevices: true },
+  id: "22222222-2222-4222-8222-222222222222",
+  kind: "inverter",
+  maker: "Northmere",
+  model: "NM-7600",
+  listing: "UL 1741",
+  isArchived: false,
+  datasheet: null,
+  specs: {
+    inverterKind: "string",
+    acPowerW: 7600,
+    acOutputCurrentA: 32,
+    acVoltageV: 240,
+    phase: 1,
+    maxDcInputV: 600,
+    mpptMinV: 150,
+    mpptMaxV: 480,
+    maxInputIscA: 20,
+    mpptCount: 2,
+    certification: "UL 1741 / IEEE 1547-2018",
+    meetsRapidShutdownWithDevices: true,
+  },
 };
 export const DEVICE: EquipmentDto = {
-  id: "33333333-3333-4333-8333-333333333333", kind: "device", maker: "Quillon", model: "QS-1", listing: "UL 1741 PVRSE", isArchived: false, datasheet: null,
+  id: "33333333-3333-4333-8333-333333333333",
+  kind: "device",
+  maker: "Quillon",
+  model: "QS-1",
+  listing: "UL 1741 PVRSE",
+  isArchived: false,
+  datasheet: null,
   specs: { deviceKind: "shutdown-device", maxInputV: 80, maxInputIscA: 15, shutdownOutputV: 1 },
 };
 export const CATALOG = [MODULE, INVERTER, DEVICE];

@@ -5,7 +5,11 @@ import { CATALOG, CONDITIONS, completeDraft } from "./fixtures";
 
 describe("runDesignReview", () => {
   it("lists what is missing on a new design instead of failing checks", () => {
-    const out = runDesignReview(newDesignDraft({ serviceVoltageV: 240, servicePhases: 1, busbarA: 200, mainBreakerA: 200 }), CATALOG, CONDITIONS);
+    const out = runDesignReview(
+      newDesignDraft({ serviceVoltageV: 240, servicePhases: 1, busbarA: 200, mainBreakerA: 200 }),
+      CATALOG,
+      CONDITIONS,
+    );
     expect(out.status).toBe("incomplete");
     if (out.status === "incomplete") {
       const paths = out.problems.map((p) => p.path);
@@ -69,7 +73,11 @@ describe("runDesignReview", () => {
   });
 
   it("has nothing partial to show before the equipment is chosen", () => {
-    const out = runDesignReview(newDesignDraft({ serviceVoltageV: 240, servicePhases: 1, busbarA: 200, mainBreakerA: 200 }), CATALOG, CONDITIONS);
+    const out = runDesignReview(
+      newDesignDraft({ serviceVoltageV: 240, servicePhases: 1, busbarA: 200, mainBreakerA: 200 }),
+      CATALOG,
+      CONDITIONS,
+    );
     expect(out.status === "incomplete" && out.partial).toEqual([]);
   });
 });

@@ -19,7 +19,12 @@ describe("toEngineInput", () => {
     expect(out.design.runs[0]).toMatchObject({ insideBuilding: false, terminalTempC: undefined, currentCarryingConductors: undefined });
     expect(out.design.runs[1].circuit).toEqual({ kind: "ac-output", sources: [{ inverterId: "inv-1" }], combined: true });
     expect(out.design.runs[1].raceway).toEqual({ type: "EMT", tradeSize: "3/4" });
-    expect(out.design.pvDisconnect).toEqual({ kind: "pv-breaker", ratingA: undefined, voltageRatingV: undefined, readilyAccessible: undefined });
+    expect(out.design.pvDisconnect).toEqual({
+      kind: "pv-breaker",
+      ratingA: undefined,
+      voltageRatingV: undefined,
+      readilyAccessible: undefined,
+    });
     expect(out.site).toEqual({ ...CONDITIONS, isDwelling: true, peakSunHours: undefined });
   });
 
@@ -50,11 +55,33 @@ describe("toEngineInput", () => {
 
   it("maps Type MC cable, the route into the building and the service details", () => {
     const draft = completeDraft();
-    Object.assign(draft.runs[1], { racewayType: "MC", tradeSize: "", route: "inside", terminalTempC: "60", currentCarryingConductors: "4", wireAreaIn2: "0.03" });
-    Object.assign(draft.service, { rsdInitiatorKind: "switch", rsdInitiatorOutside: "yes", gecSize: "6", gecMaterial: "Cu", gecElectrode: "rod-pipe-plate", serviceConductorSize: "2/0", serviceConductorMaterial: "Al" });
+    Object.assign(draft.runs[1], {
+      racewayType: "MC",
+      tradeSize: "",
+      route: "inside",
+      terminalTempC: "60",
+      currentCarryingConductors: "4",
+      wireAreaIn2: "0.03",
+    });
+    Object.assign(draft.service, {
+      rsdInitiatorKind: "switch",
+      rsdInitiatorOutside: "yes",
+      gecSize: "6",
+      gecMaterial: "Cu",
+      gecElectrode: "rod-pipe-plate",
+      serviceConductorSize: "2/0",
+      serviceConductorMaterial: "Al",
+    });
     const out = toEngineInput(parse(draft), CATALOG, CONDITIONS);
     if (!out.ok) throw new Error(JSON.stringify(out.problems));
-    expect(out.design.runs[1]).toMatchObject({ mcCable: true, raceway: undefined, insideBuilding: true, terminalTempC: 60, currentCarryingConductors: 4, wireAreaIn2: 0.03 });
+    expect(out.design.runs[1]).toMatchObject({
+      mcCable: true,
+      raceway: undefined,
+      insideBuilding: true,
+      terminalTempC: 60,
+      currentCarryingConductors: 4,
+      wireAreaIn2: 0.03,
+    });
     expect(out.design.rapidShutdownInitiator).toEqual({ kind: "switch", outsideReadilyAccessible: true });
     expect(out.design.groundingElectrodeConductor).toEqual({ size: "6", material: "Cu", electrode: "rod-pipe-plate" });
     expect(out.design.service.serviceConductor).toEqual({ size: "2/0", material: "Al" });

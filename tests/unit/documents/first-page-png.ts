@@ -14,7 +14,10 @@ export function firstPagePng(pdf: Uint8Array): Buffer {
   const dir = mkdtempSync(path.join(tmpdir(), "ohmstead-png-"));
   try {
     writeFileSync(path.join(dir, "in.pdf"), pdf);
-    const run = spawnSync(PDFTOPPM, ["-png", "-r", "40", "-f", "1", "-l", "1", "-singlefile", "in.pdf", "page"], { cwd: dir, encoding: "utf8" });
+    const run = spawnSync(PDFTOPPM, ["-png", "-r", "40", "-f", "1", "-l", "1", "-singlefile", "in.pdf", "page"], {
+      cwd: dir,
+      encoding: "utf8",
+    });
     if (run.status !== 0) throw new Error(`pdftoppm failed: ${run.stderr}`);
     return readFileSync(path.join(dir, "page.png"));
   } finally {

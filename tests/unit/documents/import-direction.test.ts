@@ -15,11 +15,18 @@ function sources(dir: string): string[] {
 /** Every import or re-export statement of a file, with whether it is type-only and what it names. */
 function imports(file: string): { typeOnly: boolean; from: string }[] {
   const text = readFileSync(file, "utf8");
-  return [...text.matchAll(/(?:^|\n)\s*(import|export)\s+(type\s+)?(?:[^;"']*?\sfrom\s+)?["']([^"']+)["']/g)].map((m) => ({ typeOnly: Boolean(m[2]), from: m[3]! }));
+  return [...text.matchAll(/(?:^|\n)\s*(import|export)\s+(type\s+)?(?:[^;"']*?\sfrom\s+)?["']([^"']+)["']/g)].map((m) => ({
+    typeOnly: Boolean(m[2]),
+    from: m[3]!,
+  }));
 }
 
 const offenders = (dirs: string[], bad: (i: { typeOnly: boolean; from: string }) => boolean) =>
-  dirs.flatMap(sources).flatMap((file) => imports(file).filter(bad).map((i) => `${file}: ${i.from}`));
+  dirs.flatMap(sources).flatMap((file) =>
+    imports(file)
+      .filter(bad)
+      .map((i) => `${file}: ${i.from}`),
+  );
 
 describe("imports between lib and templates", () => {
   test("the reader sees type-only and value imports apart", () => {

@@ -17,7 +17,9 @@ function sources(dir: string): string[] {
 describe("dates in the organization's zone", () => {
   test("no code that renders or mails takes the UTC day of a timestamp", () => {
     const files = ["app", "components", "templates", "lib/documents", "lib/field", "lib/server", "lib/fees"].flatMap(sources);
-    const offenders = files.filter((file) => /toISOString\(\)\.slice\(0, ?10\)|At\??\.slice\(0, ?10\)|toISOString\(\)\.split\("T"\)/.test(readFileSync(file, "utf8")));
+    const offenders = files.filter((file) =>
+      /toISOString\(\)\.slice\(0, ?10\)|At\??\.slice\(0, ?10\)|toISOString\(\)\.split\("T"\)/.test(readFileSync(file, "utf8")),
+    );
     expect(offenders).toEqual([]);
   });
 

@@ -64,6 +64,7 @@ describe("can", () => {
 
   it("gives API tokens no write, payment or field permission", () => {
     const token = { ...viewer("admin"), apiTokenId: "t1" };
-    for (const permission of ["field:record", "fees:pay", "fees:refund", "filings:edit", "organization:edit", "project:edit"] as const) expect(can(token, permission)).toBe(false);
+    for (const permission of ["field:record", "fees:pay", "fees:refund", "filings:edit", "organization:edit", "project:edit"] as const)
+      expect(can(token, permission)).toBe(false);
   });
 });

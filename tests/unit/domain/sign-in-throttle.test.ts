@@ -6,7 +6,12 @@ import { decideSignIn, pauseSeconds, SIGN_IN_THROTTLE as T, throttleMessage, typ
 // penalty on the account's owner from an address they have used.
 const now = new Date("2026-12-05T12:00:00Z");
 const secondsAgo = (s: number) => new Date(now.getTime() - s * 1000);
-const quiet: RecentFailures = { pair: { count: 0, latestAt: null }, account: { count: 0, latestAt: null }, address: { count: 0, oldestCountedAt: null }, knownAddress: false };
+const quiet: RecentFailures = {
+  pair: { count: 0, latestAt: null },
+  account: { count: 0, latestAt: null },
+  address: { count: 0, oldestCountedAt: null },
+  knownAddress: false,
+};
 
 describe("pauseSeconds", () => {
   test.each([
@@ -47,7 +52,9 @@ describe("decideSignIn", () => {
   test("an address over its limit waits until its oldest counted failure leaves the window", () => {
     const recent = { ...quiet, address: { count: T.maxAddressFailures, oldestCountedAt: secondsAgo(T.windowMinutes * 60 - 30) } };
     expect(decideSignIn(recent, now)).toEqual({ allowed: false, waitSeconds: 30, reason: "address" });
-    expect(decideSignIn({ ...recent, address: { ...recent.address, oldestCountedAt: secondsAgo(T.windowMinutes * 60 + 1) } }, now)).toEqual({ allowed: true });
+    expect(decideSignIn({ ...recent, address: { ...recent.address, oldestCountedAt: secondsAgo(T.windowMinutes * 60 + 1) } }, now)).toEqual(
+      { allowed: true },
+    );
   });
 });
 

@@ -1,5 +1,13 @@
-import { expect, test } from "vitest";
-import { US_TIME_ZONES, formatInZone, localDateTime, localIsoDate, localLongDate } from "@/lib/domain/time-zones";
+import { describe, expect, it, test } from "vitest";
+import {
+  US_TIME_ZONES,
+  addCalendarDays,
+  calendarDayText,
+  formatInZone,
+  localDateTime,
+  localIsoDate,
+  localLongDate,
+} from "@/lib/domain/time-zones";
 
 // Offsets from the IANA tz database as shipped with Node's ICU (from memory: MST = UTC−7, MDT = UTC−6, HST = UTC−10).
 test.each([
@@ -36,4 +44,22 @@ test.each([
 ] as const)("screens show %s in the organization's zone, whatever the machine's", (style, expected) => {
   // 2026-11-16T00:11Z is still the evening of November 15 in Colorado (MST, UTC−7).
   expect(formatInZone("2026-11-16T00:11:00Z", "America/Denver", style)).toBe(expected);
+});
+
+describe("calendar days", () => {
+  it.each([
+    ["2026-03-20", 180, "2026-09-16"],
+    ["2026-12-31", 1, "2027-01-01"],
+    ["2028-02-28", 1, "2028-02-29"],
+    ["2027-02-28", 1, "2027-03-01"],
+    ["2026-03-08", 1, "2026-03-09"], // the night clocks spring forward in the US changes nothing for a day count
+    ["2026-01-10", -10, "2025-12-31"],
+  ])("%s plus %i days is %s", (day, days, expected) => {
+    expect(addCalendarDays(day, days)).toBe(expected);
+  });
+
+  it("writes a calendar day as it is, whatever zone the machine runs in", () => {
+    expect(calendarDayText("2026-03-02")).toBe("Mar 2, 2026");
+    expect(calendarDayText("2026-12-31")).toBe("Dec 31, 2026");
+  });
 });

@@ -108,7 +108,12 @@ export const stringRun: ConductorRun = {
 };
 
 /** String S2's own run, the same as S1's. */
-export const stringRun2: ConductorRun = { ...stringRun, id: "r3", label: "Array to inverter, string S2", circuit: { kind: "dc-strings", stringIds: ["S2"] } };
+export const stringRun2: ConductorRun = {
+  ...stringRun,
+  id: "r3",
+  label: "Array to inverter, string S2",
+  circuit: { kind: "dc-strings", stringIds: ["S2"] },
+};
 
 export const acRun: ConductorRun = {
   id: "r2",
@@ -118,7 +123,14 @@ export const acRun: ConductorRun = {
   conductor: { size: "8", material: "Cu", insulationTempC: 90, insulation: "THWN-2" },
   ocpdA: 40,
   egc: { size: "10", material: "Cu" },
-  raceway: { type: "EMT", tradeSize: "3/4", wires: [{ size: "8", count: 3, insulation: "THWN-2" }, { size: "10", count: 1, insulation: "THWN-2" }] },
+  raceway: {
+    type: "EMT",
+    tradeSize: "3/4",
+    wires: [
+      { size: "8", count: 3, insulation: "THWN-2" },
+      { size: "10", count: 1, insulation: "THWN-2" },
+    ],
+  },
 };
 
 /** A 20-module home system: two strings of 10 on one string inverter, 200 A panel with a 200 A main. */

@@ -65,12 +65,28 @@ describe("required warning labels with computed values", () => {
 // The code's prescribed wording, edition by edition. All from memory: none of the three editions' text
 // was at hand; the 2023 move of the rapid shutdown marking into 690.12(D) agrees with a trade summary.
 describe("labels in the code's words, by edition", () => {
-  const RSD = 'SOLAR PV SYSTEM IS EQUIPPED WITH RAPID SHUTDOWN. TURN RAPID SHUTDOWN SWITCH TO THE "OFF" POSITION TO SHUT DOWN PV SYSTEM AND REDUCE SHOCK HAZARD IN THE ARRAY.';
+  const RSD =
+    'SOLAR PV SYSTEM IS EQUIPPED WITH RAPID SHUTDOWN. TURN RAPID SHUTDOWN SWITCH TO THE "OFF" POSITION TO SHUT DOWN PV SYSTEM AND REDUCE SHOCK HAZARD IN THE ARRAY.';
   test.each([
     // [edition, label, clause, text] — 690.13(B)
-    [2017, "pv-disconnect", "NEC 2017 690.13(B)", "PV SYSTEM DISCONNECT WARNING ELECTRIC SHOCK HAZARD TERMINALS ON THE LINE AND LOAD SIDES MAY BE ENERGIZED IN THE OPEN POSITION"],
-    [2020, "pv-disconnect", "NEC 2020 690.13(B)", "PV SYSTEM DISCONNECT WARNING ELECTRIC SHOCK HAZARD TERMINALS ON THE LINE AND LOAD SIDES MAY BE ENERGIZED IN THE OPEN POSITION"],
-    [2023, "pv-disconnect", "NEC 2023 690.13(B)", "PV SYSTEM DISCONNECT WARNING ELECTRIC SHOCK HAZARD TERMINALS ON THE LINE AND LOAD SIDES MAY BE ENERGIZED IN THE OPEN POSITION"],
+    [
+      2017,
+      "pv-disconnect",
+      "NEC 2017 690.13(B)",
+      "PV SYSTEM DISCONNECT WARNING ELECTRIC SHOCK HAZARD TERMINALS ON THE LINE AND LOAD SIDES MAY BE ENERGIZED IN THE OPEN POSITION",
+    ],
+    [
+      2020,
+      "pv-disconnect",
+      "NEC 2020 690.13(B)",
+      "PV SYSTEM DISCONNECT WARNING ELECTRIC SHOCK HAZARD TERMINALS ON THE LINE AND LOAD SIDES MAY BE ENERGIZED IN THE OPEN POSITION",
+    ],
+    [
+      2023,
+      "pv-disconnect",
+      "NEC 2023 690.13(B)",
+      "PV SYSTEM DISCONNECT WARNING ELECTRIC SHOCK HAZARD TERMINALS ON THE LINE AND LOAD SIDES MAY BE ENERGIZED IN THE OPEN POSITION",
+    ],
     // 690.56(C)(1)(a) (2017, 2020); 690.12(D) (2023)
     [2017, "rapid-shutdown", "NEC 2017 690.56(C)(1)(a)", RSD],
     [2020, "rapid-shutdown", "NEC 2020 690.56(C)(1)(a)", RSD],
@@ -80,9 +96,24 @@ describe("labels in the code's words, by edition", () => {
     [2020, "rapid-shutdown-switch", "NEC 2020 690.56(C)(3)", "RAPID SHUTDOWN SWITCH FOR SOLAR PV SYSTEM"],
     [2023, "rapid-shutdown-switch", "NEC 2023 690.12(D)", "RAPID SHUTDOWN SWITCH FOR SOLAR PV SYSTEM"],
     // 120 % rule: 2017 705.12(B)(2)(3)(b) named the inverter; 2020 705.12(B)(3)(2), 2023 705.12(B)(2) any power source
-    [2017, "pv-breaker-position", "NEC 2017 705.12(B)(2)(3)(b)", "WARNING: INVERTER OUTPUT CONNECTION DO NOT RELOCATE THIS OVERCURRENT DEVICE"],
-    [2020, "pv-breaker-position", "NEC 2020 705.12(B)(3)(2)", "WARNING: POWER SOURCE OUTPUT CONNECTION— DO NOT RELOCATE THIS OVERCURRENT DEVICE"],
-    [2023, "pv-breaker-position", "NEC 2023 705.12(B)(2)", "WARNING: POWER SOURCE OUTPUT CONNECTION— DO NOT RELOCATE THIS OVERCURRENT DEVICE"],
+    [
+      2017,
+      "pv-breaker-position",
+      "NEC 2017 705.12(B)(2)(3)(b)",
+      "WARNING: INVERTER OUTPUT CONNECTION DO NOT RELOCATE THIS OVERCURRENT DEVICE",
+    ],
+    [
+      2020,
+      "pv-breaker-position",
+      "NEC 2020 705.12(B)(3)(2)",
+      "WARNING: POWER SOURCE OUTPUT CONNECTION— DO NOT RELOCATE THIS OVERCURRENT DEVICE",
+    ],
+    [
+      2023,
+      "pv-breaker-position",
+      "NEC 2023 705.12(B)(2)",
+      "WARNING: POWER SOURCE OUTPUT CONNECTION— DO NOT RELOCATE THIS OVERCURRENT DEVICE",
+    ],
     // DC wiring methods: 2017 690.31(G)(3); 2020/2023 690.31(D)(2)
     [2017, "dc-circuit-marking", "NEC 2017 690.31(G)(3)", "WARNING: PHOTOVOLTAIC POWER SOURCE"],
     [2020, "dc-circuit-marking", "NEC 2020 690.31(D)(2)", "SOLAR PV DC CIRCUIT"],
@@ -93,14 +124,17 @@ describe("labels in the code's words, by edition", () => {
     expect(flat(l.text)).toBe(text);
   });
 
-  test.each([2017, 2020, 2023] as const)("NEC %d sum rule (705.12, from memory): the multiple-sources warning in the code's words", (edition) => {
-    const l = label({ ...facts, edition, loadSideRule: "sum" }, "breaker-sum");
-    expect(l.prescribed).toBe(true);
-    expect(flat(l.text)).toBe(
-      "WARNING: THIS EQUIPMENT FED BY MULTIPLE SOURCES. TOTAL RATING OF ALL OVERCURRENT DEVICES, EXCLUDING MAIN SUPPLY OVERCURRENT DEVICE, SHALL NOT EXCEED AMPACITY OF BUSBAR.",
-    );
-    expect(l.explanation).toContain("200 A");
-  });
+  test.each([2017, 2020, 2023] as const)(
+    "NEC %d sum rule (705.12, from memory): the multiple-sources warning in the code's words",
+    (edition) => {
+      const l = label({ ...facts, edition, loadSideRule: "sum" }, "breaker-sum");
+      expect(l.prescribed).toBe(true);
+      expect(flat(l.text)).toBe(
+        "WARNING: THIS EQUIPMENT FED BY MULTIPLE SOURCES. TOTAL RATING OF ALL OVERCURRENT DEVICES, EXCLUDING MAIN SUPPLY OVERCURRENT DEVICE, SHALL NOT EXCEED AMPACITY OF BUSBAR.",
+      );
+      expect(l.explanation).toContain("200 A");
+    },
+  );
 
   test("the 705.12(C) panel marking has no set words: our wording carries the current, voltage and breaker (2020, from memory)", () => {
     const l = label(facts, "multiple-sources");

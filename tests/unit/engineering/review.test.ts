@@ -12,7 +12,14 @@ function noNaN(value: unknown): void {
 describe("reviewDesign", () => {
   test("a sound string design: every check passes and the summary holds the ratings", () => {
     const r = reviewDesign(stringDesign(), coldSite);
-    expect(r.summary).toMatchObject({ warn: 0, fail: 0, status: "pass", maxDcVoltageV: 450.4, maxDcCircuitCurrentA: 15.25, largestPvBreakerA: 40 });
+    expect(r.summary).toMatchObject({
+      warn: 0,
+      fail: 0,
+      status: "pass",
+      maxDcVoltageV: 450.4,
+      maxDcCircuitCurrentA: 15.25,
+      largestPvBreakerA: 40,
+    });
     expect(r.summary.pass).toBe(r.checks.length);
     // 8 kW × 5 h × 365 × 0.859243 = 12 544.95 → 12 545 kWh (NREL/TP-6A20-62641 default losses)
     expect(r.summary.ratings).toEqual({ moduleCount: 20, dcKw: 8, acKw: 7.6, dcToAcRatio: 1.05 });
@@ -24,10 +31,30 @@ describe("reviewDesign", () => {
 
   test("covers every area of the review", () => {
     const prefixes = new Set(reviewDesign(stringDesign(), coldSite).checks.map((c) => c.id.split(":")[0]));
-    for (const p of ["string-voltage", "mppt-min", "ampacity-terminal", "ampacity-conditions", "ocpd-rating", "egc", "voltage-drop",
-      "voltage-drop-path", "conduit-fill", "pv-breaker-size", "point-of-connection", "rapid-shutdown", "dc-ac-ratio", "roof-dead-load",
-      "data-sheet", "system-voltage", "arc-fault", "ground-fault", "pv-disconnect", "dc-disconnect", "rapid-shutdown-initiator",
-      "wiring-exposed"]) {
+    for (const p of [
+      "string-voltage",
+      "mppt-min",
+      "ampacity-terminal",
+      "ampacity-conditions",
+      "ocpd-rating",
+      "egc",
+      "voltage-drop",
+      "voltage-drop-path",
+      "conduit-fill",
+      "pv-breaker-size",
+      "point-of-connection",
+      "rapid-shutdown",
+      "dc-ac-ratio",
+      "roof-dead-load",
+      "data-sheet",
+      "system-voltage",
+      "arc-fault",
+      "ground-fault",
+      "pv-disconnect",
+      "dc-disconnect",
+      "rapid-shutdown-initiator",
+      "wiring-exposed",
+    ]) {
       expect(prefixes).toContain(p);
     }
   });
@@ -71,12 +98,19 @@ describe("reviewDesign", () => {
     });
     const r = reviewDesign(design, coldSite);
     expect(r.summary.status).toBe("fail");
-    expect(r.checks.find((c) => c.id === "string-voltage:S1")).toMatchObject({ status: "fail", fix: "Use at most 13 modules in this string." });
+    expect(r.checks.find((c) => c.id === "string-voltage:S1")).toMatchObject({
+      status: "fail",
+      fix: "Use at most 13 modules in this string.",
+    });
   });
 
   test.each([
     ["a negative length", { ...stringRun, lengthFt: -10 }, /must be zero or more/],
-    ["an unknown conductor size", { ...acRun, id: "r1", conductor: { ...acRun.conductor, size: "7" as never } }, /not in the ampacity table/],
+    [
+      "an unknown conductor size",
+      { ...acRun, id: "r1", conductor: { ...acRun.conductor, size: "7" as never } },
+      /not in the ampacity table/,
+    ],
   ])("a run with %s becomes a failed check, and the rest still run", (_what, badRun, message) => {
     const r = reviewDesign(stringDesign({ runs: [badRun, acRun], paths: [] }), coldSite);
     const input = r.checks.find((c) => c.id === "input:run:r1")!;
@@ -94,10 +128,16 @@ describe("reviewDesign", () => {
   });
 
   test("every check names the entry it needs when it warns about missing data", () => {
-    const bare = stringDesign({ pvDisconnect: undefined, rapidShutdownInitiator: undefined, runs: [{ ...stringRun, insideBuilding: undefined }, acRun] });
+    const bare = stringDesign({
+      pvDisconnect: undefined,
+      rapidShutdownInitiator: undefined,
+      runs: [{ ...stringRun, insideBuilding: undefined }, acRun],
+    });
     const r = reviewDesign(bare, coldSite);
     const warned = r.checks.filter((c) => c.status === "warn");
-    expect(warned.map((c) => c.field)).toEqual(expect.arrayContaining(["pvDisconnect.kind", "rapidShutdownInitiator.kind", "runs.r1.insideBuilding", "strings.S2"]));
+    expect(warned.map((c) => c.field)).toEqual(
+      expect.arrayContaining(["pvDisconnect.kind", "rapidShutdownInitiator.kind", "runs.r1.insideBuilding", "strings.S2"]),
+    );
   });
 });
 
@@ -105,7 +145,10 @@ describe("reviewDesign", () => {
 describe("reviewArray", () => {
   test("a 25-module string is flagged with no service or runs", () => {
     const d = stringDesign();
-    const checks = reviewArray({ ...d, strings: [{ id: "S1", inverterId: "inv-1", modulesInSeries: 25 }] }, { ...coldSite, necEdition: 2023 });
+    const checks = reviewArray(
+      { ...d, strings: [{ id: "S1", inverterId: "inv-1", modulesInSeries: 25 }] },
+      { ...coldSite, necEdition: 2023 },
+    );
     // 25 × 45.04 = 1126 V > 600 V
     expect(checks.find((c) => c.id === "string-voltage:S1")).toMatchObject({ status: "fail", value: 1126, clause: "NEC 2023 690.7(A)" });
     expect(checks.some((c) => c.id.startsWith("ampacity") || c.id === "point-of-connection")).toBe(false);

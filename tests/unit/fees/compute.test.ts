@@ -18,11 +18,23 @@ describe("each basis, invented schedule (demo)", () => {
     // 6.000 kW × 2000 ¢/kW = 12,000 ¢: the AC size, not the DC
     ["per kW on AC", { kind: "per-kw", size: "ac", rateCentsPerKw: 2_000 }, {}, 12_000, ["6.000 kW AC × $20.00/kW = $120.00"]],
     // 1525 × 7634 = 11,641,850 thousandths of a cent = 11,641.85 ¢ → 11,642 ¢
-    ["per kW, rounded", { kind: "per-kw", size: "dc", rateCentsPerKw: 1_525 }, { dcKw: 7.634 }, 11_642, ["7.634 kW DC × $15.25/kW = $116.4185, rounded to $116.42"]],
+    [
+      "per kW, rounded",
+      { kind: "per-kw", size: "dc", rateCentsPerKw: 1_525 },
+      { dcKw: 7.634 },
+      11_642,
+      ["7.634 kW DC × $15.25/kW = $116.4185, rounded to $116.42"],
+    ],
     // 4,000,000 ¢ × 1.25 % = 50,000 ¢
     ["percent of valuation", { kind: "valuation-percent", ratePercent: "1.25" }, {}, 50_000, ["$40,000.00 valuation × 1.25% = $500.00"]],
     // 72.5 ¢ per $1,000 is 0.0725 %: 3,825,000 ¢ × 0.000725 = 2,773.125 ¢ → 2,773 ¢ (38.25 × $0.725 = $27.73125)
-    ["percent of valuation, rounded", { kind: "valuation-percent", ratePercent: "0.0725" }, { valuationCents: 3_825_000 }, 2_773, ["$38,250.00 valuation × 0.0725% = $27.73125, rounded to $27.73"]],
+    [
+      "percent of valuation, rounded",
+      { kind: "valuation-percent", ratePercent: "0.0725" },
+      { valuationCents: 3_825_000 },
+      2_773,
+      ["$38,250.00 valuation × 0.0725% = $27.73125, rounded to $27.73"],
+    ],
   ])("%s", (_what, basis, on, amountCents, arithmetic) => {
     expect(only(feeLine(basis), on)).toMatchObject({ amountCents, arithmetic });
   });
@@ -30,13 +42,30 @@ describe("each basis, invented schedule (demo)", () => {
   test("a result names its line, authority and basis, and the total adds the lines", () => {
     const lines = [
       feeLine({ kind: "flat", amountCents: 25_000 }, { id: "permit", authority: ASHCOMBE }),
-      feeLine({ kind: "per-kw", size: "ac", rateCentsPerKw: 2_000 }, { id: "interconnect", name: "Interconnection application fee", authority: BRINDLE }),
+      feeLine(
+        { kind: "per-kw", size: "ac", rateCentsPerKw: 2_000 },
+        { id: "interconnect", name: "Interconnection application fee", authority: BRINDLE },
+      ),
     ];
     // $250.00 + 6.000 kW × $20.00 = $250.00 + $120.00 = $370.00
     expect(computeFees({ lines, facts: facts() })).toEqual({
       lines: [
-        { lineId: "permit", name: "Building permit", authority: ASHCOMBE, kind: "flat", amountCents: 25_000, arithmetic: ["flat fee = $250.00"] },
-        { lineId: "interconnect", name: "Interconnection application fee", authority: BRINDLE, kind: "per-kw", amountCents: 12_000, arithmetic: ["6.000 kW AC × $20.00/kW = $120.00"] },
+        {
+          lineId: "permit",
+          name: "Building permit",
+          authority: ASHCOMBE,
+          kind: "flat",
+          amountCents: 25_000,
+          arithmetic: ["flat fee = $250.00"],
+        },
+        {
+          lineId: "interconnect",
+          name: "Interconnection application fee",
+          authority: BRINDLE,
+          kind: "per-kw",
+          amountCents: 12_000,
+          arithmetic: ["6.000 kW AC × $20.00/kW = $120.00"],
+        },
       ],
       totalCents: 37_000,
       isComplete: true,
@@ -48,13 +77,16 @@ describe("each basis, invented schedule (demo)", () => {
   });
 
   test("sizes are read to the watt: 0.1 + 0.2 kW is 0.300 kW", () => {
-    expect(only(feeLine({ kind: "per-kw", size: "dc", rateCentsPerKw: 1_000 }), { dcKw: 0.1 + 0.2 }).arithmetic).toEqual(["0.300 kW DC × $10.00/kW = $3.00"]);
+    expect(only(feeLine({ kind: "per-kw", size: "dc", rateCentsPerKw: 1_000 }), { dcKw: 0.1 + 0.2 }).arithmetic).toEqual([
+      "0.300 kW DC × $10.00/kW = $3.00",
+    ]);
   });
 });
 
 describe("minimum and maximum, applied after the basis (invented schedule, demo)", () => {
   // $15.00/kW DC, at least $150.00, at most $500.00
-  const capped = (minimumCents: number | null, maximumCents: number | null) => feeLine({ kind: "per-kw", size: "dc", rateCentsPerKw: 1_500 }, { minimumCents, maximumCents });
+  const capped = (minimumCents: number | null, maximumCents: number | null) =>
+    feeLine({ kind: "per-kw", size: "dc", rateCentsPerKw: 1_500 }, { minimumCents, maximumCents });
 
   test.each<[number, number, string[]]>([
     // 7.600 × $15 = $114.00 < $150.00
@@ -79,7 +111,10 @@ describe("minimum and maximum, applied after the basis (invented schedule, demo)
   test("a minimum applies to a flat fee and to a percent of valuation", () => {
     // 0.5 % of $12,000.00 = $60.00 < $75.00
     const line = feeLine({ kind: "valuation-percent", ratePercent: "0.5" }, { minimumCents: 7_500 });
-    expect(only(line, { valuationCents: 1_200_000 }).arithmetic).toEqual(["$12,000.00 valuation × 0.5% = $60.00", "below the $75.00 minimum → $75.00"]);
+    expect(only(line, { valuationCents: 1_200_000 }).arithmetic).toEqual([
+      "$12,000.00 valuation × 0.5% = $60.00",
+      "below the $75.00 minimum → $75.00",
+    ]);
   });
 });
 
@@ -107,7 +142,10 @@ describe("rounding: integer cents, half up at the cent edge", () => {
     [1_000_040, 12_501, "$10,000.40 valuation × 1.25% = $125.005, rounded to $125.01"], // 12,500.5 ¢: half → up
     [1_000_020, 12_500, "$10,000.20 valuation × 1.25% = $125.0025, rounded to $125.00"], // 12,500.25 ¢ → down
   ])("valuation %d ¢ × 1.25 %% → %d ¢", (valuationCents, amountCents, shown) => {
-    expect(only(feeLine({ kind: "valuation-percent", ratePercent: "1.25" }), { valuationCents })).toMatchObject({ amountCents, arithmetic: [shown] });
+    expect(only(feeLine({ kind: "valuation-percent", ratePercent: "1.25" }), { valuationCents })).toMatchObject({
+      amountCents,
+      arithmetic: [shown],
+    });
   });
 });
 
@@ -138,9 +176,25 @@ describe("size tiers at the bracket boundaries (invented schedule, demo)", () =>
     // on the boundary: 10 × $20 = $200, nothing in the second tier
     [10, 20_000, ["10.000 kW AC × $20.00/kW (tier 0.000–10.000 kW) = $200.00"]],
     // one watt over: 0.001 × $10 = 1 ¢
-    [10.001, 20_001, ["10.000 kW AC × $20.00/kW (tier 0.000–10.000 kW) = $200.00", "0.001 kW AC × $10.00/kW (tier 10.000–25.000 kW) = $0.01", "$200.00 + $0.01 = $200.01"]],
+    [
+      10.001,
+      20_001,
+      [
+        "10.000 kW AC × $20.00/kW (tier 0.000–10.000 kW) = $200.00",
+        "0.001 kW AC × $10.00/kW (tier 10.000–25.000 kW) = $0.01",
+        "$200.00 + $0.01 = $200.01",
+      ],
+    ],
     // 10 × $20 + 15 × $10 = $200 + $150 = $350
-    [25, 35_000, ["10.000 kW AC × $20.00/kW (tier 0.000–10.000 kW) = $200.00", "15.000 kW AC × $10.00/kW (tier 10.000–25.000 kW) = $150.00", "$200.00 + $150.00 = $350.00"]],
+    [
+      25,
+      35_000,
+      [
+        "10.000 kW AC × $20.00/kW (tier 0.000–10.000 kW) = $200.00",
+        "15.000 kW AC × $10.00/kW (tier 10.000–25.000 kW) = $150.00",
+        "$200.00 + $150.00 = $350.00",
+      ],
+    ],
     // + 5 × $5 = $25 → $375
     [
       30,
@@ -158,7 +212,14 @@ describe("size tiers at the bracket boundaries (invented schedule, demo)", () =>
 
   test("each marginal tier is rounded to the cent on its own, so the parts shown add up", () => {
     // $0.15/kW then $0.25/kW above 1 kW; 1.003 kW: 15 ¢ + 0.003 × 25 ¢ = 0.075 ¢ → 0 ¢; total 15 ¢
-    const line = feeLine({ kind: "marginal-tiers", size: "dc", tiers: [{ upToKw: 1, rateCentsPerKw: 15 }, { upToKw: null, rateCentsPerKw: 25 }] });
+    const line = feeLine({
+      kind: "marginal-tiers",
+      size: "dc",
+      tiers: [
+        { upToKw: 1, rateCentsPerKw: 15 },
+        { upToKw: null, rateCentsPerKw: 25 },
+      ],
+    });
     expect(only(line, { dcKw: 1.003 })).toMatchObject({ amountCents: 15, arithmetic: expect.arrayContaining(["$0.15 + $0.00 = $0.15"]) });
   });
 });
@@ -184,13 +245,23 @@ describe("a line that needs a fact not given yet", () => {
   });
 
   test("no valuation and no minimum: counted at 0 until the valuation is declared", () => {
-    const result = computeFees({ lines: [feeLine({ kind: "valuation-percent", ratePercent: "1.25" })], facts: facts({ valuationCents: null }) });
-    expect(result.lines[0]).toMatchObject({ amountCents: 0, arithmetic: ["1.25% of the project valuation: no valuation declared yet"], problem: { code: "valuation-missing" } });
+    const result = computeFees({
+      lines: [feeLine({ kind: "valuation-percent", ratePercent: "1.25" })],
+      facts: facts({ valuationCents: null }),
+    });
+    expect(result.lines[0]).toMatchObject({
+      amountCents: 0,
+      arithmetic: ["1.25% of the project valuation: no valuation declared yet"],
+      problem: { code: "valuation-missing" },
+    });
     expect(result).toMatchObject({ totalCents: 0, isComplete: false });
   });
 
   test("a valuation of $0.00 is declared: the line is worked out", () => {
-    const result = computeFees({ lines: [feeLine({ kind: "valuation-percent", ratePercent: "1.25" }, { minimumCents: 5_000 })], facts: facts({ valuationCents: 0 }) });
+    const result = computeFees({
+      lines: [feeLine({ kind: "valuation-percent", ratePercent: "1.25" }, { minimumCents: 5_000 })],
+      facts: facts({ valuationCents: 0 }),
+    });
     expect(result).toMatchObject({ totalCents: 5_000, isComplete: true });
   });
 
@@ -201,7 +272,10 @@ describe("a line that needs a fact not given yet", () => {
     ["marginal tiers, no AC size, no minimum", brindleMarginal, { acKw: null }, null, 0],
   ])("size not known (%s): a problem, counted at its minimum or 0", (_what, basis, on, minimumCents, amountCents) => {
     const line = only(feeLine(basis, { minimumCents }), on);
-    expect(line).toMatchObject({ amountCents, problem: { code: "size-missing", message: "Complete the design to work out this fee: it depends on the system size." } });
+    expect(line).toMatchObject({
+      amountCents,
+      problem: { code: "size-missing", message: "Complete the design to work out this fee: it depends on the system size." },
+    });
     expect(line.arithmetic[0]).toMatch(/reads the system size in kW (DC|AC): not known until the design is complete/);
   });
 
@@ -214,22 +288,129 @@ describe("a line that needs a fact not given yet", () => {
 describe("data that bypassed the schedule form is refused with a typed error", () => {
   const flat = (amountCents: number) => ({ kind: "flat", amountCents }) as FeeBasis;
   test.each<[string, ScheduledFeeLine[], Partial<FeeFacts>, string, RegExp]>([
-    ["a negative rate", [feeLine({ kind: "per-kw", size: "dc", rateCentsPerKw: -1_500 })], {}, "lines.0.basis.rateCentsPerKw", /rate per kW must be whole cents, zero or more/],
+    [
+      "a negative rate",
+      [feeLine({ kind: "per-kw", size: "dc", rateCentsPerKw: -1_500 })],
+      {},
+      "lines.0.basis.rateCentsPerKw",
+      /rate per kW must be whole cents, zero or more/,
+    ],
     ["fractional cents", [feeLine(flat(12.5))], {}, "lines.0.basis.amountCents", /amount must be whole cents/],
-    ["a negative tier amount", [feeLine({ ...ashcombeBrackets, tiers: [{ upToKw: 10, amountCents: -1 }, { upToKw: null, amountCents: 0 }] } as FeeBasis)], {}, "lines.0.basis.tiers.0.amountCents", /each tier's amount/],
-    ["tiers not ascending", [feeLine({ ...brindleMarginal, tiers: [{ upToKw: 10, rateCentsPerKw: 1 }, { upToKw: 10, rateCentsPerKw: 1 }, { upToKw: null, rateCentsPerKw: 1 }] } as FeeBasis)], {}, "lines.0.basis.tiers.1.upToKw", /Tiers must ascend: this tier must end above 10.000 kW/],
-    ["a closed last tier", [feeLine({ ...ashcombeBrackets, tiers: [{ upToKw: 10, amountCents: 1 }, { upToKw: 25, amountCents: 2 }] } as FeeBasis)], {}, "lines.0.basis.tiers.1.upToKw", /Leave the last tier's upper size blank/],
-    ["an open middle tier", [feeLine({ ...ashcombeBrackets, tiers: [{ upToKw: null, amountCents: 1 }, { upToKw: null, amountCents: 2 }] } as FeeBasis)], {}, "lines.0.basis.tiers.0.upToKw", /Only the last tier is open-ended/],
-    ["a tier edge finer than a watt", [feeLine({ ...ashcombeBrackets, tiers: [{ upToKw: 10.0005, amountCents: 1 }, { upToKw: null, amountCents: 2 }] } as FeeBasis)], {}, "lines.0.basis.tiers.0.upToKw", /at most three decimals/],
+    [
+      "a negative tier amount",
+      [
+        feeLine({
+          ...ashcombeBrackets,
+          tiers: [
+            { upToKw: 10, amountCents: -1 },
+            { upToKw: null, amountCents: 0 },
+          ],
+        } as FeeBasis),
+      ],
+      {},
+      "lines.0.basis.tiers.0.amountCents",
+      /each tier's amount/,
+    ],
+    [
+      "tiers not ascending",
+      [
+        feeLine({
+          ...brindleMarginal,
+          tiers: [
+            { upToKw: 10, rateCentsPerKw: 1 },
+            { upToKw: 10, rateCentsPerKw: 1 },
+            { upToKw: null, rateCentsPerKw: 1 },
+          ],
+        } as FeeBasis),
+      ],
+      {},
+      "lines.0.basis.tiers.1.upToKw",
+      /Tiers must ascend: this tier must end above 10.000 kW/,
+    ],
+    [
+      "a closed last tier",
+      [
+        feeLine({
+          ...ashcombeBrackets,
+          tiers: [
+            { upToKw: 10, amountCents: 1 },
+            { upToKw: 25, amountCents: 2 },
+          ],
+        } as FeeBasis),
+      ],
+      {},
+      "lines.0.basis.tiers.1.upToKw",
+      /Leave the last tier's upper size blank/,
+    ],
+    [
+      "an open middle tier",
+      [
+        feeLine({
+          ...ashcombeBrackets,
+          tiers: [
+            { upToKw: null, amountCents: 1 },
+            { upToKw: null, amountCents: 2 },
+          ],
+        } as FeeBasis),
+      ],
+      {},
+      "lines.0.basis.tiers.0.upToKw",
+      /Only the last tier is open-ended/,
+    ],
+    [
+      "a tier edge finer than a watt",
+      [
+        feeLine({
+          ...ashcombeBrackets,
+          tiers: [
+            { upToKw: 10.0005, amountCents: 1 },
+            { upToKw: null, amountCents: 2 },
+          ],
+        } as FeeBasis),
+      ],
+      {},
+      "lines.0.basis.tiers.0.upToKw",
+      /at most three decimals/,
+    ],
     ["no tiers", [feeLine({ ...ashcombeBrackets, tiers: [] } as FeeBasis)], {}, "lines.0.basis.tiers", /Add at least one tier/],
-    ["a minimum above the maximum", [feeLine(flat(100), { minimumCents: 50_000, maximumCents: 15_000 })], {}, "lines.0.maximumCents", /The minimum \(\$500\.00\) cannot be above the maximum \(\$150\.00\)/],
-    ["an end before the start", [feeLine(flat(100), { effectiveFrom: "2026-07-01", effectiveUntil: "2026-07-01" })], {}, "lines.0.effectiveUntil", /end date must be after/],
+    [
+      "a minimum above the maximum",
+      [feeLine(flat(100), { minimumCents: 50_000, maximumCents: 15_000 })],
+      {},
+      "lines.0.maximumCents",
+      /The minimum \(\$500\.00\) cannot be above the maximum \(\$150\.00\)/,
+    ],
+    [
+      "an end before the start",
+      [feeLine(flat(100), { effectiveFrom: "2026-07-01", effectiveUntil: "2026-07-01" })],
+      {},
+      "lines.0.effectiveUntil",
+      /end date must be after/,
+    ],
     ["an impossible date", [feeLine(flat(100), { effectiveFrom: "2026-02-30" })], {}, "lines.0.effectiveFrom", /YYYY-MM-DD/],
     ["a percent above 100", [feeLine({ kind: "valuation-percent", ratePercent: "150" })], {}, "lines.0.basis.ratePercent", /from 0 to 100/],
     ["a negative percent", [feeLine({ kind: "valuation-percent", ratePercent: "-1" })], {}, "lines.0.basis.ratePercent", /from 0 to 100/],
-    ["an unknown size", [feeLine({ kind: "per-kw", size: "both", rateCentsPerKw: 1 } as unknown as FeeBasis)], {}, "lines.0.basis.size", /"dc" or "ac"/],
-    ["an unknown basis", [feeLine({ kind: "hourly" } as unknown as FeeBasis)], {}, "lines.0.basis.kind", /"hourly" is not a way of working out a fee/],
-    ["two versions starting the same day", [feeLine(flat(100)), feeLine(flat(200), { name: " building PERMIT " })], {}, "lines.1.effectiveFrom", /Another version of "building PERMIT" already takes effect on 2025-01-01/],
+    [
+      "an unknown size",
+      [feeLine({ kind: "per-kw", size: "both", rateCentsPerKw: 1 } as unknown as FeeBasis)],
+      {},
+      "lines.0.basis.size",
+      /"dc" or "ac"/,
+    ],
+    [
+      "an unknown basis",
+      [feeLine({ kind: "hourly" } as unknown as FeeBasis)],
+      {},
+      "lines.0.basis.kind",
+      /"hourly" is not a way of working out a fee/,
+    ],
+    [
+      "two versions starting the same day",
+      [feeLine(flat(100)), feeLine(flat(200), { name: " building PERMIT " })],
+      {},
+      "lines.1.effectiveFrom",
+      /Another version of "building PERMIT" already takes effect on 2025-01-01/,
+    ],
     ["a negative size", [], { dcKw: -7.6 }, "facts.dcKw", /kW DC/],
     ["a size that is not a number", [], { acKw: Number.NaN }, "facts.acKw", /kW AC/],
     ["a valuation in fractions of a cent", [], { valuationCents: 100.5 }, "facts.valuationCents", /whole cents/],
@@ -248,7 +429,9 @@ describe("data that bypassed the schedule form is refused with a typed error", (
 
   test("the message names the line", () => {
     const line = feeLine({ kind: "per-kw", size: "dc", rateCentsPerKw: -1 }, { name: "Electrical permit" });
-    expect(() => computeFees({ lines: [line], facts: facts() })).toThrow('Fee line "Electrical permit": the rate per kW must be whole cents, zero or more.');
+    expect(() => computeFees({ lines: [line], facts: facts() })).toThrow(
+      'Fee line "Electrical permit": the rate per kW must be whole cents, zero or more.',
+    );
   });
 
   test("a line out of effect is checked too: bad data anywhere in a schedule is reported", () => {

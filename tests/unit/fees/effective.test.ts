@@ -8,7 +8,13 @@ import { ASHCOMBE, BRINDLE, facts, feeLine } from "./fixtures";
 const flat = (amountCents: number) => ({ kind: "flat", amountCents }) as const;
 const schedule = [
   feeLine(flat(20_000), { id: "permit-2024", authority: ASHCOMBE, effectiveFrom: "2024-01-01" }),
-  feeLine(flat(7_500), { id: "plan-review", authority: ASHCOMBE, name: "Plan review", effectiveFrom: "2025-01-01", effectiveUntil: "2026-01-01" }),
+  feeLine(flat(7_500), {
+    id: "plan-review",
+    authority: ASHCOMBE,
+    name: "Plan review",
+    effectiveFrom: "2025-01-01",
+    effectiveUntil: "2026-01-01",
+  }),
   feeLine(flat(25_000), { id: "permit-2026", authority: ASHCOMBE, effectiveFrom: "2026-07-01" }),
   feeLine(flat(10_000), { id: "interconnect", authority: BRINDLE, name: "Interconnection application fee", effectiveFrom: "2025-03-01" }),
 ];
@@ -50,7 +56,10 @@ describe("versions of one fee", () => {
   });
 
   test("names match regardless of case and spacing", () => {
-    const lines = [feeLine(flat(20_000), { id: "old", effectiveFrom: "2024-01-01" }), feeLine(flat(25_000), { id: "new", name: "  building   PERMIT", effectiveFrom: "2025-01-01" })];
+    const lines = [
+      feeLine(flat(20_000), { id: "old", effectiveFrom: "2024-01-01" }),
+      feeLine(flat(25_000), { id: "new", name: "  building   PERMIT", effectiveFrom: "2025-01-01" }),
+    ];
     expect(applicableLines(lines, "2026-01-01").map((line) => line.id)).toEqual(["new"]);
   });
 

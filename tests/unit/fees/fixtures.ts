@@ -9,7 +9,16 @@ let nextId = 1;
 
 /** A stored line in effect from 2025-01-01 with no end, minimum or maximum unless given. */
 export function feeLine(basis: FeeBasis, overrides: Partial<ScheduledFeeLine> = {}): ScheduledFeeLine {
-  return { id: `line-${nextId++}`, name: "Building permit", effectiveFrom: "2025-01-01", effectiveUntil: null, basis, minimumCents: null, maximumCents: null, ...overrides };
+  return {
+    id: `line-${nextId++}`,
+    name: "Building permit",
+    effectiveFrom: "2025-01-01",
+    effectiveUntil: null,
+    basis,
+    minimumCents: null,
+    maximumCents: null,
+    ...overrides,
+  };
 }
 
 /** A 7.600 kW DC / 6.000 kW AC rooftop system declared at $40,000.00, fees as of 2026-03-15. */

@@ -16,7 +16,10 @@ describe("a fee line's amount as the Fees page shows it", () => {
 
   test("a total with a line still waiting is the least the fees come to", () => {
     // Invented schedule (demo): a $75.00 flat fee and 1.25 % of the valuation with a $50.00 minimum.
-    const lines = [feeLine({ kind: "flat", amountCents: 75_00 }, { name: "Plan review" }), feeLine({ kind: "valuation-percent", ratePercent: "1.25" }, { minimumCents: 50_00 })];
+    const lines = [
+      feeLine({ kind: "flat", amountCents: 75_00 }, { name: "Plan review" }),
+      feeLine({ kind: "valuation-percent", ratePercent: "1.25" }, { minimumCents: 50_00 }),
+    ];
     expect(feeTotalText(computeFees({ lines, facts: facts({ valuationCents: null }) }))).toBe("at least $125.00");
     // $40,000.00 × 1.25 % = $500.00; + $75.00
     expect(feeTotalText(computeFees({ lines, facts: facts() }))).toBe("$575.00");

@@ -16,27 +16,35 @@ const edgesArb = fc
   .uniqueArray(fc.integer({ min: 1, max: 500_000 }), { maxLength: 5 })
   .map((watts) => [...[...watts].sort((a, b) => a - b).map((w) => w / 1000), null]);
 
-const bracketArb = fc
-  .tuple(sizeArb, edgesArb)
-  .chain(([size, edges]) =>
-    fc.array(centsArb(), { minLength: edges.length, maxLength: edges.length }).map((amounts): FeeBasis => ({ kind: "bracket-tiers", size, tiers: edges.map((upToKw, i) => ({ upToKw, amountCents: amounts[i]! })) })),
-  );
-const marginalArb = fc
-  .tuple(sizeArb, edgesArb)
-  .chain(([size, edges]) =>
-    fc.array(centsArb(100_000), { minLength: edges.length, maxLength: edges.length }).map((rates): FeeBasis => ({ kind: "marginal-tiers", size, tiers: edges.map((upToKw, i) => ({ upToKw, rateCentsPerKw: rates[i]! })) })),
-  );
+const bracketArb = fc.tuple(sizeArb, edgesArb).chain(([size, edges]) =>
+  fc.array(centsArb(), { minLength: edges.length, maxLength: edges.length }).map((amounts): FeeBasis => ({
+    kind: "bracket-tiers",
+    size,
+    tiers: edges.map((upToKw, i) => ({ upToKw, amountCents: amounts[i]! })),
+  })),
+);
+const marginalArb = fc.tuple(sizeArb, edgesArb).chain(([size, edges]) =>
+  fc.array(centsArb(100_000), { minLength: edges.length, maxLength: edges.length }).map((rates): FeeBasis => ({
+    kind: "marginal-tiers",
+    size,
+    tiers: edges.map((upToKw, i) => ({ upToKw, rateCentsPerKw: rates[i]! })),
+  })),
+);
 const perKwArb = fc.record({ kind: fc.constant("per-kw" as const), size: sizeArb, rateCentsPerKw: centsArb(100_000) });
 const flatArb = fc.record({ kind: fc.constant("flat" as const), amountCents: centsArb() });
 /** A percent in its stored form: millionths of the whole as "1.25", "0.0725", "100". */
 const percentArb = fc.integer({ min: 0, max: 1_000_000 }).map((millionths): FeeBasis => {
-  const decimals = String(millionths % 10_000).padStart(4, "0").replace(/0+$/, "");
+  const decimals = String(millionths % 10_000)
+    .padStart(4, "0")
+    .replace(/0+$/, "");
   return { kind: "valuation-percent", ratePercent: [String(Math.floor(millionths / 10_000)), decimals].filter(Boolean).join(".") };
 });
 const basisArb: fc.Arbitrary<FeeBasis> = fc.oneof(flatArb, perKwArb, bracketArb, marginalArb, percentArb);
 
 /** A minimum and a maximum, each optional, never crossed. */
-const limitsArb = fc.tuple(fc.option(centsArb()), fc.option(centsArb())).map(([a, b]) => (a !== null && b !== null && a > b ? [b, a] : [a, b]));
+const limitsArb = fc
+  .tuple(fc.option(centsArb()), fc.option(centsArb()))
+  .map(([a, b]) => (a !== null && b !== null && a > b ? [b, a] : [a, b]));
 
 const DAY_MS = 86_400_000;
 const dateArb = fc.integer({ min: 0, max: 3_000 }).map((days) => new Date(Date.UTC(2024, 0, 1) + days * DAY_MS).toISOString().slice(0, 10));
@@ -63,8 +71,14 @@ const scheduleArb = fc
   .map((lines): FeeLine[] => lines.map((line, i) => ({ id: `line-${i}`, ...line })));
 
 const factsArb: fc.Arbitrary<FeeFacts> = fc.record({
-  dcKw: fc.option(wattsArb.map((w) => w / 1000), { freq: 5 }),
-  acKw: fc.option(wattsArb.map((w) => w / 1000), { freq: 5 }),
+  dcKw: fc.option(
+    wattsArb.map((w) => w / 1000),
+    { freq: 5 },
+  ),
+  acKw: fc.option(
+    wattsArb.map((w) => w / 1000),
+    { freq: 5 },
+  ),
   valuationCents: fc.option(centsArb(1_000_000_000)),
   asOf: dateArb,
 });
@@ -94,7 +108,10 @@ describe("fee arithmetic holds for any schedule the form accepts", () => {
           const line = byId.get(lineId)!;
           expect(isInEffect(line, facts.asOf)).toBe(true);
           const basis = line.basis;
-          const missing = basis.kind === "valuation-percent" ? facts.valuationCents === null : basis.kind !== "flat" && facts[basis.size === "dc" ? "dcKw" : "acKw"] === null;
+          const missing =
+            basis.kind === "valuation-percent"
+              ? facts.valuationCents === null
+              : basis.kind !== "flat" && facts[basis.size === "dc" ? "dcKw" : "acKw"] === null;
           expect(problem !== undefined).toBe(missing);
         }
         const names = result.lines.map((line) => feeNameKey(line.name));
@@ -143,7 +160,10 @@ describe("fee arithmetic holds for any schedule the form accepts", () => {
       fc.property(lineArb(fc.oneof(perKwArb, marginalArb)), wattsArb, wattsArb, (line, a, b) => {
         const [smallerW, largerW] = a <= b ? [a, b] : [b, a];
         const amountAt = (watts: number) =>
-          computeFees({ lines: [{ id: "line", ...line }], facts: { dcKw: watts / 1000, acKw: watts / 1000, valuationCents: null, asOf: line.effectiveFrom } }).totalCents;
+          computeFees({
+            lines: [{ id: "line", ...line }],
+            facts: { dcKw: watts / 1000, acKw: watts / 1000, valuationCents: null, asOf: line.effectiveFrom },
+          }).totalCents;
         expect(amountAt(largerW)).toBeGreaterThanOrEqual(amountAt(smallerW));
       }),
       RUNS,
@@ -153,7 +173,10 @@ describe("fee arithmetic holds for any schedule the form accepts", () => {
   test("a bracket fee is one bracket's amount, or its minimum or maximum", () => {
     fc.assert(
       fc.property(lineArb(bracketArb), wattsArb, (line, watts) => {
-        const [result] = computeFees({ lines: [{ id: "line", ...line }], facts: { dcKw: watts / 1000, acKw: watts / 1000, valuationCents: null, asOf: line.effectiveFrom } }).lines;
+        const [result] = computeFees({
+          lines: [{ id: "line", ...line }],
+          facts: { dcKw: watts / 1000, acKw: watts / 1000, valuationCents: null, asOf: line.effectiveFrom },
+        }).lines;
         const amounts = (line.basis as Extract<FeeBasis, { kind: "bracket-tiers" }>).tiers.map((tier) => tier.amountCents);
         expect([...amounts, line.minimumCents, line.maximumCents]).toContain(result!.amountCents);
       }),

@@ -10,7 +10,10 @@ const LINES = [
 ];
 const paid = (...refunds: StandingRefund[]): PaidPayment => ({ amountCents: 350_00, lines: LINES, refunds });
 const money = (amountCents: number): StandingRefund => ({ amountCents, feeKeys: [] });
-const lines = (...feeKeys: string[]): StandingRefund => ({ amountCents: LINES.filter((l) => feeKeys.includes(l.feeKey)).reduce((s, l) => s + l.amountCents, 0), feeKeys });
+const lines = (...feeKeys: string[]): StandingRefund => ({
+  amountCents: LINES.filter((l) => feeKeys.includes(l.feeKey)).reduce((s, l) => s + l.amountCents, 0),
+  feeKeys,
+});
 
 describe("which fees a payment's refunds give back", () => {
   test.each<[string, StandingRefund[], string[], number]>([
@@ -37,7 +40,12 @@ describe("planning a refund of whole lines", () => {
     ["a line already refunded", [lines("review")], ["review"], { message: "Plan review was already refunded." }],
     ["a line of another payment", [], ["elsewhere"], { message: "A chosen fee is not part of this payment." }],
     ["nothing chosen", [], [], { message: "Choose at least one fee to refund." }],
-    ["more than is left after money was returned", [money(300_00)], ["permit"], { message: "The chosen fees come to $150.00, but only $50.00 of this payment is left to refund." }],
+    [
+      "more than is left after money was returned",
+      [money(300_00)],
+      ["permit"],
+      { message: "The chosen fees come to $150.00, but only $50.00 of this payment is left to refund." },
+    ],
   ])("%s", (_, refunds, feeKeys, expected) => {
     const plan = planLineRefund(paid(...refunds), feeKeys);
     if ("amountCents" in expected) expect(plan).toMatchObject({ ok: true, amountCents: expected.amountCents });
@@ -45,7 +53,15 @@ describe("planning a refund of whole lines", () => {
   });
 
   test("any order of line refunds and money never returns more than was paid, and a line comes back once", () => {
-    const step = fc.oneof(fc.subarray(LINES.map((l) => l.feeKey), { minLength: 1 }).map((keys) => ({ keys })), fc.integer({ min: 1, max: 400_00 }).map((cents) => ({ cents })));
+    const step = fc.oneof(
+      fc
+        .subarray(
+          LINES.map((l) => l.feeKey),
+          { minLength: 1 },
+        )
+        .map((keys) => ({ keys })),
+      fc.integer({ min: 1, max: 400_00 }).map((cents) => ({ cents })),
+    );
     fc.assert(
       fc.property(fc.array(step, { maxLength: 8 }), (steps) => {
         let payment = paid();

@@ -18,9 +18,18 @@ const design = {
   roofPlanes: [],
 } as unknown as Design;
 
-const facts = commissioningFacts({ design, edition: 2023, acceptedGridProfiles: ["  IEEE 1547-2018 Cat B ", " "], moduleCount: 27, acKw: 7.6, moduleMonitoring: false });
-const withDevice = (kind: "optimizer" | "shutdown-device") => ({ ...design, moduleLevelDevice: { ...(design.moduleLevelDevice as object), kind } }) as Design;
-const readingsWith = (strings: { id: string; measuredV?: number; vocV?: number; devicesFound?: number }[]) => CommissioningReadings.parse({ ...emptyReadings(facts), strings });
+const facts = commissioningFacts({
+  design,
+  edition: 2023,
+  acceptedGridProfiles: ["  IEEE 1547-2018 Cat B ", " "],
+  moduleCount: 27,
+  acKw: 7.6,
+  moduleMonitoring: false,
+});
+const withDevice = (kind: "optimizer" | "shutdown-device") =>
+  ({ ...design, moduleLevelDevice: { ...(design.moduleLevelDevice as object), kind } }) as Design;
+const readingsWith = (strings: { id: string; measuredV?: number; vocV?: number; devicesFound?: number }[]) =>
+  CommissioningReadings.parse({ ...emptyReadings(facts), strings });
 
 describe("commissioning facts from the design", () => {
   it("takes strings, inverter units, profiles, service voltage, module count and AC rating from the design", () => {
@@ -46,22 +55,58 @@ describe("commissioning facts from the design", () => {
 
   it("numbers several inverter units, each with its own serial line", () => {
     const two = { ...design, inverters: [{ ...(design.inverters[0] as object), quantity: 2 }] } as Design;
-    expect(commissioningFacts({ design: two, edition: 2023, acceptedGridProfiles: [], moduleCount: 27, acKw: 15.2, moduleMonitoring: false }).inverters).toEqual([
+    expect(
+      commissioningFacts({ design: two, edition: 2023, acceptedGridProfiles: [], moduleCount: 27, acKw: 15.2, moduleMonitoring: false })
+        .inverters,
+    ).toEqual([
       { id: "inv.1", label: "Inverter 1", model: "Quillon QS-7600" },
       { id: "inv.2", label: "Inverter 2", model: "Quillon QS-7600" },
     ]);
   });
 
   it("optimizer strings have no Voc test; devices that report are counted per string", () => {
-    const f = commissioningFacts({ design: withDevice("optimizer"), edition: 2023, acceptedGridProfiles: [], moduleCount: 27, acKw: 7.6, moduleMonitoring: true });
+    const f = commissioningFacts({
+      design: withDevice("optimizer"),
+      edition: 2023,
+      acceptedGridProfiles: [],
+      moduleCount: 27,
+      acKw: 7.6,
+      moduleMonitoring: true,
+    });
     expect(f.stringTests.every((s) => !s.vocApplies)).toBe(true);
-    expect(f.pairing).toEqual({ word: "optimizers", installed: 27, strings: [{ id: "A", installed: 15 }, { id: "B", installed: 12 }] });
+    expect(f.pairing).toEqual({
+      word: "optimizers",
+      installed: 27,
+      strings: [
+        { id: "A", installed: 15 },
+        { id: "B", installed: 12 },
+      ],
+    });
   });
 
   it("microinverters: no strings, no serial cards, the gateway's count of units found", () => {
-    const micro = { ...design, moduleLevelDevice: undefined, strings: [], inverters: [{ id: "m", kind: "micro", quantity: 16, maker: "Pellinore", model: "PM-320 Micro" }] } as unknown as Design;
-    const f = commissioningFacts({ design: micro, edition: 2020, acceptedGridProfiles: [], moduleCount: 16, acKw: 5.1, moduleMonitoring: true });
-    expect(f).toMatchObject({ stringTests: [], inverters: [], strings: [], pairing: { word: "microinverters", installed: 16, strings: [] }, acceptedGridProfiles: [], acRatingW: 5100 });
+    const micro = {
+      ...design,
+      moduleLevelDevice: undefined,
+      strings: [],
+      inverters: [{ id: "m", kind: "micro", quantity: 16, maker: "Pellinore", model: "PM-320 Micro" }],
+    } as unknown as Design;
+    const f = commissioningFacts({
+      design: micro,
+      edition: 2020,
+      acceptedGridProfiles: [],
+      moduleCount: 16,
+      acKw: 5.1,
+      moduleMonitoring: true,
+    });
+    expect(f).toMatchObject({
+      stringTests: [],
+      inverters: [],
+      strings: [],
+      pairing: { word: "microinverters", installed: 16, strings: [] },
+      acceptedGridProfiles: [],
+      acRatingW: 5100,
+    });
   });
 
   it("an empty record has one blank line per string and unit, and completes nothing", () => {
@@ -79,12 +124,20 @@ describe("commissioning facts from the design", () => {
     [15.4, "pass"],
     [40, "fail"],
   ])("string A read at %s V with the array shut down → %s", (measuredV, status) => {
-    const result = checkCommissioning(toCommissioningRecord(facts, readingsWith([{ id: "A", measuredV }]))).find((r) => r.id === "string-shutdown:A");
+    const result = checkCommissioning(toCommissioningRecord(facts, readingsWith([{ id: "A", measuredV }]))).find(
+      (r) => r.id === "string-shutdown:A",
+    );
     expect(result?.status).toBe(status);
   });
 
   it("keeps readings of strings that still exist after a design change and asks for new ones", () => {
-    const record = toCommissioningRecord(facts, readingsWith([{ id: "A", measuredV: 15.2, vocV: 520 }, { id: "Z", measuredV: 9 }]));
+    const record = toCommissioningRecord(
+      facts,
+      readingsWith([
+        { id: "A", measuredV: 15.2, vocV: 520 },
+        { id: "Z", measuredV: 9 },
+      ]),
+    );
     expect(record.strings.map((s) => [s.id, s.measuredV])).toEqual([
       ["A", 15.2],
       ["B", null],

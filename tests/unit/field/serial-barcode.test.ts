@@ -1,4 +1,12 @@
-import { BarcodeFormat, BinaryBitmap, DecodeHintType, HybridBinarizer, MultiFormatReader, QRCodeWriter, RGBLuminanceSource } from "@zxing/library";
+import {
+  BarcodeFormat,
+  BinaryBitmap,
+  DecodeHintType,
+  HybridBinarizer,
+  MultiFormatReader,
+  QRCodeWriter,
+  RGBLuminanceSource,
+} from "@zxing/library";
 import { describe, expect, test } from "vitest";
 import { SERIAL_BARCODE_FORMATS, serialFromBarcode } from "@/lib/field/serial-barcode";
 
@@ -25,14 +33,17 @@ function qrLuminance(text: string) {
   const width = matrix.getWidth() * scale;
   const height = matrix.getHeight() * scale;
   const pixels = new Uint8ClampedArray(width * height);
-  for (let y = 0; y < height; y++) for (let x = 0; x < width; x++) pixels[y * width + x] = matrix.get(Math.floor(x / scale), Math.floor(y / scale)) ? 0 : 255;
+  for (let y = 0; y < height; y++)
+    for (let x = 0; x < width; x++) pixels[y * width + x] = matrix.get(Math.floor(x / scale), Math.floor(y / scale)) ? 0 : 255;
   return new RGBLuminanceSource(pixels, width, height);
 }
 
 describe("the barcode library reads a serial label with the scanner's formats", () => {
   test("a QR code holding a labelled serial decodes to the serial", () => {
     const reader = new MultiFormatReader();
-    reader.setHints(new Map<DecodeHintType, unknown>([[DecodeHintType.POSSIBLE_FORMATS, SERIAL_BARCODE_FORMATS.map((name) => BarcodeFormat[name])]]));
+    reader.setHints(
+      new Map<DecodeHintType, unknown>([[DecodeHintType.POSSIBLE_FORMATS, SERIAL_BARCODE_FORMATS.map((name) => BarcodeFormat[name])]]),
+    );
     const result = reader.decode(new BinaryBitmap(new HybridBinarizer(qrLuminance("S/N: QN0730411"))));
     expect(result.getBarcodeFormat()).toBe(BarcodeFormat.QR_CODE);
     expect(serialFromBarcode(result.getText())).toBe("QN0730411");

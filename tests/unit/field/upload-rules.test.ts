@@ -24,7 +24,11 @@ test("the size message names the limit", () => {
 
 describe("who may remove an upload", () => {
   const ORG = "org-1";
-  const person = (id: string, role: "admin" | "coordinator" | "installer", extra: { organizationId?: string; apiTokenId?: string } = {}) => ({ id, role, organizationId: extra.organizationId ?? ORG, ...(extra.apiTokenId ? { apiTokenId: extra.apiTokenId } : {}) });
+  const person = (
+    id: string,
+    role: "admin" | "coordinator" | "installer",
+    extra: { organizationId?: string; apiTokenId?: string } = {},
+  ) => ({ id, role, organizationId: extra.organizationId ?? ORG, ...(extra.apiTokenId ? { apiTokenId: extra.apiTokenId } : {}) });
   const project = (stage: Stage = "installed") => ({ organizationId: ORG, installerId: "crew", stage });
   const CREW = person("crew", "installer");
   const OTHER_CREW = person("other-crew", "installer");

@@ -29,5 +29,6 @@ describe("sameOriginReturnPath", () => {
     42,
   ])("refuses %s", (given) => expect(sameOriginReturnPath(given, APP)).toBe("/dashboard"));
 
-  test("takes the first of repeated parameters", () => expect(sameOriginReturnPath(["/settings", "//evil.example"], APP)).toBe("/settings"));
+  test("takes the first of repeated parameters", () =>
+    expect(sameOriginReturnPath(["/settings", "//evil.example"], APP)).toBe("/settings"));
 });

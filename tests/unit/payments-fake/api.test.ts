@@ -67,10 +67,22 @@ describe("checkout sessions", () => {
     const cases: [Partial<Stripe.Checkout.SessionCreateParams>, string][] = [
       [{ mode: "subscription" }, "mode"],
       [{ line_items: [] }, "line_items"],
-      [{ line_items: [{ quantity: 1, price_data: { currency: "usd", unit_amount: -5, product_data: { name: "x" } } }] }, "line_items[0][price_data][unit_amount]"],
-      [{ line_items: [{ quantity: 0, price_data: { currency: "usd", unit_amount: 500, product_data: { name: "x" } } }] }, "line_items[0][quantity]"],
-      [{ line_items: [{ quantity: 1, price_data: { currency: "eur", unit_amount: 500, product_data: { name: "x" } } }] }, "line_items[0][price_data][currency]"],
-      [{ line_items: [{ quantity: 1, price_data: { currency: "usd", unit_amount: 500, product_data: { name: "" } } }] }, "line_items[0][price_data][product_data][name]"],
+      [
+        { line_items: [{ quantity: 1, price_data: { currency: "usd", unit_amount: -5, product_data: { name: "x" } } }] },
+        "line_items[0][price_data][unit_amount]",
+      ],
+      [
+        { line_items: [{ quantity: 0, price_data: { currency: "usd", unit_amount: 500, product_data: { name: "x" } } }] },
+        "line_items[0][quantity]",
+      ],
+      [
+        { line_items: [{ quantity: 1, price_data: { currency: "eur", unit_amount: 500, product_data: { name: "x" } } }] },
+        "line_items[0][price_data][currency]",
+      ],
+      [
+        { line_items: [{ quantity: 1, price_data: { currency: "usd", unit_amount: 500, product_data: { name: "" } } }] },
+        "line_items[0][price_data][product_data][name]",
+      ],
       [{ line_items: [{ quantity: 1, price_data: { currency: "usd", unit_amount: 20, product_data: { name: "Tiny" } } }] }, "line_items"],
       [{ success_url: "not a url" }, "success_url"],
       [{ customer_email: "nobody" }, "customer_email"],

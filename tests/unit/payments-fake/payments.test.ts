@@ -67,7 +67,11 @@ describe("the succeeding test card", () => {
     expect(types).toEqual(expect.arrayContaining(["payment_intent.succeeded", "charge.succeeded", "checkout.session.completed"]));
     const completed = eventsFor([session.id]).find((e) => e.type === "checkout.session.completed")!;
     const completedSession = completed.data.object as Stripe.Checkout.Session;
-    expect(completedSession).toMatchObject({ payment_status: "paid", payment_intent: intent.id, metadata: { projectId: "fernhollow-7", purpose: "permit-fee" } });
+    expect(completedSession).toMatchObject({
+      payment_status: "paid",
+      payment_intent: intent.id,
+      metadata: { projectId: "fernhollow-7", purpose: "permit-fee" },
+    });
     expect(completed).toMatchObject({ object: "event", livemode: false, request: { id: null, idempotency_key: null } });
     expect(completed.id).toMatch(/^evt_/);
   });
@@ -255,7 +259,9 @@ describe("the hosted pay page", () => {
 
   it("escapes text that comes from the app", async () => {
     const session = await permitFeeSession(h.stripe, {
-      line_items: [{ quantity: 1, price_data: { currency: "usd", unit_amount: 5_000, product_data: { name: "<script>alert(1)</script>" } } }],
+      line_items: [
+        { quantity: 1, price_data: { currency: "usd", unit_amount: 5_000, product_data: { name: "<script>alert(1)</script>" } } },
+      ],
     });
     const html = await (await fetch(session.url!)).text();
     expect(html).not.toContain("<script>alert(1)</script>");

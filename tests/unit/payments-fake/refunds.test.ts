@@ -19,7 +19,11 @@ async function paidIntent() {
 describe("refunds", () => {
   it("refunds the whole remaining amount by default and marks the charge refunded", async () => {
     const { intentId, chargeId } = await paidIntent();
-    const refund = await h.stripe.refunds.create({ payment_intent: intentId, reason: "requested_by_customer", metadata: { ticket: "QM-118" } });
+    const refund = await h.stripe.refunds.create({
+      payment_intent: intentId,
+      reason: "requested_by_customer",
+      metadata: { ticket: "QM-118" },
+    });
     expect(refund).toMatchObject({
       object: "refund",
       status: "succeeded",
@@ -38,10 +42,13 @@ describe("refunds", () => {
 
     await h.receiver!.waitFor(() => h.receiver!.types().includes("refund.created"), "refund.created");
     await h.receiver!.waitFor(
-      () => h.receiver!.deliveries.some((d) => d.event.type === "charge.refunded" && (d.event.data.object as Stripe.Charge).id === chargeId),
+      () =>
+        h.receiver!.deliveries.some((d) => d.event.type === "charge.refunded" && (d.event.data.object as Stripe.Charge).id === chargeId),
       "charge.refunded",
     );
-    const refunded = h.receiver!.deliveries.find((d) => d.event.type === "charge.refunded" && (d.event.data.object as Stripe.Charge).id === chargeId)!;
+    const refunded = h.receiver!.deliveries.find(
+      (d) => d.event.type === "charge.refunded" && (d.event.data.object as Stripe.Charge).id === chargeId,
+    )!;
     expect(refunded.event.data.object).toMatchObject({ refunded: true, amount_refunded: PERMIT_FEE_TOTAL });
     expect(refunded.event.data.previous_attributes).toEqual({ amount_refunded: 0, refunded: false });
     // Events caused by an API call name that call.
@@ -54,7 +61,9 @@ describe("refunds", () => {
     expect(first.amount).toBe(5_000);
     expect(await h.stripe.charges.retrieve(chargeId)).toMatchObject({ amount_refunded: 5_000, refunded: false });
 
-    const tooMuch = (await h.stripe.refunds.create({ charge: chargeId, amount: PERMIT_FEE_TOTAL }).catch((e: unknown) => e)) as Stripe.errors.StripeError;
+    const tooMuch = (await h.stripe.refunds
+      .create({ charge: chargeId, amount: PERMIT_FEE_TOTAL })
+      .catch((e: unknown) => e)) as Stripe.errors.StripeError;
     expect(tooMuch).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
     expect(tooMuch.statusCode).toBe(400);
     expect(tooMuch.param).toBe("amount");
@@ -64,7 +73,9 @@ describe("refunds", () => {
     expect(rest.amount).toBe(PERMIT_FEE_TOTAL - 5_000);
     expect(await h.stripe.charges.retrieve(chargeId)).toMatchObject({ amount_refunded: PERMIT_FEE_TOTAL, refunded: true });
 
-    const nothingLeft = (await h.stripe.refunds.create({ payment_intent: intentId, amount: 1 }).catch((e: unknown) => e)) as Stripe.errors.StripeError;
+    const nothingLeft = (await h.stripe.refunds
+      .create({ payment_intent: intentId, amount: 1 })
+      .catch((e: unknown) => e)) as Stripe.errors.StripeError;
     expect(nothingLeft.statusCode).toBe(400);
     expect(nothingLeft.code).toBe("charge_already_refunded");
   });
@@ -72,7 +83,9 @@ describe("refunds", () => {
   it("refuses refunds of unpaid or unknown payments and bad reasons", async () => {
     const session = await permitFeeSession(h.stripe);
     const { body } = await payWith(h.fake.url, session.id, FAKE_TEST_CARDS.declined);
-    const unpaid = (await h.stripe.refunds.create({ payment_intent: body.payment_intent.id }).catch((e: unknown) => e)) as Stripe.errors.StripeError;
+    const unpaid = (await h.stripe.refunds
+      .create({ payment_intent: body.payment_intent.id })
+      .catch((e: unknown) => e)) as Stripe.errors.StripeError;
     expect(unpaid.statusCode).toBe(400);
     expect(unpaid.param).toBe("payment_intent");
 

@@ -122,7 +122,9 @@ describe("webhook delivery", () => {
     await setWebhooks(h.fake.url, { paused: false });
     await h.receiver!.waitFor(() => h.receiver!.deliveries.length === held.length, "all held deliveries");
     const intentId = declined.body.payment_intent.id;
-    const intentTypes = h.receiver!.deliveries.filter((d) => (d.event.data.object as { id: string }).id === intentId).map((d) => d.event.type);
+    const intentTypes = h
+      .receiver!.deliveries.filter((d) => (d.event.data.object as { id: string }).id === intentId)
+      .map((d) => d.event.type);
     expect(intentTypes).toEqual(["payment_intent.created", "payment_intent.payment_failed", "payment_intent.succeeded"]);
   });
 

@@ -3,11 +3,15 @@ import { newDesignDraft } from "@/lib/design/defaults";
 import { DesignDraft, DesignInput } from "@/lib/schemas/design";
 import { completeDraft } from "../design/fixtures";
 
-const messages = (draft: unknown) => Object.fromEntries((DesignInput.safeParse(draft).error?.issues ?? []).map((i) => [i.path.join("."), i.message]));
+const messages = (draft: unknown) =>
+  Object.fromEntries((DesignInput.safeParse(draft).error?.issues ?? []).map((i) => [i.path.join("."), i.message]));
 
 describe("DesignDraft", () => {
   it("keeps half-typed input, blanks and bad numbers alike", () => {
-    const draft = { ...newDesignDraft({ serviceVoltageV: null, servicePhases: null, busbarA: null, mainBreakerA: null }), service: { busbarA: "two hundred" } };
+    const draft = {
+      ...newDesignDraft({ serviceVoltageV: null, servicePhases: null, busbarA: null, mainBreakerA: null }),
+      service: { busbarA: "two hundred" },
+    };
     expect(DesignDraft.parse(draft)).toMatchObject({ service: { busbarA: "two hundred" } });
   });
 
@@ -28,9 +32,17 @@ describe("DesignInput", () => {
   it.each([
     [(d: ReturnType<typeof completeDraft>) => (d.service.busbarA = ""), "service.busbarA", "Enter the busbar rating"],
     [(d: ReturnType<typeof completeDraft>) => (d.service.pvBreakerA = "forty"), "service.pvBreakerA", "PV breaker must be a number"],
-    [(d: ReturnType<typeof completeDraft>) => (d.array.strings[0].modulesInSeries = "10.5"), "array.strings.0.modulesInSeries", "Modules in series must be a whole number"],
+    [
+      (d: ReturnType<typeof completeDraft>) => (d.array.strings[0].modulesInSeries = "10.5"),
+      "array.strings.0.modulesInSeries",
+      "Modules in series must be a whole number",
+    ],
     [(d: ReturnType<typeof completeDraft>) => (d.runs[0].lengthFt = "-3"), "runs.0.lengthFt", "Length must be between 1 and 2000 ft"],
-    [(d: ReturnType<typeof completeDraft>) => (d.service.otherBreakersA = "20, twenty"), "service.otherBreakersA", "List the other breakers in whole amperes separated by commas, e.g. 20, 20, 30"],
+    [
+      (d: ReturnType<typeof completeDraft>) => (d.service.otherBreakersA = "20, twenty"),
+      "service.otherBreakersA",
+      "List the other breakers in whole amperes separated by commas, e.g. 20, 20, 30",
+    ],
     [(d: ReturnType<typeof completeDraft>) => (d.equipment.moduleId = ""), "equipment.moduleId", "Choose a PV module"],
   ])("gives a readable message (%#)", (change, path, message) => {
     const draft = completeDraft();

@@ -1,20 +1,52 @@
 import { describe, expect, it } from "vitest";
-import { DeviceSpecs, EquipmentInput, EquipmentListQuery, InverterSpecs, ModuleSpecs, TempCoefficientSchema, UpdateEquipmentInput } from "@/lib/schemas/equipment";
+import {
+  DeviceSpecs,
+  EquipmentInput,
+  EquipmentListQuery,
+  InverterSpecs,
+  ModuleSpecs,
+  TempCoefficientSchema,
+  UpdateEquipmentInput,
+} from "@/lib/schemas/equipment";
 
 type Parsed = { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } };
 const messages = (result: Parsed) => Object.fromEntries((result.error?.issues ?? []).map((i) => [i.path.join("."), i.message]));
 
 // Figures of an invented 405 W module, as a form sends them (strings).
 const moduleForm = {
-  powerW: "405", vocV: "37.2", vmpV: "31.0", iscA: "13.85", impA: "13.07",
-  vocTempCoeff: { value: "-0.27", unit: "%/C" }, pmaxTempCoeffPctPerC: "-0.34", maxSeriesFuseA: "", lengthIn: "67.8", widthIn: "44.6", weightLb: "46.3",
+  powerW: "405",
+  vocV: "37.2",
+  vmpV: "31.0",
+  iscA: "13.85",
+  impA: "13.07",
+  vocTempCoeff: { value: "-0.27", unit: "%/C" },
+  pmaxTempCoeffPctPerC: "-0.34",
+  maxSeriesFuseA: "",
+  lengthIn: "67.8",
+  widthIn: "44.6",
+  weightLb: "46.3",
 };
-const stringInverter = { inverterKind: "string", acPowerW: 7600, acOutputCurrentA: 32, acVoltageV: 240, phase: 1, maxDcInputV: 600, mpptMinV: 200, mpptMaxV: 480 };
+const stringInverter = {
+  inverterKind: "string",
+  acPowerW: 7600,
+  acOutputCurrentA: 32,
+  acVoltageV: 240,
+  phase: 1,
+  maxDcInputV: 600,
+  mpptMinV: 200,
+  mpptMaxV: 480,
+};
 
 describe("ModuleSpecs", () => {
   it("turns form strings into numbers and blanks into absent values", () => {
     const out = ModuleSpecs.parse(moduleForm);
-    expect(out).toMatchObject({ powerW: 405, vocV: 37.2, vmpV: 31, vocTempCoeff: { value: -0.27, unit: "%/C" }, pmaxTempCoeffPctPerC: -0.34 });
+    expect(out).toMatchObject({
+      powerW: 405,
+      vocV: 37.2,
+      vmpV: 31,
+      vocTempCoeff: { value: -0.27, unit: "%/C" },
+      pmaxTempCoeffPctPerC: -0.34,
+    });
     expect(out.maxSeriesFuseA).toBeUndefined();
   });
 
@@ -29,8 +61,16 @@ describe("ModuleSpecs", () => {
     [{ vmpV: "38" }, "vmpV", "Vmp must be lower than Voc"],
     [{ impA: "14.2" }, "impA", "Imp must be lower than Isc"],
     [{ powerW: "450" }, "powerW", "Pmax should be close to Vmp × Imp; check the three values"],
-    [{ vocTempCoeff: { value: "0.27", unit: "%/C" } }, "vocTempCoeff.value", "Voc falls as modules warm, so the coefficient is negative (e.g. −0.27 %/°C)"],
-    [{ vocTempCoeff: { value: "-2.7", unit: "%/C" } }, "vocTempCoeff.value", "That coefficient is too large; check the unit (%/°C or V/°C)"],
+    [
+      { vocTempCoeff: { value: "0.27", unit: "%/C" } },
+      "vocTempCoeff.value",
+      "Voc falls as modules warm, so the coefficient is negative (e.g. −0.27 %/°C)",
+    ],
+    [
+      { vocTempCoeff: { value: "-2.7", unit: "%/C" } },
+      "vocTempCoeff.value",
+      "That coefficient is too large; check the unit (%/°C or V/°C)",
+    ],
     [{ vocTempCoeff: { value: "-0.1", unit: "K" } }, "vocTempCoeff.unit", "Choose %/°C or V/°C"],
     [{ pmaxTempCoeffPctPerC: "0.4" }, "pmaxTempCoeffPctPerC", "Pmax coefficient must be between -2 and 0 %/°C"],
     [{ weightLb: "Infinity" }, "weightLb", "Weight must be a number"],
@@ -52,8 +92,14 @@ describe("ModuleSpecs", () => {
 describe("InverterSpecs", () => {
   // What a plan review asks of the inverter's listing (690.11, 690.41(B), 690.15, 110.14(C)); blank stays unknown.
   it.each([
-    [{ dcArcFaultProtection: "yes", dcGroundFaultProtection: "no", terminalTempC: "75" }, { dcArcFaultProtection: true, dcGroundFaultProtection: false, terminalTempC: 75 }],
-    [{ dcArcFaultProtection: true, terminalTempC: 90 }, { dcArcFaultProtection: true, terminalTempC: 90 }],
+    [
+      { dcArcFaultProtection: "yes", dcGroundFaultProtection: "no", terminalTempC: "75" },
+      { dcArcFaultProtection: true, dcGroundFaultProtection: false, terminalTempC: 75 },
+    ],
+    [
+      { dcArcFaultProtection: true, terminalTempC: 90 },
+      { dcArcFaultProtection: true, terminalTempC: 90 },
+    ],
   ])("reads the listing answers %j", (patch, expected) => {
     expect(InverterSpecs.parse({ ...stringInverter, ...patch })).toMatchObject(expected);
   });
@@ -64,7 +110,9 @@ describe("InverterSpecs", () => {
   });
 
   it("refuses a terminal rating that is not 60, 75 or 90 °C", () => {
-    expect(messages(InverterSpecs.safeParse({ ...stringInverter, terminalTempC: "80" })).terminalTempC).toBe("Terminal ratings are 60, 75 or 90 °C");
+    expect(messages(InverterSpecs.safeParse({ ...stringInverter, terminalTempC: "80" })).terminalTempC).toBe(
+      "Terminal ratings are 60, 75 or 90 °C",
+    );
   });
 
   it("accepts a string inverter and reads 'false' as false", () => {
@@ -73,7 +121,17 @@ describe("InverterSpecs", () => {
   });
 
   it("accepts an inverter for optimizer strings with its regulated voltage and per-string limit", () => {
-    const out = InverterSpecs.parse({ ...stringInverter, acPowerW: 6000, acOutputCurrentA: 25, maxDcInputV: 480, mpptMinV: "", mpptMaxV: "", regulatedStringV: "380", maxStringPowerW: "5700", meetsRapidShutdownWithDevices: true });
+    const out = InverterSpecs.parse({
+      ...stringInverter,
+      acPowerW: 6000,
+      acOutputCurrentA: 25,
+      maxDcInputV: 480,
+      mpptMinV: "",
+      mpptMaxV: "",
+      regulatedStringV: "380",
+      maxStringPowerW: "5700",
+      meetsRapidShutdownWithDevices: true,
+    });
     expect(out).toMatchObject({ regulatedStringV: 380, maxStringPowerW: 5700, meetsRapidShutdownWithDevices: true });
   });
 
@@ -82,8 +140,16 @@ describe("InverterSpecs", () => {
     [{ phase: "2" }, "phase", "Phases must be 1 or 3"],
     [{ mpptMinV: 500, mpptMaxV: 400 }, "mpptMaxV", "The MPPT window maximum must be above its minimum"],
     [{ mpptMaxV: 650 }, "mpptMaxV", "The MPPT window cannot reach above the maximum DC input voltage"],
-    [{ regulatedStringV: 650, maxStringPowerW: 5700 }, "regulatedStringV", "The regulated string voltage cannot exceed the maximum DC input voltage"],
-    [{ regulatedStringV: 380 }, "maxStringPowerW", "Inverters for optimizer strings need both the regulated string voltage and the maximum power per string"],
+    [
+      { regulatedStringV: 650, maxStringPowerW: 5700 },
+      "regulatedStringV",
+      "The regulated string voltage cannot exceed the maximum DC input voltage",
+    ],
+    [
+      { regulatedStringV: 380 },
+      "maxStringPowerW",
+      "Inverters for optimizer strings need both the regulated string voltage and the maximum power per string",
+    ],
     // 7600 W at 240 V needs about 31.7 A; 3.2 A is a misplaced decimal point.
     [{ acOutputCurrentA: 3.2 }, "acOutputCurrentA", "The output current is too low for the rated power at the nominal voltage"],
     [{ mpptCount: "0" }, "mpptCount", "Number of MPPTs must be between 1 and 12"],
@@ -92,13 +158,26 @@ describe("InverterSpecs", () => {
   });
 
   it("counts √3 for three phases: 20 kW at 480 V fits through 24.1 A", () => {
-    expect(InverterSpecs.safeParse({ ...stringInverter, acPowerW: 20_000, acVoltageV: 480, phase: 3, acOutputCurrentA: 24.1, maxDcInputV: 1000, mpptMaxV: 850 }).success).toBe(true);
+    expect(
+      InverterSpecs.safeParse({
+        ...stringInverter,
+        acPowerW: 20_000,
+        acVoltageV: 480,
+        phase: 3,
+        acOutputCurrentA: 24.1,
+        maxDcInputV: 1000,
+        mpptMaxV: 850,
+      }).success,
+    ).toBe(true);
   });
 });
 
 describe("DeviceSpecs", () => {
   it("accepts an optimizer with only the required maximum input voltage", () => {
-    expect(DeviceSpecs.parse({ deviceKind: "optimizer", maxInputV: "60", shutdownOutputV: "" })).toEqual({ deviceKind: "optimizer", maxInputV: 60 });
+    expect(DeviceSpecs.parse({ deviceKind: "optimizer", maxInputV: "60", shutdownOutputV: "" })).toEqual({
+      deviceKind: "optimizer",
+      maxInputV: 60,
+    });
   });
 
   it.each([
@@ -124,13 +203,23 @@ describe("EquipmentInput", () => {
   });
 
   it("names the kinds when the kind is unknown", () => {
-    expect(messages(EquipmentInput.safeParse({ kind: "battery", maker: "A", model: "B", specs: {} })).kind).toBe("Choose a kind: module, inverter, device");
+    expect(messages(EquipmentInput.safeParse({ kind: "battery", maker: "A", model: "B", specs: {} })).kind).toBe(
+      "Choose a kind: module, inverter, device",
+    );
   });
 
   it("keeps the item id beside the fields of an edit", () => {
-    const out = UpdateEquipmentInput.parse({ equipmentId: "6f1c1a3e-8d0e-4b7a-9a53-2f0d7f7c1b11", kind: "module", maker: "Larkspur", model: "LK-405", specs: moduleForm });
+    const out = UpdateEquipmentInput.parse({
+      equipmentId: "6f1c1a3e-8d0e-4b7a-9a53-2f0d7f7c1b11",
+      kind: "module",
+      maker: "Larkspur",
+      model: "LK-405",
+      specs: moduleForm,
+    });
     expect(out).toMatchObject({ equipmentId: "6f1c1a3e-8d0e-4b7a-9a53-2f0d7f7c1b11", kind: "module", listing: "" });
-    expect(messages(UpdateEquipmentInput.safeParse({ equipmentId: "x", kind: "module", maker: "A", model: "B", specs: moduleForm })).equipmentId).toBe("Unknown catalog item");
+    expect(
+      messages(UpdateEquipmentInput.safeParse({ equipmentId: "x", kind: "module", maker: "A", model: "B", specs: moduleForm })).equipmentId,
+    ).toBe("Unknown catalog item");
   });
 });
 

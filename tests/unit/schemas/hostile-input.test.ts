@@ -19,7 +19,21 @@ import { findUnstorableInput, isStorableText, MAX_INPUT_DEPTH, UNSTORABLE_TEXT_M
 
 // Every input schema meets hostile input: parsing answers success or a list of issues, never throws.
 // A throw inside a schema becomes a 500 in the route or action that parses it.
-const MODULES = { apiToken, commissioning, design, equipment, feeSchedule, organization, packet, payment, project, referenceData, shareLink, user, document };
+const MODULES = {
+  apiToken,
+  commissioning,
+  design,
+  equipment,
+  feeSchedule,
+  organization,
+  packet,
+  payment,
+  project,
+  referenceData,
+  shareLink,
+  user,
+  document,
+};
 const SCHEMAS = Object.entries(MODULES).flatMap(([module, exports]) =>
   Object.entries(exports)
     .filter(([, value]) => value instanceof z.ZodType)
@@ -29,7 +43,21 @@ const SCHEMAS = Object.entries(MODULES).flatMap(([module, exports]) =>
 const PROTOTYPE_KEYS = ["constructor", "__proto__", "toString", "valueOf", "hasOwnProperty", "prototype"];
 const hostileString = fc.oneof(
   fc.string(),
-  fc.constantFrom("\u0000", "a\u0000b", "\ud800", "x\udfffy", "", " ", "NaN", "Infinity", "-0", "1e400", "null", "<script>", "x".repeat(100_000)),
+  fc.constantFrom(
+    "\u0000",
+    "a\u0000b",
+    "\ud800",
+    "x\udfffy",
+    "",
+    " ",
+    "NaN",
+    "Infinity",
+    "-0",
+    "1e400",
+    "null",
+    "<script>",
+    "x".repeat(100_000),
+  ),
 );
 const hostileNumber = fc.oneof(fc.double(), fc.constantFrom(Number.NaN, Infinity, -Infinity, -0, 1e308, Number.MAX_SAFE_INTEGER + 2));
 const leaf = fc.oneof(hostileString, hostileNumber, fc.boolean(), fc.constant(null), fc.constant(undefined));
@@ -77,7 +105,10 @@ describe("input schemas answer hostile input with issues, never a throw", () => 
   });
 
   test.each(SCHEMAS)("$name: generated hostile values", ({ schema }) => {
-    fc.assert(fc.property(hostile, (input) => parsesWithoutThrowing(schema, input)), { numRuns: 300, seed: 20261205 });
+    fc.assert(
+      fc.property(hostile, (input) => parsesWithoutThrowing(schema, input)),
+      { numRuns: 300, seed: 20261205 },
+    );
   });
 });
 
@@ -89,7 +120,13 @@ describe("text PostgreSQL cannot store is a field error, not a server error", ()
 
   test.each(unstorable)("refuses %j", (text) => {
     expect(isStorableText(text)).toBe(false);
-    const result = project.ProjectInput.safeParse({ customerName: text, street: "44 Cinder Lane", city: "Testville", state: "CO", postalCode: "80001" });
+    const result = project.ProjectInput.safeParse({
+      customerName: text,
+      street: "44 Cinder Lane",
+      city: "Testville",
+      state: "CO",
+      postalCode: "80001",
+    });
     expect(result.success).toBe(false);
     expect(result.error!.issues.find((i) => i.path[0] === "customerName")?.message).toBe(UNSTORABLE_TEXT_MESSAGE);
   });
@@ -112,7 +149,12 @@ describe("text PostgreSQL cannot store is a field error, not a server error", ()
 });
 
 test("every input schema builds its strings on safeString, so none lets unstorable text through", () => {
-  const files = [...readdirSync("lib/schemas").filter((f) => f.endsWith(".ts") && f !== "fields.ts").map((f) => `lib/schemas/${f}`), "lib/design/document.ts"];
+  const files = [
+    ...readdirSync("lib/schemas")
+      .filter((f) => f.endsWith(".ts") && f !== "fields.ts")
+      .map((f) => `lib/schemas/${f}`),
+    "lib/design/document.ts",
+  ];
   const offenders = files.filter((file) => /\bz\s*\.\s*string\s*\(/.test(readFileSync(file, "utf8")));
   expect(offenders).toEqual([]);
 });

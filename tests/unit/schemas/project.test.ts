@@ -7,8 +7,26 @@ const messages = (result: { success: boolean; error?: { issues: { path: Property
 
 describe("ProjectInput", () => {
   it("turns empty form fields into nulls and numeric strings into numbers", () => {
-    const out = ProjectInput.parse({ ...base, customerEmail: "", customerPhone: "", jurisdictionId: "", mainBreakerA: "200", busbarA: "225", serviceVoltageV: "240", servicePhases: "1" });
-    expect(out).toMatchObject({ state: "CO", customerEmail: null, customerPhone: null, jurisdictionId: null, mainBreakerA: 200, busbarA: 225, serviceVoltageV: 240, servicePhases: 1 });
+    const out = ProjectInput.parse({
+      ...base,
+      customerEmail: "",
+      customerPhone: "",
+      jurisdictionId: "",
+      mainBreakerA: "200",
+      busbarA: "225",
+      serviceVoltageV: "240",
+      servicePhases: "1",
+    });
+    expect(out).toMatchObject({
+      state: "CO",
+      customerEmail: null,
+      customerPhone: null,
+      jurisdictionId: null,
+      mainBreakerA: 200,
+      busbarA: 225,
+      serviceVoltageV: 240,
+      servicePhases: 1,
+    });
   });
 
   it.each([

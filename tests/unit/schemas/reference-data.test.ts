@@ -4,11 +4,28 @@ import { JurisdictionInput, UtilityInput } from "@/lib/schemas/reference-data";
 type Parsed = { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } };
 const messages = (result: Parsed) => Object.fromEntries((result.error?.issues ?? []).map((i) => [i.path.join("."), i.message]));
 
-const jurisdiction = { name: "Town of Fenmoor Permits", state: "co", necEdition: "2020", recordLowTempC: "-21", highDesignTempC: "33", notes: "" };
+const jurisdiction = {
+  name: "Town of Fenmoor Permits",
+  state: "co",
+  necEdition: "2020",
+  recordLowTempC: "-21",
+  highDesignTempC: "33",
+  notes: "",
+};
 
 describe("JurisdictionInput", () => {
   it("reads form strings", () => {
-    expect(JurisdictionInput.parse(jurisdiction)).toEqual({ name: "Town of Fenmoor Permits", state: "CO", necEdition: 2020, recordLowTempC: -21, highDesignTempC: 33, reviewDays: 10, permitValidDays: 180, requiredInspections: ["final"], notes: "" });
+    expect(JurisdictionInput.parse(jurisdiction)).toEqual({
+      name: "Town of Fenmoor Permits",
+      state: "CO",
+      necEdition: 2020,
+      recordLowTempC: -21,
+      highDesignTempC: 33,
+      reviewDays: 10,
+      permitValidDays: 180,
+      requiredInspections: ["final"],
+      notes: "",
+    });
   });
 
   it.each([
@@ -29,21 +46,38 @@ describe("JurisdictionInput", () => {
 describe("UtilityInput", () => {
   it("takes service voltages one per line from a form and as a list from the API", () => {
     const fromForm = UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: "120/240 V split-phase\n\n 120/208 V three-phase \n" });
-    expect(fromForm).toEqual({ name: "Fenmoor Power", serviceVoltages: ["120/240 V split-phase", "120/208 V three-phase"], acceptedGridProfiles: [], reviewDays: 15, requiredInspections: [], notes: "" });
-    expect(UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: ["120/240 V"], acceptedGridProfiles: ["IEEE 1547-2018 Category B"] }).acceptedGridProfiles).toEqual(["IEEE 1547-2018 Category B"]);
+    expect(fromForm).toEqual({
+      name: "Fenmoor Power",
+      serviceVoltages: ["120/240 V split-phase", "120/208 V three-phase"],
+      acceptedGridProfiles: [],
+      reviewDays: 15,
+      requiredInspections: [],
+      notes: "",
+    });
+    expect(
+      UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: ["120/240 V"], acceptedGridProfiles: ["IEEE 1547-2018 Category B"] })
+        .acceptedGridProfiles,
+    ).toEqual(["IEEE 1547-2018 Category B"]);
   });
 
   it("reads the required visits from ticked boxes: none ticked is none, left out is the usual", () => {
     const base = { name: "Fenmoor Power", serviceVoltages: "120/240 V" };
     expect(UtilityInput.parse({ ...base, requiredInspections: false }).requiredInspections).toEqual([]);
     expect(UtilityInput.parse({ ...base, requiredInspections: "meter_set" }).requiredInspections).toEqual(["meter_set"]);
-    expect(UtilityInput.parse({ ...base, requiredInspections: ["witness_test", "meter_set", "meter_set"] }).requiredInspections).toEqual(["witness_test", "meter_set"]);
+    expect(UtilityInput.parse({ ...base, requiredInspections: ["witness_test", "meter_set", "meter_set"] }).requiredInspections).toEqual([
+      "witness_test",
+      "meter_set",
+    ]);
     expect(JurisdictionInput.parse({ ...jurisdiction, requiredInspections: false }).requiredInspections).toEqual([]);
     expect(JurisdictionInput.parse({ ...jurisdiction, reviewDays: "21" }).reviewDays).toBe(21);
   });
 
   it("takes accepted grid profiles one per line from a form, blank lines and repeats dropped", () => {
-    const parsed = UtilityInput.parse({ name: "Fenmoor Power", serviceVoltages: "120/240 V", acceptedGridProfiles: " IEEE 1547-2018 Category B \n\nRule 21, volt-var on\nIEEE 1547-2018 Category B" });
+    const parsed = UtilityInput.parse({
+      name: "Fenmoor Power",
+      serviceVoltages: "120/240 V",
+      acceptedGridProfiles: " IEEE 1547-2018 Category B \n\nRule 21, volt-var on\nIEEE 1547-2018 Category B",
+    });
     expect(parsed.acceptedGridProfiles).toEqual(["IEEE 1547-2018 Category B", "Rule 21, volt-var on"]);
   });
 

@@ -16,7 +16,10 @@ test.skipIf(!asRoot)("a user without root is told which apt-get line to run, and
   copyFileSync(path.resolve("scripts/bootstrap.mjs"), copy);
   chmodSync(copy, 0o644);
   const script = `import { aptInstall } from ${JSON.stringify(copy)}; aptInstall(["postgresql"], "PostgreSQL's server (initdb, pg_ctl) is not installed.");`;
-  const result = spawnSync("runuser", ["-u", "nobody", "--", process.execPath, "--input-type=module", "-e", script], { encoding: "utf8", cwd: folder });
+  const result = spawnSync("runuser", ["-u", "nobody", "--", process.execPath, "--input-type=module", "-e", script], {
+    encoding: "utf8",
+    cwd: folder,
+  });
   expect(result.status).toBe(1);
   expect(result.stderr).toContain("PostgreSQL's server (initdb, pg_ctl) is not installed.");
   expect(result.stderr).toContain("sudo apt-get update && sudo apt-get install -y postgresql");

@@ -2,7 +2,19 @@ import { describe, expect, test } from "vitest";
 import type { Design } from "@/lib/engineering";
 import { layoutSingleLine, type SldScene, type SldText } from "@/lib/sld";
 import { runTitle } from "@/lib/sld/conductor-label";
-import { manyRuns, manyStrings, microBranches, microFixture, microThroughBoxes, optimizerFixture, strayRun, stringFixture, supplySideFixture, throughJunctionBox, twoInverters } from "./sld-designs";
+import {
+  manyRuns,
+  manyStrings,
+  microBranches,
+  microFixture,
+  microThroughBoxes,
+  optimizerFixture,
+  strayRun,
+  stringFixture,
+  supplySideFixture,
+  throughJunctionBox,
+  twoInverters,
+} from "./sld-designs";
 
 const texts = (scene: SldScene) => scene.items.filter((i): i is SldText => i.kind === "text").map((t) => t.text);
 const moduleSymbols = (scene: SldScene) => scene.items.filter((i) => i.kind === "rect" && i.width === 22 && i.height === 16).length;
@@ -41,11 +53,27 @@ describe("single-line layout: what it says", () => {
     const scene = layoutSingleLine(stringFixture(), { necEdition: 2023 });
     const all = texts(scene);
     expect(scene.unit).toBe("pt");
-    expect(all).toEqual(expect.arrayContaining(["40 A PV breaker", "200 A", "busbar", "main", "× 11", "INVERTER", "RAPID SHUTDOWN INITIATOR", "AC DISCONNECT", "UTILITY METER", "kWh", "UTILITY GRID"]));
+    expect(all).toEqual(
+      expect.arrayContaining([
+        "40 A PV breaker",
+        "200 A",
+        "busbar",
+        "main",
+        "× 11",
+        "INVERTER",
+        "RAPID SHUTDOWN INITIATOR",
+        "AC DISCONNECT",
+        "UTILITY METER",
+        "kWh",
+        "UTILITY GRID",
+      ]),
+    );
     expect(all.filter((t) => t === "200 A")).toHaveLength(2); // busbar and main
     expect(all.filter((t) => t === "× 11")).toHaveLength(2);
     expect(all).toEqual(expect.arrayContaining(["String S1 to inverter, 62 ft", "2 × 10 AWG Cu PV wire", "free air; EGC 6 AWG Cu"]));
-    expect(all).toEqual(expect.arrayContaining(["Inverter to service panel, 28 ft", "2 × 8 AWG Cu THWN-2", "in 3/4 in EMT; EGC 10 AWG Cu"]));
+    expect(all).toEqual(
+      expect.arrayContaining(["Inverter to service panel, 28 ft", "2 × 8 AWG Cu THWN-2", "in 3/4 in EMT; EGC 10 AWG Cu"]),
+    );
     expect(all).toContain("Stavemoor SR-1 Shutdown Unit");
     expect(all).toContain("DC disconnect integral (dashed)");
     expect(all.join(" ")).toMatch(/NEC 2023/);
@@ -55,14 +83,39 @@ describe("single-line layout: what it says", () => {
 
   test("optimizer strings: the optimizer is named and the fixed string voltage shown", () => {
     const all = texts(layoutSingleLine(optimizerFixture()));
-    expect(all).toEqual(expect.arrayContaining(["× 10", "35 A PV breaker", "DC optimizer on each module:", "Calderby CB-P450 Optimizer", "Fixed string voltage 380 V"]));
+    expect(all).toEqual(
+      expect.arrayContaining([
+        "× 10",
+        "35 A PV breaker",
+        "DC optimizer on each module:",
+        "Calderby CB-P450 Optimizer",
+        "Fixed string voltage 380 V",
+      ]),
+    );
   });
 
   test("microinverters: branch circuits with unit counts and breakers meet in a combiner", () => {
     const all = texts(layoutSingleLine(microFixture()));
-    expect(all).toEqual(expect.arrayContaining(["Branch 1: 8 microinverters", "Branch 2: 8 microinverters", "× 8", "AC COMBINER", "Joins 2 branch circuits", "30 A PV breaker", "150 A"]));
+    expect(all).toEqual(
+      expect.arrayContaining([
+        "Branch 1: 8 microinverters",
+        "Branch 2: 8 microinverters",
+        "× 8",
+        "AC COMBINER",
+        "Joins 2 branch circuits",
+        "30 A PV breaker",
+        "150 A",
+      ]),
+    );
     expect(all.filter((t) => t === "20 A")).toHaveLength(2);
-    expect(all).toEqual(expect.arrayContaining(["Branch 1 on the roof, 35 ft, 20 A breaker", "2 × 12 AWG Cu THWN-2", "free air; EGC 12 AWG Cu", "2 × 10 AWG Cu THWN-2"]));
+    expect(all).toEqual(
+      expect.arrayContaining([
+        "Branch 1 on the roof, 35 ft, 20 A breaker",
+        "2 × 12 AWG Cu THWN-2",
+        "free air; EGC 12 AWG Cu",
+        "2 × 10 AWG Cu THWN-2",
+      ]),
+    );
     // The AC disconnect is the initiator; there is no separate one.
     expect(all).not.toContain("RAPID SHUTDOWN INITIATOR");
     expect(all).toContain("Also the rapid shutdown");
@@ -99,7 +152,9 @@ function numberedTitles(scene: SldScene): { number: string; title: string }[] {
     .filter((t) => /, \d+(\.\d)? ft/.test(t.text))
     .map((title) => {
       // drawRunLabel: tag centre 10 pt left of the words, its number 25.3 pt below the title's baseline.
-      const tag = all.find((t) => t.anchor === "middle" && Math.abs(t.x - (title.x - 10)) < 0.02 && Math.abs(t.y - (title.y + 25.3)) < 0.02);
+      const tag = all.find(
+        (t) => t.anchor === "middle" && Math.abs(t.x - (title.x - 10)) < 0.02 && Math.abs(t.y - (title.y + 25.3)) < 0.02,
+      );
       return { number: tag?.text ?? "", title: title.text };
     });
 }
@@ -131,10 +186,14 @@ describe("single-line layout: every run of the conductor schedule, numbered as t
     const scene = layoutSingleLine(throughJunctionBox());
     const all = texts(scene);
     expect(all.filter((t) => /^JB\d+$/.test(t))).toEqual(["JB1"]);
-    expect(all).toEqual(expect.arrayContaining(["Junction box to inverter, 48 ft", "4 × 10 AWG Cu THWN-2", "in 3/4 in EMT; EGC 10 AWG Cu"]));
+    expect(all).toEqual(
+      expect.arrayContaining(["Junction box to inverter, 48 ft", "4 × 10 AWG Cu THWN-2", "in 3/4 in EMT; EGC 10 AWG Cu"]),
+    );
     // The shared conduit carries two separate circuits: no junction dot joins the strings on the DC side.
     const inverterLeft = scene.items.find((i) => i.kind === "rect" && i.dash?.join() === "4,2.5")!;
-    const dots = scene.items.filter((i) => i.kind === "circle" && i.fill === "ink" && inverterLeft.kind === "rect" && i.cx < inverterLeft.x);
+    const dots = scene.items.filter(
+      (i) => i.kind === "circle" && i.fill === "ink" && inverterLeft.kind === "rect" && i.cx < inverterLeft.x,
+    );
     expect(dots).toEqual([]);
     expect(scene.items.filter((i) => i.kind === "path" && / A 4 4 /.test(i.d))).toHaveLength(1); // the raceway outline
   });
@@ -151,7 +210,9 @@ describe("single-line layout: every run of the conductor schedule, numbered as t
   });
 
   test("the notes explain the numbers and the boxes", () => {
-    expect(texts(layoutSingleLine(throughJunctionBox())).join(" ")).toMatch(/Circled numbers are the run numbers of the conductor schedule/);
+    expect(texts(layoutSingleLine(throughJunctionBox())).join(" ")).toMatch(
+      /Circled numbers are the run numbers of the conductor schedule/,
+    );
   });
 });
 

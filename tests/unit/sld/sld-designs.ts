@@ -20,11 +20,22 @@ const dcRun = (id: string, stringIds: string[], lengthFt: number): ConductorRun 
 
 /** n strings of `modules` on one inverter; the fifth and sixth share a run, as paralleled strings do. */
 export function manyStrings(base: Design, n: number, modules = 14): Design {
-  const strings = Array.from({ length: n }, (_, i) => ({ id: `S${i + 1}`, inverterId: base.inverters[0].id, mpptIndex: (i % 2) + 1, modulesInSeries: modules }));
+  const strings = Array.from({ length: n }, (_, i) => ({
+    id: `S${i + 1}`,
+    inverterId: base.inverters[0].id,
+    mpptIndex: (i % 2) + 1,
+    modulesInSeries: modules,
+  }));
   const ids = strings.map((s) => s.id);
-  const groups = n >= 6 ? [...ids.slice(0, 4).map((id) => [id]), ids.slice(4, 6), ...ids.slice(6).map((id) => [id])] : ids.map((id) => [id]);
+  const groups =
+    n >= 6 ? [...ids.slice(0, 4).map((id) => [id]), ids.slice(4, 6), ...ids.slice(6).map((id) => [id])] : ids.map((id) => [id]);
   const runs = groups.map((g, i) => dcRun(`dc-${i + 1}`, g, 40 + 5 * i));
-  return { ...base, strings, runs: [...runs, ...base.runs.filter((r) => r.circuit.kind === "ac-output")], roofPlanes: [{ ...base.roofPlanes[0], moduleCount: n * modules }] };
+  return {
+    ...base,
+    strings,
+    runs: [...runs, ...base.runs.filter((r) => r.circuit.kind === "ac-output")],
+    roofPlanes: [{ ...base.roofPlanes[0], moduleCount: n * modules }],
+  };
 }
 
 /** Microinverters on 1..n branch circuits of 7 units, joined in a combiner, one home run. */
@@ -35,7 +46,12 @@ export function microBranches(n: number): Design {
   const branch = base.runs[0];
   const home = base.runs[base.runs.length - 1];
   const runs: ConductorRun[] = [
-    ...inverters.map((inv, i) => ({ ...branch, id: `branch-${i + 1}`, label: `Branch ${i + 1} on the roof`, circuit: { kind: "ac-output" as const, sources: [{ inverterId: inv.id }] } })),
+    ...inverters.map((inv, i) => ({
+      ...branch,
+      id: `branch-${i + 1}`,
+      label: `Branch ${i + 1} on the roof`,
+      circuit: { kind: "ac-output" as const, sources: [{ inverterId: inv.id }] },
+    })),
     { ...home, circuit: { kind: "ac-output", sources: inverters.map((inv) => ({ inverterId: inv.id })) } },
   ];
   return { ...base, inverters, runs, roofPlanes: [{ ...base.roofPlanes[0], moduleCount: 7 * n }] };
@@ -51,12 +67,23 @@ export function twoInverters(): Design {
     { id: "S3", inverterId: "inv-2", mpptIndex: 1, modulesInSeries: 12 },
   ];
   const home = base.runs[base.runs.length - 1];
-  const output = (inverterId: string, n: number): ConductorRun => ({ ...home, id: `out-${n}`, label: `Inverter ${n} to combiner`, lengthFt: 6, circuit: { kind: "ac-output", sources: [{ inverterId }] } });
+  const output = (inverterId: string, n: number): ConductorRun => ({
+    ...home,
+    id: `out-${n}`,
+    label: `Inverter ${n} to combiner`,
+    lengthFt: 6,
+    circuit: { kind: "ac-output", sources: [{ inverterId }] },
+  });
   const runs: ConductorRun[] = [
     ...strings.map((s, i) => dcRun(`dc-${i + 1}`, [s.id], 50 + i)),
     output("inv-1", 1),
     output("inv-2", 2),
-    { ...home, label: "Combiner to service panel", conductor: { ...home.conductor, size: "4" }, circuit: { kind: "ac-output", sources: [{ inverterId: "inv-1" }, { inverterId: "inv-2" }] } },
+    {
+      ...home,
+      label: "Combiner to service panel",
+      conductor: { ...home.conductor, size: "4" },
+      circuit: { kind: "ac-output", sources: [{ inverterId: "inv-1" }, { inverterId: "inv-2" }] },
+    },
   ];
   return { ...base, inverters, strings, runs, roofPlanes: [{ ...base.roofPlanes[0], moduleCount: 34 }] };
 }
@@ -66,7 +93,14 @@ const conduitRun = (id: string, label: string, stringIds: string[], lengthFt: nu
   label,
   conductor: { size: "10", material: "Cu", insulationTempC: 90, insulation: "THWN-2" },
   roofClearanceIn: undefined,
-  raceway: { type: "EMT", tradeSize: "3/4", wires: [{ size: "10", count: 2 * stringIds.length }, { size: "10", count: 1 }] },
+  raceway: {
+    type: "EMT",
+    tradeSize: "3/4",
+    wires: [
+      { size: "10", count: 2 * stringIds.length },
+      { size: "10", count: 1 },
+    ],
+  },
 });
 
 /**
@@ -109,7 +143,14 @@ export function manyRuns(): Design {
 export function microThroughBoxes(): Design {
   const base = microBranches(2);
   const [b1, b2, home] = base.runs;
-  const onward = (run: ConductorRun, n: number): ConductorRun => ({ ...run, id: `${run.id}-on`, label: `Box to combiner, branch ${n}`, lengthFt: 30, ocpdA: undefined, roofClearanceIn: undefined });
+  const onward = (run: ConductorRun, n: number): ConductorRun => ({
+    ...run,
+    id: `${run.id}-on`,
+    label: `Box to combiner, branch ${n}`,
+    lengthFt: 30,
+    ocpdA: undefined,
+    roofClearanceIn: undefined,
+  });
   return { ...base, runs: [b1, b2, onward(b1, 1), onward(b2, 2), home] };
 }
 

@@ -44,7 +44,11 @@ const COLUMNS = [
       </div>
     ),
   }),
-  column.accessor("daysInStage", { id: "daysInStage", header: "Days in stage", cell: (c) => <span className="measure">{c.getValue()}</span> }),
+  column.accessor("daysInStage", {
+    id: "daysInStage",
+    header: "Days in stage",
+    cell: (c) => <span className="measure">{c.getValue()}</span>,
+  }),
   column.accessor((p) => p.jurisdiction?.name ?? "—", { id: "jurisdiction", header: "AHJ", enableSorting: false }),
   column.accessor((p) => p.utility?.name ?? "—", { id: "utility", header: "Utility", enableSorting: false }),
   column.accessor((p) => p.coordinator?.name ?? "—", { id: "coordinator", header: "Coordinator", enableSorting: false }),
@@ -103,7 +107,14 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
           <label className="label" htmlFor="project-search">
             Search
           </label>
-          <input id="project-search" type="search" className="input" placeholder="Customer, address or utility account number" value={search} onChange={(e) => setSearch(e.target.value)} />
+          <input
+            id="project-search"
+            type="search"
+            className="input"
+            placeholder="Customer, address or utility account number"
+            value={search}
+            onChange={(e) => setSearch(e.target.value)}
+          />
         </div>
         <div>
           <label className="label" htmlFor="stage-filter">
@@ -127,13 +138,20 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
           </select>
         </div>
         {canCreate ? (
-          <Link href="/projects/new" className="rounded bg-copper px-4 py-2 text-sm font-medium text-white no-underline hover:bg-copper-dark hover:no-underline">
+          <Link
+            href="/projects/new"
+            className="rounded bg-copper px-4 py-2 text-sm font-medium text-white no-underline hover:bg-copper-dark hover:no-underline"
+          >
             New project
           </Link>
         ) : null}
       </div>
 
-      {error ? <p role="alert" className="text-sm text-result-fail">{error.message}</p> : null}
+      {error ? (
+        <p role="alert" className="text-sm text-result-fail">
+          {error.message}
+        </p>
+      ) : null}
 
       {/* Phones get cards; the table needs a wider screen. */}
       <ul className="space-y-2 sm:hidden">
@@ -171,11 +189,21 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
                 {group.headers.map((header) => {
                   const sorted = header.column.getIsSorted();
                   return (
-                    <th key={header.id} className="px-3 py-2 font-medium" aria-sort={sorted ? (sorted === "asc" ? "ascending" : "descending") : undefined}>
+                    <th
+                      key={header.id}
+                      className="px-3 py-2 font-medium"
+                      aria-sort={sorted ? (sorted === "asc" ? "ascending" : "descending") : undefined}
+                    >
                       {header.column.getCanSort() ? (
-                        <button type="button" className="inline-flex items-center gap-1 uppercase" onClick={header.column.getToggleSortingHandler()}>
+                        <button
+                          type="button"
+                          className="inline-flex items-center gap-1 uppercase"
+                          onClick={header.column.getToggleSortingHandler()}
+                        >
                           {flexRender(header.column.columnDef.header, header.getContext())}
-                          <span aria-hidden className="text-copper">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}</span>
+                          <span aria-hidden className="text-copper">
+                            {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}
+                          </span>
                         </button>
                       ) : (
                         flexRender(header.column.columnDef.header, header.getContext())
@@ -210,13 +238,23 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
       <div className="flex items-center justify-between text-sm text-ink-soft">
         <span>{data ? `${data.total} project${data.total === 1 ? "" : "s"}` : isLoading ? "Loading…" : ""}</span>
         <div className="flex items-center gap-2">
-          <button type="button" className="rounded border border-paper-edge bg-white px-3 py-1 disabled:opacity-40" disabled={page <= 1} onClick={() => setPage((p) => p - 1)}>
+          <button
+            type="button"
+            className="rounded border border-paper-edge bg-white px-3 py-1 disabled:opacity-40"
+            disabled={page <= 1}
+            onClick={() => setPage((p) => p - 1)}
+          >
             Previous
           </button>
           <span className="measure">
             {data?.page ?? page} / {data?.pageCount ?? 1}
           </span>
-          <button type="button" className="rounded border border-paper-edge bg-white px-3 py-1 disabled:opacity-40" disabled={!data || page >= data.pageCount} onClick={() => setPage((p) => p + 1)}>
+          <button
+            type="button"
+            className="rounded border border-paper-edge bg-white px-3 py-1 disabled:opacity-40"
+            disabled={!data || page >= data.pageCount}
+            onClick={() => setPage((p) => p + 1)}
+          >
             Next
           </button>
         </div>

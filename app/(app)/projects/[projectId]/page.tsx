@@ -28,7 +28,11 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
 export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
-  const [timeline, design, field] = await Promise.all([listStageChanges({ viewer, projectId: project.id }), getDesignStatus({ viewer, projectId: project.id }), getFieldSummary({ viewer, projectId: project.id })]);
+  const [timeline, design, field] = await Promise.all([
+    listStageChanges({ viewer, projectId: project.id }),
+    getDesignStatus({ viewer, projectId: project.id }),
+    getFieldSummary({ viewer, projectId: project.id }),
+  ]);
   const amps = (v: number | null) => (v === null ? null : <span className="measure">{v} A</span>);
   return (
     <div className="space-y-6">
@@ -39,26 +43,44 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           <p className="text-ink-soft">{project.address}</p>
         </div>
         <div className="flex flex-wrap gap-2">
-        <Link href={`/projects/${project.id}/design`} className="rounded bg-copper px-4 py-2 text-sm font-medium text-white no-underline hover:bg-copper-dark hover:no-underline">
-          Design and review
-        </Link>
-        <Link href={`/projects/${project.id}/documents`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
-          Documents
-        </Link>
-        <Link href={`/projects/${project.id}/filings`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
-          Filings
-        </Link>
-        <Link href={`/projects/${project.id}/field`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
-          Field record
-        </Link>
-        <Link href={`/projects/${project.id}/fees`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
-          Fees
-        </Link>
-        {can(viewer, "project:edit") ? (
-          <Link href={`/projects/${project.id}/edit`} className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline">
-            Edit project
+          <Link
+            href={`/projects/${project.id}/design`}
+            className="rounded bg-copper px-4 py-2 text-sm font-medium text-white no-underline hover:bg-copper-dark hover:no-underline"
+          >
+            Design and review
           </Link>
-        ) : null}
+          <Link
+            href={`/projects/${project.id}/documents`}
+            className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline"
+          >
+            Documents
+          </Link>
+          <Link
+            href={`/projects/${project.id}/filings`}
+            className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline"
+          >
+            Filings
+          </Link>
+          <Link
+            href={`/projects/${project.id}/field`}
+            className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline"
+          >
+            Field record
+          </Link>
+          <Link
+            href={`/projects/${project.id}/fees`}
+            className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline"
+          >
+            Fees
+          </Link>
+          {can(viewer, "project:edit") ? (
+            <Link
+              href={`/projects/${project.id}/edit`}
+              className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline"
+            >
+              Edit project
+            </Link>
+          ) : null}
         </div>
       </div>
 
@@ -76,7 +98,8 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
               Waiting on <strong>{WAITING_PARTY_LABELS[project.waitingOn]}</strong>
               {project.waitingSince ? (
                 <>
-                  {" "}since <LocalTime iso={project.waitingSince} style="date" />
+                  {" "}
+                  since <LocalTime iso={project.waitingSince} style="date" />
                 </>
               ) : null}
             </>
@@ -112,15 +135,23 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         <h2 className="text-base">Field work</h2>
         <span className="text-sm text-ink-soft">
           Commissioning:{" "}
-          <strong>{field.status === "complete" ? (
+          <strong>
+            {field.status === "complete" ? (
               <>
-                complete{field.completedAt ? <> (<LocalTime iso={field.completedAt} style="date" />)</> : null}
+                complete
+                {field.completedAt ? (
+                  <>
+                    {" "}
+                    (<LocalTime iso={field.completedAt} style="date" />)
+                  </>
+                ) : null}
               </>
             ) : field.status === "open" ? (
               "started, not complete"
             ) : (
               "not started"
-            )}</strong>
+            )}
+          </strong>
         </span>
         <span className="text-sm text-ink-soft">
           Signed completion form: <strong>{field.signedForms ? "received" : "not yet"}</strong>
@@ -143,11 +174,19 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
             <Fact label="AHJ">{project.jurisdiction ? `${project.jurisdiction.name} (NEC ${project.jurisdiction.necEdition})` : null}</Fact>
             <Fact label="Utility">{project.utility?.name}</Fact>
             <Fact label="Utility account / meter">
-              {project.utilityAccountNumber || project.meterNumber ? <span className="measure">{[project.utilityAccountNumber, project.meterNumber].filter(Boolean).join(" / ")}</span> : null}
+              {project.utilityAccountNumber || project.meterNumber ? (
+                <span className="measure">{[project.utilityAccountNumber, project.meterNumber].filter(Boolean).join(" / ")}</span>
+              ) : null}
             </Fact>
             <Fact label="Main breaker">{amps(project.mainBreakerA)}</Fact>
             <Fact label="Busbar rating">{amps(project.busbarA)}</Fact>
-            <Fact label="Service">{project.serviceVoltageV ? <span className="measure">{project.serviceVoltageV} V, {project.servicePhases === 3 ? "three" : "single"} phase</span> : null}</Fact>
+            <Fact label="Service">
+              {project.serviceVoltageV ? (
+                <span className="measure">
+                  {project.serviceVoltageV} V, {project.servicePhases === 3 ? "three" : "single"} phase
+                </span>
+              ) : null}
+            </Fact>
             <Fact label="Coordinator / installer">
               {project.coordinator?.name ?? "—"} / {project.installer?.name ?? "not assigned"}
             </Fact>
@@ -156,7 +195,9 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
 
         <section className="panel space-y-4" aria-labelledby="timeline-heading">
           <h2 id="timeline-heading">Stage timeline</h2>
-          {can(viewer, "project:change-stage", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }) ? <StageChangeForm changeStage={changeStageAction} key={project.stage} projectId={project.id} current={project.stage} /> : null}
+          {can(viewer, "project:change-stage", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }) ? (
+            <StageChangeForm changeStage={changeStageAction} key={project.stage} projectId={project.id} current={project.stage} />
+          ) : null}
           <StageTimeline entries={timeline} />
         </section>
       </div>

@@ -17,19 +17,46 @@ type Option = { id: string; name: string };
 export type ProjectFormOptions = { jurisdictions: Option[]; utilities: Option[]; coordinators: Option[]; installers: Option[] };
 
 const EMPTY: FormValues = {
-  customerName: "", customerEmail: "", customerPhone: "", street: "", city: "", state: "", postalCode: "",
-  jurisdictionId: "", utilityId: "", utilityAccountNumber: "", meterNumber: "",
-  mainBreakerA: "", busbarA: "", serviceVoltageV: "240", servicePhases: "1", coordinatorId: "", installerId: "",
+  customerName: "",
+  customerEmail: "",
+  customerPhone: "",
+  street: "",
+  city: "",
+  state: "",
+  postalCode: "",
+  jurisdictionId: "",
+  utilityId: "",
+  utilityAccountNumber: "",
+  meterNumber: "",
+  mainBreakerA: "",
+  busbarA: "",
+  serviceVoltageV: "240",
+  servicePhases: "1",
+  coordinatorId: "",
+  installerId: "",
 };
 
 /** `defaultCoordinatorId`: on a new project, the coordinator creating it looks after it unless they choose otherwise. */
 /** The page hands in the action that saves: creating a project or updating this one. */
 export type SaveProject = { create: typeof createProjectAction } | { update: typeof updateProjectAction; projectId: string };
 
-export function ProjectForm({ initial, options, defaultCoordinatorId = "", save }: { initial?: FormValues; options: ProjectFormOptions; defaultCoordinatorId?: string; save: SaveProject }) {
+export function ProjectForm({
+  initial,
+  options,
+  defaultCoordinatorId = "",
+  save,
+}: {
+  initial?: FormValues;
+  options: ProjectFormOptions;
+  defaultCoordinatorId?: string;
+  save: SaveProject;
+}) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
-  const form = useForm<FormValues, unknown, z.output<typeof ProjectInput>>({ resolver: zodResolver(ProjectInput), defaultValues: initial ?? { ...EMPTY, coordinatorId: defaultCoordinatorId } });
+  const form = useForm<FormValues, unknown, z.output<typeof ProjectInput>>({
+    resolver: zodResolver(ProjectInput),
+    defaultValues: initial ?? { ...EMPTY, coordinatorId: defaultCoordinatorId },
+  });
   const { errors, isSubmitting } = form.formState;
   const err = (name: keyof FormValues) => errors[name]?.message as string | undefined;
 

@@ -12,8 +12,14 @@ export default async function NewProjectPage() {
   return (
     <div className="mx-auto max-w-3xl space-y-4">
       <h1>New project</h1>
-      <p className="text-sm text-ink-soft">Start with the customer and the site; the design comes next. Anything not known yet can be filled in later.</p>
-      <ProjectForm save={{ create: createProjectAction }} options={options} defaultCoordinatorId={options.coordinators.some((c) => c.id === viewer.id) ? viewer.id : ""} />
+      <p className="text-sm text-ink-soft">
+        Start with the customer and the site; the design comes next. Anything not known yet can be filled in later.
+      </p>
+      <ProjectForm
+        save={{ create: createProjectAction }}
+        options={options}
+        defaultCoordinatorId={options.coordinators.some((c) => c.id === viewer.id) ? viewer.id : ""}
+      />
     </div>
   );
 }

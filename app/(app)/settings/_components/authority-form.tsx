@@ -17,10 +17,23 @@ type Save = (input: { kind: AuthorityKind; authorityId?: string; values: Values 
 const ROW_GRID: Record<string, string> = { "3": "sm:grid-cols-[2fr_5rem_1fr]", "2": "sm:grid-cols-2", "1": "" };
 
 /** Adds an authority (no id) or edits one; its fields come from the kind's declaration. The save action is passed in by the page. */
-export function AuthorityForm({ kind, authorityId, initial, save }: { kind: AuthorityKind; authorityId?: string; initial?: Values; save: Save }) {
+export function AuthorityForm({
+  kind,
+  authorityId,
+  initial,
+  save,
+}: {
+  kind: AuthorityKind;
+  authorityId?: string;
+  initial?: Values;
+  save: Save;
+}) {
   const spec = AUTHORITY_SPECS[kind];
   const router = useRouter();
-  const form = useForm<Values>({ resolver: zodResolver(spec.schema as never) as unknown as Resolver<Values>, defaultValues: initial ?? spec.empty });
+  const form = useForm<Values>({
+    resolver: zodResolver(spec.schema as never) as unknown as Resolver<Values>,
+    defaultValues: initial ?? spec.empty,
+  });
   const { errors, isSubmitting } = form.formState;
   const { submit, message } = useActionSubmit(
     form,

@@ -84,9 +84,20 @@ export async function AuthorityEditPage({ kind, authorityId }: { kind: Authority
       </p>
       <h1>{record.name}</h1>
       <section className="panel">
-        <AuthorityForm kind={kind} authorityId={record.id} initial={authorityFormValues(kind, record as unknown as Record<string, unknown>)} save={saveAuthorityAction} />
+        <AuthorityForm
+          kind={kind}
+          authorityId={record.id}
+          initial={authorityFormValues(kind, record as unknown as Record<string, unknown>)}
+          save={saveAuthorityAction}
+        />
       </section>
-      <FeeSchedulePanel authorityKind={kind} authorityId={record.id} authorityName={record.name} initialLines={feeLines} save={saveFeeScheduleAction} />
+      <FeeSchedulePanel
+        authorityKind={kind}
+        authorityId={record.id}
+        authorityName={record.name}
+        initialLines={feeLines}
+        save={saveFeeScheduleAction}
+      />
     </div>
   );
 }

@@ -11,14 +11,20 @@ export const createEquipmentAction = defineAction({ schema: EquipmentInput, perm
   return { id: item.id };
 });
 
-export const updateEquipmentAction = defineAction({ schema: UpdateEquipmentInput, permission: "catalog:edit" }, async (input, { viewer }) => {
-  const item = await updateEquipment({ viewer, equipmentId: input.equipmentId, values: input });
-  revalidatePath("/settings/equipment");
-  return { id: item.id };
-});
+export const updateEquipmentAction = defineAction(
+  { schema: UpdateEquipmentInput, permission: "catalog:edit" },
+  async (input, { viewer }) => {
+    const item = await updateEquipment({ viewer, equipmentId: input.equipmentId, values: input });
+    revalidatePath("/settings/equipment");
+    return { id: item.id };
+  },
+);
 
-export const setEquipmentArchivedAction = defineAction({ schema: SetArchivedInput, permission: "catalog:edit" }, async ({ equipmentId, isArchived }, { viewer }) => {
-  const item = await setEquipmentArchived({ viewer, equipmentId, isArchived });
-  revalidatePath("/settings/equipment");
-  return { isArchived: item.isArchived };
-});
+export const setEquipmentArchivedAction = defineAction(
+  { schema: SetArchivedInput, permission: "catalog:edit" },
+  async ({ equipmentId, isArchived }, { viewer }) => {
+    const item = await setEquipmentArchived({ viewer, equipmentId, isArchived });
+    revalidatePath("/settings/equipment");
+    return { isArchived: item.isArchived };
+  },
+);

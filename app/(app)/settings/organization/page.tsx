@@ -13,10 +13,15 @@ export default async function OrganizationPage() {
     <div className="mx-auto max-w-3xl space-y-4">
       <div>
         <h1>Organization</h1>
-        <p className="text-sm text-ink-soft">How your company appears on packets, field reports and receipts, and the time zone their times are printed in.</p>
+        <p className="text-sm text-ink-soft">
+          How your company appears on packets, field reports and receipts, and the time zone their times are printed in.
+        </p>
       </div>
       <section className="panel">
-        <OrganizationForm update={updateOrganizationAction} initial={{ name: o.name, licenseNumber: o.licenseNumber ?? "", phone: o.phone ?? "", timeZone: o.timeZone }} />
+        <OrganizationForm
+          update={updateOrganizationAction}
+          initial={{ name: o.name, licenseNumber: o.licenseNumber ?? "", phone: o.phone ?? "", timeZone: o.timeZone }}
+        />
       </section>
     </div>
   );

@@ -12,19 +12,28 @@ export const inviteUserAction = defineAction({ schema: InviteUserInput, permissi
   return { email: user.email };
 });
 
-export const renewInvitationAction = defineAction({ schema: z.object({ userId: z.string().uuid() }), permission: "users:manage" }, async ({ userId }, { viewer }) => {
-  const { user } = await renewInvitation({ viewer, userId });
-  return { email: user.email };
-});
+export const renewInvitationAction = defineAction(
+  { schema: z.object({ userId: z.string().uuid() }), permission: "users:manage" },
+  async ({ userId }, { viewer }) => {
+    const { user } = await renewInvitation({ viewer, userId });
+    return { email: user.email };
+  },
+);
 
-export const changeRoleAction = defineAction({ schema: ChangeRoleInput, permission: "users:manage" }, async ({ userId, role }, { viewer }) => {
-  const user = await updateUserRole({ viewer, userId, role });
-  revalidatePath("/settings/users");
-  return user;
-});
+export const changeRoleAction = defineAction(
+  { schema: ChangeRoleInput, permission: "users:manage" },
+  async ({ userId, role }, { viewer }) => {
+    const user = await updateUserRole({ viewer, userId, role });
+    revalidatePath("/settings/users");
+    return user;
+  },
+);
 
-export const setActiveAction = defineAction({ schema: SetActiveInput, permission: "users:manage" }, async ({ userId, isActive }, { viewer }) => {
-  const user = await setUserActive({ viewer, userId, isActive });
-  revalidatePath("/settings/users");
-  return user;
-});
+export const setActiveAction = defineAction(
+  { schema: SetActiveInput, permission: "users:manage" },
+  async ({ userId, isActive }, { viewer }) => {
+    const user = await setUserActive({ viewer, userId, isActive });
+    revalidatePath("/settings/users");
+    return user;
+  },
+);

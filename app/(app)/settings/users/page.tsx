@@ -19,10 +19,15 @@ export default async function UsersPage() {
         <InviteUserForm invite={inviteUserAction} />
       </section>
       <DataTable columns={["Name", "E-mail", "Role", "Status", { label: "Actions", hidden: true }]}>
-            {users.map((user) => (
-              <UserRow key={user.id} user={user} isSelf={user.id === viewer.id} actions={{ changeRole: changeRoleAction, renewInvitation: renewInvitationAction, setActive: setActiveAction }} />
-            ))}
-          </DataTable>
+        {users.map((user) => (
+          <UserRow
+            key={user.id}
+            user={user}
+            isSelf={user.id === viewer.id}
+            actions={{ changeRole: changeRoleAction, renewInvitation: renewInvitationAction, setActive: setActiveAction }}
+          />
+        ))}
+      </DataTable>
     </div>
   );
 }

@@ -13,7 +13,9 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     return (
       <>
         <h1 className="mb-2 text-xl">Link not valid</h1>
-        <p className="text-sm text-ink-soft">This invitation link has been used or has expired. Ask your organization&apos;s admin to send a new one.</p>
+        <p className="text-sm text-ink-soft">
+          This invitation link has been used or has expired. Ask your organization&apos;s admin to send a new one.
+        </p>
         <p className="mt-4 text-sm">
           <Link href="/sign-in">Go to sign-in</Link>
         </p>

@@ -26,7 +26,9 @@ export function SignInForm({ next, initialError }: { next: string; initialError?
     setError(undefined);
     const result = await signIn("credentials", { ...values, redirect: false });
     if (!result || result.error) {
-      setError(result?.error && result.error !== "CredentialsSignin" ? result.error : "Sign-in failed. Check your e-mail address and password.");
+      setError(
+        result?.error && result.error !== "CredentialsSignin" ? result.error : "Sign-in failed. Check your e-mail address and password.",
+      );
       return;
     }
     router.replace(next);

@@ -6,7 +6,8 @@ import { verifyWebhook } from "@/lib/server/services/payments";
 
 // Events are a few kilobytes; anything far larger is not one.
 const MAX_EVENT_BYTES = 512 * 1024;
-const refuse = (status: 400 | 413, message: string) => NextResponse.json({ error: { code: status === 400 ? "INVALID_INPUT" : "TOO_LARGE", message } }, { status });
+const refuse = (status: 400 | 413, message: string) =>
+  NextResponse.json({ error: { code: status === 400 ? "INVALID_INPUT" : "TOO_LARGE", message } }, { status });
 
 // POST /api/webhooks/stripe – signed events from the payment processor; no session, the signature is the check
 export async function POST(request: NextRequest) {

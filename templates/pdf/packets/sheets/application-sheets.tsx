@@ -25,7 +25,8 @@ export function ApplicationSheet({ input, sheet }: Sheet) {
   return (
     <FormSheet input={input} sheet={sheet} subtitle={input.utility ? `To ${input.utility.name}` : undefined}>
       <Text style={[base.paragraph, { fontSize: 8.5 }]}>
-        Request to connect an inverter-based photovoltaic system in parallel with the utility's distribution system, prepared from the system design of this revision.
+        Request to connect an inverter-based photovoltaic system in parallel with the utility's distribution system, prepared from the
+        system design of this revision.
       </Text>
       <Section title="1  Customer and service location">
         <View style={s.row}>
@@ -65,8 +66,8 @@ export function ApplicationSheet({ input, sheet }: Sheet) {
         </View>
       </Section>
       <Text style={[s.note, base.soft]}>
-        The generating facility, its certification and its connection are described on the next sheet; the single-line diagram follows. Tariff or billing elections are made as the utility's
-        own process provides.
+        The generating facility, its certification and its connection are described on the next sheet; the single-line diagram follows.
+        Tariff or billing elections are made as the utility's own process provides.
       </Text>
     </FormSheet>
   );
@@ -99,7 +100,10 @@ export function FacilitySheet({ input, sheet, singleLineSheet }: Sheet & { singl
           <Field label="Module rating" value={`${m.specs.powerW} W (STC)`} mono style={s.cell} />
         </View>
         {input.equipment.device ? (
-          <Field label="Module-level device" value={`${input.equipment.device.maker} ${input.equipment.device.model} (${input.equipment.device.listing || "listing not entered"})`} />
+          <Field
+            label="Module-level device"
+            value={`${input.equipment.device.maker} ${input.equipment.device.model} (${input.equipment.device.listing || "listing not entered"})`}
+          />
         ) : null}
       </Section>
       <Section title="6  Ratings">
@@ -115,16 +119,34 @@ export function FacilitySheet({ input, sheet, singleLineSheet }: Sheet & { singl
         </View>
       </Section>
       <Section title="7  Certification and grid profile">
-        <Field label="Grid profiles the utility accepts" value={input.utility?.acceptedGridProfiles.length ? input.utility.acceptedGridProfiles.join("; ") : "Ask the utility: no profile on file"} />
+        <Field
+          label="Grid profiles the utility accepts"
+          value={
+            input.utility?.acceptedGridProfiles.length
+              ? input.utility.acceptedGridProfiles.join("; ")
+              : "Ask the utility: no profile on file"
+          }
+        />
         <Text style={s.note}>
-          Certification as the inverter maker states it (above); UL 1741 with IEEE 1547.1 testing is the usual basis. The installer sets a grid profile the utility accepts at
-          commissioning and records it in the commissioning report; the utility's settings win over any default.
+          Certification as the inverter maker states it (above); UL 1741 with IEEE 1547.1 testing is the usual basis. The installer sets a
+          grid profile the utility accepts at commissioning and records it in the commissioning report; the utility's settings win over any
+          default.
         </Text>
       </Section>
       <Section title="8  Connection and disconnect">
         <View style={s.row}>
-          <Field label="Point of connection" value={s2.connection === "load-side" ? `Load side, ${s2.pvBreakerA} A PV breaker` : `Supply side, ${s2.pvBreakerA} A PV disconnect`} style={s.cell} />
-          <Field label="Service panel" value={`${s2.busbarA} A busbar${s2.mainBreakerA ? `, ${s2.mainBreakerA} A main` : ""}`} style={s.cell} />
+          <Field
+            label="Point of connection"
+            value={
+              s2.connection === "load-side" ? `Load side, ${s2.pvBreakerA} A PV breaker` : `Supply side, ${s2.pvBreakerA} A PV disconnect`
+            }
+            style={s.cell}
+          />
+          <Field
+            label="Service panel"
+            value={`${s2.busbarA} A busbar${s2.mainBreakerA ? `, ${s2.mainBreakerA} A main` : ""}`}
+            style={s.cell}
+          />
         </View>
         <View style={s.row}>
           <Field label="PV system disconnect location" value={input.facts.disconnectLocation} style={s.cell} />
@@ -138,7 +160,10 @@ export function FacilitySheet({ input, sheet, singleLineSheet }: Sheet & { singl
         </View>
       </Section>
       <Notice title="Attached">
-        <Text style={s.note}>Single-line diagram on sheet {singleLineSheet}. Equipment data sheets and the site plan on request or as the utility's process asks.</Text>
+        <Text style={s.note}>
+          Single-line diagram on sheet {singleLineSheet}. Equipment data sheets and the site plan on request or as the utility's process
+          asks.
+        </Text>
       </Notice>
     </FormSheet>
   );

@@ -9,7 +9,15 @@ import { CALC_COLUMNS as W, CALC_FONT_PT, CALC_TITLE_PT } from "./calculation-co
 
 const s = StyleSheet.create({
   head: { flexDirection: "row", backgroundColor: COLORS.paperTint, borderTopWidth: 1, borderBottomWidth: 1, borderColor: COLORS.ink },
-  headCell: { paddingVertical: 3, paddingHorizontal: 4, fontSize: 6.8, fontWeight: 600, textTransform: "uppercase", letterSpacing: 0.4, color: COLORS.inkSoft },
+  headCell: {
+    paddingVertical: 3,
+    paddingHorizontal: 4,
+    fontSize: 6.8,
+    fontWeight: 600,
+    textTransform: "uppercase",
+    letterSpacing: 0.4,
+    color: COLORS.inkSoft,
+  },
   row: { flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: COLORS.rule },
   cell: { paddingVertical: 3.5, paddingHorizontal: 4, fontSize: CALC_FONT_PT, lineHeight: 1.25 },
   title: { fontSize: CALC_TITLE_PT, fontWeight: 600 },
@@ -20,7 +28,14 @@ const s = StyleSheet.create({
 });
 
 const COLUMNS: [keyof typeof W, string][] = [
-  ["index", "#"], ["check", "Check and finding"], ["inputs", "Inputs"], ["method", "Method"], ["result", "Result"], ["limit", "Limit"], ["clause", "Code reference"], ["status", "Status"],
+  ["index", "#"],
+  ["check", "Check and finding"],
+  ["inputs", "Inputs"],
+  ["method", "Method"],
+  ["result", "Result"],
+  ["limit", "Limit"],
+  ["clause", "Code reference"],
+  ["status", "Status"],
 ];
 
 function CheckRow({ check, index, input }: { check: CheckResult; index: number; input: PrintedPacket }) {
@@ -51,12 +66,27 @@ function CheckRow({ check, index, input }: { check: CheckResult; index: number; 
 }
 
 /** One calculation sheet: its share of the review's checks, numbered across all calculation sheets. */
-export function CalculationSheet({ input, sheet, checks, firstIndex }: { input: PrintedPacket; sheet: SheetInfo; checks: CheckResult[]; firstIndex: number }) {
+export function CalculationSheet({
+  input,
+  sheet,
+  checks,
+  firstIndex,
+}: {
+  input: PrintedPacket;
+  sheet: SheetInfo;
+  checks: CheckResult[];
+  firstIndex: number;
+}) {
   const j = input.jurisdiction;
   return (
-    <PlanSheet input={input} sheet={sheet} subtitle={`Every check of the design review, NEC ${input.review.edition}; record low ${j.recordLowTempC} °C, high design ${j.highDesignTempC} °C`}>
+    <PlanSheet
+      input={input}
+      sheet={sheet}
+      subtitle={`Every check of the design review, NEC ${input.review.edition}; record low ${j.recordLowTempC} °C, high design ${j.highDesignTempC} °C`}
+    >
       <Text style={s.intro}>
-        Result and limit are the review's own figures. “Review” marks a result a plan reviewer should look at; “Fail” marks one that does not meet the limit. Code arithmetic only: the AHJ's reading of the code governs.
+        Result and limit are the review's own figures. “Review” marks a result a plan reviewer should look at; “Fail” marks one that does
+        not meet the limit. Code arithmetic only: the AHJ's reading of the code governs.
       </Text>
       <View style={s.head}>
         {COLUMNS.map(([key, header]) => (

@@ -16,7 +16,10 @@ const s = StyleSheet.create({
 });
 
 function overrideLead(failCount: number, byName: string): string {
-  const state = failCount > 0 ? `The design review had ${failCount} failing ${failCount === 1 ? "check" : "checks"} when this packet was generated.` : "This packet was generated under an override of the design review.";
+  const state =
+    failCount > 0
+      ? `The design review had ${failCount} failing ${failCount === 1 ? "check" : "checks"} when this packet was generated.`
+      : "This packet was generated under an override of the design review.";
   return `${state} ${byName} chose to issue it anyway, for this reason:`;
 }
 
@@ -37,10 +40,23 @@ export function CoverSheet({ input, sheet, sheets }: { input: PrintedPacket; she
             <Field label="Authority having jurisdiction" value={`${j.name} (${j.state})`} />
             <View style={s.pair}>
               <Field label="Code basis" value={`NEC ${j.necEdition}, with local amendments`} style={s.half} />
-              <Field label="Design temperatures" value={`Record low ${j.recordLowTempC} °C · high ${j.highDesignTempC} °C`} style={s.half} />
+              <Field
+                label="Design temperatures"
+                value={`Record low ${j.recordLowTempC} °C · high ${j.highDesignTempC} °C`}
+                style={s.half}
+              />
             </View>
             <Field label="Serving utility" value={input.utility?.name ?? "Not set"} />
-            <Field label="Prepared by" value={[input.preparedBy.organizationName, input.preparedBy.name, input.preparedBy.licenseNumber ? `License ${input.preparedBy.licenseNumber}` : null].filter(Boolean).join(" · ")} />
+            <Field
+              label="Prepared by"
+              value={[
+                input.preparedBy.organizationName,
+                input.preparedBy.name,
+                input.preparedBy.licenseNumber ? `License ${input.preparedBy.licenseNumber}` : null,
+              ]
+                .filter(Boolean)
+                .join(" · ")}
+            />
           </Section>
           <Section title="Scope of work">
             {input.facts.scopeOfWork.map((line, i) => (

@@ -12,7 +12,14 @@ const s = StyleSheet.create({
   cardHead: { flexDirection: "row", justifyContent: "space-between", marginBottom: 3 },
   // The drawing of the label itself: a heavy border around large capitals, like the plate.
   plate: { borderWidth: 2.5, borderColor: COLORS.ink, padding: 3 },
-  plateInner: { borderWidth: 0.8, borderColor: COLORS.ink, paddingVertical: 8, paddingHorizontal: 10, minHeight: 64, justifyContent: "center" },
+  plateInner: {
+    borderWidth: 0.8,
+    borderColor: COLORS.ink,
+    paddingVertical: 8,
+    paddingHorizontal: 10,
+    minHeight: 64,
+    justifyContent: "center",
+  },
   plateText: { fontSize: 10.5, fontWeight: 700, textAlign: "center", lineHeight: 1.3 },
   wording: { marginTop: 3, fontSize: 7, color: COLORS.inkSoft },
   explanation: { marginTop: 3, fontSize: 7.5, lineHeight: 1.3 },
@@ -36,7 +43,9 @@ function LabelCard({ label, values, index }: { label: WarningLabel; values: { na
           <Text style={s.plateText}>{label.text}</Text>
         </View>
       </View>
-      <Text style={s.wording}>{label.prescribed ? `Wording prescribed by ${label.clause}.` : `${label.clause} asks for this content; the wording is ours.`}</Text>
+      <Text style={s.wording}>
+        {label.prescribed ? `Wording prescribed by ${label.clause}.` : `${label.clause} asks for this content; the wording is ours.`}
+      </Text>
       <Text style={s.explanation}>
         <Text style={base.strong}>What it means: </Text>
         {label.explanation}
@@ -60,11 +69,16 @@ function LabelCard({ label, values, index }: { label: WarningLabel; values: { na
 /** Every label the review requires, drawn with its computed values and its place. */
 export function LabelSheet({ input, sheet }: { input: PrintedPacket; sheet: SheetInfo }) {
   return (
-    <PlanSheet input={input} sheet={sheet} subtitle={`${input.review.labels.length} labels required by the design review, NEC ${input.review.edition}`}>
+    <PlanSheet
+      input={input}
+      sheet={sheet}
+      subtitle={`${input.review.labels.length} labels required by the design review, NEC ${input.review.edition}`}
+    >
       <Text style={s.intro}>
-        Where the NEC prescribes a label's words, the plate shows them as the clause gives them; elsewhere it shows the content the clause asks for, with the values computed for this design. Beside
-        each plate, what it means in plain words. Make each label permanent and suited to its environment (sunlight, weather); letter height, colours and any additional wording as NEC 110.21(B) and the
-        AHJ require. Where the AHJ prescribes its own text, use that text with these values.
+        Where the NEC prescribes a label's words, the plate shows them as the clause gives them; elsewhere it shows the content the clause
+        asks for, with the values computed for this design. Beside each plate, what it means in plain words. Make each label permanent and
+        suited to its environment (sunlight, weather); letter height, colours and any additional wording as NEC 110.21(B) and the AHJ
+        require. Where the AHJ prescribes its own text, use that text with these values.
       </Text>
       <View style={s.grid}>
         {input.review.labels.map((label, i) => (

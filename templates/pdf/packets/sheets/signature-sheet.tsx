@@ -44,8 +44,16 @@ export function SignatureSheet({ input, sheet }: { input: PrintedPacket; sheet: 
           ]}
         />
       </Section>
-      <SignatureBlock title="Customer" who={`Account holder at ${input.project.street}, ${input.project.city}`} name={input.project.customerName} />
-      <SignatureBlock title="Installer" who={`${input.preparedBy.organizationName}${input.preparedBy.licenseNumber ? `, license ${input.preparedBy.licenseNumber}` : ""}`} name={input.preparedBy.name} />
+      <SignatureBlock
+        title="Customer"
+        who={`Account holder at ${input.project.street}, ${input.project.city}`}
+        name={input.project.customerName}
+      />
+      <SignatureBlock
+        title="Installer"
+        who={`${input.preparedBy.organizationName}${input.preparedBy.licenseNumber ? `, license ${input.preparedBy.licenseNumber}` : ""}`}
+        name={input.preparedBy.name}
+      />
     </FormSheet>
   );
 }

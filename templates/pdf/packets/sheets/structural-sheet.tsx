@@ -22,8 +22,9 @@ export function StructuralSheet({ input, sheet }: { input: PrintedPacket; sheet:
     <PlanSheet input={input} sheet={sheet} subtitle="Dead load of the array on each roof plane">
       <Notice title="Structural adequacy is not assessed here">
         <Text style={base.paragraph}>
-          These figures are the array's own dead load, worked from the makers' weights. Whether the roof framing, the attachments and their fastening can carry it together with snow, wind and
-          seismic loads is for a qualified person (a licensed engineer where required) and the AHJ to decide. Follow the racking maker's span and attachment tables.
+          These figures are the array's own dead load, worked from the makers' weights. Whether the roof framing, the attachments and their
+          fastening can carry it together with snow, wind and seismic loads is for a qualified person (a licensed engineer where required)
+          and the AHJ to decide. Follow the racking maker's span and attachment tables.
         </Text>
       </Notice>
       <Section title="Roof planes">
@@ -49,11 +50,13 @@ export function StructuralSheet({ input, sheet }: { input: PrintedPacket; sheet:
         <View style={s.left}>
           <Section title="Basis">
             <Text style={base.paragraph}>
-              Module: {m.maker} {m.model}, {moduleWeight} lb, {moduleLength} × {moduleWidth} in. Array weight = modules × module weight + the racking
-              weight entered for the plane. Dead load = array weight / array area. Load per attachment = array weight / attachments on the plane.
+              Module: {m.maker} {m.model}, {moduleWeight} lb, {moduleLength} × {moduleWidth} in. Array weight = modules × module weight +
+              the racking weight entered for the plane. Dead load = array weight / array area. Load per attachment = array weight /
+              attachments on the plane.
             </Text>
             <Text style={base.paragraph}>
-              Many AHJs accept arrays up to about {expeditedDeadLoadPsf} lb/ft² without a structural letter; above that, or where the AHJ asks, expect an engineer's review. Ask the AHJ what it accepts.
+              Many AHJs accept arrays up to about {expeditedDeadLoadPsf} lb/ft² without a structural letter; above that, or where the AHJ
+              asks, expect an engineer's review. Ask the AHJ what it accepts.
             </Text>
           </Section>
         </View>

@@ -12,7 +12,11 @@ import { makeOrganization, makeProject, type OrgFixture } from "../../support/fi
 let acme: OrgFixture;
 let rival: OrgFixture;
 
-const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+const code = async (promise: Promise<unknown>) =>
+  promise.then(
+    () => "resolved",
+    (e: unknown) => (e instanceof AppError ? e.code : String(e)),
+  );
 
 beforeAll(async () => {
   acme = await makeOrganization("Acme");
@@ -32,7 +36,14 @@ describe("createApiToken", () => {
     expect(row?.tokenHash).toBe(hashToken(token));
     expect(JSON.stringify(row?.toJSON())).not.toContain(token.slice(API_TOKEN_PREFIX.length));
     const listed = await listApiTokens({ viewer: acme.viewers.admin });
-    expect(listed.find((t) => t.id === apiToken.id)).toEqual({ id: apiToken.id, name: "Quote tool", createdAt: expect.any(String), createdByName: "Ada Admin", lastUsedAt: null, revokedAt: null });
+    expect(listed.find((t) => t.id === apiToken.id)).toEqual({
+      id: apiToken.id,
+      name: "Quote tool",
+      createdAt: expect.any(String),
+      createdByName: "Ada Admin",
+      lastUsedAt: null,
+      revokedAt: null,
+    });
     expect(JSON.stringify(listed)).not.toContain(row!.tokenHash);
     expect(await AuditEvent.count({ where: { entityId: apiToken.id, action: "api-token.created" } })).toBe(1);
   });
@@ -50,7 +61,15 @@ describe("getViewerByApiToken", () => {
     expect(viewer).toMatchObject({ organizationId: acme.organization.id, apiTokenId: apiToken.id, name: 'API token "Read only"' });
     expect(can(viewer!, "design:review")).toBe(true);
     expect(can(viewer!, "project:view")).toBe(true);
-    for (const permission of ["project:edit", "project:create", "project:change-stage", "users:manage", "api-tokens:manage", "catalog:edit", "settings:view"] as const) {
+    for (const permission of [
+      "project:edit",
+      "project:create",
+      "project:change-stage",
+      "users:manage",
+      "api-tokens:manage",
+      "catalog:edit",
+      "settings:view",
+    ] as const) {
       expect(can(viewer!, permission), permission).toBe(false);
     }
     expect((await ApiToken.findByPk(apiToken.id))?.lastUsedAt).toBeInstanceOf(Date);

@@ -16,16 +16,28 @@ let rival: OrgFixture;
 let designedId: string;
 let blankId: string;
 
-const failure = async (promise: Promise<unknown>) => promise.then(() => null, (e: unknown) => (e instanceof AppError ? e : Promise.reject(e)));
+const failure = async (promise: Promise<unknown>) =>
+  promise.then(
+    () => null,
+    (e: unknown) => (e instanceof AppError ? e : Promise.reject(e)),
+  );
 
 beforeAll(async () => {
   acme = await makeOrganization("Acme");
   rival = await makeOrganization("Rival");
-  const catalog = await Promise.all(DEMO_CATALOG.map((item) => createEquipment({ viewer: acme.viewers.admin, values: EquipmentInput.parse(item) })));
-  const ids = Object.fromEntries(Object.entries(DESIGN_MODELS).map(([k, model]) => [k, catalog.find((c) => c.model === model)!.id])) as CatalogIds;
+  const catalog = await Promise.all(
+    DEMO_CATALOG.map((item) => createEquipment({ viewer: acme.viewers.admin, values: EquipmentInput.parse(item) })),
+  );
+  const ids = Object.fromEntries(
+    Object.entries(DESIGN_MODELS).map(([k, model]) => [k, catalog.find((c) => c.model === model)!.id]),
+  ) as CatalogIds;
   designedId = (await makeProject(acme, { customerName: "Design Export" })).id;
   blankId = (await makeProject(acme, { customerName: "No Design Yet" })).id;
-  await saveDesignDraft({ viewer: acme.viewers.coordinator, projectId: designedId, draft: demoDesign(ids, { busbarA: 200, mainBreakerA: 200 }, 0) });
+  await saveDesignDraft({
+    viewer: acme.viewers.coordinator,
+    projectId: designedId,
+    draft: demoDesign(ids, { busbarA: 200, mainBreakerA: 200 }, 0),
+  });
 });
 
 afterAll(async () => {
@@ -35,7 +47,11 @@ afterAll(async () => {
 describe("getProjectDesignDocument and reviewProjectDocument", () => {
   it("export the saved design, whose review posted back is the project's review", async () => {
     const document = await getProjectDesignDocument({ viewer: acme.viewers.coordinator, projectId: designedId });
-    expect(document).toMatchObject({ codeEdition: "2020", site: { recordLowC: -20, highAmbientC: 33 }, strings: [{ id: "S1" }, { id: "S2" }] });
+    expect(document).toMatchObject({
+      codeEdition: "2020",
+      site: { recordLowC: -20, highAmbientC: 33 },
+      strings: [{ id: "S1" }, { id: "S2" }],
+    });
     const review = await reviewProjectDocument({ viewer: acme.viewers.coordinator, projectId: designedId });
     const posted = reviewDocument(JSON.parse(JSON.stringify(document)));
     expect(posted).toEqual({ ok: true, review });

@@ -11,7 +11,11 @@ import { makeOrganization, makeProject, type OrgFixture } from "../../support/fi
 let org: OrgFixture;
 let rival: OrgFixture;
 let ids: CatalogIds;
-const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+const code = async (promise: Promise<unknown>) =>
+  promise.then(
+    () => "resolved",
+    (e: unknown) => (e instanceof AppError ? e.code : String(e)),
+  );
 
 beforeAll(async () => {
   org = await makeOrganization("Designs");
@@ -69,7 +73,9 @@ describe("designs", () => {
     const project = await makeProject(org);
     expect(await code(saveDesignDraft({ viewer: rival.viewers.admin, projectId: project.id, draft: {} }))).toBe("NOT_FOUND");
     expect(await code(getDesignForProject({ viewer: rival.viewers.admin, projectId: project.id }))).toBe("NOT_FOUND");
-    expect(await code(saveDesignDraft({ viewer: org.viewers.coordinator, projectId: project.id, draft: { runs: "all of them" } }))).toBe("INVALID_INPUT");
+    expect(await code(saveDesignDraft({ viewer: org.viewers.coordinator, projectId: project.id, draft: { runs: "all of them" } }))).toBe(
+      "INVALID_INPUT",
+    );
     expect(await Design.count({ where: { projectId: project.id } })).toBe(0);
   });
 });

@@ -18,7 +18,11 @@ let org: OrgFixture;
 let rival: OrgFixture;
 let ids: CatalogIds;
 const PROFILE = "IEEE 1547-2018 Category B";
-const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+const code = async (promise: Promise<unknown>) =>
+  promise.then(
+    () => "resolved",
+    (e: unknown) => (e instanceof AppError ? e.code : String(e)),
+  );
 
 beforeAll(async () => {
   org = await makeOrganization("Field");
@@ -39,7 +43,11 @@ afterAll(async () => {
  */
 async function assignedProject(variant = 0) {
   const project = await makeProject(org, { installerId: org.users.installer.id, busbarA: 200, mainBreakerA: 200 });
-  await saveDesignDraft({ viewer: org.viewers.coordinator, projectId: project.id, draft: demoDesign(ids, { busbarA: 200, mainBreakerA: 200 }, variant) });
+  await saveDesignDraft({
+    viewer: org.viewers.coordinator,
+    projectId: project.id,
+    draft: demoDesign(ids, { busbarA: 200, mainBreakerA: 200 }, variant),
+  });
   return project;
 }
 
@@ -79,7 +87,26 @@ const pdfBytes = async () => {
   return new Uint8Array(await doc.save());
 };
 // A Windows executable's first bytes ("MZ" header), as a renamed .exe would carry.
-const executableBytes = () => new Uint8Array([0x4d, 0x5a, 0x90, 0x00, 0x03, 0x00, 0x00, 0x00, 0x04, 0x00, 0x00, 0x00, 0xff, 0xff, 0x00, 0x00, ...new Array(200).fill(0)]);
+const executableBytes = () =>
+  new Uint8Array([
+    0x4d,
+    0x5a,
+    0x90,
+    0x00,
+    0x03,
+    0x00,
+    0x00,
+    0x00,
+    0x04,
+    0x00,
+    0x00,
+    0x00,
+    0xff,
+    0xff,
+    0x00,
+    0x00,
+    ...new Array(200).fill(0),
+  ]);
 const PNG_1PX = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
 
 describe("commissioning record", () => {
@@ -87,7 +114,13 @@ describe("commissioning record", () => {
     const project = await assignedProject();
     const record = await getCommissioning({ viewer: org.viewers.installer, projectId: project.id });
     expect(record.status).toBe("open");
-    expect(record.facts).toMatchObject({ acceptedGridProfiles: [PROFILE, "IEEE 1547-2018 Category B, volt-watt on"], nominalServiceV: 240, modulesInstalled: 22, moduleMonitoring: false, pairing: null });
+    expect(record.facts).toMatchObject({
+      acceptedGridProfiles: [PROFILE, "IEEE 1547-2018 Category B, volt-watt on"],
+      nominalServiceV: 240,
+      modulesInstalled: 22,
+      moduleMonitoring: false,
+      pairing: null,
+    });
     expect(record.facts.strings.map((s) => [s.id, s.devicesInSeries])).toEqual([
       ["S1", 11],
       ["S2", 11],
@@ -105,7 +138,9 @@ describe("commissioning record", () => {
     const project = await assignedProject();
     expect(await code(getCommissioning({ viewer: org.viewers.otherInstaller, projectId: project.id }))).toBe("NOT_FOUND");
     expect(await code(getCommissioning({ viewer: rival.viewers.admin, projectId: project.id }))).toBe("NOT_FOUND");
-    expect(await code(saveCommissioning({ viewer: org.viewers.otherInstaller, input: { projectId: project.id, readings: {} } }))).toBe("NOT_FOUND");
+    expect(await code(saveCommissioning({ viewer: org.viewers.otherInstaller, input: { projectId: project.id, readings: {} } }))).toBe(
+      "NOT_FOUND",
+    );
   });
 
   it("saves a failing reading but refuses to complete, then completes once it is corrected", async () => {
@@ -125,14 +160,20 @@ describe("commissioning record", () => {
     expect(resumed.readings.strings[0]).toMatchObject({ id: "S1", polarity: "correct", insulationMohm: 250 });
     expect(resumed.readings.vocTemperature).toEqual({ tempC: 40, source: "module" });
 
-    const done = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: { ...readings, acVoltageV: "241" }, complete: true } });
+    const done = await saveCommissioning({
+      viewer: org.viewers.installer,
+      input: { projectId: project.id, readings: { ...readings, acVoltageV: "241" }, complete: true },
+    });
     expect(done.completeRefused).toBeNull();
     expect(done.status).toBe("complete");
     expect(done.completedAt).not.toBeNull();
     expect(await AuditEvent.count({ where: { entityId: project.id, action: "commissioning.completed" } })).toBe(1);
 
     // A later change that fails reopens the record.
-    const reopened = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: { ...readings, acVoltageV: "200" } } });
+    const reopened = await saveCommissioning({
+      viewer: org.viewers.installer,
+      input: { projectId: project.id, readings: { ...readings, acVoltageV: "200" } },
+    });
     expect(reopened.status).toBe("open");
     expect(await AuditEvent.count({ where: { entityId: project.id, action: "commissioning.reopened" } })).toBe(1);
   });
@@ -140,7 +181,10 @@ describe("commissioning record", () => {
   it("completes without a modules-reporting count where the system has no module-level monitoring", async () => {
     const project = await assignedProject(0);
     const { facts } = await getCommissioning({ viewer: org.viewers.installer, projectId: project.id });
-    const done = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: passingReadings(facts), complete: true } });
+    const done = await saveCommissioning({
+      viewer: org.viewers.installer,
+      input: { projectId: project.id, readings: passingReadings(facts), complete: true },
+    });
     expect(done.status).toBe("complete");
     expect(done.results.some((r) => r.kind === "modules-reporting" || r.kind === "device-pairing")).toBe(false);
     expect(done.results.find((r) => r.id === "grid-profile")).toMatchObject({ status: "pass" });
@@ -152,12 +196,23 @@ describe("commissioning record", () => {
     const { facts } = await getCommissioning({ viewer: org.viewers.installer, projectId: project.id });
     const good = passingReadings(facts);
     const wrongCard = { ...good, inverters: [{ ...good.inverters[0]!, cardSerial: "QN0730412" }] };
-    const refused = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: wrongCard, complete: true } });
+    const refused = await saveCommissioning({
+      viewer: org.viewers.installer,
+      input: { projectId: project.id, readings: wrongCard, complete: true },
+    });
     expect(refused).toMatchObject({ status: "open", completion: { failing: ["inverter-serial:inv-1"] } });
-    const wet = { ...good, strings: good.strings.map((s, i) => (i === 0 ? { ...s, insulationMohm: "0.4", polarity: "reversed" as const } : s)) };
-    const alsoRefused = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: wet, complete: true } });
+    const wet = {
+      ...good,
+      strings: good.strings.map((s, i) => (i === 0 ? { ...s, insulationMohm: "0.4", polarity: "reversed" as const } : s)),
+    };
+    const alsoRefused = await saveCommissioning({
+      viewer: org.viewers.installer,
+      input: { projectId: project.id, readings: wet, complete: true },
+    });
     expect(alsoRefused.completion.failing).toEqual(["string-polarity:S1", "string-insulation:S1"]);
-    expect((await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: good, complete: true } })).status).toBe("complete");
+    expect(
+      (await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: good, complete: true } })).status,
+    ).toBe("complete");
   });
 
   it("with devices that report: a shortfall of devices found waits, then completes once all are found and every module reports", async () => {
@@ -166,17 +221,26 @@ describe("commissioning record", () => {
     expect(facts).toMatchObject({ moduleMonitoring: true, pairing: { word: "optimizers", installed: 20 } });
     expect(facts.stringTests.every((s) => !s.vocApplies)).toBe(true); // optimizer strings: no Voc test
     const good = passingReadings(facts);
-    const waiting = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: { ...good, devicesFound: "18" }, complete: true } });
+    const waiting = await saveCommissioning({
+      viewer: org.viewers.installer,
+      input: { projectId: project.id, readings: { ...good, devicesFound: "18" }, complete: true },
+    });
     expect(waiting).toMatchObject({ status: "open", completion: { failing: [], missing: [], waiting: ["device-pairing"] } });
     expect(waiting.completeRefused).toMatch(/1 waiting/);
-    const done = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: good, complete: true } });
+    const done = await saveCommissioning({
+      viewer: org.viewers.installer,
+      input: { projectId: project.id, readings: good, complete: true },
+    });
     expect(done.status).toBe("complete");
     expect(done.results.find((r) => r.id === "modules-reporting")).toMatchObject({ status: "pass", value: 20 });
   });
 
   it("rejects a reading that is not a number with the field named, saving nothing", async () => {
     const project = await assignedProject();
-    const error = await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: { acVoltageV: "two-forty" } } }).catch((e) => e);
+    const error = await saveCommissioning({
+      viewer: org.viewers.installer,
+      input: { projectId: project.id, readings: { acVoltageV: "two-forty" } },
+    }).catch((e) => e);
     expect(error.issues?.[0]?.path).toEqual(["readings", "acVoltageV"]);
     expect((await getCommissioning({ viewer: org.viewers.installer, projectId: project.id })).updatedAt).toBeNull();
   });
@@ -184,11 +248,16 @@ describe("commissioning record", () => {
   it("gathers what the certificate prints from the saved record", async () => {
     const project = await assignedProject();
     const { facts } = await getCommissioning({ viewer: org.viewers.installer, projectId: project.id });
-    await saveCommissioning({ viewer: org.viewers.installer, input: { projectId: project.id, readings: passingReadings(facts), complete: true } });
+    await saveCommissioning({
+      viewer: org.viewers.installer,
+      input: { projectId: project.id, readings: passingReadings(facts), complete: true },
+    });
     const input = await buildCommissioningDocumentInput({ viewer: org.viewers.installer, projectId: project.id, kind: "certificate" });
     expect(input.installer).toMatchObject({ name: "Ivo Installer" });
     expect(input.system.moduleSummary).toMatch(/^22 × /);
-    expect(input.record.inverters).toEqual([{ id: "inv-1", label: "Inverter", model: "Quillon QS-7600", serial: "QN0730411", cardSerial: "qn-0730411", activated: true }]);
+    expect(input.record.inverters).toEqual([
+      { id: "inv-1", label: "Inverter", model: "Quillon QS-7600", serial: "QN0730411", cardSerial: "qn-0730411", activated: true },
+    ]);
     expect(input.record.stringTests?.map((s) => s.insulationMohm)).toEqual([250, 250]);
     expect(input.completion.complete).toBe(true);
     expect(input.completedAt).not.toBeNull();
@@ -198,7 +267,10 @@ describe("commissioning record", () => {
     const project = await assignedProject();
     const looks: [string, () => Promise<unknown>][] = [
       ["the record", () => getCommissioning({ viewer: org.viewers.installer, projectId: project.id })],
-      ["the certificate", () => buildCommissioningDocumentInput({ viewer: org.viewers.installer, projectId: project.id, kind: "certificate" })],
+      [
+        "the certificate",
+        () => buildCommissioningDocumentInput({ viewer: org.viewers.installer, projectId: project.id, kind: "certificate" }),
+      ],
     ];
     for (const [what, work] of looks) {
       const { sql } = await sqlDuring(work);
@@ -214,8 +286,20 @@ describe("field uploads", () => {
     const project = await assignedProject();
     const bytes = await pdfBytes();
     const before = await OutboxMessage.count({ where: { toAddress: org.users.coordinator.email } });
-    const file = await uploadProjectFile({ viewer: org.viewers.installer, projectId: project.id, kind: "signed-completion", fileName: "../../etc/Signed form.PDF", bytes });
-    expect(file).toMatchObject({ kind: "signed-completion", fileName: "Signed form.pdf", contentType: "application/pdf", sizeBytes: bytes.length, uploadedBy: "Ivo Installer" });
+    const file = await uploadProjectFile({
+      viewer: org.viewers.installer,
+      projectId: project.id,
+      kind: "signed-completion",
+      fileName: "../../etc/Signed form.PDF",
+      bytes,
+    });
+    expect(file).toMatchObject({
+      kind: "signed-completion",
+      fileName: "Signed form.pdf",
+      contentType: "application/pdf",
+      sizeBytes: bytes.length,
+      uploadedBy: "Ivo Installer",
+    });
     const location = await getProjectFileLocation({ viewer: org.viewers.coordinator, projectId: project.id, fileId: file.id });
     expect(location.key).toMatch(new RegExp(`^projects/${project.id}/field/[0-9a-f-]{36}\\.pdf$`));
     expect(Buffer.from(await getObjectBytes(location.key))).toEqual(Buffer.from(bytes));
@@ -229,25 +313,53 @@ describe("field uploads", () => {
     const project = await assignedProject();
     const viewer = org.viewers.installer;
     const outboxBefore = await OutboxMessage.count();
-    const refused = await uploadProjectFile({ viewer, projectId: project.id, kind: "signed-completion", fileName: "signed.pdf", bytes: executableBytes() }).catch((e) => e);
+    const refused = await uploadProjectFile({
+      viewer,
+      projectId: project.id,
+      kind: "signed-completion",
+      fileName: "signed.pdf",
+      bytes: executableBytes(),
+    }).catch((e) => e);
     expect(refused).toMatchObject({ code: "UNSUPPORTED_TYPE" });
     expect(refused.message).toMatch(/not PDF, JPEG or PNG/);
-    expect(await code(uploadProjectFile({ viewer, projectId: project.id, kind: "site-photo", fileName: "roof.png", bytes: await pdfBytes() }))).toBe("UNSUPPORTED_TYPE");
-    expect(await code(uploadProjectFile({ viewer, projectId: project.id, kind: "site-photo", fileName: "empty.png", bytes: new Uint8Array() }))).toBe("INVALID_INPUT");
+    expect(
+      await code(uploadProjectFile({ viewer, projectId: project.id, kind: "site-photo", fileName: "roof.png", bytes: await pdfBytes() })),
+    ).toBe("UNSUPPORTED_TYPE");
+    expect(
+      await code(uploadProjectFile({ viewer, projectId: project.id, kind: "site-photo", fileName: "empty.png", bytes: new Uint8Array() })),
+    ).toBe("INVALID_INPUT");
     const big = new Uint8Array(MAX_UPLOAD_BYTES + 1);
     big.set(PNG_1PX);
-    expect(await code(uploadProjectFile({ viewer, projectId: project.id, kind: "site-photo", fileName: "big.png", bytes: big }))).toBe("TOO_LARGE");
+    expect(await code(uploadProjectFile({ viewer, projectId: project.id, kind: "site-photo", fileName: "big.png", bytes: big }))).toBe(
+      "TOO_LARGE",
+    );
     expect(await ProjectFile.count({ where: { projectId: project.id } })).toBe(0);
     expect(await OutboxMessage.count()).toBe(outboxBefore);
   });
 
   it("accepts a PNG site photo whatever its name says, and keeps files to the project's viewers", async () => {
     const project = await assignedProject();
-    const photo = await uploadProjectFile({ viewer: org.viewers.installer, projectId: project.id, kind: "site-photo", fileName: "array.jpeg", bytes: new Uint8Array(PNG_1PX) });
+    const photo = await uploadProjectFile({
+      viewer: org.viewers.installer,
+      projectId: project.id,
+      kind: "site-photo",
+      fileName: "array.jpeg",
+      bytes: new Uint8Array(PNG_1PX),
+    });
     expect(photo).toMatchObject({ contentType: "image/png", fileName: "array.png" });
     expect((await listProjectFiles({ viewer: org.viewers.coordinator, projectId: project.id })).map((f) => f.id)).toEqual([photo.id]);
     expect(await code(listProjectFiles({ viewer: org.viewers.otherInstaller, projectId: project.id }))).toBe("NOT_FOUND");
     expect(await code(getProjectFileLocation({ viewer: rival.viewers.admin, projectId: project.id, fileId: photo.id }))).toBe("NOT_FOUND");
-    expect(await code(uploadProjectFile({ viewer: org.viewers.otherInstaller, projectId: project.id, kind: "site-photo", fileName: "x.png", bytes: new Uint8Array(PNG_1PX) }))).toBe("NOT_FOUND");
+    expect(
+      await code(
+        uploadProjectFile({
+          viewer: org.viewers.otherInstaller,
+          projectId: project.id,
+          kind: "site-photo",
+          fileName: "x.png",
+          bytes: new Uint8Array(PNG_1PX),
+        }),
+      ),
+    ).toBe("NOT_FOUND");
   });
 });

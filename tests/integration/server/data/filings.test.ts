@@ -25,7 +25,10 @@ let rival: OrgFixture;
 const failure = async (promise: Promise<unknown>) =>
   promise.then(
     () => null,
-    (e: unknown) => (e instanceof AppError ? { code: e.code, message: e.message, fields: Object.keys(e.fieldErrors ?? {}) } : { code: String(e), message: "", fields: [] }),
+    (e: unknown) =>
+      e instanceof AppError
+        ? { code: e.code, message: e.message, fields: Object.keys(e.fieldErrors ?? {}) }
+        : { code: String(e), message: "", fields: [] },
   );
 
 beforeAll(async () => {
@@ -40,11 +43,31 @@ afterAll(async () => {
 /** A project with its default filings, a design that passes its review, and ready packets of each kind. */
 async function filedProject() {
   const project = await makeProject(org, { installerId: org.users.installer.id });
-  await Design.create({ organizationId: org.organization.id, projectId: project.id, draft: {}, reviewStatus: "pass", reviewSummary: null, updatedById: null });
+  await Design.create({
+    organizationId: org.organization.id,
+    projectId: project.id,
+    draft: {},
+    reviewStatus: "pass",
+    reviewSummary: null,
+    updatedById: null,
+  });
   await db().transaction((transaction) => ensureDefaultFilings(project, { transaction, actorId: null }));
   const packet = (kind: "permit" | "interconnection", revision: number) =>
-    Packet.create({ organizationId: org.organization.id, projectId: project.id, kind, revision, status: "ready", input: {}, overrideReason: null, requestedById: null });
-  const packets = { permit1: await packet("permit", 1), permit2: await packet("permit", 2), interconnection1: await packet("interconnection", 1) };
+    Packet.create({
+      organizationId: org.organization.id,
+      projectId: project.id,
+      kind,
+      revision,
+      status: "ready",
+      input: {},
+      overrideReason: null,
+      requestedById: null,
+    });
+  const packets = {
+    permit1: await packet("permit", 1),
+    permit2: await packet("permit", 2),
+    interconnection1: await packet("interconnection", 1),
+  };
   const filings = await Filing.findAll({ where: { projectId: project.id } });
   const permit = filings.find((f) => f.kind === "permit")!;
   const interconnection = filings.find((f) => f.kind === "interconnection")!;
@@ -68,8 +91,13 @@ describe("filings", () => {
 
   it("refuses to approve a filing without the authority's reference number, and keeps it unchanged", async () => {
     const { project, packets, permit } = await filedProject();
-    await changeFilingStatus({ viewer: coordinator(), input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" } });
-    const refused = await failure(changeFilingStatus({ viewer: coordinator(), input: { filingId: permit.id, status: "approved", sentTo: "", note: "" } }));
+    await changeFilingStatus({
+      viewer: coordinator(),
+      input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" },
+    });
+    const refused = await failure(
+      changeFilingStatus({ viewer: coordinator(), input: { filingId: permit.id, status: "approved", sentTo: "", note: "" } }),
+    );
     expect(refused).toMatchObject({ code: "INVALID_INPUT", fields: ["referenceNumber"] });
     expect((await Filing.findByPk(permit.id))!.status).toBe("submitted");
     expect((await stageOf(project.id)).stage).toBe("permit_filed");
@@ -77,8 +105,19 @@ describe("filings", () => {
 
   it("needs the packet revision to submit, of the filing's own kind", async () => {
     const { packets, permit } = await filedProject();
-    expect(await failure(changeFilingStatus({ viewer: coordinator(), input: { filingId: permit.id, status: "submitted", sentTo: "", note: "" } }))).toMatchObject({ fields: ["packetRevision"] });
-    expect(await failure(changeFilingStatus({ viewer: coordinator(), input: { filingId: permit.id, status: "submitted", packetId: packets.interconnection1.id, sentTo: "", note: "" } }))).toMatchObject({
+    expect(
+      await failure(
+        changeFilingStatus({ viewer: coordinator(), input: { filingId: permit.id, status: "submitted", sentTo: "", note: "" } }),
+      ),
+    ).toMatchObject({ fields: ["packetRevision"] });
+    expect(
+      await failure(
+        changeFilingStatus({
+          viewer: coordinator(),
+          input: { filingId: permit.id, status: "submitted", packetId: packets.interconnection1.id, sentTo: "", note: "" },
+        }),
+      ),
+    ).toMatchObject({
       fields: ["packetId"],
     });
   });
@@ -90,23 +129,66 @@ describe("filings", () => {
     expect(await waiting()).toBe("office");
 
     // Both go in the same day.
-    await changeFilingStatus({ viewer: v, input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, channel: "portal", sentTo: "plan review desk", note: "" } });
-    await changeFilingStatus({ viewer: v, input: { filingId: interconnection.id, status: "submitted", packetId: packets.interconnection1.id, channel: "email", sentTo: "", note: "" } });
+    await changeFilingStatus({
+      viewer: v,
+      input: {
+        filingId: permit.id,
+        status: "submitted",
+        packetId: packets.permit1.id,
+        channel: "portal",
+        sentTo: "plan review desk",
+        note: "",
+      },
+    });
+    await changeFilingStatus({
+      viewer: v,
+      input: {
+        filingId: interconnection.id,
+        status: "submitted",
+        packetId: packets.interconnection1.id,
+        channel: "email",
+        sentTo: "",
+        note: "",
+      },
+    });
     expect((await stageOf(project.id)).stage).toBe("permit_filed");
     expect(await waiting()).toBe("ahj");
     const submitted = (await Filing.findByPk(permit.id))!;
     expect(submitted.nextFollowUpOn).not.toBeNull(); // from the AHJ profile's usual review time
 
     // Round 1 with two items; one answered by a design revision.
-    const { number } = await recordCorrectionRound({ viewer: v, input: { filingId: permit.id, receivedOn: "2026-03-10", items: [{ text: "Show the rapid shutdown initiator location.", reference: "PV-3" }, { text: "Label the AC disconnect.", reference: "NEC 690.13(B)" }] } });
+    const { number } = await recordCorrectionRound({
+      viewer: v,
+      input: {
+        filingId: permit.id,
+        receivedOn: "2026-03-10",
+        items: [
+          { text: "Show the rapid shutdown initiator location.", reference: "PV-3" },
+          { text: "Label the AC disconnect.", reference: "NEC 690.13(B)" },
+        ],
+      },
+    });
     expect(number).toBe(1);
     expect(await waiting()).toBe("office");
     const listed = await listProjectFilings({ viewer: v, projectId: project.id });
     const [first, second] = listed.filings[0]!.rounds[0]!.items;
-    expect(await failure(changeFilingStatus({ viewer: v, input: { filingId: permit.id, status: "resubmitted", packetId: packets.permit2.id, sentTo: "", note: "" } }))).toMatchObject({ fields: ["rounds"] });
-    await answerFilingItem({ viewer: v, input: { itemId: first!.id, response: "Initiator added beside the service on sheet PV-3.", designRevision: 1 } });
+    expect(
+      await failure(
+        changeFilingStatus({
+          viewer: v,
+          input: { filingId: permit.id, status: "resubmitted", packetId: packets.permit2.id, sentTo: "", note: "" },
+        }),
+      ),
+    ).toMatchObject({ fields: ["rounds"] });
+    await answerFilingItem({
+      viewer: v,
+      input: { itemId: first!.id, response: "Initiator added beside the service on sheet PV-3.", designRevision: 1 },
+    });
     await answerFilingItem({ viewer: v, input: { itemId: second!.id, response: "Label added to the label sheet." } });
-    await changeFilingStatus({ viewer: v, input: { filingId: permit.id, status: "resubmitted", packetId: packets.permit2.id, sentTo: "", note: "" } });
+    await changeFilingStatus({
+      viewer: v,
+      input: { filingId: permit.id, status: "resubmitted", packetId: packets.permit2.id, sentTo: "", note: "" },
+    });
     expect(await waiting()).toBe("ahj");
     const afterRound = await listProjectFilings({ viewer: v, projectId: project.id });
     expect(afterRound.filings[0]).toMatchObject({ status: "resubmitted", packetRevision: 2 });
@@ -114,30 +196,77 @@ describe("filings", () => {
     expect(afterRound.filings[0]!.rounds[0]!.answeredAt).not.toBeNull();
 
     // Approved with its number: the stage moves by itself, and the crew is up.
-    await changeFilingStatus({ viewer: v, input: { filingId: permit.id, status: "approved", referenceNumber: "BP-26-0412", on: "2026-03-20", sentTo: "", note: "" } });
+    await changeFilingStatus({
+      viewer: v,
+      input: { filingId: permit.id, status: "approved", referenceNumber: "BP-26-0412", on: "2026-03-20", sentTo: "", note: "" },
+    });
     let p = await stageOf(project.id);
     expect(p.stage).toBe("permit_issued");
     expect(p.waitingOn).toBe("crew");
     expect((await Filing.findByPk(permit.id))!.expiresOn).toBe("2026-09-16"); // 180 days, the profile's default
 
     // A failed final inspection, then a passed re-inspection.
-    const { inspectionId } = await scheduleInspection({ viewer: v, input: { filingId: permit.id, kind: "final", scheduledFor: "2026-04-02", timeWindow: "8–12", inspectorName: "", reinspectionOfId: undefined }, now: new Date("2026-03-30T15:00:00Z") });
+    const { inspectionId } = await scheduleInspection({
+      viewer: v,
+      input: {
+        filingId: permit.id,
+        kind: "final",
+        scheduledFor: "2026-04-02",
+        timeWindow: "8–12",
+        inspectorName: "",
+        reinspectionOfId: undefined,
+      },
+      now: new Date("2026-03-30T15:00:00Z"),
+    });
     expect(await waiting()).toBe("crew"); // booked: the crew has until the day
     await db().transaction((transaction) => refreshProjectFacts(project.id, { transaction, now: new Date("2026-04-03T15:00:00Z") }));
     expect(await waiting()).toBe("ahj"); // the day passed with no result recorded
-    await recordInspectionResult({ viewer: v, input: { inspectionId, result: "failed", resultOn: "2026-04-02", inspectorName: "R. Vale", notes: "", items: [{ text: "Conduit strap missing at the roof edge", reference: "" }] } });
+    await recordInspectionResult({
+      viewer: v,
+      input: {
+        inspectionId,
+        result: "failed",
+        resultOn: "2026-04-02",
+        inspectorName: "R. Vale",
+        notes: "",
+        items: [{ text: "Conduit strap missing at the roof edge", reference: "" }],
+      },
+    });
     p = await stageOf(project.id);
     expect(p.stage).toBe("installed"); // an inspection happened, so the work is built
     expect(p.waitingOn).toBe("crew");
-    const re = await scheduleInspection({ viewer: v, input: { filingId: permit.id, kind: "final", scheduledFor: "2026-04-09", timeWindow: "", inspectorName: "", reinspectionOfId: inspectionId } });
-    await recordInspectionResult({ viewer: v, input: { inspectionId: re.inspectionId, result: "passed", resultOn: "2026-04-09", inspectorName: "", notes: "", items: [] } });
+    const re = await scheduleInspection({
+      viewer: v,
+      input: {
+        filingId: permit.id,
+        kind: "final",
+        scheduledFor: "2026-04-09",
+        timeWindow: "",
+        inspectorName: "",
+        reinspectionOfId: inspectionId,
+      },
+    });
+    await recordInspectionResult({
+      viewer: v,
+      input: { inspectionId: re.inspectionId, result: "passed", resultOn: "2026-04-09", inspectorName: "", notes: "", items: [] },
+    });
     expect((await stageOf(project.id)).stage).toBe("utility_filed"); // the interconnection went in on day one
 
     // The utility approves; the field record is completed; PTO.
-    await changeFilingStatus({ viewer: v, input: { filingId: interconnection.id, status: "approved", referenceNumber: "IA-55120", sentTo: "", note: "" } });
+    await changeFilingStatus({
+      viewer: v,
+      input: { filingId: interconnection.id, status: "approved", referenceNumber: "IA-55120", sentTo: "", note: "" },
+    });
     expect((await stageOf(project.id)).stage).toBe("utility_approved");
     expect(await waiting()).toBe("crew");
-    await CommissioningRecord.create({ organizationId: org.organization.id, projectId: project.id, readings: {}, status: "complete", completedAt: new Date("2026-04-15T18:00:00Z"), updatedById: null });
+    await CommissioningRecord.create({
+      organizationId: org.organization.id,
+      projectId: project.id,
+      readings: {},
+      status: "complete",
+      completedAt: new Date("2026-04-15T18:00:00Z"),
+      updatedById: null,
+    });
     await db().transaction((transaction) => refreshProjectFacts(project.id, { transaction }));
     expect((await stageOf(project.id)).stage).toBe("commissioned");
     expect(await waiting()).toBe("utility");
@@ -148,7 +277,15 @@ describe("filings", () => {
 
     // The timeline names the facts that moved the stage.
     const moves = await StageChange.findAll({ where: { projectId: project.id, cause: "facts" }, order: [["createdAt", "ASC"]] });
-    expect(moves.map((m) => m.toStage)).toEqual(["permit_filed", "permit_issued", "installed", "utility_filed", "utility_approved", "commissioned", "pto_received"]);
+    expect(moves.map((m) => m.toStage)).toEqual([
+      "permit_filed",
+      "permit_issued",
+      "installed",
+      "utility_filed",
+      "utility_approved",
+      "commissioned",
+      "pto_received",
+    ]);
     expect(moves.find((m) => m.toStage === "permit_issued")!.note).toBe("Permit issued with its number");
     expect(await AuditEvent.count({ where: { entityType: "filing", entityId: permit.id } })).toBeGreaterThanOrEqual(8);
   });
@@ -156,22 +293,72 @@ describe("filings", () => {
   it("books inspections only under an issued permit, and a re-inspection only of a failed one", async () => {
     const { packets, permit } = await filedProject();
     const v = coordinator();
-    expect(await failure(scheduleInspection({ viewer: v, input: { filingId: permit.id, kind: "final", scheduledFor: "2026-04-02", timeWindow: "", inspectorName: "" } }))).toMatchObject({ code: "CONFLICT" });
-    await changeFilingStatus({ viewer: v, input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" } });
-    await changeFilingStatus({ viewer: v, input: { filingId: permit.id, status: "approved", referenceNumber: "BP-1", sentTo: "", note: "" } });
-    expect(await failure(scheduleInspection({ viewer: v, input: { filingId: permit.id, kind: "meter_set", scheduledFor: "2026-04-02", timeWindow: "", inspectorName: "" } }))).toMatchObject({ fields: ["kind"] });
-    const { inspectionId } = await scheduleInspection({ viewer: v, input: { filingId: permit.id, kind: "rough", scheduledFor: "2026-04-02", timeWindow: "", inspectorName: "" } });
-    expect(await failure(scheduleInspection({ viewer: v, input: { filingId: permit.id, kind: "final", scheduledFor: "2026-04-09", timeWindow: "", inspectorName: "", reinspectionOfId: inspectionId } }))).toMatchObject({
+    expect(
+      await failure(
+        scheduleInspection({
+          viewer: v,
+          input: { filingId: permit.id, kind: "final", scheduledFor: "2026-04-02", timeWindow: "", inspectorName: "" },
+        }),
+      ),
+    ).toMatchObject({ code: "CONFLICT" });
+    await changeFilingStatus({
+      viewer: v,
+      input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" },
+    });
+    await changeFilingStatus({
+      viewer: v,
+      input: { filingId: permit.id, status: "approved", referenceNumber: "BP-1", sentTo: "", note: "" },
+    });
+    expect(
+      await failure(
+        scheduleInspection({
+          viewer: v,
+          input: { filingId: permit.id, kind: "meter_set", scheduledFor: "2026-04-02", timeWindow: "", inspectorName: "" },
+        }),
+      ),
+    ).toMatchObject({ fields: ["kind"] });
+    const { inspectionId } = await scheduleInspection({
+      viewer: v,
+      input: { filingId: permit.id, kind: "rough", scheduledFor: "2026-04-02", timeWindow: "", inspectorName: "" },
+    });
+    expect(
+      await failure(
+        scheduleInspection({
+          viewer: v,
+          input: {
+            filingId: permit.id,
+            kind: "final",
+            scheduledFor: "2026-04-09",
+            timeWindow: "",
+            inspectorName: "",
+            reinspectionOfId: inspectionId,
+          },
+        }),
+      ),
+    ).toMatchObject({
       fields: ["reinspectionOfId"],
     });
-    expect(await failure(recordInspectionResult({ viewer: v, input: { inspectionId, result: "failed", resultOn: "2026-04-02", inspectorName: "", notes: "", items: [] } }))).toMatchObject({ fields: ["items"] });
+    expect(
+      await failure(
+        recordInspectionResult({
+          viewer: v,
+          input: { inspectionId, result: "failed", resultOn: "2026-04-02", inspectorName: "", notes: "", items: [] },
+        }),
+      ),
+    ).toMatchObject({ fields: ["items"] });
   });
 
   it("marks a submitted filing as owing a new revision when the design changes, and the office holds the project", async () => {
     const { project, packets, permit, interconnection } = await filedProject();
-    await changeFilingStatus({ viewer: coordinator(), input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" } });
+    await changeFilingStatus({
+      viewer: coordinator(),
+      input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" },
+    });
     expect((await stageOf(project.id)).waitingOn).toBe("ahj"); // the interconnection application still being prepared does not hold it
-    await changeFilingStatus({ viewer: coordinator(), input: { filingId: interconnection.id, status: "submitted", packetId: packets.interconnection1.id, sentTo: "", note: "" } });
+    await changeFilingStatus({
+      viewer: coordinator(),
+      input: { filingId: interconnection.id, status: "submitted", packetId: packets.interconnection1.id, sentTo: "", note: "" },
+    });
     expect((await stageOf(project.id)).waitingOn).toBe("ahj");
     await db().transaction(async (transaction) => {
       expect(await markRevisionNeeded(project.id, { transaction })).toBe(2);
@@ -184,9 +371,19 @@ describe("filings", () => {
   it("keeps filings within their organization and away from installers' pens", async () => {
     const { project, permit } = await filedProject();
     expect(await failure(listProjectFilings({ viewer: rival.viewers.admin, projectId: project.id }))).toMatchObject({ code: "NOT_FOUND" });
-    expect(await failure(changeFilingStatus({ viewer: rival.viewers.admin, input: { filingId: permit.id, status: "withdrawn", sentTo: "", note: "" } }))).toMatchObject({ code: "NOT_FOUND" });
-    expect(await failure(changeFilingStatus({ viewer: org.viewers.installer, input: { filingId: permit.id, status: "withdrawn", sentTo: "", note: "" } }))).toMatchObject({ code: "FORBIDDEN" });
-    expect(await failure(listProjectFilings({ viewer: org.viewers.otherInstaller, projectId: project.id }))).toMatchObject({ code: "NOT_FOUND" });
+    expect(
+      await failure(
+        changeFilingStatus({ viewer: rival.viewers.admin, input: { filingId: permit.id, status: "withdrawn", sentTo: "", note: "" } }),
+      ),
+    ).toMatchObject({ code: "NOT_FOUND" });
+    expect(
+      await failure(
+        changeFilingStatus({ viewer: org.viewers.installer, input: { filingId: permit.id, status: "withdrawn", sentTo: "", note: "" } }),
+      ),
+    ).toMatchObject({ code: "FORBIDDEN" });
+    expect(await failure(listProjectFilings({ viewer: org.viewers.otherInstaller, projectId: project.id }))).toMatchObject({
+      code: "NOT_FOUND",
+    });
     expect((await listProjectFilings({ viewer: org.viewers.installer, projectId: project.id })).filings).toHaveLength(2);
   });
 });

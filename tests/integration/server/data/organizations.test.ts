@@ -8,7 +8,11 @@ import { makeOrganization, type OrgFixture } from "../../support/fixtures";
 
 let org: OrgFixture;
 let rival: OrgFixture;
-const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+const code = async (promise: Promise<unknown>) =>
+  promise.then(
+    () => "resolved",
+    (e: unknown) => (e instanceof AppError ? e.code : String(e)),
+  );
 
 beforeAll(async () => {
   org = await makeOrganization("Org settings");

@@ -23,7 +23,11 @@ vi.mock("@/lib/server/services/jobs", () => ({ enqueuePacketJob: vi.fn(async () 
 let org: OrgFixture;
 let rival: OrgFixture;
 let ids: CatalogIds;
-const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+const code = async (promise: Promise<unknown>) =>
+  promise.then(
+    () => "resolved",
+    (e: unknown) => (e instanceof AppError ? e.code : String(e)),
+  );
 
 beforeAll(async () => {
   org = await makeOrganization("Packets");
@@ -86,7 +90,10 @@ describe("packets", () => {
     const key = `orgs/${org.organization.id}/test/datasheet-${queued.id}.pdf`;
     await putObject({ key, body: await sheet.save(), contentType: "application/pdf" });
     const row = (await Packet.findByPk(queued.id))!;
-    const input = { ...(row.input as unknown as PacketInput), datasheets: [{ title: "NM-380B module data sheet", fileName: "nm-380b.pdf", objectKey: key }] };
+    const input = {
+      ...(row.input as unknown as PacketInput),
+      datasheets: [{ title: "NM-380B module data sheet", fileName: "nm-380b.pdf", objectKey: key }],
+    };
     await row.update({ input: input as unknown as Record<string, unknown> });
 
     await generatePacket(queued.id);
@@ -106,12 +113,21 @@ describe("packets", () => {
 
   it("refuses a failing design unless a reason is written, and prints and records the reason", async () => {
     const project = await projectWithDesign("15"); // 15 × 42.5 V at −20 °C is above 600 V
-    const refused = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "interconnection" }).catch((e) => e);
+    const refused = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "interconnection" }).catch(
+      (e) => e,
+    );
     expect(refused.code).toBe("CONFLICT");
     expect(refused.fieldErrors.overrideReason).toBeDefined();
-    const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "interconnection", overrideReason: "AHJ accepted the engineer's letter for the string length" });
+    const queued = await requestPacket({
+      viewer: org.viewers.coordinator,
+      projectId: project.id,
+      kind: "interconnection",
+      overrideReason: "AHJ accepted the engineer's letter for the string length",
+    });
     const row = await Packet.findByPk(queued.id);
-    expect((row!.input as { override: { reason: string } }).override.reason).toBe("AHJ accepted the engineer's letter for the string length");
+    expect((row!.input as { override: { reason: string } }).override.reason).toBe(
+      "AHJ accepted the engineer's letter for the string length",
+    );
     const audit = await AuditEvent.findOne({ where: { entityId: project.id, action: "packet.requested-with-override" } });
     expect(audit?.changes.overrideReason?.after).toBe("AHJ accepted the engineer's letter for the string length");
   });
@@ -122,7 +138,9 @@ describe("packets", () => {
     // A data sheet that is not in storage makes the generation fail part way.
     const row = await Packet.findByPk(queued.id);
     const input = row!.input as { datasheets: unknown[] };
-    await row!.update({ input: { ...input, datasheets: [{ title: "Missing", fileName: "missing.pdf", objectKey: "orgs/none/missing.pdf" }] } });
+    await row!.update({
+      input: { ...input, datasheets: [{ title: "Missing", fileName: "missing.pdf", objectKey: "orgs/none/missing.pdf" }] },
+    });
     await generatePacket(queued.id);
     const [failed] = await listPackets({ viewer: org.viewers.coordinator, projectId: project.id });
     expect(failed).toMatchObject({ status: "failed", sha256: null });
@@ -133,13 +151,18 @@ describe("packets", () => {
     await row!.update({ input });
     await retryPacket({ viewer: org.viewers.coordinator, packetId: failed.id });
     await generatePacket(failed.id);
-    expect((await listPackets({ viewer: org.viewers.coordinator, projectId: project.id }))[0]).toMatchObject({ revision: 1, status: "ready" });
+    expect((await listPackets({ viewer: org.viewers.coordinator, projectId: project.id }))[0]).toMatchObject({
+      revision: 1,
+      status: "ready",
+    });
   });
 
   it("counts a generation abandoned by its worker as failed, so it can be retried", async () => {
     const project = await projectWithDesign();
     const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" });
-    await db().query(`update packets set status = 'running', updated_at = now() - interval '11 minutes' where id = :id`, { replacements: { id: queued.id } });
+    await db().query(`update packets set status = 'running', updated_at = now() - interval '11 minutes' where id = :id`, {
+      replacements: { id: queued.id },
+    });
     // Shown as failed at once; listing never writes, the worker's maintenance does.
     const [row] = await listPackets({ viewer: org.viewers.coordinator, projectId: project.id });
     expect(row).toMatchObject({ status: "failed" });
@@ -153,7 +176,9 @@ describe("packets", () => {
   it("retries an abandoned generation even before maintenance marked it failed", async () => {
     const project = await projectWithDesign();
     const queued = await requestPacket({ viewer: org.viewers.coordinator, projectId: project.id, kind: "permit" });
-    await db().query(`update packets set status = 'queued', updated_at = now() - interval '11 minutes' where id = :id`, { replacements: { id: queued.id } });
+    await db().query(`update packets set status = 'queued', updated_at = now() - interval '11 minutes' where id = :id`, {
+      replacements: { id: queued.id },
+    });
     const retried = await retryPacket({ viewer: org.viewers.coordinator, packetId: queued.id });
     expect(retried.status).toBe("queued");
     expect((await listPackets({ viewer: org.viewers.coordinator, projectId: project.id }))[0].status).toBe("queued");
@@ -185,7 +210,10 @@ describe("packets", () => {
     expect(audits).toHaveLength(1);
     expect(audits[0]).toMatchObject({ organizationId: org.organization.id, actorId: org.viewers.coordinator.id });
     // Written in the same transaction as the ready mark: one commit stamps both with the same transaction time.
-    const [[stamps]] = (await db().query(`select (select xmin::text from packets where id = :packet) as packet, (select xmin::text from audit_events where id = :audit) as audit`, { replacements: { packet: queued.id, audit: audits[0].id } })) as [{ packet: string; audit: string }[], unknown];
+    const [[stamps]] = (await db().query(
+      `select (select xmin::text from packets where id = :packet) as packet, (select xmin::text from audit_events where id = :audit) as audit`,
+      { replacements: { packet: queued.id, audit: audits[0].id } },
+    )) as [{ packet: string; audit: string }[], unknown];
     expect(stamps.packet).toBe(stamps.audit);
   });
 

@@ -22,9 +22,17 @@ vi.mock("@/lib/server/services/storage", async (importOriginal) => {
 
 let org: OrgFixture;
 let rival: OrgFixture;
-const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+const code = async (promise: Promise<unknown>) =>
+  promise.then(
+    () => "resolved",
+    (e: unknown) => (e instanceof AppError ? e.code : String(e)),
+  );
 const PNG_1PX = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
-const stored = (key: string) => getObjectBytes(key).then(() => true, () => false);
+const stored = (key: string) =>
+  getObjectBytes(key).then(
+    () => true,
+    () => false,
+  );
 
 beforeAll(async () => {
   org = await makeOrganization("Uploads");
@@ -46,7 +54,11 @@ describe("removing an upload", () => {
     const project = await makeProject(org, { installerId: org.users.installer.id });
     const { file, key } = await photoBy(org.viewers.installer, project.id);
     expect(await stored(key)).toBe(true);
-    expect((await listProjectFiles({ viewer: org.viewers.installer, projectId: project.id }))[0]).toMatchObject({ id: file.id, hasThumbnail: true, canRemove: true });
+    expect((await listProjectFiles({ viewer: org.viewers.installer, projectId: project.id }))[0]).toMatchObject({
+      id: file.id,
+      hasThumbnail: true,
+      canRemove: true,
+    });
 
     await deleteProjectFile({ viewer: org.viewers.installer, projectId: project.id, fileId: file.id });
     expect(await listProjectFiles({ viewer: org.viewers.coordinator, projectId: project.id })).toEqual([]);
@@ -62,20 +74,31 @@ describe("removing an upload", () => {
     const project = await makeProject(org, { installerId: org.users.installer.id });
     const byCrew = await photoBy(org.viewers.installer, project.id, "crew.png");
     const byOffice = await photoBy(org.viewers.coordinator, project.id, "office.png");
-    const flags = async (viewer: OrgFixture["viewers"]["admin"]) => Object.fromEntries((await listProjectFiles({ viewer, projectId: project.id })).map((f) => [f.fileName, f.canRemove]));
+    const flags = async (viewer: OrgFixture["viewers"]["admin"]) =>
+      Object.fromEntries((await listProjectFiles({ viewer, projectId: project.id })).map((f) => [f.fileName, f.canRemove]));
     expect(await flags(org.viewers.installer)).toEqual({ "crew.png": true, "office.png": false });
     expect(await flags(org.viewers.coordinator)).toEqual({ "crew.png": true, "office.png": true });
 
-    expect(await code(deleteProjectFile({ viewer: org.viewers.installer, projectId: project.id, fileId: byOffice.file.id }))).toBe("FORBIDDEN");
-    expect(await code(deleteProjectFile({ viewer: org.viewers.otherInstaller, projectId: project.id, fileId: byCrew.file.id }))).toBe("NOT_FOUND");
+    expect(await code(deleteProjectFile({ viewer: org.viewers.installer, projectId: project.id, fileId: byOffice.file.id }))).toBe(
+      "FORBIDDEN",
+    );
+    expect(await code(deleteProjectFile({ viewer: org.viewers.otherInstaller, projectId: project.id, fileId: byCrew.file.id }))).toBe(
+      "NOT_FOUND",
+    );
     expect(await code(deleteProjectFile({ viewer: rival.viewers.admin, projectId: project.id, fileId: byCrew.file.id }))).toBe("NOT_FOUND");
-    expect(await code(deleteProjectFile({ viewer: { ...org.viewers.admin, apiTokenId: "token" }, projectId: project.id, fileId: byCrew.file.id }))).toBe("FORBIDDEN");
+    expect(
+      await code(
+        deleteProjectFile({ viewer: { ...org.viewers.admin, apiTokenId: "token" }, projectId: project.id, fileId: byCrew.file.id }),
+      ),
+    ).toBe("FORBIDDEN");
     expect(await stored(byCrew.key)).toBe(true);
 
     // Once the utility granted PTO the uploads are the record as filed.
     await Project.update({ stage: "pto_received" }, { where: { id: project.id } });
     expect(await flags(org.viewers.admin)).toEqual({ "crew.png": false, "office.png": false });
-    const kept = await deleteProjectFile({ viewer: org.viewers.admin, projectId: project.id, fileId: byCrew.file.id }).catch((e: AppError) => e);
+    const kept = await deleteProjectFile({ viewer: org.viewers.admin, projectId: project.id, fileId: byCrew.file.id }).catch(
+      (e: AppError) => e,
+    );
     expect(kept).toMatchObject({ code: "FORBIDDEN", message: "Uploads are kept as filed once the project reaches PTO received." });
 
     await Project.update({ stage: "installed" }, { where: { id: project.id } });

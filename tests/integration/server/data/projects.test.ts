@@ -3,7 +3,15 @@ import { Op } from "sequelize";
 import { AuditEvent, CommissioningRecord, OutboxMessage, Project, StageChange } from "@/models";
 import { AppError } from "@/lib/errors";
 import { ProjectInput, ProjectListQuery } from "@/lib/schemas/project";
-import { STAGE_MAIL_HOLD_SECONDS, changeProjectStage, createProject, getProjectById, listProjects, listStageChanges, updateProject } from "@/lib/server/data/projects";
+import {
+  STAGE_MAIL_HOLD_SECONDS,
+  changeProjectStage,
+  createProject,
+  getProjectById,
+  listProjects,
+  listStageChanges,
+  updateProject,
+} from "@/lib/server/data/projects";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, projectFormValues, type OrgFixture } from "../../support/fixtures";
 
@@ -11,12 +19,21 @@ let acme: OrgFixture;
 let rival: OrgFixture;
 
 const query = (q: Partial<Record<string, unknown>> = {}) => ProjectListQuery.parse(q);
-const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+const code = async (promise: Promise<unknown>) =>
+  promise.then(
+    () => "resolved",
+    (e: unknown) => (e instanceof AppError ? e.code : String(e)),
+  );
 
 beforeAll(async () => {
   acme = await makeOrganization("Acme");
   rival = await makeOrganization("Rival");
-  await makeProject(acme, { customerName: "Hollis Brandt", utilityAccountNumber: "ZX-77001", stage: "permit_filed", installerId: acme.users.installer.id });
+  await makeProject(acme, {
+    customerName: "Hollis Brandt",
+    utilityAccountNumber: "ZX-77001",
+    stage: "permit_filed",
+    installerId: acme.users.installer.id,
+  });
   await makeProject(acme, { customerName: "Mira Stoneleigh", street: "9 Quarry Bend", stage: "draft" });
   await makeProject(acme, { customerName: "Perrin 50%_Off", stage: "closed", installerId: acme.users.otherInstaller.id });
   await makeProject(rival, { customerName: "Hollis Rival-Brandt" });
@@ -88,7 +105,9 @@ describe("createProject and updateProject", () => {
   });
 
   it("refuses another organization's jurisdiction and an installer in the coordinator field", async () => {
-    const values = ProjectInput.parse(projectFormValues(acme, { jurisdictionId: rival.jurisdiction.id, coordinatorId: acme.users.installer.id }));
+    const values = ProjectInput.parse(
+      projectFormValues(acme, { jurisdictionId: rival.jurisdiction.id, coordinatorId: acme.users.installer.id }),
+    );
     const error = await createProject({ viewer: acme.viewers.coordinator, values }).catch((e) => e);
     expect(error).toBeInstanceOf(AppError);
     expect(error.code).toBe("INVALID_INPUT");
@@ -97,7 +116,11 @@ describe("createProject and updateProject", () => {
 
   it("records what changed on update", async () => {
     const project = await createProject({ viewer: acme.viewers.coordinator, values: ProjectInput.parse(projectFormValues(acme)) });
-    await updateProject({ viewer: acme.viewers.coordinator, projectId: project.id, values: ProjectInput.parse(projectFormValues(acme, { mainBreakerA: "175" })) });
+    await updateProject({
+      viewer: acme.viewers.coordinator,
+      projectId: project.id,
+      values: ProjectInput.parse(projectFormValues(acme, { mainBreakerA: "175" })),
+    });
     const event = await AuditEvent.findOne({ where: { entityId: project.id, action: "project.updated" } });
     expect(event?.changes).toEqual({ mainBreakerA: { before: 200, after: 175 } });
   });
@@ -112,7 +135,12 @@ describe("createProject and updateProject", () => {
 describe("changeProjectStage", () => {
   it("moves the stage and writes the timeline entry and the audit event together", async () => {
     const project = await makeProject(acme, { stage: "design_checked" });
-    const moved = await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "permit_filed", note: "Filed at the counter" });
+    const moved = await changeProjectStage({
+      viewer: acme.viewers.coordinator,
+      projectId: project.id,
+      toStage: "permit_filed",
+      note: "Filed at the counter",
+    });
     expect(moved.stage).toBe("permit_filed");
     expect(moved.daysInStage).toBe(0);
     const change = await StageChange.findOne({ where: { projectId: project.id, toStage: "permit_filed" } });
@@ -123,23 +151,49 @@ describe("changeProjectStage", () => {
 
   it("asks for a note to mark a project commissioned while its field record is open or the signed form is missing", async () => {
     const project = await makeProject(acme, { stage: "utility_approved", installerId: acme.users.installer.id });
-    const refused = await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "commissioned", note: "" }).catch((e) => e);
+    const refused = await changeProjectStage({
+      viewer: acme.viewers.coordinator,
+      projectId: project.id,
+      toStage: "commissioned",
+      note: "",
+    }).catch((e) => e);
     expect(refused).toMatchObject({ code: "CONFLICT" });
     expect(refused.message).toMatch(/commissioning record is not complete/);
     expect(refused.fieldErrors.note[0]).toMatch(/^Say why/);
     expect((await getProjectById({ viewer: acme.viewers.coordinator, projectId: project.id })).stage).toBe("utility_approved");
 
-    await CommissioningRecord.create({ organizationId: acme.organization.id, projectId: project.id, readings: {}, status: "complete", updatedById: null });
-    const unsigned = await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "commissioned", note: "" }).catch((e) => e);
+    await CommissioningRecord.create({
+      organizationId: acme.organization.id,
+      projectId: project.id,
+      readings: {},
+      status: "complete",
+      updatedById: null,
+    });
+    const unsigned = await changeProjectStage({
+      viewer: acme.viewers.coordinator,
+      projectId: project.id,
+      toStage: "commissioned",
+      note: "",
+    }).catch((e) => e);
     expect(unsigned.message).toMatch(/No signed certificate/);
 
-    const moved = await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "commissioned", note: "Signed form on paper in the office file" });
+    const moved = await changeProjectStage({
+      viewer: acme.viewers.coordinator,
+      projectId: project.id,
+      toStage: "commissioned",
+      note: "Signed form on paper in the office file",
+    });
     expect(moved.stage).toBe("commissioned");
   });
 
   it("e-mails the installer and the coordinator through the outbox, but not whoever made the change", async () => {
     const project = await makeProject(acme, { stage: "utility_approved", installerId: acme.users.installer.id });
-    await changeProjectStage({ viewer: acme.viewers.admin, projectId: project.id, toStage: "commissioned", note: "Commissioning record complete" });
+    await changeProjectStage({
+      viewer: acme.viewers.admin,
+      projectId: project.id,
+      toStage: "commissioned",
+      note: "Commissioning record complete",
+    });
     const number = (await Project.findByPk(project.id))!.number;
     const sent = await OutboxMessage.findAll({ where: { subject: { [Op.like]: `Project ${number} is now “Commissioned”%` } } });
     expect(sent.map((m) => m.toAddress).sort()).toEqual([acme.users.coordinator.email, acme.users.installer.email].sort());
@@ -150,15 +204,30 @@ describe("changeProjectStage", () => {
     await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "pto_received", note: "" });
     const second = await OutboxMessage.findAll({ where: { subject: { [Op.like]: `Project ${number} is now “PTO received”%` } } });
     expect(second.map((m) => m.toAddress)).toEqual([acme.users.installer.email]);
-    expect(second[0]!.textBody).toMatch(/moved it from “Utility approved” to “Commissioned”[\s\S]*moved it from “Commissioned” to “PTO received”/);
-    const forInstaller = await OutboxMessage.count({ where: { toAddress: acme.users.installer.email, coalesceKey: `stage-change:${project.id}` } });
+    expect(second[0]!.textBody).toMatch(
+      /moved it from “Utility approved” to “Commissioned”[\s\S]*moved it from “Commissioned” to “PTO received”/,
+    );
+    const forInstaller = await OutboxMessage.count({
+      where: { toAddress: acme.users.installer.email, coalesceKey: `stage-change:${project.id}` },
+    });
     expect(forInstaller).toBe(1);
   });
 
   it("gathers a burst of moves of one project into one e-mail per person, held briefly for more", async () => {
     // Defect: ten stage changes in a few seconds sent the installer ten e-mails.
     const project = await makeProject(acme, { stage: "draft", installerId: acme.users.installer.id });
-    const path = ["design_checked", "permit_filed", "permit_issued", "installed", "inspection_passed", "installed", "inspection_passed", "utility_filed", "utility_approved", "utility_filed"] as const;
+    const path = [
+      "design_checked",
+      "permit_filed",
+      "permit_issued",
+      "installed",
+      "inspection_passed",
+      "installed",
+      "inspection_passed",
+      "utility_filed",
+      "utility_approved",
+      "utility_filed",
+    ] as const;
     const before = Date.now();
     for (const toStage of path) await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage, note: "" });
     const held = await OutboxMessage.findAll({ where: { coalesceKey: `stage-change:${project.id}` } });
@@ -172,8 +241,12 @@ describe("changeProjectStage", () => {
 
   it("refuses installers and the same stage, and changes nothing", async () => {
     const project = await makeProject(acme, { stage: "installed", installerId: acme.users.installer.id });
-    expect(await code(changeProjectStage({ viewer: acme.viewers.installer, projectId: project.id, toStage: "closed", note: "" }))).toBe("FORBIDDEN");
-    expect(await code(changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "installed", note: "" }))).toBe("CONFLICT");
+    expect(await code(changeProjectStage({ viewer: acme.viewers.installer, projectId: project.id, toStage: "closed", note: "" }))).toBe(
+      "FORBIDDEN",
+    );
+    expect(
+      await code(changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "installed", note: "" })),
+    ).toBe("CONFLICT");
     expect(await StageChange.count({ where: { projectId: project.id } })).toBe(0);
     expect((await getProjectById({ viewer: acme.viewers.coordinator, projectId: project.id })).stage).toBe("installed");
   });

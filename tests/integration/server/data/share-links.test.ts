@@ -1,7 +1,14 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { OutboxMessage, Packet, ShareLink, ShareLinkAccess, ShareLinkMiss, type Project } from "@/models";
 import { AppError } from "@/lib/errors";
-import { createShareLink, getSharedPacketFile, listShareLinks, openShareLink, revokeShareLink, SHARE_THROTTLE } from "@/lib/server/data/share-links";
+import {
+  createShareLink,
+  getSharedPacketFile,
+  listShareLinks,
+  openShareLink,
+  revokeShareLink,
+  SHARE_THROTTLE,
+} from "@/lib/server/data/share-links";
 import { hashToken } from "@/lib/server/tokens";
 import { db } from "@/lib/server/db";
 import { closeDb } from "../../support/db";
@@ -9,14 +16,31 @@ import { makeOrganization, makeProject, type OrgFixture } from "../../support/fi
 
 let org: OrgFixture;
 let rival: OrgFixture;
-const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+const code = async (promise: Promise<unknown>) =>
+  promise.then(
+    () => "resolved",
+    (e: unknown) => (e instanceof AppError ? e.code : String(e)),
+  );
 const tokenOf = (url: string) => url.split("/share/")[1];
 const client = (address: string) => ({ address, userAgent: "fixture-browser/1.0" });
 
 // Ready rows stand in for generated packets: sharing reads only their status, revision and stored key.
 async function packet(project: Project, revision: number, status: "ready" | "failed" = "ready") {
-  const input = { project: { number: 7, customerName: "Fixture Customer", street: "1 Fixture Way", city: "Testville", state: "CO", postalCode: "80000" } };
-  return Packet.create({ organizationId: project.organizationId, projectId: project.id, kind: "permit", revision, status, input, overrideReason: null, requestedById: null, objectKey: status === "ready" ? `packets/fixture-${project.id}-${revision}.pdf` : null, readyAt: new Date() });
+  const input = {
+    project: { number: 7, customerName: "Fixture Customer", street: "1 Fixture Way", city: "Testville", state: "CO", postalCode: "80000" },
+  };
+  return Packet.create({
+    organizationId: project.organizationId,
+    projectId: project.id,
+    kind: "permit",
+    revision,
+    status,
+    input,
+    overrideReason: null,
+    requestedById: null,
+    objectKey: status === "ready" ? `packets/fixture-${project.id}-${revision}.pdf` : null,
+    readyAt: new Date(),
+  });
 }
 
 beforeAll(async () => {
@@ -32,13 +56,21 @@ describe("share links", () => {
   it("stores only the token's hash, mails the recipient and opens the shared revisions", async () => {
     const project = await makeProject(org);
     const rev1 = await packet(project, 1);
-    const { url, link } = await createShareLink({ viewer: org.viewers.coordinator, projectId: project.id, input: { packetIds: [rev1.id], recipientEmail: "Inspector@AHJ.example", note: "For the rough-in" } });
+    const { url, link } = await createShareLink({
+      viewer: org.viewers.coordinator,
+      projectId: project.id,
+      input: { packetIds: [rev1.id], recipientEmail: "Inspector@AHJ.example", note: "For the rough-in" },
+    });
     const token = tokenOf(url);
     expect(token.length).toBeGreaterThanOrEqual(22); // ≥ 128 bits in base64url
     const row = await ShareLink.findByPk(link.id);
     expect(row!.tokenHash).toBe(hashToken(token));
     expect(JSON.stringify(row!.toJSON())).not.toContain(token);
-    expect(link).toMatchObject({ status: "active", recipientEmail: "inspector@ahj.example", revisions: [{ label: "Permit packet Rev 1" }] });
+    expect(link).toMatchObject({
+      status: "active",
+      recipientEmail: "inspector@ahj.example",
+      revisions: [{ label: "Permit packet Rev 1" }],
+    });
     expect(Math.round((new Date(link.expiresAt).getTime() - Date.now()) / 86_400_000)).toBe(30);
     const mail = await OutboxMessage.findOne({ where: { toAddress: "inspector@ahj.example" }, order: [["createdAt", "DESC"]] });
     expect(mail!.textBody).toContain(url);
@@ -61,15 +93,29 @@ describe("share links", () => {
     const foreign = await packet(other, 1);
     const ready = await packet(project, 2);
     for (const packetId of [failed.id, foreign.id]) {
-      expect(await code(createShareLink({ viewer: org.viewers.coordinator, projectId: project.id, input: { packetIds: [ready.id, packetId] } }))).toBe("INVALID_INPUT");
+      expect(
+        await code(createShareLink({ viewer: org.viewers.coordinator, projectId: project.id, input: { packetIds: [ready.id, packetId] } })),
+      ).toBe("INVALID_INPUT");
     }
-    expect(await code(createShareLink({ viewer: org.viewers.coordinator, projectId: project.id, input: { packetIds: [ready.id], expiresInDays: 366 } }))).toBe("INVALID_INPUT");
+    expect(
+      await code(
+        createShareLink({ viewer: org.viewers.coordinator, projectId: project.id, input: { packetIds: [ready.id], expiresInDays: 366 } }),
+      ),
+    ).toBe("INVALID_INPUT");
     await project.update({ installerId: org.users.installer.id });
-    expect(await code(createShareLink({ viewer: org.viewers.installer, projectId: project.id, input: { packetIds: [ready.id] } }))).toBe("FORBIDDEN");
-    expect(await code(createShareLink({ viewer: rival.viewers.coordinator, projectId: project.id, input: { packetIds: [ready.id] } }))).toBe("NOT_FOUND");
+    expect(await code(createShareLink({ viewer: org.viewers.installer, projectId: project.id, input: { packetIds: [ready.id] } }))).toBe(
+      "FORBIDDEN",
+    );
+    expect(
+      await code(createShareLink({ viewer: rival.viewers.coordinator, projectId: project.id, input: { packetIds: [ready.id] } })),
+    ).toBe("NOT_FOUND");
     expect(await code(listShareLinks({ viewer: rival.viewers.admin, projectId: project.id }))).toBe("NOT_FOUND");
 
-    const { link, url } = await createShareLink({ viewer: org.viewers.coordinator, projectId: project.id, input: { packetIds: [ready.id], expiresInDays: 7 } });
+    const { link, url } = await createShareLink({
+      viewer: org.viewers.coordinator,
+      projectId: project.id,
+      input: { packetIds: [ready.id], expiresInDays: 7 },
+    });
     expect(await code(revokeShareLink({ viewer: rival.viewers.admin, shareLinkId: link.id }))).toBe("NOT_FOUND");
     // A packet of the same organization that the link does not cover stays closed.
     expect(await code(getSharedPacketFile(tokenOf(url), foreign.id, client("198.51.100.8")))).toBe("NOT_FOUND");
@@ -84,10 +130,17 @@ describe("share links", () => {
     expect(await code(openShareLink(tokenOf(revoked.url), client("198.51.100.9")))).toBe("GONE");
     expect(await code(getSharedPacketFile(tokenOf(revoked.url), rev1.id, client("198.51.100.9")))).toBe("GONE");
 
-    const expired = await createShareLink({ viewer: org.viewers.coordinator, projectId: project.id, input: { packetIds: [rev1.id], expiresInDays: 1 } });
+    const expired = await createShareLink({
+      viewer: org.viewers.coordinator,
+      projectId: project.id,
+      input: { packetIds: [rev1.id], expiresInDays: 1 },
+    });
     await ShareLink.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id: expired.link.id } });
     expect(await code(openShareLink(tokenOf(expired.url), client("198.51.100.9")))).toBe("GONE");
-    expect((await listShareLinks({ viewer: org.viewers.coordinator, projectId: project.id })).map((l) => l.status).sort()).toEqual(["expired", "revoked"]);
+    expect((await listShareLinks({ viewer: org.viewers.coordinator, projectId: project.id })).map((l) => l.status).sort()).toEqual([
+      "expired",
+      "revoked",
+    ]);
 
     expect(await code(openShareLink("made-up-token-made-up-token-made-up-1234", client("198.51.100.9")))).toBe("NOT_FOUND");
     expect(await ShareLinkAccess.count({ where: { shareLinkId: [revoked.link.id, expired.link.id] } })).toBe(0);
@@ -95,10 +148,15 @@ describe("share links", () => {
 
   it("throttles an address that tries too many unknown tokens, even with a good token", async () => {
     const project = await makeProject(org);
-    const { url } = await createShareLink({ viewer: org.viewers.coordinator, projectId: project.id, input: { packetIds: [(await packet(project, 1)).id] } });
+    const { url } = await createShareLink({
+      viewer: org.viewers.coordinator,
+      projectId: project.id,
+      input: { packetIds: [(await packet(project, 1)).id] },
+    });
     const guesser = client(`203.0.113.${Math.floor(Math.random() * 250)}`);
     await ShareLinkMiss.destroy({ where: { address: guesser.address } });
-    for (let i = 0; i < SHARE_THROTTLE.maxMisses; i++) expect(await code(openShareLink(`guess-guess-guess-guess-${i}`, guesser))).toBe("NOT_FOUND");
+    for (let i = 0; i < SHARE_THROTTLE.maxMisses; i++)
+      expect(await code(openShareLink(`guess-guess-guess-guess-${i}`, guesser))).toBe("NOT_FOUND");
     expect(await code(openShareLink("guess-guess-guess-guess-last", guesser))).toBe("LIMIT_EXCEEDED");
     expect(await code(openShareLink(tokenOf(url), guesser))).toBe("LIMIT_EXCEEDED");
     expect(await code(openShareLink(tokenOf(url), client("192.0.2.44")))).toBe("resolved"); // others are not affected
@@ -106,7 +164,10 @@ describe("share links", () => {
 
   it("forgets misses older than the throttle window", async () => {
     const old = await ShareLinkMiss.create({ address: "198.51.100.200" });
-    await db().query(`update share_link_misses set created_at = now() - interval '${SHARE_THROTTLE.windowMinutes + 1} minutes' where id = :id`, { replacements: { id: old.id } });
+    await db().query(
+      `update share_link_misses set created_at = now() - interval '${SHARE_THROTTLE.windowMinutes + 1} minutes' where id = :id`,
+      { replacements: { id: old.id } },
+    );
     expect(await code(openShareLink("guess-guess-guess-guess-x", client("198.51.100.201")))).toBe("NOT_FOUND");
     expect(await ShareLinkMiss.findByPk(old.id)).toBeNull();
   });

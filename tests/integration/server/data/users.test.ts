@@ -3,7 +3,15 @@ import { Invitation, SignInAttempt, User } from "@/models";
 import { AppError } from "@/lib/errors";
 import { InviteUserInput } from "@/lib/schemas/user";
 import { SIGN_IN_THROTTLE } from "@/lib/domain/sign-in-throttle";
-import { acceptInvitation, authenticate, getInvitationByToken, inviteUser, listUsers, setUserActive, updateUserRole } from "@/lib/server/data/users";
+import {
+  acceptInvitation,
+  authenticate,
+  getInvitationByToken,
+  inviteUser,
+  listUsers,
+  setUserActive,
+  updateUserRole,
+} from "@/lib/server/data/users";
 import { closeDb } from "../../support/db";
 import { hashToken } from "@/lib/server/tokens";
 import { FIXTURE_PASSWORD, makeOrganization, type OrgFixture } from "../../support/fixtures";
@@ -11,7 +19,11 @@ import { FIXTURE_PASSWORD, makeOrganization, type OrgFixture } from "../../suppo
 let org: OrgFixture;
 let rival: OrgFixture;
 const address = "203.0.113.7";
-const code = async (promise: Promise<unknown>) => promise.then(() => "resolved", (e: unknown) => (e instanceof AppError ? e.code : String(e)));
+const code = async (promise: Promise<unknown>) =>
+  promise.then(
+    () => "resolved",
+    (e: unknown) => (e instanceof AppError ? e.code : String(e)),
+  );
 
 beforeAll(async () => {
   org = await makeOrganization("People");
@@ -48,8 +60,14 @@ describe("invitations", () => {
     // Defect: the invitation error told an admin that an address had an account in another company.
     const elsewhere = rival.users.coordinator.email;
     const fresh = `fresh.${org.tag}@fixture.example`;
-    const a = await inviteUser({ viewer: org.viewers.admin, input: InviteUserInput.parse({ name: "Known Elsewhere", email: elsewhere, role: "installer" }) });
-    const b = await inviteUser({ viewer: org.viewers.admin, input: InviteUserInput.parse({ name: "Never Seen", email: fresh, role: "installer" }) });
+    const a = await inviteUser({
+      viewer: org.viewers.admin,
+      input: InviteUserInput.parse({ name: "Known Elsewhere", email: elsewhere, role: "installer" }),
+    });
+    const b = await inviteUser({
+      viewer: org.viewers.admin,
+      input: InviteUserInput.parse({ name: "Never Seen", email: fresh, role: "installer" }),
+    });
     const shape = (u: typeof a.user) => ({ ...u, id: "", email: "", name: "" });
     expect(shape(a.user)).toEqual(shape(b.user));
     const listed = await listUsers({ viewer: org.viewers.admin });
@@ -59,12 +77,16 @@ describe("invitations", () => {
     expect((await getInvitationByToken(a.token))?.clash).toMatch(/already signs in .* for another organization/);
     expect((await getInvitationByToken(b.token))?.clash).toBeNull();
     expect(await code(acceptInvitation({ token: a.token, password: "a long new password" }))).toBe("CONFLICT");
-    expect(await authenticate({ email: elsewhere, password: FIXTURE_PASSWORD, address })).toMatchObject({ organizationId: rival.organization.id });
+    expect(await authenticate({ email: elsewhere, password: FIXTURE_PASSWORD, address })).toMatchObject({
+      organizationId: rival.organization.id,
+    });
 
     // Once the other organization deactivates that account, the same link works and signs in here.
     await setUserActive({ viewer: rival.viewers.admin, userId: rival.users.coordinator.id, isActive: false });
     await acceptInvitation({ token: a.token, password: "a long new password" });
-    expect(await authenticate({ email: elsewhere, password: "a long new password", address })).toMatchObject({ organizationId: org.organization.id });
+    expect(await authenticate({ email: elsewhere, password: "a long new password", address })).toMatchObject({
+      organizationId: org.organization.id,
+    });
     expect(await code(setUserActive({ viewer: rival.viewers.admin, userId: rival.users.coordinator.id, isActive: true }))).toBe("CONFLICT");
   });
 
@@ -120,7 +142,9 @@ describe("authenticate", () => {
 
   it("checks parallel guesses one at a time, so none slips past a pause", async () => {
     const email = `parallel-${org.tag}@fixture.example`;
-    const results = await Promise.all(Array.from({ length: 12 }, () => code(authenticate({ email, password: "wrong", address: "198.51.100.77" }))));
+    const results = await Promise.all(
+      Array.from({ length: 12 }, () => code(authenticate({ email, password: "wrong", address: "198.51.100.77" }))),
+    );
     expect(results.filter((r) => r === "UNAUTHORIZED")).toHaveLength(SIGN_IN_THROTTLE.freePairFailures);
     expect(await SignInAttempt.count({ where: { key: `pair:${email}|198.51.100.77` } })).toBe(SIGN_IN_THROTTLE.freePairFailures);
   });

@@ -113,7 +113,10 @@ describe("outbox", () => {
     await db().transaction(async (transaction) => {
       for (let n = 0; n < 12; n++) await enqueueMail(mail(`Race ${String(n).padStart(2, "0")} ${tag}`), { transaction });
     });
-    const [a, b] = await Promise.all([deliverDueMail({ limit: 200, transport: transport() }), deliverDueMail({ limit: 200, transport: transport() })]);
+    const [a, b] = await Promise.all([
+      deliverDueMail({ limit: 200, transport: transport() }),
+      deliverDueMail({ limit: 200, transport: transport() }),
+    ]);
     expect(a.sent + b.sent).toBeGreaterThanOrEqual(12);
     for (let n = 0; n < 12; n++) expect(timesReceived(`Race ${String(n).padStart(2, "0")} ${tag}`)).toBe(1);
     expect((await rowsTagged(tag)).every((r) => r.status === "sent" && r.attempts === 1)).toBe(true);
@@ -132,7 +135,10 @@ describe("outbox", () => {
 
   it("queues the invitation e-mail with the new user", async () => {
     const email = `outbox-invitee-${org.tag}@fixture.example`;
-    const { token } = await inviteUser({ viewer: org.viewers.admin, input: InviteUserInput.parse({ name: "Oda Outbox", email, role: "installer" }) });
+    const { token } = await inviteUser({
+      viewer: org.viewers.admin,
+      input: InviteUserInput.parse({ name: "Oda Outbox", email, role: "installer" }),
+    });
     const row = await OutboxMessage.findOne({ where: { toAddress: email } });
     expect(row).toMatchObject({ status: "queued", organizationId: org.organization.id });
     expect(row?.subject).toContain(org.organization.name);

@@ -3,7 +3,8 @@ import { describe, expect, it } from "vitest";
 import { THUMBNAIL_PX } from "@/lib/field/upload-rules";
 import { makeThumbnail } from "@/lib/server/services/thumbnails";
 
-const picture = (width: number, height: number, channels: 3 | 4 = 3) => sharp({ create: { width, height, channels, background: { r: 180, g: 120, b: 60, alpha: 0.5 } } });
+const picture = (width: number, height: number, channels: 3 | 4 = 3) =>
+  sharp({ create: { width, height, channels, background: { r: 180, g: 120, b: 60, alpha: 0.5 } } });
 
 describe("site photo thumbnails", () => {
   it("fit a landscape photo inside the square, as a JPEG", async () => {

@@ -17,7 +17,9 @@ async function render(input: CommissioningDocumentInput) {
 
 function expectCautions(text: string) {
   expect(text).toContain("PV circuits are energized whenever light reaches the modules");
-  expect(text).toContain("Inverter capacitors hold a charge after shutdown. Keep clear of the inverter's terminals until the inverter reports a safe DC voltage");
+  expect(text).toContain(
+    "Inverter capacitors hold a charge after shutdown. Keep clear of the inverter's terminals until the inverter reports a safe DC voltage",
+  );
   expect(text).toContain("the NEC edition and local amendments the AHJ enforces, and licensed practice");
   expect(text).toContain("permission to operate (PTO)");
 }
@@ -40,7 +42,9 @@ describe("commissioning report", () => {
       expect(text).toContain("Printed 2026-12-03");
       expect(text).not.toContain("2026-12-04");
       expect(text).toContain("Commissioning report Readings and results");
-      expect(text).toContain("Caution: PV conductors are energized whenever light reaches the modules, and inverter capacitors hold a charge after shutdown.");
+      expect(text).toContain(
+        "Caution: PV conductors are energized whenever light reaches the modules, and inverter capacitors hold a charge after shutdown.",
+      );
     });
   });
 
@@ -79,8 +83,12 @@ describe("commissioning report", () => {
     for (const r of input.results) expect(all).toContain(r.title);
     // Before energizing: polarity, Voc at the module temperature (11 × 37.2 × (1 + 20 × −0.0027) = 387.1 V ± 5 %), insulation.
     expect(all).toContain("1 String A polarity Correct + to +, − to − PASS inverter input marking");
-    expect(all).toContain("2 String A open-circuit voltage 386.5 V at 45 °C (module) 367.7–406.5 V for 11 modules PASS module data sheet Voc, corrected as in NEC 2023 690.7(A)(1)");
-    expect(all).toContain("3 String A insulation resistance 220 MΩ At least 1 MΩ at a 500 V test PASS IEC 62446-1 insulation resistance test");
+    expect(all).toContain(
+      "2 String A open-circuit voltage 386.5 V at 45 °C (module) 367.7–406.5 V for 11 modules PASS module data sheet Voc, corrected as in NEC 2023 690.7(A)(1)",
+    );
+    expect(all).toContain(
+      "3 String A insulation resistance 220 MΩ At least 1 MΩ at a 500 V test PASS IEC 62446-1 insulation resistance test",
+    );
     // At the inverter: the card names another serial.
     expect(all).toContain("Unit QN0730411; card QN0730412 The same serial on the unit and its card FAIL inverter maker's activation card");
     expect(all).toContain("Not yet Done REVIEW");
@@ -123,7 +131,9 @@ describe("commissioning report", () => {
     const all = open.pages.join(" ");
     expect(all).toContain("String B read 38.6 V with the array shut down: above the 30 V allowed on wiring that leaves the array.");
     expect(all).toContain("To do: Do not touch the string's conductors.");
-    expect(all).toContain("The activation card names serial QN0730412, but this unit's label says QN0730411: the card belongs to another unit.");
+    expect(all).toContain(
+      "The activation card names serial QN0730412, but this unit's label says QN0730411: the card belongs to another unit.",
+    );
     expect(all).toContain("To do: Do not activate with this card.");
     expect(all).toContain("To do: Measure again under load");
     expect(all).not.toContain("String A read 11.2 V");
@@ -152,7 +162,11 @@ describe("commissioning report", () => {
       expect(holding, title).toHaveLength(1);
       // The whole row (title, reading, expected, result, basis) sits on one page.
       const reading = input.record.strings[i]!.measuredV!;
-      expect(holding[0]).toMatch(new RegExp(`${title}.*?${String(reading).replace(".", "\\.")} V 7–9 V for 8 devices; 30 V at most (PASS|FAIL) NEC 2023 690\\.12\\(B\\)\\(1\\)`));
+      expect(holding[0]).toMatch(
+        new RegExp(
+          `${title}.*?${String(reading).replace(".", "\\.")} V 7–9 V for 8 devices; 30 V at most (PASS|FAIL) NEC 2023 690\\.12\\(B\\)\\(1\\)`,
+        ),
+      );
     }
     expect(pages.slice(1).every((p) => p.startsWith(TABLE_HEAD))).toBe(true);
   }, 30_000);
@@ -221,7 +235,9 @@ describe("certificate of completion", () => {
 
   test("blank lines for the installer and the customer's acknowledgement", () => {
     const text = complete.pages[0]!;
-    expect(text).toContain("Installer For Quillmoor Solar Electric, contractor license EC-40718 (demo) PRINTED NAME LICENSE NO. SIGNATURE DATE");
+    expect(text).toContain(
+      "Installer For Quillmoor Solar Electric, contractor license EC-40718 (demo) PRINTED NAME LICENSE NO. SIGNATURE DATE",
+    );
     expect(text).toContain("Customer's acknowledgement");
     expect(text).toMatch(/grants permission to operate\. PRINTED NAME SIGNATURE DATE/);
     expect(text.match(/SIGNATURE DATE/g)).toHaveLength(2);
@@ -245,7 +261,13 @@ describe("commissioning summary", () => {
     const results = checkCommissioning(record);
     const completion = { complete: false, failing: ["grid-profile"], missing: ["grid-profile"], waiting: [] };
     const summary = completionSummary({ ...commissioningFixture({ scenario: "complete" }), record, results, completion });
-    expect(summary).toMatchObject({ complete: false, status: "fail", word: "Open", failing: ["Grid profile on the inverter"], notRecorded: [] });
+    expect(summary).toMatchObject({
+      complete: false,
+      status: "fail",
+      word: "Open",
+      failing: ["Grid profile on the inverter"],
+      notRecorded: [],
+    });
     expect(summary.sentence).toBe("Open: 1 failing.");
   });
 
@@ -261,7 +283,12 @@ describe("commissioning summary", () => {
     expect(summary.status).toBe("pass");
     const record = { ...commissioningRecord({ scenario: "complete" }), firstPowerW: null, firstPowerTime: null };
     const results = checkCommissioning(record);
-    const open = completionSummary({ ...commissioningFixture({ scenario: "complete" }), record, results, completion: commissioningComplete(results) });
+    const open = completionSummary({
+      ...commissioningFixture({ scenario: "complete" }),
+      record,
+      results,
+      completion: commissioningComplete(results),
+    });
     expect(open).toMatchObject({ status: "warn", word: "Open", notRecorded: ["First power reading"] });
     expect(open.sentence).toBe("Open: 1 not recorded yet.");
   });

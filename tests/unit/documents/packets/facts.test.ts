@@ -24,7 +24,12 @@ describe("figures as the sheets print them", () => {
 
   test("characters the shipped fonts lack are spelled out, everywhere in the input", () => {
     expect(printable("PV breaker: 35 A → 40 A, Vd ≤ 2 %")).toBe("PV breaker: 35 A to 40 A, Vd <= 2 %");
-    expect(printableDeep({ changes: ["8 AWG → 6 AWG"], n: 3, none: null, nested: { ok: "αVoc" } })).toEqual({ changes: ["8 AWG to 6 AWG"], n: 3, none: null, nested: { ok: "αVoc" } });
+    expect(printableDeep({ changes: ["8 AWG → 6 AWG"], n: 3, none: null, nested: { ok: "αVoc" } })).toEqual({
+      changes: ["8 AWG to 6 AWG"],
+      n: 3,
+      none: null,
+      nested: { ok: "αVoc" },
+    });
   });
 
   test("listing and certification are joined with each standard once", () => {
@@ -35,7 +40,9 @@ describe("figures as the sheets print them", () => {
 
 describe("scope of work", () => {
   test("opens with the DC and AC ratings, with the article the number takes", () => {
-    expect(scopeOfWork(FIXTURES[0][1])[0]).toBe("Install an 8.91 kW DC / 7.6 kW AC grid-tied PV system at 120 Larkin Mill Rd, Brackenford, CO 80913.");
+    expect(scopeOfWork(FIXTURES[0][1])[0]).toBe(
+      "Install an 8.91 kW DC / 7.6 kW AC grid-tied PV system at 120 Larkin Mill Rd, Brackenford, CO 80913.",
+    );
     expect(scopeOfWork(FIXTURES[1][1])[0]).toMatch(/^Install a 7\.6 kW DC \/ 6 kW AC grid-tied PV system/);
   });
 
@@ -85,7 +92,8 @@ describe("calculation methods", () => {
     const check = input.review.checks.find((c) => c.id === "string-voltage:S1")!;
     expect(describeCheck(check, input.design, input.site, input.review.figures)).toEqual({
       inputs: ["N = 11 modules in series", "Voc = 37.2 V (STC)", "Tmin = -24 °C record low", "αVoc = -0.27 %/°C"],
-      method: "N × Voc × [1 + (Tmin − 25) × αVoc / 100]; limit: the lower of the inverter's maximum input and the 690.7 limit for the building",
+      method:
+        "N × Voc × [1 + (Tmin − 25) × αVoc / 100]; limit: the lower of the inverter's maximum input and the 690.7 limit for the building",
     });
   });
 });

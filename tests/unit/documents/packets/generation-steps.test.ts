@@ -14,7 +14,13 @@ describe("the steps of a packet generation", () => {
     ["one sheet, many data sheets", 1, 12],
   ])("%s: sheets, then data sheets, then assemble, store, verify, with progress that only grows", (_, sheets, datasheets) => {
     const steps = planGenerationSteps({ sheetTitles: titles(sheets), datasheetTitles: titles(datasheets, "Data sheet") });
-    expect(steps.map((s) => s.kind)).toEqual([...Array(sheets).fill("sheet"), ...Array(datasheets).fill("datasheet"), "assemble", "store", "verify"]);
+    expect(steps.map((s) => s.kind)).toEqual([
+      ...Array(sheets).fill("sheet"),
+      ...Array(datasheets).fill("datasheet"),
+      "assemble",
+      "store",
+      "verify",
+    ]);
     expect(steps[0]!.progress).toBe(0);
     for (let i = 1; i < steps.length; i++) expect(steps[i]!.progress).toBeGreaterThanOrEqual(steps[i - 1]!.progress);
     expect(steps.at(-1)!.progress).toBeLessThan(100);
@@ -36,7 +42,14 @@ describe("the steps of a packet generation", () => {
   test("shares follow the measured cost: a sheet weighs five times a data sheet or a finishing step", () => {
     // 2 sheets × 5 + 1 data sheet + 3 finishing steps = 14 parts
     const steps = planGenerationSteps({ sheetTitles: ["A", "B"], datasheetTitles: ["C"] });
-    expect(steps.map((s) => s.progress)).toEqual([0, Math.floor(500 / 14), Math.floor(1000 / 14), Math.floor(1100 / 14), Math.floor(1200 / 14), Math.floor(1300 / 14)]);
+    expect(steps.map((s) => s.progress)).toEqual([
+      0,
+      Math.floor(500 / 14),
+      Math.floor(1000 / 14),
+      Math.floor(1100 / 14),
+      Math.floor(1200 / 14),
+      Math.floor(1300 / 14),
+    ]);
   });
 
   test("a long data sheet title is cut to fit the step column", () => {

@@ -26,12 +26,15 @@ describe("interconnection packet", () => {
     ]);
   });
 
-  test.skipIf(!hasPdftoppm)(`the application page renders to a PNG that is far from blank${hasPdftoppm ? "" : ` (${NO_PDFTOPPM})`}`, async () => {
-    const png = firstPagePng(bytes);
-    // 8.5 × 11 in at 40 dpi.
-    expect(pngSize(png)).toEqual({ width: 340, height: 440 });
-    expect(png.length).toBeGreaterThan(10 * (await blankPagePng(612, 792)).length);
-  });
+  test.skipIf(!hasPdftoppm)(
+    `the application page renders to a PNG that is far from blank${hasPdftoppm ? "" : ` (${NO_PDFTOPPM})`}`,
+    async () => {
+      const png = firstPagePng(bytes);
+      // 8.5 × 11 in at 40 dpi.
+      expect(pngSize(png)).toEqual({ width: 340, height: 440 });
+      expect(png.length).toBeGreaterThan(10 * (await blankPagePng(612, 792)).length);
+    },
+  );
 
   test("every page carries the title block", () => {
     pages.forEach((text, i) => {

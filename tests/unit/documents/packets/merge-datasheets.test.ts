@@ -23,7 +23,13 @@ describe("appending data sheets", () => {
     expect(merged.skipped).toEqual([]);
     expect(await countPages(merged.bytes)).toBe(5);
     const texts = await pageTexts(merged.bytes);
-    expect(texts.map((t) => t.trim())).toEqual(["Generated sheet 1", "Generated sheet 2", "Module data sheet p1", "Module data sheet p2", "Inverter data sheet"]);
+    expect(texts.map((t) => t.trim())).toEqual([
+      "Generated sheet 1",
+      "Generated sheet 2",
+      "Module data sheet p1",
+      "Module data sheet p2",
+      "Inverter data sheet",
+    ]);
   });
 
   test("skips and reports a file it cannot read instead of failing the packet", async () => {
@@ -43,7 +49,9 @@ describe("appending data sheets", () => {
   test("marks each appended page with the packet it belongs to", async () => {
     const base = await smallPdf(["Generated sheet"]);
     const sheet = await smallPdf(["Inverter data sheet p1", "Inverter data sheet p2"]);
-    const merged = await appendPdfs(base, [{ title: "Quillon QS-7600", bytes: sheet }], { footer: "Attachment to project 1042, permit packet Rev 2" });
+    const merged = await appendPdfs(base, [{ title: "Quillon QS-7600", bytes: sheet }], {
+      footer: "Attachment to project 1042, permit packet Rev 2",
+    });
     const texts = await pageTexts(merged.bytes);
     expect(texts[0]).not.toContain("Attachment");
     expect(texts[1]).toContain("Attachment to project 1042, permit packet Rev 2 · Quillon QS-7600 · page 1 of 2");

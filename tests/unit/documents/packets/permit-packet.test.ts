@@ -57,7 +57,9 @@ function expectLabelsMatchReview(r: Rendered) {
   expect(labels!.text.split("What it means:").length - 1).toBe(r.input.review.labels.length);
   r.input.review.labels.forEach((label, i) => {
     expect(labels!.text).toContain(`L${i + 1}. ${label.title}`);
-    expect(labels!.text, label.id).toContain(label.prescribed ? `Wording prescribed by ${label.clause}.` : `${label.clause} asks for this content`);
+    expect(labels!.text, label.id).toContain(
+      label.prescribed ? `Wording prescribed by ${label.clause}.` : `${label.clause} asks for this content`,
+    );
     for (const [key, value] of Object.entries(label.values)) {
       const unit = key.endsWith("V") ? "V" : "A";
       expect(labels!.text, `${label.id}.${key}`).toContain(formatQuantity(value, unit));
@@ -73,7 +75,16 @@ describe("permit packet, string inverter with shutdown devices, Rev 1", () => {
 
   test("one 11 × 17 landscape page per planned sheet", async () => {
     const plan = planPermitSheets(r.input);
-    expect(plan.map((s) => s.key)).toEqual(["cover", "system-summary", "single-line", "calculations", "calculations", "calculations", "labels", "structural"]);
+    expect(plan.map((s) => s.key)).toEqual([
+      "cover",
+      "system-summary",
+      "single-line",
+      "calculations",
+      "calculations",
+      "calculations",
+      "labels",
+      "structural",
+    ]);
     expect(r.pages).toHaveLength(plan.length);
     expect(await countPages(r.bytes)).toBe(plan.length);
     for (const size of await pageSizes(r.bytes)) expect(size).toEqual({ width: 1224, height: 792 });
@@ -99,7 +110,9 @@ describe("permit packet, string inverter with shutdown devices, Rev 1", () => {
 
   test("the calculation sheets print every check's result and limit as the review computed them", () => {
     expectCalculationsMatchReview(r);
-    const calc = sheetTexts(r, "calculations").map((s) => s.text).join(" ");
+    const calc = sheetTexts(r, "calculations")
+      .map((s) => s.text)
+      .join(" ");
     // 11 × 37.2 V × (1 + (−24 − 25) × −0.27 / 100) = 463.34 V, against the 600 V dwelling limit.
     expect(r.input.review.summary.maxDcVoltageV).toBe(463.34);
     expect(calc).toContain("463.34 V 600 V");
@@ -161,7 +174,9 @@ describe("permit packet, optimizer strings, Rev 2 with an override", () => {
     // Make one check fail, as a review that needed the coordinator's override would.
     input.review = {
       ...input.review,
-      checks: input.review.checks.map((c) => (c.id === "point-of-connection" ? { ...c, status: "fail" as const, fix: "Move the PV breaker to the far end of the bus." } : c)),
+      checks: input.review.checks.map((c) =>
+        c.id === "point-of-connection" ? { ...c, status: "fail" as const, fix: "Move the PV breaker to the far end of the bus." } : c,
+      ),
       summary: { ...input.review.summary, pass: input.review.summary.pass - 1, fail: 1, status: "fail" },
     };
     input.override = { reason: "The AHJ accepted the panel maker's busbar letter for this panel.", byName: "Dana Okafor" };
@@ -190,7 +205,9 @@ describe("permit packet, optimizer strings, Rev 2 with an override", () => {
   test("calculations and labels still equal the review, the failing check with its fix", () => {
     expectCalculationsMatchReview(r);
     expectLabelsMatchReview(r);
-    const calc = sheetTexts(r, "calculations").map((s) => s.text).join(" ");
+    const calc = sheetTexts(r, "calculations")
+      .map((s) => s.text)
+      .join(" ");
     expect(countWord(calc, "FAIL")).toBe(1);
     expect(calc).toContain("Suggested: Move the PV breaker to the far end of the bus.");
     expect(calc).toContain("String S1 is held by its optimizers at 380 V");

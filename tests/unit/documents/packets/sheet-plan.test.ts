@@ -12,7 +12,14 @@ function withManyChecks(times: number): PacketInput {
   const input = packetFixture();
   const checks: CheckResult[] = Array.from({ length: times }, (_, k) =>
     input.review.checks.map((c, i) =>
-      (i + k) % 3 === 0 ? { ...c, id: `${c.id}#${k}`, status: "fail" as const, fix: "Use a larger conductor or a shorter run, and check the terminal ratings of both ends." } : { ...c, id: `${c.id}#${k}` },
+      (i + k) % 3 === 0
+        ? {
+            ...c,
+            id: `${c.id}#${k}`,
+            status: "fail" as const,
+            fix: "Use a larger conductor or a shorter run, and check the terminal ratings of both ends.",
+          }
+        : { ...c, id: `${c.id}#${k}` },
     ),
   ).flat();
   return { ...input, review: { ...input.review, checks } };

@@ -42,8 +42,12 @@ describe("payment receipt", () => {
     expect(text).toContain(
       "Residential PV building permit City of Brackenford Building Division 8.91 kW DC × $18.00/kW = $160.38 below the $175.00 minimum, so $175.00 $175.00",
     );
-    expect(text).toContain("Electrical plan review City of Brackenford Building Division 8.91 kW DC is in the bracket over 5 kW up to 10 kW, so $95.00 $95.00");
-    expect(text).toContain("Interconnection application, inverter-based up to 25 kW Brackenford Municipal Light & Power flat fee = $100.00 $100.00");
+    expect(text).toContain(
+      "Electrical plan review City of Brackenford Building Division 8.91 kW DC is in the bracket over 5 kW up to 10 kW, so $95.00 $95.00",
+    );
+    expect(text).toContain(
+      "Interconnection application, inverter-based up to 25 kW Brackenford Municipal Light & Power flat fee = $100.00 $100.00",
+    );
     expect(text).toContain("Total paid $370.00");
     expect(text).toContain("AMOUNT PAID $370.00 Paid");
   });
@@ -76,14 +80,26 @@ describe("payment receipt", () => {
   });
 
   test("amounts are en-US dollars from integer cents", async () => {
-    const lines = [{ name: "Commercial PV building permit", authority: "Township of Orrin Vale", arithmetic: ["flat fee = $1,234.56"], amountCents: 123456 }];
+    const lines = [
+      {
+        name: "Commercial PV building permit",
+        authority: "Township of Orrin Vale",
+        arithmetic: ["flat fee = $1,234.56"],
+        amountCents: 123456,
+      },
+    ];
     const text = (await render(receiptFixture({ lines }))).pages[0]!;
     expect(text).toContain("flat fee = $1,234.56 $1,234.56");
     expect(text).toContain("Total paid $1,234.56");
   });
 
   test("a payer, phone or card the records lack prints as such", async () => {
-    const input = { ...receiptFixture(), organization: { name: "Quillmoor Solar Electric", phone: null, timeZone: "America/Denver" }, paidBy: { name: "", email: "" }, method: { brand: null, last4: null } };
+    const input = {
+      ...receiptFixture(),
+      organization: { name: "Quillmoor Solar Electric", phone: null, timeZone: "America/Denver" },
+      paidBy: { name: "", email: "" },
+      method: { brand: null, last4: null },
+    };
     const text = (await render(input)).pages[0]!;
     expect(text).toContain("ORGANIZATION Quillmoor Solar Electric PAID BY Not recorded PROJECT 1042");
     expect(text).toContain("METHOD Card (details not reported by the processor)");
@@ -94,7 +110,9 @@ describe("payment receipt", () => {
     const { bytes, pages } = await render(receiptFixture({ lines, refunds: "partial" }));
     expect(pages.length).toBeGreaterThan(1);
     expect((await pageSizes(bytes)).every((p) => p.width === LETTER.width && p.height === LETTER.height)).toBe(true);
-    pages.forEach((text, i) => expect(text).toContain(`Receipt R-2026-1042-3F9A2C · Project 1042 · Quillmoor Solar Electric Page ${i + 1} of ${pages.length}`));
+    pages.forEach((text, i) =>
+      expect(text).toContain(`Receipt R-2026-1042-3F9A2C · Project 1042 · Quillmoor Solar Electric Page ${i + 1} of ${pages.length}`),
+    );
     for (const line of lines) {
       const holding = pages.filter((p) => p.includes(`${line.name} ${line.authority}`));
       expect(holding, line.name).toHaveLength(1);
@@ -103,7 +121,13 @@ describe("payment receipt", () => {
     const all = pages.join(" ");
     expect(all).toContain("Total paid $2,960.00");
     // The refunds and the sums under them stay together.
-    expect(pages.filter((p) => p.includes("Refunds DATE REASON AMOUNT December 9, 2026 Plan review waived by the building division −$95.00 Total paid $2,960.00 Refunded −$95.00 Net amount paid $2,865.00"))).toHaveLength(1);
+    expect(
+      pages.filter((p) =>
+        p.includes(
+          "Refunds DATE REASON AMOUNT December 9, 2026 Plan review waived by the building division −$95.00 Total paid $2,960.00 Refunded −$95.00 Net amount paid $2,865.00",
+        ),
+      ),
+    ).toHaveLength(1);
   }, 30_000);
 
   test.skipIf(!hasPdftoppm)(`page 1 renders to a PNG far from blank${hasPdftoppm ? "" : ` (${NO_PDFTOPPM})`}`, async () => {

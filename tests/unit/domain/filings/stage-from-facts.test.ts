@@ -9,7 +9,15 @@ const filing = (status: FilingFacts["status"], referenceNumber: string | null = 
   submittedAt: "2026-03-02",
   decidedAt: status === "approved" ? "2026-03-20" : null,
 });
-const none: StageFacts = { designChecked: false, permit: null, interconnection: null, installedAt: null, finalInspectionPassedAt: null, commissionedAt: null, ptoAt: null };
+const none: StageFacts = {
+  designChecked: false,
+  permit: null,
+  interconnection: null,
+  installedAt: null,
+  finalInspectionPassedAt: null,
+  commissionedAt: null,
+  ptoAt: null,
+};
 const at = (over: Partial<StageFacts>): StageFacts => ({ ...none, ...over });
 
 describe("the stage from the facts", () => {
@@ -17,30 +25,87 @@ describe("the stage from the facts", () => {
     ["a new project", at({}), "draft"],
     ["a design that passes its review", at({ designChecked: true }), "design_checked"],
     ["a permit submitted", at({ designChecked: true, permit: filing("submitted") }), "permit_filed"],
-    ["a permit with corrections requested is still filed", at({ designChecked: true, permit: filing("corrections_requested") }), "permit_filed"],
+    [
+      "a permit with corrections requested is still filed",
+      at({ designChecked: true, permit: filing("corrections_requested") }),
+      "permit_filed",
+    ],
     ["a withdrawn permit is not filed", at({ designChecked: true, permit: filing("withdrawn") }), "design_checked"],
     ["a permit approved without its number is not issued", at({ designChecked: true, permit: filing("approved") }), "permit_filed"],
     ["a permit approved with its number", at({ designChecked: true, permit: filing("approved", "BP-1") }), "permit_issued"],
-    ["the interconnection filed the same day as the permit waits for the line", at({ designChecked: true, permit: filing("submitted"), interconnection: filing("submitted") }), "permit_filed"],
+    [
+      "the interconnection filed the same day as the permit waits for the line",
+      at({ designChecked: true, permit: filing("submitted"), interconnection: filing("submitted") }),
+      "permit_filed",
+    ],
     ["work under way", at({ designChecked: true, permit: filing("approved", "BP-1"), installedAt: "2026-04-01" }), "installed"],
-    ["a final inspection passed", at({ designChecked: true, permit: filing("approved", "BP-1"), installedAt: "2026-04-01", finalInspectionPassedAt: "2026-04-10" }), "inspection_passed"],
-    ["then the interconnection already filed counts", at({ designChecked: true, permit: filing("approved", "BP-1"), finalInspectionPassedAt: "2026-04-10", interconnection: filing("in_review") }), "utility_filed"],
-    ["the utility approves", at({ designChecked: true, permit: filing("approved", "BP-1"), finalInspectionPassedAt: "2026-04-10", interconnection: filing("approved", "IA-9") }), "utility_approved"],
-    ["the field record is completed", at({ designChecked: true, permit: filing("approved", "BP-1"), finalInspectionPassedAt: "2026-04-10", interconnection: filing("approved", "IA-9"), commissionedAt: "2026-04-20" }), "commissioned"],
+    [
+      "a final inspection passed",
+      at({ designChecked: true, permit: filing("approved", "BP-1"), installedAt: "2026-04-01", finalInspectionPassedAt: "2026-04-10" }),
+      "inspection_passed",
+    ],
+    [
+      "then the interconnection already filed counts",
+      at({
+        designChecked: true,
+        permit: filing("approved", "BP-1"),
+        finalInspectionPassedAt: "2026-04-10",
+        interconnection: filing("in_review"),
+      }),
+      "utility_filed",
+    ],
+    [
+      "the utility approves",
+      at({
+        designChecked: true,
+        permit: filing("approved", "BP-1"),
+        finalInspectionPassedAt: "2026-04-10",
+        interconnection: filing("approved", "IA-9"),
+      }),
+      "utility_approved",
+    ],
+    [
+      "the field record is completed",
+      at({
+        designChecked: true,
+        permit: filing("approved", "BP-1"),
+        finalInspectionPassedAt: "2026-04-10",
+        interconnection: filing("approved", "IA-9"),
+        commissionedAt: "2026-04-20",
+      }),
+      "commissioned",
+    ],
     ["PTO stands in for everything before it", at({ ptoAt: "2026-05-01" }), "pto_received"],
   ] as const)("%s → %s", (_what, facts, stage) => {
     expect(stageFromFacts(facts).stage).toBe(stage);
   });
 
   it("lets a passed final inspection stand in for the installation and the issued permit", () => {
-    const { stage, reached } = stageFromFacts(at({ designChecked: true, permit: filing("submitted"), finalInspectionPassedAt: "2026-04-10" }));
+    const { stage, reached } = stageFromFacts(
+      at({ designChecked: true, permit: filing("submitted"), finalInspectionPassedAt: "2026-04-10" }),
+    );
     expect(stage).toBe("inspection_passed");
-    expect(reached.map((r) => r.stage)).toEqual(["draft", "design_checked", "permit_filed", "permit_issued", "installed", "inspection_passed"]);
+    expect(reached.map((r) => r.stage)).toEqual([
+      "draft",
+      "design_checked",
+      "permit_filed",
+      "permit_issued",
+      "installed",
+      "inspection_passed",
+    ]);
     expect(reached.find((r) => r.stage === "inspection_passed")).toMatchObject({ fact: "Final inspection passed", at: "2026-04-10" });
   });
 
   it("never reaches Closed from facts", () => {
-    const all = at({ designChecked: true, permit: filing("approved", "BP-1"), installedAt: "d", finalInspectionPassedAt: "d", interconnection: filing("approved", "IA"), commissionedAt: "d", ptoAt: "d" });
+    const all = at({
+      designChecked: true,
+      permit: filing("approved", "BP-1"),
+      installedAt: "d",
+      finalInspectionPassedAt: "d",
+      interconnection: filing("approved", "IA"),
+      commissionedAt: "d",
+      ptoAt: "d",
+    });
     expect(stageFromFacts(all).stage).toBe("pto_received");
   });
 

@@ -17,14 +17,20 @@ const change = (over: Partial<FilingChange>): FilingChange => ({
 describe("filing status changes", () => {
   it("refuses to mark a filing approved without the authority's reference number", () => {
     for (const referenceNumber of [null, "", "   "]) {
-      expect(filingChangeProblem(change({ from: "in_review", to: "approved", referenceNumber }))).toMatchObject({ field: "referenceNumber" });
+      expect(filingChangeProblem(change({ from: "in_review", to: "approved", referenceNumber }))).toMatchObject({
+        field: "referenceNumber",
+      });
     }
     expect(filingChangeProblem(change({ from: "in_review", to: "approved", referenceNumber: "BP-2026-0142" }))).toBeNull();
   });
 
   it("needs the packet revision to submit a permit or an interconnection application, not another approval", () => {
-    expect(filingChangeProblem(change({ from: "preparing", to: "submitted", packetRevision: null }))).toMatchObject({ field: "packetRevision" });
-    expect(filingChangeProblem(change({ kind: "interconnection", from: "preparing", to: "submitted", packetRevision: null }))).toMatchObject({ field: "packetRevision" });
+    expect(filingChangeProblem(change({ from: "preparing", to: "submitted", packetRevision: null }))).toMatchObject({
+      field: "packetRevision",
+    });
+    expect(
+      filingChangeProblem(change({ kind: "interconnection", from: "preparing", to: "submitted", packetRevision: null })),
+    ).toMatchObject({ field: "packetRevision" });
     expect(filingChangeProblem(change({ kind: "other", from: "preparing", to: "submitted", packetRevision: null }))).toBeNull();
   });
 
@@ -32,15 +38,20 @@ describe("filing status changes", () => {
     const base = { from: "corrections_requested", to: "resubmitted", revisionAtLatestRound: 1 } as const;
     expect(filingChangeProblem(change({ ...base, latestRoundAnswered: false, packetRevision: 2 }))).toMatchObject({ field: "rounds" });
     expect(filingChangeProblem(change({ ...base, packetRevision: null }))).toMatchObject({ field: "packetRevision" });
-    expect(filingChangeProblem(change({ ...base, revisionAtLatestRound: 2, packetRevision: 1 }))).toMatchObject({ field: "packetRevision" });
+    expect(filingChangeProblem(change({ ...base, revisionAtLatestRound: 2, packetRevision: 1 }))).toMatchObject({
+      field: "packetRevision",
+    });
     expect(filingChangeProblem(change({ ...base, packetRevision: 2 }))).toBeNull();
     expect(filingChangeProblem(change({ ...base, packetRevision: 1 }))).toBeNull(); // a letter alone may answer a round
   });
 
-  it.each(FILING_STATUSES.flatMap((from) => FILING_STATUSES.map((to) => [from, to] as const)))("%s → %s is allowed exactly when the table lists it", (from, to) => {
-    const problem = filingChangeProblem(change({ from, to, referenceNumber: "R-1", packetRevision: 3, revisionAtLatestRound: 1 }));
-    expect(problem === null).toBe(NEXT_STATUSES[from].includes(to) && from !== to);
-  });
+  it.each(FILING_STATUSES.flatMap((from) => FILING_STATUSES.map((to) => [from, to] as const)))(
+    "%s → %s is allowed exactly when the table lists it",
+    (from, to) => {
+      const problem = filingChangeProblem(change({ from, to, referenceNumber: "R-1", packetRevision: 3, revisionAtLatestRound: 1 }));
+      expect(problem === null).toBe(NEXT_STATUSES[from].includes(to) && from !== to);
+    },
+  );
 
   it("counts a filing as filed from submission on, unless it was rejected or withdrawn", () => {
     expect(FILING_STATUSES.filter(isFiled)).toEqual(["submitted", "in_review", "corrections_requested", "resubmitted", "approved"]);

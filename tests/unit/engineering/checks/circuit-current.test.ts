@@ -68,7 +68,12 @@ describe("current-carrying conductors from the circuits a run holds", () => {
   });
 
   test("AC outputs are one circuit after a combiner, separate circuits when the run says so", () => {
-    const two = stringDesign({ inverters: [{ ...design.inverters[0]!, id: "a" }, { ...design.inverters[0]!, id: "b" }] });
+    const two = stringDesign({
+      inverters: [
+        { ...design.inverters[0]!, id: "a" },
+        { ...design.inverters[0]!, id: "b" },
+      ],
+    });
     const joined = { ...acRun, circuit: { kind: "ac-output" as const, sources: [{ inverterId: "a" }, { inverterId: "b" }] } };
     expect(circuitConductorCount(two, joined)).toBe(2);
     expect(runMaxCurrentA(two, joined)).toBe(64);

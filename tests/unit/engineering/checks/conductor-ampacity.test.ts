@@ -35,7 +35,11 @@ describe("690.8(B) conductor ampacity with conditions of use", () => {
   // 0.5 in above the roof: 35 + 33 = 68 °C → 0.58 → 40 × 0.58 = 23.2 A
   test("rooftop adder applied: 23.2 A, and the clause cites it by edition", () => {
     const run = { ...stringRun, roofClearanceIn: 0.5 };
-    expect(check(run).conditions).toMatchObject({ status: "pass", value: 23.2, clause: "NEC 2020 690.8(B), Table 310.15(B)(1), 310.15(B)(2)" });
+    expect(check(run).conditions).toMatchObject({
+      status: "pass",
+      value: 23.2,
+      clause: "NEC 2020 690.8(B), Table 310.15(B)(1), 310.15(B)(2)",
+    });
     expect(check(run, 2017).conditions.clause).toBe("NEC 2017 690.8(B), Table 310.15(B)(2)(a), 310.15(B)(3)(c)");
   });
 
@@ -93,7 +97,8 @@ describe("690.8(B) conductor ampacity with conditions of use", () => {
 describe("110.14(C) terminal temperature when the run gives none", () => {
   const inverter = design.inverters[0]!;
   const run = { ...acRun, ocpdA: 35, conductor: { ...acRun.conductor, size: "10" as const }, terminalTempC: undefined };
-  const at = (terminalTempC?: 60 | 75 | 90) => checkConductorAmpacity(stringDesign({ inverters: [{ ...inverter, acOutputCurrentA: 25, terminalTempC }] }), coldSite, run)[0]!;
+  const at = (terminalTempC?: 60 | 75 | 90) =>
+    checkConductorAmpacity(stringDesign({ inverters: [{ ...inverter, acOutputCurrentA: 25, terminalTempC }] }), coldSite, run)[0]!;
 
   test.each([
     [undefined, "fail", 30, "110.14(C)(1)(a)"], // nothing marked: 60 °C, 30 A < 31.25 A
@@ -112,13 +117,22 @@ describe("110.14(C) terminal temperature when the run gives none", () => {
   });
 
   test("the rating entered for the run wins over the equipment's", () => {
-    const r = checkConductorAmpacity(stringDesign({ inverters: [{ ...inverter, acOutputCurrentA: 25, terminalTempC: 60 }] }), coldSite, { ...run, terminalTempC: 75 })[0]!;
+    const r = checkConductorAmpacity(stringDesign({ inverters: [{ ...inverter, acOutputCurrentA: 25, terminalTempC: 60 }] }), coldSite, {
+      ...run,
+      terminalTempC: 75,
+    })[0]!;
     expect(r).toMatchObject({ status: "pass", value: 35 });
   });
 
   test("a circuit above 100 A takes 75 °C by default", () => {
     const big = stringDesign({ inverters: [{ ...inverter, acOutputCurrentA: 100 }], service: { ...design.service, pvBreakerA: 125 } });
-    const feeder = { ...acRun, ocpdA: 125, conductor: { ...acRun.conductor, size: "1/0" as const }, terminalTempC: undefined, raceway: undefined };
+    const feeder = {
+      ...acRun,
+      ocpdA: 125,
+      conductor: { ...acRun.conductor, size: "1/0" as const },
+      terminalTempC: undefined,
+      raceway: undefined,
+    };
     // 1/0 Cu at 75 °C: 150 A ≥ 1.25 × 100 = 125 A (at 60 °C it would be 125 A)
     expect(checkConductorAmpacity(big, coldSite, feeder)[0]).toMatchObject({ status: "pass", value: 150 });
   });

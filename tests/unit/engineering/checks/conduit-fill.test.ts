@@ -15,14 +15,21 @@ describe("conduit fill, NEC Chapter 9 Tables 1, 4, 5 (REFERENCE.md)", () => {
   // 1/2 EMT total 0.122 / 0.4 = 0.305 in² → 0.1309 / 0.305 = 42.92 % > 40 % → 3/4 in fits
   test("the same wires in 1/2 in EMT fail and the fix names 3/4 in", () => {
     const run = { ...acRun, raceway: { ...acRun.raceway!, tradeSize: "1/2" as const } };
-    expect(checkConduitFill(stringDesign(), coldSite, run)[0]).toMatchObject({ status: "fail", value: 42.92, limit: 40, fix: "Use 3/4 in EMT." });
+    expect(checkConduitFill(stringDesign(), coldSite, run)[0]).toMatchObject({
+      status: "fail",
+      value: 42.92,
+      limit: 40,
+      fix: "Use 3/4 in EMT.",
+    });
   });
 
   test.each([
     [1, 53],
     [2, 31],
   ])("%d wire(s) may fill %d %% (Table 1)", (count, percent) => {
-    expect(racewayFill({ type: "PVC-40", tradeSize: "1/2", wires: [{ size: "10", count, insulation: "THWN-2" }] }).allowedPercent).toBe(percent);
+    expect(racewayFill({ type: "PVC-40", tradeSize: "1/2", wires: [{ size: "10", count, insulation: "THWN-2" }] }).allowedPercent).toBe(
+      percent,
+    );
   });
 
   // The same count and size fill more with a thicker insulation: Table 5 by insulation, never THHN for all.
@@ -34,7 +41,10 @@ describe("conduit fill, NEC Chapter 9 Tables 1, 4, 5 (REFERENCE.md)", () => {
     ["RHW-2", 57.31, "fail"],
   ] as const)("4 × 10 AWG %s in 1/2 in EMT fills %d %% → %s", (insulation, percent, status) => {
     const wires: RacewayWire[] = [{ size: "10", count: 4, insulation }];
-    expect(checkConduitFill(stringDesign(), coldSite, { ...acRun, raceway: { type: "EMT", tradeSize: "1/2", wires } })[0]).toMatchObject({ status, value: percent });
+    expect(checkConduitFill(stringDesign(), coldSite, { ...acRun, raceway: { type: "EMT", tradeSize: "1/2", wires } })[0]).toMatchObject({
+      status,
+      value: percent,
+    });
   });
 
   test("PV wire has no Table 5 area: the check warns and names the field instead of guessing", () => {
@@ -47,17 +57,25 @@ describe("conduit fill, NEC Chapter 9 Tables 1, 4, 5 (REFERENCE.md)", () => {
   test("PV wire with its data-sheet area is checked with that area", () => {
     // 4 × 0.03 in² = 0.12 of 0.5325 in² (3/4 EMT) = 22.54 %
     const wires: RacewayWire[] = [{ size: "10", count: 4, insulation: "PV wire", areaIn2: 0.03 }];
-    expect(checkConduitFill(stringDesign(), coldSite, { ...acRun, raceway: { type: "EMT", tradeSize: "3/4", wires } })[0]).toMatchObject({ status: "pass", value: 22.54 });
+    expect(checkConduitFill(stringDesign(), coldSite, { ...acRun, raceway: { type: "EMT", tradeSize: "3/4", wires } })[0]).toMatchObject({
+      status: "pass",
+      value: 22.54,
+    });
   });
 
   test("exactly 40 % passes", () => {
     // three wires of 0.122 / 3 in² each fill 0.122 of 0.305 in² = 40 %
-    const run = { ...acRun, raceway: { type: "EMT" as const, tradeSize: "1/2" as const, wires: [{ size: "1/0" as const, count: 3, areaIn2: 0.122 / 3 }] } };
+    const run = {
+      ...acRun,
+      raceway: { type: "EMT" as const, tradeSize: "1/2" as const, wires: [{ size: "1/0" as const, count: 3, areaIn2: 0.122 / 3 }] },
+    };
     expect(checkConduitFill(stringDesign(), coldSite, run)[0]).toMatchObject({ status: "pass", value: 40 });
   });
 
   test("an insulation without a Table 5 area must be entered", () => {
-    expect(() => racewayFill({ type: "EMT", tradeSize: "1", wires: [{ size: "1/0", count: 3, insulation: "USE-2" }] })).toThrow(DesignInputError);
+    expect(() => racewayFill({ type: "EMT", tradeSize: "1", wires: [{ size: "1/0", count: 3, insulation: "USE-2" }] })).toThrow(
+      DesignInputError,
+    );
   });
 
   test("a run without a raceway has nothing to check", () => {
@@ -67,7 +85,13 @@ describe("conduit fill, NEC Chapter 9 Tables 1, 4, 5 (REFERENCE.md)", () => {
   // Two strings in one 3/4 in EMT: 4 current-carrying 10 AWG conductors (two circuits) and the EGC. Without a
   // wires list the raceway holds what the circuits need, in the run's own insulation.
   test("two strings in one raceway: the raceway holds both circuits' conductors and the EGC", () => {
-    const run = { ...stringRun, circuit: { kind: "dc-strings" as const, stringIds: ["S1", "S2"] }, raceway: { type: "EMT" as const, tradeSize: "3/4" as const }, wireAreaIn2: 0.0266, egc: { size: "10" as const, material: "Cu" as const } };
+    const run = {
+      ...stringRun,
+      circuit: { kind: "dc-strings" as const, stringIds: ["S1", "S2"] },
+      raceway: { type: "EMT" as const, tradeSize: "3/4" as const },
+      wireAreaIn2: 0.0266,
+      egc: { size: "10" as const, material: "Cu" as const },
+    };
     expect(runRacewayWires(stringDesign(), run)).toEqual([
       { size: "10", count: 4, insulation: "PV wire", areaIn2: 0.0266 },
       { size: "10", count: 1, insulation: "PV wire", areaIn2: 0.0266 },
@@ -77,7 +101,12 @@ describe("conduit fill, NEC Chapter 9 Tables 1, 4, 5 (REFERENCE.md)", () => {
   });
 
   test("an EGC of another size than PV-wire conductors is taken as THWN-2 (common practice)", () => {
-    const run = { ...stringRun, raceway: { type: "EMT" as const, tradeSize: "3/4" as const }, wireAreaIn2: 0.0266, egc: { size: "8" as const, material: "Cu" as const } };
+    const run = {
+      ...stringRun,
+      raceway: { type: "EMT" as const, tradeSize: "3/4" as const },
+      wireAreaIn2: 0.0266,
+      egc: { size: "8" as const, material: "Cu" as const },
+    };
     expect(runRacewayWires(stringDesign(), run)[1]).toEqual({ size: "8", count: 1, insulation: "THWN-2", areaIn2: undefined });
   });
 });

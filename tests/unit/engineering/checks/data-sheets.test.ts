@@ -68,7 +68,10 @@ describe("data-sheet plausibility: other figures the review uses (common practic
 
   // A 7600 W, 240 V inverter needs 31.67 A; 3.2 A (a misplaced decimal) would size a 15 A breaker.
   test("an inverter current too low for its rated power fails: breakers and conductors are sized from it", () => {
-    const r = problem(stringDesign({ inverters: [{ ...northmereString, acOutputCurrentA: 3.2 }] }), "data-sheet:inverters.inv-1.acOutputCurrentA");
+    const r = problem(
+      stringDesign({ inverters: [{ ...northmereString, acOutputCurrentA: 3.2 }] }),
+      "data-sheet:inverters.inv-1.acOutputCurrentA",
+    );
     expect(r).toMatchObject({ status: "fail", value: 3.2, limit: 31.67, field: "inverters.inv-1.acOutputCurrentA" });
   });
 
@@ -88,7 +91,10 @@ describe("data-sheet plausibility: other figures the review uses (common practic
     [0.06, "warn"], // 0.6 typed with a slipped decimal
     [12, "warn"],
   ] as const)("a device holding %d V while shut down → %s", (shutdownOutputV, status) => {
-    const r = problem(stringDesign({ moduleLevelDevice: { ...quillonShutdown, shutdownOutputV } }), "data-sheet:moduleLevelDevice.shutdownOutputV");
+    const r = problem(
+      stringDesign({ moduleLevelDevice: { ...quillonShutdown, shutdownOutputV } }),
+      "data-sheet:moduleLevelDevice.shutdownOutputV",
+    );
     if (status === undefined) expect(r).toBeUndefined();
     else expect(r).toMatchObject({ status, field: "moduleLevelDevice.shutdownOutputV" });
   });

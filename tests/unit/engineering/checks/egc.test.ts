@@ -20,12 +20,23 @@ describe("equipment grounding conductor (NEC Table 250.122, REFERENCE.md)", () =
   // Issue 13: the result shows figures, never "—", beside the device rating: the EGC's area against the area needed.
   test("the result states the installed and required areas in kcmil (Chapter 9 Table 8)", () => {
     const [r] = checkEgc(stringDesign(), coldSite, { ...acRun, terminalTempC: 75, egc: { size: "12", material: "Cu" } });
-    expect(r).toMatchObject({ status: "fail", value: 6.53, limit: 10.38, unit: "kcmil", fix: "Use a 10 AWG copper equipment grounding conductor." });
+    expect(r).toMatchObject({
+      status: "fail",
+      value: 6.53,
+      limit: 10.38,
+      unit: "kcmil",
+      fix: "Use a 10 AWG copper equipment grounding conductor.",
+    });
   });
 
   test("a missing EGC warns, names the field and the size to add", () => {
     const [r] = checkEgc(stringDesign(), coldSite, { ...acRun, terminalTempC: 75, egc: undefined });
-    expect(r).toMatchObject({ status: "warn", fix: "Add a 10 AWG copper equipment grounding conductor.", field: "runs.r2.egc", limit: 10.38 });
+    expect(r).toMatchObject({
+      status: "warn",
+      fix: "Add a 10 AWG copper equipment grounding conductor.",
+      field: "runs.r2.egc",
+      limit: 10.38,
+    });
   });
 
   test("250.122(A): never larger than the circuit conductors of the same material", () => {
@@ -34,7 +45,9 @@ describe("equipment grounding conductor (NEC Table 250.122, REFERENCE.md)", () =
   });
 
   test("an unknown EGC size is a readable input error", () => {
-    expect(() => checkEgc(stringDesign(), coldSite, { ...acRun, egc: { size: "7" as never, material: "Cu" } })).toThrow(/grounding conductor size "7"/);
+    expect(() => checkEgc(stringDesign(), coldSite, { ...acRun, egc: { size: "7" as never, material: "Cu" } })).toThrow(
+      /grounding conductor size "7"/,
+    );
   });
 });
 
@@ -45,8 +58,15 @@ describe("690.45 assumed device by edition", () => {
   const module10A = { ...larkspurModule, iscA: 10, impA: 9.5, powerW: 320, vmpV: 33.6 };
   const oneString = stringDesign({ module: module10A });
   const threeCombined = (iscA: number): [Design, ConductorRun] => [
-    stringDesign({ module: { ...larkspurModule, iscA, impA: iscA * 0.95, powerW: Math.round(33.6 * iscA * 0.95) }, strings: ["S1", "S2", "S3"].map((id) => ({ id, inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 })) }),
-    { ...stringRun, conductor: { ...stringRun.conductor, size: "6" }, circuit: { kind: "dc-strings", stringIds: ["S1", "S2", "S3"], combined: true } },
+    stringDesign({
+      module: { ...larkspurModule, iscA, impA: iscA * 0.95, powerW: Math.round(33.6 * iscA * 0.95) },
+      strings: ["S1", "S2", "S3"].map((id) => ({ id, inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 })),
+    }),
+    {
+      ...stringRun,
+      conductor: { ...stringRun.conductor, size: "6" },
+      circuit: { kind: "dc-strings", stringIds: ["S1", "S2", "S3"], combined: true },
+    },
   ];
 
   test.each([
@@ -69,7 +89,10 @@ describe("690.45 assumed device by edition", () => {
     for (let iscA = 4; iscA <= 20; iscA += 0.25) {
       for (const strings of [1, 2, 3, 4]) {
         const [design, run] = threeCombined(iscA);
-        const r = { ...run, circuit: { kind: "dc-strings" as const, stringIds: ["S1", "S2", "S3"].slice(0, Math.min(strings, 3)), combined: true } };
+        const r = {
+          ...run,
+          circuit: { kind: "dc-strings" as const, stringIds: ["S1", "S2", "S3"].slice(0, Math.min(strings, 3)), combined: true },
+        };
         const a = egcBasisA(design, r, 2017).ocpdA;
         const b = egcBasisA(design, r, 2020).ocpdA;
         expect(b).toBeGreaterThanOrEqual(1.25 * a - 1e-9);
@@ -92,7 +115,13 @@ describe("690.45 assumed device by edition", () => {
 // inverter output circuit has no such relief (from memory; issue 11 item 5).
 describe("250.122(B) proportional increase", () => {
   // AC run: 32 A inverter, 40 A breaker, 75 °C terminals. Ampacity needs 8 AWG Cu (50 A ≥ 40 A; 10 AWG 35 A).
-  const ac = (size: "8" | "6" | "4" | "2", egc: "10" | "8" | "6") => ({ ...acRun, terminalTempC: 75 as const, raceway: undefined, conductor: { ...acRun.conductor, size }, egc: { size: egc, material: "Cu" as const } });
+  const ac = (size: "8" | "6" | "4" | "2", egc: "10" | "8" | "6") => ({
+    ...acRun,
+    terminalTempC: 75 as const,
+    raceway: undefined,
+    conductor: { ...acRun.conductor, size },
+    egc: { size: egc, material: "Cu" as const },
+  });
 
   test.each([
     // 8 AWG is what ampacity needs: no increase, Table 250.122 10 AWG
@@ -112,7 +141,12 @@ describe("250.122(B) proportional increase", () => {
   });
 
   test("a PV DC circuit upsized for voltage drop keeps its Table 250.122 EGC (690.45)", () => {
-    const run = { ...stringRun, terminalTempC: 75 as const, conductor: { ...stringRun.conductor, size: "6" as const }, egc: { size: "12" as const, material: "Cu" as const } };
+    const run = {
+      ...stringRun,
+      terminalTempC: 75 as const,
+      conductor: { ...stringRun.conductor, size: "6" as const },
+      egc: { size: "12" as const, material: "Cu" as const },
+    };
     const req = egcRequirement(stringDesign(), coldSite, run, "Cu");
     expect(req.increase).not.toBeNull();
     expect(req.relieved).toBe(true);
@@ -124,7 +158,9 @@ describe("250.122(B) proportional increase", () => {
     for (const size of ["6", "4", "3", "2", "1", "1/0"] as const) {
       const run = { ...acRun, terminalTempC: 75 as const, raceway: undefined, conductor: { ...acRun.conductor, size } };
       const req = egcRequirement(stringDesign(), coldSite, run, "Cu");
-      expect(["14", "12", "10", "8", "6", "4", "3", "2", "1", "1/0"].indexOf(req.required)).toBeLessThanOrEqual(["14", "12", "10", "8", "6", "4", "3", "2", "1", "1/0"].indexOf(size));
+      expect(["14", "12", "10", "8", "6", "4", "3", "2", "1", "1/0"].indexOf(req.required)).toBeLessThanOrEqual(
+        ["14", "12", "10", "8", "6", "4", "3", "2", "1", "1/0"].indexOf(size),
+      );
     }
   });
 });

@@ -67,10 +67,15 @@ describe("240.4(B) and 240.4(D): the device must protect the conductor", () => {
 
 // Strings are in parallel where they join at one inverter input (MPPT), whether or not they share a raceway.
 describe("690.9(A): strings without fuses (from memory)", () => {
-  const parallel = (ids: string[]) => ({ ...stringRun, terminalTempC: 75 as const, circuit: { kind: "dc-strings" as const, stringIds: ids } });
-  const onOneInput = (count: number) => stringDesign({
-    strings: ["S1", "S2", "S3"].slice(0, count).map((id) => ({ id, inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 })),
+  const parallel = (ids: string[]) => ({
+    ...stringRun,
+    terminalTempC: 75 as const,
+    circuit: { kind: "dc-strings" as const, stringIds: ids },
   });
+  const onOneInput = (count: number) =>
+    stringDesign({
+      strings: ["S1", "S2", "S3"].slice(0, count).map((id) => ({ id, inverterId: "inv-1", mpptIndex: 1, modulesInSeries: 10 })),
+    });
   const threeStrings = onOneInput(3);
 
   test("one string: no other source, no fuse needed, and no '0 A' result", () => {

@@ -144,7 +144,9 @@ describe("connections on a feeder", () => {
 
   test("unknown feeder figures warn and name the field; the busbar is not checked for a feeder connection", () => {
     expect(feederCheck(onFeeder(undefined))[0]).toMatchObject({ status: "warn", field: "service.feeder.ampacityA" });
-    expect(checkPointOfConnection(onFeeder({ ampacityA: 140, ocpdA: 100 }), coldSite).some((c) => c.id === "point-of-connection")).toBe(false);
+    expect(checkPointOfConnection(onFeeder({ ampacityA: 140, ocpdA: 100 }), coldSite).some((c) => c.id === "point-of-connection")).toBe(
+      false,
+    );
   });
 });
 
@@ -155,19 +157,27 @@ describe("feed-through lugs", () => {
 
   test("the feed-through conductors need the main plus 1.25 × inverter current: 200 + 40 = 240 A", () => {
     const results = checkPointOfConnection(feedThrough({ ampacityA: 200 }), coldSite);
-    expect(results.find((c) => c.id === "feeder-connection")).toMatchObject({ status: "fail", limit: 240, clause: "NEC 2020 705.12(B)(3)(6)" });
+    expect(results.find((c) => c.id === "feeder-connection")).toMatchObject({
+      status: "fail",
+      limit: 240,
+      clause: "NEC 2020 705.12(B)(3)(6)",
+    });
   });
 
   test("with no device at either end of the feed-through conductors only the 100 % rule applies to the busbar", () => {
     // 240 A > 225 A busbar (100 %) though 240 ≤ 270 (120 %)
     const r = checkPointOfConnection(feedThrough({ ampacityA: 250 }), coldSite).find((c) => c.id === "point-of-connection")!;
     expect(r.status).toBe("fail");
-    const protectedEnd = checkPointOfConnection(feedThrough({ ampacityA: 250, loadSideOcpdA: 225 }), coldSite).find((c) => c.id === "point-of-connection")!;
+    const protectedEnd = checkPointOfConnection(feedThrough({ ampacityA: 250, loadSideOcpdA: 225 }), coldSite).find(
+      (c) => c.id === "point-of-connection",
+    )!;
     expect(protectedEnd).toMatchObject({ status: "pass", clause: "NEC 2020 705.12(B)(3)(2), 705.12(B)(3)(6)" });
   });
 
   test("2017 has no feed-through item: the feeder rule is cited", () => {
-    const r = checkPointOfConnection(feedThrough({ ampacityA: 250 }), { ...coldSite, necEdition: 2017 }).find((c) => c.id === "feeder-connection")!;
+    const r = checkPointOfConnection(feedThrough({ ampacityA: 250 }), { ...coldSite, necEdition: 2017 }).find(
+      (c) => c.id === "feeder-connection",
+    )!;
     expect(r.clause).toBe("NEC 2017 705.12(B)(2)(1)");
   });
 });
@@ -175,8 +185,10 @@ describe("feed-through lugs", () => {
 // Supply-side conductors from the tap to the PV device: 125 % of the inverter output and the device's rating,
 // not smaller than 6 AWG Cu / 4 AWG Al, and the device within 10 ft of the tap (2020/2023 705.11; from memory).
 describe("supply-side conductors and overcurrent device location", () => {
-  const supply = (c: Design["service"]["supplySideConductors"]) => withInverter(32, 40, { connection: "supply-side", supplySideConductors: c });
-  const checks = (d: Design, edition: NecEdition = 2020) => Object.fromEntries(checkSupplySideConductors(d, { ...coldSite, necEdition: edition }).map((c) => [c.id, c]));
+  const supply = (c: Design["service"]["supplySideConductors"]) =>
+    withInverter(32, 40, { connection: "supply-side", supplySideConductors: c });
+  const checks = (d: Design, edition: NecEdition = 2020) =>
+    Object.fromEntries(checkSupplySideConductors(d, { ...coldSite, necEdition: edition }).map((c) => [c.id, c]));
 
   test.each([
     [2020, "8", "Cu", "fail"], // 50 A ≥ 40 A but smaller than 6 AWG
@@ -208,8 +220,18 @@ describe("supply-side conductors and overcurrent device location", () => {
 // applies to it (705.12, REFERENCE.md).
 describe("AC combiner busbar for micro-inverters", () => {
   const branches = (ocpdA?: number) => {
-    const two = [{ ...halvardMicro, id: "m1", quantity: 10 }, { ...halvardMicro, id: "m2", quantity: 10 }];
-    const branch = (id: string) => ({ ...acRun, id: `b-${id}`, label: `Branch ${id}`, ocpdA, raceway: undefined, circuit: { kind: "ac-output" as const, sources: [{ inverterId: id }] } });
+    const two = [
+      { ...halvardMicro, id: "m1", quantity: 10 },
+      { ...halvardMicro, id: "m2", quantity: 10 },
+    ];
+    const branch = (id: string) => ({
+      ...acRun,
+      id: `b-${id}`,
+      label: `Branch ${id}`,
+      ocpdA,
+      raceway: undefined,
+      circuit: { kind: "ac-output" as const, sources: [{ inverterId: id }] },
+    });
     const home = { ...acRun, circuit: { kind: "ac-output" as const, sources: [{ inverterId: "m1" }, { inverterId: "m2" }] } };
     return microDesign({ inverters: two, runs: [branch("m1"), branch("m2"), home] });
   };

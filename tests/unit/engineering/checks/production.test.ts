@@ -1,5 +1,11 @@
 import { describe, expect, test } from "vitest";
-import { DEFAULT_LOSS_FRACTION, DesignInputError, PVWATTS_V5_DEFAULT_LOSSES_PERCENT, annualProductionKwh, combinedLossFraction } from "@/lib/engineering";
+import {
+  DEFAULT_LOSS_FRACTION,
+  DesignInputError,
+  PVWATTS_V5_DEFAULT_LOSSES_PERCENT,
+  annualProductionKwh,
+  combinedLossFraction,
+} from "@/lib/engineering";
 
 describe("production estimate (NREL/TP-6A20-62641 PVWatts v5 default losses 14.08 %)", () => {
   test("the ten default losses combine multiplicatively to 14.08 %", () => {

@@ -11,7 +11,17 @@ import {
   reviewDesign,
 } from "@/lib/engineering";
 import type { ConductorRun, Design, NecEdition } from "@/lib/engineering";
-import { acRun, coldSite, halvardMicro, larkspurModule, microDesign, northmereString, quillonShutdown, stringDesign, stringRun } from "../fixtures";
+import {
+  acRun,
+  coldSite,
+  halvardMicro,
+  larkspurModule,
+  microDesign,
+  northmereString,
+  quillonShutdown,
+  stringDesign,
+  stringRun,
+} from "../fixtures";
 
 const at = (edition: NecEdition, more: Partial<typeof coldSite> = {}) => ({ ...coldSite, necEdition: edition, ...more });
 
@@ -25,7 +35,10 @@ describe("maximum system voltage of modules and module-level devices (690.7, 110
     [1000, 450, "pass", "fail"],
     [undefined, 600, "warn", "pass"], // not entered: names the field
   ] as const)("module %s V, device %s V → %s / %s", (moduleV, deviceV, moduleStatus, deviceStatus) => {
-    const d = stringDesign({ module: { ...larkspurModule, maxSystemVoltageV: moduleV }, moduleLevelDevice: { ...quillonShutdown, maxSystemVoltageV: deviceV } });
+    const d = stringDesign({
+      module: { ...larkspurModule, maxSystemVoltageV: moduleV },
+      moduleLevelDevice: { ...quillonShutdown, maxSystemVoltageV: deviceV },
+    });
     const [m, dev] = checkSystemVoltageRatings(d, coldSite);
     expect(m).toMatchObject({ id: "system-voltage:module", status: moduleStatus, value: 450.4 });
     expect(dev).toMatchObject({ id: "system-voltage:device", status: deviceStatus });
@@ -62,7 +75,10 @@ describe("690.11 arc-fault and 690.41(B) ground-fault protection from the invert
     const d = microDesign({ inverters: [{ ...halvardMicro, dcGroundFaultProtection: undefined }] });
     const results = checkProtectionFunctions(d, coldSite, cold);
     expect(results.some((c) => c.id.startsWith("arc-fault"))).toBe(false);
-    expect(results.find((c) => c.id === "ground-fault:micro")).toMatchObject({ status: "warn", field: "inverters.micro.dcGroundFaultProtection" });
+    expect(results.find((c) => c.id === "ground-fault:micro")).toMatchObject({
+      status: "warn",
+      field: "inverters.micro.dcGroundFaultProtection",
+    });
   });
 
   test.each([
@@ -107,7 +123,9 @@ describe("disconnecting means (690.13, 690.15)", () => {
     [2020, "NEC 2020 690.13(D)"],
     [2023, "NEC 2023 690.13(D)"],
   ] as const)("NEC %d cites the ratings as %s", (edition, clause) => {
-    expect(run({ pvDisconnect: { kind: "switch", ratingA: 60, voltageRatingV: 240, readilyAccessible: true } }, edition)[0]!.clause).toBe(clause);
+    expect(run({ pvDisconnect: { kind: "switch", ratingA: 60, voltageRatingV: 240, readilyAccessible: true } }, edition)[0]!.clause).toBe(
+      clause,
+    );
   });
 
   test.each([
@@ -120,7 +138,10 @@ describe("disconnecting means (690.13, 690.15)", () => {
   });
 
   test("missing ratings of a separate switch warn and name the field", () => {
-    expect(run({ pvDisconnect: { kind: "switch", readilyAccessible: true } })[0]).toMatchObject({ status: "warn", field: "pvDisconnect.ratingA" });
+    expect(run({ pvDisconnect: { kind: "switch", readilyAccessible: true } })[0]).toMatchObject({
+      status: "warn",
+      field: "pvDisconnect.ratingA",
+    });
   });
 
   test.each([
@@ -154,7 +175,10 @@ describe("rapid shutdown initiator (690.12(C))", () => {
   });
 
   test("not entered: a warning naming the field; ground mounts need none", () => {
-    expect(checkRapidShutdownInitiator(stringDesign({ rapidShutdownInitiator: undefined }), coldSite)[0]).toMatchObject({ status: "warn", field: "rapidShutdownInitiator.kind" });
+    expect(checkRapidShutdownInitiator(stringDesign({ rapidShutdownInitiator: undefined }), coldSite)[0]).toMatchObject({
+      status: "warn",
+      field: "rapidShutdownInitiator.kind",
+    });
     expect(checkRapidShutdownInitiator(stringDesign({ mount: "ground", rapidShutdownInitiator: undefined }), coldSite)).toEqual([]);
   });
 });
@@ -163,7 +187,8 @@ describe("rapid shutdown initiator (690.12(C))", () => {
 // Type MC cable (2017 690.31(G), 2020 on 690.31(D)); 690.46 / 250.120(C): EGCs smaller than 6 AWG protected.
 // All from memory.
 describe("wiring methods of DC runs (690.31, 690.46)", () => {
-  const ids = (run: ConductorRun, edition: NecEdition = 2020) => Object.fromEntries(checkWiringMethods(at(edition), run).map((c) => [c.id.split(":")[0], c]));
+  const ids = (run: ConductorRun, edition: NecEdition = 2020) =>
+    Object.fromEntries(checkWiringMethods(at(edition), run).map((c) => [c.id.split(":")[0], c]));
 
   test.each([
     ["PV wire", "pass"],
@@ -186,7 +211,10 @@ describe("wiring methods of DC runs (690.31, 690.46)", () => {
   });
 
   test("whether a DC run enters the building must be said unless its wiring method serves anywhere", () => {
-    expect(ids({ ...stringRun, insideBuilding: undefined })["wiring-inside"]).toMatchObject({ status: "warn", field: "runs.r1.insideBuilding" });
+    expect(ids({ ...stringRun, insideBuilding: undefined })["wiring-inside"]).toMatchObject({
+      status: "warn",
+      field: "runs.r1.insideBuilding",
+    });
     expect(ids({ ...stringRun, insideBuilding: undefined, mcCable: true })["wiring-inside"]).toMatchObject({ status: "pass" });
   });
 
@@ -201,7 +229,9 @@ describe("wiring methods of DC runs (690.31, 690.46)", () => {
   });
 
   test("a 10 AWG EGC inside the raceway needs no extra protection, and AC runs have no DC wiring results", () => {
-    expect(ids({ ...stringRun, egc: { size: "10", material: "Cu" }, raceway: { type: "EMT", tradeSize: "3/4", wires: [] } })["egc-protection"]).toBeUndefined();
+    expect(
+      ids({ ...stringRun, egc: { size: "10", material: "Cu" }, raceway: { type: "EMT", tradeSize: "3/4", wires: [] } })["egc-protection"],
+    ).toBeUndefined();
     expect(checkWiringMethods(coldSite, acRun)).toEqual([]);
   });
 });
@@ -233,11 +263,17 @@ describe("grounding electrode conductor (690.47, Table 250.66)", () => {
 
   test("without the service conductor size a rod GEC of 6 AWG still passes; any other warns naming the field", () => {
     expect(withGec({ size: "6", material: "Cu", electrode: "rod-pipe-plate" })[0]!.status).toBe("pass");
-    expect(withGec({ size: "6", material: "Cu", electrode: "other" })[0]).toMatchObject({ status: "warn", field: "service.serviceConductor" });
+    expect(withGec({ size: "6", material: "Cu", electrode: "other" })[0]).toMatchObject({
+      status: "warn",
+      field: "service.serviceConductor",
+    });
   });
 
   test("an 8 AWG GEC must be in raceway or armor (250.64(B), from memory)", () => {
-    expect(withGec({ size: "8", material: "Cu", electrode: "other" }, { size: "2", material: "Cu" }).map((c) => c.id)).toEqual(["gec", "gec-protection"]);
+    expect(withGec({ size: "8", material: "Cu", electrode: "other" }, { size: "2", material: "Cu" }).map((c) => c.id)).toEqual([
+      "gec",
+      "gec-protection",
+    ]);
   });
 });
 
@@ -245,7 +281,9 @@ describe("grounding electrode conductor (690.47, Table 250.66)", () => {
 describe("every string has a DC run", () => {
   test("a string no run carries is flagged by name", () => {
     const d = stringDesign({ runs: [stringRun, acRun] });
-    expect(checkStringsHaveRuns(d, coldSite)).toEqual([expect.objectContaining({ id: "string-run:S2", status: "warn", field: "strings.S2" })]);
+    expect(checkStringsHaveRuns(d, coldSite)).toEqual([
+      expect.objectContaining({ id: "string-run:S2", status: "warn", field: "strings.S2" }),
+    ]);
     expect(reviewDesign(d, coldSite).summary.status).not.toBe("pass");
   });
 

@@ -1,5 +1,12 @@
 import { describe, expect, test } from "vitest";
-import { DesignInputError, checkPathVoltageDrop, checkRunVoltageDrop, runVoltageDrop, voltageDropStatus, voltageDropV } from "@/lib/engineering";
+import {
+  DesignInputError,
+  checkPathVoltageDrop,
+  checkRunVoltageDrop,
+  runVoltageDrop,
+  voltageDropStatus,
+  voltageDropV,
+} from "@/lib/engineering";
 import { acRun, coldSite, fenwickOptimizer, northmereOptimizerInverter, northmereString, stringDesign, stringRun } from "../fixtures";
 
 describe("voltage drop, Chapter 9 Table 8 method (REFERENCE.md)", () => {
@@ -44,7 +51,12 @@ describe("voltage drop, Chapter 9 Table 8 method (REFERENCE.md)", () => {
   test("3-phase run above 2 % warns and suggests 6 AWG with the EGC it then needs (2 % is common practice)", () => {
     const design = stringDesign({ inverters: [{ ...northmereString, phase: 3, acVoltageV: 208 }] });
     const [r] = checkRunVoltageDrop(design, coldSite, { ...acRun, terminalTempC: 75, lengthFt: 100 });
-    expect(r).toMatchObject({ status: "warn", value: 2.07, limit: 2, fix: "Use 6 AWG conductors with an 8 AWG grounding conductor (250.122(B) grows it with the conductors) to stay within 2 %." });
+    expect(r).toMatchObject({
+      status: "warn",
+      value: 2.07,
+      limit: 2,
+      fix: "Use 6 AWG conductors with an 8 AWG grounding conductor (250.122(B) grows it with the conductors) to stay within 2 %.",
+    });
   });
 
   test("a DC string run upsized for voltage drop keeps its EGC (690.45): the fix names the conductors only", () => {

@@ -30,11 +30,26 @@ describe("commissioningComplete", () => {
   });
 
   test("a saved, half-filled record is incomplete but nothing throws", () => {
-    const partial: CommissioningRecord = { ...completeRecord, acVoltageV: null, strings: [{ id: "S1", devicesInSeries: 10 }], firstPowerW: null, rapidShutdownTest: undefined, inverters: [{ id: "inv-1", label: "Inverter" }] };
+    const partial: CommissioningRecord = {
+      ...completeRecord,
+      acVoltageV: null,
+      strings: [{ id: "S1", devicesInSeries: 10 }],
+      firstPowerW: null,
+      rapidShutdownTest: undefined,
+      inverters: [{ id: "inv-1", label: "Inverter" }],
+    };
     const c = commissioningComplete(checkCommissioning(partial));
     expect(c.complete).toBe(false);
     expect(c.failing).toEqual([]);
-    expect(c.missing).toEqual(["inverter-serial:inv-1", "inverter-activation:inv-1", "string-shutdown:S1", "ac-voltage", "first-power", "rapid-shutdown-voltage", "rapid-shutdown-time"]);
+    expect(c.missing).toEqual([
+      "inverter-serial:inv-1",
+      "inverter-activation:inv-1",
+      "string-shutdown:S1",
+      "ac-voltage",
+      "first-power",
+      "rapid-shutdown-voltage",
+      "rapid-shutdown-time",
+    ]);
   });
 
   test("a warning alone does not block completion", () => {
@@ -68,7 +83,11 @@ describe("commissioningComplete", () => {
   });
 
   test("no basis printed for users carries a rule-of-thumb or recall mark", () => {
-    for (const r of checkCommissioning({ ...completeRecord, stringTests: completeRecord.stringTests!.map((s) => ({ ...s, vocApplies: true, vocV: 400 })), vocTemperature: { tempC: 30, source: "ambient" } })) {
+    for (const r of checkCommissioning({
+      ...completeRecord,
+      stringTests: completeRecord.stringTests!.map((s) => ({ ...s, vocApplies: true, vocV: 400 })),
+      vocTemperature: { tempC: 30, source: "ambient" },
+    })) {
       expect(`${r.clause} ${r.message} ${r.fix ?? ""}`).not.toMatch(/common practice|from memory/i);
     }
   });

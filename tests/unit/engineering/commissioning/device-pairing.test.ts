@@ -4,7 +4,12 @@ import { DesignInputError, checkDevicePairing, type DevicePairingReading } from 
 // Basis: the design's device count (one device per module). Devices join the inverter one by one
 // over minutes, so fewer found than installed waits (not a pass, not a fault); more than installed
 // fails: the inverter found another system's devices or the count is wrong (our rule).
-const pairing = (found: number | null, strings: DevicePairingReading["strings"] = []): DevicePairingReading => ({ word: "optimizers", installed: 30, found, strings });
+const pairing = (found: number | null, strings: DevicePairingReading["strings"] = []): DevicePairingReading => ({
+  word: "optimizers",
+  installed: 30,
+  found,
+  strings,
+});
 
 describe("module-level devices found against installed", () => {
   test.each([
@@ -15,7 +20,15 @@ describe("module-level devices found against installed", () => {
     [31, "fail", false],
   ])("30 installed, %d found → %s (waiting: %s)", (found, status, waiting) => {
     const [r] = checkDevicePairing(pairing(found), 2023);
-    expect(r).toMatchObject({ status, value: found, limit: 30, kind: "device-pairing", id: "device-pairing", reading: "recorded", clause: "the design's device count" });
+    expect(r).toMatchObject({
+      status,
+      value: found,
+      limit: 30,
+      kind: "device-pairing",
+      id: "device-pairing",
+      reading: "recorded",
+      clause: "the design's device count",
+    });
     expect(Boolean(r!.waiting)).toBe(waiting);
   });
 

@@ -2,7 +2,8 @@ import { describe, expect, test } from "vitest";
 import { checkGridProfile, matchAcceptedProfile, normalizeProfile, profileWords } from "@/lib/engineering";
 
 const CAT_B = "IEEE 1547-2018 Category B";
-const check = (acceptedGridProfiles: string[], gridProfileSet: string | null | undefined) => checkGridProfile({ edition: 2023, acceptedGridProfiles, gridProfileSet });
+const check = (acceptedGridProfiles: string[], gridProfileSet: string | null | undefined) =>
+  checkGridProfile({ edition: 2023, acceptedGridProfiles, gridProfileSet });
 
 // Basis: the utility's interconnection requirements list the profiles it accepts (an invented utility here).
 // The crew picks one from that list; a profile typed by hand is compared loosely: case, punctuation,
@@ -19,7 +20,11 @@ describe("grid profile chosen on the inverter vs the profiles the utility accept
     [[CAT_B], "Category B", "fail"], // the standard is part of the profile
     [[CAT_B], "IEEE 1547-2018", "fail"],
     [["IEEE 1547-2018 Category B, abnormal performance Category II"], "IEEE 1547-2018 cat B, cat 2 abnormal performance", "pass"], // Roman II is 2
-    [["IEEE 1547-2018 Category B, abnormal performance Category II"], "IEEE 1547-2018 Category B, abnormal performance Category III", "fail"],
+    [
+      ["IEEE 1547-2018 Category B, abnormal performance Category II"],
+      "IEEE 1547-2018 Category B, abnormal performance Category III",
+      "fail",
+    ],
     [["Northvale Rule 21 profile"], "NORTHVALE RULE21", "pass"],
     [["Northvale Co-op Cat A", CAT_B], "ieee 1547 2018 cat b", "pass"], // any accepted profile will do
   ])("accepted %j, set %j → %s", (accepted, set, status) => {

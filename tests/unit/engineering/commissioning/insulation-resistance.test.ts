@@ -24,7 +24,14 @@ describe("string insulation resistance to ground", () => {
     [3, 0.49, "fail", 0.5],
   ])("%d modules, %d MΩ → %s (minimum %d MΩ)", (n, mohm, status, min) => {
     const r = checkInsulation(stringReading({ modulesInSeries: n, insulationMohm: mohm }), 2023);
-    expect(r).toMatchObject({ status, value: mohm, limit: min, unit: "MΩ", kind: "string-insulation", clause: "IEC 62446-1 insulation resistance test" });
+    expect(r).toMatchObject({
+      status,
+      value: mohm,
+      limit: min,
+      unit: "MΩ",
+      kind: "string-insulation",
+      clause: "IEC 62446-1 insulation resistance test",
+    });
   });
 
   test("a low reading says not to connect, and why", () => {

@@ -9,6 +9,10 @@ describe("inverter activated", () => {
     [true, "pass", "recorded"],
     [false, "warn", "missing"],
   ])("activated %j → %s", (activated, status, state) => {
-    expect(checkActivation(inverterUnit("QN0730411", "QN0730411", activated), 2023)).toMatchObject({ status, reading: state, kind: "inverter-activation" });
+    expect(checkActivation(inverterUnit("QN0730411", "QN0730411", activated), 2023)).toMatchObject({
+      status,
+      reading: state,
+      kind: "inverter-activation",
+    });
   });
 });

@@ -15,7 +15,13 @@ describe("inverter serial against its activation card", () => {
     ["QN07304I1", "QN0730411", "fail"], // I and 1 look alike but are different serials
   ])("unit %j, card %j → %s", (serial, card, status) => {
     const r = checkInverterSerial(inverterUnit(serial, card), 2023);
-    expect(r).toMatchObject({ status, reading: "recorded", kind: "inverter-serial", id: "inverter-serial:inv-1", clause: "inverter maker's activation card" });
+    expect(r).toMatchObject({
+      status,
+      reading: "recorded",
+      kind: "inverter-serial",
+      id: "inverter-serial:inv-1",
+      clause: "inverter maker's activation card",
+    });
   });
 
   test("a mismatch names both serials and says not to activate", () => {

@@ -3,7 +3,8 @@ import { DesignInputError, checkModulesReporting } from "@/lib/engineering";
 
 // Basis: the design's module count; with module-level monitoring every module installed must report (common practice).
 describe("modules reporting vs installed (all must report)", () => {
-  const check = (modulesReporting: number | null, modulesInstalled = 20) => checkModulesReporting({ edition: 2020, modulesInstalled, modulesReporting });
+  const check = (modulesReporting: number | null, modulesInstalled = 20) =>
+    checkModulesReporting({ edition: 2020, modulesInstalled, modulesReporting });
 
   test.each([
     [20, "pass"],

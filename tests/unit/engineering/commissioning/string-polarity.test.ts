@@ -9,7 +9,12 @@ describe("string polarity", () => {
     ["reversed", "fail", "recorded"],
     [null, "warn", "missing"],
   ] as const)("%j → %s", (polarity, status, state) => {
-    expect(checkPolarity(stringReading({ polarity }), 2023)).toMatchObject({ status, reading: state, kind: "string-polarity", id: "string-polarity:S1" });
+    expect(checkPolarity(stringReading({ polarity }), 2023)).toMatchObject({
+      status,
+      reading: state,
+      kind: "string-polarity",
+      id: "string-polarity:S1",
+    });
   });
 
   test("a reversed string must not be landed", () => {

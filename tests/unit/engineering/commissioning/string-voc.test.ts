@@ -1,5 +1,12 @@
 import { describe, expect, test } from "vitest";
-import { DesignInputError, checkStringVoc, moduleVocAtV, stringVocWindow, type StringTestReading, type TempCoefficient } from "@/lib/engineering";
+import {
+  DesignInputError,
+  checkStringVoc,
+  moduleVocAtV,
+  stringVocWindow,
+  type StringTestReading,
+  type TempCoefficient,
+} from "@/lib/engineering";
 import { FENWICK, stringReading } from "./fixtures";
 
 describe("module Voc at a temperature: the 690.7(A)(1) coefficient arithmetic at any temperature", () => {
@@ -20,8 +27,12 @@ describe("module Voc at a temperature: the 690.7(A)(1) coefficient arithmetic at
 
 // The ±5 % window and the 30 °C cell rise over the air are common practice; the correction is 690.7(A)(1)'s.
 describe("string open-circuit voltage before energizing", () => {
-  const at = (vocV: number | null, tempC: number | null = 45, source: "module" | "ambient" = "module", over: Partial<StringTestReading> = {}) =>
-    checkStringVoc(stringReading({ vocV, ...over }), { tempC, source }, 2023);
+  const at = (
+    vocV: number | null,
+    tempC: number | null = 45,
+    source: "module" | "ambient" = "module",
+    over: Partial<StringTestReading> = {},
+  ) => checkStringVoc(stringReading({ vocV, ...over }), { tempC, source }, 2023);
 
   test("window at a module temperature: 11 × 37.2 × (1 + 20 × −0.0027) = 387.1 V, ± 5 %", () => {
     const w = stringVocWindow(stringReading(), { tempC: 45, source: "module" });

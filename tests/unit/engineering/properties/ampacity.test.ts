@@ -37,7 +37,9 @@ describe("ampacity: bigger conductors carry more, hotter and fuller raceways car
   test("a bigger conductor never has a lower table ampacity, in any column or edition", () => {
     fc.assert(
       fc.property(sizePairArb, columnArb, editionArb, ({ material, smaller, larger }, columnC, edition) => {
-        expect(tableAmpacityA(larger, material, columnC, edition)).toBeGreaterThanOrEqual(tableAmpacityA(smaller, material, columnC, edition));
+        expect(tableAmpacityA(larger, material, columnC, edition)).toBeGreaterThanOrEqual(
+          tableAmpacityA(smaller, material, columnC, edition),
+        );
       }),
       RUNS,
     );
@@ -45,17 +47,25 @@ describe("ampacity: bigger conductors carry more, hotter and fuller raceways car
 
   test("a bigger conductor never has a lower terminal, corrected or usable ampacity", () => {
     fc.assert(
-      fc.property(sizePairArb, insulationArb, columnArb, conditionsArb, editionArb, num(0, 200), (pair, insulationTempC, terminalC, conditions, edition, currentA) => {
-        const spec = (size: ConductorSpec["size"]): ConductorSpec => ({ size, material: pair.material, insulationTempC });
-        const small = evaluateConductor(spec(pair.smaller), terminalC, currentA, conditions, edition);
-        const big = evaluateConductor(spec(pair.larger), terminalC, currentA, conditions, edition);
-        expect(big.terminalAmpacityA).toBeGreaterThanOrEqual(small.terminalAmpacityA);
-        expect(big.correctedAmpacityA).toBeGreaterThanOrEqual(small.correctedAmpacityA);
-        expect(big.usableAmpacityA).toBeGreaterThanOrEqual(small.usableAmpacityA);
-        // A conductor that passes never fails when it is made bigger.
-        if (small.passesTerminal) expect(big.passesTerminal).toBe(true);
-        if (small.passesConditions) expect(big.passesConditions).toBe(true);
-      }),
+      fc.property(
+        sizePairArb,
+        insulationArb,
+        columnArb,
+        conditionsArb,
+        editionArb,
+        num(0, 200),
+        (pair, insulationTempC, terminalC, conditions, edition, currentA) => {
+          const spec = (size: ConductorSpec["size"]): ConductorSpec => ({ size, material: pair.material, insulationTempC });
+          const small = evaluateConductor(spec(pair.smaller), terminalC, currentA, conditions, edition);
+          const big = evaluateConductor(spec(pair.larger), terminalC, currentA, conditions, edition);
+          expect(big.terminalAmpacityA).toBeGreaterThanOrEqual(small.terminalAmpacityA);
+          expect(big.correctedAmpacityA).toBeGreaterThanOrEqual(small.correctedAmpacityA);
+          expect(big.usableAmpacityA).toBeGreaterThanOrEqual(small.usableAmpacityA);
+          // A conductor that passes never fails when it is made bigger.
+          if (small.passesTerminal) expect(big.passesTerminal).toBe(true);
+          if (small.passesConditions) expect(big.passesConditions).toBe(true);
+        },
+      ),
       RUNS,
     );
   });

@@ -151,7 +151,13 @@ function roofPlanesArb(moduleCount: number): fc.Arbitrary<RoofPlane[]> {
       const first = split && moduleCount > 1 ? Math.ceil(moduleCount / 2) : moduleCount;
       const planes: RoofPlane[] = [{ id: "south", label: "South roof", moduleCount: first, attachmentCount, rackingWeightLb }];
       if (first < moduleCount) {
-        planes.push({ id: "west", label: "West roof", moduleCount: moduleCount - first, attachmentCount, rackingWeightLb: rackingWeightLb / 2 });
+        planes.push({
+          id: "west",
+          label: "West roof",
+          moduleCount: moduleCount - first,
+          attachmentCount,
+          rackingWeightLb: rackingWeightLb / 2,
+        });
       }
       return planes;
     });
@@ -182,13 +188,25 @@ const seriesDesignArb: fc.Arbitrary<Design> = fc
   })
   .chain((g) => {
     const inverter: Inverter = compact({
-      id: "inv-1", maker: "Northmere", model: "NS-GEN", kind: "string" as const, quantity: 1, ...g.ac,
-      maxDcInputV: g.maxDcInputV, mpptMinV: g.mpptMinV, mpptMaxV: g.mpptMaxV, maxInputIscA: g.maxInputIscA,
+      id: "inv-1",
+      maker: "Northmere",
+      model: "NS-GEN",
+      kind: "string" as const,
+      quantity: 1,
+      ...g.ac,
+      maxDcInputV: g.maxDcInputV,
+      mpptMinV: g.mpptMinV,
+      mpptMaxV: g.mpptMaxV,
+      maxInputIscA: g.maxInputIscA,
     });
     const strings: PvString[] = Array.from({ length: g.stringCount }, (_, i) => ({
-      id: `S${i + 1}`, inverterId: "inv-1", mpptIndex: g.oneInput ? 1 : i + 1, modulesInSeries: g.modulesInSeries,
+      id: `S${i + 1}`,
+      inverterId: "inv-1",
+      mpptIndex: g.oneInput ? 1 : i + 1,
+      modulesInSeries: g.modulesInSeries,
     }));
-    const device: ModuleLevelDevice | undefined = g.device && compact({ kind: "shutdown-device" as const, maker: "Quillon", model: "QR-GEN", ...g.device });
+    const device: ModuleLevelDevice | undefined =
+      g.device && compact({ kind: "shutdown-device" as const, maker: "Quillon", model: "QR-GEN", ...g.device });
     return fc
       .record({
         dc: runArb("dc", { kind: "dc-strings", stringIds: strings.map((s) => s.id) }, true),
@@ -198,8 +216,14 @@ const seriesDesignArb: fc.Arbitrary<Design> = fc
       })
       .map(({ dc, ac, roofPlanes, withPath }) =>
         compact({
-          ...g.extras, module: g.module, inverters: [inverter], moduleLevelDevice: device,
-          listedRapidShutdownSystem: g.listedRapidShutdownSystem, strings, runs: [dc, ac], roofPlanes,
+          ...g.extras,
+          module: g.module,
+          inverters: [inverter],
+          moduleLevelDevice: device,
+          listedRapidShutdownSystem: g.listedRapidShutdownSystem,
+          strings,
+          runs: [dc, ac],
+          roofPlanes,
           paths: withPath ? [{ id: "p1", label: "Array to panel", runIds: ["dc", "ac"] }] : undefined,
         }),
       );
@@ -219,10 +243,21 @@ const optimizerDesignArb: fc.Arbitrary<Design> = fc
   })
   .chain((g) => {
     const inverter: Inverter = compact({
-      id: "inv-opt", maker: "Northmere", model: "NO-GEN", kind: "string" as const, quantity: 1, ...g.ac,
-      maxDcInputV: 480, regulatedStringV: g.regulatedStringV, maxStringPowerW: g.maxStringPowerW,
+      id: "inv-opt",
+      maker: "Northmere",
+      model: "NO-GEN",
+      kind: "string" as const,
+      quantity: 1,
+      ...g.ac,
+      maxDcInputV: 480,
+      regulatedStringV: g.regulatedStringV,
+      maxStringPowerW: g.maxStringPowerW,
     });
-    const strings: PvString[] = Array.from({ length: g.stringCount }, (_, i) => ({ id: `S${i + 1}`, inverterId: "inv-opt", modulesInSeries: g.modulesInSeries }));
+    const strings: PvString[] = Array.from({ length: g.stringCount }, (_, i) => ({
+      id: `S${i + 1}`,
+      inverterId: "inv-opt",
+      modulesInSeries: g.modulesInSeries,
+    }));
     const optimizer: ModuleLevelDevice = compact({ kind: "optimizer" as const, maker: "Fenwick", model: "FO-GEN", ...g.optimizer });
     return fc
       .record({
@@ -231,7 +266,15 @@ const optimizerDesignArb: fc.Arbitrary<Design> = fc
         roofPlanes: roofPlanesArb(g.stringCount * g.modulesInSeries),
       })
       .map(({ dc, ac, roofPlanes }) =>
-        compact({ ...g.extras, module: g.module, inverters: [inverter], moduleLevelDevice: optimizer, strings, runs: [dc, ac], roofPlanes }),
+        compact({
+          ...g.extras,
+          module: g.module,
+          inverters: [inverter],
+          moduleLevelDevice: optimizer,
+          strings,
+          runs: [dc, ac],
+          roofPlanes,
+        }),
       );
   });
 
@@ -250,12 +293,25 @@ const microDesignArb: fc.Arbitrary<Design> = fc
   })
   .chain((g) => {
     const micro: Inverter = compact({
-      id: "micro", maker: "Halvard", model: "HM-GEN", kind: "micro" as const, quantity: g.moduleCount,
-      acPowerW: Math.round(g.unitA * g.acVoltageV), acOutputCurrentA: g.unitA, acVoltageV: g.acVoltageV, phase: 1 as const,
-      maxDcInputV: g.maxDcInputV, mpptMinV: g.mpptMinV, mpptMaxV: g.mpptMaxV, maxInputIscA: g.maxInputIscA,
+      id: "micro",
+      maker: "Halvard",
+      model: "HM-GEN",
+      kind: "micro" as const,
+      quantity: g.moduleCount,
+      acPowerW: Math.round(g.unitA * g.acVoltageV),
+      acOutputCurrentA: g.unitA,
+      acVoltageV: g.acVoltageV,
+      phase: 1 as const,
+      maxDcInputV: g.maxDcInputV,
+      mpptMinV: g.mpptMinV,
+      mpptMaxV: g.mpptMaxV,
+      maxInputIscA: g.maxInputIscA,
     });
     return fc
-      .record({ ac: runArb("ac", { kind: "ac-output", sources: [{ inverterId: "micro" }] }, false), roofPlanes: roofPlanesArb(g.moduleCount) })
+      .record({
+        ac: runArb("ac", { kind: "ac-output", sources: [{ inverterId: "micro" }] }, false),
+        roofPlanes: roofPlanesArb(g.moduleCount),
+      })
       .map(({ ac, roofPlanes }) => compact({ ...g.extras, module: g.module, inverters: [micro], strings: [], runs: [ac], roofPlanes }));
   });
 

@@ -52,15 +52,20 @@ describe("690.7(A) maximum voltage: colder never means lower", () => {
 
   test("a colder record low never lowers the string voltage, by either method", () => {
     fc.assert(
-      fc.property(fc.option(coefficientArb, { nil: undefined }), fc.integer({ min: 1, max: 25 }), coldThenWarm(-40, 40), (coeff, n, [colderC, warmerC]) => {
-        const design = stringDesign({ module: coeff ? withCoefficient(coeff) : tableModule });
-        const string = { id: "S1", inverterId: "inv-1", modulesInSeries: n };
-        const [colder] = checkStringVoltage(design, { ...coldSite, recordLowTempC: colderC }, string);
-        const [warmer] = checkStringVoltage(design, { ...coldSite, recordLowTempC: warmerC }, string);
-        expect(colder!.value!).toBeGreaterThanOrEqual(warmer!.value!);
-        // A failing string is never reported as passing when the site gets colder.
-        if (warmer!.status === "fail") expect(colder!.status).toBe("fail");
-      }),
+      fc.property(
+        fc.option(coefficientArb, { nil: undefined }),
+        fc.integer({ min: 1, max: 25 }),
+        coldThenWarm(-40, 40),
+        (coeff, n, [colderC, warmerC]) => {
+          const design = stringDesign({ module: coeff ? withCoefficient(coeff) : tableModule });
+          const string = { id: "S1", inverterId: "inv-1", modulesInSeries: n };
+          const [colder] = checkStringVoltage(design, { ...coldSite, recordLowTempC: colderC }, string);
+          const [warmer] = checkStringVoltage(design, { ...coldSite, recordLowTempC: warmerC }, string);
+          expect(colder!.value!).toBeGreaterThanOrEqual(warmer!.value!);
+          // A failing string is never reported as passing when the site gets colder.
+          if (warmer!.status === "fail") expect(colder!.status).toBe("fail");
+        },
+      ),
       RUNS,
     );
   });

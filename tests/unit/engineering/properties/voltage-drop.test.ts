@@ -26,7 +26,9 @@ describe("voltage drop: longer runs lose more, larger conductors lose less", () 
     fc.assert(
       fc.property(systemArb, num(0, 2000), num(0, 2000), num(0.01, 6), num(0, 200), (system, a, b, ohmPerKft, currentA) => {
         const [shortFt, longFt] = a <= b ? [a, b] : [b, a];
-        expect(voltageDropV(system, longFt, ohmPerKft, currentA)).toBeGreaterThanOrEqual(voltageDropV(system, shortFt, ohmPerKft, currentA));
+        expect(voltageDropV(system, longFt, ohmPerKft, currentA)).toBeGreaterThanOrEqual(
+          voltageDropV(system, shortFt, ohmPerKft, currentA),
+        );
       }),
       RUNS,
     );
@@ -62,7 +64,12 @@ describe("voltage drop: longer runs lose more, larger conductors lose less", () 
     fc.assert(
       fc.property(runArb, caseArb, conductorTempArb, num(1, 500), ({ design, run }, c, conductorTempC, lengthFt) => {
         const [i, j] = c.smaller <= c.larger ? [c.smaller, c.larger] : [c.larger, c.smaller];
-        const sized: ConductorRun = { ...run, lengthFt, conductorTempC, conductor: { ...run.conductor, material: c.material, stranding: c.stranding } };
+        const sized: ConductorRun = {
+          ...run,
+          lengthFt,
+          conductorTempC,
+          conductor: { ...run.conductor, material: c.material, stranding: c.stranding },
+        };
         const smaller = runVoltageDrop(design, sized, c.sizes[i]);
         const larger = runVoltageDrop(design, sized, c.sizes[j]);
         expect(larger.dropV).toBeLessThanOrEqual(smaller.dropV);
@@ -74,7 +81,8 @@ describe("voltage drop: longer runs lose more, larger conductors lose less", () 
   test("copper never drops more than aluminum of the same size", () => {
     fc.assert(
       fc.property(runArb, fc.constantFrom(...listedSizes("Al")), num(1, 500), ({ design, run }, size, lengthFt) => {
-        const as = (material: "Cu" | "Al") => runVoltageDrop(design, { ...run, lengthFt, conductor: { ...run.conductor, material, stranding: "stranded" } }, size);
+        const as = (material: "Cu" | "Al") =>
+          runVoltageDrop(design, { ...run, lengthFt, conductor: { ...run.conductor, material, stranding: "stranded" } }, size);
         expect(as("Cu").dropV).toBeLessThanOrEqual(as("Al").dropV);
       }),
       RUNS,

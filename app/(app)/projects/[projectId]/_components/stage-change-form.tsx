@@ -7,7 +7,15 @@ import { FormMessage } from "@/components/ui/form-message";
 import { STAGES, STAGE_LABELS, stageIndex, type Stage } from "@/lib/domain/stages";
 import type { changeStageAction } from "../../actions";
 
-export function StageChangeForm({ projectId, current, changeStage }: { projectId: string; current: Stage; changeStage: typeof changeStageAction }) {
+export function StageChangeForm({
+  projectId,
+  current,
+  changeStage,
+}: {
+  projectId: string;
+  current: Stage;
+  changeStage: typeof changeStageAction;
+}) {
   const router = useRouter();
   const next = STAGES[Math.min(stageIndex(current) + 1, STAGES.length - 1)];
   const [toStage, setToStage] = useState<Stage>(next === current ? STAGES[0] : next);
@@ -46,7 +54,15 @@ export function StageChangeForm({ projectId, current, changeStage }: { projectId
       <label className="label" htmlFor="stage-note">
         Note
       </label>
-      <textarea id="stage-note" className="input" rows={2} maxLength={2000} value={note} onChange={(e) => setNote(e.target.value)} placeholder="What happened, e.g. permit number received" />
+      <textarea
+        id="stage-note"
+        className="input"
+        rows={2}
+        maxLength={2000}
+        value={note}
+        onChange={(e) => setNote(e.target.value)}
+        placeholder="What happened, e.g. permit number received"
+      />
       <Button type="submit" disabled={pending} className="w-full">
         {pending ? "Saving…" : "Change stage"}
       </Button>

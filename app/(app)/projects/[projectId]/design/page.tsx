@@ -21,9 +21,20 @@ export default async function DesignPage({ params }: { params: Promise<{ project
   return (
     <div className="space-y-4">
       <ProjectSubpageHeader project={project} title="Design">
-        {project.jurisdiction ? `Checked against NEC ${project.jurisdiction.necEdition} as adopted by ${project.jurisdiction.name}.` : "Choose the project's AHJ to run the code checks."} Your input is saved as you go.
+        {project.jurisdiction
+          ? `Checked against NEC ${project.jurisdiction.necEdition} as adopted by ${project.jurisdiction.name}.`
+          : "Choose the project's AHJ to run the code checks."}{" "}
+        Your input is saved as you go.
       </ProjectSubpageHeader>
-      <DesignEditor save={saveDesignAction} projectId={project.id} initialDraft={design.draft} initialRevision={design.revision} catalog={choices} conditions={context.conditions} readOnly={!can(viewer, "project:edit")} />
+      <DesignEditor
+        save={saveDesignAction}
+        projectId={project.id}
+        initialDraft={design.draft}
+        initialRevision={design.revision}
+        catalog={choices}
+        conditions={context.conditions}
+        readOnly={!can(viewer, "project:edit")}
+      />
     </div>
   );
 }

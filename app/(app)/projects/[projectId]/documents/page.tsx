@@ -18,7 +18,11 @@ export const metadata: Metadata = { title: "Documents" };
 export default async function DocumentsPage({ params }: { params: Promise<{ projectId: string }> }) {
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
-  const [packets, design, engine] = await Promise.all([listPackets({ viewer, projectId: project.id }), getDesignStatus({ viewer, projectId: project.id }), getEngineDesign({ viewer, projectId: project.id })]);
+  const [packets, design, engine] = await Promise.all([
+    listPackets({ viewer, projectId: project.id }),
+    getDesignStatus({ viewer, projectId: project.id }),
+    getEngineDesign({ viewer, projectId: project.id }),
+  ]);
   const canShare = can(viewer, "project:edit");
   const shareLinks = canShare ? await listShareLinks({ viewer, projectId: project.id }) : [];
   const shareable = packets.filter((p) => p.status === "ready").map((p) => ({ packetId: p.id, label: revisionLabel(p) }));
@@ -36,8 +40,21 @@ export default async function DocumentsPage({ params }: { params: Promise<{ proj
           </div>
         </section>
       ) : null}
-      <PacketBoard projectId={project.id} initial={packets} canGenerate={can(viewer, "project:edit")} reviewStatus={design?.reviewStatus ?? "incomplete"} actions={{ request: requestPacketAction, retry: retryPacketAction }} />
-      {canShare ? <SharePanel projectId={project.id} revisions={shareable} links={shareLinks} actions={{ create: createShareLinkAction, revoke: revokeShareLinkAction }} /> : null}
+      <PacketBoard
+        projectId={project.id}
+        initial={packets}
+        canGenerate={can(viewer, "project:edit")}
+        reviewStatus={design?.reviewStatus ?? "incomplete"}
+        actions={{ request: requestPacketAction, retry: retryPacketAction }}
+      />
+      {canShare ? (
+        <SharePanel
+          projectId={project.id}
+          revisions={shareable}
+          links={shareLinks}
+          actions={{ create: createShareLinkAction, revoke: revokeShareLinkAction }}
+        />
+      ) : null}
     </div>
   );
 }

@@ -16,12 +16,23 @@ export default async function EditProjectPage({ params }: { params: Promise<{ pr
   const options = await getProjectFormOptions({ viewer });
   const s = (v: string | number | null) => (v === null ? "" : String(v));
   const initial = {
-    customerName: project.customerName, customerEmail: s(project.customerEmail), customerPhone: s(project.customerPhone),
-    street: project.street, city: project.city, state: project.state, postalCode: project.postalCode,
-    jurisdictionId: project.jurisdiction?.id ?? "", utilityId: project.utility?.id ?? "",
-    utilityAccountNumber: s(project.utilityAccountNumber), meterNumber: s(project.meterNumber),
-    mainBreakerA: s(project.mainBreakerA), busbarA: s(project.busbarA), serviceVoltageV: s(project.serviceVoltageV), servicePhases: s(project.servicePhases) as "" | "1" | "3",
-    coordinatorId: project.coordinator?.id ?? "", installerId: project.installer?.id ?? "",
+    customerName: project.customerName,
+    customerEmail: s(project.customerEmail),
+    customerPhone: s(project.customerPhone),
+    street: project.street,
+    city: project.city,
+    state: project.state,
+    postalCode: project.postalCode,
+    jurisdictionId: project.jurisdiction?.id ?? "",
+    utilityId: project.utility?.id ?? "",
+    utilityAccountNumber: s(project.utilityAccountNumber),
+    meterNumber: s(project.meterNumber),
+    mainBreakerA: s(project.mainBreakerA),
+    busbarA: s(project.busbarA),
+    serviceVoltageV: s(project.serviceVoltageV),
+    servicePhases: s(project.servicePhases) as "" | "1" | "3",
+    coordinatorId: project.coordinator?.id ?? "",
+    installerId: project.installer?.id ?? "",
   };
   return (
     <div className="mx-auto max-w-3xl space-y-4">

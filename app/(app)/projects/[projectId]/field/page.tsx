@@ -26,7 +26,10 @@ async function loadCommissioning(...args: Parameters<typeof getCommissioning>) {
 export default async function FieldPage({ params }: { params: Promise<{ projectId: string }> }) {
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
-  const [commissioning, files] = await Promise.all([loadCommissioning({ viewer, projectId: project.id }), listProjectFiles({ viewer, projectId: project.id })]);
+  const [commissioning, files] = await Promise.all([
+    loadCommissioning({ viewer, projectId: project.id }),
+    listProjectFiles({ viewer, projectId: project.id }),
+  ]);
   const mayRecord = can(viewer, "field:record", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null });
   return (
     <div className="mx-auto max-w-3xl space-y-5">
@@ -47,12 +50,22 @@ export default async function FieldPage({ params }: { params: Promise<{ projectI
           />
           <section className="panel space-y-3" aria-labelledby="documents-heading">
             <h2 id="documents-heading">Certificate and report</h2>
-            <p className="text-sm text-ink-soft">Both print the readings as last saved. Sign the certificate on site, then upload it below.</p>
+            <p className="text-sm text-ink-soft">
+              Both print the readings as last saved. Sign the certificate on site, then upload it below.
+            </p>
             <div className="flex flex-wrap gap-2">
-              <a className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline" href={`/api/v1/projects/${project.id}/commissioning/certificate`} download>
+              <a
+                className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline"
+                href={`/api/v1/projects/${project.id}/commissioning/certificate`}
+                download
+              >
                 Certificate of completion (PDF)
               </a>
-              <a className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline" href={`/api/v1/projects/${project.id}/commissioning/report`} download>
+              <a
+                className="rounded border border-paper-edge bg-white px-4 py-2 text-sm no-underline hover:bg-paper-deep hover:no-underline"
+                href={`/api/v1/projects/${project.id}/commissioning/report`}
+                download
+              >
                 Commissioning report (PDF)
               </a>
             </div>

@@ -2,23 +2,45 @@
 
 import { revalidatePath } from "next/cache";
 import { defineAction } from "@/lib/server/action";
-import { answerFilingItem, changeFilingStatus, recordCorrectionRound, recordInspectionResult, recordPto, scheduleInspection, updateFilingDetails } from "@/lib/server/data/filings";
-import { AnswerItemInput, ChangeFilingStatusInput, FilingDetailsInput, InspectionResultInput, RecordPtoInput, RecordRoundInput, ScheduleInspectionInput } from "@/lib/schemas/filings";
+import {
+  answerFilingItem,
+  changeFilingStatus,
+  recordCorrectionRound,
+  recordInspectionResult,
+  recordPto,
+  scheduleInspection,
+  updateFilingDetails,
+} from "@/lib/server/data/filings";
+import {
+  AnswerItemInput,
+  ChangeFilingStatusInput,
+  FilingDetailsInput,
+  InspectionResultInput,
+  RecordPtoInput,
+  RecordRoundInput,
+  ScheduleInspectionInput,
+} from "@/lib/schemas/filings";
 
 // Every filing change refreshes the project's pages: its stage and waiting-on may have moved.
 const refresh = () => revalidatePath("/projects/[projectId]", "layout");
 
-export const changeFilingStatusAction = defineAction({ schema: ChangeFilingStatusInput, permission: "filings:edit" }, async (input, { viewer }) => {
-  await changeFilingStatus({ viewer, input });
-  refresh();
-  return { status: input.status };
-});
+export const changeFilingStatusAction = defineAction(
+  { schema: ChangeFilingStatusInput, permission: "filings:edit" },
+  async (input, { viewer }) => {
+    await changeFilingStatus({ viewer, input });
+    refresh();
+    return { status: input.status };
+  },
+);
 
-export const updateFilingDetailsAction = defineAction({ schema: FilingDetailsInput, permission: "filings:edit" }, async (input, { viewer }) => {
-  await updateFilingDetails({ viewer, input });
-  refresh();
-  return { filingId: input.filingId };
-});
+export const updateFilingDetailsAction = defineAction(
+  { schema: FilingDetailsInput, permission: "filings:edit" },
+  async (input, { viewer }) => {
+    await updateFilingDetails({ viewer, input });
+    refresh();
+    return { filingId: input.filingId };
+  },
+);
 
 export const recordRoundAction = defineAction({ schema: RecordRoundInput, permission: "filings:edit" }, async (input, { viewer }) => {
   const round = await recordCorrectionRound({ viewer, input });
@@ -32,17 +54,23 @@ export const answerItemAction = defineAction({ schema: AnswerItemInput, permissi
   return { itemId: input.itemId };
 });
 
-export const scheduleInspectionAction = defineAction({ schema: ScheduleInspectionInput, permission: "filings:edit" }, async (input, { viewer }) => {
-  const booked = await scheduleInspection({ viewer, input });
-  refresh();
-  return booked;
-});
+export const scheduleInspectionAction = defineAction(
+  { schema: ScheduleInspectionInput, permission: "filings:edit" },
+  async (input, { viewer }) => {
+    const booked = await scheduleInspection({ viewer, input });
+    refresh();
+    return booked;
+  },
+);
 
-export const recordInspectionResultAction = defineAction({ schema: InspectionResultInput, permission: "filings:edit" }, async (input, { viewer }) => {
-  await recordInspectionResult({ viewer, input });
-  refresh();
-  return { inspectionId: input.inspectionId };
-});
+export const recordInspectionResultAction = defineAction(
+  { schema: InspectionResultInput, permission: "filings:edit" },
+  async (input, { viewer }) => {
+    await recordInspectionResult({ viewer, input });
+    refresh();
+    return { inspectionId: input.inspectionId };
+  },
+);
 
 export const recordPtoAction = defineAction({ schema: RecordPtoInput, permission: "filings:edit" }, async (input, { viewer }) => {
   await recordPto({ viewer, input });

@@ -2,7 +2,16 @@ import type { Metadata } from "next";
 import { ProjectSubpageHeader } from "@/components/projects/project-subpage-header";
 import { LocalTime } from "@/components/time/local-time";
 import { can } from "@/lib/domain/permissions";
-import { FILING_KIND_LABELS, INSPECTION_KIND_LABELS, INSPECTION_KINDS_BY_FILING, NEXT_STATUSES, WAITING_PARTY_LABELS, WITH_THE_AUTHORITY, isFiled, needsReinspection } from "@/lib/domain/filings";
+import {
+  FILING_KIND_LABELS,
+  INSPECTION_KIND_LABELS,
+  INSPECTION_KINDS_BY_FILING,
+  NEXT_STATUSES,
+  WAITING_PARTY_LABELS,
+  WITH_THE_AUTHORITY,
+  isFiled,
+  needsReinspection,
+} from "@/lib/domain/filings";
 import { calendarDayText, localIsoDate } from "@/lib/domain/time-zones";
 import { centsToDollarsText } from "@/lib/fees/money";
 import { requireUser } from "@/lib/server/auth";
@@ -47,11 +56,17 @@ export default async function FilingsPage({ params }: { params: Promise<{ projec
     canEdit ? getProjectFees({ viewer, projectId: project.id }) : null,
   ]);
   const today = localIsoDate(new Date().toISOString(), organization.timeZone);
-  const payments = (fees?.payments ?? []).filter((p) => p.status !== "pending" && p.status !== "expired").map((p) => ({ id: p.id, label: `${centsToDollarsText(p.amountCents)} paid ${calendarDayText(localIsoDate(p.paidAt ?? p.createdAt, organization.timeZone))}` }));
+  const payments = (fees?.payments ?? [])
+    .filter((p) => p.status !== "pending" && p.status !== "expired")
+    .map((p) => ({
+      id: p.id,
+      label: `${centsToDollarsText(p.amountCents)} paid ${calendarDayText(localIsoDate(p.paidAt ?? p.createdAt, organization.timeZone))}`,
+    }));
   return (
     <div className="space-y-5">
       <ProjectSubpageHeader project={project} title="Filings">
-        Each authority that must say yes, side by side: what went in, what came back, the inspections, and who holds the project now. Requirements differ from one AHJ and utility to the next: follow each authority&apos;s own instructions.
+        Each authority that must say yes, side by side: what went in, what came back, the inspections, and who holds the project now.
+        Requirements differ from one AHJ and utility to the next: follow each authority&apos;s own instructions.
       </ProjectSubpageHeader>
       <section className="panel flex flex-wrap items-center gap-x-6 gap-y-1 text-sm" aria-label="Waiting on" data-testid="waiting-on">
         {filings.waitingOn ? (
@@ -69,7 +84,9 @@ export default async function FilingsPage({ params }: { params: Promise<{ projec
           <span>Nobody is holding this project.</span>
         )}
       </section>
-      {filings.filings.length === 0 ? <p className="panel text-sm text-ink-soft">No filing yet: choose the project&apos;s AHJ and utility on its edit page.</p> : null}
+      {filings.filings.length === 0 ? (
+        <p className="panel text-sm text-ink-soft">No filing yet: choose the project&apos;s AHJ and utility on its edit page.</p>
+      ) : null}
       {filings.filings.map((filing) => {
         const kinds = INSPECTION_KINDS_BY_FILING[filing.kind];
         return (
@@ -82,11 +99,19 @@ export default async function FilingsPage({ params }: { params: Promise<{ projec
             actions={ACTIONS}
             designRevision={design?.revision ?? null}
             nextStatuses={NEXT_STATUSES[filing.status].filter((s) => s !== "corrections_requested")}
-            revisions={packets.filter((p) => p.status === "ready" && (filing.kind === "other" || p.kind === filing.kind)).map((p) => ({ id: p.id, label: `Rev ${p.revision}` })).reverse()}
+            revisions={packets
+              .filter((p) => p.status === "ready" && (filing.kind === "other" || p.kind === filing.kind))
+              .map((p) => ({ id: p.id, label: `Rev ${p.revision}` }))
+              .reverse()}
             payments={payments}
             takesRound={WITH_THE_AUTHORITY.includes(filing.status)}
             inspectionKinds={filing.kind === "permit" ? (filing.status === "approved" ? kinds : []) : isFiled(filing.status) ? kinds : []}
-            failedInspections={filing.inspections.filter((i) => needsReinspection(i.result) && !filing.inspections.some((r) => r.reinspectionOf === i.id)).map((i) => ({ id: i.id, label: `${INSPECTION_KIND_LABELS[i.kind]} of ${i.resultOn ? calendarDayText(i.resultOn) : i.scheduledFor ? calendarDayText(i.scheduledFor) : "an unknown day"}` }))}
+            failedInspections={filing.inspections
+              .filter((i) => needsReinspection(i.result) && !filing.inspections.some((r) => r.reinspectionOf === i.id))
+              .map((i) => ({
+                id: i.id,
+                label: `${INSPECTION_KIND_LABELS[i.kind]} of ${i.resultOn ? calendarDayText(i.resultOn) : i.scheduledFor ? calendarDayText(i.scheduledFor) : "an unknown day"}`,
+              }))}
           />
         );
       })}

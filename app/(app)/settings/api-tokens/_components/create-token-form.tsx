@@ -27,7 +27,10 @@ export function CreateTokenForm({ create }: { create: typeof createApiTokenActio
 
   async function copy() {
     if (!created) return;
-    await navigator.clipboard?.writeText(created.token).then(() => setCopied(true), () => setCopied(false));
+    await navigator.clipboard?.writeText(created.token).then(
+      () => setCopied(true),
+      () => setCopied(false),
+    );
   }
 
   return (
@@ -35,7 +38,12 @@ export function CreateTokenForm({ create }: { create: typeof createApiTokenActio
       <form onSubmit={submit} className="space-y-3" noValidate>
         <FormMessage kind="error">{message}</FormMessage>
         <div className="grid gap-3 sm:grid-cols-[1fr_auto] sm:items-start">
-          <Field label="Token name" htmlFor="token-name" error={errors.name?.message} hint="Name it after the integration that will hold it, e.g. Quote tool">
+          <Field
+            label="Token name"
+            htmlFor="token-name"
+            error={errors.name?.message}
+            hint="Name it after the integration that will hold it, e.g. Quote tool"
+          >
             <input id="token-name" className="input" aria-invalid={Boolean(errors.name)} {...form.register("name")} />
           </Field>
           <Button type="submit" className="sm:mt-6" disabled={isSubmitting}>
@@ -49,12 +57,21 @@ export function CreateTokenForm({ create }: { create: typeof createApiTokenActio
             Copy the token for “{created.name}” now. It is shown only this once; Ohmstead keeps only a fingerprint of it.
           </p>
           <div className="flex gap-2">
-            <input aria-label="New API token" readOnly value={created.token} className="input measure flex-1" onFocus={(e) => e.currentTarget.select()} />
+            <input
+              aria-label="New API token"
+              readOnly
+              value={created.token}
+              className="input measure flex-1"
+              onFocus={(e) => e.currentTarget.select()}
+            />
             <Button type="button" variant="secondary" onClick={copy}>
               {copied ? "Copied" : "Copy"}
             </Button>
           </div>
-          <p className="text-xs text-ink-soft">Send it as the header Authorization: Bearer followed by the token. Store it where your integration keeps secrets; if it leaks, revoke it below.</p>
+          <p className="text-xs text-ink-soft">
+            Send it as the header Authorization: Bearer followed by the token. Store it where your integration keeps secrets; if it leaks,
+            revoke it below.
+          </p>
         </div>
       ) : null}
     </div>

@@ -5,7 +5,15 @@ import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import type { revokeApiTokenAction } from "../actions";
 
-export function RevokeTokenButton({ apiTokenId, name, revokeToken }: { apiTokenId: string; name: string; revokeToken: typeof revokeApiTokenAction }) {
+export function RevokeTokenButton({
+  apiTokenId,
+  name,
+  revokeToken,
+}: {
+  apiTokenId: string;
+  name: string;
+  revokeToken: typeof revokeApiTokenAction;
+}) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
@@ -25,7 +33,11 @@ export function RevokeTokenButton({ apiTokenId, name, revokeToken }: { apiTokenI
       <Button variant="danger" disabled={pending} onClick={revoke}>
         {pending ? "Revoking…" : "Revoke"}
       </Button>
-      {message ? <p className="text-xs text-result-fail" role="alert">{message}</p> : null}
+      {message ? (
+        <p className="text-xs text-result-fail" role="alert">
+          {message}
+        </p>
+      ) : null}
     </>
   );
 }

@@ -24,14 +24,24 @@ export default async function EditEquipmentPage({ params, searchParams }: Props)
         <Link href="/settings/equipment">Back to the equipment catalog</Link>
       </p>
       <h1>
-        {item.maker} {item.model} <span className="text-base font-normal text-ink-faint">{EQUIPMENT_KIND_LABELS[item.kind]}{item.isArchived ? ", archived" : ""}</span>
+        {item.maker} {item.model}{" "}
+        <span className="text-base font-normal text-ink-faint">
+          {EQUIPMENT_KIND_LABELS[item.kind]}
+          {item.isArchived ? ", archived" : ""}
+        </span>
       </h1>
       {justAdded ? <FormMessage kind="info">Added to the catalog. Attach the data sheet below.</FormMessage> : null}
       <section className="panel" aria-labelledby="datasheet-heading">
-        <h2 id="datasheet-heading" className="mb-2">Data sheet</h2>
+        <h2 id="datasheet-heading" className="mb-2">
+          Data sheet
+        </h2>
         <DatasheetUpload equipmentId={item.id} current={item.datasheet} />
       </section>
-      <EquipmentForm save={{ update: updateEquipmentAction, equipmentId: item.id }} kind={item.kind} initial={formValuesOf(item.kind, item)} />
+      <EquipmentForm
+        save={{ update: updateEquipmentAction, equipmentId: item.id }}
+        kind={item.kind}
+        initial={formValuesOf(item.kind, item)}
+      />
     </div>
   );
 }

@@ -5,7 +5,17 @@ import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import type { setEquipmentArchivedAction } from "../actions";
 
-export function ArchiveButton({ equipmentId, isArchived, name, setArchived }: { equipmentId: string; isArchived: boolean; name: string; setArchived: typeof setEquipmentArchivedAction }) {
+export function ArchiveButton({
+  equipmentId,
+  isArchived,
+  name,
+  setArchived,
+}: {
+  equipmentId: string;
+  isArchived: boolean;
+  name: string;
+  setArchived: typeof setEquipmentArchivedAction;
+}) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
@@ -21,10 +31,19 @@ export function ArchiveButton({ equipmentId, isArchived, name, setArchived }: { 
 
   return (
     <>
-      <Button variant={isArchived ? "secondary" : "quiet"} disabled={pending} onClick={toggle} aria-label={`${isArchived ? "Restore" : "Archive"} ${name}`}>
+      <Button
+        variant={isArchived ? "secondary" : "quiet"}
+        disabled={pending}
+        onClick={toggle}
+        aria-label={`${isArchived ? "Restore" : "Archive"} ${name}`}
+      >
         {isArchived ? "Restore" : "Archive"}
       </Button>
-      {message ? <span className="block text-xs text-result-fail" role="alert">{message}</span> : null}
+      {message ? (
+        <span className="block text-xs text-result-fail" role="alert">
+          {message}
+        </span>
+      ) : null}
     </>
   );
 }

@@ -42,7 +42,10 @@ export function DatasheetUpload({ equipmentId, current }: { equipmentId: string;
       <p className="text-sm text-ink-soft">
         {current ? (
           <>
-            Current: <a href={`/api/v1/equipment/${equipmentId}/datasheet`} target="_blank" rel="noreferrer">{current.fileName}</a>{" "}
+            Current:{" "}
+            <a href={`/api/v1/equipment/${equipmentId}/datasheet`} target="_blank" rel="noreferrer">
+              {current.fileName}
+            </a>{" "}
             <span className="measure text-xs text-ink-faint">{formatFileSize(current.sizeBytes)}</span>
           </>
         ) : (

@@ -34,7 +34,13 @@ export function EquipmentForm({ kind, initial, save }: { kind: EquipmentKind; in
 
   const input = (path: string, label: string, { hint, unit }: { hint?: string; unit?: string } = {}) => (
     <Field label={unit ? `${label} (${unit})` : label} htmlFor={path} error={errorOf(path)} hint={hint}>
-      <input id={path} className="input" inputMode={unit === undefined ? undefined : "decimal"} aria-invalid={Boolean(errorOf(path))} {...form.register(path as Path)} />
+      <input
+        id={path}
+        className="input"
+        inputMode={unit === undefined ? undefined : "decimal"}
+        aria-invalid={Boolean(errorOf(path))}
+        {...form.register(path as Path)}
+      />
     </Field>
   );
 

@@ -26,7 +26,11 @@ export function keyFigures(item: EquipmentDto): string[] {
       return [s.inverterKind === "micro" ? "micro" : "string", n(s.acPowerW, "W AC"), n(s.maxDcInputV, "V"), window];
     }
     case "device":
-      return [item.specs.deviceKind === "optimizer" ? "optimizer" : "shutdown device", n(item.specs.maxInputV, "V"), n(item.specs.ratedInputPowerW, "W")];
+      return [
+        item.specs.deviceKind === "optimizer" ? "optimizer" : "shutdown device",
+        n(item.specs.maxInputV, "V"),
+        n(item.specs.ratedInputPowerW, "W"),
+      ];
   }
 }
 

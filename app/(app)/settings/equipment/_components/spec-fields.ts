@@ -12,7 +12,14 @@ const num = (name: string, label: string, unit: string, hint?: string): SpecFiel
 const OPTIONAL = "Leave blank when the data sheet does not give it";
 // Blank stays "not known": the design review then asks for it where a check needs it.
 const yesNo = (name: string, label: string): SpecField => ({
-  type: "select", name, label, options: [{ value: "", label: "Not known" }, { value: "yes", label: "Yes" }, { value: "no", label: "No" }],
+  type: "select",
+  name,
+  label,
+  options: [
+    { value: "", label: "Not known" },
+    { value: "yes", label: "Yes" },
+    { value: "no", label: "No" },
+  ],
 });
 
 export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
@@ -23,7 +30,15 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
     num("iscA", "Isc", "A"),
     num("impA", "Imp", "A"),
     num("vocTempCoeff.value", "Voc temperature coefficient", "", "Negative, e.g. −0.27; blank to use the NEC table instead"),
-    { type: "select", name: "vocTempCoeff.unit", label: "Coefficient unit", options: [{ value: "%/C", label: "%/°C" }, { value: "V/C", label: "V/°C" }] },
+    {
+      type: "select",
+      name: "vocTempCoeff.unit",
+      label: "Coefficient unit",
+      options: [
+        { value: "%/C", label: "%/°C" },
+        { value: "V/C", label: "V/°C" },
+      ],
+    },
     num("pmaxTempCoeffPctPerC", "Pmax temperature coefficient", "%/°C", OPTIONAL),
     num("maxSeriesFuseA", "Maximum series fuse", "A", OPTIONAL),
     num("maxSystemVoltageV", "Maximum system voltage", "V", "As listed, e.g. 1000; the review warns while it is blank"),
@@ -32,11 +47,27 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
     num("weightLb", "Weight", "lb"),
   ],
   inverter: [
-    { type: "select", name: "inverterKind", label: "Type", options: [{ value: "string", label: "String inverter" }, { value: "micro", label: "Microinverter" }] },
+    {
+      type: "select",
+      name: "inverterKind",
+      label: "Type",
+      options: [
+        { value: "string", label: "String inverter" },
+        { value: "micro", label: "Microinverter" },
+      ],
+    },
     num("acPowerW", "AC rated power", "W"),
     num("acOutputCurrentA", "Maximum continuous output current", "A"),
     num("acVoltageV", "Nominal AC voltage", "V"),
-    { type: "select", name: "phase", label: "Phases", options: [{ value: "1", label: "Single phase" }, { value: "3", label: "Three phase" }] },
+    {
+      type: "select",
+      name: "phase",
+      label: "Phases",
+      options: [
+        { value: "1", label: "Single phase" },
+        { value: "3", label: "Three phase" },
+      ],
+    },
     num("maxDcInputV", "Maximum DC input voltage", "V"),
     num("mpptMinV", "MPPT window minimum", "V", OPTIONAL),
     num("mpptMaxV", "MPPT window maximum", "V", OPTIONAL),
@@ -46,17 +77,36 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
     num("maxStringPowerW", "Maximum power per string", "W", "Only for inverters fed by optimizers"),
     { type: "text", name: "certification", label: "Certification", hint: "e.g. UL 1741 SB; IEEE 1547-2018 Category B" },
     {
-      type: "select", name: "terminalTempC", label: "Terminal temperature rating",
-      options: [{ value: "", label: "Not marked (60 °C up to 100 A)" }, { value: "60", label: "60 °C" }, { value: "75", label: "75 °C" }, { value: "90", label: "90 °C" }],
+      type: "select",
+      name: "terminalTempC",
+      label: "Terminal temperature rating",
+      options: [
+        { value: "", label: "Not marked (60 °C up to 100 A)" },
+        { value: "60", label: "60 °C" },
+        { value: "75", label: "75 °C" },
+        { value: "90", label: "90 °C" },
+      ],
     },
     yesNo("dcArcFaultProtection", "Listed DC arc-fault protection (690.11)"),
     yesNo("dcGroundFaultProtection", "DC ground-fault protection (690.41(B))"),
     yesNo("dcDisconnect", "Integrated DC disconnect (690.15)"),
-    { type: "checkbox", name: "meetsRapidShutdownWithDevices", label: "Meets rapid shutdown (690.12) together with its module-level devices" },
+    {
+      type: "checkbox",
+      name: "meetsRapidShutdownWithDevices",
+      label: "Meets rapid shutdown (690.12) together with its module-level devices",
+    },
     { type: "checkbox", name: "reportsPerModule", label: "Microinverters only: each unit reports to a gateway (module-level monitoring)" },
   ],
   device: [
-    { type: "select", name: "deviceKind", label: "Type", options: [{ value: "optimizer", label: "DC optimizer" }, { value: "shutdown-device", label: "Rapid-shutdown device" }] },
+    {
+      type: "select",
+      name: "deviceKind",
+      label: "Type",
+      options: [
+        { value: "optimizer", label: "DC optimizer" },
+        { value: "shutdown-device", label: "Rapid-shutdown device" },
+      ],
+    },
     num("ratedInputPowerW", "Rated input power", "W", OPTIONAL),
     num("maxInputV", "Maximum input voltage", "V"),
     num("maxInputIscA", "Maximum input current", "A", OPTIONAL),
@@ -69,7 +119,17 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
 
 const EMPTY_SPECS: Record<EquipmentKind, Record<string, unknown>> = {
   module: { vocTempCoeff: { value: "", unit: "%/C" } },
-  inverter: { inverterKind: "string", phase: "1", certification: "", meetsRapidShutdownWithDevices: false, reportsPerModule: false, terminalTempC: "", dcArcFaultProtection: "", dcGroundFaultProtection: "", dcDisconnect: "" },
+  inverter: {
+    inverterKind: "string",
+    phase: "1",
+    certification: "",
+    meetsRapidShutdownWithDevices: false,
+    reportsPerModule: false,
+    terminalTempC: "",
+    dcArcFaultProtection: "",
+    dcGroundFaultProtection: "",
+    dcDisconnect: "",
+  },
   device: { deviceKind: "optimizer", reportsPerModule: false },
 };
 
@@ -82,5 +142,7 @@ export function formValuesOf(kind: EquipmentKind, item?: EquipmentDto): Equipmen
 
 /** Stored figures as the form's inputs hold them: known yes/no answers as "yes"/"no", numbers as they are. */
 function formOfSpecs(specs: Record<string, unknown>): Record<string, unknown> {
-  return Object.fromEntries(Object.entries(specs).map(([k, v]) => [k, k === "meetsRapidShutdownWithDevices" || typeof v !== "boolean" ? v : v ? "yes" : "no"]));
+  return Object.fromEntries(
+    Object.entries(specs).map(([k, v]) => [k, k === "meetsRapidShutdownWithDevices" || typeof v !== "boolean" ? v : v ? "yes" : "no"]),
+  );
 }

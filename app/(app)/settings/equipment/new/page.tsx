@@ -15,7 +15,9 @@ export default async function NewEquipmentPage({ searchParams }: { searchParams:
   return (
     <div className="mx-auto max-w-3xl space-y-4">
       <h1>{KIND_WORDS[kind].add}</h1>
-      <p className="text-sm text-ink-soft">Copy the figures from the data sheet at STC; the data sheet PDF can be attached once the item is saved.</p>
+      <p className="text-sm text-ink-soft">
+        Copy the figures from the data sheet at STC; the data sheet PDF can be attached once the item is saved.
+      </p>
       <EquipmentForm save={{ create: createEquipmentAction }} kind={kind} initial={formValuesOf(kind)} />
     </div>
   );

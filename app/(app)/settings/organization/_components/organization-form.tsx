@@ -15,7 +15,10 @@ import type { updateOrganizationAction } from "../actions";
 export function OrganizationForm({ initial, update }: { initial: OrganizationInput; update: typeof updateOrganizationAction }) {
   const router = useRouter();
   const [saved, setSaved] = useState(false);
-  const form = useForm<OrganizationInput, unknown, OrganizationValues>({ resolver: zodResolver(OrganizationInput), defaultValues: initial });
+  const form = useForm<OrganizationInput, unknown, OrganizationValues>({
+    resolver: zodResolver(OrganizationInput),
+    defaultValues: initial,
+  });
   const { errors, isSubmitting } = form.formState;
   const { submit, message } = useActionSubmit(form, update, () => {
     setSaved(true);
@@ -29,14 +32,24 @@ export function OrganizationForm({ initial, update }: { initial: OrganizationInp
         <input id="org-name" className="input" aria-invalid={Boolean(errors.name)} {...form.register("name")} />
       </Field>
       <div className="grid gap-4 sm:grid-cols-2">
-        <Field label="Contractor license number" htmlFor="org-license" error={errors.licenseNumber?.message} hint="Printed in every title block">
+        <Field
+          label="Contractor license number"
+          htmlFor="org-license"
+          error={errors.licenseNumber?.message}
+          hint="Printed in every title block"
+        >
           <input id="org-license" className="input measure" {...form.register("licenseNumber")} />
         </Field>
         <Field label="Phone" htmlFor="org-phone" error={errors.phone?.message}>
           <input id="org-phone" className="input measure" type="tel" {...form.register("phone")} />
         </Field>
       </div>
-      <Field label="Time zone" htmlFor="org-timeZone" error={errors.timeZone?.message} hint="Times on field reports and receipts are printed in this zone">
+      <Field
+        label="Time zone"
+        htmlFor="org-timeZone"
+        error={errors.timeZone?.message}
+        hint="Times on field reports and receipts are printed in this zone"
+      >
         <select id="org-timeZone" className="input" {...form.register("timeZone")}>
           {US_TIME_ZONES.map((t) => (
             <option key={t.id} value={t.id}>

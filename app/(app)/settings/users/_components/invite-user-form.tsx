@@ -13,7 +13,10 @@ import type { inviteUserAction } from "../actions";
 
 export function InviteUserForm({ invite }: { invite: typeof inviteUserAction }) {
   const [result, setResult] = useState<{ kind: "error" | "info"; text: string }>();
-  const form = useForm<InviteUserInput>({ resolver: zodResolver(InviteUserInput), defaultValues: { name: "", email: "", role: "installer" } });
+  const form = useForm<InviteUserInput>({
+    resolver: zodResolver(InviteUserInput),
+    defaultValues: { name: "", email: "", role: "installer" },
+  });
   const { errors, isSubmitting } = form.formState;
 
   async function onSubmit(values: InviteUserInput) {

@@ -7,10 +7,18 @@ import { ROLES, ROLE_LABELS, type Role } from "@/lib/domain/roles";
 import type { UserDto } from "@/lib/dto/users";
 import type { changeRoleAction, renewInvitationAction, setActiveAction } from "../actions";
 
-const STATUS_TEXT: Record<UserDto["status"], string> = { active: "Active", invited: "Invited, no password yet", deactivated: "Deactivated" };
+const STATUS_TEXT: Record<UserDto["status"], string> = {
+  active: "Active",
+  invited: "Invited, no password yet",
+  deactivated: "Deactivated",
+};
 
 /** The page hands down what a row can do to its user. */
-export type UserActions = { changeRole: typeof changeRoleAction; renewInvitation: typeof renewInvitationAction; setActive: typeof setActiveAction };
+export type UserActions = {
+  changeRole: typeof changeRoleAction;
+  renewInvitation: typeof renewInvitationAction;
+  setActive: typeof setActiveAction;
+};
 
 export function UserRow({ user, isSelf, actions }: { user: UserDto; isSelf: boolean; actions: UserActions }) {
   const router = useRouter();
@@ -50,11 +58,19 @@ export function UserRow({ user, isSelf, actions }: { user: UserDto; isSelf: bool
       </td>
       <td className="px-3 py-2 text-ink-soft">
         {STATUS_TEXT[user.status]}
-        {message ? <p className="text-xs text-ink-faint" role="status">{message}</p> : null}
+        {message ? (
+          <p className="text-xs text-ink-faint" role="status">
+            {message}
+          </p>
+        ) : null}
       </td>
       <td className="space-x-2 whitespace-nowrap px-3 py-2 text-right">
         {user.status === "invited" ? (
-          <Button variant="quiet" disabled={pending} onClick={() => run(() => actions.renewInvitation({ userId: user.id }), "New link queued.")}>
+          <Button
+            variant="quiet"
+            disabled={pending}
+            onClick={() => run(() => actions.renewInvitation({ userId: user.id }), "New link queued.")}
+          >
             Send a new link
           </Button>
         ) : null}

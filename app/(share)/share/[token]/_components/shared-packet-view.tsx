@@ -25,7 +25,8 @@ export function SharedPacketView({ token, view }: { token: string; view: SharedV
         <p className="text-sm text-ink-faint">Shared by {view.organizationName}</p>
         <h1>{siteAddress(input)}</h1>
         <p className="mt-1 text-sm text-ink-soft" data-testid="read-only-note">
-          This page is read only: you can view and download the documents below, nothing here can be changed. The link works until {formatInZone(view.expiresAt, view.timeZone, "date")}.
+          This page is read only: you can view and download the documents below, nothing here can be changed. The link works until{" "}
+          {formatInZone(view.expiresAt, view.timeZone, "date")}.
         </p>
         {view.note ? <p className="mt-2 text-sm">Note from the sender: {view.note}</p> : null}
       </div>
@@ -34,11 +35,22 @@ export function SharedPacketView({ token, view }: { token: string; view: SharedV
         <h2 id="summary-heading">Project summary</h2>
         <dl className="grid gap-3 sm:grid-cols-2">
           <Fact name="Site" value={siteAddress(input)} />
-          <Fact name="System size" value={`${formatNumber(ratings.dcKw)} kW DC / ${formatNumber(ratings.acKw)} kW AC (${ratings.moduleCount} modules)`} />
-          <Fact name="Jurisdiction (AHJ)" value={`${input.jurisdiction.name}, ${input.jurisdiction.state} · NEC ${input.jurisdiction.necEdition}`} />
+          <Fact
+            name="System size"
+            value={`${formatNumber(ratings.dcKw)} kW DC / ${formatNumber(ratings.acKw)} kW AC (${ratings.moduleCount} modules)`}
+          />
+          <Fact
+            name="Jurisdiction (AHJ)"
+            value={`${input.jurisdiction.name}, ${input.jurisdiction.state} · NEC ${input.jurisdiction.necEdition}`}
+          />
           <Fact name="Utility" value={input.utility?.name ?? "—"} />
           <Fact name="Modules" value={`${module.maker} ${module.model}`} />
-          <Fact name="Inverters" value={inverterCounts(input).map((i) => `${i.quantity} × ${i.item.maker} ${i.item.model}`).join("; ")} />
+          <Fact
+            name="Inverters"
+            value={inverterCounts(input)
+              .map((i) => `${i.quantity} × ${i.item.maker} ${i.item.model}`)
+              .join("; ")}
+          />
           {device ? <Fact name="Module-level devices" value={`${device.maker} ${device.model}`} /> : null}
         </dl>
       </section>
@@ -50,9 +62,20 @@ export function SharedPacketView({ token, view }: { token: string; view: SharedV
             <li key={r.packetId} className="flex flex-wrap items-center justify-between gap-2 py-2" data-testid="shared-revision">
               <span>
                 <span className="font-medium">{r.label}</span>
-                <span className="ml-2 text-xs text-ink-faint">{[r.pageCount ? `${r.pageCount} pages` : null, r.readyAt ? `generated ${formatInZone(r.readyAt, view.timeZone, "date")}` : null].filter(Boolean).join(" · ")}</span>
+                <span className="ml-2 text-xs text-ink-faint">
+                  {[
+                    r.pageCount ? `${r.pageCount} pages` : null,
+                    r.readyAt ? `generated ${formatInZone(r.readyAt, view.timeZone, "date")}` : null,
+                  ]
+                    .filter(Boolean)
+                    .join(" · ")}
+                </span>
               </span>
-              <a className="rounded bg-copper px-3 py-1.5 text-sm text-white no-underline" href={`/share/${encodeURIComponent(token)}/packets/${r.packetId}`} download>
+              <a
+                className="rounded bg-copper px-3 py-1.5 text-sm text-white no-underline"
+                href={`/share/${encodeURIComponent(token)}/packets/${r.packetId}`}
+                download
+              >
                 Download PDF
               </a>
             </li>

@@ -16,7 +16,15 @@ export function ArrayStep({ issues }: { issues: Issues }) {
 
   return (
     <div className="space-y-6">
-      <SelectInput name="array.mount" label="Mounting" options={[{ value: "roof", label: "Roof mount" }, { value: "ground", label: "Ground mount" }]} issues={issues} />
+      <SelectInput
+        name="array.mount"
+        label="Mounting"
+        options={[
+          { value: "roof", label: "Roof mount" },
+          { value: "ground", label: "Ground mount" },
+        ]}
+        issues={issues}
+      />
       <section className="space-y-3">
         <h3 className="font-semibold">Roof planes</h3>
         {issues["array.roofPlanes"] ? <p className="text-xs text-result-fail">{issues["array.roofPlanes"]}</p> : null}
@@ -27,7 +35,13 @@ export function ArrayStep({ issues }: { issues: Issues }) {
             <TextInput name={`array.roofPlanes.${i}.azimuthDeg`} label="Azimuth" suffix="°" issues={issues} hint="180 = due south" />
             <TextInput name={`array.roofPlanes.${i}.moduleCount`} label="Modules" inputMode="numeric" issues={issues} />
             <TextInput name={`array.roofPlanes.${i}.attachmentCount`} label="Attachments" inputMode="numeric" issues={issues} />
-            <TextInput name={`array.roofPlanes.${i}.rackingWeightLb`} label="Racking weight" suffix="lb" issues={issues} hint="Rails, mounts and clamps on this plane" />
+            <TextInput
+              name={`array.roofPlanes.${i}.rackingWeightLb`}
+              label="Racking weight"
+              suffix="lb"
+              issues={issues}
+              hint="Rails, mounts and clamps on this plane"
+            />
             <div className="sm:col-span-3">
               <Button type="button" variant="quiet" disabled={planes.fields.length === 1} onClick={() => planes.remove(i)}>
                 Remove this plane
@@ -35,17 +49,46 @@ export function ArrayStep({ issues }: { issues: Issues }) {
             </div>
           </div>
         ))}
-        <Button type="button" variant="secondary" onClick={() => planes.append({ lineId: nextLineId("plane", planes.fields.map((f) => f.lineId)), label: "", tiltDeg: "", azimuthDeg: "", moduleCount: "", attachmentCount: "", rackingWeightLb: "" })}>
+        <Button
+          type="button"
+          variant="secondary"
+          onClick={() =>
+            planes.append({
+              lineId: nextLineId(
+                "plane",
+                planes.fields.map((f) => f.lineId),
+              ),
+              label: "",
+              tiltDeg: "",
+              azimuthDeg: "",
+              moduleCount: "",
+              attachmentCount: "",
+              rackingWeightLb: "",
+            })
+          }
+        >
           Add a roof plane
         </Button>
       </section>
       <section className="space-y-3">
         <h3 className="font-semibold">Strings</h3>
-        <p className="text-xs text-ink-faint">Each line is one string design wired to one inverter input; “in parallel” repeats it. Microinverter systems have no strings.</p>
+        <p className="text-xs text-ink-faint">
+          Each line is one string design wired to one inverter input; “in parallel” repeats it. Microinverter systems have no strings.
+        </p>
         {strings.fields.map((field, i) => (
-          <div key={field.id} className="grid items-end gap-3 rounded border border-paper-edge p-3 sm:grid-cols-[5rem_1fr_6rem_8rem_8rem_auto]" data-testid="string-line">
+          <div
+            key={field.id}
+            className="grid items-end gap-3 rounded border border-paper-edge p-3 sm:grid-cols-[5rem_1fr_6rem_8rem_8rem_auto]"
+            data-testid="string-line"
+          >
             <p className="measure pb-2 font-medium">{field.lineId}</p>
-            <SelectInput name={`array.strings.${i}.inverterLineId`} label="Feeds" options={inverterOptions} empty="Choose" issues={issues} />
+            <SelectInput
+              name={`array.strings.${i}.inverterLineId`}
+              label="Feeds"
+              options={inverterOptions}
+              empty="Choose"
+              issues={issues}
+            />
             <TextInput name={`array.strings.${i}.mpptIndex`} label="MPPT" inputMode="numeric" issues={issues} />
             <TextInput name={`array.strings.${i}.modulesInSeries`} label="In series" inputMode="numeric" issues={issues} />
             <TextInput name={`array.strings.${i}.parallelCount`} label="In parallel" inputMode="numeric" issues={issues} />
@@ -54,11 +97,32 @@ export function ArrayStep({ issues }: { issues: Issues }) {
             </Button>
           </div>
         ))}
-        <Button type="button" variant="secondary" onClick={() => strings.append({ lineId: nextLineId("S", strings.fields.map((f) => f.lineId)), inverterLineId: inverterLines[0]?.lineId ?? "", mpptIndex: "1", modulesInSeries: "", parallelCount: "1" })}>
+        <Button
+          type="button"
+          variant="secondary"
+          onClick={() =>
+            strings.append({
+              lineId: nextLineId(
+                "S",
+                strings.fields.map((f) => f.lineId),
+              ),
+              inverterLineId: inverterLines[0]?.lineId ?? "",
+              mpptIndex: "1",
+              modulesInSeries: "",
+              parallelCount: "1",
+            })
+          }
+        >
           Add a string
         </Button>
       </section>
-      <TextInput name="site.peakSunHours" label="Peak sun hours (for the production estimate)" suffix="h/day" issues={issues} hint="Optional; from a solar resource map for the site." />
+      <TextInput
+        name="site.peakSunHours"
+        label="Peak sun hours (for the production estimate)"
+        suffix="h/day"
+        issues={issues}
+        hint="Optional; from a solar resource map for the site."
+      />
     </div>
   );
 }

@@ -31,13 +31,24 @@ function isDirty(dirty: unknown, path: string): boolean {
   return Boolean(node);
 }
 
-export function DesignEditor(props: { projectId: string; initialDraft: DesignDraft; initialRevision: number; catalog: EquipmentDto[]; conditions: SiteConditions | null; readOnly: boolean; save: typeof saveDesignAction }) {
+export function DesignEditor(props: {
+  projectId: string;
+  initialDraft: DesignDraft;
+  initialRevision: number;
+  catalog: EquipmentDto[];
+  conditions: SiteConditions | null;
+  readOnly: boolean;
+  save: typeof saveDesignAction;
+}) {
   const { projectId, catalog, conditions, readOnly } = props;
   const form = useForm<DesignFormValues>({ defaultValues: props.initialDraft as DesignFormValues });
   const values = useWatch({ control: form.control });
   const [step, setStep] = useState(0);
   const [visited, setVisited] = useState<Set<number>>(() => new Set(props.initialRevision > 0 ? [0, 1, 2, 3] : []));
-  const [save, setSave] = useState<SaveState>({ kind: "idle", text: props.initialRevision ? `Saved, revision ${props.initialRevision}` : "Not saved yet" });
+  const [save, setSave] = useState<SaveState>({
+    kind: "idle",
+    text: props.initialRevision ? `Saved, revision ${props.initialRevision}` : "Not saved yet",
+  });
   const pending = useRef(false);
 
   const outcome = useMemo(() => runDesignReview(values, catalog, conditions), [values, catalog, conditions]);
@@ -79,7 +90,12 @@ export function DesignEditor(props: { projectId: string; initialDraft: DesignDra
     const flush = () => {
       if (!pending.current) return;
       pending.current = false;
-      void fetch(`/api/v1/projects/${projectId}/design`, { method: "PUT", keepalive: true, headers: { "content-type": "application/json" }, body: JSON.stringify(form.getValues()) });
+      void fetch(`/api/v1/projects/${projectId}/design`, {
+        method: "PUT",
+        keepalive: true,
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify(form.getValues()),
+      });
     };
     window.addEventListener("pagehide", flush);
     return () => {
@@ -99,7 +115,16 @@ export function DesignEditor(props: { projectId: string; initialDraft: DesignDra
         <div className="min-w-0 space-y-4">
           <nav aria-label="Design steps" className="flex flex-wrap gap-1">
             {DESIGN_STEPS.map((s, i) => (
-              <button key={s.key} type="button" onClick={() => goTo(i)} aria-current={i === step ? "step" : undefined} className={clsx("rounded px-3 py-1.5 text-sm", i === step ? "bg-copper text-white" : "bg-paper-deep text-ink-soft hover:bg-paper-edge")}>
+              <button
+                key={s.key}
+                type="button"
+                onClick={() => goTo(i)}
+                aria-current={i === step ? "step" : undefined}
+                className={clsx(
+                  "rounded px-3 py-1.5 text-sm",
+                  i === step ? "bg-copper text-white" : "bg-paper-deep text-ink-soft hover:bg-paper-edge",
+                )}
+              >
                 <span className="measure">{i + 1}.</span> {s.title}
               </button>
             ))}
@@ -128,7 +153,11 @@ export function DesignEditor(props: { projectId: string; initialDraft: DesignDra
                 <Button type="button" variant="quiet" onClick={() => void saveNow()}>
                   Save now
                 </Button>
-                <span role="status" data-testid="save-state" className={clsx("text-sm", save.kind === "error" ? "text-result-fail" : "text-ink-faint")}>
+                <span
+                  role="status"
+                  data-testid="save-state"
+                  className={clsx("text-sm", save.kind === "error" ? "text-result-fail" : "text-ink-faint")}
+                >
                   {save.text}
                 </span>
               </>

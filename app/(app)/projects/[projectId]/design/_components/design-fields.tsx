@@ -34,7 +34,13 @@ export function TextInput(props: FieldProps & { inputMode?: "numeric" | "decimal
   return (
     <Wrapper {...props}>
       <div className="flex items-center gap-2">
-        <input id={props.name} className={clsx("input measure", props.issues[props.name] && "border-result-fail")} inputMode={props.inputMode ?? "decimal"} aria-invalid={Boolean(props.issues[props.name])} {...register(props.name as never)} />
+        <input
+          id={props.name}
+          className={clsx("input measure", props.issues[props.name] && "border-result-fail")}
+          inputMode={props.inputMode ?? "decimal"}
+          aria-invalid={Boolean(props.issues[props.name])}
+          {...register(props.name as never)}
+        />
         {props.suffix ? <span className="text-sm text-ink-faint">{props.suffix}</span> : null}
       </div>
     </Wrapper>
@@ -45,7 +51,12 @@ export function SelectInput(props: FieldProps & { options: { value: string; labe
   const { register } = useFormContext<DesignFormValues>();
   return (
     <Wrapper {...props}>
-      <select id={props.name} className={clsx("input", props.issues[props.name] && "border-result-fail")} aria-invalid={Boolean(props.issues[props.name])} {...register(props.name as never)}>
+      <select
+        id={props.name}
+        className={clsx("input", props.issues[props.name] && "border-result-fail")}
+        aria-invalid={Boolean(props.issues[props.name])}
+        {...register(props.name as never)}
+      >
         {props.empty !== undefined ? <option value="">{props.empty}</option> : null}
         {props.options.map((o) => (
           <option key={o.value} value={o.value}>
@@ -70,4 +81,5 @@ export function CheckboxInput({ name, label, hint }: { name: string; label: stri
   );
 }
 
-export const options = (values: readonly string[], label: (v: string) => string = (v) => v) => values.map((value) => ({ value, label: label(value) }));
+export const options = (values: readonly string[], label: (v: string) => string = (v) => v) =>
+  values.map((value) => ({ value, label: label(value) }));

@@ -17,7 +17,8 @@ function describe(item: EquipmentDto): string {
 export function EquipmentStep({ catalog, issues }: { catalog: EquipmentDto[]; issues: Issues }) {
   const { control } = useFormContext<DesignFormValues>();
   const inverters = useFieldArray({ control, name: "equipment.inverters" });
-  const of = (kind: EquipmentDto["kind"]) => catalog.filter((c) => c.kind === kind).map((c) => ({ value: c.id, label: describe(c) + (c.isArchived ? " (archived)" : "") }));
+  const of = (kind: EquipmentDto["kind"]) =>
+    catalog.filter((c) => c.kind === kind).map((c) => ({ value: c.id, label: describe(c) + (c.isArchived ? " (archived)" : "") }));
 
   return (
     <div className="space-y-5">
@@ -27,20 +28,52 @@ export function EquipmentStep({ catalog, issues }: { catalog: EquipmentDto[]; is
         {issues["equipment.inverters"] ? <p className="text-xs text-result-fail">{issues["equipment.inverters"]}</p> : null}
         {inverters.fields.map((field, i) => (
           <div key={field.id} className="grid items-end gap-3 sm:grid-cols-[1fr_8rem_auto]" data-testid="inverter-line">
-            <SelectInput name={`equipment.inverters.${i}.equipmentId`} label={`Inverter line ${field.lineId}`} options={of("inverter")} empty="Choose an inverter" issues={issues} />
+            <SelectInput
+              name={`equipment.inverters.${i}.equipmentId`}
+              label={`Inverter line ${field.lineId}`}
+              options={of("inverter")}
+              empty="Choose an inverter"
+              issues={issues}
+            />
             <TextInput name={`equipment.inverters.${i}.quantity`} label="Quantity" inputMode="numeric" issues={issues} />
             <Button type="button" variant="quiet" disabled={inverters.fields.length === 1} onClick={() => inverters.remove(i)}>
               Remove
             </Button>
           </div>
         ))}
-        <Button type="button" variant="secondary" onClick={() => inverters.append({ lineId: nextLineId("inv", inverters.fields.map((f) => f.lineId)), equipmentId: "", quantity: "1" })}>
+        <Button
+          type="button"
+          variant="secondary"
+          onClick={() =>
+            inverters.append({
+              lineId: nextLineId(
+                "inv",
+                inverters.fields.map((f) => f.lineId),
+              ),
+              equipmentId: "",
+              quantity: "1",
+            })
+          }
+        >
           Add an inverter line
         </Button>
-        <p className="text-xs text-ink-faint">Use one line per group of identical units; microinverter branch circuits are one line each.</p>
+        <p className="text-xs text-ink-faint">
+          Use one line per group of identical units; microinverter branch circuits are one line each.
+        </p>
       </div>
-      <SelectInput name="equipment.deviceId" label="Module-level device" options={of("device")} empty="None" issues={issues} hint="DC optimizer or shutdown device behind each module." />
-      <CheckboxInput name="equipment.listedRapidShutdownSystem" label="The array is a listed PV hazard control system" hint="Only when the racking, modules and devices are listed together for rapid shutdown." />
+      <SelectInput
+        name="equipment.deviceId"
+        label="Module-level device"
+        options={of("device")}
+        empty="None"
+        issues={issues}
+        hint="DC optimizer or shutdown device behind each module."
+      />
+      <CheckboxInput
+        name="equipment.listedRapidShutdownSystem"
+        label="The array is a listed PV hazard control system"
+        hint="Only when the racking, modules and devices are listed together for rapid shutdown."
+      />
     </div>
   );
 }

@@ -7,7 +7,11 @@ import type { CheckResult } from "@/lib/engineering";
 import { DESIGN_STEPS } from "@/lib/schemas/design";
 
 const ORDER = { fail: 0, warn: 1, pass: 2 } as const;
-const stepOf = (path: string) => Math.max(0, DESIGN_STEPS.findIndex((s) => path.startsWith(s.key)));
+const stepOf = (path: string) =>
+  Math.max(
+    0,
+    DESIGN_STEPS.findIndex((s) => path.startsWith(s.key)),
+  );
 const worstFirst = (checks: CheckResult[]) => [...checks].sort((a, b) => ORDER[a.status] - ORDER[b.status]);
 
 function Figure({ label, value }: { label: string; value: string }) {
@@ -20,7 +24,15 @@ function Figure({ label, value }: { label: string; value: string }) {
 }
 
 /** The live review: what is missing with the checks that can already run, or every check worst first. */
-export function ReviewPanel({ outcome, onGoToStep, full = false }: { outcome: DesignReviewOutcome; onGoToStep: (step: number) => void; full?: boolean }) {
+export function ReviewPanel({
+  outcome,
+  onGoToStep,
+  full = false,
+}: {
+  outcome: DesignReviewOutcome;
+  onGoToStep: (step: number) => void;
+  full?: boolean;
+}) {
   if (outcome.status === "incomplete") {
     const partial = worstFirst(outcome.partial);
     const shown = full ? partial : partial.filter((c) => c.status !== "pass");
@@ -31,7 +43,11 @@ export function ReviewPanel({ outcome, onGoToStep, full = false }: { outcome: De
           <ul className="space-y-1 text-sm" data-testid="missing-entries">
             {outcome.problems.slice(0, full ? 100 : 12).map((p, i) => (
               <li key={`${p.path}-${i}`} className="break-words">
-                <button type="button" className="text-left text-copper-dark underline-offset-2 hover:underline" onClick={() => onGoToStep(stepOf(p.path))}>
+                <button
+                  type="button"
+                  className="text-left text-copper-dark underline-offset-2 hover:underline"
+                  onClick={() => onGoToStep(stepOf(p.path))}
+                >
                   {DESIGN_STEPS[stepOf(p.path)].title}
                 </button>
                 : {p.message}
@@ -47,7 +63,9 @@ export function ReviewPanel({ outcome, onGoToStep, full = false }: { outcome: De
                 <CheckItem key={check.id} check={check} />
               ))}
             </ul>
-            {!full && partial.length > shown.length ? <p className="text-xs text-ink-faint">{partial.length - shown.length} of these pass.</p> : null}
+            {!full && partial.length > shown.length ? (
+              <p className="text-xs text-ink-faint">{partial.length - shown.length} of these pass.</p>
+            ) : null}
           </div>
         ) : null}
       </div>
@@ -61,14 +79,22 @@ export function ReviewPanel({ outcome, onGoToStep, full = false }: { outcome: De
       <div className="flex items-center gap-2">
         <CheckStatusChip status={summary.status} />
         <p className="text-sm">
-          <span className="measure">{summary.fail}</span> fail · <span className="measure">{summary.warn}</span> warn · <span className="measure">{summary.pass}</span> pass
+          <span className="measure">{summary.fail}</span> fail · <span className="measure">{summary.warn}</span> warn ·{" "}
+          <span className="measure">{summary.pass}</span> pass
         </p>
       </div>
       <dl className="grid grid-cols-2 gap-2">
         <Figure label="DC at STC" value={`${summary.ratings.dcKw.toFixed(2)} kW`} />
         <Figure label="AC" value={`${summary.ratings.acKw.toFixed(2)} kW`} />
         <Figure label="DC/AC ratio" value={summary.ratings.dcToAcRatio.toFixed(2)} />
-        <Figure label="Estimated yearly" value={summary.annualProductionKwh === null ? "needs sun hours" : `${Math.round(summary.annualProductionKwh).toLocaleString("en-US")} kWh`} />
+        <Figure
+          label="Estimated yearly"
+          value={
+            summary.annualProductionKwh === null
+              ? "needs sun hours"
+              : `${Math.round(summary.annualProductionKwh).toLocaleString("en-US")} kWh`
+          }
+        />
         <Figure label="Max DC voltage" value={summary.maxDcVoltageV === null ? "—" : `${summary.maxDcVoltageV} V`} />
         <Figure label="Largest PV breaker" value={summary.largestPvBreakerA === null ? "—" : `${summary.largestPvBreakerA} A`} />
       </dl>
@@ -77,7 +103,9 @@ export function ReviewPanel({ outcome, onGoToStep, full = false }: { outcome: De
           <CheckItem key={check.id} check={check} />
         ))}
       </ul>
-      {!full && summary.pass ? <p className="text-xs text-ink-faint">{summary.pass} passing checks are listed in the Review step.</p> : null}
+      {!full && summary.pass ? (
+        <p className="text-xs text-ink-faint">{summary.pass} passing checks are listed in the Review step.</p>
+      ) : null}
     </div>
   );
 }

@@ -72,14 +72,22 @@ export function ReviewStep({ outcome, onGoToStep }: { outcome: DesignReviewOutco
           <h3 className="font-semibold">Required warning labels</h3>
           <ul className="grid gap-3 sm:grid-cols-2">
             {outcome.review.labels.map((label) => (
-              <li key={label.id} className="min-w-0 space-y-2 rounded border-2 border-ink/80 bg-white p-3 text-sm" data-testid="warning-label">
+              <li
+                key={label.id}
+                className="min-w-0 space-y-2 rounded border-2 border-ink/80 bg-white p-3 text-sm"
+                data-testid="warning-label"
+              >
                 <p className="break-words text-xs uppercase tracking-wide text-ink-faint">
                   {label.clause} · {label.placement}
                 </p>
                 <p className="whitespace-pre-line break-words font-medium" data-testid="label-text">
                   {label.text}
                 </p>
-                <p className="text-xs text-ink-faint">{label.prescribed ? `Wording prescribed by ${label.clause}.` : `${label.clause} asks for this content; the wording is ours.`}</p>
+                <p className="text-xs text-ink-faint">
+                  {label.prescribed
+                    ? `Wording prescribed by ${label.clause}.`
+                    : `${label.clause} asks for this content; the wording is ours.`}
+                </p>
                 <p className="break-words text-ink-soft" data-testid="label-explanation">
                   <span className="font-medium text-ink">What it means: </span>
                   {label.explanation}

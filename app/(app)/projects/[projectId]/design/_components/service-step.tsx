@@ -6,8 +6,14 @@ import { SERVICE_VOLTAGES_V, type DesignFormValues } from "@/lib/schemas/design"
 import { CheckboxInput, SelectInput, TextInput, options, type Issues } from "./design-fields";
 
 const SIZES = options(CONDUCTOR_SIZES, (s) => sizeLabel(s as (typeof CONDUCTOR_SIZES)[number]));
-const MATERIALS = [{ value: "Cu", label: "Copper" }, { value: "Al", label: "Aluminum" }];
-const YES_NO = [{ value: "yes", label: "Yes" }, { value: "no", label: "No" }];
+const MATERIALS = [
+  { value: "Cu", label: "Copper" },
+  { value: "Al", label: "Aluminum" },
+];
+const YES_NO = [
+  { value: "yes", label: "Yes" },
+  { value: "no", label: "No" },
+];
 
 function Section({ title, children, hint }: { title: string; hint?: string; children: React.ReactNode }) {
   return (
@@ -30,10 +36,30 @@ export function ServiceStep({ issues }: { issues: Issues }) {
   return (
     <div className="space-y-5">
       <div className="grid gap-4 sm:grid-cols-2">
-        <SelectInput name="service.voltageV" label="Service voltage" options={options(SERVICE_VOLTAGES_V, (v) => `${v} V`)} issues={issues} />
-        <SelectInput name="service.phase" label="Phases" options={[{ value: "1", label: "Single phase" }, { value: "3", label: "Three phase" }]} issues={issues} />
+        <SelectInput
+          name="service.voltageV"
+          label="Service voltage"
+          options={options(SERVICE_VOLTAGES_V, (v) => `${v} V`)}
+          issues={issues}
+        />
+        <SelectInput
+          name="service.phase"
+          label="Phases"
+          options={[
+            { value: "1", label: "Single phase" },
+            { value: "3", label: "Three phase" },
+          ]}
+          issues={issues}
+        />
         <TextInput name="service.busbarA" label="Busbar rating" suffix="A" inputMode="numeric" issues={issues} />
-        <TextInput name="service.mainBreakerA" label="Main breaker" suffix="A" inputMode="numeric" issues={issues} hint="Leave empty for a main-lug panel." />
+        <TextInput
+          name="service.mainBreakerA"
+          label="Main breaker"
+          suffix="A"
+          inputMode="numeric"
+          issues={issues}
+          hint="Leave empty for a main-lug panel."
+        />
       </div>
       <SelectInput
         name="service.connection"
@@ -46,22 +72,69 @@ export function ServiceStep({ issues }: { issues: Issues }) {
       />
       <div className="grid gap-4 sm:grid-cols-2">
         <TextInput name="service.pvBreakerA" label="PV breaker (or supply-side OCPD)" suffix="A" inputMode="numeric" issues={issues} />
-        <TextInput name="service.otherBreakersA" label="Other breakers on the bus" inputMode="text" issues={issues} hint="For the sum rule, e.g. 20, 20, 30. Leave empty if not used." />
+        <TextInput
+          name="service.otherBreakersA"
+          label="Other breakers on the bus"
+          inputMode="text"
+          issues={issues}
+          hint="For the sum rule, e.g. 20, 20, 30. Leave empty if not used."
+        />
       </div>
       {loadSide ? (
         <Section title="Where the PV breaker lands">
           <div className="grid gap-4 sm:grid-cols-2">
-            <SelectInput name="service.loadSideAt" label="Connection on" options={[{ value: "busbar", label: "The panel busbar" }, { value: "feeder", label: "A feeder" }, { value: "feed-through", label: "A busbar with feed-through lugs" }]} issues={issues} />
-            <SelectInput name="service.panelFeed" label="Panel fed at" options={[{ value: "end", label: "One end of the busbar" }, { value: "center", label: "The center (center-fed)" }]} issues={issues} />
+            <SelectInput
+              name="service.loadSideAt"
+              label="Connection on"
+              options={[
+                { value: "busbar", label: "The panel busbar" },
+                { value: "feeder", label: "A feeder" },
+                { value: "feed-through", label: "A busbar with feed-through lugs" },
+              ]}
+              issues={issues}
+            />
+            <SelectInput
+              name="service.panelFeed"
+              label="Panel fed at"
+              options={[
+                { value: "end", label: "One end of the busbar" },
+                { value: "center", label: "The center (center-fed)" },
+              ]}
+              issues={issues}
+            />
           </div>
-          <CheckboxInput name="service.pvBreakerAtOppositeEnd" label="The PV breaker sits at the opposite end of the busbar from the main (on a center-fed bus: at one end)" hint="Needed for the 120 % rule." />
+          <CheckboxInput
+            name="service.pvBreakerAtOppositeEnd"
+            label="The PV breaker sits at the opposite end of the busbar from the main (on a center-fed bus: at one end)"
+            hint="Needed for the 120 % rule."
+          />
           {onFeeder ? (
             <div className="grid gap-4 sm:grid-cols-2">
-              <TextInput name="service.feederAmpacityA" label={s.loadSideAt === "feed-through" ? "Feed-through conductor ampacity" : "Feeder ampacity"} suffix="A" issues={issues} />
-              <TextInput name="service.feederOcpdA" label="Device protecting it at the supply end" suffix="A" inputMode="numeric" issues={issues} hint={s.loadSideAt === "feed-through" ? "Empty: the panel's main breaker" : undefined} />
-              <TextInput name="service.feederLoadSideOcpdA" label="Device on its load side, if any" suffix="A" inputMode="numeric" issues={issues} />
+              <TextInput
+                name="service.feederAmpacityA"
+                label={s.loadSideAt === "feed-through" ? "Feed-through conductor ampacity" : "Feeder ampacity"}
+                suffix="A"
+                issues={issues}
+              />
+              <TextInput
+                name="service.feederOcpdA"
+                label="Device protecting it at the supply end"
+                suffix="A"
+                inputMode="numeric"
+                issues={issues}
+                hint={s.loadSideAt === "feed-through" ? "Empty: the panel's main breaker" : undefined}
+              />
+              <TextInput
+                name="service.feederLoadSideOcpdA"
+                label="Device on its load side, if any"
+                suffix="A"
+                inputMode="numeric"
+                issues={issues}
+              />
               <TextInput name="service.feederTapAmpacityA" label="Smallest tap from it, if any" suffix="A" issues={issues} />
-              {s.loadSideAt === "feeder" ? <CheckboxInput name="service.feederAtOppositeEnd" label="The connection is at the end of the feeder away from its device" /> : null}
+              {s.loadSideAt === "feeder" ? (
+                <CheckboxInput name="service.feederAtOppositeEnd" label="The connection is at the end of the feeder away from its device" />
+              ) : null}
             </div>
           ) : null}
         </Section>
@@ -79,7 +152,11 @@ export function ServiceStep({ issues }: { issues: Issues }) {
           <SelectInput
             name="service.pvDisconnectKind"
             label="PV system disconnect"
-            options={[{ value: "pv-breaker", label: "The PV breaker" }, { value: "switch", label: "A separate AC disconnect switch" }, { value: "fused-switch", label: "A fused disconnect switch" }]}
+            options={[
+              { value: "pv-breaker", label: "The PV breaker" },
+              { value: "switch", label: "A separate AC disconnect switch" },
+              { value: "fused-switch", label: "A fused disconnect switch" },
+            ]}
             empty="Choose"
             issues={issues}
           />
@@ -88,26 +165,60 @@ export function ServiceStep({ issues }: { issues: Issues }) {
             <>
               <TextInput name="service.pvDisconnectRatingA" label="Switch rating" suffix="A" inputMode="numeric" issues={issues} />
               <TextInput name="service.pvDisconnectVoltageV" label="Switch voltage rating" suffix="V" inputMode="numeric" issues={issues} />
-              <SelectInput name="service.pvDisconnectAccessible" label="Readily accessible" options={YES_NO} empty="Choose" issues={issues} />
+              <SelectInput
+                name="service.pvDisconnectAccessible"
+                label="Readily accessible"
+                options={YES_NO}
+                empty="Choose"
+                issues={issues}
+              />
             </>
           ) : null}
           <SelectInput
             name="service.rsdInitiatorKind"
             label="Rapid shutdown started by"
-            options={[{ value: "service-disconnect", label: "The service disconnect" }, { value: "pv-disconnect", label: "The PV system disconnect" }, { value: "switch", label: "A rapid shutdown switch" }]}
+            options={[
+              { value: "service-disconnect", label: "The service disconnect" },
+              { value: "pv-disconnect", label: "The PV system disconnect" },
+              { value: "switch", label: "A rapid shutdown switch" },
+            ]}
             empty="Choose"
             issues={issues}
           />
-          <SelectInput name="service.rsdInitiatorOutside" label="Initiator outside, readily accessible" options={YES_NO} empty="Choose" issues={issues} />
+          <SelectInput
+            name="service.rsdInitiatorOutside"
+            label="Initiator outside, readily accessible"
+            options={YES_NO}
+            empty="Choose"
+            issues={issues}
+          />
           <TextInput name="service.serviceLocation" label="Service panel location" inputMode="text" issues={issues} />
         </div>
       </Section>
-      <Section title="Grounding" hint="Only where the design adds a grounding electrode conductor; the service conductor sizes it by Table 250.66.">
+      <Section
+        title="Grounding"
+        hint="Only where the design adds a grounding electrode conductor; the service conductor sizes it by Table 250.66."
+      >
         <div className="grid gap-4 sm:grid-cols-3">
           <SelectInput name="service.gecSize" label="Grounding electrode conductor" options={SIZES} empty="None added" issues={issues} />
           <SelectInput name="service.gecMaterial" label="Its material" options={MATERIALS} empty="Choose" issues={issues} />
-          <SelectInput name="service.gecElectrode" label="To" options={[{ value: "rod-pipe-plate", label: "A rod, pipe or plate" }, { value: "other", label: "Another electrode" }]} empty="Choose" issues={issues} />
-          <SelectInput name="service.serviceConductorSize" label="Service-entrance conductor" options={SIZES} empty="Not entered" issues={issues} />
+          <SelectInput
+            name="service.gecElectrode"
+            label="To"
+            options={[
+              { value: "rod-pipe-plate", label: "A rod, pipe or plate" },
+              { value: "other", label: "Another electrode" },
+            ]}
+            empty="Choose"
+            issues={issues}
+          />
+          <SelectInput
+            name="service.serviceConductorSize"
+            label="Service-entrance conductor"
+            options={SIZES}
+            empty="Not entered"
+            issues={issues}
+          />
           <SelectInput name="service.serviceConductorMaterial" label="Its material" options={MATERIALS} empty="Choose" issues={issues} />
         </div>
       </Section>

@@ -15,7 +15,19 @@ async function fetchPackets(url: string): Promise<PacketDto[]> {
 }
 
 /** Both packets of a project; polls while a generation is queued or running, often enough to show each step the worker reports. */
-export function PacketBoard({ projectId, initial, canGenerate, reviewStatus, actions }: { projectId: string; initial: PacketDto[]; canGenerate: boolean; reviewStatus: string; actions: PacketActions }) {
+export function PacketBoard({
+  projectId,
+  initial,
+  canGenerate,
+  reviewStatus,
+  actions,
+}: {
+  projectId: string;
+  initial: PacketDto[];
+  canGenerate: boolean;
+  reviewStatus: string;
+  actions: PacketActions;
+}) {
   const { data, error, mutate } = useSWR(`/api/v1/projects/${projectId}/packets`, fetchPackets, {
     fallbackData: initial,
     refreshInterval: (latest) => (latest?.some((p) => p.status === "queued" || p.status === "running") ? 400 : 0),
@@ -25,7 +37,11 @@ export function PacketBoard({ projectId, initial, canGenerate, reviewStatus, act
   // A revision that just became ready can be shared: the server-rendered share panel is refreshed
   // when the set of ready revisions grows, not only on the next page load.
   const router = useRouter();
-  const ready = (data ?? []).filter((p) => p.status === "ready").map((p) => p.id).sort().join(",");
+  const ready = (data ?? [])
+    .filter((p) => p.status === "ready")
+    .map((p) => p.id)
+    .sort()
+    .join(",");
   const seen = useRef(ready);
   useEffect(() => {
     if (ready === seen.current) return;
@@ -34,9 +50,22 @@ export function PacketBoard({ projectId, initial, canGenerate, reviewStatus, act
   }, [ready, router]);
   return (
     <div className="grid gap-6 lg:grid-cols-2">
-      {error ? <p role="alert" className="text-sm text-result-fail">{error.message}</p> : null}
+      {error ? (
+        <p role="alert" className="text-sm text-result-fail">
+          {error.message}
+        </p>
+      ) : null}
       {PACKET_KINDS.map((kind) => (
-        <PacketCard key={kind} projectId={projectId} kind={kind} packets={(data ?? []).filter((p) => p.kind === kind)} canGenerate={canGenerate} reviewStatus={reviewStatus} onChange={() => mutate()} actions={actions} />
+        <PacketCard
+          key={kind}
+          projectId={projectId}
+          kind={kind}
+          packets={(data ?? []).filter((p) => p.kind === kind)}
+          canGenerate={canGenerate}
+          reviewStatus={reviewStatus}
+          onChange={() => mutate()}
+          actions={actions}
+        />
       ))}
     </div>
   );

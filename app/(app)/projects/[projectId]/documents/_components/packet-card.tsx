@@ -10,14 +10,32 @@ import type { requestPacketAction, retryPacketAction } from "../actions";
 import { PacketRevision } from "./packet-revision";
 
 const PURPOSE: Record<PacketKind, string> = {
-  permit: "For the AHJ: cover, system summary, single-line diagram, calculations, labels, structural summary and the equipment data sheets. 11 × 17 in sheets.",
-  interconnection: "For the utility: application with account and meter, equipment and ratings, single-line diagram, signature blocks. Letter-size forms.",
+  permit:
+    "For the AHJ: cover, system summary, single-line diagram, calculations, labels, structural summary and the equipment data sheets. 11 × 17 in sheets.",
+  interconnection:
+    "For the utility: application with account and meter, equipment and ratings, single-line diagram, signature blocks. Letter-size forms.",
 };
 
 /** The page hands down the two generation actions. */
 export type PacketActions = { request: typeof requestPacketAction; retry: typeof retryPacketAction };
 
-export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus, onChange, actions }: { actions: PacketActions;  projectId: string; kind: PacketKind; packets: PacketDto[]; canGenerate: boolean; reviewStatus: string; onChange: () => void }) {
+export function PacketCard({
+  projectId,
+  kind,
+  packets,
+  canGenerate,
+  reviewStatus,
+  onChange,
+  actions,
+}: {
+  actions: PacketActions;
+  projectId: string;
+  kind: PacketKind;
+  packets: PacketDto[];
+  canGenerate: boolean;
+  reviewStatus: string;
+  onChange: () => void;
+}) {
   const [reason, setReason] = useState("");
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
@@ -47,10 +65,20 @@ export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus
       {inFlight ? (
         <div className="space-y-1" data-testid="packet-progress">
           <p className="flex items-baseline justify-between gap-3 text-sm">
-            <span className="font-medium">{inFlight.status === "queued" ? `Rev ${inFlight.revision} is queued` : `Generating Rev ${inFlight.revision}`}</span>
+            <span className="font-medium">
+              {inFlight.status === "queued" ? `Rev ${inFlight.revision} is queued` : `Generating Rev ${inFlight.revision}`}
+            </span>
             <span className="measure text-xs text-ink-soft">{progress} %</span>
           </p>
-          <div className="h-2 overflow-hidden rounded-full bg-paper-edge" role="progressbar" aria-label={`${PACKET_TITLES[kind]} progress`} aria-valuemin={0} aria-valuemax={100} aria-valuenow={progress} aria-valuetext={`${progress} %: ${inFlight.step}`}>
+          <div
+            className="h-2 overflow-hidden rounded-full bg-paper-edge"
+            role="progressbar"
+            aria-label={`${PACKET_TITLES[kind]} progress`}
+            aria-valuemin={0}
+            aria-valuemax={100}
+            aria-valuenow={progress}
+            aria-valuetext={`${progress} %: ${inFlight.step}`}
+          >
             <div className="h-full bg-copper transition-all" style={{ width: `${Math.max(4, progress)}%` }} />
           </div>
           <p className="truncate text-xs text-ink-soft" data-testid="packet-step" title={inFlight.step}>
@@ -61,7 +89,9 @@ export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus
 
       {failed && !inFlight ? (
         <div className="space-y-2 rounded border border-result-fail/40 p-3 text-sm" data-testid="packet-failed">
-          <p className="text-result-fail">Rev {failed.revision} could not be made: {failed.error}</p>
+          <p className="text-result-fail">
+            Rev {failed.revision} could not be made: {failed.error}
+          </p>
           {canGenerate ? (
             <Button variant="secondary" disabled={pending} onClick={() => run(() => actions.retry({ packetId: failed.id }))}>
               Retry
@@ -77,13 +107,25 @@ export function PacketCard({ projectId, kind, packets, canGenerate, reviewStatus
               <label className="label" htmlFor={`${kind}-reason`}>
                 The design review has failing checks. Reason for generating anyway (printed on the cover)
               </label>
-              <textarea id={`${kind}-reason`} className="input" rows={2} maxLength={1000} value={reason} onChange={(e) => setReason(e.target.value)} />
+              <textarea
+                id={`${kind}-reason`}
+                className="input"
+                rows={2}
+                maxLength={1000}
+                value={reason}
+                onChange={(e) => setReason(e.target.value)}
+              />
             </>
           ) : null}
-          <Button disabled={pending || reviewStatus === "incomplete" || (needsReason && !reason.trim())} onClick={() => run(() => actions.request({ projectId, kind, overrideReason: reason || undefined }))}>
+          <Button
+            disabled={pending || reviewStatus === "incomplete" || (needsReason && !reason.trim())}
+            onClick={() => run(() => actions.request({ projectId, kind, overrideReason: reason || undefined }))}
+          >
             {pending ? "Queueing…" : `Generate Rev ${next}`}
           </Button>
-          {reviewStatus === "incomplete" ? <p className="text-xs text-ink-faint">Complete the design first: packets are made from a reviewed design.</p> : null}
+          {reviewStatus === "incomplete" ? (
+            <p className="text-xs text-ink-faint">Complete the design first: packets are made from a reviewed design.</p>
+          ) : null}
         </div>
       ) : null}
 

@@ -16,9 +16,22 @@ type Values = { packetIds: string[]; recipientEmail: string; expiresInDays: stri
 const EMPTY: Values = { packetIds: [], recipientEmail: "", expiresInDays: String(SHARE_LINK_DAYS.default), note: "" };
 
 /** Chooses ready revisions and makes a link; the link is shown here once and never again. */
-export function ShareLinkForm({ projectId, revisions, onCreated, create }: { projectId: string; revisions: ShareableRevision[]; onCreated: () => void; create: typeof createShareLinkAction }) {
+export function ShareLinkForm({
+  projectId,
+  revisions,
+  onCreated,
+  create,
+}: {
+  projectId: string;
+  revisions: ShareableRevision[];
+  onCreated: () => void;
+  create: typeof createShareLinkAction;
+}) {
   // The shared schema checks the form here and again in the action; a refusal keeps what was typed.
-  const form = useForm<Values, unknown, CreateShareLinkInput>({ resolver: zodResolver(CreateShareLinkInput) as never, defaultValues: EMPTY });
+  const form = useForm<Values, unknown, CreateShareLinkInput>({
+    resolver: zodResolver(CreateShareLinkInput) as never,
+    defaultValues: EMPTY,
+  });
   const chosen = useWatch({ control: form.control, name: "packetIds" }) ?? [];
   const [created, setCreated] = useState<{ url: string; recipient: string | null }>();
   const { submit, message } = useActionSubmit(
@@ -32,7 +45,10 @@ export function ShareLinkForm({ projectId, revisions, onCreated, create }: { pro
   );
   const errors = form.formState.errors;
   // A list of checkboxes kept as one array field, so a single revision still sends a list.
-  const toggle = (id: string) => form.setValue("packetIds", chosen.includes(id) ? chosen.filter((x) => x !== id) : [...chosen, id], { shouldValidate: form.formState.isSubmitted });
+  const toggle = (id: string) =>
+    form.setValue("packetIds", chosen.includes(id) ? chosen.filter((x) => x !== id) : [...chosen, id], {
+      shouldValidate: form.formState.isSubmitted,
+    });
 
   if (revisions.length === 0) return <p className="text-sm text-ink-faint">Generate a packet first: only ready revisions can be shared.</p>;
   return (
@@ -45,14 +61,35 @@ export function ShareLinkForm({ projectId, revisions, onCreated, create }: { pro
             {r.label}
           </label>
         ))}
-        {errors.packetIds ? <p className="text-sm text-result-fail" role="alert">{errors.packetIds.message}</p> : null}
+        {errors.packetIds ? (
+          <p className="text-sm text-result-fail" role="alert">
+            {errors.packetIds.message}
+          </p>
+        ) : null}
       </fieldset>
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field label="Inspector's e-mail (optional)" htmlFor="share-recipient" error={errors.recipientEmail?.message} hint="We e-mail the link when you fill this in.">
+        <Field
+          label="Inspector's e-mail (optional)"
+          htmlFor="share-recipient"
+          error={errors.recipientEmail?.message}
+          hint="We e-mail the link when you fill this in."
+        >
           <input id="share-recipient" className="input" type="email" {...form.register("recipientEmail")} />
         </Field>
-        <Field label="Days until the link expires" htmlFor="share-days" error={errors.expiresInDays?.message} hint={`${SHARE_LINK_DAYS.min} to ${SHARE_LINK_DAYS.max} days`}>
-          <input id="share-days" className="input" type="number" min={SHARE_LINK_DAYS.min} max={SHARE_LINK_DAYS.max} {...form.register("expiresInDays")} />
+        <Field
+          label="Days until the link expires"
+          htmlFor="share-days"
+          error={errors.expiresInDays?.message}
+          hint={`${SHARE_LINK_DAYS.min} to ${SHARE_LINK_DAYS.max} days`}
+        >
+          <input
+            id="share-days"
+            className="input"
+            type="number"
+            min={SHARE_LINK_DAYS.min}
+            max={SHARE_LINK_DAYS.max}
+            {...form.register("expiresInDays")}
+          />
         </Field>
       </div>
       <Field label="Note for the inspector (optional)" htmlFor="share-note" error={errors.note?.message}>
@@ -64,7 +101,9 @@ export function ShareLinkForm({ projectId, revisions, onCreated, create }: { pro
       </Button>
       {created ? (
         <div className="space-y-1 rounded border border-copper/40 p-3" data-testid="new-share-link">
-          <p className="text-sm">{created.recipient ? `Link created and e-mailed to ${created.recipient}.` : "Link created."} Copy it now: it is shown only once.</p>
+          <p className="text-sm">
+            {created.recipient ? `Link created and e-mailed to ${created.recipient}.` : "Link created."} Copy it now: it is shown only once.
+          </p>
           <input className="input measure" aria-label="New link" readOnly value={created.url} onFocus={(e) => e.currentTarget.select()} />
           <Button type="button" variant="secondary" onClick={() => navigator.clipboard?.writeText(created.url)}>
             Copy link

@@ -9,10 +9,27 @@ import { formatUsd } from "@/lib/fees/money";
 import type { ProjectFeeLineDto } from "@/lib/dto/fees";
 import type { payFeesAction } from "../actions";
 
-const STATE_TEXT: Record<ProjectFeeLineDto["state"], string> = { unpaid: "Unpaid", "in-progress": "Payment in progress", paid: "Paid", refunded: "Refunded, unpaid again" };
+const STATE_TEXT: Record<ProjectFeeLineDto["state"], string> = {
+  unpaid: "Unpaid",
+  "in-progress": "Payment in progress",
+  paid: "Paid",
+  refunded: "Refunded, unpaid again",
+};
 
 /** The project's fee lines with their working; unpaid ones can be chosen and paid together. */
-export function FeeLines({ projectId, lines, canPay, watchPending, payFees }: { projectId: string; lines: ProjectFeeLineDto[]; canPay: boolean; watchPending: boolean; payFees: typeof payFeesAction }) {
+export function FeeLines({
+  projectId,
+  lines,
+  canPay,
+  watchPending,
+  payFees,
+}: {
+  projectId: string;
+  lines: ProjectFeeLineDto[];
+  canPay: boolean;
+  watchPending: boolean;
+  payFees: typeof payFeesAction;
+}) {
   const router = useRouter();
   const payable = lines.filter((l) => l.payable);
   // What the coordinator ticked or unticked; a line they left alone is chosen while it is owed, so a
@@ -50,7 +67,11 @@ export function FeeLines({ projectId, lines, canPay, watchPending, payFees }: { 
   }
 
   if (lines.length === 0) {
-    return <p className="panel text-sm text-ink-soft">No fee schedule is entered for this project&apos;s AHJ or utility. An admin enters them under Settings.</p>;
+    return (
+      <p className="panel text-sm text-ink-soft">
+        No fee schedule is entered for this project&apos;s AHJ or utility. An admin enters them under Settings.
+      </p>
+    );
   }
   return (
     <section className="panel space-y-3" aria-labelledby="fee-lines-heading">
@@ -63,7 +84,13 @@ export function FeeLines({ projectId, lines, canPay, watchPending, payFees }: { 
             <li key={line.feeKey} className="flex gap-3 py-3" data-testid="fee-line" data-state={line.state}>
               <div className="pt-0.5">
                 {selectable ? (
-                  <input type="checkbox" className="h-5 w-5 accent-copper" aria-label={`Pay ${line.name}`} checked={isChosen(line)} onChange={(e) => setChoice((all) => new Map(all).set(line.feeKey, e.target.checked))} />
+                  <input
+                    type="checkbox"
+                    className="h-5 w-5 accent-copper"
+                    aria-label={`Pay ${line.name}`}
+                    checked={isChosen(line)}
+                    onChange={(e) => setChoice((all) => new Map(all).set(line.feeKey, e.target.checked))}
+                  />
                 ) : (
                   <span className="inline-block h-5 w-5" aria-hidden />
                 )}
@@ -96,7 +123,9 @@ export function FeeLines({ projectId, lines, canPay, watchPending, payFees }: { 
           <Button type="button" onClick={pay} disabled={pending || picked.length === 0}>
             {pending ? "Opening the payment page…" : `Pay ${formatUsd(total)} by card`}
           </Button>
-          <span className="text-xs text-ink-faint">Card payment on the payment service&apos;s page; Ohmstead never sees the card number.</span>
+          <span className="text-xs text-ink-faint">
+            Card payment on the payment service&apos;s page; Ohmstead never sees the card number.
+          </span>
         </div>
       ) : null}
     </section>

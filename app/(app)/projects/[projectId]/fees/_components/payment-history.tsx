@@ -6,11 +6,25 @@ import type { PaymentDto } from "@/lib/dto/fees";
 import { RefundForm } from "./refund-form";
 import type { refundPaymentAction } from "../actions";
 
-const STATUS_TEXT: Record<PaymentDto["status"], string> = { pending: "Waiting for payment", paid: "Paid", expired: "Not completed", partially_refunded: "Partly refunded", refunded: "Refunded" };
+const STATUS_TEXT: Record<PaymentDto["status"], string> = {
+  pending: "Waiting for payment",
+  paid: "Paid",
+  expired: "Not completed",
+  partially_refunded: "Partly refunded",
+  refunded: "Refunded",
+};
 
 const when = (iso: string) => <LocalTime iso={iso} />;
 
-export function PaymentHistory({ payments, canRefund, refund }: { payments: PaymentDto[]; canRefund: boolean; refund: typeof refundPaymentAction }) {
+export function PaymentHistory({
+  payments,
+  canRefund,
+  refund,
+}: {
+  payments: PaymentDto[];
+  canRefund: boolean;
+  refund: typeof refundPaymentAction;
+}) {
   if (payments.length === 0) return null;
   return (
     <section className="panel space-y-3" aria-labelledby="payments-heading">
@@ -33,7 +47,9 @@ export function PaymentHistory({ payments, canRefund, refund }: { payments: Paym
                 </a>
               ) : null}
             </div>
-            <p className="text-sm text-ink-soft">{p.lines.map((l) => `${l.authority}: ${l.name} ${formatUsd(l.amountCents)}${l.refunded ? " (refunded)" : ""}`).join(" · ")}</p>
+            <p className="text-sm text-ink-soft">
+              {p.lines.map((l) => `${l.authority}: ${l.name} ${formatUsd(l.amountCents)}${l.refunded ? " (refunded)" : ""}`).join(" · ")}
+            </p>
             {p.failureStillOpen ? (
               <p className="text-sm text-result-fail" role="alert" data-testid="payment-failure">
                 Last attempt: {p.failureMessage} The fees stay unpaid; pay again with another card.

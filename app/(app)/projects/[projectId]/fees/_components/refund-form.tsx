@@ -100,7 +100,12 @@ export function RefundForm({ payment, refund }: { payment: PaymentDto; refund: t
             {open.map((l) => (
               <li key={l.feeKey}>
                 <label className="flex items-start gap-2 text-sm">
-                  <input type="checkbox" className="mt-0.5 h-4 w-4 shrink-0 accent-copper" checked={chosen.has(l.feeKey)} onChange={(e) => toggle(l.feeKey, e.target.checked)} />
+                  <input
+                    type="checkbox"
+                    className="mt-0.5 h-4 w-4 shrink-0 accent-copper"
+                    checked={chosen.has(l.feeKey)}
+                    onChange={(e) => toggle(l.feeKey, e.target.checked)}
+                  />
                   <span className="min-w-0 flex-1">
                     {l.authority}: {l.name} <span className="measure whitespace-nowrap">{formatUsd(l.amountCents)}</span>
                   </span>
@@ -111,7 +116,13 @@ export function RefundForm({ payment, refund }: { payment: PaymentDto; refund: t
           </ul>
         ) : null}
         <label className="flex items-center gap-2 text-sm">
-          <input type="radio" name={`${id}-mode`} className="accent-copper" checked={mode === "amount"} onChange={() => setMode("amount")} />
+          <input
+            type="radio"
+            name={`${id}-mode`}
+            className="accent-copper"
+            checked={mode === "amount"}
+            onChange={() => setMode("amount")}
+          />
           An amount of money: the fees stay paid
         </label>
         {mode === "amount" ? (
@@ -119,8 +130,19 @@ export function RefundForm({ payment, refund }: { payment: PaymentDto; refund: t
             <label className="label" htmlFor={`${id}-amount`}>
               Refund amount ($)
             </label>
-            <input id={`${id}-amount`} className="input measure" inputMode="decimal" value={amount} placeholder={`up to ${formatUsd(left)}`} onChange={(e) => setAmount(e.target.value)} />
-            {errors.amount ? <p className="mt-1 text-sm text-result-fail">{errors.amount[0]}</p> : <p className="mt-1 text-xs text-ink-faint">Up to {formatUsd(left)}</p>}
+            <input
+              id={`${id}-amount`}
+              className="input measure"
+              inputMode="decimal"
+              value={amount}
+              placeholder={`up to ${formatUsd(left)}`}
+              onChange={(e) => setAmount(e.target.value)}
+            />
+            {errors.amount ? (
+              <p className="mt-1 text-sm text-result-fail">{errors.amount[0]}</p>
+            ) : (
+              <p className="mt-1 text-xs text-ink-faint">Up to {formatUsd(left)}</p>
+            )}
           </div>
         ) : null}
       </fieldset>
@@ -153,7 +175,8 @@ export function RefundForm({ payment, refund }: { payment: PaymentDto; refund: t
         onCancel={() => setConfirming(null)}
       >
         <p data-testid="refund-confirmation">
-          <strong className="measure">{formatUsd(confirming?.cents ?? 0)}</strong> of the <span className="measure">{formatUsd(payment.amountCents)}</span> payment{" "}
+          <strong className="measure">{formatUsd(confirming?.cents ?? 0)}</strong> of the{" "}
+          <span className="measure">{formatUsd(payment.amountCents)}</span> payment{" "}
           {payment.paidAt ? (
             <>
               of <LocalTime iso={payment.paidAt} />

@@ -7,7 +7,17 @@ import { centsToDollarsText } from "@/lib/fees/money";
 import type { setValuationAction } from "../actions";
 
 /** The valuation the owner declared for the work, which percentage fees read. */
-export function ValuationForm({ projectId, valuationCents, canEdit, setValuation }: { projectId: string; valuationCents: number | null; canEdit: boolean; setValuation: typeof setValuationAction }) {
+export function ValuationForm({
+  projectId,
+  valuationCents,
+  canEdit,
+  setValuation,
+}: {
+  projectId: string;
+  valuationCents: number | null;
+  canEdit: boolean;
+  setValuation: typeof setValuationAction;
+}) {
   const router = useRouter();
   const [value, setValue] = useState(valuationCents === null ? "" : centsToDollarsText(valuationCents));
   const [error, setError] = useState<string>();
@@ -27,7 +37,15 @@ export function ValuationForm({ projectId, valuationCents, canEdit, setValuation
         <label className="label" htmlFor="valuation">
           Declared project valuation ($)
         </label>
-        <input id="valuation" className="input measure" inputMode="decimal" value={value} onChange={(e) => setValue(e.target.value)} disabled={!canEdit} placeholder="e.g. 24,500" />
+        <input
+          id="valuation"
+          className="input measure"
+          inputMode="decimal"
+          value={value}
+          onChange={(e) => setValue(e.target.value)}
+          disabled={!canEdit}
+          placeholder="e.g. 24,500"
+        />
         {error ? (
           <p className="mt-1 text-sm text-result-fail" role="alert">
             {error}

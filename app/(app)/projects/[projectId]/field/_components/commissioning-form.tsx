@@ -26,7 +26,15 @@ function savedText(updatedAt: string | null, timeZone: string) {
   return updatedAt ? `Saved ${formatInZone(updatedAt, timeZone, "time")}` : "Not saved yet";
 }
 
-export function CommissioningForm(props: { projectId: string; facts: CommissioningFacts; initialReadings: CommissioningReadings; initialStatus: "open" | "complete"; initialUpdatedAt: string | null; readOnly: boolean; save: typeof saveCommissioningAction }) {
+export function CommissioningForm(props: {
+  projectId: string;
+  facts: CommissioningFacts;
+  initialReadings: CommissioningReadings;
+  initialStatus: "open" | "complete";
+  initialUpdatedAt: string | null;
+  readOnly: boolean;
+  save: typeof saveCommissioningAction;
+}) {
   const { projectId, facts, readOnly } = props;
   const form = useForm<FormValues>({ defaultValues: toFormValues(props.initialReadings, facts.acceptedGridProfiles) });
   const values = useWatch({ control: form.control }) as FormValues;
@@ -59,7 +67,11 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
     }
     setStatus(result.data.status);
     if (result.data.completeRefused) setSave({ kind: "refused", text: result.data.completeRefused });
-    else setSave({ kind: "saved", text: result.data.status === "complete" && complete ? "Saved and marked complete." : savedText(result.data.updatedAt, timeZone) });
+    else
+      setSave({
+        kind: "saved",
+        text: result.data.status === "complete" && complete ? "Saved and marked complete." : savedText(result.data.updatedAt, timeZone),
+      });
   }
 
   // Save a moment after typing stops, so a dropped signal on site loses at most the last few seconds.
@@ -83,11 +95,19 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
     <form onSubmit={(e) => e.preventDefault()} noValidate className="space-y-4" aria-label="Commissioning record">
       <div className="panel flex flex-wrap items-center gap-3" data-testid="commissioning-status">
         <h2 className="text-base">Commissioning record</h2>
-        <span className={clsx("rounded border px-2 py-0.5 text-xs font-semibold uppercase tracking-wide", status === "complete" ? "border-result-pass/40 bg-result-pass/10 text-result-pass" : "border-paper-edge bg-paper-deep text-ink-soft")}>
+        <span
+          className={clsx(
+            "rounded border px-2 py-0.5 text-xs font-semibold uppercase tracking-wide",
+            status === "complete"
+              ? "border-result-pass/40 bg-result-pass/10 text-result-pass"
+              : "border-paper-edge bg-paper-deep text-ink-soft",
+          )}
+        >
           {status === "complete" ? "Complete" : "Open"}
         </span>
         <span className="measure text-sm text-ink-soft" data-testid="completion-counts">
-          {completion.failing.length} failing · {completion.missing.length} to record{completion.waiting.length ? ` · ${completion.waiting.length} waiting` : ""}
+          {completion.failing.length} failing · {completion.missing.length} to record
+          {completion.waiting.length ? ` · ${completion.waiting.length} waiting` : ""}
         </span>
       </div>
 
@@ -98,23 +118,62 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
         {facts.pairing ? <PairingStep {...props_()} /> : null}
 
         {facts.strings.length > 0 ? (
-          <Step id="shutdown" number={++step} title="String voltages with the array shut down" intro={<p>Operate the rapid shutdown initiator and wait for the inverter to report a safe DC voltage, then measure each string at the inverter.</p>}>
+          <Step
+            id="shutdown"
+            number={++step}
+            title="String voltages with the array shut down"
+            intro={
+              <p>
+                Operate the rapid shutdown initiator and wait for the inverter to report a safe DC voltage, then measure each string at the
+                inverter.
+              </p>
+            }
+          >
             {facts.strings.map((fact) => {
               const i = values.strings.findIndex((s) => s.id === fact.id);
               if (i < 0) return null;
               const window = shutdownWindow(fact.devicesInSeries, fact.perDeviceV);
               const hint = `${fact.devicesInSeries} devices × ${fmtV(fact.perDeviceV ?? 1)} V: expect about ${fmtV(window.expectedV)} V (${fmtV(window.lowV)} to ${fmtV(window.highV)} V).`;
               return (
-                <Reading key={fact.id} title={`String ${fact.id}`} inputId={`strings.${i}.measuredV`} hint={hint} result={byId(`string-shutdown:${fact.id}`)} error={errors[`strings.${i}.measuredV`]} unit="V" bare>
-                  <input id={`strings.${i}.measuredV`} data-expected-v={window.expectedV} className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg(`strings.${i}.measuredV`)} />
+                <Reading
+                  key={fact.id}
+                  title={`String ${fact.id}`}
+                  inputId={`strings.${i}.measuredV`}
+                  hint={hint}
+                  result={byId(`string-shutdown:${fact.id}`)}
+                  error={errors[`strings.${i}.measuredV`]}
+                  unit="V"
+                  bare
+                >
+                  <input
+                    id={`strings.${i}.measuredV`}
+                    data-expected-v={window.expectedV}
+                    className="input measure text-base"
+                    inputMode="decimal"
+                    autoComplete="off"
+                    {...reg(`strings.${i}.measuredV`)}
+                  />
                 </Reading>
               );
             })}
           </Step>
         ) : null}
 
-        <Step id="ac-voltage" number={++step} title="AC voltage at the point of connection" intro={<p>Measure at the PV breaker or the supply-side connection, before the inverter starts exporting.</p>}>
-          <Reading title="AC voltage" inputId="acVoltageV" hint={`Nominal service ${facts.nominalServiceV} V.`} result={byId("ac-voltage")} error={errors.acVoltageV} unit="V" bare>
+        <Step
+          id="ac-voltage"
+          number={++step}
+          title="AC voltage at the point of connection"
+          intro={<p>Measure at the PV breaker or the supply-side connection, before the inverter starts exporting.</p>}
+        >
+          <Reading
+            title="AC voltage"
+            inputId="acVoltageV"
+            hint={`Nominal service ${facts.nominalServiceV} V.`}
+            result={byId("ac-voltage")}
+            error={errors.acVoltageV}
+            unit="V"
+            bare
+          >
             <input id="acVoltageV" className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg("acVoltageV")} />
           </Reading>
         </Step>
@@ -122,7 +181,14 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
         <Step id="first-power" number={++step} title="First power">
           <div className="grid gap-3 sm:grid-cols-2">
             <LabelledInput label="AC output" htmlFor="firstPowerW" unit="W" error={errors.firstPowerW}>
-              <input id="firstPowerW" data-rating-w={facts.acRatingW} className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg("firstPowerW")} />
+              <input
+                id="firstPowerW"
+                data-rating-w={facts.acRatingW}
+                className="input measure text-base"
+                inputMode="decimal"
+                autoComplete="off"
+                {...reg("firstPowerW")}
+              />
             </LabelledInput>
             <LabelledInput label="Time of day (24-hour)" htmlFor="firstPowerTime" error={errors.firstPowerTime}>
               <input id="firstPowerTime" type="time" className="input measure text-base" {...reg("firstPowerTime")} />
@@ -133,8 +199,23 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
 
         {facts.moduleMonitoring ? (
           <Step id="modules-reporting" number={++step} title="Modules reporting">
-            <Reading title="Modules reporting in the monitoring" inputId="modulesReporting" hint={`${facts.modulesInstalled} modules installed. Every one must report before the record is complete.`} result={byId("modules-reporting")} error={errors.modulesReporting} unit="modules" bare>
-              <input id="modulesReporting" data-installed={facts.modulesInstalled} className="input measure text-base" inputMode="numeric" autoComplete="off" {...reg("modulesReporting")} />
+            <Reading
+              title="Modules reporting in the monitoring"
+              inputId="modulesReporting"
+              hint={`${facts.modulesInstalled} modules installed. Every one must report before the record is complete.`}
+              result={byId("modules-reporting")}
+              error={errors.modulesReporting}
+              unit="modules"
+              bare
+            >
+              <input
+                id="modulesReporting"
+                data-installed={facts.modulesInstalled}
+                className="input measure text-base"
+                inputMode="numeric"
+                autoComplete="off"
+                {...reg("modulesReporting")}
+              />
             </Reading>
           </Step>
         ) : (
@@ -143,7 +224,12 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
           </p>
         )}
 
-        <Step id="rapid-shutdown" number={++step} title="Rapid shutdown test" intro={<p>Operate the rapid shutdown initiator, then read the voltage on the PV conductors and how long it took to fall.</p>}>
+        <Step
+          id="rapid-shutdown"
+          number={++step}
+          title="Rapid shutdown test"
+          intro={<p>Operate the rapid shutdown initiator, then read the voltage on the PV conductors and how long it took to fall.</p>}
+        >
           <LabelledInput label="Where the conductors were read" htmlFor="rapidShutdown.boundary">
             <select id="rapidShutdown.boundary" className="input text-base" {...reg("rapidShutdown.boundary")}>
               <option value="outside">Outside the array boundary (30 V limit)</option>
@@ -152,10 +238,22 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
           </LabelledInput>
           <div className="grid gap-3 sm:grid-cols-2">
             <LabelledInput label="Voltage reached" htmlFor="rapidShutdown.measuredV" unit="V" error={errors["rapidShutdown.measuredV"]}>
-              <input id="rapidShutdown.measuredV" className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg("rapidShutdown.measuredV")} />
+              <input
+                id="rapidShutdown.measuredV"
+                className="input measure text-base"
+                inputMode="decimal"
+                autoComplete="off"
+                {...reg("rapidShutdown.measuredV")}
+              />
             </LabelledInput>
             <LabelledInput label="Seconds to reach it" htmlFor="rapidShutdown.seconds" unit="s" error={errors["rapidShutdown.seconds"]}>
-              <input id="rapidShutdown.seconds" className="input measure text-base" inputMode="decimal" autoComplete="off" {...reg("rapidShutdown.seconds")} />
+              <input
+                id="rapidShutdown.seconds"
+                className="input measure text-base"
+                inputMode="decimal"
+                autoComplete="off"
+                {...reg("rapidShutdown.seconds")}
+              />
             </LabelledInput>
           </div>
           <ResultLine result={byId("rapid-shutdown-voltage")} />
@@ -173,7 +271,11 @@ export function CommissioningForm(props: { projectId: string; facts: Commissioni
           <Button type="button" onClick={() => void saveNow(true)}>
             Mark complete
           </Button>
-          <span role="status" data-testid="save-state" className={clsx("text-sm", save.kind === "error" || save.kind === "refused" ? "text-result-fail" : "text-ink-faint")}>
+          <span
+            role="status"
+            data-testid="save-state"
+            className={clsx("text-sm", save.kind === "error" || save.kind === "refused" ? "text-result-fail" : "text-ink-faint")}
+          >
             {save.text}
           </span>
         </div>

@@ -17,7 +17,15 @@ function rejectionText(kind: ProjectFileKind, rejection: FileRejection): string 
   return rejection.errors[0]?.message ?? "This file cannot be uploaded.";
 }
 
-export function FieldUploads({ projectId, initialFiles, mayUpload }: { projectId: string; initialFiles: ProjectFileDto[]; mayUpload: boolean }) {
+export function FieldUploads({
+  projectId,
+  initialFiles,
+  mayUpload,
+}: {
+  projectId: string;
+  initialFiles: ProjectFileDto[];
+  mayUpload: boolean;
+}) {
   const [files, setFiles] = useState(initialFiles);
   const [notices, setNotices] = useState<Notice[]>([]);
   const note = (n: Notice) => setNotices((all) => [n, ...all.filter((x) => x.key !== n.key)].slice(0, 8));
@@ -36,14 +44,20 @@ export function FieldUploads({ projectId, initialFiles, mayUpload }: { projectId
         return;
       }
       setFiles((all) => [json.file as ProjectFileDto, ...all]);
-      note({ key, name: file.name, kind: "done", text: kind === "signed-completion" ? "Received. The coordinator has been notified." : "Received." });
+      note({
+        key,
+        name: file.name,
+        kind: "done",
+        text: kind === "signed-completion" ? "Received. The coordinator has been notified." : "Received.",
+      });
     } catch {
       note({ key, name: file.name, kind: "refused", text: "No connection: the file was not sent. Try again when you have signal." });
     }
   }
 
   const sendAll = (kind: ProjectFileKind) => async (accepted: File[], rejected: FileRejection[]) => {
-    for (const r of rejected) note({ key: `${kind}:${r.file.name}:rejected`, name: r.file.name, kind: "refused", text: rejectionText(kind, r) });
+    for (const r of rejected)
+      note({ key: `${kind}:${r.file.name}:rejected`, name: r.file.name, kind: "refused", text: rejectionText(kind, r) });
     for (const file of accepted) await upload(kind, file);
   };
 
@@ -52,7 +66,9 @@ export function FieldUploads({ projectId, initialFiles, mayUpload }: { projectId
       <div>
         <h2 id="uploads-heading">Signed form and site photos</h2>
         <p className="text-sm text-ink-soft">
-          {mayUpload ? `Drop files here or use the phone's camera. ${MAX_UPLOAD_LABEL} at most per file; the type is checked from the file's contents.` : "Uploads from the field."}
+          {mayUpload
+            ? `Drop files here or use the phone's camera. ${MAX_UPLOAD_LABEL} at most per file; the type is checked from the file's contents.`
+            : "Uploads from the field."}
         </p>
       </div>
       {mayUpload ? (
@@ -64,7 +80,14 @@ export function FieldUploads({ projectId, initialFiles, mayUpload }: { projectId
       {notices.length > 0 ? (
         <ul className="space-y-1" aria-live="polite" data-testid="upload-notices">
           {notices.map((n) => (
-            <li key={n.key} className={clsx("text-sm", n.kind === "refused" ? "text-result-fail" : n.kind === "done" ? "text-result-pass" : "text-ink-soft")} role={n.kind === "refused" ? "alert" : undefined}>
+            <li
+              key={n.key}
+              className={clsx(
+                "text-sm",
+                n.kind === "refused" ? "text-result-fail" : n.kind === "done" ? "text-result-pass" : "text-ink-soft",
+              )}
+              role={n.kind === "refused" ? "alert" : undefined}
+            >
               <span className="font-medium">{n.name}</span>: {n.text}
             </li>
           ))}
@@ -85,15 +108,31 @@ export function FieldUploads({ projectId, initialFiles, mayUpload }: { projectId
   );
 }
 
-function DropArea({ kind, multiple, onFiles }: { kind: ProjectFileKind; multiple: boolean; onFiles: (accepted: File[], rejected: FileRejection[]) => void }) {
+function DropArea({
+  kind,
+  multiple,
+  onFiles,
+}: {
+  kind: ProjectFileKind;
+  multiple: boolean;
+  onFiles: (accepted: File[], rejected: FileRejection[]) => void;
+}) {
   const camera = useRef<HTMLInputElement>(null);
-  const { getRootProps, getInputProps, isDragActive } = useDropzone({ accept: ALLOWED_TYPES[kind], maxSize: MAX_UPLOAD_BYTES, multiple, onDrop: onFiles });
+  const { getRootProps, getInputProps, isDragActive } = useDropzone({
+    accept: ALLOWED_TYPES[kind],
+    maxSize: MAX_UPLOAD_BYTES,
+    multiple,
+    onDrop: onFiles,
+  });
   const label = kind === "signed-completion" ? "Signed certificate of completion" : "Site photos";
   return (
     <div className="space-y-2">
       <div
         {...getRootProps({ "aria-label": `${label}: choose or drop files` })}
-        className={clsx("flex min-h-28 cursor-pointer flex-col items-center justify-center rounded border-2 border-dashed p-4 text-center text-sm", isDragActive ? "border-copper bg-copper-light/40" : "border-paper-edge bg-white hover:bg-paper-deep")}
+        className={clsx(
+          "flex min-h-28 cursor-pointer flex-col items-center justify-center rounded border-2 border-dashed p-4 text-center text-sm",
+          isDragActive ? "border-copper bg-copper-light/40" : "border-paper-edge bg-white hover:bg-paper-deep",
+        )}
       >
         <input {...getInputProps()} data-testid={`upload-${kind}`} />
         <span className="font-medium">{label}</span>
@@ -101,7 +140,11 @@ function DropArea({ kind, multiple, onFiles }: { kind: ProjectFileKind; multiple
           {allowedTypesText(kind)}, up to {MAX_UPLOAD_LABEL}. Tap to choose, or drop here.
         </span>
       </div>
-      <button type="button" className="w-full rounded border border-paper-edge bg-white px-3 py-2 text-sm hover:bg-paper-deep" onClick={() => camera.current?.click()}>
+      <button
+        type="button"
+        className="w-full rounded border border-paper-edge bg-white px-3 py-2 text-sm hover:bg-paper-deep"
+        onClick={() => camera.current?.click()}
+      >
         Take a photo{kind === "signed-completion" ? " of the signed form" : ""}
       </button>
       <input
@@ -113,8 +156,13 @@ function DropArea({ kind, multiple, onFiles }: { kind: ProjectFileKind; multiple
         onChange={(e) => {
           const picked = Array.from(e.target.files ?? []);
           e.target.value = "";
-          const rejected = picked.filter((f) => f.size > MAX_UPLOAD_BYTES).map((file) => ({ file, errors: [{ code: "file-too-large", message: "" }] }) as unknown as FileRejection);
-          onFiles(picked.filter((f) => f.size <= MAX_UPLOAD_BYTES), rejected);
+          const rejected = picked
+            .filter((f) => f.size > MAX_UPLOAD_BYTES)
+            .map((file) => ({ file, errors: [{ code: "file-too-large", message: "" }] }) as unknown as FileRejection);
+          onFiles(
+            picked.filter((f) => f.size <= MAX_UPLOAD_BYTES),
+            rejected,
+          );
         }}
       />
     </div>

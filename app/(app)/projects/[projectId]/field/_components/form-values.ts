@@ -7,7 +7,14 @@ export const OTHER_PROFILE = "__other__";
 
 export type FormValues = {
   vocTemperature: { tempC: string; source: "module" | "ambient" };
-  strings: { id: string; polarity: "" | "correct" | "reversed"; vocV: string; insulationMohm: string; devicesFound: string; measuredV: string }[];
+  strings: {
+    id: string;
+    polarity: "" | "correct" | "reversed";
+    vocV: string;
+    insulationMohm: string;
+    devicesFound: string;
+    measuredV: string;
+  }[];
   inverters: { id: string; serial: string; cardSerial: string; activated: boolean }[];
   gridProfileChoice: string;
   gridProfileOther: string;
@@ -26,7 +33,14 @@ export function toFormValues(r: CommissioningReadings, acceptedGridProfiles: rea
   const listed = acceptedGridProfiles.includes(set);
   return {
     vocTemperature: { tempC: text(r.vocTemperature.tempC), source: r.vocTemperature.source },
-    strings: r.strings.map((s) => ({ id: s.id, polarity: s.polarity ?? "", vocV: text(s.vocV), insulationMohm: text(s.insulationMohm), devicesFound: text(s.devicesFound), measuredV: text(s.measuredV) })),
+    strings: r.strings.map((s) => ({
+      id: s.id,
+      polarity: s.polarity ?? "",
+      vocV: text(s.vocV),
+      insulationMohm: text(s.insulationMohm),
+      devicesFound: text(s.devicesFound),
+      measuredV: text(s.measuredV),
+    })),
     inverters: r.inverters.map((u) => ({ id: u.id, serial: u.serial ?? "", cardSerial: u.cardSerial ?? "", activated: u.activated })),
     gridProfileChoice: set === "" ? "" : listed ? set : OTHER_PROFILE,
     gridProfileOther: set !== "" && !listed ? set : "",
@@ -35,7 +49,11 @@ export function toFormValues(r: CommissioningReadings, acceptedGridProfiles: rea
     modulesReporting: text(r.modulesReporting),
     firstPowerW: text(r.firstPowerW),
     firstPowerTime: text(r.firstPowerTime),
-    rapidShutdown: { boundary: r.rapidShutdown.boundary, measuredV: text(r.rapidShutdown.measuredV), seconds: text(r.rapidShutdown.seconds) },
+    rapidShutdown: {
+      boundary: r.rapidShutdown.boundary,
+      measuredV: text(r.rapidShutdown.measuredV),
+      seconds: text(r.rapidShutdown.seconds),
+    },
   };
 }
 

@@ -10,7 +10,13 @@ export function GridProfileStep({ number, facts, values, errors, byId, reg }: St
       id="grid-profile"
       number={number}
       title="Grid profile"
-      intro={<p>{accepted.length ? "Choose on the inverter one of the profiles the utility accepts, read it back, and record it here." : "The utility's accepted profiles are not on file; ask the office before you set one."}</p>}
+      intro={
+        <p>
+          {accepted.length
+            ? "Choose on the inverter one of the profiles the utility accepts, read it back, and record it here."
+            : "The utility's accepted profiles are not on file; ask the office before you set one."}
+        </p>
+      }
     >
       <LabelledInput label="Profile set on the inverter" htmlFor="gridProfileChoice">
         <select id="gridProfileChoice" className="input text-base" {...reg("gridProfileChoice")}>

@@ -10,10 +10,30 @@ export function PairingStep({ number, facts, values, errors, byId, reg }: StepPr
       id="pairing"
       number={number}
       title={`Module-level ${p.word} found`}
-      intro={<p>Start the device scan on the inverter or its app. Devices report one by one over several minutes: fewer than installed means wait or scan again.</p>}
+      intro={
+        <p>
+          Start the device scan on the inverter or its app. Devices report one by one over several minutes: fewer than installed means wait
+          or scan again.
+        </p>
+      }
     >
-      <Reading title={`${p.word[0].toUpperCase()}${p.word.slice(1)} found`} inputId="devicesFound" unit={`of ${p.installed}`} hint={`${p.installed} installed.`} result={byId("device-pairing")} error={errors.devicesFound} bare>
-        <input id="devicesFound" data-installed={p.installed} className="input measure text-base" inputMode="numeric" autoComplete="off" {...reg("devicesFound")} />
+      <Reading
+        title={`${p.word[0].toUpperCase()}${p.word.slice(1)} found`}
+        inputId="devicesFound"
+        unit={`of ${p.installed}`}
+        hint={`${p.installed} installed.`}
+        result={byId("device-pairing")}
+        error={errors.devicesFound}
+        bare
+      >
+        <input
+          id="devicesFound"
+          data-installed={p.installed}
+          className="input measure text-base"
+          inputMode="numeric"
+          autoComplete="off"
+          {...reg("devicesFound")}
+        />
       </Reading>
       {p.strings.length ? (
         <div className="space-y-3 border-t border-paper-edge pt-3">
@@ -24,8 +44,19 @@ export function PairingStep({ number, facts, values, errors, byId, reg }: StepPr
               if (i < 0) return null;
               return (
                 <div key={s.id} className="space-y-2">
-                  <LabelledInput label={`String ${s.id}`} htmlFor={`strings.${i}.devicesFound`} unit={`of ${s.installed}`} error={errors[`strings.${i}.devicesFound`]}>
-                    <input id={`strings.${i}.devicesFound`} className="input measure text-base" inputMode="numeric" autoComplete="off" {...reg(`strings.${i}.devicesFound`)} />
+                  <LabelledInput
+                    label={`String ${s.id}`}
+                    htmlFor={`strings.${i}.devicesFound`}
+                    unit={`of ${s.installed}`}
+                    error={errors[`strings.${i}.devicesFound`]}
+                  >
+                    <input
+                      id={`strings.${i}.devicesFound`}
+                      className="input measure text-base"
+                      inputMode="numeric"
+                      autoComplete="off"
+                      {...reg(`strings.${i}.devicesFound`)}
+                    />
                   </LabelledInput>
                   <ResultLine result={byId(`device-pairing:${s.id}`)} />
                 </div>

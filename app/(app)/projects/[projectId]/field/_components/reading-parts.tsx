@@ -5,7 +5,19 @@ import type { CommissioningCheck } from "@/lib/engineering/commissioning";
 // Small pieces every section of the field record uses: a labelled input,
 // one reading with its result under it, and a section panel with a step number.
 
-export function LabelledInput({ label, htmlFor, unit, error, children }: { label: string; htmlFor: string; unit?: string; error?: string; children: React.ReactNode }) {
+export function LabelledInput({
+  label,
+  htmlFor,
+  unit,
+  error,
+  children,
+}: {
+  label: string;
+  htmlFor: string;
+  unit?: string;
+  error?: string;
+  children: React.ReactNode;
+}) {
   return (
     <div>
       <label className="label" htmlFor={htmlFor}>
@@ -23,7 +35,25 @@ export function LabelledInput({ label, htmlFor, unit, error, children }: { label
 }
 
 /** One reading with its check right under it: the result word, what was found, and what to do. */
-export function Reading({ title, inputId, hint, unit, result, error, bare, children }: { title: string; inputId: string; hint?: string; unit?: string; result?: CommissioningCheck; error?: string; bare?: boolean; children: React.ReactNode }) {
+export function Reading({
+  title,
+  inputId,
+  hint,
+  unit,
+  result,
+  error,
+  bare,
+  children,
+}: {
+  title: string;
+  inputId: string;
+  hint?: string;
+  unit?: string;
+  result?: CommissioningCheck;
+  error?: string;
+  bare?: boolean;
+  children: React.ReactNode;
+}) {
   return (
     <section className={clsx("space-y-2", !bare && "panel")} aria-label={title}>
       <LabelledInput label={title} htmlFor={inputId} unit={unit} error={error}>
@@ -38,7 +68,13 @@ export function Reading({ title, inputId, hint, unit, result, error, bare, child
 export function ResultLine({ result }: { result?: CommissioningCheck }) {
   if (!result) return null;
   return (
-    <div className="flex items-start gap-2" data-testid={`result-${result.id}`} data-status={result.status} data-reading={result.reading} data-waiting={result.waiting ? "true" : undefined}>
+    <div
+      className="flex items-start gap-2"
+      data-testid={`result-${result.id}`}
+      data-status={result.status}
+      data-reading={result.reading}
+      data-waiting={result.waiting ? "true" : undefined}
+    >
       <CheckStatusChip status={result.status} />
       <div className="min-w-0 text-sm">
         <p className="break-words text-ink-soft">{result.message}</p>
@@ -50,7 +86,19 @@ export function ResultLine({ result }: { result?: CommissioningCheck }) {
 }
 
 /** A numbered step of the work, as a panel with a heading and a line on how to do it. */
-export function Step({ id, number, title, intro, children }: { id: string; number: number; title: string; intro?: React.ReactNode; children: React.ReactNode }) {
+export function Step({
+  id,
+  number,
+  title,
+  intro,
+  children,
+}: {
+  id: string;
+  number: number;
+  title: string;
+  intro?: React.ReactNode;
+  children: React.ReactNode;
+}) {
   return (
     <section className="panel space-y-3" aria-labelledby={`${id}-heading`} data-testid={`step-${id}`}>
       <div>

@@ -9,7 +9,10 @@ import { SERIAL_BARCODE_FORMATS, serialFromBarcode } from "@/lib/field/serial-ba
 // of the label, in the browser; the barcode library is loaded only when asked.
 
 async function makeReader() {
-  const [{ BrowserMultiFormatReader }, { BarcodeFormat, DecodeHintType }] = await Promise.all([import("@zxing/browser"), import("@zxing/library")]);
+  const [{ BrowserMultiFormatReader }, { BarcodeFormat, DecodeHintType }] = await Promise.all([
+    import("@zxing/browser"),
+    import("@zxing/library"),
+  ]);
   const hints = new Map<number, unknown>([
     [DecodeHintType.POSSIBLE_FORMATS, SERIAL_BARCODE_FORMATS.map((name) => BarcodeFormat[name])],
     [DecodeHintType.TRY_HARDER, true],
@@ -43,13 +46,17 @@ export function SerialScanner({ what, onSerial, testId }: { what: string; onSeri
     setScanning(true);
     try {
       const reader = await makeReader();
-      controls.current = await reader.decodeFromConstraints({ video: { facingMode: "environment" } }, video.current ?? undefined, (result, _error, c) => {
-        if (!result) return;
-        c.stop();
-        controls.current = null;
-        setScanning(false);
-        found(result.getText());
-      });
+      controls.current = await reader.decodeFromConstraints(
+        { video: { facingMode: "environment" } },
+        video.current ?? undefined,
+        (result, _error, c) => {
+          if (!result) return;
+          c.stop();
+          controls.current = null;
+          setScanning(false);
+          found(result.getText());
+        },
+      );
     } catch {
       stop();
       setNotice("The camera could not be opened here. Type the serial, or take a photo of the barcode.");
@@ -83,10 +90,23 @@ export function SerialScanner({ what, onSerial, testId }: { what: string; onSeri
         )}
         <label htmlFor={photoId} className="cursor-pointer rounded border border-paper-edge bg-white px-3 py-2 text-sm hover:bg-paper-deep">
           From a photo
-          <input id={photoId} type="file" accept="image/*" capture="environment" className="sr-only" aria-label={`Photo of the barcode of ${what}`} onChange={(e) => void fromPhoto(e.target.files?.[0])} />
+          <input
+            id={photoId}
+            type="file"
+            accept="image/*"
+            capture="environment"
+            className="sr-only"
+            aria-label={`Photo of the barcode of ${what}`}
+            onChange={(e) => void fromPhoto(e.target.files?.[0])}
+          />
         </label>
       </div>
-      <video ref={video} className={scanning ? "aspect-video w-full rounded border border-paper-edge bg-ink" : "hidden"} muted playsInline />
+      <video
+        ref={video}
+        className={scanning ? "aspect-video w-full rounded border border-paper-edge bg-ink" : "hidden"}
+        muted
+        playsInline
+      />
       {notice ? (
         <p className="text-xs text-ink-soft" role="status">
           {notice}

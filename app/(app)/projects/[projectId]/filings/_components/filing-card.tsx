@@ -55,7 +55,17 @@ function Task({ title, children, open = false }: { title: string; children: Reac
   );
 }
 
-function Items({ items, canEdit, designRevision, answer }: { items: FilingItemDto[]; canEdit: boolean; designRevision: number | null; answer: FilingActions["answer"] }) {
+function Items({
+  items,
+  canEdit,
+  designRevision,
+  answer,
+}: {
+  items: FilingItemDto[];
+  canEdit: boolean;
+  designRevision: number | null;
+  answer: FilingActions["answer"];
+}) {
   return (
     <ol className="space-y-2">
       {items.map((item, i) => (
@@ -89,8 +99,9 @@ export function FilingCard(props: Props) {
       <h2 className="text-base">{props.title}</h2>
       {filing.revisionNeededSince ? (
         <p className="rounded border border-result-warn/40 bg-result-warn/10 px-3 py-2 text-sm" role="status">
-          The design changed after {filing.packetRevision ? `Rev ${filing.packetRevision}` : "the packet"} went in (<LocalTime iso={filing.revisionNeededSince} style="date" />): generate a new revision on the Documents
-          page and send it.
+          The design changed after {filing.packetRevision ? `Rev ${filing.packetRevision}` : "the packet"} went in (
+          <LocalTime iso={filing.revisionNeededSince} style="date" />
+          ): generate a new revision on the Documents page and send it.
         </p>
       ) : null}
       {filing.customerSince ? (
@@ -131,7 +142,9 @@ export function FilingCard(props: Props) {
                     {inspection.scheduledFor ? ` · ${calendarDayText(inspection.scheduledFor)}` : ""}
                     {inspection.timeWindow ? `, ${inspection.timeWindow}` : ""}
                     {inspection.inspectorName ? ` · ${inspection.inspectorName}` : ""}
-                    {repeats ? ` · re-inspects the ${INSPECTION_KIND_LABELS[repeats.kind].toLowerCase()} of ${calendarDayText(repeats.resultOn ?? repeats.scheduledFor ?? today)}` : ""}
+                    {repeats
+                      ? ` · re-inspects the ${INSPECTION_KIND_LABELS[repeats.kind].toLowerCase()} of ${calendarDayText(repeats.resultOn ?? repeats.scheduledFor ?? today)}`
+                      : ""}
                   </p>
                   <p className="mt-1">
                     {inspection.result ? (
@@ -142,10 +155,17 @@ export function FilingCard(props: Props) {
                     {inspection.resultOn ? ` on ${calendarDayText(inspection.resultOn)}` : ""}
                     {inspection.notes ? ` · ${inspection.notes}` : ""}
                   </p>
-                  {inspection.items.length ? <Items items={inspection.items} canEdit={canEdit} designRevision={props.designRevision} answer={actions.answer} /> : null}
+                  {inspection.items.length ? (
+                    <Items items={inspection.items} canEdit={canEdit} designRevision={props.designRevision} answer={actions.answer} />
+                  ) : null}
                   {!inspection.result && canEdit ? (
                     <Task title="Record the result">
-                      <InspectionResultForm inspectionId={inspection.id} inspectorName={inspection.inspectorName} today={today} record={actions.recordResult} />
+                      <InspectionResultForm
+                        inspectionId={inspection.id}
+                        inspectorName={inspection.inspectorName}
+                        today={today}
+                        record={actions.recordResult}
+                      />
                     </Task>
                   ) : null}
                 </li>
@@ -159,17 +179,38 @@ export function FilingCard(props: Props) {
         <div className="space-y-2">
           {props.nextStatuses.length ? (
             <Task title="Change the status">
-              <FilingStatusForm key={filing.status} filingId={filing.id} nextStatuses={props.nextStatuses} referenceNumber={filing.referenceNumber} revisions={props.revisions} today={today} change={actions.change} />
+              <FilingStatusForm
+                key={filing.status}
+                filingId={filing.id}
+                nextStatuses={props.nextStatuses}
+                referenceNumber={filing.referenceNumber}
+                revisions={props.revisions}
+                today={today}
+                change={actions.change}
+              />
             </Task>
           ) : null}
           {props.takesRound ? (
             <Task title={`Record corrections (round ${filing.rounds.length + 1})`}>
-              <RoundForm key={filing.rounds.length} filingId={filing.id} number={filing.rounds.length + 1} today={today} record={actions.recordRound} />
+              <RoundForm
+                key={filing.rounds.length}
+                filingId={filing.id}
+                number={filing.rounds.length + 1}
+                today={today}
+                record={actions.recordRound}
+              />
             </Task>
           ) : null}
           {props.inspectionKinds.length ? (
             <Task title="Book an inspection">
-              <BookInspectionForm key={`${filing.inspections.length}-${props.failedInspections.length}`} filingId={filing.id} kinds={props.inspectionKinds} failed={props.failedInspections} today={today} book={actions.book} />
+              <BookInspectionForm
+                key={`${filing.inspections.length}-${props.failedInspections.length}`}
+                filingId={filing.id}
+                kinds={props.inspectionKinds}
+                failed={props.failedInspections}
+                today={today}
+                book={actions.book}
+              />
             </Task>
           ) : null}
           {filing.kind === "interconnection" && filing.status === "approved" && !filing.ptoOn ? (
@@ -180,7 +221,13 @@ export function FilingCard(props: Props) {
           <Task title="Details: number, follow-up, fee, notes">
             <FilingDetailsForm
               filingId={filing.id}
-              initial={{ referenceNumber: filing.referenceNumber ?? "", nextFollowUpOn: filing.nextFollowUpOn ?? "", paymentId: filing.paymentId ?? "", waitingOnCustomer: filing.customerSince !== null, notes: filing.notes }}
+              initial={{
+                referenceNumber: filing.referenceNumber ?? "",
+                nextFollowUpOn: filing.nextFollowUpOn ?? "",
+                paymentId: filing.paymentId ?? "",
+                waitingOnCustomer: filing.customerSince !== null,
+                notes: filing.notes,
+              }}
               payments={props.payments}
               update={actions.update}
             />

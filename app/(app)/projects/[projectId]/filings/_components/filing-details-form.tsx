@@ -7,7 +7,14 @@ import { FilingDetailsInput } from "@/lib/schemas/filings";
 import type { updateFilingDetailsAction } from "../actions";
 import { useFilingForm } from "./use-filing-form";
 
-type Values = { filingId: string; referenceNumber: string; nextFollowUpOn: string; paymentId: string; waitingOnCustomer: boolean; notes: string };
+type Values = {
+  filingId: string;
+  referenceNumber: string;
+  nextFollowUpOn: string;
+  paymentId: string;
+  waitingOnCustomer: boolean;
+  notes: string;
+};
 
 /** What the office keeps about a filing besides its status: the number, the next follow-up, the fee paid, the customer's turn. */
 export function FilingDetailsForm(props: {
@@ -17,7 +24,11 @@ export function FilingDetailsForm(props: {
   update: typeof updateFilingDetailsAction;
 }) {
   const { filingId } = props;
-  const { form, submit, message, errors, busy } = useFilingForm<Values, { filingId: string }>(FilingDetailsInput, { filingId, ...props.initial }, (raw) => props.update(raw as never));
+  const { form, submit, message, errors, busy } = useFilingForm<Values, { filingId: string }>(
+    FilingDetailsInput,
+    { filingId, ...props.initial },
+    (raw) => props.update(raw as never),
+  );
   const id = (name: string) => `${filingId}-details-${name}`;
   return (
     <form onSubmit={submit} noValidate className="space-y-3" aria-label="Filing details">

@@ -34,8 +34,17 @@ export function FilingFacts({ filing, today }: { filing: FilingDto; today: strin
       </Fact>
       <Fact label="Packet sent">{filing.packetRevision ? `Rev ${filing.packetRevision}` : null}</Fact>
       <Fact label="Decided">{day(filing.decidedAt)}</Fact>
-      <Fact label="Expires">{filing.expiresAt ? <span className={lapsing ? "font-semibold text-result-fail" : undefined}>{day(filing.expiresAt)}</span> : null}</Fact>
-      <Fact label="Next follow-up">{filing.nextFollowUpOn ? <span className={overdue ? "font-semibold text-result-warn" : undefined}>{day(filing.nextFollowUpOn)}{overdue ? " (due)" : ""}</span> : null}</Fact>
+      <Fact label="Expires">
+        {filing.expiresAt ? <span className={lapsing ? "font-semibold text-result-fail" : undefined}>{day(filing.expiresAt)}</span> : null}
+      </Fact>
+      <Fact label="Next follow-up">
+        {filing.nextFollowUpOn ? (
+          <span className={overdue ? "font-semibold text-result-warn" : undefined}>
+            {day(filing.nextFollowUpOn)}
+            {overdue ? " (due)" : ""}
+          </span>
+        ) : null}
+      </Fact>
       {filing.kind === "interconnection" ? <Fact label="Permission to operate">{day(filing.ptoOn)}</Fact> : null}
     </dl>
   );

@@ -9,7 +9,16 @@ import { ChangeFilingStatusInput } from "@/lib/schemas/filings";
 import type { changeFilingStatusAction } from "../actions";
 import { useFilingForm } from "./use-filing-form";
 
-type Values = { filingId: string; status: string; on: string; referenceNumber: string; packetId: string; channel: string; sentTo: string; note: string };
+type Values = {
+  filingId: string;
+  status: string;
+  on: string;
+  referenceNumber: string;
+  packetId: string;
+  channel: string;
+  sentTo: string;
+  note: string;
+};
 
 /**
  * Moves a filing on: to submitted with the revision sent, to approved with the authority's number, and so
@@ -27,7 +36,16 @@ export function FilingStatusForm(props: {
   const first = nextStatuses[0] ?? "";
   const { form, submit, message, errors, busy } = useFilingForm<Values, { status: string }>(
     ChangeFilingStatusInput,
-    { filingId, status: first, on: today, referenceNumber: props.referenceNumber ?? "", packetId: props.revisions[0]?.id ?? "", channel: "portal", sentTo: "", note: "" },
+    {
+      filingId,
+      status: first,
+      on: today,
+      referenceNumber: props.referenceNumber ?? "",
+      packetId: props.revisions[0]?.id ?? "",
+      channel: "portal",
+      sentTo: "",
+      note: "",
+    },
     (raw) => props.change(raw as never),
     (saved) => saved.reset({ ...saved.getValues(), note: "" }),
   );
@@ -52,14 +70,24 @@ export function FilingStatusForm(props: {
           <input id={id("on")} type="date" className="input" {...form.register("on")} />
         </Field>
         {status === "approved" || props.referenceNumber ? (
-          <Field label="Reference number" htmlFor={id("ref")} error={errors.referenceNumber?.message} hint="Permit, application or queue number">
+          <Field
+            label="Reference number"
+            htmlFor={id("ref")}
+            error={errors.referenceNumber?.message}
+            hint="Permit, application or queue number"
+          >
             <input id={id("ref")} className="input measure" autoComplete="off" {...form.register("referenceNumber")} />
           </Field>
         ) : null}
       </div>
       {sending ? (
         <div className="grid gap-3 sm:grid-cols-3">
-          <Field label="Packet revision sent" htmlFor={id("packet")} error={errors.packetId?.message} hint={props.revisions.length ? undefined : "Generate the packet on the Documents page first"}>
+          <Field
+            label="Packet revision sent"
+            htmlFor={id("packet")}
+            error={errors.packetId?.message}
+            hint={props.revisions.length ? undefined : "Generate the packet on the Documents page first"}
+          >
             <select id={id("packet")} className="input" {...form.register("packetId")}>
               <option value="">Choose a revision</option>
               {props.revisions.map((r) => (

@@ -10,13 +10,38 @@ import type { recordInspectionResultAction, scheduleInspectionAction } from "../
 import { ItemFields } from "./item-fields";
 import { useFilingForm } from "./use-filing-form";
 
-type BookValues = { filingId: string; kind: string; scheduledFor: string; timeWindow: string; inspectorName: string; reinspectionOfId: string };
+type BookValues = {
+  filingId: string;
+  kind: string;
+  scheduledFor: string;
+  timeWindow: string;
+  inspectorName: string;
+  reinspectionOfId: string;
+};
 
 /** Books an inspection, or a re-inspection of one that failed. */
-export function BookInspectionForm(props: { filingId: string; kinds: readonly InspectionKind[]; failed: { id: string; label: string }[]; today: string; book: typeof scheduleInspectionAction }) {
+export function BookInspectionForm(props: {
+  filingId: string;
+  kinds: readonly InspectionKind[];
+  failed: { id: string; label: string }[];
+  today: string;
+  book: typeof scheduleInspectionAction;
+}) {
   const { filingId } = props;
-  const blank = { filingId, kind: props.kinds[props.kinds.length - 1] ?? "", scheduledFor: props.today, timeWindow: "", inspectorName: "", reinspectionOfId: props.failed[0]?.id ?? "" };
-  const { form, submit, message, errors, busy } = useFilingForm<BookValues, { inspectionId: string }>(ScheduleInspectionInput, blank, (raw) => props.book(raw as never), (saved) => saved.reset(blank));
+  const blank = {
+    filingId,
+    kind: props.kinds[props.kinds.length - 1] ?? "",
+    scheduledFor: props.today,
+    timeWindow: "",
+    inspectorName: "",
+    reinspectionOfId: props.failed[0]?.id ?? "",
+  };
+  const { form, submit, message, errors, busy } = useFilingForm<BookValues, { inspectionId: string }>(
+    ScheduleInspectionInput,
+    blank,
+    (raw) => props.book(raw as never),
+    (saved) => saved.reset(blank),
+  );
   const id = (name: string) => `${filingId}-book-${name}`;
   return (
     <form onSubmit={submit} noValidate className="space-y-3" aria-label="Book an inspection">
@@ -60,14 +85,30 @@ export function BookInspectionForm(props: { filingId: string; kinds: readonly In
   );
 }
 
-type ResultValues = { inspectionId: string; result: string; resultOn: string; inspectorName: string; notes: string; items: { text: string; reference: string }[] };
+type ResultValues = {
+  inspectionId: string;
+  result: string;
+  resultOn: string;
+  inspectorName: string;
+  notes: string;
+  items: { text: string; reference: string }[];
+};
 type Items = { items: ResultValues["items"] };
 
 /** What the inspector decided, with the corrections a failed or partly passed inspection left. */
-export function InspectionResultForm(props: { inspectionId: string; inspectorName: string; today: string; record: typeof recordInspectionResultAction }) {
+export function InspectionResultForm(props: {
+  inspectionId: string;
+  inspectorName: string;
+  today: string;
+  record: typeof recordInspectionResultAction;
+}) {
   const { inspectionId } = props;
   const blank = { inspectionId, result: "passed", resultOn: props.today, inspectorName: props.inspectorName, notes: "", items: [] };
-  const { form, submit, message, errors, busy } = useFilingForm<ResultValues, { inspectionId: string }>(InspectionResultInput, blank, (raw) => props.record(raw as never));
+  const { form, submit, message, errors, busy } = useFilingForm<ResultValues, { inspectionId: string }>(
+    InspectionResultInput,
+    blank,
+    (raw) => props.record(raw as never),
+  );
   const id = (name: string) => `${inspectionId}-result-${name}`;
   return (
     <form onSubmit={submit} noValidate className="mt-2 space-y-3" aria-label="Record the result">
@@ -89,7 +130,13 @@ export function InspectionResultForm(props: { inspectionId: string; inspectorNam
           <input id={id("inspector")} className="input" {...form.register("inspectorName")} />
         </Field>
       </div>
-      <ItemFields idPrefix={id("item")} control={form.control as unknown as Control<Items>} register={form.register as unknown as UseFormRegister<Items>} errors={errors} noun="correction" />
+      <ItemFields
+        idPrefix={id("item")}
+        control={form.control as unknown as Control<Items>}
+        register={form.register as unknown as UseFormRegister<Items>}
+        errors={errors}
+        noun="correction"
+      />
       <Field label="Notes" htmlFor={id("notes")} error={errors.notes?.message}>
         <input id={id("notes")} className="input" {...form.register("notes")} />
       </Field>

@@ -10,8 +10,20 @@ import { useFilingForm } from "./use-filing-form";
 type Values = { itemId: string; response: string; designRevision: string };
 
 /** The office's answer to one comment, naming the design revision that answers it when the design changed. */
-export function ItemAnswerForm({ itemId, designRevision, answer }: { itemId: string; designRevision: number | null; answer: typeof answerItemAction }) {
-  const { form, submit, message, errors, busy } = useFilingForm<Values, { itemId: string }>(AnswerItemInput, { itemId, response: "", designRevision: "" }, (raw) => answer(raw as never));
+export function ItemAnswerForm({
+  itemId,
+  designRevision,
+  answer,
+}: {
+  itemId: string;
+  designRevision: number | null;
+  answer: typeof answerItemAction;
+}) {
+  const { form, submit, message, errors, busy } = useFilingForm<Values, { itemId: string }>(
+    AnswerItemInput,
+    { itemId, response: "", designRevision: "" },
+    (raw) => answer(raw as never),
+  );
   return (
     <form onSubmit={submit} noValidate className="mt-2 space-y-2" aria-label="Answer this item">
       <FormMessage kind="error">{message}</FormMessage>
@@ -23,7 +35,9 @@ export function ItemAnswerForm({ itemId, designRevision, answer }: { itemId: str
           label="Design revision"
           htmlFor={`${itemId}-revision`}
           error={errors.designRevision?.message}
-          hint={designRevision ? `Now at revision ${designRevision}; blank if the design did not change` : "Blank if the design did not change"}
+          hint={
+            designRevision ? `Now at revision ${designRevision}; blank if the design did not change` : "Blank if the design did not change"
+          }
         >
           <input id={`${itemId}-revision`} className="input measure" inputMode="numeric" {...form.register("designRevision")} />
         </Field>

@@ -9,7 +9,11 @@ import { useFilingForm } from "./use-filing-form";
 
 /** The day the utility granted permission to operate. */
 export function PtoForm({ filingId, today, record }: { filingId: string; today: string; record: typeof recordPtoAction }) {
-  const { form, submit, message, errors, busy } = useFilingForm<{ filingId: string; ptoOn: string }, { ptoOn: string }>(RecordPtoInput, { filingId, ptoOn: today }, (raw) => record(raw));
+  const { form, submit, message, errors, busy } = useFilingForm<{ filingId: string; ptoOn: string }, { ptoOn: string }>(
+    RecordPtoInput,
+    { filingId, ptoOn: today },
+    (raw) => record(raw),
+  );
   return (
     <form onSubmit={submit} noValidate className="flex flex-wrap items-end gap-3" aria-label="Record permission to operate">
       <FormMessage kind="error">{message}</FormMessage>

@@ -13,9 +13,24 @@ type Values = { filingId: string; receivedOn: string; items: { text: string; ref
 type Items = { items: Values["items"] };
 
 /** The authority's comments came back: round N, each comment an item to answer. */
-export function RoundForm({ filingId, number, today, record }: { filingId: string; number: number; today: string; record: typeof recordRoundAction }) {
+export function RoundForm({
+  filingId,
+  number,
+  today,
+  record,
+}: {
+  filingId: string;
+  number: number;
+  today: string;
+  record: typeof recordRoundAction;
+}) {
   const blank = { filingId, receivedOn: today, items: [{ text: "", reference: "" }] };
-  const { form, submit, message, errors, busy } = useFilingForm<Values, { number: number }>(RecordRoundInput, blank, (raw) => record(raw), (saved) => saved.reset(blank));
+  const { form, submit, message, errors, busy } = useFilingForm<Values, { number: number }>(
+    RecordRoundInput,
+    blank,
+    (raw) => record(raw),
+    (saved) => saved.reset(blank),
+  );
   return (
     <form onSubmit={submit} noValidate className="space-y-3" aria-label={`Record correction round ${number}`}>
       <FormMessage kind="error">{message}</FormMessage>
@@ -24,7 +39,13 @@ export function RoundForm({ filingId, number, today, record }: { filingId: strin
           <input id={`${filingId}-round-received`} type="date" className="input" {...form.register("receivedOn")} />
         </Field>
       </div>
-      <ItemFields idPrefix={`${filingId}-round`} control={form.control as unknown as Control<Items>} register={form.register as unknown as UseFormRegister<Items>} errors={errors} noun="comment" />
+      <ItemFields
+        idPrefix={`${filingId}-round`}
+        control={form.control as unknown as Control<Items>}
+        register={form.register as unknown as UseFormRegister<Items>}
+        errors={errors}
+        noun="comment"
+      />
       <Button type="submit" disabled={busy}>
         {busy ? "Saving…" : `Record round ${number}`}
       </Button>

@@ -11,7 +11,12 @@ import type { ActionResult } from "@/lib/dto/action-result";
  * A filing form: checked with the server's own schema before it is sent; once saved the page reloads
  * its facts (the stage and waiting-on may have moved). A refusal keeps every typed value.
  */
-export function useFilingForm<T extends FieldValues, R>(schema: z.ZodType, defaults: DefaultValues<T>, send: (raw: T) => Promise<ActionResult<R>>, onSaved?: (form: UseFormReturn<T>) => void) {
+export function useFilingForm<T extends FieldValues, R>(
+  schema: z.ZodType,
+  defaults: DefaultValues<T>,
+  send: (raw: T) => Promise<ActionResult<R>>,
+  onSaved?: (form: UseFormReturn<T>) => void,
+) {
   const router = useRouter();
   const form = useForm<T>({ resolver: zodResolver(schema as never) as unknown as Resolver<T>, defaultValues: defaults });
   const { submit, message } = useActionSubmit(form, send, () => {

@@ -9,7 +9,12 @@ export async function GET(request: Request, { params }: { params: Promise<{ toke
     const file = await getSharedPacketFile(token, packetId, clientOf(request.headers));
     const bytes = await getObjectBytes(file.key);
     return new Response(Buffer.from(bytes), {
-      headers: { "content-type": "application/pdf", "content-length": String(bytes.length), "content-disposition": `attachment; filename="${file.fileName}"`, ...NO_INDEX },
+      headers: {
+        "content-type": "application/pdf",
+        "content-length": String(bytes.length),
+        "content-disposition": `attachment; filename="${file.fileName}"`,
+        ...NO_INDEX,
+      },
     });
   } catch (error) {
     return shareErrorResponse(error);

@@ -24,10 +24,19 @@ export const GET = withAuth<Params>(
 export const POST = withAuth<Params>(
   async (request, { viewer, params }) => {
     // Refuse an oversize body before reading it into memory.
-    if (Number(request.headers.get("content-length") ?? 0) > MAX_REQUEST_BYTES) throw new AppError("INVALID_INPUT", `The data sheet is larger than ${DATASHEET_MAX_BYTES / 1024 / 1024} MB.`, { file: ["Too large"] });
+    if (Number(request.headers.get("content-length") ?? 0) > MAX_REQUEST_BYTES)
+      throw new AppError("INVALID_INPUT", `The data sheet is larger than ${DATASHEET_MAX_BYTES / 1024 / 1024} MB.`, {
+        file: ["Too large"],
+      });
     const file = (await request.formData().catch(() => null))?.get("file");
-    if (!(file instanceof File)) throw new AppError("INVALID_INPUT", "Attach the data sheet as the multipart field “file”.", { file: ["Choose a PDF file"] });
-    const equipment = await attachDatasheet({ viewer, equipmentId: params.equipmentId, fileName: file.name, bytes: new Uint8Array(await file.arrayBuffer()) });
+    if (!(file instanceof File))
+      throw new AppError("INVALID_INPUT", "Attach the data sheet as the multipart field “file”.", { file: ["Choose a PDF file"] });
+    const equipment = await attachDatasheet({
+      viewer,
+      equipmentId: params.equipmentId,
+      fileName: file.name,
+      bytes: new Uint8Array(await file.arrayBuffer()),
+    });
     return NextResponse.json(equipment, { status: 201 });
   },
   { permission: "catalog:edit", body: "multipart" },

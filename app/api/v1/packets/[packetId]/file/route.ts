@@ -8,7 +8,12 @@ export const GET = withAuth<{ packetId: string }>(
     const file = await getPacketFile({ viewer, packetId: params.packetId });
     const bytes = await getObjectBytes(file.key);
     return new Response(Buffer.from(bytes), {
-      headers: { "content-type": "application/pdf", "content-length": String(bytes.length), "content-disposition": `attachment; filename="${file.fileName}"`, "cache-control": "private, no-store" },
+      headers: {
+        "content-type": "application/pdf",
+        "content-length": String(bytes.length),
+        "content-disposition": `attachment; filename="${file.fileName}"`,
+        "cache-control": "private, no-store",
+      },
     });
   },
   { permission: "project:view" },

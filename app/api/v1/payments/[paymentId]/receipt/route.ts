@@ -7,7 +7,9 @@ export const GET = withAuth<{ paymentId: string }>(
   async (_request, { viewer, params }) => {
     const receipt = await getReceiptLocation({ viewer, paymentId: params.paymentId });
     const bytes = await getObjectBytes(receipt.key);
-    return new Response(Buffer.from(bytes), { headers: attachmentHeaders({ fileName: receipt.fileName, contentType: "application/pdf", length: bytes.length }) });
+    return new Response(Buffer.from(bytes), {
+      headers: attachmentHeaders({ fileName: receipt.fileName, contentType: "application/pdf", length: bytes.length }),
+    });
   },
   { permission: "project:view" },
 );

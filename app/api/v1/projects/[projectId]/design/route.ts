@@ -5,7 +5,10 @@ import { readJson, withAuth } from "@/lib/server/http";
 type Params = { projectId: string };
 
 // GET /api/v1/projects/:projectId/design – the saved design draft (or a new one prefilled from the project)
-export const GET = withAuth<Params>(async (_request, { viewer, params }) => NextResponse.json(await getDesignForProject({ viewer, projectId: params.projectId })), { permission: "project:view" });
+export const GET = withAuth<Params>(
+  async (_request, { viewer, params }) => NextResponse.json(await getDesignForProject({ viewer, projectId: params.projectId })),
+  { permission: "project:view" },
+);
 
 // PUT /api/v1/projects/:projectId/design – save the draft as given and review it
 export const PUT = withAuth<Params>(

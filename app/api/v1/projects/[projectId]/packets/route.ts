@@ -6,7 +6,10 @@ import { RequestPacketInput } from "@/lib/schemas/packet";
 type Params = { projectId: string };
 
 // GET /api/v1/projects/:projectId/packets – every generation of the project's packets, newest first
-export const GET = withAuth<Params>(async (_request, { viewer, params }) => NextResponse.json({ items: await listPackets({ viewer, projectId: params.projectId }) }), { permission: "project:view" });
+export const GET = withAuth<Params>(
+  async (_request, { viewer, params }) => NextResponse.json({ items: await listPackets({ viewer, projectId: params.projectId }) }),
+  { permission: "project:view" },
+);
 
 // POST /api/v1/projects/:projectId/packets – queue the next revision of a packet
 export const POST = withAuth<Params>(

@@ -13,7 +13,13 @@ export const GET = withAuth<{ projectId: string; document: string }>(
     if (!COMMISSIONING_DOCUMENT_KINDS.includes(kind)) throw new AppError("NOT_FOUND", "Ask for the certificate or the report.");
     const input = await buildCommissioningDocumentInput({ viewer, projectId: params.projectId, kind });
     const bytes = await renderCommissioningPdf(input);
-    return new Response(Buffer.from(bytes), { headers: attachmentHeaders({ fileName: `${FILE_NAMES[kind]}-project-${input.project.number}.pdf`, contentType: "application/pdf", length: bytes.length }) });
+    return new Response(Buffer.from(bytes), {
+      headers: attachmentHeaders({
+        fileName: `${FILE_NAMES[kind]}-project-${input.project.number}.pdf`,
+        contentType: "application/pdf",
+        length: bytes.length,
+      }),
+    });
   },
   { permission: "project:view" },
 );

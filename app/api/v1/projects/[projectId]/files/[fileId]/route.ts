@@ -14,7 +14,10 @@ export const GET = withAuth<Params>(
     const { size } = ProjectFileQuery.parse(Object.fromEntries(request.nextUrl.searchParams));
     const file = await getProjectFileLocation({ viewer, projectId: params.projectId, fileId: params.fileId });
     const bytes = await getObjectBytes(file.key);
-    if (size !== "thumbnail") return new Response(Buffer.from(bytes), { headers: attachmentHeaders({ fileName: file.fileName, contentType: file.contentType, length: bytes.length }) });
+    if (size !== "thumbnail")
+      return new Response(Buffer.from(bytes), {
+        headers: attachmentHeaders({ fileName: file.fileName, contentType: file.contentType, length: bytes.length }),
+      });
     if (!file.hasThumbnail) throw new AppError("NOT_FOUND", "This file is not a picture; download it instead.");
     const thumbnail = await makeThumbnail(bytes).catch((error: unknown) => {
       console.error(`thumbnail of file ${params.fileId}`, error);
