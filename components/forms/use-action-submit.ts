@@ -10,8 +10,8 @@ import { applyFieldErrors } from "./apply-field-errors";
  * (the server parses them again with the same schema). A refusal puts the field errors
  * beside their fields and keeps every typed value.
  */
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- any transformed output type will do
 export function useActionSubmit<T extends FieldValues, R>(
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- any transformed output type will do
   form: UseFormReturn<T, any, any>,
   send: (raw: T) => Promise<ActionResult<R>>,
   onDone: (data: R) => void,
