@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { safeString } from "./fields";
+import { FILING_STATUSES, WAITING_PARTIES } from "@/lib/domain/filings";
 import { STAGES } from "@/lib/domain/stages";
 
 const text = (label: string, max: number) => safeString().trim().min(1, `Enter the ${label}`).max(max, `At most ${max} characters`);
@@ -94,7 +95,10 @@ export const ChangeStageInput = z.object({
 });
 export type ChangeStageInput = z.input<typeof ChangeStageInput>;
 
-export const PROJECT_SORTS = ["number", "customerName", "city", "stage", "daysInStage", "createdAt"] as const;
+export const PROJECT_SORTS = ["number", "customerName", "city", "stage", "daysInStage", "waitingSince", "createdAt"] as const;
+
+const filingStatusFilter = (what: string) =>
+  z.union([z.enum(FILING_STATUSES, { error: `${what} must be one of: ${FILING_STATUSES.join(", ")}` }), z.literal("")]).default("");
 
 export const ProjectListQuery = z.object({
   page: z.coerce.number({ error: "page must be a number" }).int().min(1, "page starts at 1").max(10_000).default(1),
@@ -103,5 +107,14 @@ export const ProjectListQuery = z.object({
   direction: z.enum(["asc", "desc"], { error: "direction must be asc or desc" }).default("desc"),
   q: safeString().trim().max(100, "Search text is at most 100 characters").default(""),
   stage: z.union([StageSchema, z.literal("")]).default(""),
+  // "nobody": PTO received, nobody holds it.
+  waitingOn: z
+    .union([
+      z.enum([...WAITING_PARTIES, "nobody"], { error: `waitingOn must be one of: ${[...WAITING_PARTIES, "nobody"].join(", ")}` }),
+      z.literal(""),
+    ])
+    .default(""),
+  permitStatus: filingStatusFilter("permitStatus"),
+  interconnectionStatus: filingStatusFilter("interconnectionStatus"),
 });
 export type ProjectListQuery = z.infer<typeof ProjectListQuery>;

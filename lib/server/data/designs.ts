@@ -11,6 +11,8 @@ import type { EquipmentDto } from "@/lib/schemas/equipment";
 import { db } from "../db";
 import { isUuid } from "./ids";
 import { recordAudit } from "./audit";
+import { markRevisionNeeded } from "./filings";
+import { refreshProjectFacts } from "./project-facts";
 import { getEquipmentByIds } from "./equipment";
 import { getProjectById } from "./projects";
 import type { ProjectDto } from "@/lib/dto/projects";
@@ -106,6 +108,7 @@ export async function saveDesignDraft({ viewer, projectId, draft: raw }: { viewe
     if (!project || !can(viewer, "project:edit", project)) throw new AppError("NOT_FOUND", "No such project.");
     const existing = await Design.findOne({ where: { projectId }, transaction });
     const before = existing?.reviewStatus ?? null;
+    const changed = !existing || JSON.stringify(existing.draft) !== JSON.stringify(draft);
     const row = existing
       ? await existing.update(
           { draft: draft as Record<string, unknown>, reviewStatus, reviewSummary, revision: existing.revision + 1, updatedById: viewer.id },
@@ -135,6 +138,9 @@ export async function saveDesignDraft({ viewer, projectId, draft: raw }: { viewe
         { transaction },
       );
     }
+    // A changed design owes every authority still reviewing its packet a new revision.
+    if (changed && (await markRevisionNeeded(projectId, { transaction })))
+      await refreshProjectFacts(projectId, { transaction, actorId: viewer.id });
     return row;
   });
   return { revision: saved.revision, updatedAt: saved.updatedAt.toISOString(), outcome };

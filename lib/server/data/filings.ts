@@ -662,8 +662,9 @@ export async function recordPto({ viewer, input, now = new Date() }: { viewer: V
 }
 
 /**
- * A design saved after its packet went in: every filing that sent a packet and is still live owes the
- * authority a new revision. Called inside the design save's transaction.
+ * A design saved after its packet went in: every filing that sent a packet and is still under review owes
+ * the authority a new revision. (A change after approval is a revision to an issued permit, which the
+ * office files on its own.) Called inside the design save's transaction.
  */
 export async function markRevisionNeeded(projectId: string, { transaction, now = new Date() }: { transaction: Transaction; now?: Date }) {
   const [count] = await Filing.update(
@@ -673,7 +674,7 @@ export async function markRevisionNeeded(projectId: string, { transaction, now =
         projectId,
         packetId: { [Op.ne]: null },
         revisionNeededSince: null,
-        status: { [Op.in]: ["submitted", "in_review", "corrections_requested", "resubmitted", "approved"] },
+        status: { [Op.in]: ["submitted", "in_review", "corrections_requested", "resubmitted"] },
       },
       transaction,
     },

@@ -79,6 +79,8 @@ function orderFor({ sort, direction }: Pick<ProjectListQuery, "sort" | "directio
   if (sort === "stage")
     return [literal(`array_position(array[${STAGES.map((s) => `'${s}'`).join(",")}]::varchar[], "Project"."stage")`), dir];
   if (sort === "daysInStage") return ["stageChangedAt", dir === "ASC" ? "DESC" : "ASC"];
+  // Longest wait first when descending, like days in stage; projects nobody holds come last either way.
+  if (sort === "waitingSince") return ["waitingSince", dir === "ASC" ? "DESC NULLS LAST" : "ASC NULLS LAST"];
   return [sort, dir];
 }
 
@@ -89,6 +91,9 @@ export async function listProjects({ viewer, query }: { viewer: Viewer; query: P
   db();
   const where: WhereOptions<Project>[] = [visibleTo(viewer)];
   if (query.stage) where.push({ stage: query.stage });
+  if (query.waitingOn) where.push({ waitingOn: query.waitingOn === "nobody" ? null : query.waitingOn });
+  if (query.permitStatus) where.push({ permitStatus: query.permitStatus });
+  if (query.interconnectionStatus) where.push({ interconnectionStatus: query.interconnectionStatus });
   if (query.q) {
     const like = `%${escapeLike(query.q)}%`;
     const anyOf: WhereOptions<Project>[] = [

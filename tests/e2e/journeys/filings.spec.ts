@@ -111,6 +111,10 @@ test("a permit and an interconnection application run side by side, and the stag
   await expect(permit.getByTestId("filing-status")).toHaveText("Corrections requested");
   await expect(page.getByTestId("waiting-on")).toContainText("Waiting on Office");
 
+  // The design page says who holds a packet of this design.
+  await page.goto(`/projects/${projectId}/design`);
+  await expect(page.getByTestId("submitted-banner")).toContainText("Rev 1 of the permit packet is with");
+
   // Rev 2 answers them; the permit is resubmitted with it.
   await page.goto(`/projects/${projectId}/documents`);
   await generatePacket(page, "permit", 2);
@@ -155,6 +159,11 @@ test("a permit and an interconnection application run side by side, and the stag
   await passed.getByRole("button", { name: "Save the result" }).click();
   await expect(second.getByTestId("inspection-result")).toHaveText("Passed");
   expect(await stageShown(page, projectId)).toContain("Utility filed");
+  // The crew sees the inspections and what was corrected on the field page.
+  await page.goto(`/projects/${projectId}/field`);
+  await expect(page.getByTestId("field-inspections")).toContainText("Failed");
+  await expect(page.getByTestId("field-inspections")).toContainText("Conduit strap missing");
+  await expect(page.getByTestId("field-inspections")).toContainText("Passed");
 
   // The utility approves with its number, then grants PTO.
   await page.goto(`/projects/${projectId}/filings`);

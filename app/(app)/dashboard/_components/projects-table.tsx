@@ -5,6 +5,7 @@ import Link from "next/link";
 import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { StageBadge } from "@/components/ui/stage-badge";
+import { WAITING_PARTIES, WAITING_PARTY_LABELS } from "@/lib/domain/filings";
 import { STAGES, STAGE_LABELS, stageIndex } from "@/lib/domain/stages";
 import type { ProjectDto } from "@/lib/dto/projects";
 
@@ -49,16 +50,36 @@ const COLUMNS = [
     header: "Days in stage",
     cell: (c) => <span className="measure">{c.getValue()}</span>,
   }),
+  column.accessor("waitingSince", {
+    id: "waitingSince",
+    header: "Waiting on",
+    cell: (c) => <WaitingOn project={c.row.original} />,
+  }),
   column.accessor((p) => p.jurisdiction?.name ?? "—", { id: "jurisdiction", header: "AHJ", enableSorting: false }),
   column.accessor((p) => p.utility?.name ?? "—", { id: "utility", header: "Utility", enableSorting: false }),
   column.accessor((p) => p.coordinator?.name ?? "—", { id: "coordinator", header: "Coordinator", enableSorting: false }),
   column.accessor((p) => p.installer?.name ?? "Unassigned", { id: "installer", header: "Installer", enableSorting: false }),
 ];
 
+const DAY_MS = 86_400_000;
+
+/** Who holds the project and for how many days, from its filings. */
+function WaitingOn({ project }: { project: ProjectDto }) {
+  if (!project.waitingOn) return <span className="text-ink-faint">Nobody</span>;
+  const days = project.waitingSince ? Math.max(0, Math.floor((Date.now() - Date.parse(project.waitingSince)) / DAY_MS)) : null;
+  return (
+    <span data-testid="waiting-on-cell">
+      {WAITING_PARTY_LABELS[project.waitingOn]}
+      {days !== null ? <span className="measure text-xs text-ink-faint"> · {days} d</span> : null}
+    </span>
+  );
+}
+
 export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
   const [search, setSearch] = useState("");
   const [q, setQ] = useState("");
   const [stage, setStage] = useState("");
+  const [waiting, setWaiting] = useState("");
   const [page, setPage] = useState(1);
   const [sorting, setSorting] = useState<SortingState>([{ id: "number", desc: true }]);
 
@@ -75,12 +96,13 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
     const params = new URLSearchParams({ page: String(page), pageSize: "20" });
     if (q) params.set("q", q);
     if (stage) params.set("stage", stage);
+    if (waiting) params.set("waitingOn", waiting);
     if (sorting[0]) {
       params.set("sort", sorting[0].id);
       params.set("direction", sorting[0].desc ? "desc" : "asc");
     }
     return `/api/v1/projects?${params}`;
-  }, [page, q, stage, sorting]);
+  }, [page, q, stage, waiting, sorting]);
 
   const { data, error, isLoading } = useSWR(url, fetchJson, { keepPreviousData: true });
 
@@ -137,6 +159,28 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
             ))}
           </select>
         </div>
+        <div>
+          <label className="label" htmlFor="waiting-filter">
+            Waiting on
+          </label>
+          <select
+            id="waiting-filter"
+            className="input"
+            value={waiting}
+            onChange={(e) => {
+              setWaiting(e.target.value);
+              setPage(1);
+            }}
+          >
+            <option value="">Anyone</option>
+            {WAITING_PARTIES.map((w) => (
+              <option key={w} value={w}>
+                {WAITING_PARTY_LABELS[w]}
+              </option>
+            ))}
+            <option value="nobody">Nobody</option>
+          </select>
+        </div>
         {canCreate ? (
           <Link
             href="/projects/new"
@@ -170,6 +214,9 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
               <StageBadge stage={p.stage} />
               <span className="measure text-xs text-ink-faint">{p.daysInStage} d</span>
             </div>
+            <p className="text-xs text-ink-soft">
+              Waiting on <WaitingOn project={p} />
+            </p>
             <p className="text-xs text-ink-faint">{p.nextAction}</p>
             {/* On site the crew goes straight to the readings and uploads. */}
             {stageIndex(p.stage) >= stageIndex("permit_issued") ? (

@@ -16,6 +16,8 @@ import {
   scheduleInspection,
 } from "@/lib/server/data/filings";
 import { refreshProjectFacts } from "@/lib/server/data/project-facts";
+import { listProjects } from "@/lib/server/data/projects";
+import { ProjectListQuery } from "@/lib/schemas/project";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
 
@@ -385,5 +387,26 @@ describe("filings", () => {
       code: "NOT_FOUND",
     });
     expect((await listProjectFilings({ viewer: org.viewers.installer, projectId: project.id })).filings).toHaveLength(2);
+  });
+
+  it("lists projects by who they wait on and by their filings' statuses", async () => {
+    const { project, packets, permit } = await filedProject();
+    await changeFilingStatus({
+      viewer: coordinator(),
+      input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" },
+    });
+    const numbers = async (query: Record<string, string>) =>
+      (await listProjects({ viewer: coordinator(), query: ProjectListQuery.parse({ pageSize: "100", ...query }) })).items.map(
+        (p) => p.number,
+      );
+    expect(await numbers({ waitingOn: "ahj" })).toContain(project.number);
+    expect(await numbers({ waitingOn: "office" })).not.toContain(project.number);
+    expect(await numbers({ permitStatus: "submitted", interconnectionStatus: "preparing" })).toContain(project.number);
+    expect(await numbers({ permitStatus: "approved" })).not.toContain(project.number);
+    const listed = (
+      await listProjects({ viewer: coordinator(), query: ProjectListQuery.parse({ pageSize: "100", waitingOn: "ahj" }) })
+    ).items.find((p) => p.id === project.id)!;
+    expect(listed).toMatchObject({ waitingOn: "ahj", permitStatus: "submitted", interconnectionStatus: "preparing" });
+    expect(ProjectListQuery.safeParse({ waitingOn: "inspector" }).success).toBe(false);
   });
 });

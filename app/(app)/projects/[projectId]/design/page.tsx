@@ -4,8 +4,10 @@ import { can } from "@/lib/domain/permissions";
 import { requireUser } from "@/lib/server/auth";
 import { getDesignWithContext } from "@/lib/server/data/designs";
 import { listEquipment } from "@/lib/server/data/equipment";
+import { listProjectFilings } from "@/lib/server/data/filings";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { DesignEditor } from "./_components/design-editor";
+import { SubmittedBanner } from "./_components/submitted-banner";
 import { saveDesignAction } from "./actions";
 
 export const metadata: Metadata = { title: "Design" };
@@ -13,7 +15,11 @@ export const metadata: Metadata = { title: "Design" };
 export default async function DesignPage({ params }: { params: Promise<{ projectId: string }> }) {
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
-  const [catalog, context] = await Promise.all([listEquipment({ viewer }), getDesignWithContext({ viewer, projectId: project.id })]);
+  const [catalog, context, filings] = await Promise.all([
+    listEquipment({ viewer }),
+    getDesignWithContext({ viewer, projectId: project.id }),
+    listProjectFilings({ viewer, projectId: project.id }),
+  ]);
   const { design } = context;
   // Items the design already uses stay choosable even when archived since.
   const known = new Set(catalog.map((c) => c.id));
@@ -26,6 +32,7 @@ export default async function DesignPage({ params }: { params: Promise<{ project
           : "Choose the project's AHJ to run the code checks."}{" "}
         Your input is saved as you go.
       </ProjectSubpageHeader>
+      <SubmittedBanner projectId={project.id} filings={filings} />
       <DesignEditor
         save={saveDesignAction}
         projectId={project.id}

@@ -5,10 +5,12 @@ import { can } from "@/lib/domain/permissions";
 import { isAppError } from "@/lib/errors";
 import { requireUser } from "@/lib/server/auth";
 import { getCommissioning } from "@/lib/server/data/commissioning";
+import { listProjectFilings } from "@/lib/server/data/filings";
 import { listProjectFiles } from "@/lib/server/data/project-files";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { CommissioningForm } from "./_components/commissioning-form";
 import { FieldCautions } from "./_components/field-cautions";
+import { FieldInspections } from "./_components/field-inspections";
 import { FieldUploads } from "./_components/field-uploads";
 import { saveCommissioningAction } from "./actions";
 
@@ -26,9 +28,10 @@ async function loadCommissioning(...args: Parameters<typeof getCommissioning>) {
 export default async function FieldPage({ params }: { params: Promise<{ projectId: string }> }) {
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
-  const [commissioning, files] = await Promise.all([
+  const [commissioning, files, filings] = await Promise.all([
     loadCommissioning({ viewer, projectId: project.id }),
     listProjectFiles({ viewer, projectId: project.id }),
+    listProjectFilings({ viewer, projectId: project.id }),
   ]);
   const mayRecord = can(viewer, "field:record", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null });
   return (
@@ -37,6 +40,7 @@ export default async function FieldPage({ params }: { params: Promise<{ projectI
         Commissioning readings checked against the approved design as you type, the certificate of completion to sign, and photos from site.
       </ProjectSubpageHeader>
       <FieldCautions />
+      <FieldInspections filings={filings} />
       {commissioning.ok ? (
         <>
           <CommissioningForm
