@@ -29,6 +29,8 @@ export type ProjectDto = {
   declaredValuationCents: number | null; // the owner's declared value of the work; percentage fees read it
   waitingOn: WaitingParty | null;
   waitingSince: string | null;
+  /** Whole days the project has waited on that party, as daysInStage counts. */
+  waitingDays: number | null;
   permitStatus: FilingStatus | null;
   interconnectionStatus: FilingStatus | null;
   createdAt: string;

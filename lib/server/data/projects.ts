@@ -56,6 +56,7 @@ function toProjectDto(p: Project, now = Date.now()): ProjectDto {
     declaredValuationCents: p.declaredValuationCents ?? null,
     waitingOn: p.waitingOn ?? null,
     waitingSince: p.waitingSince?.toISOString() ?? null,
+    waitingDays: p.waitingSince ? Math.max(0, Math.floor((now - p.waitingSince.getTime()) / DAY_MS)) : null,
     permitStatus: p.permitStatus ?? null,
     interconnectionStatus: p.interconnectionStatus ?? null,
     createdAt: p.createdAt.toISOString(),

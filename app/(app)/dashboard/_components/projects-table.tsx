@@ -61,16 +61,13 @@ const COLUMNS = [
   column.accessor((p) => p.installer?.name ?? "Unassigned", { id: "installer", header: "Installer", enableSorting: false }),
 ];
 
-const DAY_MS = 86_400_000;
-
 /** Who holds the project and for how many days, from its filings. */
 function WaitingOn({ project }: { project: ProjectDto }) {
   if (!project.waitingOn) return <span className="text-ink-faint">Nobody</span>;
-  const days = project.waitingSince ? Math.max(0, Math.floor((Date.now() - Date.parse(project.waitingSince)) / DAY_MS)) : null;
   return (
     <span data-testid="waiting-on-cell">
       {WAITING_PARTY_LABELS[project.waitingOn]}
-      {days !== null ? <span className="measure text-xs text-ink-faint"> · {days} d</span> : null}
+      {project.waitingDays !== null ? <span className="measure text-xs text-ink-faint"> · {project.waitingDays} d</span> : null}
     </span>
   );
 }
