@@ -75,32 +75,47 @@ const RULES: Partial<Record<Stage, Rule>> = {
   },
 };
 
+/** The stages that stand for a recorded fact: moving past one by hand asks for a reason. */
+export const FACT_STAGES: readonly Stage[] = [
+  "permit_filed",
+  "permit_issued",
+  "inspection_passed",
+  "utility_filed",
+  "utility_approved",
+  "commissioned",
+  "pto_received",
+];
+
 /**
  * The stage the facts reach: the end of the unbroken run of facts from the start of the line, where a
- * fact that holds stands in for the earlier stages it implies. Facts further along that are already true
- * (an interconnection filed the same day as the permit) wait until the run reaches them.
+ * fact that holds stands in for the earlier stages it implies, and a stage set by hand stands in for every
+ * stage up to it. Facts further along that are already true (an interconnection filed the same day as the
+ * permit) wait until the run reaches them.
  */
-export function stageFromFacts(facts: StageFacts): { stage: Stage; reached: StageReason[] } {
+export function stageFromFacts(facts: StageFacts, handStage: Stage | null = null): { stage: Stage; reached: StageReason[] } {
   const implied = new Set<Stage>();
   for (const stage of STAGES) {
     const rule = RULES[stage];
     if (rule?.holds(facts)) for (const earlier of rule.implies ?? []) implied.add(earlier);
   }
+  const byHand = handStage ? stageIndex(handStage) : -1;
   const reached: StageReason[] = [];
   for (const stage of STAGES) {
     const rule = RULES[stage];
-    if (!rule) break;
-    if (rule.holds(facts)) reached.push({ stage, fact: rule.fact, at: rule.at(facts) });
-    else if (implied.has(stage)) reached.push({ stage, fact: `Implied by a later fact`, at: null });
+    if (rule?.holds(facts)) reached.push({ stage, fact: rule.fact, at: rule.at(facts) });
+    else if (stageIndex(stage) <= byHand) reached.push({ stage, fact: "Set by hand", at: null });
+    else if (rule && implied.has(stage)) reached.push({ stage, fact: "Implied by a later fact", at: null });
     else break;
   }
   return { stage: reached[reached.length - 1]!.stage, reached };
 }
 
-/** The stages between the facts' stage and a stage chosen by hand, whose facts are not recorded. */
-export function stagesSkippedBy(target: Stage, facts: StageFacts): Stage[] {
-  const from = stageIndex(stageFromFacts(facts).stage);
-  return STAGES.slice(from + 1, stageIndex(target) + 1).filter((stage) => stage !== "closed");
+/** The stages a hand move from the current stage to the target passes whose facts are not recorded. */
+export function stagesSkippedBy(target: Stage, facts: StageFacts, current: Stage): Stage[] {
+  const { reached } = stageFromFacts(facts);
+  const held = new Set(reached.map((r) => r.stage));
+  for (const stage of STAGES) if (RULES[stage]?.holds(facts)) held.add(stage);
+  return STAGES.slice(stageIndex(current) + 1, stageIndex(target) + 1).filter((stage) => FACT_STAGES.includes(stage) && !held.has(stage));
 }
 
 /** Words for the stages a hand move skips, for the reason prompt and the audit row. */
@@ -108,11 +123,7 @@ export function skippedFactsText(stages: readonly Stage[]): string {
   return stages.map((s) => STAGE_LABELS[s]).join(", ");
 }
 
-/**
- * The project's stage: what the facts reach, or the stage the office set by hand if that is further
- * along (a hand move stands until the facts pass it).
- */
+/** The project's stage: what the facts reach, counting a stage set by hand as standing for those before it. */
 export function resolveStage(facts: StageFacts, handSet: Stage | null): Stage {
-  const derived = stageFromFacts(facts).stage;
-  return handSet && stageIndex(handSet) > stageIndex(derived) ? handSet : derived;
+  return stageFromFacts(facts, handSet).stage;
 }

@@ -20,6 +20,7 @@ import { recordAudit } from "./audit";
 import { getOrganization } from "./organizations";
 import { getReviewedDesign } from "./reviewed-design";
 import { getProjectById } from "./projects";
+import { refreshProjectFacts } from "./project-facts";
 import type { CommissioningDto, SaveCommissioningResult, FieldSummaryDto } from "@/lib/dto/commissioning";
 
 export type CommissioningContext = { reviewed: ReviewedDesign; facts: CommissioningFacts };
@@ -136,6 +137,8 @@ export async function saveCommissioning({
         { transaction },
       );
     }
+    // The field record is a fact of the project's stage: begun (the work is installed) and completed.
+    if (!existing || status !== before) await refreshProjectFacts(projectId, { transaction, actorId: viewer.id });
     return saved;
   });
   const refused = complete && !passes ? refusal(dto.completion) : null;

@@ -3,7 +3,8 @@ import { cache } from "react";
 import { literal, Op, type OrderItem, type Transaction, type WhereOptions } from "sequelize";
 import { CommissioningRecord, Design, Jurisdiction, Project, ProjectFile, StageChange, User, Utility } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
-import { NEXT_ACTION, nextActionFor, STAGE_LABELS, STAGES, type Stage } from "@/lib/domain/stages";
+import { NEXT_ACTION, nextActionFor, STAGE_LABELS, STAGES, stageIndex, type Stage } from "@/lib/domain/stages";
+import { skippedFactsText, stageFromFacts, stagesSkippedBy } from "@/lib/domain/filings";
 import { AppError } from "@/lib/errors";
 import type { ProjectListQuery, ProjectValues } from "@/lib/schemas/project";
 import { stageChangedEmail, type StageStep } from "@/templates/email/stage-changed";
@@ -13,6 +14,7 @@ import { holdOrMergeMail } from "./outbox";
 import { isUuid } from "./ids";
 import { diffFields, recordAudit } from "./audit";
 import { ensureDefaultFilings } from "./filings";
+import { readProjectFacts, refreshProjectFacts } from "./project-facts";
 import type { ProjectDto, StageChangeDto } from "@/lib/dto/projects";
 
 const DAY_MS = 86_400_000;
@@ -269,6 +271,23 @@ export async function changeProjectStage({
           note: [`Say why: ${missing.toLowerCase()}`],
         });
     }
+    // The stage follows the facts: a hand move may not go back past what the filings record, and one
+    // that goes past a fact nobody recorded says why (the note is kept with the move and in the audit).
+    const { facts } = await readProjectFacts(projectId, transaction);
+    const factsStage = stageFromFacts(facts).stage;
+    if (stageIndex(toStage) < stageIndex(factsStage)) {
+      throw new AppError(
+        "CONFLICT",
+        `The filings put this project at “${STAGE_LABELS[factsStage]}”: change the filing on the Filings page to move it back.`,
+      );
+    }
+    const skipped = stagesSkippedBy(toStage, facts, fromStage as Stage);
+    if (skipped.length && !note.trim()) {
+      const what = skippedFactsText(skipped);
+      throw new AppError("CONFLICT", `Nothing records ${what} yet. Record it on the Filings page, or move on with a note saying why.`, {
+        note: [`Say why: nothing records ${what}`],
+      });
+    }
     const at = new Date();
     // A stage set by hand stands until the facts of the filings pass it (lib/domain/filings).
     await project.update({ stage: toStage, stageChangedAt: at, handStage: toStage }, { transaction });
@@ -282,10 +301,16 @@ export async function changeProjectStage({
         action: "project.stage-changed",
         entityType: "project",
         entityId: projectId,
-        changes: { stage: { before: fromStage, after: toStage }, ...(note ? { note: { before: null, after: note } } : {}) },
+        changes: {
+          stage: { before: fromStage, after: toStage },
+          ...(note ? { note: { before: null, after: note } } : {}),
+          ...(skipped.length ? { skippedFacts: { before: null, after: skipped } } : {}),
+        },
       },
       { transaction },
     );
+    // What the facts already hold past the new stage (a completed field record, say) moves it on at once.
+    await refreshProjectFacts(projectId, { transaction, actorId: viewer.id, now: at });
     // The coordinator and installer hear of it, unless they made the change themselves.
     const people = [project.coordinatorId, project.installerId].filter((id): id is string => Boolean(id) && id !== viewer.id);
     const recipients = people.length

@@ -211,14 +211,13 @@ test("installer on a phone records commissioning in the order of the work: strin
   expect(response.headers()["content-disposition"]).toMatch(/^attachment;/);
   expect(response.headers()["x-content-type-options"]).toBe("nosniff");
 
-  // The project page shows the field work done, and the coordinator moves the project on.
+  // The project page shows the field work done, and the completed record moved the project on by itself.
   await office.goto(`/projects/${project.id}`);
   const field = office.getByTestId("field-status");
   await expect(field).toContainText("Commissioning: complete");
   await expect(field).toContainText("Signed completion form: received");
-  await office.getByLabel("Move to stage").selectOption({ label: "Commissioned" });
-  await office.getByRole("button", { name: "Change stage" }).click();
   await expect(office.getByRole("region", { name: "Current stage" })).toContainText("Commissioned");
+  await expect(office.getByTestId("stage-timeline")).toContainText("Field record completed");
 });
 
 test("installer on a phone with optimizers that report: devices found short of installed wait and hold the record open, a shut-down reading a little under the expected voltage passes, and every module must report", async ({

@@ -16,7 +16,7 @@ import {
   scheduleInspection,
 } from "@/lib/server/data/filings";
 import { refreshProjectFacts } from "@/lib/server/data/project-facts";
-import { listProjects } from "@/lib/server/data/projects";
+import { changeProjectStage, listProjects } from "@/lib/server/data/projects";
 import { ProjectListQuery } from "@/lib/schemas/project";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
@@ -408,5 +408,33 @@ describe("filings", () => {
     ).items.find((p) => p.id === project.id)!;
     expect(listed).toMatchObject({ waitingOn: "ahj", permitStatus: "submitted", interconnectionStatus: "preparing" });
     expect(ProjectListQuery.safeParse({ waitingOn: "inspector" }).success).toBe(false);
+  });
+
+  it("asks why a hand move skips a fact nobody recorded, and never moves back past the filings", async () => {
+    const { project, packets, permit } = await filedProject();
+    const v = coordinator();
+    await changeFilingStatus({
+      viewer: v,
+      input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" },
+    });
+    const skipped = await failure(changeProjectStage({ viewer: v, projectId: project.id, toStage: "installed", note: "" }));
+    expect(skipped).toMatchObject({ code: "CONFLICT", fields: ["note"] });
+    expect(skipped!.message).toContain("Permit issued");
+    expect((await stageOf(project.id)).stage).toBe("permit_filed");
+
+    await changeProjectStage({ viewer: v, projectId: project.id, toStage: "installed", note: "Permit card on site; number to follow" });
+    expect((await stageOf(project.id)).stage).toBe("installed");
+    const audit = await AuditEvent.findOne({
+      where: { entityId: project.id, action: "project.stage-changed" },
+      order: [["createdAt", "DESC"]],
+    });
+    expect(audit!.changes.skippedFacts).toEqual({ before: null, after: ["permit_issued"] });
+
+    // The hand move stands for the stages before it; moving back below what the filings record is refused.
+    expect(await failure(changeProjectStage({ viewer: v, projectId: project.id, toStage: "design_checked", note: "oops" }))).toMatchObject({
+      code: "CONFLICT",
+    });
+    await changeProjectStage({ viewer: v, projectId: project.id, toStage: "permit_filed", note: "Not installed after all" });
+    expect((await stageOf(project.id)).stage).toBe("permit_filed");
   });
 });

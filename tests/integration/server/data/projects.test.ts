@@ -201,7 +201,12 @@ describe("changeProjectStage", () => {
     expect(sent[0].textBody).toContain(`/projects/${project.id}`);
 
     // A second move moments later joins the installer's held message; the coordinator made it, so theirs stays as it was.
-    await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage: "pto_received", note: "" });
+    await changeProjectStage({
+      viewer: acme.viewers.coordinator,
+      projectId: project.id,
+      toStage: "pto_received",
+      note: "PTO letter by e-mail",
+    });
     const second = await OutboxMessage.findAll({ where: { subject: { [Op.like]: `Project ${number} is now “PTO received”%` } } });
     expect(second.map((m) => m.toAddress)).toEqual([acme.users.installer.email]);
     expect(second[0]!.textBody).toMatch(
@@ -229,7 +234,9 @@ describe("changeProjectStage", () => {
       "utility_filed",
     ] as const;
     const before = Date.now();
-    for (const toStage of path) await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage, note: "" });
+    // Moving past facts nobody recorded needs a word of why.
+    for (const toStage of path)
+      await changeProjectStage({ viewer: acme.viewers.coordinator, projectId: project.id, toStage, note: "Caught up by hand" });
     const held = await OutboxMessage.findAll({ where: { coalesceKey: `stage-change:${project.id}` } });
     expect(held.map((m) => m.toAddress)).toEqual([acme.users.installer.email]);
     expect(held[0]!.textBody).toContain(`changed stage ${path.length} times`);

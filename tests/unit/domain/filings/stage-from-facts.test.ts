@@ -109,12 +109,23 @@ describe("the stage from the facts", () => {
     expect(stageFromFacts(all).stage).toBe("pto_received");
   });
 
-  it("keeps a hand move until the facts pass it, and names the stages a hand move skips", () => {
+  it("keeps a hand move until the facts pass it, and names the facts a hand move skips", () => {
     const facts = at({ designChecked: true, permit: filing("submitted") });
     expect(resolveStage(facts, "installed")).toBe("installed");
     expect(resolveStage(facts, "draft")).toBe("permit_filed");
-    expect(stagesSkippedBy("installed", facts)).toEqual(["permit_issued", "installed"]);
-    expect(stagesSkippedBy("permit_filed", facts)).toEqual([]);
-    expect(stagesSkippedBy("closed", at({ ptoAt: "d" }))).toEqual([]);
+    expect(stagesSkippedBy("installed", facts, "permit_filed")).toEqual(["permit_issued"]); // installed is the crew's word, not a record
+    expect(stagesSkippedBy("permit_filed", facts, "design_checked")).toEqual([]);
+    expect(stagesSkippedBy("design_checked", at({}), "draft")).toEqual([]); // the office checks the design by hand
+    expect(stagesSkippedBy("pto_received", at({}), "utility_approved")).toEqual(["commissioned", "pto_received"]);
+    expect(stagesSkippedBy("closed", at({ ptoAt: "d" }), "pto_received")).toEqual([]);
+  });
+
+  it("lets a stage set by hand stand for those before it, so a later fact moves on from there", () => {
+    const handSet = at({ commissionedAt: "2026-04-15" });
+    expect(stageFromFacts(handSet).stage).toBe("draft");
+    expect(resolveStage(handSet, "utility_approved")).toBe("commissioned");
+    expect(stageFromFacts(handSet, "utility_approved").reached.find((r) => r.stage === "permit_issued")).toMatchObject({
+      fact: "Set by hand",
+    });
   });
 });
