@@ -29,6 +29,10 @@ describe("ProjectInput", () => {
     });
   });
 
+  it.each([[{ waitingOn: "inspector" }], [{ permitStatus: "lost" }], [{ sort: "waitingOn" }]])("refuses the filing filter %j", (query) => {
+    expect(ProjectListQuery.safeParse(query).success).toBe(false);
+  });
+
   it.each([
     [{ customerName: "" }, "customerName", "Enter the customer's name"],
     [{ customerName: "x".repeat(161) }, "customerName", "At most 160 characters"],
@@ -51,7 +55,17 @@ describe("ProjectInput", () => {
 
 describe("ProjectListQuery", () => {
   it("fills defaults", () => {
-    expect(ProjectListQuery.parse({})).toEqual({ page: 1, pageSize: 20, sort: "number", direction: "desc", q: "", stage: "" });
+    expect(ProjectListQuery.parse({})).toEqual({
+      page: 1,
+      pageSize: 20,
+      sort: "number",
+      direction: "desc",
+      q: "",
+      stage: "",
+      waitingOn: "",
+      permitStatus: "",
+      interconnectionStatus: "",
+    });
   });
 
   it.each([
