@@ -1,4 +1,4 @@
-import type { FilingStatus, Stage, WaitingParty } from "@/lib/domain/stored-values";
+import type { FilingStatus, HoldState, Stage, WaitingParty } from "@/lib/domain/stored-values";
 
 export type ProjectDto = {
   id: string;
@@ -27,6 +27,8 @@ export type ProjectDto = {
   coordinator: { id: string; name: string } | null;
   installer: { id: string; name: string } | null;
   declaredValuationCents: number | null; // the owner's declared value of the work; percentage fees read it
+  holdState: HoldState | null;
+  holdReason: string;
   waitingOn: WaitingParty | null;
   waitingSince: string | null;
   /** Whole days the project has waited on that party, as daysInStage counts. */

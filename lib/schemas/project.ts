@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { safeString } from "./fields";
+import { safeString, whenValid } from "./fields";
 import { FILING_STATUSES, WAITING_PARTIES } from "@/lib/domain/filings";
 import { STAGES } from "@/lib/domain/stages";
 
@@ -95,6 +95,20 @@ export const ChangeStageInput = z.object({
 });
 export type ChangeStageInput = z.input<typeof ChangeStageInput>;
 
+/** Setting a project aside (on hold, or cancelled) and taking it back up; setting aside needs a reason. */
+export const ProjectHoldInput = z
+  .object({
+    projectId: safeString().uuid("Unknown project"),
+    hold: z.enum(["on_hold", "cancelled", "active"], { error: "Choose on hold, cancelled or active" }),
+    reason: safeString().trim().max(2000, "At most 2000 characters").default(""),
+  })
+  .refine((v) => v.hold === "active" || v.reason.length > 0, {
+    path: ["reason"],
+    message: "Say why the project is set aside",
+    when: whenValid("hold", "reason"),
+  });
+export type ProjectHoldInput = z.input<typeof ProjectHoldInput>;
+
 export const PROJECT_SORTS = ["number", "customerName", "city", "stage", "daysInStage", "waitingSince", "createdAt"] as const;
 
 const filingStatusFilter = (what: string) =>
@@ -116,5 +130,7 @@ export const ProjectListQuery = z.object({
     .default(""),
   permitStatus: filingStatusFilter("permitStatus"),
   interconnectionStatus: filingStatusFilter("interconnectionStatus"),
+  // Active projects are those neither on hold nor cancelled.
+  hold: z.enum(["", "active", "on_hold", "cancelled"], { error: "hold must be active, on_hold or cancelled" }).default(""),
 });
 export type ProjectListQuery = z.infer<typeof ProjectListQuery>;

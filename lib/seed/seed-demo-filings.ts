@@ -55,6 +55,13 @@ const ROUND_ITEMS = [
   ],
 ];
 
+// Two projects on hold and one cancelled, by project number (invented reasons).
+const HOLDS = new Map<number, { state: "on_hold" | "cancelled"; reason: string }>([
+  [3, { state: "on_hold", reason: "The customer is re-roofing before the array goes up" }],
+  [16, { state: "on_hold", reason: "Waiting for the customer's HOA to meet" }],
+  [13, { state: "cancelled", reason: "The customer sold the house" }],
+]);
+
 const INSPECTION_CORRECTIONS = [
   { text: "Conduit strap missing within 3 ft of the junction box.", reference: "NEC 358.30" },
   { text: "Directory at the service does not show the PV disconnect location.", reference: "NEC 705.10" },
@@ -215,6 +222,13 @@ export async function seedDemoFilings(organizationId: string, t: Transaction) {
       },
       { transaction: t },
     );
+    const aside = HOLDS.get(project.number);
+    if (aside && stage !== "closed") {
+      await project.update(
+        { holdState: aside.state, holdReason: aside.reason, holdSince: project.stageChangedAt },
+        { transaction: t, silent: true },
+      );
+    }
     await refreshProjectFacts(project.id, { transaction: t });
   }
 }

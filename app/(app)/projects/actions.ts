@@ -3,8 +3,8 @@
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { defineAction } from "@/lib/server/action";
-import { changeProjectStage, createProject, updateProject } from "@/lib/server/data/projects";
-import { ChangeStageInput, ProjectInput } from "@/lib/schemas/project";
+import { changeProjectStage, createProject, setProjectHold, updateProject } from "@/lib/server/data/projects";
+import { ChangeStageInput, ProjectHoldInput, ProjectInput } from "@/lib/schemas/project";
 
 export const createProjectAction = defineAction({ schema: ProjectInput, permission: "project:create" }, async (values, { viewer }) => {
   const project = await createProject({ viewer, values });
@@ -26,5 +26,14 @@ export const changeStageAction = defineAction(
     const project = await changeProjectStage({ viewer, projectId, toStage, note });
     revalidatePath(`/projects/${projectId}`);
     return { stage: project.stage };
+  },
+);
+
+export const setHoldAction = defineAction(
+  { schema: ProjectHoldInput, permission: "project:change-stage" },
+  async ({ projectId, hold, reason }, { viewer }) => {
+    const project = await setProjectHold({ viewer, projectId, hold, reason });
+    revalidatePath(`/projects/${projectId}`);
+    return { holdState: project.holdState };
   },
 );

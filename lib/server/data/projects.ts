@@ -56,6 +56,8 @@ function toProjectDto(p: Project, now = Date.now()): ProjectDto {
     coordinator: p.coordinator ? { id: p.coordinator.id, name: p.coordinator.name } : null,
     installer: p.installer ? { id: p.installer.id, name: p.installer.name } : null,
     declaredValuationCents: p.declaredValuationCents ?? null,
+    holdState: p.holdState ?? null,
+    holdReason: p.holdReason ?? "",
     waitingOn: p.waitingOn ?? null,
     waitingSince: p.waitingSince?.toISOString() ?? null,
     waitingDays: p.waitingSince ? Math.max(0, Math.floor((now - p.waitingSince.getTime()) / DAY_MS)) : null,
@@ -96,6 +98,7 @@ export async function listProjects({ viewer, query }: { viewer: Viewer; query: P
   if (query.stage) where.push({ stage: query.stage });
   if (query.waitingOn) where.push({ waitingOn: query.waitingOn === "nobody" ? null : query.waitingOn });
   if (query.permitStatus) where.push({ permitStatus: query.permitStatus });
+  if (query.hold) where.push({ holdState: query.hold === "active" ? null : query.hold });
   if (query.interconnectionStatus) where.push({ interconnectionStatus: query.interconnectionStatus });
   if (query.q) {
     const like = `%${escapeLike(query.q)}%`;
@@ -374,4 +377,55 @@ export async function listStageChanges({ viewer, projectId }: { viewer: Viewer; 
     changedBy: r.changedBy?.name ?? null,
     createdAt: r.createdAt.toISOString(),
   }));
+}
+
+const HOLD_WORDS = { on_hold: "put on hold", cancelled: "cancelled", active: "taken up again" } as const;
+
+/**
+ * Sets a project aside (on hold, or cancelled, with the reason) or takes it up again. A project set aside
+ * waits on nobody and is kept out of the active projects; its filings and stage stay as they were.
+ */
+export async function setProjectHold({
+  viewer,
+  projectId,
+  hold,
+  reason,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  hold: "on_hold" | "cancelled" | "active";
+  reason: string;
+}): Promise<ProjectDto> {
+  const sequelize = db();
+  await sequelize.transaction(async (transaction) => {
+    const project = await findVisibleProject(viewer, projectId, transaction);
+    if (!can(viewer, "project:change-stage", project)) throw new AppError("FORBIDDEN", "You cannot set this project aside.");
+    await Project.findByPk(projectId, { attributes: ["id"], lock: transaction.LOCK.UPDATE, transaction });
+    await project.reload({ transaction });
+    const before = project.holdState ?? "active";
+    if (before === hold) throw new AppError("CONFLICT", `The project is already ${HOLD_WORDS[hold]}.`);
+    if (hold !== "active" && !reason.trim())
+      throw new AppError("INVALID_INPUT", "Say why the project is set aside.", { reason: ["Say why the project is set aside"] });
+    const now = new Date();
+    await project.update(
+      {
+        holdState: hold === "active" ? null : hold,
+        holdReason: hold === "active" ? "" : reason,
+        holdSince: hold === "active" ? null : now,
+      },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        viewer,
+        action: "project.hold-changed",
+        entityType: "project",
+        entityId: projectId,
+        changes: { hold: { before, after: hold }, ...(reason ? { reason: { before: null, after: reason } } : {}) },
+      },
+      { transaction },
+    );
+    await refreshProjectFacts(projectId, { transaction, actorId: viewer.id, now });
+  });
+  return getProjectById({ viewer, projectId });
 }

@@ -165,6 +165,12 @@ export const ACTIONS: Record<string, Entry> = {
     page: (t) => `/projects/${t.projectId}/edit`,
     args: (t) => [{ projectId: t.projectId, values: { ...t.bodies.project, customerName: "Taken over" } }],
   },
+  [`${A}/projects/actions.ts#setHoldAction`]: {
+    scope: "project",
+    roles: OFFICE,
+    page: (t) => `/projects/${t.projectId}`,
+    args: (t) => [{ projectId: t.projectId, hold: "cancelled", reason: "not yours" }],
+  },
   [`${A}/projects/actions.ts#changeStageAction`]: {
     scope: "project",
     roles: OFFICE,

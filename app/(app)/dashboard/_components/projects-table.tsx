@@ -41,6 +41,7 @@ const COLUMNS = [
     cell: (c) => (
       <div>
         <StageBadge stage={c.getValue()} />
+        {c.row.original.holdState ? <HoldMark state={c.row.original.holdState} /> : null}
         <div className="text-xs text-ink-faint">{c.row.original.nextAction}</div>
       </div>
     ),
@@ -61,6 +62,13 @@ const COLUMNS = [
   column.accessor((p) => p.installer?.name ?? "Unassigned", { id: "installer", header: "Installer", enableSorting: false }),
 ];
 
+/** A project set aside, beside its stage. */
+function HoldMark({ state }: { state: "on_hold" | "cancelled" }) {
+  return (
+    <span className="ml-1 rounded border border-result-warn/40 px-1.5 py-0.5 text-xs">{state === "on_hold" ? "On hold" : "Cancelled"}</span>
+  );
+}
+
 /** Who holds the project and for how many days, from its filings. */
 function WaitingOn({ project }: { project: ProjectDto }) {
   if (!project.waitingOn) return <span className="text-ink-faint">Nobody</span>;
@@ -77,6 +85,7 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
   const [q, setQ] = useState("");
   const [stage, setStage] = useState("");
   const [waiting, setWaiting] = useState("");
+  const [hold, setHold] = useState("");
   const [page, setPage] = useState(1);
   const [sorting, setSorting] = useState<SortingState>([{ id: "number", desc: true }]);
 
@@ -94,12 +103,13 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
     if (q) params.set("q", q);
     if (stage) params.set("stage", stage);
     if (waiting) params.set("waitingOn", waiting);
+    if (hold) params.set("hold", hold);
     if (sorting[0]) {
       params.set("sort", sorting[0].id);
       params.set("direction", sorting[0].desc ? "desc" : "asc");
     }
     return `/api/v1/projects?${params}`;
-  }, [page, q, stage, waiting, sorting]);
+  }, [page, q, stage, waiting, hold, sorting]);
 
   const { data, error, isLoading } = useSWR(url, fetchJson, { keepPreviousData: true });
 
@@ -178,6 +188,25 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
             <option value="nobody">Nobody</option>
           </select>
         </div>
+        <div>
+          <label className="label" htmlFor="hold-filter">
+            Projects
+          </label>
+          <select
+            id="hold-filter"
+            className="input"
+            value={hold}
+            onChange={(e) => {
+              setHold(e.target.value);
+              setPage(1);
+            }}
+          >
+            <option value="">All</option>
+            <option value="active">Active</option>
+            <option value="on_hold">On hold</option>
+            <option value="cancelled">Cancelled</option>
+          </select>
+        </div>
         {canCreate ? (
           <Link
             href="/projects/new"
@@ -209,6 +238,7 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
             </p>
             <div className="flex items-center justify-between gap-2">
               <StageBadge stage={p.stage} />
+              {p.holdState ? <HoldMark state={p.holdState} /> : null}
               <span className="measure text-xs text-ink-faint">{p.daysInStage} d</span>
             </div>
             <p className="text-xs text-ink-soft">

@@ -12,7 +12,8 @@ import { listStageChanges } from "@/lib/server/data/projects";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { StageChangeForm } from "./_components/stage-change-form";
 import { StageTimeline } from "./_components/stage-timeline";
-import { changeStageAction } from "../actions";
+import { changeStageAction, setHoldAction } from "../actions";
+import { HoldForm } from "./_components/hold-form";
 
 export const metadata: Metadata = { title: "Project" };
 
@@ -84,6 +85,16 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         </div>
       </div>
 
+      {project.holdState ? (
+        <section
+          className="rounded border border-result-warn/40 bg-result-warn/10 px-3 py-2 text-sm"
+          aria-label="Set aside"
+          data-testid="project-hold"
+        >
+          <strong>{project.holdState === "on_hold" ? "On hold" : "Cancelled"}</strong>: {project.holdReason}. It waits on nobody and is left
+          out of the active projects.
+        </section>
+      ) : null}
       <section className="panel flex flex-wrap items-center gap-x-8 gap-y-2" aria-label="Current stage">
         <StageBadge stage={project.stage} />
         <span className="text-sm text-ink-soft">
@@ -196,7 +207,10 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         <section className="panel space-y-4" aria-labelledby="timeline-heading">
           <h2 id="timeline-heading">Stage timeline</h2>
           {can(viewer, "project:change-stage", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }) ? (
-            <StageChangeForm changeStage={changeStageAction} key={project.stage} projectId={project.id} current={project.stage} />
+            <>
+              <StageChangeForm changeStage={changeStageAction} key={project.stage} projectId={project.id} current={project.stage} />
+              <HoldForm projectId={project.id} holdState={project.holdState} setHold={setHoldAction} />
+            </>
           ) : null}
           <StageTimeline entries={timeline} />
         </section>

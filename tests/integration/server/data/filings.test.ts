@@ -16,7 +16,7 @@ import {
   scheduleInspection,
 } from "@/lib/server/data/filings";
 import { refreshProjectFacts } from "@/lib/server/data/project-facts";
-import { changeProjectStage, listProjects } from "@/lib/server/data/projects";
+import { changeProjectStage, listProjects, setProjectHold } from "@/lib/server/data/projects";
 import { ProjectListQuery } from "@/lib/schemas/project";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
@@ -436,5 +436,33 @@ describe("filings", () => {
     });
     await changeProjectStage({ viewer: v, projectId: project.id, toStage: "permit_filed", note: "Not installed after all" });
     expect((await stageOf(project.id)).stage).toBe("permit_filed");
+  });
+
+  it("sets a project aside with a reason: it waits on nobody and leaves the active list until taken up again", async () => {
+    const { project, packets, permit } = await filedProject();
+    const v = coordinator();
+    await changeFilingStatus({
+      viewer: v,
+      input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" },
+    });
+    expect(await failure(setProjectHold({ viewer: v, projectId: project.id, hold: "on_hold", reason: " " }))).toMatchObject({
+      fields: ["reason"],
+    });
+    await setProjectHold({ viewer: v, projectId: project.id, hold: "on_hold", reason: "Customer re-roofing first" });
+    let p = await stageOf(project.id);
+    expect([p.holdState, p.waitingOn, p.stage]).toEqual(["on_hold", null, "permit_filed"]);
+    const active = async () =>
+      (await listProjects({ viewer: v, query: ProjectListQuery.parse({ pageSize: "100", hold: "active" }) })).items.map((i) => i.id);
+    expect(await active()).not.toContain(project.id);
+    expect(
+      await failure(setProjectHold({ viewer: org.viewers.installer, projectId: project.id, hold: "active", reason: "" })),
+    ).toMatchObject({
+      code: expect.stringMatching(/FORBIDDEN|NOT_FOUND/),
+    });
+    await setProjectHold({ viewer: v, projectId: project.id, hold: "active", reason: "" });
+    p = await stageOf(project.id);
+    expect([p.holdState, p.waitingOn]).toEqual([null, "ahj"]);
+    expect(await active()).toContain(project.id);
+    expect(await AuditEvent.count({ where: { entityId: project.id, action: "project.hold-changed" } })).toBe(2);
   });
 });
