@@ -73,7 +73,7 @@ function HoldMark({ state }: { state: "on_hold" | "cancelled" }) {
 function WaitingOn({ project }: { project: ProjectDto }) {
   if (!project.waitingOn) return <span className="text-ink-faint">Nobody</span>;
   return (
-    <span data-testid="waiting-on-cell">
+    <span data-testid="waiting-on-cell" className="whitespace-nowrap">
       {WAITING_PARTY_LABELS[project.waitingOn]}
       {project.waitingDays !== null ? <span className="measure text-xs text-ink-faint"> · {project.waitingDays} d</span> : null}
     </span>
