@@ -87,8 +87,8 @@ export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
         hint: "Without an inspection, from the day it is issued",
         row: 3,
       },
-      { name: "requiredInspections", label: "Inspections it requires", input: "checks", options: inspectionOptions("permit"), row: 3 },
-      { name: "notes", label: "Notes", input: "note", row: 4 },
+      { name: "requiredInspections", label: "Inspections it requires", input: "checks", options: inspectionOptions("permit"), row: 4 },
+      { name: "notes", label: "Notes", input: "note", row: 5 },
     ],
     columns: [
       { label: "Authority", show: "text", key: "name" },
