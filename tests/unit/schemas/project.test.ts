@@ -65,6 +65,7 @@ describe("ProjectListQuery", () => {
       waitingOn: "",
       permitStatus: "",
       interconnectionStatus: "",
+      hold: "",
     });
   });
 
