@@ -69,6 +69,5 @@ export type FilingDto = {
 export type ProjectFilingsDto = {
   waitingOn: WaitingParty | null;
   waitingSince: string | null;
-  waitingWhy: string | null;
   filings: FilingDto[];
 };

@@ -140,7 +140,6 @@ export async function listProjectFilings({ viewer, projectId }: { viewer: Viewer
   return {
     waitingOn: project.waitingOn,
     waitingSince: project.waitingSince?.toISOString() ?? null,
-    waitingWhy: null,
     filings: filings
       .sort((a, b) => KIND_ORDER[a.kind] - KIND_ORDER[b.kind] || a.createdAt.getTime() - b.createdAt.getTime())
       .map((f) => toFilingDto(f, revisionOf)),

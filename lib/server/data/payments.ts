@@ -165,3 +165,15 @@ export async function getReceiptLocation({ viewer, paymentId }: { viewer: Viewer
   if (!payment.receiptKey) throw new AppError("NOT_FOUND", "The receipt is not issued yet.");
   return { key: payment.receiptKey, fileName: `${payment.receiptNumber}.pdf` };
 }
+
+/** A project's settled payments, newest first, as a filing names the fee that went with it. */
+export async function listSettledPayments({ viewer, projectId }: { viewer: Viewer; projectId: string }) {
+  db();
+  await getProjectById({ viewer, projectId });
+  const rows = await Payment.findAll({
+    where: { projectId, organizationId: viewer.organizationId, status: { [Op.in]: ["paid", "partially_refunded", "refunded"] } },
+    attributes: ["id", "amountCents", "paidAt", "createdAt"],
+    order: [["createdAt", "DESC"]],
+  });
+  return rows.map((p) => ({ id: p.id, amountCents: p.amountCents, paidAt: (p.paidAt ?? p.createdAt).toISOString() }));
+}

@@ -19,7 +19,7 @@ import { getDesignStatus } from "@/lib/server/data/designs";
 import { listProjectFilings } from "@/lib/server/data/filings";
 import { getOrganization } from "@/lib/server/data/organizations";
 import { listPackets } from "@/lib/server/data/packets";
-import { getProjectFees } from "@/lib/server/data/project-fees";
+import { listSettledPayments } from "@/lib/server/data/payments";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { FilingCard, type FilingActions } from "./_components/filing-card";
 import {
@@ -48,20 +48,19 @@ export default async function FilingsPage({ params }: { params: Promise<{ projec
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
   const canEdit = can(viewer, "filings:edit", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null });
-  const [filings, organization, packets, design, fees] = await Promise.all([
+  const [filings, organization, packets, design, settled] = await Promise.all([
     listProjectFilings({ viewer, projectId: project.id }),
     getOrganization({ viewer }),
     listPackets({ viewer, projectId: project.id }),
     getDesignStatus({ viewer, projectId: project.id }),
-    canEdit ? getProjectFees({ viewer, projectId: project.id }) : null,
+    canEdit ? listSettledPayments({ viewer, projectId: project.id }) : [],
   ]);
   const today = localIsoDate(new Date().toISOString(), organization.timeZone);
-  const payments = (fees?.payments ?? [])
-    .filter((p) => p.status !== "pending" && p.status !== "expired")
-    .map((p) => ({
-      id: p.id,
-      label: `${centsToDollarsText(p.amountCents)} paid ${calendarDayText(localIsoDate(p.paidAt ?? p.createdAt, organization.timeZone))}`,
-    }));
+  // The fee that went with a filing is chosen among the project's settled payments.
+  const payments = settled.map((p) => ({
+    id: p.id,
+    label: `${centsToDollarsText(p.amountCents)} paid ${calendarDayText(localIsoDate(p.paidAt, organization.timeZone))}`,
+  }));
   return (
     <div className="space-y-5">
       <ProjectSubpageHeader project={project} title="Filings">
