@@ -17,6 +17,8 @@ export class Packet extends Model<InferAttributes<Packet>, InferCreationAttribut
   declare projectId: string;
   declare kind: PacketKind;
   declare revision: number;
+  declare designRevision: CreationOptional<number | null>;
+  declare sentTo: CreationOptional<string[]>;
   declare status: CreationOptional<PacketStatus>;
   declare progress: CreationOptional<number>;
   declare step: CreationOptional<string>;
@@ -45,6 +47,8 @@ export class Packet extends Model<InferAttributes<Packet>, InferCreationAttribut
         projectId: { type: DataTypes.UUID, allowNull: false },
         kind: { type: DataTypes.STRING(20), allowNull: false },
         revision: { type: DataTypes.INTEGER, allowNull: false },
+        designRevision: { type: DataTypes.INTEGER, allowNull: true },
+        sentTo: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         status: { type: DataTypes.STRING(10), allowNull: false, defaultValue: "queued" },
         progress: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         step: { type: DataTypes.STRING(80), allowNull: false, defaultValue: "" },

@@ -51,7 +51,10 @@ export type DesignReviewState = "incomplete" | "pass" | "warn" | "fail" | null;
  * What the office does next: the stage's usual step, unless the design says otherwise. A draft whose
  * review passes is ready to be marked checked; a checked design that no longer passes needs fixing first.
  */
-export function nextActionFor(stage: Stage, review: DesignReviewState): string {
+export function nextActionFor(stage: Stage, review: DesignReviewState, hold: "on_hold" | "cancelled" | null = null): string {
+  // A project set aside waits for the office's decision, whatever its stage would ask next.
+  if (hold === "on_hold") return "On hold: take it up again once the reason is resolved";
+  if (hold === "cancelled") return "Cancelled: nothing to do unless it is reopened";
   const passes = review === "pass" || review === "warn";
   if (stage === "draft") {
     if (passes)

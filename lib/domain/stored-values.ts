@@ -23,7 +23,7 @@ export type ReviewStatus = "incomplete" | "pass" | "warn" | "fail";
 
 export type CommissioningStatus = "open" | "complete";
 
-export const PROJECT_FILE_KINDS = ["signed-completion", "site-photo"] as const;
+export const PROJECT_FILE_KINDS = ["signed-completion", "site-photo", "comment-letter"] as const;
 export type ProjectFileKind = (typeof PROJECT_FILE_KINDS)[number];
 
 export const PAYMENT_STATUSES = ["pending", "paid", "expired", "partially_refunded", "refunded"] as const;

@@ -23,6 +23,7 @@ export type CorrectionRoundDto = {
   receivedAt: string;
   answeredAt: string | null;
   letterFileId: string | null;
+  letterFileName: string | null;
   revisionAtReceipt: number | null;
   resubmittedRevision: number | null;
   items: FilingItemDto[];

@@ -4,6 +4,10 @@ export type PacketDto = {
   id: string;
   kind: PacketKind;
   revision: number;
+  /** The design revision it was drawn from; null for packets made before this was recorded. */
+  designRevision: number | null;
+  /** The authorities it was submitted to; a sent revision is never regenerated or replaced. */
+  sentTo: string[];
   status: PacketStatus;
   progress: number;
   step: string;

@@ -14,6 +14,8 @@ export type ReviewedDesign = {
   project: ProjectDto;
   jurisdiction: { id: string; name: string; state: string; necEdition: NecEdition; recordLowTempC: number; highDesignTempC: number };
   utility: { id: string; name: string; acceptedGridProfiles: string[] } | null;
+  /** The saved design's revision (0 before the first save): a packet records which one it was drawn from. */
+  designRevision: number;
   /** The saved draft, parsed: what the editor holds. */
   designInput: DesignInput;
   /** The same design as the review engine read it. */

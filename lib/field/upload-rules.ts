@@ -9,11 +9,16 @@ export const MAX_UPLOAD_LABEL = "20 MB";
 export const ALLOWED_TYPES: Record<ProjectFileKind, Record<string, string[]>> = {
   "signed-completion": { "application/pdf": [".pdf"], "image/jpeg": [".jpg", ".jpeg"], "image/png": [".png"] },
   "site-photo": { "image/jpeg": [".jpg", ".jpeg"], "image/png": [".png"] },
+  "comment-letter": { "application/pdf": [".pdf"], "image/jpeg": [".jpg", ".jpeg"], "image/png": [".png"] },
 };
+
+/** The uploads of the field record; an authority's comment letter belongs to the office's filing. */
+export const FIELD_FILE_KINDS: readonly ProjectFileKind[] = ["signed-completion", "site-photo"];
 
 export const KIND_LABELS: Record<ProjectFileKind, string> = {
   "signed-completion": "Signed completion form",
   "site-photo": "Site photo",
+  "comment-letter": "Comment letter",
 };
 
 export function allowedTypesText(kind: ProjectFileKind): string {

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { FILING_STATUSES, INSPECTION_KINDS, INSPECTION_RESULTS, SUBMISSION_CHANNELS } from "@/lib/domain/filings";
-import { blankToUndefined, optionalText, requiredText, safeString } from "./fields";
+import { blankToUndefined, optionalText, requiredText, safeString, whenValid } from "./fields";
 
 const uuid = (what: string) => safeString().uuid(`Choose ${what}`);
 /** A calendar day as the form's date input gives it. */
@@ -44,6 +44,9 @@ export const RecordRoundInput = z.object({
 });
 export type RecordRoundInput = z.infer<typeof RecordRoundInput>;
 
+export const AttachLetterInput = z.object({ roundId: uuid("a correction round"), letterFileId: uuid("the comment letter") });
+export type AttachLetterInput = z.infer<typeof AttachLetterInput>;
+
 export const AnswerItemInput = z.object({
   itemId: uuid("a comment"),
   response: requiredText("response", 2000),
@@ -76,3 +79,20 @@ export type InspectionResultInput = z.infer<typeof InspectionResultInput>;
 
 export const RecordPtoInput = z.object({ filingId: uuid("a filing"), ptoOn: day("PTO date") });
 export type RecordPtoInput = z.infer<typeof RecordPtoInput>;
+
+/** Who approves an added filing: one of the organization's AHJ or utility profiles, or another body named here. */
+export const ADDED_FILING_AUTHORITY = /^(other|jurisdiction:[0-9a-f-]{36}|utility:[0-9a-f-]{36})$/;
+
+export const AddFilingInput = z
+  .object({
+    projectId: uuid("a project"),
+    title: requiredText("approval", 160),
+    authority: safeString().regex(ADDED_FILING_AUTHORITY, "Choose who approves it"),
+    authorityName: optionalText(160),
+  })
+  .refine((v) => v.authority !== "other" || v.authorityName.length > 0, {
+    path: ["authorityName"],
+    message: "Name the body that approves it",
+    when: whenValid("authority", "authorityName"),
+  });
+export type AddFilingInput = z.infer<typeof AddFilingInput>;

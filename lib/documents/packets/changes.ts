@@ -75,3 +75,21 @@ export function describeChanges(previous: Snapshot | null, next: Snapshot): stri
   for (const old of previous.review.checks) if (!newIds.has(old.id)) lines.push(`Check “${old.title}”: no longer applies`);
   return lines;
 }
+
+/** An authority's comment the office has answered, as the change list names it. */
+export type AnsweredComment = { round: number; position: number; text: string; reference: string; response: string };
+
+const clip = (text: string, max: number) => (text.length > max ? `${text.slice(0, max - 1).trimEnd()}…` : text);
+
+/**
+ * The comments a new revision answers, one line each, round and comment number first so the plan
+ * reviewer can tick them off against their letter; the design changes follow them.
+ */
+export function describeAnswers(answered: AnsweredComment[]): string[] {
+  return [...answered]
+    .sort((a, b) => a.round - b.round || a.position - b.position)
+    .map(
+      (c) =>
+        `Answers round ${c.round}, comment ${c.position + 1}${c.reference ? ` (${c.reference})` : ""}: ${clip(c.text, 120)} — ${clip(c.response, 160)}`,
+    );
+}

@@ -35,3 +35,25 @@ export function needsReinspection(result: InspectionResult | null): boolean {
 export function isInspectionKind(value: unknown): value is InspectionKind {
   return (INSPECTION_KINDS as readonly unknown[]).includes(value);
 }
+
+/** One kind of visit a filing can have, as the booking form and the card show it. */
+export type InspectionPlanRow = { kind: InspectionKind; required: boolean; passed: boolean };
+
+/**
+ * The visits a filing can book, the authority's required ones first (in the order the work reaches them)
+ * with whether each has passed; the first required one not passed is what to book next.
+ */
+export function inspectionPlan(
+  kinds: readonly InspectionKind[],
+  required: readonly string[],
+  inspections: readonly { kind: InspectionKind; result: InspectionResult | null }[],
+): { rows: InspectionPlanRow[]; next: InspectionKind | null } {
+  const rows = kinds.map((kind) => ({
+    kind,
+    required: required.includes(kind),
+    passed: inspections.some((i) => i.kind === kind && i.result === "passed"),
+  }));
+  rows.sort((a, b) => Number(b.required) - Number(a.required));
+  const next = rows.find((r) => r.required && !r.passed)?.kind ?? rows.find((r) => !r.passed)?.kind ?? null;
+  return { rows, next };
+}

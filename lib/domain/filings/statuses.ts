@@ -57,8 +57,9 @@ export function isFiled(status: FilingStatus): boolean {
  */
 export const NEXT_STATUSES: Record<FilingStatus, readonly FilingStatus[]> = {
   preparing: ["submitted", "withdrawn"],
-  submitted: ["in_review", "corrections_requested", "approved", "rejected", "withdrawn"],
-  in_review: ["corrections_requested", "approved", "rejected", "withdrawn"],
+  // A revision can go in unasked while the authority has the filing (the design changed after submission).
+  submitted: ["in_review", "corrections_requested", "resubmitted", "approved", "rejected", "withdrawn"],
+  in_review: ["corrections_requested", "resubmitted", "approved", "rejected", "withdrawn"],
   corrections_requested: ["resubmitted", "rejected", "withdrawn"],
   resubmitted: ["in_review", "corrections_requested", "approved", "rejected", "withdrawn"],
   approved: ["withdrawn"],

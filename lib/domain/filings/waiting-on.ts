@@ -48,7 +48,10 @@ type Claim = { party: WaitingParty; since: string; why: string };
 
 /** Who must act on one filing, if anyone. */
 function claimOf(filing: WaitingFiling, facts: WaitingFacts): Claim | null {
-  const authority: WaitingParty = filing.authority === "utility" ? "utility" : filing.authority === "ahj" ? "ahj" : "office";
+  // Another approving body (an HOA, a fire district) stands with the AHJ: the NEC's Article 100 calls any body
+  // that approves an installation an authority having jurisdiction (from memory: NFPA 70, Art. 100, "Authority
+  // Having Jurisdiction (AHJ)"); the office only follows it up.
+  const authority: WaitingParty = filing.authority === "utility" ? "utility" : "ahj";
   if (filing.status === "withdrawn") return null;
   if (filing.customerSince) return { party: "customer", since: filing.customerSince, why: "Waiting for the customer" };
   if (filing.revisionNeeded)

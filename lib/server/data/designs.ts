@@ -111,7 +111,13 @@ export async function saveDesignDraft({ viewer, projectId, draft: raw }: { viewe
     const changed = !existing || JSON.stringify(existing.draft) !== JSON.stringify(draft);
     const row = existing
       ? await existing.update(
-          { draft: draft as Record<string, unknown>, reviewStatus, reviewSummary, revision: existing.revision + 1, updatedById: viewer.id },
+          {
+            draft: draft as Record<string, unknown>,
+            reviewStatus,
+            reviewSummary,
+            revision: changed ? existing.revision + 1 : existing.revision,
+            updatedById: viewer.id,
+          },
           { transaction },
         )
       : await Design.create(

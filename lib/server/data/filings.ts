@@ -34,14 +34,38 @@ import type {
   RecordPtoInput,
   RecordRoundInput,
   ScheduleInspectionInput,
+  AddFilingInput,
   AnswerItemInput,
+  AttachLetterInput,
 } from "@/lib/schemas/filings";
+import type { AnsweredComment } from "@/lib/documents/packets/changes";
 import type { CorrectionRoundDto, FilingDto, FilingItemDto, InspectionDto, ProjectFilingsDto } from "@/lib/dto/filings";
 import { db } from "../db";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
 import { getOrganization } from "./organizations";
 import { refreshProjectFacts } from "./project-facts";
+
+/**
+ * The comments of the filing of this packet's kind that are answered but not yet sent back: a new
+ * revision answers them, and its change list names them.
+ */
+export async function answeredSinceLastSending(
+  projectId: string,
+  kind: "permit" | "interconnection",
+  transaction?: Transaction,
+): Promise<AnsweredComment[]> {
+  const filings = await Filing.findAll({ where: { projectId, kind }, attributes: ["id"], transaction });
+  if (filings.length === 0) return [];
+  const rounds = await CorrectionRound.findAll({
+    where: { filingId: filings.map((f) => f.id), resubmittedPacketId: null },
+    include: [{ model: FilingItem, as: "items", where: { resolved: true } }],
+    transaction,
+  });
+  return rounds.flatMap((r) =>
+    (r.items ?? []).map((i) => ({ round: r.number, position: i.position, text: i.text, reference: i.reference, response: i.response })),
+  );
+}
 
 const NOT_FOUND = () => new AppError("NOT_FOUND", "No such filing.");
 
@@ -56,7 +80,7 @@ function itemDto(i: FilingItem): FilingItemDto {
 
 const byPosition = (a: FilingItem, b: FilingItem) => a.position - b.position;
 
-function toFilingDto(f: Filing, revisionOf: Map<string, number>): FilingDto {
+function toFilingDto(f: Filing, revisionOf: Map<string, number>, letterName: Map<string, string>): FilingDto {
   const rounds: CorrectionRoundDto[] = [...(f.rounds ?? [])]
     .sort((a, b) => a.number - b.number)
     .map((r) => ({
@@ -65,6 +89,7 @@ function toFilingDto(f: Filing, revisionOf: Map<string, number>): FilingDto {
       receivedAt: r.receivedOn,
       answeredAt: r.answeredAt?.toISOString() ?? null,
       letterFileId: r.letterFileId,
+      letterFileName: r.letterFileId ? (letterName.get(r.letterFileId) ?? null) : null,
       revisionAtReceipt: r.revisionAtReceipt,
       resubmittedRevision: r.resubmittedPacketId ? (revisionOf.get(r.resubmittedPacketId) ?? null) : null,
       items: [...(r.items ?? [])].sort(byPosition).map(itemDto),
@@ -137,26 +162,43 @@ export async function listProjectFilings({ viewer, projectId }: { viewer: Viewer
     .filter((id): id is string => Boolean(id));
   const packets = packetIds.length ? await Packet.findAll({ where: { id: packetIds }, attributes: ["id", "revision"] }) : [];
   const revisionOf = new Map(packets.map((p) => [p.id, p.revision]));
+  const letterIds = filings.flatMap((f) => (f.rounds ?? []).map((r) => r.letterFileId)).filter((id): id is string => Boolean(id));
+  const letters = letterIds.length ? await ProjectFile.findAll({ where: { id: letterIds }, attributes: ["id", "fileName"] }) : [];
+  const letterName = new Map(letters.map((l) => [l.id, l.fileName]));
   return {
     waitingOn: project.waitingOn,
     waitingSince: project.waitingSince?.toISOString() ?? null,
     filings: filings
       .sort((a, b) => KIND_ORDER[a.kind] - KIND_ORDER[b.kind] || a.createdAt.getTime() - b.createdAt.getTime())
-      .map((f) => toFilingDto(f, revisionOf)),
+      .map((f) => toFilingDto(f, revisionOf, letterName)),
   };
 }
 
 /**
  * The permit and the interconnection filings every project has, for the AHJ and the utility it names.
- * Called where a project is created or its authorities change; an existing filing keeps its history.
+ * Called where a project is created or its authorities change.
  */
 export async function ensureDefaultFilings(
   project: Project,
   { transaction, actorId }: { transaction: Transaction; actorId: string | null },
 ) {
   const existing = await Filing.findAll({ where: { projectId: project.id, kind: ["permit", "interconnection"] }, transaction });
-  const has = (kind: FilingKind) => existing.some((f) => f.kind === kind);
   const now = new Date();
+  // A filing nobody sent yet follows the project to its new AHJ or utility; one that went in keeps its history.
+  const retarget = async (
+    kind: FilingKind,
+    authorityId: string | null,
+    find: (id: string) => Promise<{ id: string; name: string } | null>,
+  ) => {
+    const filing = existing.find((f) => f.kind === kind);
+    if (!filing || !authorityId || filing.authorityId === authorityId || filing.status !== "preparing" || filing.submittedOn) return;
+    const authority = await find(authorityId);
+    if (authority) await filing.update({ authorityId: authority.id, authorityName: authority.name }, { transaction });
+  };
+  const where = (id: string) => ({ where: { id, organizationId: project.organizationId }, attributes: ["id", "name"], transaction });
+  await retarget("permit", project.jurisdictionId, (id) => Jurisdiction.findOne(where(id)));
+  await retarget("interconnection", project.utilityId, (id) => Utility.findOne(where(id)));
+  const has = (kind: FilingKind) => existing.some((f) => f.kind === kind);
   if (project.jurisdictionId && !has("permit")) {
     const ahj = await Jurisdiction.findOne({ where: { id: project.jurisdictionId, organizationId: project.organizationId }, transaction });
     if (ahj)
@@ -191,6 +233,56 @@ export async function ensureDefaultFilings(
         { transaction },
       );
   }
+}
+
+/**
+ * Another approval the project needs beside the permit and the interconnection (an HOA, a separate electrical
+ * permit, a utility pre-approval): from one of the organization's authority profiles, or a body named here.
+ */
+export async function addFiling({ viewer, input, now = new Date() }: { viewer: Viewer; input: AddFilingInput; now?: Date }) {
+  const sequelize = db();
+  return sequelize.transaction(async (transaction) => {
+    const project = await visibleProject(viewer, input.projectId, transaction);
+    if (!can(viewer, "filings:edit", project)) throw new AppError("FORBIDDEN", "You cannot change this project's filings.");
+    const [kind, id] = input.authority.split(":") as ["jurisdiction" | "utility" | "other", string | undefined];
+    const where = { id, organizationId: viewer.organizationId };
+    const profile =
+      kind === "jurisdiction"
+        ? await Jurisdiction.findOne({ where, attributes: ["id", "name"], transaction })
+        : kind === "utility"
+          ? await Utility.findOne({ where, attributes: ["id", "name"], transaction })
+          : null;
+    if (kind !== "other" && !profile)
+      throw new AppError("INVALID_INPUT", "Choose one of your organization's AHJs or utilities.", {
+        authority: ["Choose one of your organization's AHJs or utilities"],
+      });
+    const filing = await Filing.create(
+      {
+        organizationId: viewer.organizationId,
+        projectId: project.id,
+        kind: "other",
+        title: input.title,
+        authorityKind: kind,
+        authorityId: profile?.id ?? null,
+        authorityName: profile?.name ?? input.authorityName,
+        statusSince: now,
+        createdById: viewer.id,
+      },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        viewer,
+        action: "filing.added",
+        entityType: "filing",
+        entityId: filing.id,
+        changes: { filing: { before: null, after: `${input.title} · ${filing.authorityName}` } },
+      },
+      { transaction },
+    );
+    await refreshProjectFacts(project.id, { transaction, actorId: viewer.id, now });
+    return { filingId: filing.id };
+  });
 }
 
 /** One filing the viewer may change, locked for the change, with its project. */
@@ -304,7 +396,8 @@ export async function changeFilingStatus({
       });
       if (to === "submitted")
         Object.assign(changes, { submittedOn: on, channel: input.channel ?? filing.channel, sentTo: input.sentTo || filing.sentTo });
-      if (to === "resubmitted" && round)
+      // Only the open round is answered by this sending; an earlier round keeps the revision that answered it.
+      if (to === "resubmitted" && round && !round.resubmittedPacketId)
         await round.update({ resubmittedPacketId: packet?.id ?? filing.packetId, answeredAt: round.answeredAt ?? now }, { transaction });
     }
     if (to === "approved")
@@ -318,6 +411,8 @@ export async function changeFilingStatus({
     if (to === "preparing") Object.assign(changes, { decidedOn: null, expiresOn: null });
     if (input.note) changes.notes = [filing.notes, `${on}: ${input.note}`].filter(Boolean).join("\n");
     await filing.update(changes, { transaction });
+    if (sending && packet && !packet.sentTo.includes(filing.authorityName))
+      await packet.update({ sentTo: [...packet.sentTo, filing.authorityName] }, { transaction });
     await recordAudit(
       {
         viewer,
@@ -420,6 +515,43 @@ async function createItems(
   );
 }
 
+/** A comment letter uploaded to the filing's project. */
+async function letterOf(filing: Filing, fileId: string, transaction: Transaction) {
+  const file = await ProjectFile.findOne({
+    where: { id: fileId, projectId: filing.projectId, organizationId: filing.organizationId, kind: "comment-letter" },
+    transaction,
+  });
+  if (!file)
+    throw new AppError("INVALID_INPUT", "Choose a comment letter uploaded to this project.", {
+      letterFileId: ["Choose a comment letter uploaded to this project"],
+    });
+  return file;
+}
+
+/** The authority's letter for a round recorded before the letter was at hand (or a clearer copy of it). */
+export async function attachRoundLetter({ viewer, input }: { viewer: Viewer; input: AttachLetterInput }): Promise<void> {
+  const sequelize = db();
+  await sequelize.transaction(async (transaction) => {
+    if (!isUuid(input.roundId)) throw new AppError("NOT_FOUND", "No such correction round.");
+    const round = await CorrectionRound.findOne({ where: { id: input.roundId, organizationId: viewer.organizationId }, transaction });
+    if (!round) throw new AppError("NOT_FOUND", "No such correction round.");
+    const { filing } = await editableFiling(viewer, round.filingId, transaction);
+    const file = await letterOf(filing, input.letterFileId, transaction);
+    const before = round.letterFileId;
+    await round.update({ letterFileId: file.id }, { transaction });
+    await recordAudit(
+      {
+        viewer,
+        action: "filing.letter-attached",
+        entityType: "filing",
+        entityId: filing.id,
+        changes: { [`round ${round.number} letter`]: { before, after: file.fileName } },
+      },
+      { transaction },
+    );
+  });
+}
+
 /** Round N of the authority's comments: the filing now waits on the office to answer them. */
 export async function recordCorrectionRound({
   viewer,
@@ -439,17 +571,7 @@ export async function recordCorrectionRound({
         `Corrections come back on a filing the authority has; this one is ${FILING_STATUS_LABELS[filing.status as FilingStatus].toLowerCase()}.`,
       );
     }
-    if (
-      input.letterFileId &&
-      !(await ProjectFile.findOne({
-        where: { id: input.letterFileId, projectId: filing.projectId, organizationId: viewer.organizationId },
-        transaction,
-      }))
-    ) {
-      throw new AppError("INVALID_INPUT", "Choose a file uploaded to this project.", {
-        letterFileId: ["Choose a file uploaded to this project"],
-      });
-    }
+    if (input.letterFileId) await letterOf(filing, input.letterFileId, transaction);
     const number =
       ((await CorrectionRound.max<number, CorrectionRound>("number", { where: { filingId: filing.id }, transaction })) ?? 0) + 1;
     const packet = filing.packetId ? await Packet.findByPk(filing.packetId, { attributes: ["revision"], transaction }) : null;

@@ -3,12 +3,13 @@ import { Op } from "sequelize";
 import { Packet, Project, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
-import { describeChanges } from "@/lib/documents/packets/changes";
+import { describeAnswers, describeChanges } from "@/lib/documents/packets/changes";
 import type { PacketKind } from "@/lib/domain/stored-values";
 import type { PacketInput } from "@/lib/documents/packets/input";
 import { db } from "../db";
 import { enqueuePacketJob } from "../services/jobs";
 import { recordAudit } from "./audit";
+import { answeredSinceLastSending } from "./filings";
 import { isUuid } from "./ids";
 import { buildPacketInput, reviewedOrConflict } from "./packet-input";
 import { getReviewedDesign } from "./reviewed-design";
@@ -32,6 +33,8 @@ function toPacketDto(p: Packet): PacketDto {
     id: p.id,
     kind: p.kind,
     revision: p.revision,
+    designRevision: p.designRevision,
+    sentTo: p.sentTo,
     status,
     progress,
     step,
@@ -119,7 +122,8 @@ export async function requestPacket({
     const previous = await Packet.findOne({ where: { projectId, kind, status: "ready" }, order: [["revision", "DESC"]], transaction });
     const revision = (previous?.revision ?? 0) + 1;
     const override = failing ? { reason: reason!, byName: viewer.name } : null;
-    const changes = describeChanges(previous ? (previous.input as unknown as PacketInput) : null, base as PacketInput);
+    const answered = describeAnswers(await answeredSinceLastSending(projectId, kind, transaction));
+    const changes = [...answered, ...describeChanges(previous ? (previous.input as unknown as PacketInput) : null, base as PacketInput)];
     const input: PacketInput = { ...base, revision, changes, override };
     const row = await Packet.create(
       {
@@ -127,6 +131,7 @@ export async function requestPacket({
         projectId,
         kind,
         revision,
+        designRevision: reviewed.designRevision,
         input: input as unknown as Record<string, unknown>,
         changes,
         overrideReason: override?.reason ?? null,

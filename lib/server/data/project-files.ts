@@ -84,11 +84,14 @@ export async function uploadProjectFile({
 }): Promise<ProjectFileDto> {
   const sequelize = db();
   const project = await getProjectById({ viewer, projectId });
-  if (!can(viewer, "field:record", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }))
-    throw new AppError("NOT_FOUND", "No such project.");
+  const scope = { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null };
+  // A comment letter is office work on a filing; everything else is the field record.
+  const letter = kind === "comment-letter";
+  if (!can(viewer, letter ? "filings:edit" : "field:record", scope))
+    throw letter ? new AppError("FORBIDDEN", "You cannot change this project's filings.") : new AppError("NOT_FOUND", "No such project.");
   const contentType = await judgeFile(kind, bytes);
   const name = displayFileName(fileName, contentType);
-  const objectKey = `projects/${projectId}/field/${randomUUID()}.${name.split(".").pop()}`;
+  const objectKey = `projects/${projectId}/${letter ? "letters" : "field"}/${randomUUID()}.${name.split(".").pop()}`;
   await putObject({ key: objectKey, body: bytes, contentType });
   try {
     const id = await sequelize.transaction(async (transaction) => {

@@ -50,7 +50,7 @@ function toProjectDto(p: Project, now = Date.now()): ProjectDto {
     servicePhases: p.servicePhases,
     stage: p.stage as Stage,
     stageLabel: STAGE_LABELS[p.stage as Stage],
-    nextAction: nextActionFor(p.stage as Stage, p.design?.reviewStatus ?? null),
+    nextAction: nextActionFor(p.stage as Stage, p.design?.reviewStatus ?? null, p.holdState ?? null),
     stageChangedAt: p.stageChangedAt.toISOString(),
     daysInStage: Math.max(0, Math.floor((now - p.stageChangedAt.getTime()) / DAY_MS)),
     coordinator: p.coordinator ? { id: p.coordinator.id, name: p.coordinator.name } : null,

@@ -53,6 +53,7 @@ export async function getReviewedDesign({
     project,
     jurisdiction: { id: jurisdiction.id, name: jurisdiction.name, state: jurisdiction.state, ...conditions! },
     utility: utility ? { id: utility.id, name: utility.name, acceptedGridProfiles: utility.acceptedGridProfiles } : null,
+    designRevision: design.revision,
     designInput,
     design: outcome.design,
     site: outcome.site,

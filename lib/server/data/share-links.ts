@@ -211,6 +211,8 @@ export type SharedView = {
     pageCount: number | null;
     sizeBytes: number | null;
     readyAt: string | null;
+    /** The newest revision of the same packet that this link also covers; never one it does not. */
+    supersededBy: string | null;
   }[];
 };
 
@@ -291,8 +293,15 @@ export async function openShareLink(token: string, client: ClientInfo): Promise<
       pageCount: p.pageCount,
       sizeBytes: p.sizeBytes,
       readyAt: p.readyAt?.toISOString() ?? null,
+      supersededBy: supersededBy(p, packets),
     })),
   };
+}
+
+// Only among the link's own revisions: an unshared newer revision stays unknown to the recipient.
+function supersededBy(packet: Packet, shared: Packet[]): string | null {
+  const newer = shared.filter((p) => p.kind === packet.kind && p.revision > packet.revision).sort((a, b) => b.revision - a.revision)[0];
+  return newer ? revisionLabel(newer) : null;
 }
 
 /** The stored PDF of one revision the link covers; logs the download. Same errors as openShareLink. */

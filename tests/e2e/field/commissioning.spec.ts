@@ -1,18 +1,11 @@
-import { expect, test, type Locator, type Page } from "@playwright/test";
+import { expect, test, type Page } from "@playwright/test";
 import { BarcodeFormat, QRCodeWriter } from "@zxing/library";
 import { PDFDocument } from "pdf-lib";
+import { acSideAndRapidShutdown, enter, shutDownStrings, testStringsBeforeEnergizing } from "../support/field-record";
 import { DEMO, listProjectsAs, mailboxFor, pageFor } from "../support/session";
 
 // A phone held upright: the field record is laid out for this first.
 test.use({ viewport: { width: 390, height: 844 }, hasTouch: true });
-
-/** Types a reading and leaves the field, as a thumb on a phone does. */
-async function enter(input: Locator, value: string) {
-  await input.fill(value);
-  await input.blur();
-}
-
-const byId = (page: Page, id: string) => page.locator(`[id="${id}"]`);
 
 // Stages where the crew is on site and the demo record is not yet complete.
 const ON_SITE = ["permit_issued", "installed", "inspection_passed", "utility_filed", "utility_approved"];
@@ -42,42 +35,6 @@ function qrSvg(text: string): Buffer {
   return Buffer.from(
     `<svg xmlns="http://www.w3.org/2000/svg" width="${size}" height="${size}" viewBox="0 0 ${size} ${size}"><rect width="100%" height="100%" fill="#fff"/><g fill="#000">${squares.join("")}</g></svg>`,
   );
-}
-
-/** Polarity, Voc at the temperature typed, and insulation for every string, from what the page expects. */
-async function testStringsBeforeEnergizing(phone: Page) {
-  const step = phone.getByTestId("step-before-energizing");
-  if ((await step.getByLabel("Temperature during the Voc tests (°C)").count()) > 0)
-    await enter(step.getByLabel("Temperature during the Voc tests (°C)"), "41");
-  for (const group of await step.locator("fieldset[data-testid^=string-tests-]").all()) {
-    await group.getByLabel("Correct (+ to +)").check();
-    const voc = group.locator("input[id$='.vocV']");
-    if ((await voc.count()) > 0) {
-      await expect(voc).toHaveAttribute("data-expected-v", /\d/);
-      await enter(voc, (Math.round(Number(await voc.getAttribute("data-expected-v")) * 10) / 10 - 1.5).toFixed(1));
-    }
-    await enter(group.locator("input[id$='.insulationMohm']"), "240");
-  }
-  await expect(step.locator("[data-testid^=result-string-][data-status=pass]")).toHaveCount(
-    await step.locator("[data-testid^=result-string-]").count(),
-  );
-}
-
-async function shutDownStrings(phone: Page, belowExpectedV: number) {
-  const strings = phone.getByTestId("step-shutdown").locator("input[data-expected-v]");
-  for (let i = 0; i < (await strings.count()); i++) {
-    const expectedV = Number(await strings.nth(i).getAttribute("data-expected-v"));
-    await enter(strings.nth(i), (expectedV - belowExpectedV).toFixed(1));
-  }
-}
-
-async function acSideAndRapidShutdown(phone: Page) {
-  await enter(phone.getByLabel("AC voltage (V)"), "241");
-  const power = phone.locator("#firstPowerW");
-  await enter(power, String(Math.round(Number(await power.getAttribute("data-rating-w")) * 0.62)));
-  await phone.locator("#firstPowerTime").fill("12:40");
-  await enter(byId(phone, "rapidShutdown.measuredV"), "11");
-  await enter(byId(phone, "rapidShutdown.seconds"), "8");
 }
 
 test("installer on a phone records commissioning in the order of the work: strings tested, the serial read from its barcode and checked against the card, the grid profile chosen from the utility's list, completed without module-level monitoring; then uploads the signed form and the coordinator is notified", async ({

@@ -1,15 +1,26 @@
 import { expect, test, type Locator, type Page } from "@playwright/test";
 import { clientFor } from "../support/api";
-import { DEMO, signIn } from "../support/session";
+import { completeFieldRecord } from "../support/field-record";
+import { DEMO, listProjectsAs, signIn } from "../support/session";
 
 // A coordinator files the permit and the interconnection application the same day, answers a round of
-// corrections with a new revision, and the stage follows the facts: issued with its number, a failed final
-// inspection re-inspected, the utility's approval, PTO.
+// corrections with a design change and a new revision, and the stage follows the facts: issued with its number,
+// a failed final inspection re-inspected, the utility's approval, the field record completed, PTO.
 
-async function newProjectWithDesign(stamp: string): Promise<string> {
+/** A demo project whose field record has string tests and no module-level devices to find: its design is copied. */
+async function sourceProject(page: Page) {
+  for (const project of (await listProjectsAs(page)).filter((p) => p.stage === "permit_filed" || p.stage === "permit_issued")) {
+    await page.goto(`/projects/${project.id}/field`);
+    await expect(page.getByTestId("commissioning-status")).toBeVisible();
+    if ((await page.getByTestId("step-pairing").count()) === 0 && (await page.getByTestId("step-before-energizing").count()) > 0)
+      return project.id;
+  }
+  throw new Error("No demo project with string tests and no module-level devices that report");
+}
+
+async function newProjectWithDesign(sourceId: string, stamp: string) {
   const api = await clientFor(DEMO.coordinator);
-  const listed = await (await api.get("/api/v1/projects?stage=permit_filed&pageSize=1")).json();
-  const source = await (await api.get(`/api/v1/projects/${listed.items[0].id}`)).json();
+  const source = await (await api.get(`/api/v1/projects/${sourceId}`)).json();
   const { draft } = await (await api.get(`/api/v1/projects/${source.id}/design`)).json();
   const created = await api.post("/api/v1/projects", {
     data: {
@@ -36,7 +47,7 @@ async function newProjectWithDesign(stamp: string): Promise<string> {
   const { id } = await created.json();
   expect((await api.put(`/api/v1/projects/${id}/design`, { data: draft })).status()).toBe(200);
   await api.dispose();
-  return id;
+  return { id: id as string, draft };
 }
 
 /** Generates a packet revision on the Documents page and waits for it (its progress is another test's concern). */
@@ -70,9 +81,9 @@ async function stageShown(page: Page, projectId: string) {
 }
 
 test("a permit and an interconnection application run side by side, and the stage follows the facts", async ({ page }) => {
-  test.setTimeout(240_000);
-  const projectId = await newProjectWithDesign(Date.now().toString(36));
+  test.setTimeout(480_000);
   await signIn(page, DEMO.coordinator);
+  const { id: projectId, draft } = await newProjectWithDesign(await sourceProject(page), Date.now().toString(36));
 
   await page.goto(`/projects/${projectId}/documents`);
   await generatePacket(page, "permit", 1);
@@ -103,32 +114,61 @@ test("a permit and an interconnection application run side by side, and the stag
 
   // A round of two corrections from the AHJ.
   const round = await open(permit, "Record corrections (round 1)");
+  await round.getByLabel("Comment letter (optional: PDF, JPEG or PNG)").setInputFiles({
+    name: "plan-review-comments.pdf",
+    mimeType: "application/pdf",
+    buffer: Buffer.from("%PDF-1.4\n1 0 obj<<>>endobj\n%%EOF\n"),
+  });
   await round.getByLabel("Comment 1", { exact: true }).fill("Show the rapid shutdown initiator on the site plan.");
   await round.getByLabel("Sheet or clause").first().fill("PV-1");
   await round.getByRole("button", { name: "Add a comment" }).click();
   await round.getByLabel("Comment 2", { exact: true }).fill("Label the AC disconnect with its ratings.");
   await round.getByRole("button", { name: "Record round 1" }).click();
   await expect(permit.getByTestId("filing-status")).toHaveText("Corrections requested");
+  await expect(permit.getByTestId("round-letter")).toHaveText("plan-review-comments.pdf");
   await expect(page.getByTestId("waiting-on")).toContainText("Waiting on Office");
 
-  // The design page says who holds a packet of this design.
+  // The design page says who holds a packet of this design; a change answers the first comment.
   await page.goto(`/projects/${projectId}/design`);
   await expect(page.getByTestId("submitted-banner")).toContainText("Rev 1 of the permit packet is with");
-
-  // Rev 2 answers them; the permit is resubmitted with it.
+  const api = await clientFor(DEMO.coordinator);
+  const changed = structuredClone(draft);
+  changed.array.roofPlanes[0].label = "South roof, initiator shown at the service";
+  const saved = await (await api.put(`/api/v1/projects/${projectId}/design`, { data: changed })).json();
+  await page.reload();
+  await expect(page.getByTestId("submitted-banner")).toContainText("a new revision is due");
   await page.goto(`/projects/${projectId}/documents`);
-  await generatePacket(page, "permit", 2);
+  const permitRev1 = page.getByTestId("packet-permit").getByTestId("packet-revision").filter({ hasText: "Rev 1" });
+  await expect(permitRev1.getByTestId("revision-sent")).toContainText("Submitted to");
+  await expect(permitRev1.getByTestId("revision-stale")).toContainText("No longer matches the design");
+
   await page.goto(`/projects/${projectId}/filings`);
   const items = permit.getByTestId("filing-item");
   await items.nth(0).getByLabel("Response").fill("Initiator shown beside the service on PV-1.");
-  await items.nth(0).getByLabel("Design revision").fill("1");
+  await items.nth(0).getByLabel("Design revision").fill(String(saved.revision));
   await items.nth(0).getByRole("button", { name: "Save the answer" }).click();
   await expect(items.nth(0)).toContainText("Answered: Initiator shown");
   await items.nth(1).getByLabel("Response").fill("Label sheet lists the inverter output ratings.");
   await items.nth(1).getByRole("button", { name: "Save the answer" }).click();
   await expect(items.nth(1)).toContainText("Answered: Label sheet");
+
+  // Rev 2 names the comments it answers, and matches the design again; the utility gets the new revision unasked.
+  await page.goto(`/projects/${projectId}/documents`);
+  await generatePacket(page, "permit", 2);
+  await generatePacket(page, "interconnection", 2);
+  const permitRev2 = page.getByTestId("packet-permit").getByTestId("packet-revision").filter({ hasText: "Rev 2" });
+  await expect(permitRev2.getByTestId("packet-changes")).toContainText(
+    "Answers round 1, comment 1 (PV-1): Show the rapid shutdown initiator",
+  );
+  await expect(permitRev2.getByTestId("revision-stale")).toHaveCount(0);
+  await page.goto(`/projects/${projectId}/filings`);
   await changeStatus(permit, "Resubmitted", async (form) => form.getByLabel("Packet revision sent").selectOption({ label: "Rev 2" }));
   await expect(permit.getByTestId("correction-round")).toContainText("resubmitted as Rev 2");
+  await expect(interconnection).toContainText("The design changed after Rev 1 went in");
+  await changeStatus(interconnection, "Resubmitted", async (form) =>
+    form.getByLabel("Packet revision sent").selectOption({ label: "Rev 2" }),
+  );
+  await expect(interconnection).not.toContainText("The design changed after");
 
   // Issued with its number: the stage moves by itself.
   await changeStatus(permit, "Approved", async (form) => form.getByLabel("Reference number").fill("BP-26-77120"));
@@ -139,7 +179,7 @@ test("a permit and an interconnection application run side by side, and the stag
   // A failed final inspection, then a passed re-inspection.
   await page.goto(`/projects/${projectId}/filings`);
   let book = await open(permit, "Book an inspection");
-  await book.getByLabel("Kind").selectOption({ label: "Final inspection" });
+  await book.getByLabel("Kind").selectOption("final");
   await book.getByRole("button", { name: "Book it" }).click();
   const firstVisit = permit.getByTestId("inspection").first();
   await expect(firstVisit).toContainText("Booked, no result yet");
@@ -150,7 +190,7 @@ test("a permit and an interconnection application run side by side, and the stag
   await result.getByRole("button", { name: "Save the result" }).click();
   await expect(firstVisit.getByTestId("inspection-result")).toHaveText("Failed");
   book = await open(permit, "Book an inspection");
-  await book.getByLabel("Kind").selectOption({ label: "Final inspection" });
+  await book.getByLabel("Kind").selectOption("final");
   await expect(book.getByLabel("Re-inspects")).toBeVisible();
   await book.getByRole("button", { name: "Book it" }).click();
   const second = permit.getByTestId("inspection").nth(1);
@@ -169,6 +209,11 @@ test("a permit and an interconnection application run side by side, and the stag
   await page.goto(`/projects/${projectId}/filings`);
   await changeStatus(interconnection, "Approved", async (form) => form.getByLabel("Reference number").fill("IA-88120"));
   expect(await stageShown(page, projectId)).toContain("Utility approved");
+
+  // The field record is completed on site: commissioned by itself.
+  await page.goto(`/projects/${projectId}/field`);
+  await completeFieldRecord(page);
+  expect(await stageShown(page, projectId)).toContain("Commissioned");
   await page.goto(`/projects/${projectId}/filings`);
   const pto = await open(interconnection, "Record permission to operate");
   await pto.getByRole("button", { name: "Record PTO" }).click();
@@ -176,7 +221,6 @@ test("a permit and an interconnection application run side by side, and the stag
   expect(await stageShown(page, projectId)).toContain("PTO received");
 
   // The API tells the same story.
-  const api = await clientFor(DEMO.coordinator);
   const filings = await (await api.get(`/api/v1/projects/${projectId}/filings`)).json();
   expect(filings.waitingOn).toBeNull();
   expect(
@@ -185,6 +229,7 @@ test("a permit and an interconnection application run side by side, and the stag
     ["permit", "approved", "BP-26-77120"],
     ["interconnection", "approved", "IA-88120"],
   ]);
+  expect(filings.filings.map((f: { packetRevision: number }) => f.packetRevision)).toEqual([2, 2]);
   expect(filings.filings[0].rounds[0].items.map((i: { resolved: boolean }) => i.resolved)).toEqual([true, true]);
   expect(filings.filings[0].inspections.map((i: { result: string }) => i.result)).toEqual(["failed", "passed"]);
   await api.dispose();

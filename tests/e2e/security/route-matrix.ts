@@ -243,6 +243,18 @@ export const ACTIONS: Record<string, Entry> = {
     page: (t) => `/projects/${t.projectId}/filings`,
     args: (t) => [{ filingId: t.filingId, receivedOn: "2026-03-10", items: [{ text: "not yours", reference: "" }] }],
   },
+  [`${A}/projects/[projectId]/filings/actions.ts#addFilingAction`]: {
+    scope: "project",
+    roles: OFFICE,
+    page: (t) => `/projects/${t.projectId}/filings`,
+    args: (t) => [{ projectId: t.projectId, title: "not yours", authority: "other", authorityName: "Not yours" }],
+  },
+  [`${A}/projects/[projectId]/filings/actions.ts#attachLetterAction`]: {
+    scope: "project",
+    roles: OFFICE,
+    page: (t) => `/projects/${t.projectId}/filings`,
+    args: (t) => [{ roundId: t.filingId, letterFileId: t.filingId }],
+  },
   [`${A}/projects/[projectId]/filings/actions.ts#answerItemAction`]: {
     scope: "project",
     roles: OFFICE,

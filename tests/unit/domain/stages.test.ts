@@ -26,6 +26,14 @@ describe("stages", () => {
   });
 });
 
+describe("nextActionFor on a project set aside", () => {
+  it.each([
+    ["permit_filed", "pass", "on_hold", "On hold: take it up again once the reason is resolved"],
+    ["draft", "fail", "cancelled", "Cancelled: nothing to do unless it is reopened"],
+    ["permit_filed", "pass", null, NEXT_ACTION.permit_filed],
+  ] as const)("%s, %s review, %s → %s", (stage, review, hold, text) => expect(nextActionFor(stage, review, hold)).toBe(text));
+});
+
 describe("nextActionFor", () => {
   // Our own workflow words (invented for the product): what the office does next follows the design's real state.
   test.each([

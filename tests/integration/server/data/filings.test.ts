@@ -1,11 +1,25 @@
 // Filings through the data layer: the stage follows the facts (DESIGN.md §3), the project's waiting-on
 // follows its filings, and nothing is approved without the authority's reference number.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { AuditEvent, CommissioningRecord, Design, Filing, Packet, Project, StageChange } from "@/models";
+import {
+  AuditEvent,
+  CommissioningRecord,
+  Design,
+  Filing,
+  Jurisdiction,
+  Packet,
+  Project,
+  ProjectFile,
+  StageChange,
+  Utility,
+} from "@/models";
 import { AppError } from "@/lib/errors";
 import { db } from "@/lib/server/db";
 import {
+  addFiling,
   answerFilingItem,
+  answeredSinceLastSending,
+  attachRoundLetter,
   changeFilingStatus,
   ensureDefaultFilings,
   listProjectFilings,
@@ -16,6 +30,7 @@ import {
   scheduleInspection,
 } from "@/lib/server/data/filings";
 import { refreshProjectFacts } from "@/lib/server/data/project-facts";
+import { uploadProjectFile } from "@/lib/server/data/project-files";
 import { changeProjectStage, listProjects, setProjectHold } from "@/lib/server/data/projects";
 import { ProjectListQuery } from "@/lib/schemas/project";
 import { closeDb } from "../../support/db";
@@ -91,6 +106,36 @@ describe("filings", () => {
     expect(filings[0]!.authority.name).toBe(org.jurisdiction.name);
   });
 
+  it("moves a filing nobody sent yet to the project's new AHJ, and leaves one that went in with its authority", async () => {
+    const { project, packets, interconnection } = await filedProject();
+    await changeFilingStatus({
+      viewer: coordinator(),
+      input: { filingId: interconnection.id, status: "submitted", packetId: packets.interconnection1.id, sentTo: "", note: "" },
+    });
+    const ahj = await Jurisdiction.create({
+      organizationId: org.organization.id,
+      name: `Second AHJ ${org.tag}`,
+      state: "CO",
+      necEdition: 2023,
+      recordLowTempC: -20,
+      highDesignTempC: 33,
+      notes: "",
+    });
+    const utility = await Utility.create({
+      organizationId: org.organization.id,
+      name: `Second utility ${org.tag}`,
+      serviceVoltages: [],
+      notes: "",
+    });
+    await project.update({ jurisdictionId: ahj.id, utilityId: utility.id });
+    await db().transaction((transaction) => ensureDefaultFilings(project, { transaction, actorId: null }));
+    const { filings } = await listProjectFilings({ viewer: coordinator(), projectId: project.id });
+    expect(filings.map((f) => [f.kind, f.authority.id, f.authority.name])).toEqual([
+      ["permit", ahj.id, ahj.name],
+      ["interconnection", org.utility.id, org.utility.name],
+    ]);
+  });
+
   it("refuses to approve a filing without the authority's reference number, and keeps it unchanged", async () => {
     const { project, packets, permit } = await filedProject();
     await changeFilingStatus({
@@ -155,6 +200,8 @@ describe("filings", () => {
     });
     expect((await stageOf(project.id)).stage).toBe("permit_filed");
     expect(await waiting()).toBe("ahj");
+    expect((await packets.permit1.reload()).sentTo).toEqual([permit.authorityName]); // the Documents page marks it as sent
+    expect((await packets.permit2.reload()).sentTo).toEqual([]);
     const submitted = (await Filing.findByPk(permit.id))!;
     expect(submitted.nextFollowUpOn).not.toBeNull(); // from the AHJ profile's usual review time
 
@@ -187,6 +234,18 @@ describe("filings", () => {
       input: { itemId: first!.id, response: "Initiator added beside the service on sheet PV-3.", designRevision: 1 },
     });
     await answerFilingItem({ viewer: v, input: { itemId: second!.id, response: "Label added to the label sheet." } });
+    // The next permit revision's change list names both answers; the interconnection packet answers none.
+    expect(await answeredSinceLastSending(project.id, "permit")).toEqual([
+      {
+        round: 1,
+        position: 0,
+        text: "Show the rapid shutdown initiator location.",
+        reference: "PV-3",
+        response: "Initiator added beside the service on sheet PV-3.",
+      },
+      { round: 1, position: 1, text: "Label the AC disconnect.", reference: "NEC 690.13(B)", response: "Label added to the label sheet." },
+    ]);
+    expect(await answeredSinceLastSending(project.id, "interconnection")).toEqual([]);
     await changeFilingStatus({
       viewer: v,
       input: { filingId: permit.id, status: "resubmitted", packetId: packets.permit2.id, sentTo: "", note: "" },
@@ -196,6 +255,7 @@ describe("filings", () => {
     expect(afterRound.filings[0]).toMatchObject({ status: "resubmitted", packetRevision: 2 });
     expect(afterRound.filings[0]!.rounds[0]).toMatchObject({ revisionAtReceipt: 1, resubmittedRevision: 2 });
     expect(afterRound.filings[0]!.rounds[0]!.answeredAt).not.toBeNull();
+    expect(await answeredSinceLastSending(project.id, "permit")).toEqual([]); // sent back: a later revision does not repeat them
 
     // Approved with its number: the stage moves by itself, and the crew is up.
     await changeFilingStatus({
@@ -348,6 +408,122 @@ describe("filings", () => {
         }),
       ),
     ).toMatchObject({ fields: ["items"] });
+  });
+
+  it("keeps the authority's comment letter with its round: a comment letter of the same project, uploaded by the office", async () => {
+    const { project, packets, permit } = await filedProject();
+    const v = coordinator();
+    await changeFilingStatus({
+      viewer: v,
+      input: { filingId: permit.id, status: "submitted", packetId: packets.permit1.id, sentTo: "", note: "" },
+    });
+    const file = (kind: "comment-letter" | "site-photo", projectId = project.id) =>
+      ProjectFile.create({
+        organizationId: org.organization.id,
+        projectId,
+        kind,
+        objectKey: `projects/${projectId}/letters/fixture-${kind}.pdf`,
+        fileName: `${kind}.pdf`,
+        contentType: "application/pdf",
+        sizeBytes: 10,
+        sha256: "0".repeat(64),
+        uploadedById: v.id,
+      });
+    const photo = await file("site-photo");
+    expect(
+      await failure(
+        recordCorrectionRound({
+          viewer: v,
+          input: {
+            filingId: permit.id,
+            receivedOn: "2026-03-10",
+            letterFileId: photo.id,
+            items: [{ text: "Show the setbacks.", reference: "" }],
+          },
+        }),
+      ),
+    ).toMatchObject({ code: "INVALID_INPUT", fields: ["letterFileId"] });
+    const { roundId } = await recordCorrectionRound({
+      viewer: v,
+      input: { filingId: permit.id, receivedOn: "2026-03-10", items: [{ text: "Show the setbacks.", reference: "" }] },
+    });
+    const elsewhere = await file("comment-letter", (await makeProject(org)).id);
+    expect(await failure(attachRoundLetter({ viewer: v, input: { roundId, letterFileId: elsewhere.id } }))).toMatchObject({
+      code: "INVALID_INPUT",
+    });
+    const letter = await file("comment-letter");
+    expect(await failure(attachRoundLetter({ viewer: org.viewers.installer, input: { roundId, letterFileId: letter.id } }))).toMatchObject({
+      code: "FORBIDDEN",
+    });
+    await attachRoundLetter({ viewer: v, input: { roundId, letterFileId: letter.id } });
+    const [round] = (await listProjectFilings({ viewer: v, projectId: project.id })).filings[0]!.rounds;
+    expect(round).toMatchObject({ letterFileId: letter.id, letterFileName: "comment-letter.pdf" });
+    expect(await AuditEvent.count({ where: { entityId: permit.id, action: "filing.letter-attached" } })).toBe(1);
+    // Only the office uploads a letter; the crew's uploads are the field record.
+    expect(
+      await failure(
+        uploadProjectFile({
+          viewer: org.viewers.installer,
+          projectId: project.id,
+          kind: "comment-letter",
+          fileName: "letter.pdf",
+          bytes: new TextEncoder().encode("%PDF-1.4"),
+        }),
+      ),
+    ).toMatchObject({ code: "FORBIDDEN" });
+  });
+
+  it("adds another approval from an authority profile or a named body, and an HOA reviewing holds the built project", async () => {
+    const { project, permit } = await filedProject();
+    const v = coordinator();
+    const { filingId } = await addFiling({
+      viewer: v,
+      input: { projectId: project.id, title: "HOA approval", authority: "other", authorityName: "Juniper Hollow HOA" },
+    });
+    const electrical = await addFiling({
+      viewer: v,
+      input: {
+        projectId: project.id,
+        title: "Separate electrical permit",
+        authority: `jurisdiction:${project.jurisdictionId}`,
+        authorityName: "",
+      },
+    });
+    const listed = (await listProjectFilings({ viewer: v, projectId: project.id })).filings;
+    expect(listed.map((f) => [f.kind, f.title, f.authority.kind, f.authority.name])).toEqual([
+      ["permit", "", "ahj", permit.authorityName],
+      ["interconnection", "", "utility", expect.any(String)],
+      ["other", "HOA approval", "other", "Juniper Hollow HOA"],
+      ["other", "Separate electrical permit", "ahj", permit.authorityName],
+    ]);
+    expect(listed[3]!.id).toBe(electrical.filingId);
+    // A body that approves without a packet: submitted with no revision, and it holds the project once nothing else does.
+    await changeFilingStatus({ viewer: v, input: { filingId, status: "submitted", sentTo: "Architectural committee", note: "" } });
+    expect((await listProjectFilings({ viewer: v, projectId: project.id })).filings[2]).toMatchObject({ status: "submitted" });
+    expect(
+      await failure(
+        addFiling({
+          viewer: v,
+          input: { projectId: project.id, title: "HOA approval", authority: `utility:${rival.organization.id}`, authorityName: "" },
+        }),
+      ),
+    ).toMatchObject({ code: "INVALID_INPUT", fields: ["authority"] });
+    expect(
+      await failure(
+        addFiling({
+          viewer: org.viewers.installer,
+          input: { projectId: project.id, title: "HOA approval", authority: "other", authorityName: "Juniper Hollow HOA" },
+        }),
+      ),
+    ).toMatchObject({ code: "FORBIDDEN" });
+    expect(
+      await failure(
+        addFiling({
+          viewer: rival.viewers.coordinator,
+          input: { projectId: project.id, title: "HOA approval", authority: "other", authorityName: "Juniper Hollow HOA" },
+        }),
+      ),
+    ).toMatchObject({ code: "NOT_FOUND" });
   });
 
   it("marks a submitted filing as owing a new revision when the design changes, and the office holds the project", async () => {

@@ -86,6 +86,30 @@ describe("share links", () => {
     ]);
   });
 
+  it("tells of a newer revision only when the link shares it too", async () => {
+    const project = await makeProject(org);
+    const rev1 = await packet(project, 1);
+    const rev2 = await packet(project, 2);
+    const share = async (packetIds: string[]) =>
+      tokenOf(
+        (
+          await createShareLink({
+            viewer: org.viewers.coordinator,
+            projectId: project.id,
+            input: { packetIds, recipientEmail: "plans@ahj.example", note: "" },
+          })
+        ).url,
+      );
+    const onlyOld = await openShareLink(await share([rev1.id]), client("198.51.100.8"));
+    expect(onlyOld.revisions.map((r) => [r.label, r.supersededBy])).toEqual([["Permit packet Rev 1", null]]);
+    expect(JSON.stringify(onlyOld)).not.toContain("Rev 2");
+    const both = await openShareLink(await share([rev1.id, rev2.id]), client("198.51.100.8"));
+    expect(both.revisions.map((r) => [r.label, r.supersededBy])).toEqual([
+      ["Permit packet Rev 2", null],
+      ["Permit packet Rev 1", "Permit packet Rev 2"],
+    ]);
+  });
+
   it("refuses revisions that are not ready or belong to another project, and other roles and organizations", async () => {
     const project = await makeProject(org);
     const other = await makeProject(org);

@@ -34,6 +34,14 @@ describe("filing status changes", () => {
     expect(filingChangeProblem(change({ kind: "other", from: "preparing", to: "submitted", packetRevision: null }))).toBeNull();
   });
 
+  it("sends a revision unasked while the authority has the filing, with the revision it sends", () => {
+    for (const from of ["submitted", "in_review"] as const) {
+      expect(filingChangeProblem(change({ from, to: "resubmitted", packetRevision: 2 }))).toBeNull();
+      expect(filingChangeProblem(change({ from, to: "resubmitted", packetRevision: null }))).toMatchObject({ field: "packetRevision" });
+    }
+    expect(filingChangeProblem(change({ from: "approved", to: "resubmitted", packetRevision: 2 }))).toMatchObject({ field: "status" });
+  });
+
   it("resubmits only once every item of the round is answered, never with an older revision", () => {
     const base = { from: "corrections_requested", to: "resubmitted", revisionAtLatestRound: 1 } as const;
     expect(filingChangeProblem(change({ ...base, latestRoundAnswered: false, packetRevision: 2 }))).toMatchObject({ field: "rounds" });

@@ -74,6 +74,18 @@ describe("who the project waits on", () => {
       "2026-03-02",
     ],
     ["the customer marked as holding it", facts({ filings: [permit({ customerSince: "2026-03-05" })] }), "customer", "2026-03-05"],
+    [
+      "an HOA reviewing once the work is built: the other approving body holds it like an AHJ",
+      facts({
+        installed: true,
+        filings: [
+          permit({ status: "approved", since: "2026-03-01" }),
+          permit({ kind: "other", authority: "other", status: "in_review", since: "2026-03-06" }),
+        ],
+      }),
+      "ahj",
+      "2026-03-06",
+    ],
   ] as const)("%s → %s since %s", (_what, input, party, since) => {
     expect(waitingOn(input)).toMatchObject({ party, since });
   });

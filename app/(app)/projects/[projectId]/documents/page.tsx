@@ -45,6 +45,7 @@ export default async function DocumentsPage({ params }: { params: Promise<{ proj
         initial={packets}
         canGenerate={can(viewer, "project:edit")}
         reviewStatus={design?.reviewStatus ?? "incomplete"}
+        designRevision={design?.revision ?? null}
         actions={{ request: requestPacketAction, retry: retryPacketAction }}
       />
       {canShare ? (

@@ -6,6 +6,7 @@ import { isAppError } from "@/lib/errors";
 import { requireUser } from "@/lib/server/auth";
 import { getCommissioning } from "@/lib/server/data/commissioning";
 import { listProjectFilings } from "@/lib/server/data/filings";
+import { FIELD_FILE_KINDS } from "@/lib/field/upload-rules";
 import { listProjectFiles } from "@/lib/server/data/project-files";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { CommissioningForm } from "./_components/commissioning-form";
@@ -80,7 +81,7 @@ export default async function FieldPage({ params }: { params: Promise<{ projectI
           {commissioning.message} <Link href={`/projects/${project.id}/design`}>Open the design</Link>
         </p>
       )}
-      <FieldUploads projectId={project.id} initialFiles={files} mayUpload={mayRecord} />
+      <FieldUploads projectId={project.id} initialFiles={files.filter((f) => FIELD_FILE_KINDS.includes(f.kind))} mayUpload={mayRecord} />
     </div>
   );
 }

@@ -3,7 +3,9 @@
 import { revalidatePath } from "next/cache";
 import { defineAction } from "@/lib/server/action";
 import {
+  addFiling,
   answerFilingItem,
+  attachRoundLetter,
   changeFilingStatus,
   recordCorrectionRound,
   recordInspectionResult,
@@ -12,7 +14,9 @@ import {
   updateFilingDetails,
 } from "@/lib/server/data/filings";
 import {
+  AddFilingInput,
   AnswerItemInput,
+  AttachLetterInput,
   ChangeFilingStatusInput,
   FilingDetailsInput,
   InspectionResultInput,
@@ -41,6 +45,18 @@ export const updateFilingDetailsAction = defineAction(
     return { filingId: input.filingId };
   },
 );
+
+export const addFilingAction = defineAction({ schema: AddFilingInput, permission: "filings:edit" }, async (input, { viewer }) => {
+  const added = await addFiling({ viewer, input });
+  refresh();
+  return added;
+});
+
+export const attachLetterAction = defineAction({ schema: AttachLetterInput, permission: "filings:edit" }, async (input, { viewer }) => {
+  await attachRoundLetter({ viewer, input });
+  refresh();
+  return { roundId: input.roundId };
+});
 
 export const recordRoundAction = defineAction({ schema: RecordRoundInput, permission: "filings:edit" }, async (input, { viewer }) => {
   const round = await recordCorrectionRound({ viewer, input });

@@ -9,21 +9,27 @@ import {
   NEXT_STATUSES,
   WAITING_PARTY_LABELS,
   WITH_THE_AUTHORITY,
+  inspectionPlan,
   isFiled,
   needsReinspection,
 } from "@/lib/domain/filings";
+import type { FilingDto } from "@/lib/dto/filings";
 import { calendarDayText, localIsoDate } from "@/lib/domain/time-zones";
 import { centsToDollarsText } from "@/lib/fees/money";
 import { requireUser } from "@/lib/server/auth";
+import { listAuthorities } from "@/lib/server/data/authorities";
 import { getDesignStatus } from "@/lib/server/data/designs";
 import { listProjectFilings } from "@/lib/server/data/filings";
 import { getOrganization } from "@/lib/server/data/organizations";
 import { listPackets } from "@/lib/server/data/packets";
 import { listSettledPayments } from "@/lib/server/data/payments";
 import { loadProjectOr404 } from "@/lib/server/pages";
+import { AddFilingForm } from "./_components/add-filing-form";
 import { FilingCard, type FilingActions } from "./_components/filing-card";
 import {
+  addFilingAction,
   answerItemAction,
+  attachLetterAction,
   changeFilingStatusAction,
   recordInspectionResultAction,
   recordPtoAction,
@@ -38,6 +44,7 @@ const ACTIONS: FilingActions = {
   change: changeFilingStatusAction,
   update: updateFilingDetailsAction,
   recordRound: recordRoundAction,
+  attachLetter: attachLetterAction,
   answer: answerItemAction,
   book: scheduleInspectionAction,
   recordResult: recordInspectionResultAction,
@@ -48,13 +55,24 @@ export default async function FilingsPage({ params }: { params: Promise<{ projec
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
   const canEdit = can(viewer, "filings:edit", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null });
-  const [filings, organization, packets, design, settled] = await Promise.all([
+  const [filings, organization, packets, design, settled, ahjs, utilities] = await Promise.all([
     listProjectFilings({ viewer, projectId: project.id }),
     getOrganization({ viewer }),
     listPackets({ viewer, projectId: project.id }),
     getDesignStatus({ viewer, projectId: project.id }),
     canEdit ? listSettledPayments({ viewer, projectId: project.id }) : [],
+    canEdit ? listAuthorities({ viewer, kind: "jurisdiction" }) : [],
+    canEdit ? listAuthorities({ viewer, kind: "utility" }) : [],
   ]);
+  // The authority profile's required visits order the booking form and show what is still to pass.
+  const requiredOf = (filing: FilingDto) =>
+    (filing.authority.kind === "ahj" ? ahjs : filing.authority.kind === "utility" ? utilities : []).find(
+      (a) => a.id === filing.authority.id,
+    )?.requiredInspections ?? [];
+  const authorities = [
+    ...ahjs.map((a) => ({ value: `jurisdiction:${a.id}`, label: `AHJ: ${a.name}` })),
+    ...utilities.map((u) => ({ value: `utility:${u.id}`, label: `Utility: ${u.name}` })),
+  ];
   const today = localIsoDate(new Date().toISOString(), organization.timeZone);
   // The fee that went with a filing is chosen among the project's settled payments.
   const payments = settled.map((p) => ({
@@ -91,8 +109,9 @@ export default async function FilingsPage({ params }: { params: Promise<{ projec
         return (
           <FilingCard
             key={filing.id}
+            projectId={project.id}
             filing={filing}
-            title={`${FILING_KIND_LABELS[filing.kind]} · ${filing.authority.name}`}
+            title={`${filing.kind === "other" && filing.title ? filing.title : FILING_KIND_LABELS[filing.kind]} · ${filing.authority.name}`}
             today={today}
             canEdit={canEdit}
             actions={ACTIONS}
@@ -105,6 +124,7 @@ export default async function FilingsPage({ params }: { params: Promise<{ projec
             payments={payments}
             takesRound={WITH_THE_AUTHORITY.includes(filing.status)}
             inspectionKinds={filing.kind === "permit" ? (filing.status === "approved" ? kinds : []) : isFiled(filing.status) ? kinds : []}
+            plan={inspectionPlan(kinds, requiredOf(filing), filing.inspections)}
             failedInspections={filing.inspections
               .filter((i) => needsReinspection(i.result) && !filing.inspections.some((r) => r.reinspectionOf === i.id))
               .map((i) => ({
@@ -114,6 +134,14 @@ export default async function FilingsPage({ params }: { params: Promise<{ projec
           />
         );
       })}
+      {canEdit ? (
+        <details className="panel" data-testid="add-filing">
+          <summary className="cursor-pointer text-sm font-medium">Add another approval (an HOA, a separate electrical permit…)</summary>
+          <div className="mt-3">
+            <AddFilingForm projectId={project.id} authorities={authorities} add={addFilingAction} />
+          </div>
+        </details>
+      ) : null}
     </div>
   );
 }

@@ -70,6 +70,11 @@ export function SharedPacketView({ token, view }: { token: string; view: SharedV
                     .filter(Boolean)
                     .join(" · ")}
                 </span>
+                {r.supersededBy ? (
+                  <span className="block text-sm text-result-warn" data-testid="superseded">
+                    Superseded: {r.supersededBy} below is newer.
+                  </span>
+                ) : null}
               </span>
               <a
                 className="rounded bg-copper px-3 py-1.5 text-sm text-white no-underline"

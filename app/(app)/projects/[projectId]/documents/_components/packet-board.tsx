@@ -20,12 +20,14 @@ export function PacketBoard({
   initial,
   canGenerate,
   reviewStatus,
+  designRevision,
   actions,
 }: {
   projectId: string;
   initial: PacketDto[];
   canGenerate: boolean;
   reviewStatus: string;
+  designRevision: number | null;
   actions: PacketActions;
 }) {
   const { data, error, mutate } = useSWR(`/api/v1/projects/${projectId}/packets`, fetchPackets, {
@@ -63,6 +65,7 @@ export function PacketBoard({
           packets={(data ?? []).filter((p) => p.kind === kind)}
           canGenerate={canGenerate}
           reviewStatus={reviewStatus}
+          designRevision={designRevision}
           onChange={() => mutate()}
           actions={actions}
         />

@@ -25,6 +25,7 @@ export function PacketCard({
   packets,
   canGenerate,
   reviewStatus,
+  designRevision,
   onChange,
   actions,
 }: {
@@ -34,6 +35,7 @@ export function PacketCard({
   packets: PacketDto[];
   canGenerate: boolean;
   reviewStatus: string;
+  designRevision: number | null;
   onChange: () => void;
 }) {
   const [reason, setReason] = useState("");
@@ -132,7 +134,7 @@ export function PacketCard({
       {ready.length ? (
         <ol className="space-y-3">
           {ready.map((p) => (
-            <PacketRevision key={p.id} packet={p} />
+            <PacketRevision key={p.id} packet={p} designRevision={designRevision} />
           ))}
         </ol>
       ) : (

@@ -1,9 +1,16 @@
 import { LocalTime } from "@/components/time/local-time";
-import { INSPECTION_KIND_LABELS, INSPECTION_RESULT_LABELS, type FilingStatus, type InspectionKind } from "@/lib/domain/filings";
+import {
+  INSPECTION_KIND_LABELS,
+  INSPECTION_RESULT_LABELS,
+  type FilingStatus,
+  type InspectionKind,
+  type InspectionPlanRow,
+} from "@/lib/domain/filings";
 import { calendarDayText } from "@/lib/domain/time-zones";
 import type { FilingDto, FilingItemDto } from "@/lib/dto/filings";
 import type {
   answerItemAction,
+  attachLetterAction,
   changeFilingStatusAction,
   recordInspectionResultAction,
   recordPtoAction,
@@ -16,6 +23,7 @@ import { FilingFacts } from "./filing-facts";
 import { FilingStatusForm } from "./filing-status-form";
 import { BookInspectionForm, InspectionResultForm } from "./inspection-forms";
 import { ItemAnswerForm } from "./item-answer-form";
+import { LetterForm } from "./letter-form";
 import { PtoForm } from "./pto-form";
 import { RoundForm } from "./round-form";
 
@@ -24,6 +32,7 @@ export type FilingActions = {
   change: typeof changeFilingStatusAction;
   update: typeof updateFilingDetailsAction;
   recordRound: typeof recordRoundAction;
+  attachLetter: typeof attachLetterAction;
   answer: typeof answerItemAction;
   book: typeof scheduleInspectionAction;
   recordResult: typeof recordInspectionResultAction;
@@ -31,6 +40,7 @@ export type FilingActions = {
 };
 
 type Props = {
+  projectId: string;
   filing: FilingDto;
   title: string;
   today: string;
@@ -42,6 +52,7 @@ type Props = {
   payments: { id: string; label: string }[];
   takesRound: boolean;
   inspectionKinds: readonly InspectionKind[];
+  plan: { rows: InspectionPlanRow[]; next: InspectionKind | null };
   failedInspections: { id: string; label: string }[];
 };
 
@@ -123,12 +134,31 @@ export function FilingCard(props: Props) {
                 {round.answeredAt ? " · answered" : ""}
                 {round.resubmittedRevision ? ` · resubmitted as Rev ${round.resubmittedRevision}` : ""}
               </p>
+              {round.letterFileId ? (
+                <p className="text-sm">
+                  Letter:{" "}
+                  <a href={`/api/v1/projects/${props.projectId}/files/${round.letterFileId}`} download data-testid="round-letter">
+                    {round.letterFileName ?? "download"}
+                  </a>
+                </p>
+              ) : canEdit ? (
+                <LetterForm projectId={props.projectId} roundId={round.id} number={round.number} attach={actions.attachLetter} />
+              ) : null}
               <Items items={round.items} canEdit={canEdit} designRevision={props.designRevision} answer={actions.answer} />
             </div>
           ))}
         </div>
       ) : null}
 
+      {props.plan.rows.some((r) => r.required) ? (
+        <p className="text-sm" data-testid="required-inspections">
+          <span className="text-ink-soft">Required by {filing.authority.name}: </span>
+          {props.plan.rows
+            .filter((r) => r.required)
+            .map((r) => `${INSPECTION_KIND_LABELS[r.kind]} ${r.passed ? "passed" : "still to pass"}`)
+            .join(" · ")}
+        </p>
+      ) : null}
       {filing.inspections.length ? (
         <div className="space-y-2">
           <h3 className="text-sm font-semibold">Inspections</h3>
@@ -194,6 +224,7 @@ export function FilingCard(props: Props) {
             <Task title={`Record corrections (round ${filing.rounds.length + 1})`}>
               <RoundForm
                 key={filing.rounds.length}
+                projectId={props.projectId}
                 filingId={filing.id}
                 number={filing.rounds.length + 1}
                 today={today}
@@ -206,7 +237,8 @@ export function FilingCard(props: Props) {
               <BookInspectionForm
                 key={`${filing.inspections.length}-${props.failedInspections.length}`}
                 filingId={filing.id}
-                kinds={props.inspectionKinds}
+                kinds={props.plan.rows.filter((r) => props.inspectionKinds.includes(r.kind))}
+                next={props.plan.next}
                 failed={props.failedInspections}
                 today={today}
                 book={actions.book}

@@ -4,7 +4,13 @@ import type { Control, UseFormRegister } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { INSPECTION_KIND_LABELS, INSPECTION_RESULTS, INSPECTION_RESULT_LABELS, type InspectionKind } from "@/lib/domain/filings";
+import {
+  INSPECTION_KIND_LABELS,
+  INSPECTION_RESULTS,
+  INSPECTION_RESULT_LABELS,
+  type InspectionKind,
+  type InspectionPlanRow,
+} from "@/lib/domain/filings";
 import { InspectionResultInput, ScheduleInspectionInput } from "@/lib/schemas/filings";
 import type { recordInspectionResultAction, scheduleInspectionAction } from "../actions";
 import { ItemFields } from "./item-fields";
@@ -22,7 +28,8 @@ type BookValues = {
 /** Books an inspection, or a re-inspection of one that failed. */
 export function BookInspectionForm(props: {
   filingId: string;
-  kinds: readonly InspectionKind[];
+  kinds: readonly InspectionPlanRow[];
+  next: InspectionKind | null;
   failed: { id: string; label: string }[];
   today: string;
   book: typeof scheduleInspectionAction;
@@ -30,7 +37,7 @@ export function BookInspectionForm(props: {
   const { filingId } = props;
   const blank = {
     filingId,
-    kind: props.kinds[props.kinds.length - 1] ?? "",
+    kind: props.next ?? props.kinds[0]?.kind ?? "",
     scheduledFor: props.today,
     timeWindow: "",
     inspectorName: "",
@@ -50,8 +57,9 @@ export function BookInspectionForm(props: {
         <Field label="Kind" htmlFor={id("kind")} error={errors.kind?.message}>
           <select id={id("kind")} className="input" {...form.register("kind")}>
             {props.kinds.map((k) => (
-              <option key={k} value={k}>
-                {INSPECTION_KIND_LABELS[k]}
+              <option key={k.kind} value={k.kind}>
+                {INSPECTION_KIND_LABELS[k.kind]}
+                {k.required ? " (required)" : ""}
               </option>
             ))}
           </select>

@@ -13,7 +13,7 @@ export const GET = withAuth<{ projectId: string }>(
   { permission: "project:view" },
 );
 
-// POST /api/v1/projects/:projectId/files – multipart: kind (signed-completion | site-photo) and one file
+// POST /api/v1/projects/:projectId/files – multipart: kind (signed-completion | site-photo | comment-letter) and one file
 export const POST = withAuth<{ projectId: string }>(
   async (request, { viewer, params }) => {
     // The body is read whole, so its size must be known and bounded before reading it.
@@ -28,8 +28,8 @@ export const POST = withAuth<{ projectId: string }>(
     const kind = form.get("kind");
     const file = form.get("file");
     if (!isProjectFileKind(kind))
-      throw new AppError("INVALID_INPUT", "Say what the file is: kind must be signed-completion or site-photo.", {
-        kind: ["Choose signed-completion or site-photo"],
+      throw new AppError("INVALID_INPUT", "Say what the file is: kind must be signed-completion, site-photo or comment-letter.", {
+        kind: ["Choose signed-completion, site-photo or comment-letter"],
       });
     if (!(file instanceof File))
       throw new AppError("INVALID_INPUT", "Attach one file in the field named file.", { file: ["Attach a file"] });
