@@ -62,9 +62,12 @@ export async function buildIfNeeded(root, env) {
   writeFileSync(stamp, want + "\n");
 }
 
-/** Starts the app through scripts/serve.mjs (built, or with hot reload) in its own process group so it can be stopped whole. */
-export function serveApp(root, env, { dev, port, stdio = "inherit" }) {
-  const args = ["scripts/serve.mjs", "--host", "127.0.0.1", "--port", String(port), ...(dev ? ["--dev"] : [])];
+/**
+ * Starts the app through scripts/serve.mjs (built, or with hot reload) in its own process group so it can be stopped whole.
+ * `nodeArgs` go to Node itself (such as --cpu-prof, which NODE_OPTIONS refuses).
+ */
+export function serveApp(root, env, { dev, port, stdio = "inherit", nodeArgs = [] }) {
+  const args = [...nodeArgs, "scripts/serve.mjs", "--host", "127.0.0.1", "--port", String(port), ...(dev ? ["--dev"] : [])];
   return spawnGroup(root, process.execPath, args, { ...env, ...(dev ? { NODE_ENV: "development" } : {}) }, stdio);
 }
 

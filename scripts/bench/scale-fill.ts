@@ -238,8 +238,9 @@ async function copyProjects(organizationId: string) {
         return "nextval(pg_get_serial_sequence('projects', 'number'))";
       // Names, streets and account numbers differ from copy to copy, so a search finds a few, not thousands.
       case "customer_name":
-        // 30 first names × 26 middle initials × 30 surnames: tens of thousands of distinct people.
-        return `($1::text[])[1 + (m.n * 7) % ${firsts.length}] || ' ' || chr(65 + (m.n / ${firsts.length}) % 26) || '. ' || ($2::text[])[1 + (m.n / ${firsts.length * 26}) % ${lasts.length}]`;
+        // 30 first names × 26 middle initials × 30 surnames, two in three of them joined to a second: as many
+        // people as a real customer base, so a search by surname finds a handful, as it would there.
+        return `($1::text[])[1 + (m.n * 7) % ${firsts.length}] || ' ' || chr(65 + (m.n / ${firsts.length}) % 26) || '. ' || ($2::text[])[1 + (m.n / ${firsts.length * 26}) % ${lasts.length}] || case when m.n % 3 = 0 then '' else '-' || ($2::text[])[1 + (m.n * 11) % ${lasts.length}] end`;
       case "customer_email":
         return `lower(($1::text[])[1 + (m.n * 7) % ${firsts.length}]) || m.n || '@mail.example'`;
       case "street":
