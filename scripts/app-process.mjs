@@ -81,17 +81,23 @@ function spawnGroup(root, command, args, env, stdio = "inherit") {
   const stop = () =>
     new Promise((resolve) => {
       if (child.exitCode !== null || child.signalCode !== null) return resolve();
-      child.once("exit", () => resolve());
-      try {
-        process.kill(-child.pid, "SIGTERM");
-      } catch {
-        resolve();
-      }
-      setTimeout(() => {
+      // Held (not unref'd) until the group exits: a caller that ends right after stop() must not leave a server
+      // behind that is still waiting for its keep-alive connections to close.
+      const kill = setTimeout(() => {
         try {
           process.kill(-child.pid, "SIGKILL");
         } catch {}
-      }, 5000).unref();
+      }, 5000);
+      child.once("exit", () => {
+        clearTimeout(kill);
+        resolve();
+      });
+      try {
+        process.kill(-child.pid, "SIGTERM");
+      } catch {
+        clearTimeout(kill);
+        resolve();
+      }
     });
   return { child, stop };
 }

@@ -24,14 +24,15 @@ const option = (name, fallback) => {
 const seconds = Number(option("--seconds", "5"));
 const only = option("--only", "");
 
-/** The server's resident memory: the whole process group it runs in, in MB. */
+/** The server's resident memory: every process of its process group, in MB. */
 function rssMb(pid) {
   try {
-    const out = execFileSync("ps", ["-o", "rss=", "-g", String(pid)], { encoding: "utf8" });
+    const out = execFileSync("ps", ["-eo", "pgid=,rss="], { encoding: "utf8" });
     return out
       .split("\n")
-      .filter(Boolean)
-      .reduce((total, kb) => total + Number(kb) / 1024, 0);
+      .map((line) => line.trim().split(/\s+/).map(Number))
+      .filter(([group]) => group === pid)
+      .reduce((total, [, kb]) => total + kb / 1024, 0);
   } catch {
     return 0;
   }
