@@ -62,9 +62,12 @@ export async function buildIfNeeded(root, env) {
   writeFileSync(stamp, want + "\n");
 }
 
-/** Starts the app through scripts/serve.mjs (built, or with hot reload) in its own process group so it can be stopped whole. */
-export function serveApp(root, env, { dev, port, stdio = "inherit" }) {
-  const args = ["scripts/serve.mjs", "--host", "127.0.0.1", "--port", String(port), ...(dev ? ["--dev"] : [])];
+/**
+ * Starts the app through scripts/serve.mjs (built, or with hot reload) in its own process group so it can be stopped whole.
+ * `nodeArgs` go to Node itself (such as --cpu-prof, which NODE_OPTIONS refuses).
+ */
+export function serveApp(root, env, { dev, port, stdio = "inherit", nodeArgs = [] }) {
+  const args = [...nodeArgs, "scripts/serve.mjs", "--host", "127.0.0.1", "--port", String(port), ...(dev ? ["--dev"] : [])];
   return spawnGroup(root, process.execPath, args, { ...env, ...(dev ? { NODE_ENV: "development" } : {}) }, stdio);
 }
 
@@ -78,17 +81,23 @@ function spawnGroup(root, command, args, env, stdio = "inherit") {
   const stop = () =>
     new Promise((resolve) => {
       if (child.exitCode !== null || child.signalCode !== null) return resolve();
-      child.once("exit", () => resolve());
-      try {
-        process.kill(-child.pid, "SIGTERM");
-      } catch {
-        resolve();
-      }
-      setTimeout(() => {
+      // Held (not unref'd) until the group exits: a caller that ends right after stop() must not leave a server
+      // behind that is still waiting for its keep-alive connections to close.
+      const kill = setTimeout(() => {
         try {
           process.kill(-child.pid, "SIGKILL");
         } catch {}
-      }, 5000).unref();
+      }, 5000);
+      child.once("exit", () => {
+        clearTimeout(kill);
+        resolve();
+      });
+      try {
+        process.kill(-child.pid, "SIGTERM");
+      } catch {
+        clearTimeout(kill);
+        resolve();
+      }
     });
   return { child, stop };
 }

@@ -1,13 +1,16 @@
 import "server-only";
 import { cache } from "react";
 import { notFound, redirect } from "next/navigation";
-import { getServerSession, type NextAuthOptions } from "next-auth";
+import { cookies } from "next/headers";
+import { type NextAuthOptions } from "next-auth";
+import { getToken } from "next-auth/jwt";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
 import { can, type Permission, type Viewer } from "@/lib/domain/permissions";
 import type { Role } from "@/lib/domain/roles";
 import { isAppError } from "@/lib/errors";
 import { clientAddress } from "./client-address";
+import { env } from "./env";
 import { authenticate, getActiveViewer } from "./data/users";
 
 const CredentialsInput = z.object({
@@ -53,10 +56,21 @@ export const authOptions: NextAuthOptions = {
   },
 };
 
-/** The signed-in, still active user, or null. The database is asked each request so a deactivation or role change applies at once. */
+type TokenRequest = Parameters<typeof getToken>[0]["req"];
+
+/**
+ * The signed-in, still active user, or null. The database is asked each request so a deactivation or role change applies at once.
+ * The session cookie is decoded directly (next-auth's own decoder, its cookie name and expiry checks): getServerSession would
+ * also run the whole session route and encrypt a renewed cookie on every request, which a page or route handler here drops.
+ */
 export const getViewer = cache(async (): Promise<Viewer | null> => {
-  const session = await getServerSession(authOptions);
-  const userId = (session as { userId?: string } | null)?.userId;
+  const jar = await cookies();
+  const token = await getToken({
+    req: { cookies: Object.fromEntries(jar.getAll().map((c) => [c.name, c.value])), headers: {} } as unknown as TokenRequest,
+    // The cookie's name (secure prefix or not) follows NEXTAUTH_URL as next-auth's own sign-in does.
+    secret: env().NEXTAUTH_SECRET,
+  });
+  const userId = typeof token?.userId === "string" ? token.userId : null;
   if (!userId) return null;
   return getActiveViewer(userId);
 });

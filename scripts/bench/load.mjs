@@ -4,6 +4,7 @@
 // asserts nothing (timings are not tests).
 import autocannon from "autocannon";
 import { startCluster } from "../services/cluster.mjs";
+import { load, sessionCookie } from "./session.mjs";
 
 const args = process.argv.slice(2);
 const option = (name, fallback) => {
@@ -13,42 +14,11 @@ const option = (name, fallback) => {
 const seconds = option("--seconds", 60);
 const connections = option("--connections", 50);
 
-function run(opts) {
-  return new Promise((resolve, reject) => {
-    const instance = autocannon(opts, (error, result) => (error ? reject(error) : resolve(result)));
-    autocannon.track(instance, { renderProgressBar: false, renderResultsTable: false, renderLatencyTable: false });
-  });
-}
-
-/** Signs in as the demo coordinator on one server and returns its session cookie. */
-async function sessionCookie(base) {
-  const jar = new Map();
-  const keep = (res) => {
-    for (const line of res.headers.getSetCookie()) {
-      const [pair] = line.split(";");
-      const at = pair.indexOf("=");
-      jar.set(pair.slice(0, at), pair.slice(at + 1));
-    }
-  };
-  const cookie = () => [...jar].map(([k, v]) => `${k}=${v}`).join("; ");
-  const csrf = await fetch(`${base}/api/auth/csrf`);
-  keep(csrf);
-  const { csrfToken } = await csrf.json();
-  const form = new URLSearchParams({ csrfToken, email: "dana@quillmoor.example", password: "ohmstead-demo", json: "true" });
-  keep(
-    await fetch(`${base}/api/auth/callback/credentials`, {
-      method: "POST",
-      body: form,
-      headers: { "content-type": "application/x-www-form-urlencoded", cookie: cookie() },
-      redirect: "manual",
-    }),
-  );
-  return cookie();
-}
+const run = (options) => load(autocannon, options);
 
 const cluster = await startCluster({ apps: 2, workers: 2, build: true });
 try {
-  const cookies = await Promise.all(cluster.urls.map(sessionCookie));
+  const cookies = await Promise.all(cluster.urls.map((url) => sessionCookie(url)));
   const { items } = await (
     await fetch(`${cluster.urls[0]}/api/v1/projects?stage=permit_filed&pageSize=1`, { headers: { cookie: cookies[0] } })
   ).json();

@@ -14,6 +14,8 @@ export const PROFILES = {
   test: { app: 3100, postgres: 54339, storage: 4579, payments: 4599, smtp: 2535, mailbox: 2536, database: "ohmstead_e2e" },
   // Several app servers and workers against one database and storage (tests/system, npm run bench:load); app servers take app, app + 1, …
   system: { app: 3200, postgres: 54359, storage: 4609, payments: 4619, smtp: 2545, mailbox: 2546, database: "ohmstead_system" },
+  // A company of thousands of projects for the benchmarks (npm run seed:scale, bench:api, bench:web); never the dev or test data.
+  scale: { app: 3300, postgres: 54369, storage: 4629, payments: 4639, smtp: 2555, mailbox: 2556, database: "ohmstead_scale" },
 };
 
 /** A local-only session secret kept in the git-ignored data folder. */

@@ -215,8 +215,10 @@ export async function getFieldSummary({ viewer, projectId }: { viewer: Viewer; p
   db();
   await getProjectById({ viewer, projectId });
   const where = { projectId, organizationId: viewer.organizationId };
-  const record = await CommissioningRecord.findOne({ where, attributes: ["status", "completedAt"] });
-  const signedForms = await ProjectFile.count({ where: { ...where, kind: "signed-completion" } });
-  const photos = await ProjectFile.count({ where: { ...where, kind: "site-photo" } });
+  const [record, signedForms, photos] = await Promise.all([
+    CommissioningRecord.findOne({ where, attributes: ["status", "completedAt"] }),
+    ProjectFile.count({ where: { ...where, kind: "signed-completion" } }),
+    ProjectFile.count({ where: { ...where, kind: "site-photo" } }),
+  ]);
   return { status: record?.status ?? "not-started", completedAt: record?.completedAt?.toISOString() ?? null, signedForms, photos };
 }
