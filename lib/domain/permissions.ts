@@ -27,6 +27,7 @@ export type Permission =
   | "fees:pay"
   | "fees:refund"
   | "filings:edit"
+  | "desk:view"
   | "organization:edit";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
@@ -47,6 +48,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "fees:pay",
     "fees:refund",
     "filings:edit",
+    "desk:view",
     "organization:edit",
   ],
   coordinator: [
@@ -60,6 +62,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "field:record",
     "fees:pay",
     "filings:edit",
+    "desk:view",
   ],
   installer: ["project:view", "design:review", "field:record"],
 };

@@ -33,6 +33,10 @@ describe("can", () => {
     ["admin", "filings:edit", true],
     ["coordinator", "filings:edit", true],
     ["installer", "filings:edit", false],
+    // The desk lists the office's to-dos: the crew's are on the field page (issue 15).
+    ["admin", "desk:view", true],
+    ["coordinator", "desk:view", true],
+    ["installer", "desk:view", false],
     ["admin", "fees:refund", true],
     ["coordinator", "fees:refund", false],
     ["installer", "fees:refund", false],
