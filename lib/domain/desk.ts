@@ -74,11 +74,17 @@ export function daysBetween(from: string, to: string): number {
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
+/** Days waited beyond an authority's usual review time, or null within it (or with no usual time known). */
+export function beyondUsual(daysWaited: number, usualReviewDays: number | null): number | null {
+  if (usualReviewDays === null) return null;
+  const over = daysWaited - usualReviewDays;
+  return over > 0 ? over : null;
+}
+
 /** Whole days a filing has been in the authority's hands beyond its usual review time, or null when it is not (yet). */
 export function daysPastUsual(filing: Pick<DeskFiling, "status" | "statusSinceDay" | "usualReviewDays">, today: string): number | null {
-  if (!WITH_THE_AUTHORITY.includes(filing.status) || filing.usualReviewDays === null) return null;
-  const over = daysBetween(filing.statusSinceDay, today) - filing.usualReviewDays;
-  return over > 0 ? over : null;
+  if (!WITH_THE_AUTHORITY.includes(filing.status)) return null;
+  return beyondUsual(daysBetween(filing.statusSinceDay, today), filing.usualReviewDays);
 }
 
 function rowOf(

@@ -28,6 +28,7 @@ export type Permission =
   | "fees:refund"
   | "filings:edit"
   | "desk:view"
+  | "profile:edit"
   | "organization:edit";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
@@ -49,6 +50,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "fees:refund",
     "filings:edit",
     "desk:view",
+    "profile:edit",
     "organization:edit",
   ],
   coordinator: [
@@ -63,8 +65,9 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "fees:pay",
     "filings:edit",
     "desk:view",
+    "profile:edit",
   ],
-  installer: ["project:view", "design:review", "field:record"],
+  installer: ["project:view", "design:review", "field:record", "profile:edit"],
 };
 
 // An API token reads on its organization's behalf and never changes anything (README, "Design review API").

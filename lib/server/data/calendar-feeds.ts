@@ -86,7 +86,7 @@ export async function getProfileSettings({ viewer }: { viewer: Viewer }): Promis
  * replaces (revokes) the old. Not for API tokens: the feed is a person's.
  */
 export async function createCalendarFeed({ viewer }: { viewer: Viewer }): Promise<{ url: string }> {
-  if (viewer.apiTokenId) throw new AppError("FORBIDDEN", "A calendar feed belongs to a person.");
+  if (!can(viewer, "profile:edit")) throw new AppError("FORBIDDEN", "A calendar feed belongs to a person.");
   const sequelize = db();
   const { token, tokenHash } = newToken();
   await sequelize.transaction(async (transaction) => {
@@ -101,7 +101,7 @@ export async function createCalendarFeed({ viewer }: { viewer: Viewer }): Promis
 
 /** Turns the viewer's feed off: its address stops answering at once. */
 export async function revokeCalendarFeed({ viewer }: { viewer: Viewer }): Promise<void> {
-  if (viewer.apiTokenId) throw new AppError("FORBIDDEN", "A calendar feed belongs to a person.");
+  if (!can(viewer, "profile:edit")) throw new AppError("FORBIDDEN", "A calendar feed belongs to a person.");
   const sequelize = db();
   await sequelize.transaction(async (transaction) => {
     await User.update(

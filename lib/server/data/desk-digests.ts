@@ -1,7 +1,8 @@
 import "server-only";
 import { QueryTypes } from "sequelize";
 import { DeskDigest, Organization, User } from "@/models";
-import type { Viewer } from "@/lib/domain/permissions";
+import { can, type Viewer } from "@/lib/domain/permissions";
+import { AppError } from "@/lib/errors";
 import { DESK_SECTIONS, DESK_SECTION_TITLES, deskDayText, deskFor, type Desk, type DeskRow } from "@/lib/domain/desk";
 import { calendarDayText } from "@/lib/domain/time-zones";
 import { deskDigestEmail } from "@/templates/email/desk-digest";
@@ -89,6 +90,7 @@ export async function sendDeskDigest({ recipient, today }: { recipient: DigestRe
 
 /** Whether the person receives the morning digest; only their own setting. */
 export async function setDailyDigest({ viewer, enabled }: { viewer: Viewer; enabled: boolean }): Promise<{ enabled: boolean }> {
+  if (!can(viewer, "profile:edit")) throw new AppError("FORBIDDEN", "The digest is each person's own choice.");
   db();
   await User.update({ dailyDigest: enabled }, { where: { id: viewer.id, organizationId: viewer.organizationId } });
   return { enabled };

@@ -1,7 +1,16 @@
 // The coordinator's desk (product rules, issue 15 "Today"): which filings each section lists and in what order.
 // Calendar arithmetic is checked against the Gregorian calendar (2028 is a leap year; 2026-12-31 + 1 day is 2027-01-01).
 import { describe, expect, it } from "vitest";
-import { daysBetween, daysPastUsual, deskDayText, deskFor, deskIsEmpty, digestDayAt, type DeskFiling } from "@/lib/domain/desk";
+import {
+  beyondUsual,
+  daysBetween,
+  daysPastUsual,
+  deskDayText,
+  deskFor,
+  deskIsEmpty,
+  digestDayAt,
+  type DeskFiling,
+} from "@/lib/domain/desk";
 
 const TODAY = "2026-12-07";
 let seq = 0;
@@ -123,6 +132,14 @@ describe("permits about to lapse", () => {
 });
 
 describe("past the authority's usual time", () => {
+  it.each([
+    [11, 10, 1],
+    [10, 10, null],
+    [0, 10, null],
+    [40, 15, 25],
+    [40, null, null],
+  ])("%i days waited against a usual %s: %s past", (waited, usual, over) => expect(beyondUsual(waited, usual)).toBe(over));
+
   it.each([
     ["submitted 12 days ago, usual 10", { status: "submitted" as const, statusSinceDay: "2026-11-25", usualReviewDays: 10 }, 2],
     ["in review exactly the usual time", { status: "in_review" as const, statusSinceDay: "2026-11-27", usualReviewDays: 10 }, null],

@@ -37,6 +37,10 @@ describe("can", () => {
     ["admin", "desk:view", true],
     ["coordinator", "desk:view", true],
     ["installer", "desk:view", false],
+    // Everyone keeps their own digest choice and calendar feed (issue 15).
+    ["admin", "profile:edit", true],
+    ["coordinator", "profile:edit", true],
+    ["installer", "profile:edit", true],
     ["admin", "fees:refund", true],
     ["coordinator", "fees:refund", false],
     ["installer", "fees:refund", false],
