@@ -7,6 +7,10 @@ import { AppError } from "@/lib/errors";
 import { getDesk } from "@/lib/server/data/desk";
 import { listDigestRecipients, sendDeskDigest, setDailyDigest } from "@/lib/server/data/desk-digests";
 import { sendDueDeskDigests } from "@/lib/server/jobs/send-desk-digests";
+import { refreshProjectFacts } from "@/lib/server/data/project-facts";
+import { listProjects } from "@/lib/server/data/projects";
+import { ProjectListQuery } from "@/lib/schemas/project";
+import { db } from "@/lib/server/db";
 import { closeDb } from "../../support/db";
 import { makeOrganization, makeProject, type OrgFixture } from "../../support/fixtures";
 
@@ -137,6 +141,28 @@ describe("the desk", () => {
     // 03:00 UTC on 2026-12-08 is still the evening of 2026-12-07 in New York.
     const { today } = await getDesk({ viewer: org.viewers.coordinator, now: new Date("2026-12-08T03:00:00Z") });
     expect(today).toBe(TODAY);
+  });
+});
+
+describe("the projects list", () => {
+  it("marks a project an authority holds past its usual review time, and only that one", async () => {
+    const DAY = 86_400_000;
+    const made = async (name: string, kind: "permit" | "interconnection", daysAgo: number) => {
+      // Another coordinator's, so the digest's expected rows below stay the first coordinator's.
+      const project = await makeProject(org, { customerName: name, coordinatorId: ids.otherCoordinator });
+      await filing(project.id, kind, { status: "submitted", statusSince: new Date(Date.now() - daysAgo * DAY - 3_600_000) });
+      await db().transaction((transaction) => refreshProjectFacts(project.id, { transaction }));
+      return project.id;
+    };
+    // AHJ usual 10 days, utility usual 15 (set above).
+    const late = await made("Lena Late", "permit", 13);
+    const onTime = await made("Otis OnTime", "permit", 9);
+    const utilityLate = await made("Uma Utility", "interconnection", 20);
+    const { items } = await listProjects({ viewer: org.viewers.admin, query: ProjectListQuery.parse({ pageSize: "100" }) });
+    const mark = (id: string) => items.find((p) => p.id === id)!;
+    expect([mark(late).waitingOn, mark(late).waitingDays, mark(late).pastUsualDays]).toEqual(["ahj", 13, 3]);
+    expect(mark(onTime).pastUsualDays).toBeNull();
+    expect([mark(utilityLate).waitingOn, mark(utilityLate).pastUsualDays]).toEqual(["utility", 5]);
   });
 });
 
