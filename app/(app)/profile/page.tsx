@@ -3,6 +3,7 @@ import { LocalTime } from "@/components/time/local-time";
 import { can } from "@/lib/domain/permissions";
 import { DIGEST_HOURS } from "@/lib/domain/desk";
 import { ROLE_LABELS } from "@/lib/domain/roles";
+import { US_TIME_ZONES } from "@/lib/domain/time-zones";
 import { requireUser } from "@/lib/server/auth";
 import { getProfileSettings } from "@/lib/server/data/calendar-feeds";
 import { getOrganization } from "@/lib/server/data/organizations";
@@ -15,6 +16,7 @@ export const metadata: Metadata = { title: "Your profile" };
 export default async function ProfilePage() {
   const viewer = await requireUser();
   const [settings, organization] = await Promise.all([getProfileSettings({ viewer }), getOrganization({ viewer })]);
+  const zoneLabel = US_TIME_ZONES.find((z) => z.id === organization.timeZone)?.label ?? organization.timeZone;
   const feedScope =
     viewer.role === "installer"
       ? "the projects assigned to you"
@@ -37,9 +39,9 @@ export default async function ProfilePage() {
         {viewer.role === "coordinator" ? (
           <>
             <p className="text-sm text-ink-soft">
-              One e-mail each working morning (Monday to Friday, from {DIGEST_HOURS.from}:00 in {organization.timeZone.replace("_", " ")}{" "}
-              time) with today&apos;s desk: follow-ups due, corrections to answer, inspections this week, permits about to lapse and filings
-              past the authority&apos;s usual time. A morning with nothing on the desk sends nothing.
+              One e-mail each working morning (Monday to Friday, from {DIGEST_HOURS.from}:00 until noon, {zoneLabel} time) with today&apos;s
+              desk: follow-ups due, corrections to answer, inspections this week, permits about to lapse and filings past the
+              authority&apos;s usual time. A morning with nothing on the desk sends nothing.
             </p>
             <DigestToggle enabled={settings.dailyDigest} save={setDailyDigestAction} />
           </>

@@ -32,7 +32,7 @@ test("installer's start page has no desk", async ({ browser }) => {
   await page.context().close();
 });
 
-test("coordinator downloads a booked inspection as a calendar event", async ({ browser }) => {
+test("admin opens a booked inspection from the desk and downloads it as a calendar event", async ({ browser }) => {
   const page = await pageFor(browser, DEMO.admin);
   await page.getByTestId("desk-inspections").getByTestId("desk-row").first().getByRole("link").click();
   const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("inspection-ics").first().click()]);
