@@ -29,14 +29,14 @@ const nextConfig = {
         source: "/projects/:projectId/field",
         headers: [{ key: "Permissions-Policy", value: "camera=(self), microphone=(), geolocation=(), payment=(), usb=()" }],
       },
-      // Inspector links are private by their token: keep them out of search indexes and out of Referer headers.
-      {
-        source: "/share/:path*",
+      // Inspector links and calendar feeds are private by their token: keep them out of search indexes and out of Referer headers.
+      ...["/share/:path*", "/calendar/:path*"].map((source) => ({
+        source,
         headers: [
           { key: "X-Robots-Tag", value: "noindex, nofollow" },
           { key: "Referrer-Policy", value: "no-referrer" },
         ],
-      },
+      })),
     ];
   },
   typedRoutes: false,

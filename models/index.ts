@@ -3,6 +3,7 @@ import { ApiToken } from "./api-token";
 import { AuditEvent } from "./audit-event";
 import { CommissioningRecord } from "./commissioning-record";
 import { Design } from "./design";
+import { DeskDigest } from "./desk-digest";
 import { CorrectionRound } from "./correction-round";
 import { Equipment } from "./equipment";
 import { Filing } from "./filing";
@@ -50,6 +51,7 @@ export { OutboxMessage };
 export { CommissioningRecord, ProjectFile, StorageRemoval };
 export { FeeSchedule, Payment, PaymentLine, ProcessorEvent, Refund };
 export { CorrectionRound, Filing, FilingItem, Inspection };
+export { DeskDigest };
 
 let initialized: Sequelize | null = null;
 
@@ -99,6 +101,7 @@ export function initModels(sequelize: Sequelize) {
   Payment.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
   Refund.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
   for (const model of [Filing, CorrectionRound, Inspection, FilingItem]) model.initModel(sequelize);
+  DeskDigest.initModel(sequelize);
   Filing.belongsTo(Packet, { as: "packet", foreignKey: "packetId" });
   Filing.hasMany(CorrectionRound, { as: "rounds", foreignKey: "filingId" });
   Filing.hasMany(Inspection, { as: "inspections", foreignKey: "filingId" });

@@ -10,6 +10,7 @@ import {
 import type { FilingStatus, HoldState, Stage, WaitingParty } from "@/lib/domain/stored-values";
 import type { Jurisdiction } from "./jurisdiction";
 import type { Utility } from "./utility";
+import type { Filing } from "./filing";
 import type { Design } from "./design";
 import type { User } from "./user";
 
@@ -55,6 +56,7 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
   declare coordinator?: NonAttribute<User | null>;
   declare installer?: NonAttribute<User | null>;
   declare design?: NonAttribute<Design | null>;
+  declare filings?: NonAttribute<Filing[]>;
 
   static initModel(sequelize: Sequelize) {
     Project.init(

@@ -10,6 +10,9 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: string | null;
   declare isActive: CreationOptional<boolean>;
   declare lastSignInAt: Date | null;
+  declare dailyDigest: CreationOptional<boolean>;
+  declare calendarTokenHash: CreationOptional<string | null>;
+  declare calendarTokenCreatedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -25,6 +28,9 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         passwordHash: { type: DataTypes.STRING(100), allowNull: true },
         isActive: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         lastSignInAt: { type: DataTypes.DATE, allowNull: true },
+        dailyDigest: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        calendarTokenHash: { type: DataTypes.STRING(64), allowNull: true },
+        calendarTokenCreatedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

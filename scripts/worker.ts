@@ -1,8 +1,8 @@
-// The background worker: takes packet generations from the PostgreSQL-backed
+// The background worker: takes packet generations and the morning digest from the PostgreSQL-backed
 // queue, sends the e-mail outbox, issues payment receipts and reconciles checkouts. Run beside the app (npm start and npm test start one); in production
 // run as many as needed with `npm run worker`.
 import PgBoss from "pg-boss";
-import { PACKET_QUEUE, type PacketJob } from "@/lib/server/services/jobs";
+import { DESK_DIGEST_CRON, DESK_DIGEST_QUEUE, PACKET_QUEUE, type PacketJob } from "@/lib/server/services/jobs";
 import { deliverDueMail } from "@/lib/server/jobs/deliver-mail";
 import { generatePacket } from "@/lib/server/jobs/generate-packet";
 import { failAbandonedPackets } from "@/lib/server/data/packets";
@@ -10,6 +10,7 @@ import { sweepStorageRemovals } from "@/lib/server/data/storage-removals";
 import { reconcilePendingPayments } from "@/lib/server/use-cases/payments";
 import { pruneSignInAttempts } from "@/lib/server/data/sign-in-throttle";
 import { issueDueReceipts } from "@/lib/server/jobs/issue-receipts";
+import { sendDueDeskDigests } from "@/lib/server/jobs/send-desk-digests";
 
 const url = process.env.DATABASE_URL;
 if (!url) {
@@ -25,6 +26,7 @@ async function startQueue(): Promise<PgBoss> {
     try {
       await boss.start();
       await boss.createQueue(PACKET_QUEUE);
+      await boss.createQueue(DESK_DIGEST_QUEUE);
       return boss;
     } catch (error) {
       if (attempt === 1)
@@ -40,6 +42,15 @@ await boss.work<PacketJob>(PACKET_QUEUE, { pollingIntervalSeconds: 0.5, batchSiz
   await generatePacket(job.data.packetId);
 });
 console.log("• Packet worker is taking jobs.");
+
+// The morning digest: pg-boss's cron puts one run in the queue per quarter hour whichever worker's clock
+// fires (schedules are kept in the database), and a run sends only the digests not yet claimed for the day.
+await boss.schedule(DESK_DIGEST_QUEUE, DESK_DIGEST_CRON, {}, { retryLimit: 1, expireInSeconds: 600 });
+await boss.work(DESK_DIGEST_QUEUE, { pollingIntervalSeconds: 5, batchSize: 1 }, async () => {
+  const { sent } = await sendDueDeskDigests();
+  if (sent) console.log(`• Morning digest: ${sent} queued.`);
+});
+console.log("• Digest worker sends each coordinator's morning digest.");
 
 // The outbox is polled rather than queued in pg-boss: a row committed with the change is the job,
 // and a short cadence keeps mail within a couple of seconds of the change.

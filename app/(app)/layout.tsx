@@ -25,9 +25,9 @@ export default async function AppLayout({ children }: { children: React.ReactNod
           </Link>
           <AppNav links={links} />
           <div className="ml-auto flex items-center gap-3 text-sm">
-            <span className="text-ink-soft" data-testid="viewer">
+            <Link href="/profile" className="text-ink-soft" data-testid="viewer" title="Your profile">
               {viewer.name} · <span className="text-ink-faint">{ROLE_LABELS[viewer.role]}</span>
-            </span>
+            </Link>
             <Link href="/sign-out">Sign out</Link>
           </div>
         </div>

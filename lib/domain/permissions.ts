@@ -27,6 +27,8 @@ export type Permission =
   | "fees:pay"
   | "fees:refund"
   | "filings:edit"
+  | "desk:view"
+  | "profile:edit"
   | "organization:edit";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
@@ -47,6 +49,8 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "fees:pay",
     "fees:refund",
     "filings:edit",
+    "desk:view",
+    "profile:edit",
     "organization:edit",
   ],
   coordinator: [
@@ -60,8 +64,10 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "field:record",
     "fees:pay",
     "filings:edit",
+    "desk:view",
+    "profile:edit",
   ],
-  installer: ["project:view", "design:review", "field:record"],
+  installer: ["project:view", "design:review", "field:record", "profile:edit"],
 };
 
 // An API token reads on its organization's behalf and never changes anything (README, "Design review API").

@@ -33,6 +33,8 @@ export type ProjectDto = {
   waitingSince: string | null;
   /** Whole days the project has waited on that party, as daysInStage counts. */
   waitingDays: number | null;
+  /** Days beyond the usual review time of the AHJ or utility that holds the project (its profile); null within it or when nobody outside holds it. */
+  pastUsualDays: number | null;
   permitStatus: FilingStatus | null;
   interconnectionStatus: FilingStatus | null;
   createdAt: string;

@@ -5,6 +5,7 @@ import { STAGES, type Stage } from "@/lib/domain/stages";
 import { seedDemoCatalog } from "./demo-catalog";
 import { DEMO_JURISDICTION_FEES, DEMO_UTILITY_FEES } from "./demo-fees";
 import { seedDemoDesigns } from "./seed-demo-designs";
+import { seedDemoDesk } from "./seed-demo-desk";
 import { seedDemoFilings } from "./seed-demo-filings";
 import { CUSTOMERS, JURISDICTIONS, ORGANIZATIONS, STAGE_NOTES, STREETS, TOWNS, UTILITIES } from "./demo-scenario";
 import { DEMO_SIGN_INS } from "./demo-sign-ins.mjs";
@@ -115,6 +116,7 @@ async function seedOrganization(
   }
   await seedDemoDesigns(organizationId, t);
   await seedDemoFilings(organizationId, t);
+  await seedDemoDesk(organizationId, t, now);
 }
 
 /** Seeds the invented demo scenario into an empty database; leaves a database with data untouched. */

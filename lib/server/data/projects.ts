@@ -5,6 +5,7 @@ import { CommissioningRecord, Design, Jurisdiction, Project, ProjectFile, StageC
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { NEXT_ACTION, nextActionFor, STAGE_LABELS, STAGES, stageIndex, type Stage } from "@/lib/domain/stages";
 import { skippedFactsText, stageFromFacts, stagesSkippedBy } from "@/lib/domain/filings";
+import { beyondUsual } from "@/lib/domain/desk";
 import { AppError } from "@/lib/errors";
 import type { ProjectListQuery, ProjectValues } from "@/lib/schemas/project";
 import { stageChangedEmail, type StageStep } from "@/templates/email/stage-changed";
@@ -20,8 +21,8 @@ import type { ProjectDto, StageChangeDto } from "@/lib/dto/projects";
 const DAY_MS = 86_400_000;
 
 const INCLUDE = [
-  { model: Jurisdiction, as: "jurisdiction", attributes: ["id", "name", "necEdition"] },
-  { model: Utility, as: "utility", attributes: ["id", "name"] },
+  { model: Jurisdiction, as: "jurisdiction", attributes: ["id", "name", "necEdition", "reviewDays"] },
+  { model: Utility, as: "utility", attributes: ["id", "name", "reviewDays"] },
   { model: User, as: "coordinator", attributes: ["id", "name"] },
   { model: User, as: "installer", attributes: ["id", "name"] },
   // Only the review's outcome: it decides the next action a draft shows.
@@ -29,6 +30,10 @@ const INCLUDE = [
 ];
 
 function toProjectDto(p: Project, now = Date.now()): ProjectDto {
+  const waitingDays = p.waitingSince ? Math.max(0, Math.floor((now - p.waitingSince.getTime()) / DAY_MS)) : null;
+  // Held by an authority: compared with that authority's usual review time (its profile).
+  const usualDays =
+    p.waitingOn === "ahj" ? (p.jurisdiction?.reviewDays ?? null) : p.waitingOn === "utility" ? (p.utility?.reviewDays ?? null) : null;
   return {
     id: p.id,
     number: p.number,
@@ -60,7 +65,8 @@ function toProjectDto(p: Project, now = Date.now()): ProjectDto {
     holdReason: p.holdReason ?? "",
     waitingOn: p.waitingOn ?? null,
     waitingSince: p.waitingSince?.toISOString() ?? null,
-    waitingDays: p.waitingSince ? Math.max(0, Math.floor((now - p.waitingSince.getTime()) / DAY_MS)) : null,
+    waitingDays,
+    pastUsualDays: waitingDays === null ? null : beyondUsual(waitingDays, usualDays),
     permitStatus: p.permitStatus ?? null,
     interconnectionStatus: p.interconnectionStatus ?? null,
     createdAt: p.createdAt.toISOString(),

@@ -1,8 +1,7 @@
 import "server-only";
 import { DEFAULT_TIME_ZONE, localIsoDate, localLongDate } from "@/lib/domain/time-zones";
-import { Op } from "sequelize";
 import { z } from "zod";
-import { Organization, Packet, ShareLink, ShareLinkAccess, ShareLinkMiss, ShareLinkPacket, User } from "@/models";
+import { Organization, Packet, ShareLink, ShareLinkAccess, ShareLinkPacket, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import type { PacketKind, ShareLinkAccessKind } from "@/lib/domain/stored-values";
@@ -15,13 +14,14 @@ import { env } from "../env";
 import { enqueueMail } from "./outbox";
 import { hashToken, newToken } from "../tokens";
 import { getOrganization } from "./organizations";
+import { recordTokenMiss, refuseTokenGuesser, TOKEN_GUESS_THROTTLE } from "./token-guesses";
 import { recordAudit } from "./audit";
 import { isUuid } from "./ids";
 import { getProjectById } from "./projects";
 import type { ShareLinkStatus, ShareLinkDto } from "@/lib/dto/share-links";
 
 /** Unknown tokens allowed per client address and window before every share link answers 429 to it. */
-export const SHARE_THROTTLE = { windowMinutes: 10, maxMisses: 30 };
+export const SHARE_THROTTLE = TOKEN_GUESS_THROTTLE;
 const DAY_MS = 24 * 60 * 60_000;
 
 export type ClientInfo = { address: string; userAgent: string };
@@ -225,18 +225,10 @@ const clip = (client: ClientInfo) => ({ address: client.address.slice(0, 100), u
  */
 async function liveLinkByToken(token: string, client: ClientInfo) {
   const { address } = clip(client);
-  const since = new Date(Date.now() - SHARE_THROTTLE.windowMinutes * 60_000);
-  const misses = await ShareLinkMiss.count({ where: { address, createdAt: { [Op.gte]: since } } });
-  if (misses >= SHARE_THROTTLE.maxMisses)
-    throw new AppError(
-      "LIMIT_EXCEEDED",
-      `Too many unknown links were tried from your network. Wait ${SHARE_THROTTLE.windowMinutes} minutes and try again.`,
-    );
+  await refuseTokenGuesser(address, "links");
   const link = /^[A-Za-z0-9_-]{16,100}$/.test(token) ? await ShareLink.findOne({ where: { tokenHash: hashToken(token) } }) : null;
   if (!link) {
-    await ShareLinkMiss.create({ address });
-    // Misses only matter inside the window; older rows from any address can go.
-    await ShareLinkMiss.destroy({ where: { createdAt: { [Op.lt]: since } } });
+    await recordTokenMiss(address);
     throw new AppError("NOT_FOUND", "This link does not exist. Check that it was copied whole.");
   }
   const status = statusOf(link);

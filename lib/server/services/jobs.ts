@@ -5,6 +5,9 @@ import { env } from "../env";
 /** The queue of packet generations, worked by scripts/worker.ts. */
 export const PACKET_QUEUE = "packet-generate";
 export type PacketJob = { packetId: string };
+/** The morning digest's run, scheduled by the worker with pg-boss's cron (every quarter hour; each run sends what is due). */
+export const DESK_DIGEST_QUEUE = "desk-digest";
+export const DESK_DIGEST_CRON = "*/15 * * * *";
 
 let sender: Promise<PgBoss> | undefined;
 

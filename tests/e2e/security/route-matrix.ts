@@ -62,6 +62,16 @@ export const ROUTES: Record<string, Entry> = {
     roles: ALL,
     exempt: "the link's token is the credential (tests/integration/server/data/share-links)",
   },
+  "GET /calendar/:token": {
+    scope: "org",
+    roles: ALL,
+    exempt: "the feed's token is the credential (tests/integration/server/data/calendar-feeds)",
+  },
+  "GET /api/v1/inspections/:inspectionId/calendar-event": {
+    scope: "project",
+    roles: ALL,
+    url: (t) => `/api/v1/inspections/${t.inspectionId}/calendar-event`,
+  },
   "GET /api/v1/projects": { scope: "org", roles: ALL, url: () => "/api/v1/projects?pageSize=100" },
   "POST /api/v1/projects": {
     scope: "org",
@@ -285,6 +295,9 @@ export const ACTIONS: Record<string, Entry> = {
     page: (t) => `/projects/${t.projectId}/field`,
     args: (t) => [{ projectId: t.projectId, readings: {} }],
   },
+  [`${A}/profile/actions.ts#setDailyDigestAction`]: { scope: "org", roles: ALL, page: () => "/profile", args: () => [{ enabled: false }] },
+  [`${A}/profile/actions.ts#createCalendarFeedAction`]: { scope: "org", roles: ALL, page: () => "/profile", args: () => [{}] },
+  [`${A}/profile/actions.ts#revokeCalendarFeedAction`]: { scope: "org", roles: ALL, page: () => "/profile", args: () => [{}] },
   [`${A}/settings/api-tokens/actions.ts#createApiTokenAction`]: {
     scope: "org",
     roles: ADMIN,
@@ -372,6 +385,7 @@ export const PAGES: Record<string, Entry> = {
   "/share/:token": { scope: "org", roles: ALL, exempt: "the link's token is the credential" },
   "/dashboard": { scope: "org", roles: ALL, url: () => "/dashboard" },
   "/mailbox": { scope: "org", roles: ADMIN, url: () => "/mailbox" },
+  "/profile": { scope: "org", roles: ALL, url: () => "/profile" },
   "/projects/new": { scope: "org", roles: OFFICE, url: () => "/projects/new" },
   "/projects/:projectId": { scope: "project", roles: ALL, url: (t) => `/projects/${t.projectId}` },
   "/projects/:projectId/design": { scope: "project", roles: ALL, url: (t) => `/projects/${t.projectId}/design` },

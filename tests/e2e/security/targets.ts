@@ -15,6 +15,8 @@ export type Targets = {
   fileId: string;
   /** The project's permit filing (items and inspections are tried with this id too: any id of the company's rows will do). */
   filingId: string;
+  /** A booked inspection of that filing, for reads that must answer its owner. */
+  inspectionId: string;
   paymentId: string;
   equipmentId: string;
   jurisdictionId: string;
@@ -150,6 +152,12 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
   );
   const [user] = await query<{ name: string; email: string }>("select name, email from users where id = $1", [userId]);
   const [filing] = await query<{ id: string }>("select id from filings where project_id = $1 and kind = 'permit'", [projectId]);
+  // Booked straight in the table: the permit need not be issued for its calendar event to be tried.
+  const [inspection] = await query<{ id: string }>(
+    `insert into inspections (id, organization_id, filing_id, kind, scheduled_for, time_window, inspector_name, notes, created_at, updated_at)
+     select gen_random_uuid(), organization_id, id, 'final', current_date + 3, '', '', '', now(), now() from filings where id = $1 returning id`,
+    [filing!.id],
+  );
 
   for (const client of [coordinator, admin, crew]) await client.dispose();
   return {
@@ -159,6 +167,7 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
     shareLinkId,
     fileId,
     filingId: filing!.id,
+    inspectionId: inspection!.id,
     paymentId,
     equipmentId: equipment.id,
     jurisdictionId: String(jurisdiction!.id),

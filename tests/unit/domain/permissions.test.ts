@@ -33,6 +33,14 @@ describe("can", () => {
     ["admin", "filings:edit", true],
     ["coordinator", "filings:edit", true],
     ["installer", "filings:edit", false],
+    // The desk lists the office's to-dos: the crew's are on the field page (issue 15).
+    ["admin", "desk:view", true],
+    ["coordinator", "desk:view", true],
+    ["installer", "desk:view", false],
+    // Everyone keeps their own digest choice and calendar feed (issue 15).
+    ["admin", "profile:edit", true],
+    ["coordinator", "profile:edit", true],
+    ["installer", "profile:edit", true],
     ["admin", "fees:refund", true],
     ["coordinator", "fees:refund", false],
     ["installer", "fees:refund", false],

@@ -4,6 +4,7 @@ import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type So
 import Link from "next/link";
 import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
+import { PastUsualMark } from "@/components/desk/past-usual-mark";
 import { StageBadge } from "@/components/ui/stage-badge";
 import { WAITING_PARTIES, WAITING_PARTY_LABELS } from "@/lib/domain/filings";
 import { STAGES, STAGE_LABELS, stageIndex } from "@/lib/domain/stages";
@@ -76,6 +77,7 @@ function WaitingOn({ project }: { project: ProjectDto }) {
     <span data-testid="waiting-on-cell" className="whitespace-nowrap">
       {WAITING_PARTY_LABELS[project.waitingOn]}
       {project.waitingDays !== null ? <span className="measure text-xs text-ink-faint"> · {project.waitingDays} d</span> : null}
+      {project.pastUsualDays !== null ? <PastUsualMark days={project.pastUsualDays} /> : null}
     </span>
   );
 }

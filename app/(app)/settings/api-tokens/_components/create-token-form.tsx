@@ -6,6 +6,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { useActionSubmit } from "@/components/forms/use-action-submit";
 import { Button } from "@/components/ui/button";
+import { CopyField } from "@/components/ui/copy-field";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { CreateApiTokenInput } from "@/lib/schemas/api-token";
@@ -15,23 +16,13 @@ import type { createApiTokenAction } from "../actions";
 export function CreateTokenForm({ create }: { create: typeof createApiTokenAction }) {
   const router = useRouter();
   const [created, setCreated] = useState<{ name: string; token: string }>();
-  const [copied, setCopied] = useState(false);
   const form = useForm<CreateApiTokenInput>({ resolver: zodResolver(CreateApiTokenInput), defaultValues: { name: "" } });
   const { errors, isSubmitting } = form.formState;
   const { submit, message } = useActionSubmit(form, create, (data) => {
     setCreated({ name: data.apiToken.name, token: data.token });
-    setCopied(false);
     form.reset({ name: "" });
     router.refresh();
   });
-
-  async function copy() {
-    if (!created) return;
-    await navigator.clipboard?.writeText(created.token).then(
-      () => setCopied(true),
-      () => setCopied(false),
-    );
-  }
 
   return (
     <div className="space-y-4">
@@ -56,18 +47,7 @@ export function CreateTokenForm({ create }: { create: typeof createApiTokenActio
           <p className="text-sm font-medium">
             Copy the token for “{created.name}” now. It is shown only this once; Ohmstead keeps only a fingerprint of it.
           </p>
-          <div className="flex gap-2">
-            <input
-              aria-label="New API token"
-              readOnly
-              value={created.token}
-              className="input measure flex-1"
-              onFocus={(e) => e.currentTarget.select()}
-            />
-            <Button type="button" variant="secondary" onClick={copy}>
-              {copied ? "Copied" : "Copy"}
-            </Button>
-          </div>
+          <CopyField key={created.token} label="New API token" value={created.token} />
           <p className="text-xs text-ink-soft">
             Send it as the header Authorization: Bearer followed by the token. Store it where your integration keeps secrets; if it leaks,
             revoke it below.

@@ -1,3 +1,4 @@
+import { InspectionCalendarLink } from "@/components/desk/inspection-calendar-link";
 import { INSPECTION_KIND_LABELS, INSPECTION_RESULT_LABELS } from "@/lib/domain/filings";
 import { calendarDayText } from "@/lib/domain/time-zones";
 import type { ProjectFilingsDto } from "@/lib/dto/filings";
@@ -25,6 +26,12 @@ export function FieldInspections({ filings }: { filings: ProjectFilingsDto }) {
                 <span className="text-ink-soft">Booked</span>
               )}
               {inspection.resultOn ? ` on ${calendarDayText(inspection.resultOn)}` : ""}
+              {inspection.scheduledFor && !inspection.result ? (
+                <>
+                  {" · "}
+                  <InspectionCalendarLink inspectionId={inspection.id} />
+                </>
+              ) : null}
             </p>
             {inspection.items.length ? (
               <ul className="mt-1 list-disc pl-5">

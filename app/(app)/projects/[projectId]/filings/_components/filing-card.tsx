@@ -1,3 +1,4 @@
+import { InspectionCalendarLink } from "@/components/desk/inspection-calendar-link";
 import { LocalTime } from "@/components/time/local-time";
 import {
   INSPECTION_KIND_LABELS,
@@ -106,7 +107,12 @@ export function FilingCard(props: Props) {
   const { filing, today, canEdit, actions } = props;
   const byId = new Map(filing.inspections.map((i) => [i.id, i]));
   return (
-    <section className="panel space-y-4" aria-label={props.title} data-testid={`filing-${filing.kind}`}>
+    <section
+      id={`filing-${filing.id}`}
+      className="panel scroll-mt-4 space-y-4"
+      aria-label={props.title}
+      data-testid={`filing-${filing.kind}`}
+    >
       <h2 className="text-base">{props.title}</h2>
       {filing.revisionNeededSince ? (
         <p className="rounded border border-result-warn/40 bg-result-warn/10 px-3 py-2 text-sm" role="status">
@@ -175,6 +181,12 @@ export function FilingCard(props: Props) {
                     {repeats
                       ? ` · re-inspects the ${INSPECTION_KIND_LABELS[repeats.kind].toLowerCase()} of ${calendarDayText(repeats.resultOn ?? repeats.scheduledFor ?? today)}`
                       : ""}
+                    {inspection.scheduledFor && !inspection.result ? (
+                      <>
+                        {" · "}
+                        <InspectionCalendarLink inspectionId={inspection.id} />
+                      </>
+                    ) : null}
                   </p>
                   <p className="mt-1">
                     {inspection.result ? (

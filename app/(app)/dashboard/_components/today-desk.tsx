@@ -1,0 +1,72 @@
+import Link from "next/link";
+import { DESK_SECTIONS, DESK_SECTION_TITLES, deskDayText, deskIsEmpty, type Desk, type DeskRow, type DeskSection } from "@/lib/domain/desk";
+import { calendarDayText } from "@/lib/domain/time-zones";
+
+const EMPTY: Record<DeskSection, string> = {
+  followUps: "No follow-up is due.",
+  corrections: "No correction round waits on the office.",
+  inspections: "No inspection is booked this week.",
+  lapsing: "No permit lapses within a month.",
+  pastUsual: "Every authority is within its usual time.",
+};
+
+const SINCE: Record<DeskSection, string> = {
+  followUps: "Due",
+  corrections: "Received",
+  inspections: "Booked for",
+  lapsing: "Expires",
+  pastUsual: "With them since",
+};
+
+function Row({ row }: { row: DeskRow }) {
+  const href = `/projects/${row.projectId}/filings#filing-${row.filingId}`;
+  return (
+    <li
+      className="flex flex-wrap items-baseline gap-x-3 gap-y-0.5 border-t border-paper-edge py-2 text-sm first:border-t-0"
+      data-testid="desk-row"
+    >
+      <span className="min-w-0 flex-1 basis-64">
+        <Link href={href} className="font-medium">
+          {row.what}
+        </Link>
+        <span className="block text-xs text-ink-soft">
+          <span className="measure">No. {row.projectNumber}</span> · {row.customerName} · {row.toWhom}
+        </span>
+      </span>
+      <span className="whitespace-nowrap text-xs text-ink-soft">
+        {SINCE[row.section]} {calendarDayText(row.since)} · <strong className="font-medium text-ink">{deskDayText(row)}</strong>
+      </span>
+    </li>
+  );
+}
+
+/** The day's desk, one section per kind of work, each row opening its filing. */
+export function TodayDesk({ desk, today, scope }: { desk: Desk; today: string; scope: string }) {
+  return (
+    <section className="space-y-3" aria-labelledby="today-heading" data-testid="today-desk">
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <h1 id="today-heading">Today · {calendarDayText(today)}</h1>
+        <p className="text-xs text-ink-soft">{scope}</p>
+      </div>
+      {deskIsEmpty(desk) ? <p className="panel text-sm text-ink-soft">Nothing to chase today.</p> : null}
+      <div className="grid gap-3 lg:grid-cols-2">
+        {DESK_SECTIONS.filter((s) => !deskIsEmpty(desk) || s === "inspections").map((section) => (
+          <div key={section} className="panel space-y-1" data-testid={`desk-${section}`}>
+            <h3 className="text-sm font-semibold">
+              {DESK_SECTION_TITLES[section]} <span className="measure font-normal text-ink-faint">({desk[section].length})</span>
+            </h3>
+            {desk[section].length ? (
+              <ul>
+                {desk[section].map((row) => (
+                  <Row key={row.key} row={row} />
+                ))}
+              </ul>
+            ) : (
+              <p className="text-sm text-ink-faint">{EMPTY[section]}</p>
+            )}
+          </div>
+        ))}
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,101 @@
+import "server-only";
+import { Op, type WhereOptions } from "sequelize";
+import { CorrectionRound, Filing, FilingItem, Inspection, Jurisdiction, Project, Utility } from "@/models";
+import { can, type Viewer } from "@/lib/domain/permissions";
+import { deskFor, type Desk, type DeskFiling } from "@/lib/domain/desk";
+import { localIsoDate } from "@/lib/domain/time-zones";
+import { AppError } from "@/lib/errors";
+import { db } from "../db";
+import { getOrganization } from "./organizations";
+
+/** A coordinator's desk covers the projects they coordinate; an admin's, the whole company's. */
+function projectsOnDesk(viewer: Viewer): WhereOptions<Project> {
+  const own = viewer.role === "admin" ? {} : { coordinatorId: viewer.id };
+  // Projects set aside (on hold, cancelled) wait on nobody, so they owe nothing today.
+  return { organizationId: viewer.organizationId, holdState: null, ...own };
+}
+
+/** The usual review days of each authority profile of the organization, by id. */
+async function usualReviewDays(organizationId: string): Promise<Map<string, number>> {
+  const [ahjs, utilities] = await Promise.all([
+    Jurisdiction.findAll({ where: { organizationId }, attributes: ["id", "reviewDays"] }),
+    Utility.findAll({ where: { organizationId }, attributes: ["id", "reviewDays"] }),
+  ]);
+  return new Map([...ahjs, ...utilities].map((a) => [a.id, a.reviewDays]));
+}
+
+/** The filings on the viewer's desk as the desk rules read them, with days in the organization's zone. */
+export async function listDeskFilings({ viewer, timeZone }: { viewer: Viewer; timeZone: string }): Promise<DeskFiling[]> {
+  db();
+  const [projects, reviewDays] = await Promise.all([
+    Project.findAll({
+      where: projectsOnDesk(viewer),
+      attributes: ["id", "number", "customerName"],
+      include: [
+        {
+          model: Filing,
+          as: "filings",
+          required: true,
+          where: { status: { [Op.ne]: "withdrawn" } },
+          include: [
+            { model: CorrectionRound, as: "rounds", include: [{ model: FilingItem, as: "items", attributes: ["id", "resolved"] }] },
+            { model: Inspection, as: "inspections", attributes: ["id", "kind", "scheduledFor", "timeWindow", "result"] },
+          ],
+        },
+      ],
+    }),
+    usualReviewDays(viewer.organizationId),
+  ]);
+  return projects.flatMap((p) =>
+    (p.filings ?? []).map((f) => {
+      const round = [...(f.rounds ?? [])].sort((a, b) => b.number - a.number)[0];
+      return {
+        filingId: f.id,
+        projectId: p.id,
+        projectNumber: p.number,
+        customerName: p.customerName,
+        kind: f.kind,
+        authorityName: f.authorityName,
+        status: f.status,
+        statusSinceDay: localIsoDate(f.statusSince.toISOString(), timeZone),
+        expiresOn: f.expiresOn,
+        nextFollowUpOn: f.nextFollowUpOn,
+        usualReviewDays: f.authorityId ? (reviewDays.get(f.authorityId) ?? null) : null,
+        latestRound: round
+          ? {
+              number: round.number,
+              receivedOn: round.receivedOn,
+              answered: round.answeredAt !== null,
+              openItems: (round.items ?? []).filter((i) => !i.resolved).length,
+            }
+          : null,
+        inspections: (f.inspections ?? []).map((i) => ({
+          id: i.id,
+          kind: i.kind,
+          scheduledFor: i.scheduledFor,
+          timeWindow: i.timeWindow,
+          result: i.result,
+        })),
+      } satisfies DeskFiling;
+    }),
+  );
+}
+
+/**
+ * What the viewer has to chase on their organization's calendar day (or on `today`, for a test or the
+ * digest of a given morning). Admins and coordinators only.
+ */
+export async function getDesk({
+  viewer,
+  today,
+  now = new Date(),
+}: {
+  viewer: Viewer;
+  today?: string;
+  now?: Date;
+}): Promise<{ today: string; desk: Desk }> {
+  if (!can(viewer, "desk:view")) throw new AppError("FORBIDDEN", "The desk lists the office's work.");
+  const { timeZone } = await getOrganization({ viewer });
+  const day = today ?? localIsoDate(now.toISOString(), timeZone);
+  return { today: day, desk: deskFor(await listDeskFilings({ viewer, timeZone }), day) };
+}
