@@ -27,7 +27,9 @@ export type Permission =
   | "fees:pay"
   | "fees:refund"
   | "filings:edit"
-  | "organization:edit";
+  | "organization:edit"
+  | "reports:view"
+  | "projects:import";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
   admin: [
@@ -48,6 +50,8 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "fees:refund",
     "filings:edit",
     "organization:edit",
+    "reports:view",
+    "projects:import",
   ],
   coordinator: [
     "project:view",
@@ -60,12 +64,14 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "field:record",
     "fees:pay",
     "filings:edit",
+    "reports:view",
+    "projects:import",
   ],
   installer: ["project:view", "design:review", "field:record"],
 };
 
 // An API token reads on its organization's behalf and never changes anything (README, "Design review API").
-export const API_TOKEN_GRANTS: readonly Permission[] = ["project:view", "catalog:view", "design:review"];
+export const API_TOKEN_GRANTS: readonly Permission[] = ["project:view", "catalog:view", "design:review", "reports:view"];
 
 type ProjectScope = { organizationId: string; installerId: string | null };
 
