@@ -31,3 +31,39 @@ export type ReportsOverview = {
   monthlyApprovals: MonthlyApprovalsRow[];
   stageAging: StageAgingRow[];
 };
+
+/** A filing as the filings export writes it; days are calendar days of the organization's zone. */
+export type FilingExportRow = {
+  projectNumber: number;
+  customerName: string;
+  address: string;
+  kind: string;
+  authorityName: string;
+  status: string;
+  referenceNumber: string | null;
+  channel: string | null;
+  sentTo: string;
+  packetRevision: number | null;
+  submittedOn: string | null;
+  decidedOn: string | null;
+  expiresOn: string | null;
+  nextFollowUpOn: string | null;
+  ptoOn: string | null;
+  rounds: number;
+  inspections: number;
+  inspectionsPassed: number;
+};
+
+/** One line of the bookkeeping export: a payment received or a refund given back, in cents. */
+export type LedgerExportRow = {
+  day: string;
+  entry: "payment" | "refund";
+  projectNumber: number;
+  customerName: string;
+  receiptNumber: string | null;
+  processorReference: string | null;
+  description: string;
+  amountCents: number;
+  currency: string;
+  status: string;
+};

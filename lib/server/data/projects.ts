@@ -91,9 +91,8 @@ function orderFor({ sort, direction }: Pick<ProjectListQuery, "sort" | "directio
 
 const escapeLike = (text: string) => text.replace(/[\\%_]/g, (c) => `\\${c}`);
 
-/** One page of the viewer's projects with search (customer, address, account number, project number) and stage filter. */
-export async function listProjects({ viewer, query }: { viewer: Viewer; query: ProjectListQuery }) {
-  db();
+/** The list's filters: search (customer, address, account number, project number), stage, waiting-on, statuses, hold. */
+function listWhere(viewer: Viewer, query: ProjectListQuery): WhereOptions<Project> {
   const where: WhereOptions<Project>[] = [visibleTo(viewer)];
   if (query.stage) where.push({ stage: query.stage });
   if (query.waitingOn) where.push({ waitingOn: query.waitingOn === "nobody" ? null : query.waitingOn });
@@ -111,8 +110,14 @@ export async function listProjects({ viewer, query }: { viewer: Viewer; query: P
     if (/^\d{1,9}$/.test(query.q)) anyOf.push({ number: Number(query.q) });
     where.push({ [Op.or]: anyOf });
   }
+  return { [Op.and]: where };
+}
+
+/** One page of the viewer's projects, searched, filtered and sorted (see listWhere). */
+export async function listProjects({ viewer, query }: { viewer: Viewer; query: ProjectListQuery }) {
+  db();
   const { rows, count } = await Project.findAndCountAll({
-    where: { [Op.and]: where },
+    where: listWhere(viewer, query),
     include: INCLUDE,
     order: [orderFor(query), ["number", "DESC"]],
     limit: query.pageSize,
@@ -127,6 +132,19 @@ export async function listProjects({ viewer, query }: { viewer: Viewer; query: P
     pageSize: query.pageSize,
     pageCount: Math.max(1, Math.ceil(count / query.pageSize)),
   };
+}
+
+/** Every project the list would show with these filters, in its order (a spreadsheet export), up to `limit`. */
+export async function listAllProjects({ viewer, query, limit }: { viewer: Viewer; query: ProjectListQuery; limit: number }) {
+  db();
+  const rows = await Project.findAll({
+    where: listWhere(viewer, query),
+    include: INCLUDE,
+    order: [orderFor(query), ["number", "DESC"]],
+    limit,
+  });
+  const now = Date.now();
+  return rows.map((r) => toProjectDto(r, now));
 }
 
 async function findVisibleProject(viewer: Viewer, projectId: string, transaction?: Transaction) {
