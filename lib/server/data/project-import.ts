@@ -61,16 +61,10 @@ function summarize(mapping: ImportMapping, problem: string | null, rows: ImportR
   };
 }
 
+type ImportRequest = { viewer: Viewer; csv: string; mapping: ImportMapping };
+
 /** Each row of the file checked as it would be imported; nothing is saved. */
-export async function previewProjectImport({
-  viewer,
-  csv,
-  mapping,
-}: {
-  viewer: Viewer;
-  csv: string;
-  mapping: ImportMapping;
-}): Promise<ImportPreviewDto> {
+export async function previewProjectImport({ viewer, csv, mapping }: ImportRequest): Promise<ImportPreviewDto> {
   assertMayImport(viewer);
   db();
   const sheet = readCsv(csv);
@@ -84,15 +78,7 @@ export async function previewProjectImport({
  * nothing, a project the company already has (same account number and address) is not made twice. Imports
  * of one organization wait for each other, so two at once cannot both add the same project.
  */
-export async function importProjects({
-  viewer,
-  csv,
-  mapping,
-}: {
-  viewer: Viewer;
-  csv: string;
-  mapping: ImportMapping;
-}): Promise<ImportPreviewDto> {
+export async function importProjects({ viewer, csv, mapping }: ImportRequest): Promise<ImportPreviewDto> {
   assertMayImport(viewer);
   const sheet = readCsv(csv);
   if (sheet.problem) return summarize(mapping, sheet.problem, []);
