@@ -1,30 +1,19 @@
+import { DataTable } from "@/components/ui/data-table";
 import { STAGE_LABELS } from "@/lib/domain/stages";
 import { WAITING_PARTY_LABELS } from "@/lib/domain/filings";
 import { AGE_BUCKETS, type CycleTimeRow, type ReportsOverview } from "@/lib/dto/reports";
 
 const percent = (share: number | null) => (share === null ? "—" : `${Math.round(share * 100)} %`);
 const figure = (n: number | null) => (n === null ? "—" : String(n));
-const TH = "px-2 py-1.5 font-medium";
-const TD = "px-2 py-1.5";
-const NUM = "measure px-2 py-1.5 text-right";
+const TD = "px-3 py-2";
+const NUM = "measure px-3 py-2";
 
+/** A table of report figures: the shared bordered table, named for screen readers by its caption. */
 function Table({ caption, head, children }: { caption: string; head: string[]; children: React.ReactNode }) {
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full text-left text-sm">
-        <caption className="sr-only">{caption}</caption>
-        <thead className="border-b border-paper-edge bg-paper-deep/70 text-xs uppercase tracking-wide text-ink-soft">
-          <tr>
-            {head.map((h, i) => (
-              <th key={h} scope="col" className={i === 0 ? TH : `${TH} text-right`}>
-                {h}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>{children}</tbody>
-      </table>
-    </div>
+    <section aria-label={caption}>
+      <DataTable columns={head}>{children}</DataTable>
+    </section>
   );
 }
 

@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
+import { DataTable } from "@/components/ui/data-table";
 import { FormMessage } from "@/components/ui/form-message";
 import type { ActionResult } from "@/lib/dto/action-result";
 import type { ImportPreviewDto, ImportRowDto } from "@/lib/dto/project-import";
@@ -156,28 +157,17 @@ export function ImportWizard({ preview, run }: { preview: Run; run: Run }) {
               ? `${result.counts.imported} imported, ${result.counts.problem} not imported because of a problem, ${result.counts.already} already in Ohmstead.`
               : `${result.counts.ready} ready to import, ${result.counts.problem} with a problem (they will not be imported), ${result.counts.already} already in Ohmstead.`}
           </p>
-          <div className="overflow-x-auto">
-            <table className="w-full text-left text-sm">
-              <thead className="border-b border-paper-edge bg-paper-deep/70 text-xs uppercase tracking-wide text-ink-soft">
-                <tr>
-                  <th className="px-2 py-1.5">Line</th>
-                  <th className="px-2 py-1.5">Project</th>
-                  <th className="px-2 py-1.5">Result</th>
-                </tr>
-              </thead>
-              <tbody>
-                {result.rows.map((row) => (
-                  <tr key={row.line} className="border-b border-paper-edge align-top" data-status={row.status}>
-                    <td className="measure px-2 py-1.5">{row.line}</td>
-                    <td className="px-2 py-1.5">{row.label}</td>
-                    <td className="px-2 py-1.5">
-                      <RowStatus row={row} />
-                    </td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <DataTable columns={["Line", "Project", "Result"]}>
+            {result.rows.map((row) => (
+              <tr key={row.line} className="border-b border-paper-edge align-top" data-status={row.status}>
+                <td className="measure px-3 py-2">{row.line}</td>
+                <td className="px-3 py-2">{row.label}</td>
+                <td className="px-3 py-2">
+                  <RowStatus row={row} />
+                </td>
+              </tr>
+            ))}
+          </DataTable>
           {!done && result.counts.ready > 0 ? (
             <Button type="button" disabled={busy} onClick={() => void send(run, true)}>
               Import {result.counts.ready} {result.counts.ready === 1 ? "project" : "projects"}
