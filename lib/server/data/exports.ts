@@ -14,7 +14,7 @@ function assertMayExport(viewer: Viewer) {
 
 function assertWithinLimit(rows: unknown[]) {
   if (rows.length > EXPORT_ROW_LIMIT)
-    throw new AppError("LIMIT_EXCEEDED", `The export holds more than ${EXPORT_ROW_LIMIT} rows; choose a shorter range of days.`);
+    throw new AppError("TOO_LARGE", `The export holds more than ${EXPORT_ROW_LIMIT} rows; choose a shorter range of days.`);
 }
 
 type Range = { from: string; to: string };
