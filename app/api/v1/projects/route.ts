@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 import { can } from "@/lib/domain/permissions";
+import { localIsoDate } from "@/lib/domain/time-zones";
 import { AppError } from "@/lib/errors";
 import { createProject, listAllProjects, listProjects } from "@/lib/server/data/projects";
 import { EXPORT_ROW_LIMIT } from "@/lib/server/data/exports";
@@ -20,7 +21,8 @@ export const GET = withAuth(
       listAllProjects({ viewer, query, limit: EXPORT_ROW_LIMIT }),
       getOrganization({ viewer }),
     ]);
-    return csvResponse(`projects-${new Date().toISOString().slice(0, 10)}.csv`, toCsv(projectCsvColumns(timeZone), projects));
+    const today = localIsoDate(new Date().toISOString(), timeZone);
+    return csvResponse(`projects-${today}.csv`, toCsv(projectCsvColumns(timeZone), projects));
   },
   { permission: "project:view" },
 );
