@@ -56,50 +56,56 @@ export function DaysToDecisionChart({ rows, title }: { rows: DaysRow[]; title: s
   );
 }
 
-/** Approvals per month: permits solid, interconnection applications dotted. */
-export function MonthlyApprovalsChart({ rows }: { rows: { month: string; permits: number; interconnections: number }[] }) {
+type Series = { key: string; name: string; style: typeof SOLID };
+const blankZero = (v: unknown) => (v ? String(v) : "");
+
+/** Upright bars over categories, each series with its pattern, its name and its figures on the bars. */
+function ColumnChart(props: { label: string; data: object[]; category: string; height: number; series: Series[] }) {
   return (
-    <figure aria-label="Approvals by month" className="break-inside-avoid">
-      <ResponsiveContainer width="100%" height={260}>
-        <BarChart data={rows} margin={{ left: 0, right: 8, top: 16, bottom: 4 }}>
+    <figure aria-label={props.label} className="break-inside-avoid">
+      <ResponsiveContainer width="100%" height={props.height}>
+        <BarChart data={props.data} margin={{ left: 0, right: 8, top: 16, bottom: 4 }}>
           {PATTERNS}
           <CartesianGrid vertical={false} stroke="#ddd3bf" />
-          <XAxis dataKey="month" tick={AXIS} />
+          <XAxis dataKey={props.category} tick={AXIS} />
           <YAxis tick={AXIS} allowDecimals={false} width={32} />
-          <Legend wrapperStyle={{ fontSize: 12, color: INK }} />
-          <Bar dataKey="permits" name="Permits (solid)" {...SOLID} isAnimationActive={false}>
-            <LabelList dataKey="permits" position="top" fontSize={11} fill={INK} formatter={(v: unknown) => (v ? String(v) : "")} />
-          </Bar>
-          <Bar dataKey="interconnections" name="Interconnections (dotted)" {...DOTTED} isAnimationActive={false}>
-            <LabelList
-              dataKey="interconnections"
-              position="top"
-              fontSize={11}
-              fill={INK}
-              formatter={(v: unknown) => (v ? String(v) : "")}
-            />
-          </Bar>
+          {props.series.length > 1 ? <Legend wrapperStyle={{ fontSize: 12, color: INK }} /> : null}
+          {props.series.map((s) => (
+            <Bar key={s.key} dataKey={s.key} name={s.name} {...s.style} isAnimationActive={false}>
+              <LabelList dataKey={s.key} position="top" fontSize={11} fill={INK} formatter={blankZero} />
+            </Bar>
+          ))}
         </BarChart>
       </ResponsiveContainer>
     </figure>
   );
 }
 
+/** Approvals per month: permits solid, interconnection applications dotted. */
+export function MonthlyApprovalsChart({ rows }: { rows: { month: string; permits: number; interconnections: number }[] }) {
+  return (
+    <ColumnChart
+      label="Approvals by month"
+      data={rows}
+      category="month"
+      height={260}
+      series={[
+        { key: "permits", name: "Permits (solid)", style: SOLID },
+        { key: "interconnections", name: "Interconnections (dotted)", style: DOTTED },
+      ]}
+    />
+  );
+}
+
 /** How many active projects have sat in their current stage for how long, one bar per age band. */
 export function StageAgingChart({ buckets }: { buckets: { band: string; projects: number }[] }) {
   return (
-    <figure aria-label="Active projects by days in their current stage" className="break-inside-avoid">
-      <ResponsiveContainer width="100%" height={220}>
-        <BarChart data={buckets} margin={{ left: 0, right: 8, top: 16, bottom: 4 }}>
-          {PATTERNS}
-          <CartesianGrid vertical={false} stroke="#ddd3bf" />
-          <XAxis dataKey="band" tick={AXIS} />
-          <YAxis tick={AXIS} allowDecimals={false} width={32} />
-          <Bar dataKey="projects" name="Active projects" {...HATCHED} isAnimationActive={false}>
-            <LabelList dataKey="projects" position="top" fontSize={12} fill={INK} />
-          </Bar>
-        </BarChart>
-      </ResponsiveContainer>
-    </figure>
+    <ColumnChart
+      label="Active projects by days in their current stage"
+      data={buckets}
+      category="band"
+      height={220}
+      series={[{ key: "projects", name: "Active projects", style: HATCHED }]}
+    />
   );
 }
