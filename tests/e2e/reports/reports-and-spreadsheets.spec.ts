@@ -5,7 +5,7 @@ import { DEMO, pageFor } from "../support/session";
 
 // The reports API checked against a calculation made here from the filings API alone: the median and
 // 90th percentile by linear interpolation between neighbours (PostgreSQL 16 manual §9.21, percentile_cont;
-// the same as NIST/SEMATECH e-Handbook §7.2.6.2 method with (n − 1)p positions), shares and means by hand.
+// positions (n − 1)p counted from 0), shares and means by hand.
 type Filing = {
   authority: { kind: string; id: string };
   status: string;
