@@ -6,7 +6,7 @@ import { isSameOrigin } from "@/lib/net/same-origin";
 import { env } from "@/lib/server/env";
 
 const SESSION_COOKIES = ["next-auth.session-token", "__Secure-next-auth.session-token"];
-const SIGNED_IN_AREAS = ["/dashboard", "/projects", "/settings", "/mailbox", "/profile"];
+const SIGNED_IN_AREAS = ["/dashboard", "/projects", "/reports", "/settings", "/mailbox", "/profile"];
 /** The framework's own limit on a server action's body (next.config serverActions.bodySizeLimit, default 1 MB). */
 const ACTION_BODY_LIMIT_BYTES = 1024 * 1024;
 

@@ -14,6 +14,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   const links = [
     { href: "/dashboard", label: "Projects" },
     ...(can(viewer, "project:create") ? [{ href: "/projects/new", label: "New project" }] : []),
+    ...(can(viewer, "reports:view") ? [{ href: "/reports", label: "Reports" }] : []),
     ...(can(viewer, "settings:view") ? [{ href: "/settings", label: "Settings" }] : []),
   ];
   return (

@@ -29,7 +29,9 @@ export type Permission =
   | "filings:edit"
   | "desk:view"
   | "profile:edit"
-  | "organization:edit";
+  | "organization:edit"
+  | "reports:view"
+  | "projects:import";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
   admin: [
@@ -52,6 +54,8 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "desk:view",
     "profile:edit",
     "organization:edit",
+    "reports:view",
+    "projects:import",
   ],
   coordinator: [
     "project:view",
@@ -66,12 +70,14 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "filings:edit",
     "desk:view",
     "profile:edit",
+    "reports:view",
+    "projects:import",
   ],
   installer: ["project:view", "design:review", "field:record", "profile:edit"],
 };
 
 // An API token reads on its organization's behalf and never changes anything (README, "Design review API").
-export const API_TOKEN_GRANTS: readonly Permission[] = ["project:view", "catalog:view", "design:review"];
+export const API_TOKEN_GRANTS: readonly Permission[] = ["project:view", "catalog:view", "design:review", "reports:view"];
 
 type ProjectScope = { organizationId: string; installerId: string | null };
 

@@ -30,7 +30,7 @@ export default async function DashboardPage() {
               : "Every project of your company, from draft to permission to operate."}
           </p>
         </div>
-        <ProjectsTable canCreate={can(viewer, "project:create")} />
+        <ProjectsTable canCreate={can(viewer, "project:create")} canExport={can(viewer, "reports:view")} />
       </div>
     </div>
   );

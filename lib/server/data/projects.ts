@@ -157,6 +157,19 @@ export async function listProjects({ viewer, query }: { viewer: Viewer; query: P
   };
 }
 
+/** Every project the list would show with these filters, in its order (a spreadsheet export), up to `limit`. */
+export async function listAllProjects({ viewer, query, limit }: { viewer: Viewer; query: ProjectListQuery; limit: number }) {
+  db();
+  const rows = await Project.findAll({
+    where: listWhere(viewer, query),
+    include: INCLUDE,
+    order: [orderFor(query), ["number", "DESC"]],
+    limit,
+  });
+  const now = Date.now();
+  return rows.map((r) => toProjectDto(r, now));
+}
+
 async function findVisibleProject(viewer: Viewer, projectId: string, transaction?: Transaction) {
   // A malformed id is just another project the viewer cannot see.
   if (!isUuid(projectId)) throw new AppError("NOT_FOUND", "No such project.");
@@ -210,30 +223,39 @@ export async function createProject({ viewer, values }: { viewer: Viewer; values
   const sequelize = db();
   if (!can(viewer, "project:create")) throw new AppError("FORBIDDEN", "You cannot create projects.");
   await assertReferences(viewer, values);
-  const id = await sequelize.transaction(async (transaction) => {
-    const project = await Project.create(
-      { ...values, organizationId: viewer.organizationId, stage: "draft", stageChangedAt: new Date() },
-      { transaction },
-    );
-    await StageChange.create(
-      {
-        organizationId: viewer.organizationId,
-        projectId: project.id,
-        fromStage: null,
-        toStage: "draft",
-        changedById: viewer.id,
-        note: "Project created",
-      },
-      { transaction },
-    );
-    await recordAudit(
-      { viewer, action: "project.created", entityType: "project", entityId: project.id, changes: diffFields({}, values) },
-      { transaction },
-    );
-    await ensureDefaultFilings(project, { transaction, actorId: viewer.id });
-    return project.id;
-  });
+  const { id } = await sequelize.transaction((transaction) => insertProject({ viewer, values, transaction }));
   return readFreshProject(viewer, id);
+}
+
+/**
+ * A new draft project with its first timeline entry, audit row and default filings, inside the caller's
+ * transaction. The caller has checked the permission and that every reference is the organization's.
+ */
+export async function insertProject({
+  viewer,
+  values,
+  transaction,
+  note = "Project created",
+}: {
+  viewer: Viewer;
+  values: ProjectValues;
+  transaction: Transaction;
+  note?: string;
+}): Promise<{ id: string; number: number }> {
+  const project = await Project.create(
+    { ...values, organizationId: viewer.organizationId, stage: "draft", stageChangedAt: new Date() },
+    { transaction },
+  );
+  await StageChange.create(
+    { organizationId: viewer.organizationId, projectId: project.id, fromStage: null, toStage: "draft", changedById: viewer.id, note },
+    { transaction },
+  );
+  await recordAudit(
+    { viewer, action: "project.created", entityType: "project", entityId: project.id, changes: diffFields({}, values) },
+    { transaction },
+  );
+  await ensureDefaultFilings(project, { transaction, actorId: viewer.id });
+  return { id: project.id, number: project.number };
 }
 
 export async function updateProject({

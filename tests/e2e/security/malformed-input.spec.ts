@@ -93,9 +93,39 @@ test("JSON routes answer hostile bodies with a readable 4xx", async ({ targets }
 
 test("query strings of list routes answer hostile values with a readable 4xx", async () => {
   const client = clients.get("coordinator")!;
-  const values = ["", "-1", "0", "1e400", "NaN", "Infinity", "%00", "\u0000", "x".repeat(5_000), "constructor", "__proto__", "[]", "{}"];
-  for (const path of ["/api/v1/projects", "/api/v1/equipment"]) {
-    for (const name of ["page", "pageSize", "sort", "direction", "q", "stage", "kind", "constructor", "__proto__"]) {
+  const values = [
+    "",
+    "-1",
+    "0",
+    "1e400",
+    "NaN",
+    "Infinity",
+    "%00",
+    "\u0000",
+    "x".repeat(5_000),
+    "constructor",
+    "__proto__",
+    "[]",
+    "{}",
+    "2026-02-30",
+  ];
+  const reports = ["/api/v1/reports/cycle-times", "/api/v1/reports/filings", "/api/v1/reports/payments"];
+  for (const path of ["/api/v1/projects", "/api/v1/equipment", ...reports]) {
+    for (const name of [
+      "page",
+      "pageSize",
+      "sort",
+      "direction",
+      "q",
+      "stage",
+      "kind",
+      "groupBy",
+      "from",
+      "to",
+      "format",
+      "constructor",
+      "__proto__",
+    ]) {
       for (const value of values) {
         const res = await client.get(`${path}?${name}=${encodeURIComponent(value)}`);
         record(`${path}?${name}`, res.status(), await res.text());

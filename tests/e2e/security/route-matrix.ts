@@ -80,6 +80,9 @@ export const ROUTES: Record<string, Entry> = {
     body: (t) => ({ ...t.bodies.project, customerName: `Should not exist ${t.stamp}` }),
   },
   "GET /api/v1/projects/:projectId": { scope: "project", roles: ALL, url: project },
+  "GET /api/v1/reports/cycle-times": { scope: "org", roles: OFFICE, url: () => "/api/v1/reports/cycle-times?groupBy=utility" },
+  "GET /api/v1/reports/filings": { scope: "org", roles: OFFICE, url: () => "/api/v1/reports/filings?from=2020-01-01&to=2030-12-31" },
+  "GET /api/v1/reports/payments": { scope: "org", roles: OFFICE, url: () => "/api/v1/reports/payments?from=2020-01-01&to=2030-12-31" },
   "PUT /api/v1/projects/:projectId": {
     scope: "project",
     roles: OFFICE,
@@ -162,7 +165,44 @@ export const ROUTES: Record<string, Entry> = {
 };
 
 const A = "app/(app)";
+const IMPORT_CSV = (t: Targets) => `Customer,Street,City,State,ZIP\r\nShould not exist ${t.stamp},1 Nowhere Rd,Fernwick,CO,80301\r\n`;
+// The first five columns feed the required fields; the rest stay blank.
+const IMPORT_MAPPING = {
+  customerName: 0,
+  street: 1,
+  city: 2,
+  state: 3,
+  postalCode: 4,
+  ...Object.fromEntries(
+    [
+      "customerEmail",
+      "customerPhone",
+      "jurisdiction",
+      "utility",
+      "utilityAccountNumber",
+      "meterNumber",
+      "mainBreakerA",
+      "busbarA",
+      "serviceVoltageV",
+      "servicePhases",
+      "coordinator",
+      "installer",
+    ].map((k) => [k, null]),
+  ),
+};
 export const ACTIONS: Record<string, Entry> = {
+  [`${A}/projects/import/actions.ts#previewProjectImportAction`]: {
+    scope: "org",
+    roles: OFFICE,
+    page: () => "/projects/import",
+    args: (t) => [{ csv: IMPORT_CSV(t), mapping: IMPORT_MAPPING }],
+  },
+  [`${A}/projects/import/actions.ts#importProjectsAction`]: {
+    scope: "org",
+    roles: OFFICE,
+    page: () => "/projects/import",
+    args: (t) => [{ csv: IMPORT_CSV(t), mapping: IMPORT_MAPPING }],
+  },
   [`${A}/projects/actions.ts#createProjectAction`]: {
     scope: "org",
     roles: OFFICE,
@@ -387,6 +427,8 @@ export const PAGES: Record<string, Entry> = {
   "/mailbox": { scope: "org", roles: ADMIN, url: () => "/mailbox" },
   "/profile": { scope: "org", roles: ALL, url: () => "/profile" },
   "/projects/new": { scope: "org", roles: OFFICE, url: () => "/projects/new" },
+  "/projects/import": { scope: "org", roles: OFFICE, url: () => "/projects/import" },
+  "/reports": { scope: "org", roles: OFFICE, url: () => "/reports" },
   "/projects/:projectId": { scope: "project", roles: ALL, url: (t) => `/projects/${t.projectId}` },
   "/projects/:projectId/design": { scope: "project", roles: ALL, url: (t) => `/projects/${t.projectId}/design` },
   "/projects/:projectId/documents": { scope: "project", roles: ALL, url: (t) => `/projects/${t.projectId}/documents` },

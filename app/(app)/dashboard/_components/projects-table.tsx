@@ -82,7 +82,7 @@ function WaitingOn({ project }: { project: ProjectDto }) {
   );
 }
 
-export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
+export function ProjectsTable({ canCreate, canExport = false }: { canCreate: boolean; canExport?: boolean }) {
   const [search, setSearch] = useState("");
   const [q, setQ] = useState("");
   const [stage, setStage] = useState("");
@@ -114,6 +114,8 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
   }, [page, q, stage, waiting, hold, sorting]);
 
   const { data, error, isLoading } = useSWR(url, fetchJson, { keepPreviousData: true });
+  // The spreadsheet holds every project these filters keep, in this order, not only this page.
+  const csvUrl = url.replace(/page=\d+&pageSize=\d+&?/, "format=csv&");
 
   // eslint-disable-next-line react-hooks/incompatible-library -- the table object is recreated each render and never memoized; nothing here relies on the compiler
   const table = useReactTable({
@@ -209,6 +211,11 @@ export function ProjectsTable({ canCreate }: { canCreate: boolean }) {
             <option value="cancelled">Cancelled</option>
           </select>
         </div>
+        {canExport ? (
+          <a href={csvUrl} download className="py-2 text-sm">
+            Download CSV
+          </a>
+        ) : null}
         {canCreate ? (
           <Link
             href="/projects/new"
