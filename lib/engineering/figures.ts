@@ -9,7 +9,7 @@ import { governingLoadSideRule } from "./checks/point-of-connection";
 import { rapidShutdownMethod, shutdownStringVoltageV } from "./checks/rapid-shutdown";
 import { coldModuleVoc } from "./checks/string-voltage";
 import { runVoltageDrop } from "./checks/voltage-drop";
-import { totalInverterOutputA } from "./design-lookup";
+import { countedSourceCurrent } from "./storage";
 import { unlessInputError as figure } from "./errors";
 import { sizeLabel } from "./tables/conductor-sizes";
 import type { CheckResult, CheckStatus, ConductorRun, Design, PvString, Site } from "./types";
@@ -148,7 +148,9 @@ function connectionFigures(design: Design, site: Site, checks: CheckResult[]): C
       ? "service-rating"
       : s.loadSideAt === "feeder"
         ? "feeder"
-        : (governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design), { isDwelling: site.isDwelling }))?.rule ?? null);
+        : (governingLoadSideRule(
+            evaluateLoadSideRules(s, countedSourceCurrent(design, site.necEdition).currentA, { isDwelling: site.isDwelling }),
+          )?.rule ?? null);
   return { method: s.connection, rule, status: worstStatus(checks.filter(isConnectionCheck).map((c) => c.status)) };
 }
 
