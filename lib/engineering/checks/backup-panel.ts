@@ -79,7 +79,8 @@ function backupBusbar(design: StoredDesign, site: Site, p: BackupLoadsPanel): Ch
       field: "storage.backupPanel.otherBreakersA",
     });
   }
-  const shown = outcomes.find((o) => o.applies) ?? outcomes[0]!;
+  // Show the most generous rule the panel could use, as the main panel's result does.
+  const shown = outcomes.find((o) => o.rule === "120%" && o.applies) ?? outcomes.find((o) => o.applies) ?? outcomes[0]!;
   return makeCheck({
     ...base,
     status: "fail",
