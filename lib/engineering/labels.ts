@@ -47,6 +47,7 @@ export interface StorageLabelFacts {
   powerControlSettingA: number | null; // counted at the point of connection (705.13)
   single120Supply: boolean; // a single 120 V backup supply feeds a 120/240 V backup panel
   backupPanel: { inverterBreakerA: number; sourceA: number } | null;
+  batteryInverter?: { outputA: number; breakerA: number }; // AC-coupled: a third source on the panel
 }
 
 // The wording each edition prescribes, from memory (none of the editions' text was at hand; the tests
@@ -168,9 +169,12 @@ export function requiredLabels(f: LabelFacts): WarningLabel[] {
     });
   }
   if (f.connection === "load-side") {
+    const storageSource = f.storage?.batteryInverter;
     add("multiple-sources", "Panel fed by more than one source", "multipleSourcesMarking", {
       placement: "On the panel the solar system feeds",
-      text: `CAUTION: THIS PANEL IS FED BY TWO SOURCES\nUTILITY SERVICE AND SOLAR PV SYSTEM (${fmt(f.inverterOutputA)} A AT ${f.acVoltageV} V AC THROUGH THE ${f.pvBreakerA} A PV BREAKER)`,
+      text: storageSource
+        ? `CAUTION: THIS PANEL IS FED BY THREE SOURCES\nUTILITY SERVICE, SOLAR PV SYSTEM (${fmt(f.inverterOutputA)} A AT ${f.acVoltageV} V AC THROUGH THE ${f.pvBreakerA} A PV BREAKER)\nAND ENERGY STORAGE SYSTEM (${fmt(storageSource.outputA)} A THROUGH THE ${storageSource.breakerA} A BREAKER)`
+        : `CAUTION: THIS PANEL IS FED BY TWO SOURCES\nUTILITY SERVICE AND SOLAR PV SYSTEM (${fmt(f.inverterOutputA)} A AT ${f.acVoltageV} V AC THROUGH THE ${f.pvBreakerA} A PV BREAKER)`,
       explanation:
         "The panel stays live from the solar system when the utility is off, and the other way round. The code asks that every source be named, not for set words.",
       values: { inverterOutputA: f.inverterOutputA, acVoltageV: f.acVoltageV, pvBreakerA: f.pvBreakerA },
@@ -238,7 +242,7 @@ function addStorageLabels(edition: NecEdition, s: StorageLabelFacts, add: AddLab
   if (s.backupPanel) {
     add("backup-panel-sources", "Backup panel fed by more than one source", "multipleSourcesMarking", {
       placement: "On the backup loads panel",
-      text: `CAUTION: THIS PANEL IS FED BY TWO SOURCES\nUTILITY SERVICE AND THE BATTERY INVERTER (${fmt(s.backupPanel.sourceA)} A THROUGH THE ${s.backupPanel.inverterBreakerA} A BREAKER)`,
+      text: `CAUTION: THIS PANEL IS FED BY TWO SOURCES\nUTILITY SERVICE AND THE MULTIMODE INVERTER (${fmt(s.backupPanel.sourceA)} A THROUGH THE ${s.backupPanel.inverterBreakerA} A BREAKER)`,
       explanation:
         "The backup panel stays live from the batteries when the utility is off. The code asks that every source be named, not for set words.",
       values: { sourceA: s.backupPanel.sourceA, inverterBreakerA: s.backupPanel.inverterBreakerA },

@@ -164,5 +164,9 @@ function labelFacts(design: StoredDesign, site: Site): StorageLabelFacts {
     powerControlSettingA: counted?.by === "power-control-system" ? counted.currentA : null,
     single120Supply: s.backupOutput?.voltageV === 120 && s.backupPanel?.voltageV === 240,
     backupPanel: s.backupPanel && sourceA !== null ? { inverterBreakerA: s.backupPanel.inverterBreakerA, sourceA: round(sourceA) } : null,
+    batteryInverter:
+      s.coupling === "ac" && s.batteryInverter
+        ? { outputA: s.batteryInverter.acOutputCurrentA, breakerA: s.batteryInverter.breakerA }
+        : undefined,
   };
 }

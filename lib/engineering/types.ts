@@ -147,7 +147,7 @@ export interface ServicePanel {
   connection: "load-side" | "supply-side";
   pvBreakerA: number; // backfed breaker, or the supply-side disconnect's OCPD
   pvBreakerAtOppositeEnd: boolean;
-  otherBreakersA?: number[]; // every other breaker on the bus except the main, for the sum rule
+  otherBreakersA?: number[]; // every other breaker on the bus except the main (an AC-coupled battery inverter's among them), for the sum rule
   serviceConductorAmpacityA?: number; // supply side; defaults to the main rating
   serviceConductor?: { size: ConductorSize; material: ConductorMaterial }; // largest ungrounded service-entrance conductor (Table 250.66)
   panelFeed?: "end" | "center"; // where the supply enters the busbar; default end-fed

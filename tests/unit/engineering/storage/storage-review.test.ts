@@ -127,6 +127,13 @@ describe("the storage labels", () => {
     expect(all.find((x) => x.id === "power-source-directory")!.text).toContain("ENERGY STORAGE SYSTEM DISCONNECT: GARAGE");
   });
 
+  test("an AC-coupled battery inverter is named on the main panel as a third source; DC-coupled storage adds none", () => {
+    const ac = labels(2020, acStorage()).find((x) => x.id === "multiple-sources")!;
+    expect(ac.text).toContain("THREE SOURCES");
+    expect(ac.text).toContain("ENERGY STORAGE SYSTEM (24 A THROUGH THE 30 A BREAKER)");
+    expect(labels(2020).find((x) => x.id === "multiple-sources")!.text).toContain("TWO SOURCES");
+  });
+
   test("storage entries that fail review print no storage labels", () => {
     const broken = dcStorage({ banks: [] });
     expect(labels(2020, broken).some((x) => x.id.startsWith("ess-"))).toBe(false);
