@@ -10,6 +10,7 @@ import { rapidShutdownMethod, shutdownStringVoltageV } from "./checks/rapid-shut
 import { coldModuleVoc } from "./checks/string-voltage";
 import { runVoltageDrop } from "./checks/voltage-drop";
 import { countedSourceCurrent } from "./storage";
+import type { StorageFigures } from "./storage-review";
 import { unlessInputError as figure } from "./errors";
 import { sizeLabel } from "./tables/conductor-sizes";
 import type { CheckResult, CheckStatus, ConductorRun, Design, PvString, Site } from "./types";
@@ -55,6 +56,7 @@ export type ReviewFigures = {
   inverterOutputs: InverterOutputFigures[];
   pointOfConnection: ConnectionFigures;
   runs: RunFigures[];
+  storage?: StorageFigures; // present only for a design with storage (storage-review.ts)
 };
 
 const RUN_CHECKS = [

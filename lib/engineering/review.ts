@@ -23,14 +23,7 @@ import { type SystemRatings, checkDcToAcRatio, checkModuleCount, systemRatings }
 import { checkWiringMethods } from "./checks/wiring-methods";
 import { isDcRun, totalInverterOutputA } from "./design-lookup";
 import { countedSourceCurrent, hasStorage } from "./storage";
-import {
-  type StorageFigures,
-  type StorageSummary,
-  storageChecks,
-  storageFigures,
-  storageLabelFacts,
-  storageSummary,
-} from "./storage-review";
+import { type StorageSummary, storageChecks, storageFigures, storageLabelFacts, storageSummary } from "./storage-review";
 import { DesignInputError } from "./errors";
 import { reviewFigures, type ReviewFigures } from "./figures";
 import { type WarningLabel, requiredLabels } from "./labels";
@@ -55,7 +48,7 @@ export interface ReviewResult {
   labels: WarningLabel[];
   summary: ReviewSummary;
   /** Every figure behind the checks, per string, inverter output, run and at the point of connection. */
-  figures: ReviewFigures & { storage?: StorageFigures };
+  figures: ReviewFigures;
   /** The batteries in brief; present only for a design with storage. */
   storage?: StorageSummary;
 }
