@@ -73,6 +73,20 @@ export const CLAUSES = {
   rapidShutdownLabel: { 2017: "690.56(C)(1)(a)", 2020: "690.56(C)(1)(a)", 2023: "690.12(D)" },
   rapidShutdownSwitchLabel: { 2017: "690.56(C)(3)", 2020: "690.56(C)(3)", 2023: "690.12(D)" },
   directory: same("705.10"),
+  // Energy storage (Article 706). 2017 numbered the disconnect 706.7; 2020 moved it to 706.15 (from memory).
+  // 2023 706.15(B) location and (C) marking: trade summaries of the 2023 changes; 2017 and 2020 items from memory.
+  essDisconnect: { 2017: "706.7", 2020: "706.15", 2023: "706.15" },
+  essDisconnectLocation: { 2017: "706.7(A)", 2020: "706.15(A)", 2023: "706.15(B)" },
+  essDisconnectLabel: { 2017: "706.7(D)", 2020: "706.15(C)", 2023: "706.15(C)" },
+  // Battery circuits at 125 % of the maximum current: 706.30 in the three editions (2023 per a trade summary,
+  // earlier from memory); the overcurrent device 706.21 in 2017, 706.31 from 2020 (from memory, 2023 per the summary).
+  essCircuitCurrent: same("706.30(A)"),
+  essCircuitSizing: same("706.30(B)"),
+  essOcpd: { 2017: "706.21", 2020: "706.31", 2023: "706.31" },
+  // Stand-alone (backup) supply: output may be below the calculated load but covers the largest single load
+  // (710.15(A)); a single 120 V supply may feed a 120/240 V panel with no multiwire branch circuits (710.15(C)). From memory.
+  standAloneSupply: same("710.15(A)"),
+  singleSupply120: same("710.15(C)"),
 } as const satisfies Record<string, ByEdition>;
 
 export type ClauseId = keyof typeof CLAUSES;
@@ -92,6 +106,8 @@ export const EDITION_ONLY_CLAUSES = {
   interactivePointLabel: { 2017: "690.54", 2020: "690.54", 2023: null },
   // Busbars feeding feed-through lugs: 2020 705.12(B)(3)(6), 2023 705.12(B)(6); 2017 has no such item (from memory).
   feedThrough: { 2017: null, 2020: "705.12(B)(3)(6)", 2023: "705.12(B)(6)" },
+  // Power control systems limiting the current on busbars and conductors: new in 2020 (from memory; REFERENCE.md).
+  powerControl: { 2017: null, 2020: "705.13", 2023: "705.13" },
 } as const satisfies Record<string, SomeEditions>;
 
 export type EditionOnlyClauseId = keyof typeof EDITION_ONLY_CLAUSES;

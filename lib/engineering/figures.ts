@@ -9,7 +9,8 @@ import { governingLoadSideRule } from "./checks/point-of-connection";
 import { rapidShutdownMethod, shutdownStringVoltageV } from "./checks/rapid-shutdown";
 import { coldModuleVoc } from "./checks/string-voltage";
 import { runVoltageDrop } from "./checks/voltage-drop";
-import { totalInverterOutputA } from "./design-lookup";
+import { countedSourceCurrent } from "./storage";
+import type { StorageFigures } from "./storage-review";
 import { unlessInputError as figure } from "./errors";
 import { sizeLabel } from "./tables/conductor-sizes";
 import type { CheckResult, CheckStatus, ConductorRun, Design, PvString, Site } from "./types";
@@ -55,6 +56,7 @@ export type ReviewFigures = {
   inverterOutputs: InverterOutputFigures[];
   pointOfConnection: ConnectionFigures;
   runs: RunFigures[];
+  storage?: StorageFigures; // present only for a design with storage (storage-review.ts)
 };
 
 const RUN_CHECKS = [
@@ -148,7 +150,9 @@ function connectionFigures(design: Design, site: Site, checks: CheckResult[]): C
       ? "service-rating"
       : s.loadSideAt === "feeder"
         ? "feeder"
-        : (governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design), { isDwelling: site.isDwelling }))?.rule ?? null);
+        : (governingLoadSideRule(
+            evaluateLoadSideRules(s, countedSourceCurrent(design, site.necEdition).currentA, { isDwelling: site.isDwelling }),
+          )?.rule ?? null);
   return { method: s.connection, rule, status: worstStatus(checks.filter(isConnectionCheck).map((c) => c.status)) };
 }
 

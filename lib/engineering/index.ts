@@ -106,3 +106,6 @@ export { table5AreaIn2, table5Insulation, type Table5Insulation } from "./tables
 export { tableAmpacityA } from "./tables/ampacity";
 export { vocCorrectionFactor } from "./tables/voc-correction";
 export * from "./commissioning";
+export { DEFAULT_ESS_SITING } from "./checks/ess-siting";
+export { countedSourceCurrent, type CountedSourceCurrent } from "./storage";
+export type { StorageCircuitFigure, StorageFigures, StorageLocationFigure, StorageSummary } from "./storage-review";

@@ -35,6 +35,19 @@ export interface LabelFacts {
   serviceLocation?: string;
   pvDisconnectLocation?: string;
   hasDcRuns?: boolean; // DC circuits run in raceways, cables or enclosures on or in the building
+  storage?: StorageLabelFacts; // absent for a PV-only design
+}
+
+/** What the storage labels print. */
+export interface StorageLabelFacts {
+  essVoltageV: number; // the batteries' nominal voltage
+  faultCurrentA?: number;
+  disconnectLocation?: string;
+  disconnectOutOfSight: boolean; // the ESS disconnect is not within sight of the batteries
+  powerControlSettingA: number | null; // counted at the point of connection (705.13)
+  single120Supply: boolean; // a single 120 V backup supply feeds a 120/240 V backup panel
+  backupPanel: { inverterBreakerA: number; sourceA: number } | null;
+  batteryInverter?: { outputA: number; breakerA: number }; // AC-coupled: a third source on the panel
 }
 
 // The wording each edition prescribes, from memory (none of the editions' text was at hand; the tests
@@ -65,6 +78,9 @@ export const DC_CIRCUIT_WORDS: Readonly<Record<NecEdition, string>> = {
   2023: "SOLAR PV DC CIRCUIT",
 };
 
+// 710.15(C): a single 120 V supply feeding a 120/240 V panel is marked with this warning (from memory).
+export const SINGLE_120_SUPPLY_WORDS = "WARNING:\nSINGLE 120-VOLT SUPPLY.\nDO NOT CONNECT MULTIWIRE BRANCH CIRCUITS.";
+
 // How the rapid shutdown label is to look, by edition (from memory; 2023 dropped the colour and reflectivity rules per a trade summary).
 const RAPID_SHUTDOWN_FORMAT: Readonly<Record<NecEdition, string>> = {
   2017: "Reflective, capital letters at least 3/8 in high, white on red for the title.",
@@ -72,14 +88,17 @@ const RAPID_SHUTDOWN_FORMAT: Readonly<Record<NecEdition, string>> = {
   2023: "Capital letters at least 3/8 in high, with a simple diagram of the building and its roof; colours as the AHJ requires.",
 };
 
+type Label = Omit<WarningLabel, "id" | "title" | "clause" | "edition" | "values" | "prescribed"> & {
+  values?: Record<string, number>;
+  prescribed?: boolean;
+};
+type AddLabel = (id: string, title: string, clauseId: ClauseId, l: Label) => void;
+type AddCitedLabel = (id: string, title: string, citation: string, l: Label) => void;
+
 /** The warning labels a design needs: the code's wording where it prescribes one, and our explanation beside every label. */
 export function requiredLabels(f: LabelFacts): WarningLabel[] {
   const labels: WarningLabel[] = [];
-  type Label = Omit<WarningLabel, "id" | "title" | "clause" | "edition" | "values" | "prescribed"> & {
-    values?: Record<string, number>;
-    prescribed?: boolean;
-  };
-  const addCited = (id: string, title: string, citation: string, l: Label) =>
+  const addCited: AddCitedLabel = (id, title, citation, l) =>
     labels.push({
       id,
       title,
@@ -91,7 +110,7 @@ export function requiredLabels(f: LabelFacts): WarningLabel[] {
       explanation: l.explanation,
       values: l.values ?? {},
     });
-  const add = (id: string, title: string, clauseId: ClauseId, l: Label) => addCited(id, title, clause(clauseId, f.edition), l);
+  const add: AddLabel = (id, title, clauseId, l) => addCited(id, title, clause(clauseId, f.edition), l);
 
   if (f.maxDcVoltageV !== null) {
     // 2017 also asked for the maximum circuit current on this label; later editions ask for the voltage only (from memory).
@@ -150,9 +169,12 @@ export function requiredLabels(f: LabelFacts): WarningLabel[] {
     });
   }
   if (f.connection === "load-side") {
+    const storageSource = f.storage?.batteryInverter;
     add("multiple-sources", "Panel fed by more than one source", "multipleSourcesMarking", {
       placement: "On the panel the solar system feeds",
-      text: `CAUTION: THIS PANEL IS FED BY TWO SOURCES\nUTILITY SERVICE AND SOLAR PV SYSTEM (${fmt(f.inverterOutputA)} A AT ${f.acVoltageV} V AC THROUGH THE ${f.pvBreakerA} A PV BREAKER)`,
+      text: storageSource
+        ? `CAUTION: THIS PANEL IS FED BY THREE SOURCES\nUTILITY SERVICE, SOLAR PV SYSTEM (${fmt(f.inverterOutputA)} A AT ${f.acVoltageV} V AC THROUGH THE ${f.pvBreakerA} A PV BREAKER)\nAND ENERGY STORAGE SYSTEM (${fmt(storageSource.outputA)} A THROUGH THE ${storageSource.breakerA} A BREAKER)`
+        : `CAUTION: THIS PANEL IS FED BY TWO SOURCES\nUTILITY SERVICE AND SOLAR PV SYSTEM (${fmt(f.inverterOutputA)} A AT ${f.acVoltageV} V AC THROUGH THE ${f.pvBreakerA} A PV BREAKER)`,
       explanation:
         "The panel stays live from the solar system when the utility is off, and the other way round. The code asks that every source be named, not for set words.",
       values: { inverterOutputA: f.inverterOutputA, acVoltageV: f.acVoltageV, pvBreakerA: f.pvBreakerA },
@@ -177,11 +199,62 @@ export function requiredLabels(f: LabelFacts): WarningLabel[] {
       values: { busbarA: f.busbarA },
     });
   }
+  if (f.storage) addStorageLabels(f.edition, f.storage, add, addCited);
+  const essLine = f.storage
+    ? `\nENERGY STORAGE SYSTEM DISCONNECT: ${(f.storage.disconnectLocation ?? "see the site plan").toUpperCase()}`
+    : "";
   add("power-source-directory", "Power sources at this building", "directory", {
-    placement: "At the service equipment and at each PV system disconnect",
-    text: `POWER SOURCES AT THIS BUILDING\nUTILITY SERVICE: ${(f.serviceLocation ?? "see the site plan").toUpperCase()}\nSOLAR PV SYSTEM DISCONNECT: ${(f.pvDisconnectLocation ?? "see the site plan").toUpperCase()}`,
+    placement: f.storage
+      ? "At the service equipment, at each PV system disconnect and at the energy storage system disconnect"
+      : "At the service equipment and at each PV system disconnect",
+    text: `POWER SOURCES AT THIS BUILDING\nUTILITY SERVICE: ${(f.serviceLocation ?? "see the site plan").toUpperCase()}\nSOLAR PV SYSTEM DISCONNECT: ${(f.pvDisconnectLocation ?? "see the site plan").toUpperCase()}${essLine}`,
     explanation:
       "A permanent plaque or directory showing where every source's disconnect is. The code asks for the locations, not for set words.",
   });
   return labels;
+}
+
+/** The labels energy storage adds: its disconnect, where that disconnect is, the power control setting, the backup panel's sources. */
+function addStorageLabels(edition: NecEdition, s: StorageLabelFacts, add: AddLabel, addCited: AddCitedLabel): void {
+  const fault = s.faultCurrentA === undefined ? "" : `\nAVAILABLE FAULT CURRENT: ${fmt(s.faultCurrentA)} A`;
+  add("ess-disconnect", "Energy storage disconnect", "essDisconnectLabel", {
+    placement: "On the energy storage system disconnect",
+    text: `ENERGY STORAGE SYSTEM DISCONNECT\nNOMINAL ESS VOLTAGE: ${fmt(s.essVoltageV)} V DC${fault}`,
+    explanation: `Names the switch that cuts the batteries off from the rest of the wiring, and the batteries' nominal voltage${s.faultCurrentA === undefined ? "" : " and the fault current they can deliver"}. The batteries stay charged when it is off. The code asks for these facts, not for set words.`,
+    values: s.faultCurrentA === undefined ? { essVoltageV: s.essVoltageV } : { essVoltageV: s.essVoltageV, faultCurrentA: s.faultCurrentA },
+  });
+  if (s.disconnectOutOfSight) {
+    add("ess-disconnect-location", "Where the storage disconnect is", "essDisconnectLocation", {
+      placement: "On or next to the batteries",
+      text: `ENERGY STORAGE SYSTEM DISCONNECT LOCATED: ${(s.disconnectLocation ?? "see the site plan").toUpperCase()}`,
+      explanation: "The disconnect is out of sight of the batteries, so the batteries say where it is.",
+    });
+  }
+  const pcs = clauseInEdition("powerControl", edition);
+  if (pcs !== null && s.powerControlSettingA !== null) {
+    addCited("power-control-setting", "Power control system setting", pcs, {
+      placement: "At the panel whose busbar the power control system protects, and on the equipment it controls",
+      text: `POWER CONTROL SYSTEM IN USE\nOUTPUT CURRENT LIMITED TO ${fmt(s.powerControlSettingA)} A\nDO NOT CHANGE THE SETTING WITHOUT A NEW REVIEW OF THIS PANEL`,
+      explanation: `The panel was checked for ${fmt(s.powerControlSettingA)} A from the solar and battery equipment because a listed control holds their output there; raising the setting would overload the bus. The code asks for the setting to be marked, not for set words.`,
+      values: { powerControlSettingA: s.powerControlSettingA },
+    });
+  }
+  if (s.backupPanel) {
+    add("backup-panel-sources", "Backup panel fed by more than one source", "multipleSourcesMarking", {
+      placement: "On the backup loads panel",
+      text: `CAUTION: THIS PANEL IS FED BY TWO SOURCES\nUTILITY SERVICE AND THE MULTIMODE INVERTER (${fmt(s.backupPanel.sourceA)} A THROUGH THE ${s.backupPanel.inverterBreakerA} A BREAKER)`,
+      explanation:
+        "The backup panel stays live from the batteries when the utility is off. The code asks that every source be named, not for set words.",
+      values: { sourceA: s.backupPanel.sourceA, inverterBreakerA: s.backupPanel.inverterBreakerA },
+    });
+  }
+  if (s.single120Supply) {
+    add("single-120-supply", "Single 120 V backup supply", "singleSupply120", {
+      placement: "On the backup loads panel",
+      text: SINGLE_120_SUPPLY_WORDS,
+      prescribed: true,
+      explanation:
+        "While the grid is down one 120 V supply feeds both halves of this panel: a multiwire circuit's shared neutral would carry the sum of both halves and overheat.",
+    });
+  }
 }

@@ -22,6 +22,8 @@ import { checkPathVoltageDrop, checkRunVoltageDrop } from "./checks/voltage-drop
 import { type SystemRatings, checkDcToAcRatio, checkModuleCount, systemRatings } from "./checks/system-ratings";
 import { checkWiringMethods } from "./checks/wiring-methods";
 import { isDcRun, totalInverterOutputA } from "./design-lookup";
+import { countedSourceCurrent, hasStorage } from "./storage";
+import { type StorageSummary, storageChecks, storageFigures, storageLabelFacts, storageSummary } from "./storage-review";
 import { DesignInputError } from "./errors";
 import { reviewFigures, type ReviewFigures } from "./figures";
 import { type WarningLabel, requiredLabels } from "./labels";
@@ -47,6 +49,8 @@ export interface ReviewResult {
   summary: ReviewSummary;
   /** Every figure behind the checks, per string, inverter output, run and at the point of connection. */
   figures: ReviewFigures;
+  /** The batteries in brief; present only for a design with storage. */
+  storage?: StorageSummary;
 }
 
 type Attempt = (what: string, key: string, fn: () => CheckResult[]) => void;
@@ -141,8 +145,21 @@ export function reviewDesign(design: Design, site: Site): ReviewResult {
     attempt(`roof plane ${plane.label}`, `roof:${plane.id}`, () => checkRoofLoad(design, site, plane));
   }
 
+  if (hasStorage(design)) storageChecks(design, site, attempt);
+
   const summary = summarize(design, site, checks);
-  return { edition, checks, labels: labelsFor(design, site, summary), summary, figures: reviewFigures(design, site, checks) };
+  const result: ReviewResult = {
+    edition,
+    checks,
+    labels: labelsFor(design, site, summary),
+    summary,
+    figures: reviewFigures(design, site, checks),
+  };
+  if (hasStorage(design)) {
+    result.figures.storage = storageFigures(design, site, checks);
+    result.storage = storageSummary(design, site);
+  }
+  return result;
 }
 
 function summarize(design: Design, site: Site, checks: CheckResult[]): ReviewSummary {
@@ -180,7 +197,9 @@ function labelsFor(design: Design, site: Site, summary: ReviewSummary): WarningL
   const s = design.service;
   const rule =
     s.connection === "load-side"
-      ? governingLoadSideRule(evaluateLoadSideRules(s, totalInverterOutputA(design), { isDwelling: site.isDwelling }))
+      ? governingLoadSideRule(
+          evaluateLoadSideRules(s, countedSourceCurrent(design, site.necEdition).currentA, { isDwelling: site.isDwelling }),
+        )
       : null;
   return requiredLabels({
     edition: site.necEdition,
@@ -197,5 +216,6 @@ function labelsFor(design: Design, site: Site, summary: ReviewSummary): WarningL
     serviceLocation: s.serviceLocation,
     pvDisconnectLocation: s.pvDisconnectLocation,
     hasDcRuns: design.runs.some(isDcRun),
+    storage: hasStorage(design) ? (storageLabelFacts(design, site) ?? undefined) : undefined,
   });
 }

@@ -1,6 +1,16 @@
+import type {
+  BackupLoadsPanel,
+  BatteryBank,
+  BatteryInverter,
+  EssDisconnect,
+  EssSitingLimits,
+  PowerControlSystem,
+  StandAloneOutput,
+} from "./storage-types";
 import type { ConductorSize } from "./tables/conductor-sizes";
 
 export type { ConductorSize } from "./tables/conductor-sizes";
+export * from "./storage-types";
 
 export const NEC_EDITIONS = [2017, 2020, 2023] as const;
 export type NecEdition = (typeof NEC_EDITIONS)[number];
@@ -137,7 +147,7 @@ export interface ServicePanel {
   connection: "load-side" | "supply-side";
   pvBreakerA: number; // backfed breaker, or the supply-side disconnect's OCPD
   pvBreakerAtOppositeEnd: boolean;
-  otherBreakersA?: number[]; // every other breaker on the bus except the main, for the sum rule
+  otherBreakersA?: number[]; // every other breaker on the bus except the main (an AC-coupled battery inverter's among them), for the sum rule
   serviceConductorAmpacityA?: number; // supply side; defaults to the main rating
   serviceConductor?: { size: ConductorSize; material: ConductorMaterial }; // largest ungrounded service-entrance conductor (Table 250.66)
   panelFeed?: "end" | "center"; // where the supply enters the busbar; default end-fed
@@ -222,6 +232,37 @@ export interface Design {
   rapidShutdownInitiator?: RapidShutdownInitiator;
   groundingElectrodeConductor?: GroundingElectrodeConductor;
   acCombiner?: AcCombiner;
+  storage?: Storage; // batteries; absent for a PV-only design
+}
+
+/** A battery circuit: battery to the multimode inverter (DC), or the battery inverter's output (AC). */
+export interface StorageCircuit {
+  id: string;
+  label: string;
+  kind: "battery-dc" | "battery-inverter-output";
+  bankIds?: string[]; // battery-dc: the banks whose units it joins in parallel; default all
+  conductor: ConductorSpec;
+  ocpdA?: number;
+  terminalTempC?: TerminalTempC; // default 75 °C (110.14(C), common practice for equipment of this size)
+}
+
+export type StorageCoupling = "dc" | "ac";
+export type OperatingMode = "backup-only" | "self-consumption" | "export" | "non-export";
+
+export interface Storage {
+  coupling: StorageCoupling;
+  multimodeInverterId?: string; // dc: the hybrid inverter among the design's inverters
+  batteryInverter?: BatteryInverter; // ac: required
+  banks: BatteryBank[];
+  operatingMode: OperatingMode;
+  exportLimitKw?: number;
+  importLimitKw?: number;
+  pcs?: PowerControlSystem;
+  backupOutput?: StandAloneOutput;
+  backupPanel?: BackupLoadsPanel;
+  disconnect?: EssDisconnect;
+  availableFaultCurrentA?: number; // at the ESS disconnect, from the maker; printed on its label
+  circuits?: StorageCircuit[];
 }
 
 /** The part of a design the string checks read: enough to review strings before the rest is entered. */
@@ -236,6 +277,7 @@ export interface Site {
   necEdition: NecEdition;
   isDwelling: boolean; // one- and two-family dwelling
   peakSunHours?: number;
+  essSiting?: EssSitingLimits; // the AHJ's adopted residential ESS limits; default the published ones
 }
 
 export type CheckStatus = "pass" | "warn" | "fail";

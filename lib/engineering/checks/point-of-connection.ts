@@ -1,6 +1,7 @@
 import { atLeast, atMost, fmt, makeCheck } from "../check-result";
 import { type ClauseId, clause, clauseInEdition, clauses } from "../clauses";
 import { totalInverterOutputA } from "../design-lookup";
+import { type CountedSourceCurrent, countedSourceCurrent } from "../storage";
 import type { CheckResult, Design, Site } from "../types";
 import { checkAcCombiner } from "./ac-combiner";
 import { checkFeederConnection } from "./feeder-connection";
@@ -61,10 +62,12 @@ function pvBreakerSize(design: Design, site: Site): CheckResult {
 function loadSide(design: Design, site: Site): CheckResult {
   const edition = site.necEdition;
   const s = design.service;
-  const outputA = totalInverterOutputA(design);
+  const counted = countedSourceCurrent(design, edition);
+  const outputA = counted.currentA;
   const outcomes = evaluateLoadSideRules(s, outputA, { isDwelling: site.isDwelling });
   const governing = governingLoadSideRule(outcomes);
   const base = { id: "point-of-connection", title: "Connection to the panel busbar", unit: "A", edition };
+  const source = sourceWords(counted);
   if (governing) {
     const breakerSumA = s.pvBreakerA + (s.mainBreakerA ?? 0);
     // Code arithmetic uses 125 % of inverter current; many AHJs add the breaker rating instead.
@@ -78,13 +81,13 @@ function loadSide(design: Design, site: Site): CheckResult {
     const sum =
       governing.rule === "sum"
         ? `its breakers other than the main total ${fmt(governing.valueA)} A`
-        : `1.25 × ${fmt(outputA)} A of inverter current plus the ${s.mainBreakerA} A main is ${fmt(governing.valueA)} A`;
+        : `1.25 × ${fmt(outputA)} A ${source} plus the ${s.mainBreakerA} A main is ${fmt(governing.valueA)} A`;
     return makeCheck({
       ...base,
       status: breakerOver ? "warn" : "pass",
       value: governing.valueA,
       limit: governing.limitA,
-      clause: ruleClause(governing.rule, design, site),
+      clause: withPowerControl(ruleClause(governing.rule, design, site), counted, edition),
       message: `The panel meets the ${RULE_NAME[governing.rule]}: ${sum}, within the ${fmt(governing.limitA)} A allowed on the ${s.busbarA} A busbar${where}.${breakerOver ? ` Counting the ${s.pvBreakerA} A breaker itself gives ${breakerSumA} A, which some AHJs will not accept.` : ""}`,
       fix: breakerOver ? pvBreakerFix(s.busbarA, s.mainBreakerA) : undefined,
     });
@@ -105,10 +108,21 @@ function loadSide(design: Design, site: Site): CheckResult {
     status: "fail",
     value: shown.valueA,
     limit: shown.limitA,
-    clause: clauses(edition, "loadSide100", "loadSide120", "loadSideSum"),
-    message: `The PV breaker does not fit this panel: 1.25 × ${fmt(outputA)} A of inverter current plus the ${s.mainBreakerA} A main is ${fmt(shown.valueA)} A, above the ${fmt(shown.limitA)} A that 120 % of the ${s.busbarA} A busbar allows, and no other load-side rule is met.`,
+    clause: withPowerControl(clauses(edition, "loadSide100", "loadSide120", "loadSideSum"), counted, edition),
+    message: `The PV breaker does not fit this panel: 1.25 × ${fmt(outputA)} A ${source} plus the ${s.mainBreakerA} A main is ${fmt(shown.valueA)} A, above the ${fmt(shown.limitA)} A that 120 % of the ${s.busbarA} A busbar allows, and no other load-side rule is met.`,
     fix: fixes.filter(Boolean).join(" "),
   });
+}
+
+/** How a message names the current it counts: the inverters' output, or the power control system's setting. */
+function sourceWords(counted: CountedSourceCurrent): string {
+  return counted.by === "power-control-system" ? "(the power control system's setting)" : "of inverter current";
+}
+
+/** A result that counts a power control system's setting cites 705.13 beside the busbar rule. */
+function withPowerControl(citation: string, counted: CountedSourceCurrent, edition: Site["necEdition"]): string {
+  const pcs = counted.by === "power-control-system" ? clauseInEdition("powerControl", edition) : null;
+  return pcs ? `${citation}, ${pcs.replace(/^NEC \d+ /, "")}` : citation;
 }
 
 /** A panel without a main breaker: only the sum rule can apply. */
@@ -151,7 +165,7 @@ function supplySide(design: Design, site: Site): CheckResult {
   const edition = site.necEdition;
   const s = design.service;
   const serviceA = s.serviceConductorAmpacityA ?? s.mainBreakerA ?? s.busbarA;
-  const valueA = edition === 2017 ? s.pvBreakerA : totalInverterOutputA(design);
+  const valueA = edition === 2017 ? s.pvBreakerA : countedSourceCurrent(design, edition).currentA;
   const what = edition === 2017 ? `The ${s.pvBreakerA} A PV overcurrent device` : `The inverters' ${fmt(valueA)} A continuous output`;
   const ok = atMost(valueA, serviceA);
   return makeCheck({

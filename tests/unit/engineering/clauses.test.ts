@@ -33,6 +33,15 @@ describe("clause numbering by NEC edition (REFERENCE.md; marked entries from mem
     ["acOcpd", 2017, "NEC 2017 690.9(B)"], // from memory
     ["acOcpd", 2020, "NEC 2020 705.30(B)"], // REFERENCE.md: 2020 705.30
     ["egcTable", 2020, "NEC 2020 Table 250.122"],
+    ["essDisconnect", 2017, "NEC 2017 706.7"], // from memory
+    ["essDisconnect", 2020, "NEC 2020 706.15"], // from memory
+    ["essDisconnectLocation", 2023, "NEC 2023 706.15(B)"], // trade summary of the 2023 Article 706 changes
+    ["essDisconnectLabel", 2023, "NEC 2023 706.15(C)"], // trade summary of the 2023 Article 706 changes
+    ["essCircuitSizing", 2023, "NEC 2023 706.30(B)"], // 125 % rule per a trade summary of 2023 Article 706; item letter from memory
+    ["essOcpd", 2017, "NEC 2017 706.21"], // from memory
+    ["essOcpd", 2023, "NEC 2023 706.31"], // trade summary of 2023 Article 706
+    ["standAloneSupply", 2020, "NEC 2020 710.15(A)"], // from memory
+    ["singleSupply120", 2023, "NEC 2023 710.15(C)"], // from memory
   ] as const)("%s in %d → %s", (id, edition, expected) => {
     expect(clause(id, edition)).toBe(expected);
   });
@@ -56,6 +65,9 @@ describe("clause numbering by NEC edition (REFERENCE.md; marked entries from mem
     ["feedThrough", 2017, null], // no feed-through item in 2017 (from memory)
     ["feedThrough", 2020, "NEC 2020 705.12(B)(3)(6)"], // from memory
     ["feedThrough", 2023, "NEC 2023 705.12(B)(6)"], // from memory
+    ["powerControl", 2017, null], // power control systems entered the code in 2020 (REFERENCE.md, from memory)
+    ["powerControl", 2020, "NEC 2020 705.13"],
+    ["powerControl", 2023, "NEC 2023 705.13"],
   ] as const)("edition-only clause %s in %d → %s", (id, edition, expected) => {
     expect(clauseInEdition(id, edition)).toBe(expected);
   });
