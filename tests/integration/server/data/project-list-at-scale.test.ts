@@ -47,7 +47,7 @@ async function referenceList(viewer: Viewer, query: ProjectListQuery) {
     names: rows.map((r) => r.customerName),
     jurisdictions: rows.map((r) => r.jurisdiction?.name ?? null),
     installers: rows.map((r) => r.installer?.name ?? null),
-    nextActions: rows.map((r) => nextActionFor(r.stage as Stage, r.design?.reviewStatus ?? null)),
+    nextActions: rows.map((r) => nextActionFor(r.stage as Stage, r.design?.reviewStatus ?? null, r.holdState ?? null)),
     total: count,
   };
 }
