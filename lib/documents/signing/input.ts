@@ -23,6 +23,8 @@ export type SignerEvidence = {
   userAgent: string;
   mark: SignatureMark;
   box: SignatureBox;
+  /** The form field the signature replaces, taken off the signed copy (see findSignatureBlocks). */
+  field?: string;
 };
 
 export type SigningInput = {

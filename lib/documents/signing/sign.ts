@@ -5,6 +5,7 @@ import { SigningRecord } from "@/templates/pdf/signing/signing-record";
 import { TypedSignature } from "@/templates/pdf/signing/typed-signature";
 import { renderPdf } from "../render";
 import { printable, printableDeep } from "../text";
+import { removeSignatureFields } from "./blocks";
 import { signingRecordFacts } from "./facts";
 import type { SignatureBox, SignedDocument, SigningInput } from "./input";
 
@@ -51,6 +52,10 @@ export async function signPdf(original: Uint8Array, input: SigningInput): Promis
       throw new RangeError(`The signature block of ${signer.role} lies outside the document.`);
     await drawSignature(doc, page, signer);
   }
+  removeSignatureFields(
+    doc,
+    input.signers.flatMap((s) => (s.field ? [s.field] : [])),
+  );
   const signedPages = await doc.save({ useObjectStreams: false });
   const sha256Signed = sha256(signedPages);
   // Names, addresses and browsers are typed by people: characters the fonts cannot draw are spelled out.

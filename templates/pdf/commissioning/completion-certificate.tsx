@@ -2,7 +2,7 @@ import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { PrintedCommissioning } from "@/lib/documents/commissioning/facts";
 import { Field, Section } from "../shared/blocks";
 import { CautionNotice, CommissioningDocument, CompletionPanel, EquipmentRow } from "./commissioning-parts";
-import { SignatureLine, SignatureRow } from "../shared/signature-line";
+import { SIGNATURE_FIELDS, SignatureLine, SignatureRow } from "../shared/signature-line";
 import { COLORS } from "../shared/styles";
 
 // The certificate of completion: the project and system filled in from the commissioning
@@ -90,7 +90,7 @@ export function CompletionCertificate({ input }: { input: PrintedCommissioning }
               <SignatureLine caption="License no." />
             </SignatureRow>
             <SignatureRow spacePt={LINE_SPACE_PT}>
-              <SignatureLine caption="Signature" flex={1.6} />
+              <SignatureLine caption="Signature" flex={1.6} field={SIGNATURE_FIELDS.installer} />
               <SignatureLine caption="Date" />
             </SignatureRow>
           </View>
@@ -101,7 +101,7 @@ export function CompletionCertificate({ input }: { input: PrintedCommissioning }
               <SignatureLine caption="Printed name" />
             </SignatureRow>
             <SignatureRow spacePt={LINE_SPACE_PT}>
-              <SignatureLine caption="Signature" flex={1.6} />
+              <SignatureLine caption="Signature" flex={1.6} field={SIGNATURE_FIELDS.customer} />
               <SignatureLine caption="Date" />
             </SignatureRow>
           </View>

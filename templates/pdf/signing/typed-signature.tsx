@@ -5,14 +5,24 @@ import { Document, Page, StyleSheet, Text } from "@react-pdf/renderer";
 
 const s = StyleSheet.create({
   page: { padding: 2, justifyContent: "flex-end" },
-  name: { fontSize: 16, fontWeight: 600, color: "#1f2a44" },
+  name: { fontWeight: 600, color: "#1f2a44" },
 });
 
+// Inter's semi-bold letters are at most about 0.9 em wide (W, M) and average near 0.56 em on names; sizing at
+// 0.75 em a letter keeps even a run of wide capitals on one line (a wrapped line would not fit the block).
+const EM_PER_LETTER = 0.75;
+
+/** The largest size, up to 16 pt, at which the name fits the block on one line. */
+export function typedSignatureSize(name: string, width: number, height: number): number {
+  return Math.max(4, Math.min(16, (height - 4) * 0.75, (width - 4) / (Math.max(1, name.length) * EM_PER_LETTER)));
+}
+
 export function TypedSignature({ name, width, height }: { name: string; width: number; height: number }) {
+  // One line that always fits: a name wrapping onto a page this small would never finish laying out.
   return (
     <Document>
-      <Page size={[width, height]} style={s.page}>
-        <Text style={s.name}>{name}</Text>
+      <Page size={[width, height]} style={s.page} wrap={false}>
+        <Text style={[s.name, { fontSize: typedSignatureSize(name, width, height) }]}>{name}</Text>
       </Page>
     </Document>
   );

@@ -4,10 +4,16 @@
 import { createHash } from "node:crypto";
 import { PDFDocument, StandardFonts } from "pdf-lib";
 import { describe, expect, test } from "vitest";
+import { renderCommissioningPdf } from "@/lib/documents/commissioning/render";
+import { renderPacketPdf } from "@/lib/documents/packets/render";
+import { findSignatureBlocks } from "@/lib/documents/signing/blocks";
 import { ELECTRONIC_SIGNATURE_CONSENT } from "@/lib/documents/signing/consent";
 import { signingRecordFacts } from "@/lib/documents/signing/facts";
 import type { SignerEvidence, SigningInput } from "@/lib/documents/signing/input";
 import { signPdf } from "@/lib/documents/signing/sign";
+import { typedSignatureSize } from "@/templates/pdf/signing/typed-signature";
+import { commissioningFixture } from "@/tests/support/commissioning-fixture";
+import { packetFixture } from "@/tests/support/packet-fixture";
 import { pageTexts } from "./read-pdf";
 
 // A 2 × 1 px opaque PNG, as a signature pad would hand over (smaller, same format).
@@ -105,4 +111,72 @@ describe("signing a document", () => {
     expect(rows["Agreed to sign electronically"]).toContain("10:03");
     expect(facts.intro).toContain("America/Denver");
   });
+});
+
+describe("the documents' signature blocks", () => {
+  test("the interconnection application and the certificate of completion mark where the customer and the installer sign", async () => {
+    const packet = await renderPacketPdf(packetFixture({ kind: "interconnection" }));
+    const certificate = await renderCommissioningPdf(commissioningFixture({ kind: "certificate", scenario: "complete" }));
+    // The certificate is one page; the application's signature sheet is its last.
+    for (const [bytes, page] of [
+      [packet, (await PDFDocument.load(packet)).getPageCount() - 1],
+      [certificate, 0],
+    ] as const) {
+      const blocks = await findSignatureBlocks(bytes);
+      expect(Object.keys(blocks).sort()).toEqual(["customer", "installer"]);
+      for (const box of Object.values(blocks)) {
+        expect(box.pageIndex).toBe(page);
+        expect(box.width).toBeGreaterThan(120); // room for a name across the line
+        expect(box.height).toBeGreaterThanOrEqual(20);
+      }
+    }
+  }, 60_000);
+
+  test("a signed certificate carries both signatures in place of its fields, which are gone from the copy", async () => {
+    const certificate = await renderCommissioningPdf(commissioningFixture({ kind: "certificate", scenario: "complete" }));
+    const blocks = await findSignatureBlocks(certificate);
+    const signed = await signPdf(
+      certificate,
+      input([
+        signer({ box: blocks.customer!, field: "signature.customer" }),
+        signer({
+          role: "Installer",
+          name: "Rafe Quill",
+          mark: { kind: "typed", name: "Rafe Quill" },
+          box: blocks.installer!,
+          field: "signature.installer",
+        }),
+      ]),
+    );
+    expect(await findSignatureBlocks(signed.bytes)).toEqual({});
+    const pages = await pageTexts(signed.bytes);
+    expect(pages).toHaveLength(2);
+    expect(pages[0]).toContain("Rafe Quill");
+    expect(pages[0]).toContain("Imogen Farrow-Lake");
+    expect(pages[1]).toContain("Installer: Rafe Quill");
+  }, 60_000);
+});
+
+describe("a typed signature", () => {
+  test.each([
+    ["a short name in a wide block", "Ana Ruiz", 330, 30],
+    ["a long name in a narrow block", "Imogen Farrow-Lake Pemberton-Whitlock", 135, 30],
+    ["a low block", "Rafe Quill", 330, 12],
+  ])("%s fits on one line", (_what, name, width, height) => {
+    const size = typedSignatureSize(name, width, height);
+    expect(name.length * 0.75 * size).toBeLessThanOrEqual(width - 4 + 1e-9);
+    expect(size).toBeLessThanOrEqual(Math.min(16, height));
+  });
+
+  test("a long name on the certificate's narrow line still renders", async () => {
+    const certificate = await renderCommissioningPdf(commissioningFixture({ kind: "certificate", scenario: "complete" }));
+    const blocks = await findSignatureBlocks(certificate);
+    for (const long of ["Imogen Farrow-Lake Pemberton-Whitlock", "WWWWWWMMMMMMWWWWWWMMMMMM"]) {
+      const signed = await signPdf(
+        certificate,
+        input([signer({ name: long, mark: { kind: "typed", name: long }, box: blocks.customer! })]),
+      );
+      expect((await pageTexts(signed.bytes))[0]).toContain(long);
+    }
+  }, 60_000);
 });

@@ -2,7 +2,7 @@ import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { PrintedPacket } from "@/lib/documents/packets/printed";
 import { NumberedList, Section } from "../../shared/blocks";
 import { FormSheet } from "../../shared/sheet-page";
-import { SignatureLine, SignatureRow } from "../../shared/signature-line";
+import { SIGNATURE_FIELDS, SignatureLine, SignatureRow } from "../../shared/signature-line";
 import { COLORS, base } from "../../shared/styles";
 import type { SheetInfo } from "../../shared/title-block";
 
@@ -11,13 +11,13 @@ const s = StyleSheet.create({
   blockTitle: { fontSize: 10, fontWeight: 700, marginBottom: 2 },
 });
 
-function SignatureBlock({ title, who, name }: { title: string; who: string; name: string }) {
+function SignatureBlock({ title, who, name, field }: { title: string; who: string; name: string; field: string }) {
   return (
     <View style={s.block} wrap={false}>
       <Text style={s.blockTitle}>{title}</Text>
       <Text style={[base.soft, { fontSize: 8 }]}>{who}</Text>
       <SignatureRow>
-        <SignatureLine caption="Signature" flex={2} />
+        <SignatureLine caption="Signature" flex={2} field={field} />
         <SignatureLine caption="Date" />
       </SignatureRow>
       <SignatureRow>
@@ -46,11 +46,13 @@ export function SignatureSheet({ input, sheet }: { input: PrintedPacket; sheet: 
       </Section>
       <SignatureBlock
         title="Customer"
+        field={SIGNATURE_FIELDS.customer}
         who={`Account holder at ${input.project.street}, ${input.project.city}`}
         name={input.project.customerName}
       />
       <SignatureBlock
         title="Installer"
+        field={SIGNATURE_FIELDS.installer}
         who={`${input.preparedBy.organizationName}${input.preparedBy.licenseNumber ? `, license ${input.preparedBy.licenseNumber}` : ""}`}
         name={input.preparedBy.name}
       />

@@ -1,0 +1,48 @@
+import { PDFArray, PDFDict, PDFDocument, PDFName, PDFNumber, PDFRef, PDFString, PDFHexString } from "pdf-lib";
+import { SIGNATURE_FIELDS } from "@/templates/pdf/shared/signature-line";
+import type { SignatureBox } from "./input";
+
+export type SignatureRole = keyof typeof SIGNATURE_FIELDS;
+
+const nameOf = (widget: PDFDict) => {
+  const t = widget.lookup(PDFName.of("T"));
+  return t instanceof PDFString || t instanceof PDFHexString ? t.decodeText() : null;
+};
+
+/**
+ * Where each signature line of a generated document is, by the field the template put over it. Read from
+ * the pages' own annotations, so it also works once a packet's sheets were merged with data sheets.
+ */
+export async function findSignatureBlocks(bytes: Uint8Array): Promise<Partial<Record<SignatureRole, SignatureBox>>> {
+  const doc = await PDFDocument.load(bytes.slice());
+  const byField = new Map<string, SignatureRole>(Object.entries(SIGNATURE_FIELDS).map(([role, field]) => [field, role as SignatureRole]));
+  const found: Partial<Record<SignatureRole, SignatureBox>> = {};
+  doc.getPages().forEach((page, pageIndex) => {
+    const annots = page.node.lookupMaybe(PDFName.of("Annots"), PDFArray);
+    for (let i = 0; i < (annots?.size() ?? 0); i++) {
+      const widget = annots!.lookup(i, PDFDict);
+      const role = byField.get(nameOf(widget) ?? "");
+      const rect = widget.lookupMaybe(PDFName.of("Rect"), PDFArray);
+      if (!role || !rect || found[role]) continue;
+      const [x1, y1, x2, y2] = [0, 1, 2, 3].map((k) => rect.lookup(k, PDFNumber).asNumber()) as [number, number, number, number];
+      found[role] = { pageIndex, x: Math.min(x1, x2), y: Math.min(y1, y2), width: Math.abs(x2 - x1), height: Math.abs(y2 - y1) };
+    }
+  });
+  return found;
+}
+
+/** Takes the named signature fields off the pages (and the form), once a signature stands in their place. */
+export function removeSignatureFields(doc: PDFDocument, fields: readonly string[]) {
+  for (const page of doc.getPages()) {
+    const annots = page.node.lookupMaybe(PDFName.of("Annots"), PDFArray);
+    if (!annots) continue;
+    for (let i = annots.size() - 1; i >= 0; i--) {
+      const entry = annots.get(i);
+      const widget = entry instanceof PDFRef ? doc.context.lookup(entry, PDFDict) : annots.lookup(i, PDFDict);
+      if (fields.includes(nameOf(widget) ?? "")) annots.remove(i);
+    }
+  }
+  const acro = doc.catalog.lookupMaybe(PDFName.of("AcroForm"), PDFDict);
+  const list = acro?.lookupMaybe(PDFName.of("Fields"), PDFArray);
+  for (let i = (list?.size() ?? 0) - 1; i >= 0; i--) if (fields.includes(nameOf(list!.lookup(i, PDFDict)) ?? "")) list!.remove(i);
+}
