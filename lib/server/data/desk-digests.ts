@@ -64,7 +64,7 @@ function digestMail(desk: Desk, today: string) {
 export async function sendDeskDigest({ recipient, today }: { recipient: DigestRecipient; today: string }): Promise<DigestOutcome> {
   const sequelize = db();
   const { viewer, timeZone } = recipient;
-  const desk = deskFor(await listDeskFilings({ viewer, timeZone }), today);
+  const desk = deskFor(await listDeskFilings({ viewer, timeZone, today }), today);
   const count = DESK_SECTIONS.reduce((n, s) => n + desk[s].length, 0);
   return sequelize.transaction(async (transaction) => {
     const claimed = await sequelize.query<{ id: string }>(

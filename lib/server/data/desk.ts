@@ -2,8 +2,9 @@ import "server-only";
 import { Op, type WhereOptions } from "sequelize";
 import { CorrectionRound, Filing, FilingItem, Inspection, Jurisdiction, Project, Utility } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
-import { deskFor, type Desk, type DeskFiling } from "@/lib/domain/desk";
-import { localIsoDate } from "@/lib/domain/time-zones";
+import { INSPECTION_LOOKAHEAD_DAYS, PERMIT_LAPSE_NOTICE_DAYS, deskFor, type Desk, type DeskFiling } from "@/lib/domain/desk";
+import { WITH_THE_AUTHORITY } from "@/lib/domain/filings";
+import { addCalendarDays, localIsoDate } from "@/lib/domain/time-zones";
 import { AppError } from "@/lib/errors";
 import { db } from "../db";
 import { getOrganization } from "./organizations";
@@ -24,8 +25,44 @@ async function usualReviewDays(organizationId: string): Promise<Map<string, numb
   return new Map([...ahjs, ...utilities].map((a) => [a.id, a.reviewDays]));
 }
 
-/** The filings on the viewer's desk as the desk rules read them, with days in the organization's zone. */
-export async function listDeskFilings({ viewer, timeZone }: { viewer: Viewer; timeZone: string }): Promise<DeskFiling[]> {
+/**
+ * The filings that could be on the desk on `today`: a follow-up due, with the authority (corrections, review
+ * time), a permit near its expiry, or a visit booked within the look-ahead. Read in SQL, so a company's
+ * thousands of decided filings are never loaded; the desk rules then decide on exactly these.
+ */
+function mayBeOnDesk(today: string): WhereOptions<Filing> {
+  const sequelize = db();
+  const [lastVisit, lapseHorizon] = [
+    addCalendarDays(today, INSPECTION_LOOKAHEAD_DAYS - 1),
+    addCalendarDays(today, PERMIT_LAPSE_NOTICE_DAYS),
+  ];
+  return {
+    status: { [Op.ne]: "withdrawn" },
+    [Op.or]: [
+      { nextFollowUpOn: { [Op.lte]: today } },
+      { status: { [Op.in]: ["corrections_requested", ...WITH_THE_AUTHORITY] } },
+      { kind: "permit", status: "approved", expiresOn: { [Op.lte]: lapseHorizon } },
+      {
+        id: {
+          [Op.in]: sequelize.literal(
+            `(select filing_id from inspections where result is null and scheduled_for between ${sequelize.escape(today)} and ${sequelize.escape(lastVisit)})`,
+          ),
+        },
+      },
+    ],
+  };
+}
+
+/** The filings on the viewer's desk on `today` as the desk rules read them, with days in the organization's zone. */
+export async function listDeskFilings({
+  viewer,
+  timeZone,
+  today,
+}: {
+  viewer: Viewer;
+  timeZone: string;
+  today: string;
+}): Promise<DeskFiling[]> {
   db();
   const [projects, reviewDays] = await Promise.all([
     Project.findAll({
@@ -36,7 +73,7 @@ export async function listDeskFilings({ viewer, timeZone }: { viewer: Viewer; ti
           model: Filing,
           as: "filings",
           required: true,
-          where: { status: { [Op.ne]: "withdrawn" } },
+          where: mayBeOnDesk(today),
           include: [
             { model: CorrectionRound, as: "rounds", include: [{ model: FilingItem, as: "items", attributes: ["id", "resolved"] }] },
             { model: Inspection, as: "inspections", attributes: ["id", "kind", "scheduledFor", "timeWindow", "result"] },
@@ -97,5 +134,5 @@ export async function getDesk({
   if (!can(viewer, "desk:view")) throw new AppError("FORBIDDEN", "The desk lists the office's work.");
   const { timeZone } = await getOrganization({ viewer });
   const day = today ?? localIsoDate(now.toISOString(), timeZone);
-  return { today: day, desk: deskFor(await listDeskFilings({ viewer, timeZone }), day) };
+  return { today: day, desk: deskFor(await listDeskFilings({ viewer, timeZone, today: day }), day) };
 }
