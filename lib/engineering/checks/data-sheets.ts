@@ -7,9 +7,9 @@ import type { ArrayDesign, CheckResult, CheckStatus, Inverter, PvModule, Site, T
 // often a unit slip (−0.0027 typed for −0.27 %/°C), which would quietly remove a safety margin.
 
 type Band = { min: number; max: number };
-/** Voc temperature coefficients of crystalline modules, %/°C: about −0.2 to −0.5 (common practice). */
+// Voc temperature coefficients of crystalline modules, %/°C: about −0.2 to −0.5 (common practice).
 export const VOC_COEFF_TYPICAL_PCT: Band = { min: -0.5, max: -0.2 };
-/** Outside this the figure cannot be a crystalline module's Voc coefficient in the stated unit (common practice). */
+// Outside this the figure cannot be a crystalline module's Voc coefficient in the stated unit (common practice).
 export const VOC_COEFF_PLAUSIBLE_PCT: Band = { min: -0.7, max: -0.1 };
 /** Pmax temperature coefficients, %/°C (common practice). */
 export const PMAX_COEFF_PLAUSIBLE_PCT: Band = { min: -0.7, max: -0.15 };

@@ -120,7 +120,7 @@ export function checkPvSystemDisconnect(design: Design, site: Site): CheckResult
   return results;
 }
 
-/** 690.15: string inverters need a way to isolate their DC inputs; micro-inverters' connectors serve (from memory). */
+// 690.15: string inverters need a way to isolate their DC inputs; micro-inverters' connectors serve (from memory).
 export function checkEquipmentDisconnects(design: Design, site: Site): CheckResult[] {
   const edition = site.necEdition;
   const micro = new Set(microInverters(design).map((i) => i.id));
