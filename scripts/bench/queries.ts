@@ -8,6 +8,7 @@ import { getProjectById, listProjects, listStageChanges } from "@/lib/server/dat
 import { getDesignStatus } from "@/lib/server/data/designs";
 import { getFieldSummary } from "@/lib/server/data/commissioning";
 import { getOrganization } from "@/lib/server/data/organizations";
+import { getDesk } from "@/lib/server/data/desk";
 import { db } from "@/lib/server/db";
 import { ProjectListQuery } from "@/lib/schemas/project";
 
@@ -66,6 +67,7 @@ const calls: [string, () => Promise<unknown>][] = [
   ["project page's timeline", () => listStageChanges({ viewer, projectId: first.id })],
   ["project page's design status", () => getDesignStatus({ viewer, projectId: first.id })],
   ["project page's field summary", () => getFieldSummary({ viewer, projectId: first.id })],
+  ["dashboard's desk (coordinator)", () => getDesk({ viewer })],
 ];
 for (const [name, call] of calls) {
   const statements = await sqlOf(call);

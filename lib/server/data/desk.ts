@@ -1,6 +1,6 @@
 import "server-only";
-import { Op, type WhereOptions } from "sequelize";
-import { CorrectionRound, Filing, FilingItem, Inspection, Jurisdiction, Project, Utility } from "@/models";
+import { QueryTypes } from "sequelize";
+import { Jurisdiction, Utility } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { INSPECTION_LOOKAHEAD_DAYS, PERMIT_LAPSE_NOTICE_DAYS, deskFor, type Desk, type DeskFiling } from "@/lib/domain/desk";
 import { WITH_THE_AUTHORITY } from "@/lib/domain/filings";
@@ -9,51 +9,16 @@ import { AppError } from "@/lib/errors";
 import { db } from "../db";
 import { getOrganization } from "./organizations";
 
-/** A coordinator's desk covers the projects they coordinate; an admin's, the whole company's. */
-function projectsOnDesk(viewer: Viewer): WhereOptions<Project> {
-  const own = viewer.role === "admin" ? {} : { coordinatorId: viewer.id };
-  // Projects set aside (on hold, cancelled) wait on nobody, so they owe nothing today.
-  return { organizationId: viewer.organizationId, holdState: null, ...own };
-}
-
-/** The usual review days of each authority profile of the organization, by id. */
-async function usualReviewDays(organizationId: string): Promise<Map<string, number>> {
-  const [ahjs, utilities] = await Promise.all([
-    Jurisdiction.findAll({ where: { organizationId }, attributes: ["id", "reviewDays"] }),
-    Utility.findAll({ where: { organizationId }, attributes: ["id", "reviewDays"] }),
-  ]);
-  return new Map([...ahjs, ...utilities].map((a) => [a.id, a.reviewDays]));
-}
+type DeskFilingRow = Omit<DeskFiling, "usualReviewDays"> & { authorityId: string | null };
 
 /**
- * The filings that could be on the desk on `today`: a follow-up due, with the authority (corrections, review
- * time), a permit near its expiry, or a visit booked within the look-ahead. Read in SQL, so a company's
- * thousands of decided filings are never loaded; the desk rules then decide on exactly these.
+ * The filings on the viewer's desk on `today` as the desk rules read them, with days in the organization's zone.
+ * One statement reads only the filings that could be on the desk today (a follow-up due, with the authority,
+ * a permit near its expiry, a visit booked within the look-ahead), each with its latest round and its
+ * inspections folded in as JSON, so a company's thousands of decided filings are never loaded and no row
+ * is built twice. A coordinator's desk covers the projects they coordinate; an admin's, the company's;
+ * projects set aside (on hold, cancelled) wait on nobody, so they owe nothing today.
  */
-function mayBeOnDesk(today: string): WhereOptions<Filing> {
-  const sequelize = db();
-  const [lastVisit, lapseHorizon] = [
-    addCalendarDays(today, INSPECTION_LOOKAHEAD_DAYS - 1),
-    addCalendarDays(today, PERMIT_LAPSE_NOTICE_DAYS),
-  ];
-  return {
-    status: { [Op.ne]: "withdrawn" },
-    [Op.or]: [
-      { nextFollowUpOn: { [Op.lte]: today } },
-      { status: { [Op.in]: ["corrections_requested", ...WITH_THE_AUTHORITY] } },
-      { kind: "permit", status: "approved", expiresOn: { [Op.lte]: lapseHorizon } },
-      {
-        id: {
-          [Op.in]: sequelize.literal(
-            `(select filing_id from inspections where result is null and scheduled_for between ${sequelize.escape(today)} and ${sequelize.escape(lastVisit)})`,
-          ),
-        },
-      },
-    ],
-  };
-}
-
-/** The filings on the viewer's desk on `today` as the desk rules read them, with days in the organization's zone. */
 export async function listDeskFilings({
   viewer,
   timeZone,
@@ -63,59 +28,51 @@ export async function listDeskFilings({
   timeZone: string;
   today: string;
 }): Promise<DeskFiling[]> {
-  db();
-  const [projects, reviewDays] = await Promise.all([
-    Project.findAll({
-      where: projectsOnDesk(viewer),
-      attributes: ["id", "number", "customerName"],
-      include: [
-        {
-          model: Filing,
-          as: "filings",
-          required: true,
-          where: mayBeOnDesk(today),
-          include: [
-            { model: CorrectionRound, as: "rounds", include: [{ model: FilingItem, as: "items", attributes: ["id", "resolved"] }] },
-            { model: Inspection, as: "inspections", attributes: ["id", "kind", "scheduledFor", "timeWindow", "result"] },
-          ],
+  const [rows, reviewDays] = await Promise.all([
+    db().query<DeskFilingRow>(
+      `SELECT f.id AS "filingId", p.id AS "projectId", p.number AS "projectNumber", p.customer_name AS "customerName",
+              f.kind, f.authority_name AS "authorityName", f.authority_id AS "authorityId", f.status,
+              to_char(f.status_since AT TIME ZONE :zone, 'YYYY-MM-DD') AS "statusSinceDay",
+              f.expires_on::text AS "expiresOn", f.next_follow_up_on::text AS "nextFollowUpOn",
+              (SELECT json_build_object('number', r.number, 'receivedOn', r.received_on::text, 'answered', r.answered_at IS NOT NULL,
+                        'openItems', (SELECT count(*)::int FROM filing_items i WHERE i.round_id = r.id AND NOT i.resolved))
+                 FROM correction_rounds r WHERE r.filing_id = f.id ORDER BY r.number DESC LIMIT 1) AS "latestRound",
+              COALESCE((SELECT json_agg(json_build_object('id', v.id, 'kind', v.kind, 'scheduledFor', v.scheduled_for::text,
+                        'timeWindow', v.time_window, 'result', v.result))
+                 FROM inspections v WHERE v.filing_id = f.id), '[]'::json) AS inspections
+         FROM filings f JOIN projects p ON p.id = f.project_id
+        WHERE p.organization_id = :org AND p.hold_state IS NULL AND (:everyone OR p.coordinator_id = :viewerId)
+          AND f.status <> 'withdrawn'
+          AND (f.next_follow_up_on <= :today
+               OR f.status IN (:withTheAuthority)
+               OR (f.kind = 'permit' AND f.status = 'approved' AND f.expires_on <= :lapseHorizon)
+               OR f.id IN (SELECT filing_id FROM inspections WHERE result IS NULL AND scheduled_for BETWEEN :today AND :lastVisit))`,
+      {
+        type: QueryTypes.SELECT,
+        replacements: {
+          zone: timeZone,
+          org: viewer.organizationId,
+          everyone: viewer.role === "admin",
+          viewerId: viewer.id,
+          today,
+          withTheAuthority: ["corrections_requested", ...WITH_THE_AUTHORITY],
+          lapseHorizon: addCalendarDays(today, PERMIT_LAPSE_NOTICE_DAYS),
+          lastVisit: addCalendarDays(today, INSPECTION_LOOKAHEAD_DAYS - 1),
         },
-      ],
-    }),
+      },
+    ),
     usualReviewDays(viewer.organizationId),
   ]);
-  return projects.flatMap((p) =>
-    (p.filings ?? []).map((f) => {
-      const round = [...(f.rounds ?? [])].sort((a, b) => b.number - a.number)[0];
-      return {
-        filingId: f.id,
-        projectId: p.id,
-        projectNumber: p.number,
-        customerName: p.customerName,
-        kind: f.kind,
-        authorityName: f.authorityName,
-        status: f.status,
-        statusSinceDay: localIsoDate(f.statusSince.toISOString(), timeZone),
-        expiresOn: f.expiresOn,
-        nextFollowUpOn: f.nextFollowUpOn,
-        usualReviewDays: f.authorityId ? (reviewDays.get(f.authorityId) ?? null) : null,
-        latestRound: round
-          ? {
-              number: round.number,
-              receivedOn: round.receivedOn,
-              answered: round.answeredAt !== null,
-              openItems: (round.items ?? []).filter((i) => !i.resolved).length,
-            }
-          : null,
-        inspections: (f.inspections ?? []).map((i) => ({
-          id: i.id,
-          kind: i.kind,
-          scheduledFor: i.scheduledFor,
-          timeWindow: i.timeWindow,
-          result: i.result,
-        })),
-      } satisfies DeskFiling;
-    }),
-  );
+  return rows.map(({ authorityId, ...f }) => ({ ...f, usualReviewDays: authorityId ? (reviewDays.get(authorityId) ?? null) : null }));
+}
+
+/** The usual review days of each authority profile of the organization, by id. */
+async function usualReviewDays(organizationId: string): Promise<Map<string, number>> {
+  const [ahjs, utilities] = await Promise.all([
+    Jurisdiction.findAll({ where: { organizationId }, attributes: ["id", "reviewDays"] }),
+    Utility.findAll({ where: { organizationId }, attributes: ["id", "reviewDays"] }),
+  ]);
+  return new Map([...ahjs, ...utilities].map((a) => [a.id, a.reviewDays]));
 }
 
 /**
