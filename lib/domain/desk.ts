@@ -16,6 +16,11 @@ export const INSPECTION_LOOKAHEAD_DAYS = 7;
 /** How early a permit about to lapse is raised: a month gives time to book an inspection (common practice). */
 export const PERMIT_LAPSE_NOTICE_DAYS = 30;
 
+/** Rows a section shows on the start page before "Show all": a long section would bury the others (common practice). */
+export const DESK_ROWS_SHOWN = 8;
+/** Rows a section lists in the morning digest; the rest are counted and the e-mail links to the desk. */
+export const DIGEST_ROWS_SHOWN = 15;
+
 export const DESK_SECTIONS = ["followUps", "corrections", "inspections", "lapsing", "pastUsual"] as const;
 export type DeskSection = (typeof DESK_SECTIONS)[number];
 
@@ -193,6 +198,11 @@ export function deskFor(filings: readonly DeskFiling[], today: string): Desk {
     lapsing: lapsing.sort(oldestFirst),
     pastUsual,
   };
+}
+
+/** The section a `?desk=` search parameter names, or null for anything else. */
+export function deskSectionOf(value: unknown): DeskSection | null {
+  return typeof value === "string" && (DESK_SECTIONS as readonly string[]).includes(value) ? (value as DeskSection) : null;
 }
 
 export function deskIsEmpty(desk: Desk): boolean {

@@ -3,7 +3,7 @@ import { QueryTypes } from "sequelize";
 import { DeskDigest, Organization, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
-import { DESK_SECTIONS, DESK_SECTION_TITLES, deskDayText, deskFor, type Desk, type DeskRow } from "@/lib/domain/desk";
+import { DIGEST_ROWS_SHOWN, DESK_SECTIONS, DESK_SECTION_TITLES, deskDayText, deskFor, type Desk, type DeskRow } from "@/lib/domain/desk";
 import { calendarDayText } from "@/lib/domain/time-zones";
 import { deskDigestEmail } from "@/templates/email/desk-digest";
 import { db } from "../db";
@@ -50,7 +50,9 @@ function digestMail(desk: Desk, today: string) {
     deskUrl: `${env().APP_URL}/dashboard`,
     sections: DESK_SECTIONS.map((s) => ({
       title: DESK_SECTION_TITLES[s],
-      rows: desk[s].map((row) => ({ text: digestLine(row), url: filingUrl(row) })),
+      total: desk[s].length,
+      rows: desk[s].slice(0, DIGEST_ROWS_SHOWN).map((row) => ({ text: digestLine(row), url: filingUrl(row) })),
+      moreUrl: `${env().APP_URL}/dashboard?desk=${s}#desk-${s}`,
     })),
   });
 }

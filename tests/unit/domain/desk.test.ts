@@ -8,9 +8,11 @@ import {
   deskDayText,
   deskFor,
   deskIsEmpty,
+  deskSectionOf,
   digestDayAt,
   type DeskFiling,
 } from "@/lib/domain/desk";
+import { deskDigestEmail } from "@/templates/email/desk-digest";
 
 const TODAY = "2026-12-07";
 let seq = 0;
@@ -178,4 +180,40 @@ describe("the digest's working morning", () => {
     ["Tuesday 07:30 in Denver is still Monday evening in Honolulu", "2026-12-08T14:30:00Z", "Pacific/Honolulu", null],
     ["July: 07:00 MDT", "2026-07-06T13:00:00Z", "America/Denver", "2026-07-06"],
   ])("%s", (_name, iso, zone, day) => expect(digestDayAt(iso, zone)).toBe(day));
+});
+
+describe("the desk section a link names", () => {
+  it.each([
+    ["followUps", "followUps"],
+    ["pastUsual", "pastUsual"],
+    ["everything", null],
+    [["followUps", "corrections"], null],
+    [undefined, null],
+  ])("%j opens %j whole", (value, section) => {
+    expect(deskSectionOf(value)).toBe(section);
+  });
+});
+
+describe("the morning digest's long sections", () => {
+  const section = (total: number, shown: number) => ({
+    title: "Follow-ups due",
+    total,
+    rows: Array.from({ length: shown }, (_, i) => ({ text: `Row ${i + 1}`, url: `https://portal.example/r${i + 1}` })),
+    moreUrl: "https://portal.example/dashboard?desk=followUps#desk-followUps",
+  });
+
+  it("lists the first rows, counts the whole section and links to the rest", () => {
+    const mail = deskDigestEmail({ dayText: "Dec 7, 2026", deskUrl: "https://portal.example/dashboard", sections: [section(40, 15)] });
+    expect(mail.subject).toBe("Today's desk, Dec 7, 2026: 40 items");
+    expect(mail.text).toContain("Follow-ups due (40)");
+    expect(mail.text).toContain("- Row 15");
+    expect(mail.text).toContain("- and 25 more on your desk: https://portal.example/dashboard?desk=followUps#desk-followUps");
+    expect(mail.html).toContain("and 25 more on your desk");
+  });
+
+  it("says nothing more when every row is listed", () => {
+    const mail = deskDigestEmail({ dayText: "Dec 7, 2026", deskUrl: "https://portal.example/dashboard", sections: [section(3, 3)] });
+    expect(mail.text).not.toContain("more on your desk");
+    expect(mail.html).not.toContain("more on your desk");
+  });
 });

@@ -1,5 +1,14 @@
 import Link from "next/link";
-import { DESK_SECTIONS, DESK_SECTION_TITLES, deskDayText, deskIsEmpty, type Desk, type DeskRow, type DeskSection } from "@/lib/domain/desk";
+import {
+  DESK_ROWS_SHOWN,
+  DESK_SECTIONS,
+  DESK_SECTION_TITLES,
+  deskDayText,
+  deskIsEmpty,
+  type Desk,
+  type DeskRow,
+  type DeskSection,
+} from "@/lib/domain/desk";
 import { calendarDayText } from "@/lib/domain/time-zones";
 
 const EMPTY: Record<DeskSection, string> = {
@@ -41,7 +50,18 @@ function Row({ row }: { row: DeskRow }) {
 }
 
 /** The day's desk, one section per kind of work, each row opening its filing. */
-export function TodayDesk({ desk, today, scope }: { desk: Desk; today: string; scope: string }) {
+export function TodayDesk({
+  desk,
+  today,
+  scope,
+  expanded,
+}: {
+  desk: Desk;
+  today: string;
+  scope: string;
+  /** The one section shown whole; the others show their first rows. */
+  expanded: DeskSection | null;
+}) {
   return (
     <section className="space-y-3" aria-labelledby="today-heading" data-testid="today-desk">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -50,22 +70,36 @@ export function TodayDesk({ desk, today, scope }: { desk: Desk; today: string; s
       </div>
       {deskIsEmpty(desk) ? <p className="panel text-sm text-ink-soft">Nothing to chase today.</p> : null}
       <div className="grid gap-3 lg:grid-cols-2">
-        {DESK_SECTIONS.filter((s) => !deskIsEmpty(desk) || s === "inspections").map((section) => (
-          <div key={section} className="panel space-y-1" data-testid={`desk-${section}`}>
-            <h3 className="text-sm font-semibold">
-              {DESK_SECTION_TITLES[section]} <span className="measure font-normal text-ink-faint">({desk[section].length})</span>
-            </h3>
-            {desk[section].length ? (
-              <ul>
-                {desk[section].map((row) => (
-                  <Row key={row.key} row={row} />
-                ))}
-              </ul>
-            ) : (
-              <p className="text-sm text-ink-faint">{EMPTY[section]}</p>
-            )}
-          </div>
-        ))}
+        {DESK_SECTIONS.filter((s) => !deskIsEmpty(desk) || s === "inspections").map((section) => {
+          const rows = section === expanded ? desk[section] : desk[section].slice(0, DESK_ROWS_SHOWN);
+          const hidden = desk[section].length - rows.length;
+          return (
+            <div key={section} id={`desk-${section}`} className="panel space-y-1" data-testid={`desk-${section}`}>
+              <h3 className="text-sm font-semibold">
+                {DESK_SECTION_TITLES[section]} <span className="measure font-normal text-ink-faint">({desk[section].length})</span>
+              </h3>
+              {desk[section].length ? (
+                <ul>
+                  {rows.map((row) => (
+                    <Row key={row.key} row={row} />
+                  ))}
+                </ul>
+              ) : (
+                <p className="text-sm text-ink-faint">{EMPTY[section]}</p>
+              )}
+              {hidden > 0 ? (
+                <Link href={`/dashboard?desk=${section}#desk-${section}`} className="inline-block pt-1 text-sm">
+                  Show all {desk[section].length}
+                </Link>
+              ) : null}
+              {section === expanded && desk[section].length > DESK_ROWS_SHOWN ? (
+                <Link href={`/dashboard#desk-${section}`} className="inline-block pt-1 text-sm">
+                  Show the first {DESK_ROWS_SHOWN}
+                </Link>
+              ) : null}
+            </div>
+          );
+        })}
       </div>
     </section>
   );
