@@ -134,3 +134,5 @@ export const ProjectListQuery = z.object({
   hold: z.enum(["", "active", "on_hold", "cancelled"], { error: "hold must be active, on_hold or cancelled" }).default(""),
 });
 export type ProjectListQuery = z.infer<typeof ProjectListQuery>;
+/** The list the start page opens on; the server renders this page so the table does not load after the page. */
+export const FIRST_LIST_PAGE = { page: "1", pageSize: "20", sort: "number", direction: "desc" } as const;

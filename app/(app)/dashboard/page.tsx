@@ -1,22 +1,30 @@
 import type { Metadata } from "next";
+import { deskSectionOf } from "@/lib/domain/desk";
 import { can } from "@/lib/domain/permissions";
 import { requireUser } from "@/lib/server/auth";
 import { getDesk } from "@/lib/server/data/desk";
+import { listProjects } from "@/lib/server/data/projects";
+import { FIRST_LIST_PAGE, ProjectListQuery } from "@/lib/schemas/project";
 import { ProjectsTable } from "./_components/projects-table";
 import { TodayDesk } from "./_components/today-desk";
 
 export const metadata: Metadata = { title: "Projects" };
 
-export default async function DashboardPage() {
+export default async function DashboardPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const viewer = await requireUser();
+  const expanded = deskSectionOf((await searchParams).desk);
   // The office starts its day with what to chase; the crew's list is its projects.
-  const today = can(viewer, "desk:view") ? await getDesk({ viewer }) : null;
+  const [today, firstPage] = await Promise.all([
+    can(viewer, "desk:view") ? getDesk({ viewer }) : null,
+    listProjects({ viewer, query: ProjectListQuery.parse(FIRST_LIST_PAGE) }),
+  ]);
   return (
     <div className="space-y-6">
       {today ? (
         <TodayDesk
           desk={today.desk}
           today={today.today}
+          expanded={expanded}
           scope={viewer.role === "admin" ? "Every active project of the company." : "The active projects you coordinate."}
         />
       ) : null}
@@ -30,7 +38,7 @@ export default async function DashboardPage() {
               : "Every project of your company, from draft to permission to operate."}
           </p>
         </div>
-        <ProjectsTable canCreate={can(viewer, "project:create")} canExport={can(viewer, "reports:view")} />
+        <ProjectsTable canCreate={can(viewer, "project:create")} canExport={can(viewer, "reports:view")} firstPage={firstPage} />
       </div>
     </div>
   );

@@ -9,10 +9,11 @@ import { StageBadge } from "@/components/ui/stage-badge";
 import { WAITING_PARTIES, WAITING_PARTY_LABELS } from "@/lib/domain/filings";
 import { STAGES, STAGE_LABELS, stageIndex } from "@/lib/domain/stages";
 import type { ProjectDto } from "@/lib/dto/projects";
+import { FIRST_LIST_PAGE } from "@/lib/schemas/project";
 
-type Page = { items: ProjectDto[]; total: number; page: number; pageSize: number; pageCount: number };
+export type ProjectListPage = { items: ProjectDto[]; total: number; page: number; pageSize: number; pageCount: number };
 
-async function fetchJson(url: string): Promise<Page> {
+async function fetchJson(url: string): Promise<ProjectListPage> {
   const res = await fetch(url);
   const body = await res.json().catch(() => null);
   if (!res.ok) throw new Error(body?.error?.message ?? `The project list could not be loaded (${res.status}).`);
@@ -82,7 +83,18 @@ function WaitingOn({ project }: { project: ProjectDto }) {
   );
 }
 
-export function ProjectsTable({ canCreate, canExport = false }: { canCreate: boolean; canExport?: boolean }) {
+const FIRST_PAGE_URL = `/api/v1/projects?${new URLSearchParams(FIRST_LIST_PAGE)}`;
+
+export function ProjectsTable({
+  canCreate,
+  canExport = false,
+  firstPage,
+}: {
+  canCreate: boolean;
+  canExport?: boolean;
+  /** The opening page, rendered by the server; later pages, sorts and searches load from the API. */
+  firstPage?: ProjectListPage;
+}) {
   const [search, setSearch] = useState("");
   const [q, setQ] = useState("");
   const [stage, setStage] = useState("");
@@ -101,7 +113,7 @@ export function ProjectsTable({ canCreate, canExport = false }: { canCreate: boo
   }, [search]);
 
   const url = useMemo(() => {
-    const params = new URLSearchParams({ page: String(page), pageSize: "20" });
+    const params = new URLSearchParams({ page: String(page), pageSize: FIRST_LIST_PAGE.pageSize });
     if (q) params.set("q", q);
     if (stage) params.set("stage", stage);
     if (waiting) params.set("waitingOn", waiting);
@@ -113,7 +125,10 @@ export function ProjectsTable({ canCreate, canExport = false }: { canCreate: boo
     return `/api/v1/projects?${params}`;
   }, [page, q, stage, waiting, hold, sorting]);
 
-  const { data, error, isLoading } = useSWR(url, fetchJson, { keepPreviousData: true });
+  const { data, error, isLoading } = useSWR(url, fetchJson, {
+    keepPreviousData: true,
+    fallbackData: url === FIRST_PAGE_URL ? firstPage : undefined,
+  });
   // The spreadsheet holds every project these filters keep, in this order, not only this page.
   const csvUrl = url.replace(/page=\d+&pageSize=\d+&?/, "format=csv&");
 
