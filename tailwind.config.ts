@@ -8,9 +8,9 @@ const config: Config = {
     extend: {
       colors: {
         paper: { DEFAULT: "#f7f3ea", deep: "#efe8d9", edge: "#ddd3bf" },
-        ink: { DEFAULT: "#1f1c17", soft: "#4a443a", faint: "#7b7264" },
-        copper: { DEFAULT: "#b5652b", dark: "#8f4c1c", light: "#f1dcc8" },
-        result: { pass: "#2f7d4a", warn: "#b7791f", fail: "#b3261e" },
+        ink: { DEFAULT: "#1f1c17", soft: "#4a443a", faint: "#675f53" },
+        copper: { DEFAULT: "#a35a24", dark: "#8f4c1c", light: "#f1dcc8" },
+        result: { pass: "#286b3f", warn: "#865710", fail: "#b3261e" },
       },
       fontFamily: {
         sans: ["var(--font-text)", "system-ui", "sans-serif"],

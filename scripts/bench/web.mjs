@@ -1,10 +1,11 @@
-// `npm run bench:web [-- --url http://127.0.0.1:3300]`: Lighthouse (the npm package, on Debian's
+// `npm run bench:web [-- --url http://127.0.0.1:3300 --only "dashboard" --details]`: Lighthouse (the npm package, on Debian's
 // Chromium through chrome-launcher; CHROME_PATH overrides /usr/bin/chromium) on the sign-in page, the
 // dashboard, a project page and its design editor at desktop size, and the field page at phone size,
 // signed in as the demo coordinator. Prints each page's performance and accessibility scores, then
 // each route's first-load JavaScript from the build's manifests, gzip-compressed. Starts the
 // production build on the scale profile (fill it first with `npm run seed:scale`) unless --url names a
-// server already running. Prints figures; asserts nothing.
+// server already running; --only measures the pages whose name contains it, --details prints the
+// elements each failed accessibility audit names. Prints figures; asserts nothing.
 import { readdirSync, readFileSync, existsSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -20,6 +21,8 @@ const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../..")
 const args = process.argv.slice(2);
 const urlAt = args.indexOf("--url");
 let base = urlAt >= 0 ? args[urlAt + 1] : "";
+const details = args.includes("--details");
+const only = args.includes("--only") ? args[args.indexOf("--only") + 1] : "";
 const distDir = path.join(root, process.env.NEXT_DIST_DIR || ".next");
 
 /**
@@ -91,7 +94,7 @@ try {
       .join(" ")} on ${os.cpus().length} cores. Desktop pages use Lighthouse's desktop settings; the phone page its default mobile ones.\n`,
   );
   console.log("| page | performance | accessibility | LCP | TBT | CLS |\n|---|---|---|---|---|---|");
-  for (const page of pages) {
+  for (const page of pages.filter((p) => !only || p.name.includes(only))) {
     const flags = {
       port: chrome.port,
       output: "json",
@@ -109,7 +112,17 @@ try {
     const failed = Object.values(audits).filter(
       (a) => result.lhr.categories.accessibility.auditRefs.some((r) => r.id === a.id && r.weight > 0) && a.score !== null && a.score < 1,
     );
-    for (const a of failed) console.log(`|   ↳ accessibility: ${a.title} | | | | | |`);
+    for (const a of failed) {
+      console.log(`|   ↳ accessibility: ${a.title} | | | | | |`);
+      // --details: the elements each failed audit names, to find them in the code.
+      if (!details) continue;
+      for (const item of (a.details?.items ?? []).slice(0, 6)) {
+        const node = item.node ?? {};
+        console.log(
+          `|     · \`${(node.snippet ?? "").slice(0, 140)}\` ${(node.explanation ?? "").split("\n").at(-1).slice(0, 160)} | | | | | |`,
+        );
+      }
+    }
   }
   console.log("\n| route | first-load JS (gzip) | files |\n|---|---|---|");
   for (const r of firstLoadJs()) console.log(`| ${r.route} | ${(r.bytes / 1024).toFixed(1)} kB | ${r.files} |`);

@@ -40,7 +40,7 @@ export function deskDigestEmail({ dayText, sections, deskUrl }: { dayText: strin
           )}${more(s) > 0 ? `<li style="margin:4px 0"><a href="${escapeHtml(s.moreUrl)}" style="color:#8f4c1c">${escapeHtml(moreText(s))}</a></li>` : ""}</ul>`,
     )
     .join("\n");
-  const footer = `<p style="font-size:12px;color:#7b7264">You can turn this e-mail off in your profile.</p>`;
+  const footer = `<p style="font-size:12px;color:#675f53">You can turn this e-mail off in your profile.</p>`;
   // The lists go after the greeting, before the button.
   const html = base.html.replace("</p>\n<p><a", `</p>\n${lists}\n${footer}\n<p><a`);
   return { subject, text, html };

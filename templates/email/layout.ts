@@ -7,7 +7,7 @@ export function renderEmail({ paragraphs, action }: { paragraphs: string[]; acti
 <div style="max-width:560px;margin:auto;background:#fffdf8;border:1px solid #ddd3bf;padding:24px">
 <p style="font-weight:700;color:#8f4c1c;letter-spacing:.04em">OHMSTEAD</p>
 ${paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`).join("\n")}
-${action ? `<p><a href="${escapeHtml(action.url)}" style="display:inline-block;background:#b5652b;color:#fff;padding:10px 16px;text-decoration:none">${escapeHtml(action.label)}</a></p><p style="font-size:12px;color:#7b7264">${escapeHtml(action.url)}</p>` : ""}
+${action ? `<p><a href="${escapeHtml(action.url)}" style="display:inline-block;background:#a35a24;color:#fff;padding:10px 16px;text-decoration:none">${escapeHtml(action.label)}</a></p><p style="font-size:12px;color:#675f53">${escapeHtml(action.url)}</p>` : ""}
 </div></body></html>`;
   const text = [...paragraphs, ...(action ? [`${action.label}: ${action.url}`] : [])].join("\n\n");
   return { html, text };

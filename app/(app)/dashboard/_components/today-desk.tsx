@@ -75,9 +75,9 @@ export function TodayDesk({
           const hidden = desk[section].length - rows.length;
           return (
             <div key={section} id={`desk-${section}`} className="panel space-y-1" data-testid={`desk-${section}`}>
-              <h3 className="text-sm font-semibold">
+              <h2 className="text-sm font-semibold">
                 {DESK_SECTION_TITLES[section]} <span className="measure font-normal text-ink-faint">({desk[section].length})</span>
-              </h3>
+              </h2>
               {desk[section].length ? (
                 <ul>
                   {rows.map((row) => (
