@@ -98,7 +98,7 @@ export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
         name: "essCode",
         label: "Residential ESS code adopted",
         input: "text",
-        hint: `Blank: ${DEFAULT_ESS_SITING.code} as published`,
+        hint: `The residential battery siting limits it enforces. Blank: ${DEFAULT_ESS_SITING.code} as published`,
         row: 5,
       },
       {
@@ -106,7 +106,7 @@ export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
         label: "Per battery unit (kWh)",
         input: "text",
         hint: `Blank: ${DEFAULT_ESS_SITING.perUnitKwh} kWh`,
-        row: 5,
+        row: 6,
       },
       {
         name: "essGarageKwh",
@@ -120,16 +120,16 @@ export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
         label: "Outdoors or exterior wall (kWh)",
         input: "text",
         hint: `Blank: ${DEFAULT_ESS_SITING.aggregateKwh["outdoor-wall"]} kWh`,
-        row: 6,
+        row: 7,
       },
       {
         name: "essUtilitySpaceKwh",
         label: "Utility closet or basement (kWh)",
         input: "text",
         hint: `Blank: ${DEFAULT_ESS_SITING.aggregateKwh["utility-space"]} kWh`,
-        row: 6,
+        row: 7,
       },
-      { name: "notes", label: "Notes", input: "note", row: 7 },
+      { name: "notes", label: "Notes", input: "note", row: 8 },
     ],
     columns: [
       { label: "Authority", show: "text", key: "name" },

@@ -11,10 +11,10 @@ import { LOCATION_LABELS } from "./storage-words";
 
 const SIZES = options(CONDUCTOR_SIZES, (s) => sizeLabel(s as (typeof CONDUCTOR_SIZES)[number]));
 const MODE_LABELS: Record<(typeof OPERATING_MODES)[number], string> = {
-  "backup-only": "Backup only: charges from the array, discharges only with the grid down",
-  "self-consumption": "Self-consumption: discharges to the home's loads, no battery export",
-  export: "Export: the battery may send energy to the grid",
-  "non-export": "Non-export: nothing is sent to the grid",
+  "backup-only": "Backup only",
+  "self-consumption": "Self-consumption",
+  export: "Export",
+  "non-export": "Non-export",
 };
 const CIRCUIT_LABELS: Record<(typeof BATTERY_CIRCUIT_KINDS)[number], string> = {
   "battery-dc": "Batteries to the multimode inverter (DC)",
@@ -52,8 +52,8 @@ export function StorageStep({ catalog, issues }: { catalog: EquipmentDto[]; issu
         label="Battery"
         options={[
           { value: "none", label: "No battery" },
-          { value: "dc", label: "DC-coupled through a multimode (hybrid) inverter" },
-          { value: "ac", label: "AC-coupled with its own battery inverter" },
+          { value: "dc", label: "DC-coupled, multimode (hybrid) inverter" },
+          { value: "ac", label: "AC-coupled, own battery inverter" },
         ]}
         issues={issues}
         hint="Batteries change the point of connection, add the energy storage checks (Article 706) and may feed a backup loads panel."
@@ -131,13 +131,14 @@ export function StorageStep({ catalog, issues }: { catalog: EquipmentDto[]; issu
               options={OPERATING_MODES.map((m) => ({ value: m, label: MODE_LABELS[m] }))}
               empty="Choose"
               issues={issues}
+              hint="Backup only: discharges with the grid down. Self-consumption: to the home's loads. Non-export: nothing to the grid."
             />
             <TextInput
               name="storage.pcsCurrentSettingA"
               label="Power control setting"
               suffix="A"
               issues={issues}
-              hint="The current a listed power control system holds the sources to (705.13); blank when none is set."
+              hint="The output current a listed power control system is set to (705.13); blank when none is set."
             />
             <TextInput
               name="storage.exportLimitKw"
