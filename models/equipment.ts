@@ -1,7 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 import type { EquipmentKind } from "@/lib/domain/stored-values";
 
-/** A catalog item (PV module, inverter or module-level device) with its data-sheet figures and an optional data sheet PDF in storage. */
+/** A catalog item (PV module, inverter, module-level device or battery) with its data-sheet figures and an optional data sheet PDF in storage. */
 export class Equipment extends Model<InferAttributes<Equipment>, InferCreationAttributes<Equipment>> {
   declare id: CreationOptional<string>;
   declare organizationId: string;

@@ -14,6 +14,12 @@ export class Jurisdiction extends Model<InferAttributes<Jurisdiction>, InferCrea
   declare reviewDays: CreationOptional<number>;
   declare permitValidDays: CreationOptional<number>;
   declare requiredInspections: CreationOptional<InspectionKind[]>;
+  // The residential ESS siting limits it adopted; null: the published ones.
+  declare essCode: CreationOptional<string | null>;
+  declare essPerUnitKwh: CreationOptional<number | null>;
+  declare essGarageKwh: CreationOptional<number | null>;
+  declare essOutdoorKwh: CreationOptional<number | null>;
+  declare essUtilitySpaceKwh: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -31,6 +37,11 @@ export class Jurisdiction extends Model<InferAttributes<Jurisdiction>, InferCrea
         reviewDays: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 10 },
         permitValidDays: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 180 },
         requiredInspections: { type: DataTypes.JSONB, allowNull: false, defaultValue: ["final"] },
+        essCode: { type: DataTypes.STRING(60), allowNull: true },
+        essPerUnitKwh: { type: DataTypes.DOUBLE, allowNull: true },
+        essGarageKwh: { type: DataTypes.DOUBLE, allowNull: true },
+        essOutdoorKwh: { type: DataTypes.DOUBLE, allowNull: true },
+        essUtilitySpaceKwh: { type: DataTypes.DOUBLE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

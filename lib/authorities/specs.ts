@@ -1,5 +1,6 @@
 import type { AuthorityKind } from "@/lib/domain/authorities";
 import { INSPECTION_KIND_LABELS, INSPECTION_KINDS_BY_FILING } from "@/lib/domain/filings";
+import { DEFAULT_ESS_SITING } from "@/lib/engineering/checks/ess-siting";
 import { NEC_EDITIONS } from "@/lib/engineering/types";
 import { JurisdictionInput, UtilityInput } from "@/lib/schemas/reference-data";
 
@@ -54,6 +55,11 @@ export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
       permitValidDays: "180",
       requiredInspections: ["final"],
       notes: "",
+      essCode: "",
+      essPerUnitKwh: "",
+      essGarageKwh: "",
+      essOutdoorKwh: "",
+      essUtilitySpaceKwh: "",
     },
     fields: [
       { name: "name", label: "Authority", input: "text", row: 1 },
@@ -88,7 +94,42 @@ export const AUTHORITY_SPECS: Record<AuthorityKind, AuthorityKindSpec> = {
         row: 3,
       },
       { name: "requiredInspections", label: "Inspections it requires", input: "checks", options: inspectionOptions("permit"), row: 4 },
-      { name: "notes", label: "Notes", input: "note", row: 5 },
+      {
+        name: "essCode",
+        label: "Residential ESS code adopted",
+        input: "text",
+        hint: `The residential battery siting limits it enforces. Blank: ${DEFAULT_ESS_SITING.code} as published`,
+        row: 5,
+      },
+      {
+        name: "essPerUnitKwh",
+        label: "Per battery unit (kWh)",
+        input: "text",
+        hint: `Blank: ${DEFAULT_ESS_SITING.perUnitKwh} kWh`,
+        row: 6,
+      },
+      {
+        name: "essGarageKwh",
+        label: "Garage, all units (kWh)",
+        input: "text",
+        hint: `Blank: ${DEFAULT_ESS_SITING.aggregateKwh.garage} kWh`,
+        row: 6,
+      },
+      {
+        name: "essOutdoorKwh",
+        label: "Outdoors or exterior wall (kWh)",
+        input: "text",
+        hint: `Blank: ${DEFAULT_ESS_SITING.aggregateKwh["outdoor-wall"]} kWh`,
+        row: 7,
+      },
+      {
+        name: "essUtilitySpaceKwh",
+        label: "Utility closet or basement (kWh)",
+        input: "text",
+        hint: `Blank: ${DEFAULT_ESS_SITING.aggregateKwh["utility-space"]} kWh`,
+        row: 7,
+      },
+      { name: "notes", label: "Notes", input: "note", row: 8 },
     ],
     columns: [
       { label: "Authority", show: "text", key: "name" },

@@ -116,5 +116,6 @@ export function newDesignDraft(project: ServiceFacts): DesignFormValues {
       },
     ],
     site: { isDwelling: true, peakSunHours: "" },
+    storage: { coupling: "none" },
   };
 }

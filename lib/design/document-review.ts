@@ -18,6 +18,10 @@ function documentPathOf(field: string, sources: DocumentSources): string {
   if (field === "roofPlanes") return sources.roofPlanesGiven ? "roofPlanes" : "strings"; // the module count came from the strings
   if (field === "module" || field.startsWith("module.")) return `modules[${sources.moduleIndex}]`;
   if (field.startsWith("moduleLevelDevice")) return sources.deviceIndex === null ? "optimizers" : `optimizers[${sources.deviceIndex}]`;
+  // The engine names a battery bank by its id; the document lists batteries by position.
+  const bank = /^storage\.banks\.([^.]+)(\.unit)?(.*)$/.exec(field);
+  if (bank && sources.batteryIds?.includes(bank[1]!)) return `storage.batteries[${sources.batteryIds.indexOf(bank[1]!)}]${bank[3]}`;
+  if (field.startsWith("storage.pcs")) return field.replace("storage.pcs", "storage.powerControl");
   return SITE_PATHS[field] ?? field;
 }
 

@@ -17,13 +17,15 @@ import {
   type TempCoefficient,
 } from "@/lib/engineering";
 import { type DesignDocument, sizeFromLabel } from "./document";
+import { essSitingOf } from "@/lib/authorities/ess-siting";
+import { storageFromDocument } from "./document-storage";
 import type { DesignProblem } from "./to-engine";
 
 type Doc = DesignDocument;
 type Report = (path: string, message: string) => void;
 
 /** Where the engine's single module and device came from, to point engine errors back at the document. */
-export type DocumentSources = { moduleIndex: number; deviceIndex: number | null; roofPlanesGiven: boolean };
+export type DocumentSources = { moduleIndex: number; deviceIndex: number | null; roofPlanesGiven: boolean; batteryIds?: string[] };
 
 export type EngineFromDocument =
   { ok: true; design: Design; site: Site; sources: DocumentSources } | { ok: false; problems: DesignProblem[] };
@@ -60,6 +62,7 @@ export function documentToEngine(doc: Doc): EngineFromDocument {
   const needsRoofData = roofPlanesGiven && doc.mount !== "ground";
   const pvModule = moduleIndex === null ? null : toModule(doc.modules[moduleIndex]!, moduleIndex, needsRoofData, report);
   const service = toService(doc.service, inverters, report);
+  const storage = storageFromDocument(doc, report);
   if (problems.length > 0 || moduleIndex === null || pvModule === null) return { ok: false, problems };
 
   const design: Design = {
@@ -82,8 +85,10 @@ export function documentToEngine(doc: Doc): EngineFromDocument {
       size: sizeFromLabel(doc.groundingElectrodeConductor.size),
     },
     acCombiner: doc.acCombiner,
+    ...(storage ? { storage } : {}),
   };
-  return { ok: true, design, site, sources: { moduleIndex, deviceIndex, roofPlanesGiven } };
+  const batteryIds = doc.storage?.batteries.map((b) => b.id);
+  return { ok: true, design, site, sources: { moduleIndex, deviceIndex, roofPlanesGiven, ...(batteryIds ? { batteryIds } : {}) } };
 }
 
 function uniqueIds(items: readonly { id: string }[], key: string, report: Report) {
@@ -103,7 +108,19 @@ function toSite(doc: Doc, report: Report): Site {
     necEdition: Number(doc.codeEdition) as NecEdition,
     isDwelling: s.isDwelling ?? true,
     peakSunHours: s.peakSunHours,
+    ...(s.essSiting ? { essSiting: essSitingFromDocument(s.essSiting) } : {}),
   };
+}
+
+/** The AHJ's adopted residential ESS limits as the document gives them; a figure left out keeps the published one. */
+function essSitingFromDocument(e: NonNullable<Doc["site"]["essSiting"]>) {
+  return essSitingOf({
+    essCode: e.code || null,
+    essPerUnitKwh: e.perUnitKwh ?? null,
+    essGarageKwh: e.garageKwh ?? null,
+    essOutdoorKwh: e.outdoorWallKwh ?? null,
+    essUtilitySpaceKwh: e.utilitySpaceKwh ?? null,
+  })!;
 }
 
 /** The engine reviews one module model: the one every string names, or the only one listed when there are no strings. */

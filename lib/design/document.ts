@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { CONDUCTOR_SIZES, type ConductorSize, sizeLabel } from "@/lib/engineering/tables/conductor-sizes";
 import { TRADE_SIZES } from "@/lib/engineering/tables/conduit";
+import { ESS_LOCATIONS } from "@/lib/engineering/storage-types";
 import { numberField, optionalNumberField, safeString, type Range } from "@/lib/schemas/fields";
 
 // The public design document of POST /api/v1/design-review: plain JSON, units in
@@ -42,6 +43,16 @@ const Site = z.strictObject({
   highAmbientC: num("The high ambient temperature", r(-20, 60, "°C")),
   isDwelling: flag("isDwelling"), // one- and two-family dwelling; default true
   peakSunHours: optNum("Peak sun hours", r(0.5, 12, "h/day")),
+  // The residential ESS siting limits the AHJ adopted; left out, or a figure left out: the published ones.
+  essSiting: z
+    .strictObject({
+      code: text(60),
+      perUnitKwh: optNum("The per-unit energy limit", r(0, 1000, "kWh")),
+      garageKwh: optNum("The garage limit", r(0, 1000, "kWh")),
+      outdoorWallKwh: optNum("The outdoor limit", r(0, 1000, "kWh")),
+      utilitySpaceKwh: optNum("The utility space limit", r(0, 1000, "kWh")),
+    })
+    .optional(),
 });
 
 const Module = z.strictObject({
@@ -214,6 +225,102 @@ const AcCombiner = z.strictObject({
   breakersA: list(num("A breaker rating", r(1, 1200, "A")), 40, "breakers").optional(), // default: the branch runs' devices
 });
 
+// Storage: batteries, how they couple, how they run, the backup loads panel, the ESS disconnect and battery circuits.
+const Battery = z.strictObject({
+  id,
+  maker: text(80),
+  model: text(80),
+  quantity: whole("The number of units", r(1, 100)),
+  location: oneOf(ESS_LOCATIONS),
+  usableKwh: num("The usable energy", r(0.1, 500, "kWh")),
+  nameplateKwh: num("The nameplate energy", r(0.1, 500, "kWh")),
+  maxContinuousChargeA: num("The maximum continuous charge current", r(0.1, 2000, "A")),
+  maxContinuousDischargeA: num("The maximum continuous discharge current", r(0.1, 2000, "A")),
+  maxChargeKw: num("The maximum charge power", r(0.1, 500, "kW")),
+  maxDischargeKw: num("The maximum discharge power", r(0.1, 500, "kW")),
+  nominalV: num("The nominal voltage", r(1, 2000, "V")),
+  listings: list(
+    safeString({ error: "Each listing is text" }).trim().min(1).max(40, "Each listing is at most 40 characters"),
+    10,
+    "listings",
+  ).optional(), // e.g. ["UL 9540", "UL 9540A"]; unknown → a warning
+  maxUnitsInParallel: optWhole("The units allowed in parallel", r(1, 100)),
+});
+
+const BatteryInverter = z.strictObject({
+  maker: text(80),
+  model: text(80),
+  acRatedW: num("The battery inverter's AC rating", r(1, 1_000_000, "W")),
+  acMaxContinuousA: num("The battery inverter's maximum continuous output current", r(0.1, 2000, "A")),
+  acNominalV: num("The battery inverter's nominal AC voltage", r(100, 1000, "V")),
+  breakerA: num("The battery inverter's breaker", r(1, 4000, "A")),
+});
+
+const BackupLoad = z.strictObject({
+  name: safeString({ error: "Name the load" }).trim().min(1, "Name the load").max(60, "At most 60 characters"),
+  currentA: num("The load current", r(0.1, 1000, "A")),
+  voltageV: oneOfNumbers([120, 240]),
+});
+
+const BackupPanel = z.strictObject({
+  busbarA: num("The backup panel's busbar rating", r(1, 4000, "A")),
+  mainBreakerA: num("The backup panel's main breaker", r(1, 4000, "A")).nullable(), // null: main lugs
+  inverterBreakerA: num("The inverter's breaker in the backup panel", r(1, 4000, "A")),
+  inverterBreakerOppositeEnd: flag("inverterBreakerOppositeEnd"),
+  otherBreakersA: list(num("A breaker rating", r(1, 4000, "A")), 120, "breakers").optional(),
+  voltageV: oneOfNumbers([120, 240]), // 240: a 120/240 V panel
+  multiwireBranchCircuits: flag("multiwireBranchCircuits"),
+  loads: list(BackupLoad, 60, "loads").optional(),
+});
+
+const BatteryCircuit = z.strictObject({
+  id,
+  label: text(60),
+  kind: oneOf(["battery-dc", "battery-inverter-output"]),
+  batteryIds: list(id, 20, "batteries").min(1, "Name at least one battery").optional(), // battery-dc: default all
+  material: oneOf(["Cu", "Al"]),
+  size,
+  insulationC: oneOfNumbers([75, 90]),
+  insulation: text(30),
+  terminalC: oneOfNumbers([60, 75, 90]).optional(), // default 75 °C
+  ocpdA: optNum("The overcurrent device rating", r(1, 4000, "A")),
+});
+
+const Storage = z.strictObject({
+  coupling: oneOf(["dc", "ac"]),
+  multimodeInverterId: id.optional(), // dc: the hybrid inverter among inverters
+  batteryInverter: BatteryInverter.optional(), // ac: required
+  batteries: list(Battery, 20, "batteries").min(1, "List at least one battery"),
+  operatingMode: oneOf(["backup-only", "self-consumption", "export", "non-export"]),
+  exportLimitKw: optNum("The export limit", r(0, 10_000, "kW")),
+  importLimitKw: optNum("The import limit", r(0, 10_000, "kW")),
+  powerControl: z
+    .strictObject({
+      listed: z.boolean({ error: "listed must be true or false" }),
+      currentSettingA: optNum("The power control setting", r(1, 4000, "A")),
+    })
+    .optional(),
+  backupOutput: z
+    .strictObject({
+      continuousA: num("The backup output current", r(0.1, 2000, "A")),
+      voltageV: oneOfNumbers([120, 240]),
+      powerW: optNum("The backup output power", r(1, 1_000_000, "W")),
+      transferTimeS: optNum("The transfer time", r(0, 600, "s")),
+    })
+    .optional(),
+  backupPanel: BackupPanel.optional(),
+  disconnect: z
+    .strictObject({
+      kind: oneOf(["integral", "separate"]),
+      withinSight: flag("withinSight"),
+      lockable: flag("lockable"),
+      location: text(120),
+    })
+    .optional(),
+  availableFaultCurrentA: optNum("The available fault current", r(1, 500_000, "A")),
+  circuits: list(BatteryCircuit, 20, "battery circuits").optional(),
+});
+
 export const DesignDocument = z.strictObject(
   {
     codeEdition: oneOf(CODE_EDITIONS),
@@ -234,6 +341,7 @@ export const DesignDocument = z.strictObject(
     rapidShutdownInitiator: RapidShutdownInitiator.optional(),
     groundingElectrodeConductor: GroundingElectrodeConductor.optional(),
     acCombiner: AcCombiner.optional(),
+    storage: Storage.optional(), // batteries; leave it out for a PV-only design
   },
   { error: "The design document must be a JSON object" },
 );

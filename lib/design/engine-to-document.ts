@@ -9,6 +9,7 @@ import {
   type Site,
 } from "@/lib/engineering";
 import type { DesignDocument } from "./document";
+import { storageToDocument } from "./document-storage";
 import type { DesignProblem } from "./to-engine";
 
 type Doc = DesignDocument;
@@ -38,6 +39,17 @@ export function engineToDocument(design: Design, site: Site): DocumentFromEngine
       highAmbientC: site.highDesignTempC,
       isDwelling: site.isDwelling,
       peakSunHours: site.peakSunHours,
+      ...(site.essSiting
+        ? {
+            essSiting: {
+              code: site.essSiting.code,
+              perUnitKwh: site.essSiting.perUnitKwh,
+              garageKwh: site.essSiting.aggregateKwh.garage ?? undefined,
+              outdoorWallKwh: site.essSiting.aggregateKwh["outdoor-wall"] ?? undefined,
+              utilitySpaceKwh: site.essSiting.aggregateKwh["utility-space"] ?? undefined,
+            },
+          }
+        : {}),
     },
     mount: design.mount,
     listedRapidShutdownSystem: design.listedRapidShutdownSystem,
@@ -77,6 +89,7 @@ export function engineToDocument(design: Design, site: Site): DocumentFromEngine
       busbarA: design.acCombiner.busbarA,
       breakersA: design.acCombiner.breakersA && [...design.acCombiner.breakersA],
     },
+    ...(design.storage ? { storage: storageToDocument(design.storage) } : {}),
   };
   return problems.length > 0 ? { ok: false, problems } : { ok: true, document };
 }

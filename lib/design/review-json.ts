@@ -1,4 +1,11 @@
-import { type CheckResult, type CheckStatus, type ReviewResult, type RunFigures } from "@/lib/engineering";
+import {
+  type CheckResult,
+  type CheckStatus,
+  type ReviewResult,
+  type RunFigures,
+  type StorageFigures,
+  type StorageSummary,
+} from "@/lib/engineering";
 import { worstStatus } from "@/lib/engineering/check-result";
 
 /** The review as the JSON API answers it; figures are rounded as the checks round theirs (two decimals). */
@@ -55,6 +62,12 @@ export type ReviewJson = {
     placement: string;
     values: Record<string, number>;
   }[];
+  /** Present only for a design with storage: the batteries in brief and the figures of their checks. */
+  storage?: Omit<StorageSummary, "backupPanel"> & {
+    locations: StorageFigures["locations"];
+    circuits: StorageFigures["circuits"];
+    backupPanel: StorageFigures["backupPanel"];
+  };
 };
 
 // Checks that compare against roof planes; a document without roof planes has nothing for them to read.
@@ -95,7 +108,15 @@ export function toReviewJson(result: ReviewResult, { roofPlanesGiven }: { roofPl
       placement: l.placement,
       values: l.values,
     })),
+    ...storageJson(result),
   };
+}
+
+function storageJson(result: ReviewResult): Pick<ReviewJson, "storage"> {
+  const figures = result.figures.storage;
+  if (!result.storage || !figures) return {};
+  const { backupPanel: _hasPanel, ...summary } = result.storage;
+  return { storage: { ...summary, locations: figures.locations, circuits: figures.circuits, backupPanel: figures.backupPanel } };
 }
 
 // The API answers the figures it always has; how the terminal rating and the EGC device were chosen is for the calculation sheet.

@@ -1,6 +1,7 @@
 import type {
   ArrayDesign,
   ConductorRun,
+  EssSitingLimits,
   Design,
   Inverter,
   ModuleLevelDevice,
@@ -13,8 +14,14 @@ import type {
 } from "@/lib/engineering";
 import type { DesignInput } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
+import { storageFromInput } from "./storage-to-engine";
 
-export type SiteConditions = { recordLowTempC: number; highDesignTempC: number; necEdition: NecEdition };
+export type SiteConditions = {
+  recordLowTempC: number;
+  highDesignTempC: number;
+  necEdition: NecEdition;
+  essSiting?: EssSitingLimits; // the AHJ's adopted residential ESS limits; absent: the published ones
+};
 
 /** A design entry that points at something missing; path is the form field to fix. */
 export type DesignProblem = { path: string; message: string };
@@ -264,6 +271,8 @@ export function toEngineInput(input: DesignInput, catalog: EquipmentDto[], condi
   const runs = input.runs
     .map((run, i) => runOf(run, i, lines.strings, lines.idsByLine, inverterLineIds, problems))
     .filter((r): r is ConductorRun => r !== null);
+  const stored = storageFromInput(input.storage, catalog, eq.inverters, input.equipment.inverters);
+  problems.push(...stored.problems);
   if (problems.length || !eq.module) return { ok: false, problems };
 
   const s = input.service;
@@ -298,6 +307,7 @@ export function toEngineInput(input: DesignInput, catalog: EquipmentDto[], condi
       ? { size: s.gecSize, material: s.gecMaterial || "Cu", electrode: s.gecElectrode || "other" }
       : undefined,
     acCombiner: s.combinerBusbarA !== undefined ? { busbarA: s.combinerBusbarA } : undefined,
+    ...(stored.storage ? { storage: stored.storage } : {}),
   };
   const site: Site = { ...conditions, isDwelling: input.site.isDwelling ?? true, peakSunHours: input.site.peakSunHours };
   return { ok: true, design, site };

@@ -8,7 +8,7 @@ export type { NecEdition } from "@/lib/engineering/types";
 export type { FeeAuthorityKind } from "@/lib/fees/types";
 export type { AuthorityKind } from "./authorities";
 
-export const EQUIPMENT_KINDS = ["module", "inverter", "device"] as const;
+export const EQUIPMENT_KINDS = ["module", "inverter", "device", "battery"] as const;
 export type EquipmentKind = (typeof EQUIPMENT_KINDS)[number];
 
 export const PACKET_KINDS = ["permit", "interconnection"] as const;

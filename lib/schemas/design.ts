@@ -2,6 +2,7 @@ import { z } from "zod";
 import { safeString } from "./fields";
 import { withArticle } from "@/lib/engineering/check-result";
 import { CONDUCTOR_SIZES } from "@/lib/engineering/tables/conductor-sizes";
+import { ESS_LOCATIONS } from "@/lib/engineering/storage-types";
 
 export const TRADE_SIZES = ["1/2", "3/4", "1", "1-1/4", "1-1/2", "2"] as const;
 /** How a run is enclosed: no raceway (cable or free air), a conduit, or Type MC cable (metal armor). */
@@ -41,6 +42,124 @@ const sizeOrBlank = z.union([z.enum(CONDUCTOR_SIZES), z.literal("")], { error: "
 const materialOrBlank = z.union([z.enum(["Cu", "Al"]), z.literal("")]).optional();
 const lineId = safeString().min(1).max(20);
 const flag = z.boolean().optional();
+/** Breakers typed as "20, 20, 30": whole amperes. */
+const breakerList = safeString()
+  .max(200)
+  .optional()
+  .transform((v, ctx) => {
+    const parts = (v ?? "")
+      .split(/[,\s]+/)
+      .filter(Boolean)
+      .map(Number);
+    if (parts.some((n) => !Number.isInteger(n) || n <= 0 || n > 1200)) {
+      ctx.addIssue({ code: "custom", message: "List the other breakers in whole amperes separated by commas, e.g. 20, 20, 30" });
+      return z.NEVER;
+    }
+    return parts;
+  });
+
+export const OPERATING_MODES = ["backup-only", "self-consumption", "export", "non-export"] as const;
+export const BATTERY_CIRCUIT_KINDS = ["battery-dc", "battery-inverter-output"] as const;
+
+/** What storage shares whichever way it couples: the batteries, how they run, the backup loads panel, the disconnect and circuits. */
+const storageParts = {
+  banks: z
+    .array(
+      z.object({
+        lineId,
+        equipmentId: catalogId("battery"),
+        quantity: required("Number of units", 1, 40, "", { integer: true }),
+        location: choice(ESS_LOCATIONS, "place the batteries stand"),
+      }),
+    )
+    .min(1, "Add at least one battery")
+    .max(6, "At most 6 battery lines"),
+  operatingMode: choice(OPERATING_MODES, "operating mode"),
+  exportLimitKw: optional("Export limit", 0, 1000, "kW"),
+  importLimitKw: optional("Import limit", 0, 1000, "kW"),
+  // The current a listed power control system holds the sources to (705.13); blank: not set.
+  pcsCurrentSettingA: optional("Power control setting", 1, 1200, "A"),
+  hasBackupPanel: flag,
+  backupBusbarA: optional("Backup panel busbar", 20, 1200, "A", { integer: true }),
+  backupMainBreakerA: optional("Backup panel main breaker", 15, 1200, "A", { integer: true }),
+  backupInverterBreakerA: optional("Inverter breaker in the backup panel", 10, 1200, "A", { integer: true }),
+  backupInverterBreakerAtOppositeEnd: flag,
+  backupOtherBreakersA: breakerList,
+  backupPanelVoltageV: z.enum(["240", "120"], { error: "Choose the backup panel's voltage" }).optional(),
+  backupMultiwire: yesNo,
+  backupLoads: z
+    .array(
+      z.object({
+        lineId,
+        name: text("load's name", 60),
+        currentA: required("Load current", 0.1, 200, "A"),
+        voltageV: choice(["120", "240"], "load's voltage"),
+      }),
+    )
+    .max(24, "At most 24 backed-up loads")
+    .optional(),
+  disconnectKind: z.enum(["", "integral", "separate"], { error: "Choose the storage disconnect" }).optional(),
+  disconnectWithinSight: yesNo,
+  disconnectLockable: yesNo,
+  disconnectLocation: optionalText(120),
+  availableFaultCurrentA: optional("Available fault current", 1, 100_000, "A"),
+  circuits: z
+    .array(
+      z.object({
+        lineId,
+        label: text("circuit name", 60),
+        kind: choice(BATTERY_CIRCUIT_KINDS, "circuit kind"),
+        material: choice(["Cu", "Al"], "conductor material"),
+        size: choice(CONDUCTOR_SIZES, "conductor size"),
+        insulationTempC: choice(["75", "90"], "insulation temperature rating"),
+        insulation: z.union([z.enum(INSULATIONS), z.literal("")]).optional(),
+        terminalTempC: z.enum(["", "60", "75", "90"], { error: "Choose the terminal temperature rating" }).optional(),
+        ocpdA: optional("Overcurrent device", 1, 1200, "A", { integer: true }),
+      }),
+    )
+    .max(6, "At most 6 battery circuits")
+    .optional(),
+};
+
+const backupPanelComplete = (
+  s: { hasBackupPanel?: boolean; backupBusbarA?: number; backupInverterBreakerA?: number },
+  ctx: z.RefinementCtx,
+) => {
+  if (!s.hasBackupPanel) return;
+  if (s.backupBusbarA === undefined)
+    ctx.addIssue({ code: "custom", path: ["backupBusbarA"], message: "Enter the backup panel's busbar rating" });
+  if (s.backupInverterBreakerA === undefined)
+    ctx.addIssue({ code: "custom", path: ["backupInverterBreakerA"], message: "Enter the inverter's breaker in the backup panel" });
+};
+
+/**
+ * The design's batteries, or "none": a PV-only design. Other entries beside "none" are dropped unread,
+ * so switching a design back to no battery never leaves it refused for a half-typed battery line.
+ */
+export const StorageInput = z.discriminatedUnion(
+  "coupling",
+  [
+    z.object({ coupling: z.literal("none") }),
+    z
+      .object({
+        coupling: z.literal("dc"),
+        multimodeInverterLineId: safeString({ error: "Choose the multimode inverter the batteries charge through" })
+          .min(1, "Choose the multimode inverter the batteries charge through")
+          .max(20),
+        ...storageParts,
+      })
+      .superRefine(backupPanelComplete),
+    z
+      .object({
+        coupling: z.literal("ac"),
+        batteryInverterId: catalogId("battery inverter"),
+        batteryInverterBreakerA: required("Battery inverter breaker", 10, 1200, "A", { integer: true }),
+        ...storageParts,
+      })
+      .superRefine(backupPanelComplete),
+  ],
+  { error: "Choose no battery, DC-coupled or AC-coupled" },
+);
 
 /** The design as the review needs it; parsed on the client as you type and again on the server. */
 export const DesignInput = z.object({
@@ -94,20 +213,7 @@ export const DesignInput = z.object({
     connection: choice(["load-side", "supply-side"], "point of connection"),
     pvBreakerA: required("PV breaker", 10, 1200, "A", { integer: true }),
     pvBreakerAtOppositeEnd: flag,
-    otherBreakersA: safeString()
-      .max(200)
-      .optional()
-      .transform((v, ctx) => {
-        const parts = (v ?? "")
-          .split(/[,\s]+/)
-          .filter(Boolean)
-          .map(Number);
-        if (parts.some((n) => !Number.isInteger(n) || n <= 0 || n > 1200)) {
-          ctx.addIssue({ code: "custom", message: "List the other breakers in whole amperes separated by commas, e.g. 20, 20, 30" });
-          return z.NEVER;
-        }
-        return parts;
-      }),
+    otherBreakersA: breakerList,
     serviceLocation: optionalText(120),
     pvDisconnectLocation: optionalText(120),
     // Where a load-side connection lands, and the panel's feed.
@@ -180,7 +286,10 @@ export const DesignInput = z.object({
     isDwelling: flag,
     peakSunHours: optional("Peak sun hours", 1, 8, "h/day"),
   }),
+  // Absent in designs saved before storage existed: the same as "none".
+  storage: StorageInput.optional(),
 });
+export type StorageInput = z.output<typeof StorageInput>;
 export type DesignInput = z.output<typeof DesignInput>;
 /** The editor's form values: what the inputs hold before parsing. */
 export type DesignFormValues = z.input<typeof DesignInput>;
@@ -190,7 +299,17 @@ const LOOSE_LEAF = z.union([safeString().max(200), z.number(), z.boolean(), z.nu
 
 /** The same shape with every leaf accepting whatever was typed: drafts are saved as they are. */
 function loosen(schema: z.ZodType): z.ZodType {
-  const def = (schema as unknown as { _zod: { def: { type: string; shape?: Record<string, z.ZodType>; element?: z.ZodType } } })._zod.def;
+  const def = (
+    schema as unknown as {
+      _zod: {
+        def: { type: string; shape?: Record<string, z.ZodType>; element?: z.ZodType; innerType?: z.ZodType; options?: z.ZodType[] };
+      };
+    }
+  )._zod.def;
+  if (def.type === "optional" && def.innerType) return loosen(def.innerType);
+  // A choice of shapes (storage's couplings) is saved as one shape holding every option's fields.
+  if (def.type === "union" && def.options?.every((o) => (o as unknown as { _zod: { def: { type: string } } })._zod.def.type === "object"))
+    return loosen(z.object(Object.assign({}, ...def.options.map((o) => (o as z.ZodObject).shape))));
   if (def.type === "object" && def.shape)
     return z.object(Object.fromEntries(Object.entries(def.shape).map(([k, v]) => [k, loosen(v)]))).partial();
   if (def.type === "array" && def.element) return z.array(loosen(def.element)).max(50).optional();
@@ -202,11 +321,12 @@ export const DesignDraft = loosen(DesignInput) as z.ZodType<DeepLoose<DesignForm
 type DeepLoose<T> = T extends Leaf ? Leaf : T extends (infer U)[] ? DeepLoose<U>[] | undefined : { [K in keyof T]?: DeepLoose<T[K]> };
 export type DesignDraft = DeepLoose<DesignFormValues>;
 
-/** The editor's five steps; each but the last edits one top-level part of the design. */
+/** The editor's steps; each but the last edits one top-level part of the design. */
 export const DESIGN_STEPS = [
   { key: "equipment", title: "Equipment" },
   { key: "array", title: "Arrays and strings" },
   { key: "service", title: "Service and connection" },
   { key: "runs", title: "Conductor runs" },
+  { key: "storage", title: "Storage" },
   { key: "review", title: "Review" },
 ] as const;

@@ -81,6 +81,19 @@ export const InverterSpecs = z
     dcArcFaultProtection: yesNoUnknown,
     dcGroundFaultProtection: yesNoUnknown,
     dcDisconnect: yesNoUnknown,
+    // Storage: a multimode (hybrid) inverter charges batteries from its DC side; a battery inverter couples them on the AC side.
+    storageRole: z.enum(["none", "multimode", "battery"], { error: "Choose PV only, multimode or battery inverter" }).optional(), // blank: PV only
+    // What it supplies with the grid down (Article 710), from the data sheet's backup or stand-alone output.
+    backupContinuousA: optionalNumberField("Backup output continuous current", { min: 0.1, max: 400, unit: "A" }),
+    backupVoltageV: z.preprocess(
+      (v) => (v === "" || v === null ? undefined : typeof v === "string" ? Number(v) : v),
+      z.union([z.literal(120), z.literal(240)], { error: "The backup output is 120 V or 120/240 V (240)" }).optional(),
+    ),
+    backupPowerW: optionalNumberField("Backup output power", { min: 100, max: 100_000, unit: "W" }),
+    transferTimeS: optionalNumberField("Transfer time", { min: 0, max: 600, unit: "s" }),
+    // A power control system (705.13) built in: listed as one, and whether its current limit can be set.
+    pcsListed: yesNoUnknown,
+    pcsCurrentLimitSettable: yesNoUnknown,
   })
   .refine((s) => s.mpptMinV === undefined || s.mpptMaxV === undefined || s.mpptMinV < s.mpptMaxV, {
     path: ["mpptMaxV"],
@@ -124,10 +137,41 @@ export const DeviceSpecs = z.object({
 });
 export type DeviceSpecs = z.output<typeof DeviceSpecs>;
 
+/** A battery unit as its data sheet states it; the residential siting limits count the nameplate energy. */
+export const BatterySpecs = z
+  .object({
+    usableKwh: numberField("Usable energy", { min: 0.1, max: 200, unit: "kWh" }),
+    nameplateKwh: numberField("Nameplate energy", { min: 0.1, max: 200, unit: "kWh" }),
+    maxContinuousChargeA: numberField("Maximum continuous charge current", { min: 0.1, max: 1000, unit: "A" }),
+    maxContinuousDischargeA: numberField("Maximum continuous discharge current", { min: 0.1, max: 1000, unit: "A" }),
+    maxChargeKw: numberField("Maximum charge power", { min: 0.1, max: 200, unit: "kW" }),
+    maxDischargeKw: numberField("Maximum discharge power", { min: 0.1, max: 200, unit: "kW" }),
+    nominalVoltageV: numberField("Nominal voltage", { min: 12, max: 1500, unit: "V" }),
+    maxUnitsInParallel: optionalNumberField("Units allowed in parallel", { min: 1, max: 40, unit: "" }).refine(
+      (v) => v === undefined || Number.isInteger(v),
+      "Units allowed in parallel must be a whole number",
+    ),
+  })
+  .refine((s) => s.usableKwh <= s.nameplateKwh, {
+    path: ["usableKwh"],
+    message: "The usable energy cannot exceed the nameplate energy",
+    when: whenValid("usableKwh", "nameplateKwh"),
+  });
+export type BatterySpecs = z.output<typeof BatterySpecs>;
+
+/** A battery's listings as the engine reads them: the catalog's listing text split at commas and semicolons ("UL 9540, UL 9540A"). */
+export function listingsOf(listing: string): string[] {
+  return listing
+    .split(/[;,]/)
+    .map((l) => l.trim())
+    .filter(Boolean);
+}
+
 export const EQUIPMENT_KIND_LABELS: Record<EquipmentKind, string> = {
   module: "PV module",
   inverter: "Inverter",
   device: "Module-level device",
+  battery: "Battery",
 };
 
 const common = { maker: requiredText("maker", 80), model: requiredText("model", 80), listing: optionalText(120) };
@@ -139,6 +183,7 @@ export const EquipmentInput = z.discriminatedUnion(
     z.object({ kind: z.literal("module"), ...common, specs: ModuleSpecs }),
     z.object({ kind: z.literal("inverter"), ...common, specs: InverterSpecs }),
     z.object({ kind: z.literal("device"), ...common, specs: DeviceSpecs }),
+    z.object({ kind: z.literal("battery"), ...common, specs: BatterySpecs }),
   ],
   { error: `Choose a kind: ${EQUIPMENT_KINDS.join(", ")}` },
 );
@@ -152,7 +197,8 @@ export const UpdateEquipmentInput = z.object({ equipmentId: safeString().uuid("U
 export type EquipmentDto =
   | ({ kind: "module"; specs: ModuleSpecs } & EquipmentCommon)
   | ({ kind: "inverter"; specs: InverterSpecs } & EquipmentCommon)
-  | ({ kind: "device"; specs: DeviceSpecs } & EquipmentCommon);
+  | ({ kind: "device"; specs: DeviceSpecs } & EquipmentCommon)
+  | ({ kind: "battery"; specs: BatterySpecs } & EquipmentCommon);
 export type EquipmentCommon = {
   id: string;
   maker: string;

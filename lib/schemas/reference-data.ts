@@ -13,6 +13,9 @@ const requiredInspections = <K extends readonly [string, ...string[]]>(kinds: K,
     z.array(z.enum(kinds, { error: "Choose from the inspections listed" })).transform((list) => [...new Set(list)]),
   );
 
+/** An adopted ESS siting figure; blank stores null, meaning the published model-code figure. */
+const essKwh = (label: string) => optionalNumberField(label, { min: 0, max: 1000, unit: "kWh" }).transform((v) => v ?? null);
+
 /** Days an authority usually takes to answer; left out, the given default. */
 const days = (label: string, range: { min: number; max: number }, usual: number) =>
   optionalNumberField(label, { ...range, unit: "days" }).transform((v) => v ?? usual);
@@ -38,6 +41,12 @@ export const JurisdictionInput = z
     permitValidDays: days("Permit validity", { min: 30, max: 1095 }, 180),
     requiredInspections: requiredInspections(INSPECTION_KINDS_BY_FILING.permit, ["final"]),
     notes: optionalText(2000),
+    // The residential ESS siting limits the AHJ adopted, where they differ from the published ones.
+    essCode: optionalText(60).transform((v) => v || null),
+    essPerUnitKwh: essKwh("Per-unit energy limit"),
+    essGarageKwh: essKwh("Garage limit"),
+    essOutdoorKwh: essKwh("Outdoor limit"),
+    essUtilitySpaceKwh: essKwh("Utility space limit"),
   })
   .refine((j) => j.recordLowTempC < j.highDesignTempC, {
     path: ["highDesignTempC"],

@@ -35,6 +35,21 @@ const LABELS: Record<string, string> = {
   maxInputV: "Maximum input voltage (V)",
   maxOutputCurrentA: "Maximum output current (A)",
   shutdownOutputV: "Output while shut down (V)",
+  storageRole: "Battery role",
+  backupContinuousA: "Backup output, continuous (A)",
+  backupVoltageV: "Backup output voltage (V)",
+  backupPowerW: "Backup output power (W)",
+  transferTimeS: "Transfer time (s)",
+  pcsListed: "Listed power control system",
+  pcsCurrentLimitSettable: "Settable current limit",
+  usableKwh: "Usable energy (kWh)",
+  nameplateKwh: "Nameplate energy (kWh)",
+  maxContinuousChargeA: "Maximum continuous charge current (A)",
+  maxContinuousDischargeA: "Maximum continuous discharge current (A)",
+  maxChargeKw: "Maximum charge power (kW)",
+  maxDischargeKw: "Maximum discharge power (kW)",
+  nominalVoltageV: "Nominal voltage (V DC)",
+  maxUnitsInParallel: "Units allowed in parallel",
 };
 
 const text = (value: unknown): string => {

@@ -7,6 +7,7 @@ import type { NecEdition } from "@/lib/engineering";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 import { demoEquipment, passingDemoReadings } from "./demo-commissioning";
 import { DESIGN_MODELS, demoDesign, type CatalogIds } from "./demo-designs";
+import { DEMO_STORAGE_CUSTOMERS, STORAGE_MODELS, demoStorageDesign, type StorageIds } from "./demo-storage-designs";
 
 /**
  * Gives every demo project past "Draft" a design, reviewed as the editor would on save, and every
@@ -27,9 +28,10 @@ export async function seedDemoDesigns(organizationId: string, transaction: Trans
         datasheet: null,
       }) as EquipmentDto,
   );
-  const ids = Object.fromEntries(
-    Object.entries(DESIGN_MODELS).map(([key, model]) => [key, catalog.find((c) => c.model === model)?.id ?? ""]),
-  ) as CatalogIds;
+  const idsOf = (models: Record<string, string>) =>
+    Object.fromEntries(Object.entries(models).map(([key, model]) => [key, catalog.find((c) => c.model === model)?.id ?? ""]));
+  const ids = idsOf(DESIGN_MODELS) as CatalogIds;
+  const storageIds = idsOf(STORAGE_MODELS) as StorageIds;
   const jurisdictions = new Map((await Jurisdiction.findAll({ where: { organizationId }, transaction })).map((j) => [j.id, j]));
   const utilities = new Map((await Utility.findAll({ where: { organizationId }, transaction })).map((u) => [u.id, u]));
   const projects = await Project.findAll({
@@ -39,7 +41,9 @@ export async function seedDemoDesigns(organizationId: string, transaction: Trans
   });
 
   for (const [i, project] of projects.entries()) {
-    const draft = demoDesign(ids, { busbarA: project.busbarA ?? 200, mainBreakerA: project.mainBreakerA ?? 200 }, i);
+    const service = { busbarA: project.busbarA ?? 200, mainBreakerA: project.mainBreakerA ?? 200 };
+    const scenario = DEMO_STORAGE_CUSTOMERS[project.customerName];
+    const draft = scenario ? demoStorageDesign(ids, storageIds, service, scenario, i) : demoDesign(ids, service, i);
     const j = project.jurisdictionId ? jurisdictions.get(project.jurisdictionId) : undefined;
     const outcome = runDesignReview(
       draft,

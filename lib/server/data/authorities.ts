@@ -2,6 +2,7 @@ import "server-only";
 import type { Transaction } from "sequelize";
 import { Jurisdiction, Utility } from "@/models";
 import type { AuthorityKind } from "@/lib/domain/authorities";
+import type { AdoptedEssSiting } from "@/lib/authorities/ess-siting";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import type { JurisdictionValues, UtilityValues } from "@/lib/schemas/reference-data";
@@ -24,7 +25,7 @@ export type JurisdictionDto = {
   permitValidDays: number;
   requiredInspections: string[];
   notes: string;
-};
+} & AdoptedEssSiting;
 export type UtilityDto = {
   id: string;
   name: string;
@@ -51,9 +52,12 @@ const STORES: Record<AuthorityKind, KindStore> = {
     list: (organizationId) => Jurisdiction.findAll({ where: { organizationId }, order: [["name", "ASC"]] }),
     create: (values, transaction) => Jurisdiction.create(values as never, { transaction }),
     toDto: (row) => {
-      const { id, name, state, necEdition, recordLowTempC, highDesignTempC, reviewDays, permitValidDays, requiredInspections, notes } =
-        row as Jurisdiction;
-      return { id, name, state, necEdition, recordLowTempC, highDesignTempC, reviewDays, permitValidDays, requiredInspections, notes };
+      const j = row as Jurisdiction;
+      const { id, name, state, necEdition, recordLowTempC, highDesignTempC, reviewDays, permitValidDays, requiredInspections, notes } = j;
+      return {
+        ...{ id, name, state, necEdition, recordLowTempC, highDesignTempC, reviewDays, permitValidDays, requiredInspections, notes },
+        ...adoptedEssSiting(j),
+      };
     },
   },
   utility: {
@@ -66,6 +70,17 @@ const STORES: Record<AuthorityKind, KindStore> = {
     },
   },
 };
+
+/** The ESS siting figures an AHJ row holds, for its DTO and for the review's site. */
+export function adoptedEssSiting(j: Jurisdiction): AdoptedEssSiting {
+  return {
+    essCode: j.essCode ?? null,
+    essPerUnitKwh: j.essPerUnitKwh ?? null,
+    essGarageKwh: j.essGarageKwh ?? null,
+    essOutdoorKwh: j.essOutdoorKwh ?? null,
+    essUtilitySpaceKwh: j.essUtilitySpaceKwh ?? null,
+  };
+}
 
 /** NOT_FOUND for missing, foreign and malformed ids alike. */
 async function findOwn(kind: AuthorityKind, viewer: Viewer, id: string, transaction?: Transaction): Promise<Row> {

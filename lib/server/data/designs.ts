@@ -10,6 +10,8 @@ import { DesignDraft, DesignInput } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 import { db } from "../db";
 import { isUuid } from "./ids";
+import { essSitingOf } from "@/lib/authorities/ess-siting";
+import { adoptedEssSiting } from "./authorities";
 import { recordAudit } from "./audit";
 import { markRevisionNeeded } from "./filings";
 import { refreshProjectFacts } from "./project-facts";
@@ -18,16 +20,35 @@ import { getProjectById } from "./projects";
 import type { ProjectDto } from "@/lib/dto/projects";
 import type { DesignDto, DesignStatusDto } from "@/lib/dto/designs";
 
+/** An AHJ's design temperatures, edition and adopted ESS siting limits, as the review's site takes them. */
+export function siteConditionsOf(j: Jurisdiction): SiteConditions {
+  const essSiting = essSitingOf(adoptedEssSiting(j));
+  return {
+    recordLowTempC: j.recordLowTempC,
+    highDesignTempC: j.highDesignTempC,
+    necEdition: j.necEdition as NecEdition,
+    ...(essSiting ? { essSiting } : {}),
+  };
+}
+
 async function siteConditions(viewer: Viewer, jurisdictionId: string | null): Promise<SiteConditions | null> {
   if (!jurisdictionId) return null;
   const j = await Jurisdiction.findOne({ where: { id: jurisdictionId, organizationId: viewer.organizationId } });
-  return j ? { recordLowTempC: j.recordLowTempC, highDesignTempC: j.highDesignTempC, necEdition: j.necEdition as NecEdition } : null;
+  return j ? siteConditionsOf(j) : null;
 }
 
 /** Every catalog id the draft mentions, whatever its shape, for one lookup. */
 export function referencedIds(draft: DesignDraft): string[] {
   const e = draft.equipment ?? {};
-  const ids = [e.moduleId, e.deviceId, ...(e.inverters ?? []).map((l) => l?.equipmentId)];
+  // Storage's couplings hold different entries; any of them may name catalog items.
+  const s = (draft.storage ?? {}) as { batteryInverterId?: unknown; banks?: ({ equipmentId?: unknown } | null | undefined)[] };
+  const ids = [
+    e.moduleId,
+    e.deviceId,
+    ...(e.inverters ?? []).map((l) => l?.equipmentId),
+    s.batteryInverterId,
+    ...(s.banks ?? []).map((l) => l?.equipmentId),
+  ];
   return ids.filter((v): v is string => typeof v === "string" && isUuid(v));
 }
 

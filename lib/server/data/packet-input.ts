@@ -3,7 +3,6 @@ import type { Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
 import type { PacketKind } from "@/lib/domain/stored-values";
 import type { PacketInput } from "@/lib/documents/packets/input";
-import type { EquipmentDto } from "@/lib/schemas/equipment";
 import type { DesignSnapshot, ReviewedDesign } from "@/lib/dto/reviewed-design";
 import { getDatasheetLocation } from "./equipment";
 import { getOrganization } from "./organizations";
@@ -31,7 +30,7 @@ export async function buildPacketInput({
   const withSheets = [
     ...new Map(
       [equipment.module, ...equipment.inverters.map((l) => l.item), equipment.device]
-        .filter((e): e is EquipmentDto => Boolean(e?.datasheet))
+        .filter((e): e is NonNullable<typeof e> => Boolean(e?.datasheet))
         .map((e) => [e.id, e]),
     ).values(),
   ];

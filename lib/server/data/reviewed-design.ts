@@ -2,13 +2,12 @@ import "server-only";
 import { Jurisdiction, Utility } from "@/models";
 import { runDesignReview } from "@/lib/design/run-review";
 import type { Viewer } from "@/lib/domain/permissions";
-import type { NecEdition } from "@/lib/engineering";
 import { DesignInput } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 import type { ProjectDto } from "@/lib/dto/projects";
 import type { DesignSnapshot, ReviewedDesign } from "@/lib/dto/reviewed-design";
 import { db } from "../db";
-import { referencedIds, savedOrNewDesign } from "./designs";
+import { referencedIds, savedOrNewDesign, siteConditionsOf } from "./designs";
 import { getEquipmentByIds } from "./equipment";
 import { getProjectById } from "./projects";
 
@@ -35,13 +34,7 @@ export async function getReviewedDesign({
     project.jurisdiction ? Jurisdiction.findOne({ where: { id: project.jurisdiction.id, organizationId: viewer.organizationId } }) : null,
     project.utility ? Utility.findOne({ where: { id: project.utility.id, organizationId: viewer.organizationId } }) : null,
   ]);
-  const conditions = jurisdiction
-    ? {
-        recordLowTempC: jurisdiction.recordLowTempC,
-        highDesignTempC: jurisdiction.highDesignTempC,
-        necEdition: jurisdiction.necEdition as NecEdition,
-      }
-    : null;
+  const conditions = jurisdiction ? siteConditionsOf(jurisdiction) : null;
   const outcome = runDesignReview(design.draft, catalog, conditions);
   if (outcome.status !== "reviewed" || !jurisdiction)
     return { status: "incomplete", project, problems: outcome.status === "incomplete" ? outcome.problems : [] };

@@ -63,7 +63,7 @@ test("coordinator builds a design step by step and fixes a failing check by its 
   await page.getByLabel("Modules", { exact: true }).fill("14");
   await expect(review).toHaveAttribute("data-review", "pass");
 
-  await page.getByRole("button", { name: /5\. Review/ }).click();
+  await page.getByRole("button", { name: /6\. Review/ }).click();
   const full = page.getByTestId("review-panel");
   await expect(full.getByTestId("check").filter({ hasText: "String S1 maximum voltage" })).toHaveAttribute("data-status", "pass");
   await expect(page.getByTestId("warning-label").first()).toBeVisible();
@@ -143,7 +143,7 @@ test("coordinator sees a 25-module string flagged on step 2, a missing length na
   // Counted from what the raceway carries: two circuits, four current-carrying conductors.
   await expect(page.getByTestId("conductor-run").first()).toContainText("Blank: 4, counted from its circuits");
 
-  await page.getByRole("button", { name: /5\. Review/ }).click();
+  await page.getByRole("button", { name: /6\. Review/ }).click();
   const row = page.getByTestId("schedule-row").filter({ hasText: "Array to junction box" });
   await expect(row).toContainText("Every DC string (2 circuits)");
   await expect(row).toContainText("4 × 10 AWG Cu PV wire");

@@ -70,7 +70,7 @@ test("a new coordinator, inspector and installer go from a new project to fees p
 
   // Review: every check, the diagram and the labels stay inside the review panel at 1366 px.
   await page.goto(`/projects/${project!.id}/design`);
-  await page.getByRole("button", { name: /5\. Review/ }).click();
+  await page.getByRole("button", { name: /6\. Review/ }).click();
   const panel = page.locator("form.panel");
   await expect(page.getByTestId("warning-label").first()).toBeVisible();
   // Nothing pushes the panel wider than itself (wide tables scroll inside their own box)…

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import {
+  BatterySpecs,
   DeviceSpecs,
   EquipmentInput,
   EquipmentListQuery,
@@ -7,6 +8,7 @@ import {
   ModuleSpecs,
   TempCoefficientSchema,
   UpdateEquipmentInput,
+  listingsOf,
 } from "@/lib/schemas/equipment";
 
 type Parsed = { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } };
@@ -189,6 +191,65 @@ describe("DeviceSpecs", () => {
   });
 });
 
+// An invented 13.5 kWh battery unit as a form sends it.
+const battery = {
+  usableKwh: "12.8",
+  nameplateKwh: "13.5",
+  maxContinuousChargeA: "26",
+  maxContinuousDischargeA: "26",
+  maxChargeKw: "5",
+  maxDischargeKw: "5",
+  nominalVoltageV: "400",
+  maxUnitsInParallel: "",
+};
+
+describe("BatterySpecs", () => {
+  it("reads a battery's data-sheet figures; units in parallel may be left out", () => {
+    expect(BatterySpecs.parse(battery)).toEqual({
+      usableKwh: 12.8,
+      nameplateKwh: 13.5,
+      maxContinuousChargeA: 26,
+      maxContinuousDischargeA: 26,
+      maxChargeKw: 5,
+      maxDischargeKw: 5,
+      nominalVoltageV: 400,
+    });
+  });
+
+  it.each([
+    [{ usableKwh: "14" }, "usableKwh", "The usable energy cannot exceed the nameplate energy"],
+    [{ nameplateKwh: "" }, "nameplateKwh", "Nameplate energy is required"],
+    [{ maxUnitsInParallel: "2.5" }, "maxUnitsInParallel", "Units allowed in parallel must be a whole number"],
+    [{ nominalVoltageV: "5" }, "nominalVoltageV", "Nominal voltage must be between 12 and 1500 V"],
+  ])("refuses %j with a readable message", (patch, path, message) => {
+    expect(messages(BatterySpecs.safeParse({ ...battery, ...patch }))[path]).toBe(message);
+  });
+
+  it("splits the listing text into the listings the siting check reads", () => {
+    expect(listingsOf("UL 9540, UL 9540A;UL 1973 ")).toEqual(["UL 9540", "UL 9540A", "UL 1973"]);
+    expect(listingsOf("")).toEqual([]);
+  });
+});
+
+describe("InverterSpecs storage fields", () => {
+  it("reads a multimode inverter's backup output and power control listing; an inverter without them is PV only", () => {
+    const out = InverterSpecs.parse({
+      ...stringInverter,
+      storageRole: "multimode",
+      backupContinuousA: "32",
+      backupVoltageV: "240",
+      transferTimeS: "0.02",
+      pcsListed: "yes",
+      pcsCurrentLimitSettable: "yes",
+    });
+    expect(out).toMatchObject({ storageRole: "multimode", backupContinuousA: 32, backupVoltageV: 240, pcsListed: true });
+    expect(InverterSpecs.parse(stringInverter).storageRole).toBeUndefined();
+    expect(messages(InverterSpecs.safeParse({ ...stringInverter, backupVoltageV: "208" })).backupVoltageV).toBe(
+      "The backup output is 120 V or 120/240 V (240)",
+    );
+  });
+});
+
 describe("TempCoefficientSchema", () => {
   it("takes V/°C figures in their own range", () => {
     expect(TempCoefficientSchema.parse({ value: "-0.136", unit: "V/C" })).toEqual({ value: -0.136, unit: "V/C" });
@@ -203,8 +264,8 @@ describe("EquipmentInput", () => {
   });
 
   it("names the kinds when the kind is unknown", () => {
-    expect(messages(EquipmentInput.safeParse({ kind: "battery", maker: "A", model: "B", specs: {} })).kind).toBe(
-      "Choose a kind: module, inverter, device",
+    expect(messages(EquipmentInput.safeParse({ kind: "charger", maker: "A", model: "B", specs: {} })).kind).toBe(
+      "Choose a kind: module, inverter, device, battery",
     );
   });
 
@@ -227,6 +288,6 @@ describe("EquipmentListQuery", () => {
   it("reads the kind filter and the archived switch", () => {
     expect(EquipmentListQuery.parse({})).toEqual({ kind: undefined, includeArchived: false });
     expect(EquipmentListQuery.parse({ kind: "inverter", includeArchived: "true" })).toEqual({ kind: "inverter", includeArchived: true });
-    expect(messages(EquipmentListQuery.safeParse({ kind: "panel" })).kind).toBe("kind must be one of: module, inverter, device");
+    expect(messages(EquipmentListQuery.safeParse({ kind: "panel" })).kind).toBe("kind must be one of: module, inverter, device, battery");
   });
 });

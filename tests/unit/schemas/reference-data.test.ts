@@ -25,7 +25,18 @@ describe("JurisdictionInput", () => {
       permitValidDays: 180,
       requiredInspections: ["final"],
       notes: "",
+      // Left blank: the published residential ESS limits apply.
+      essCode: null,
+      essPerUnitKwh: null,
+      essGarageKwh: null,
+      essOutdoorKwh: null,
+      essUtilitySpaceKwh: null,
     });
+  });
+
+  it("keeps the AHJ's adopted ESS siting figures", () => {
+    const out = JurisdictionInput.parse({ ...jurisdiction, essCode: "IRC 2021 as amended", essGarageKwh: "60", essPerUnitKwh: "" });
+    expect(out).toMatchObject({ essCode: "IRC 2021 as amended", essGarageKwh: 60, essPerUnitKwh: null });
   });
 
   it.each([
@@ -38,6 +49,7 @@ describe("JurisdictionInput", () => {
     [{ reviewDays: "0" }, "reviewDays", "Usual review time must be between 1 and 365 days"],
     [{ permitValidDays: "ten" }, "permitValidDays", "Permit validity must be a number"],
     [{ requiredInspections: ["meter_set"] }, "requiredInspections.0", "Choose from the inspections listed"],
+    [{ essGarageKwh: "-5" }, "essGarageKwh", "Garage limit must be between 0 and 1000 kWh"],
   ])("refuses %j with a readable message", (patch, path, message) => {
     expect(messages(JurisdictionInput.safeParse({ ...jurisdiction, ...patch }))[path]).toBe(message);
   });

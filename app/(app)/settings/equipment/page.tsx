@@ -16,8 +16,8 @@ export default async function EquipmentCatalogPage() {
       <div>
         <h1>Equipment catalog</h1>
         <p className="text-sm text-ink-soft">
-          Figures as printed on each data sheet at STC. Designs pick from here; archived items stay readable in saved designs but are not
-          offered for new ones.
+          Figures as printed on each data sheet (modules at STC). Designs pick from here; archived items stay readable in saved designs but
+          are not offered for new ones.
         </p>
       </div>
       {EQUIPMENT_KINDS.map((kind) => (

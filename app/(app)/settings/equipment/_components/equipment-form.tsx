@@ -14,6 +14,13 @@ import { SPEC_FIELDS, type SpecField } from "./spec-fields";
 
 type Path = FieldPath<EquipmentInput>;
 
+const LISTING_HINTS: Record<EquipmentKind, string> = {
+  module: "e.g. UL 61730",
+  inverter: "e.g. UL 1741",
+  device: "e.g. UL 1741",
+  battery: "Separate with commas, e.g. UL 9540, UL 9540A",
+};
+
 /** The page hands in the action that saves: adding to the catalog or updating this item. */
 export type SaveEquipment = { create: typeof createEquipmentAction } | { update: typeof updateEquipmentAction; equipmentId: string };
 
@@ -76,7 +83,7 @@ export function EquipmentForm({ kind, initial, save }: { kind: EquipmentKind; in
         <legend className="px-1 text-sm font-semibold">Product</legend>
         {input("maker", "Maker")}
         {input("model", "Model")}
-        {input("listing", "Listing", { hint: kind === "module" ? "e.g. UL 61730" : "e.g. UL 1741" })}
+        {input("listing", "Listing", { hint: LISTING_HINTS[kind] })}
       </fieldset>
       <fieldset className="panel grid gap-4 sm:grid-cols-3">
         <legend className="px-1 text-sm font-semibold">Data sheet figures</legend>

@@ -6,6 +6,7 @@ export const FIGURE_COLUMNS: Record<EquipmentKind, string[]> = {
   module: ["Pmax", "Voc", "Isc"],
   inverter: ["Type", "AC rated", "Max DC input", "DC window"],
   device: ["Type", "Max input", "Rated input"],
+  battery: ["Usable", "Nameplate", "Max discharge"],
 };
 
 const n = (value: number | undefined, unit: string) => (value === undefined ? "—" : `${value.toLocaleString("en-US")} ${unit}`);
@@ -23,7 +24,8 @@ export function keyFigures(item: EquipmentDto): string[] {
           : s.mpptMinV !== undefined && s.mpptMaxV !== undefined
             ? `MPPT ${s.mpptMinV}–${n(s.mpptMaxV, "V")}`
             : "—";
-      return [s.inverterKind === "micro" ? "micro" : "string", n(s.acPowerW, "W AC"), n(s.maxDcInputV, "V"), window];
+      const type = s.storageRole === "multimode" ? "multimode" : s.storageRole === "battery" ? "battery inverter" : s.inverterKind;
+      return [type, n(s.acPowerW, "W AC"), n(s.maxDcInputV, "V"), window];
     }
     case "device":
       return [
@@ -31,6 +33,8 @@ export function keyFigures(item: EquipmentDto): string[] {
         n(item.specs.maxInputV, "V"),
         n(item.specs.ratedInputPowerW, "W"),
       ];
+    case "battery":
+      return [n(item.specs.usableKwh, "kWh"), n(item.specs.nameplateKwh, "kWh"), n(item.specs.maxDischargeKw, "kW")];
   }
 }
 

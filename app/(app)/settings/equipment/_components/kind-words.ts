@@ -5,4 +5,5 @@ export const KIND_WORDS: Record<EquipmentKind, { plural: string; add: string }> 
   module: { plural: "PV modules", add: "Add a PV module" },
   inverter: { plural: "Inverters", add: "Add an inverter" },
   device: { plural: "Module-level devices", add: "Add a module-level device" },
+  battery: { plural: "Batteries", add: "Add a battery" },
 };

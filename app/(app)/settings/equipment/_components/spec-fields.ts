@@ -96,6 +96,31 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
       label: "Meets rapid shutdown (690.12) together with its module-level devices",
     },
     { type: "checkbox", name: "reportsPerModule", label: "Microinverters only: each unit reports to a gateway (module-level monitoring)" },
+    {
+      type: "select",
+      name: "storageRole",
+      label: "Battery role",
+      options: [
+        { value: "none", label: "PV only" },
+        { value: "multimode", label: "Multimode (hybrid): charges batteries on its DC side" },
+        { value: "battery", label: "Battery inverter (AC-coupled)" },
+      ],
+    },
+    num("backupContinuousA", "Backup output continuous current", "A", "With the grid down; blank when it has no backup output"),
+    {
+      type: "select",
+      name: "backupVoltageV",
+      label: "Backup output voltage",
+      options: [
+        { value: "", label: "No backup output" },
+        { value: "240", label: "120/240 V" },
+        { value: "120", label: "120 V only" },
+      ],
+    },
+    num("backupPowerW", "Backup output power", "W", OPTIONAL),
+    num("transferTimeS", "Transfer time", "s", OPTIONAL),
+    yesNo("pcsListed", "Listed power control system (705.13)"),
+    yesNo("pcsCurrentLimitSettable", "Power control current limit can be set"),
   ],
   device: [
     {
@@ -115,6 +140,16 @@ export const SPEC_FIELDS: Record<EquipmentKind, SpecField[]> = {
     num("maxSystemVoltageV", "Maximum system voltage", "V", "The highest string voltage it may sit in"),
     { type: "checkbox", name: "reportsPerModule", label: "Each device reports to the inverter (module-level monitoring)" },
   ],
+  battery: [
+    num("usableKwh", "Usable energy", "kWh"),
+    num("nameplateKwh", "Nameplate energy", "kWh", "The listed energy capacity; the residential siting limits count it"),
+    num("maxContinuousChargeA", "Maximum continuous charge current", "A"),
+    num("maxContinuousDischargeA", "Maximum continuous discharge current", "A"),
+    num("maxChargeKw", "Maximum charge power", "kW"),
+    num("maxDischargeKw", "Maximum discharge power", "kW"),
+    num("nominalVoltageV", "Nominal voltage", "V"),
+    num("maxUnitsInParallel", "Units allowed in parallel", "", OPTIONAL),
+  ],
 };
 
 const EMPTY_SPECS: Record<EquipmentKind, Record<string, unknown>> = {
@@ -129,8 +164,13 @@ const EMPTY_SPECS: Record<EquipmentKind, Record<string, unknown>> = {
     dcArcFaultProtection: "",
     dcGroundFaultProtection: "",
     dcDisconnect: "",
+    storageRole: "none",
+    backupVoltageV: "",
+    pcsListed: "",
+    pcsCurrentLimitSettable: "",
   },
   device: { deviceKind: "optimizer", reportsPerModule: false },
+  battery: {},
 };
 
 /** The form's starting values: blank for a new item, the stored figures for an edit. */

@@ -16,7 +16,7 @@ export default async function NewEquipmentPage({ searchParams }: { searchParams:
     <div className="mx-auto max-w-3xl space-y-4">
       <h1>{KIND_WORDS[kind].add}</h1>
       <p className="text-sm text-ink-soft">
-        Copy the figures from the data sheet at STC; the data sheet PDF can be attached once the item is saved.
+        Copy the figures from the data sheet (modules at STC); the data sheet PDF can be attached once the item is saved.
       </p>
       <EquipmentForm save={{ create: createEquipmentAction }} kind={kind} initial={formValuesOf(kind)} />
     </div>

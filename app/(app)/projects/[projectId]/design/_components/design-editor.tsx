@@ -15,6 +15,7 @@ import { ReviewPanel } from "./review-panel";
 import { ReviewStep } from "./review-step";
 import { RunsStep } from "./runs-step";
 import { ServiceStep } from "./service-step";
+import { StorageStep } from "./storage-step";
 import type { Issues } from "./design-fields";
 
 type SaveState = { kind: "idle" | "saving" | "saved" | "error"; text: string };
@@ -41,10 +42,13 @@ export function DesignEditor(props: {
   save: typeof saveDesignAction;
 }) {
   const { projectId, catalog, conditions, readOnly } = props;
-  const form = useForm<DesignFormValues>({ defaultValues: props.initialDraft as DesignFormValues });
+  // A design saved before storage existed has no battery: the storage step opens on "No battery".
+  const form = useForm<DesignFormValues>({
+    defaultValues: { ...props.initialDraft, storage: props.initialDraft.storage ?? { coupling: "none" } } as DesignFormValues,
+  });
   const values = useWatch({ control: form.control });
   const [step, setStep] = useState(0);
-  const [visited, setVisited] = useState<Set<number>>(() => new Set(props.initialRevision > 0 ? [0, 1, 2, 3] : []));
+  const [visited, setVisited] = useState<Set<number>>(() => new Set(props.initialRevision > 0 ? [0, 1, 2, 3, 4] : []));
   const [save, setSave] = useState<SaveState>({
     kind: "idle",
     text: props.initialRevision ? `Saved, revision ${props.initialRevision}` : "Not saved yet",
@@ -136,7 +140,8 @@ export function DesignEditor(props: {
               {step === 1 ? <ArrayStep issues={issues} /> : null}
               {step === 2 ? <ServiceStep issues={issues} /> : null}
               {step === 3 ? <RunsStep issues={issues} outcome={outcome} /> : null}
-              {step === 4 ? <ReviewStep outcome={outcome} onGoToStep={goTo} /> : null}
+              {step === 4 ? <StorageStep catalog={catalog} issues={issues} /> : null}
+              {step === 5 ? <ReviewStep outcome={outcome} onGoToStep={goTo} /> : null}
             </fieldset>
           </form>
           <div className="flex flex-wrap items-center gap-3">

@@ -83,3 +83,13 @@ export function CheckboxInput({ name, label, hint }: { name: string; label: stri
 
 export const options = (values: readonly string[], label: (v: string) => string = (v) => v) =>
   values.map((value) => ({ value, label: label(value) }));
+
+/** Conductor materials and yes-or-no answers, as every step offers them. */
+export const MATERIALS = [
+  { value: "Cu", label: "Copper" },
+  { value: "Al", label: "Aluminum" },
+];
+export const YES_NO = [
+  { value: "yes", label: "Yes" },
+  { value: "no", label: "No" },
+];

@@ -10,7 +10,12 @@ import { nextLineId } from "./line-ids";
 function describe(item: EquipmentDto): string {
   const name = `${item.maker} ${item.model}`;
   if (item.kind === "module") return `${name} — ${item.specs.powerW} W`;
-  if (item.kind === "inverter") return `${name} — ${item.specs.inverterKind === "micro" ? "micro" : "string"}, ${item.specs.acPowerW} W AC`;
+  if (item.kind === "inverter") {
+    const s = item.specs;
+    const type = s.storageRole === "multimode" ? "multimode" : s.storageRole === "battery" ? "battery inverter" : s.inverterKind;
+    return `${name} — ${type}, ${s.acPowerW} W AC`;
+  }
+  if (item.kind === "battery") return `${name} — ${item.specs.usableKwh} kWh usable`;
   return `${name} — ${item.specs.deviceKind === "optimizer" ? "optimizer" : "shutdown device"}`;
 }
 

@@ -14,7 +14,7 @@ const stepOf = (path: string) =>
   );
 const worstFirst = (checks: CheckResult[]) => [...checks].sort((a, b) => ORDER[a.status] - ORDER[b.status]);
 
-function Figure({ label, value }: { label: string; value: string }) {
+export function Figure({ label, value }: { label: string; value: string }) {
   return (
     <div>
       <dt className="text-xs text-ink-faint">{label}</dt>

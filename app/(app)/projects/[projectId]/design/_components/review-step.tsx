@@ -8,6 +8,7 @@ import type { DesignReviewOutcome } from "@/lib/design/run-review";
 import { DesignInput, type DesignFormValues } from "@/lib/schemas/design";
 import { layoutSingleLine } from "@/lib/sld";
 import { ReviewPanel } from "./review-panel";
+import { StorageSummary } from "./storage-summary";
 
 type Reviewed = Extract<DesignReviewOutcome, { status: "reviewed" }>;
 
@@ -58,6 +59,7 @@ export function ReviewStep({ outcome, onGoToStep }: { outcome: DesignReviewOutco
   return (
     <div className="min-w-0 space-y-5">
       <ReviewPanel outcome={outcome} onGoToStep={onGoToStep} full />
+      {outcome.status === "reviewed" ? <StorageSummary outcome={outcome} /> : null}
       {outcome.status === "reviewed" ? <ConductorScheduleTable outcome={outcome} /> : null}
       {outcome.status === "reviewed" ? (
         <section className="space-y-2">

@@ -3,17 +3,9 @@
 import { useFormContext, useWatch } from "react-hook-form";
 import { CONDUCTOR_SIZES, sizeLabel } from "@/lib/engineering/tables/conductor-sizes";
 import { SERVICE_VOLTAGES_V, type DesignFormValues } from "@/lib/schemas/design";
-import { CheckboxInput, SelectInput, TextInput, options, type Issues } from "./design-fields";
+import { CheckboxInput, MATERIALS, SelectInput, TextInput, YES_NO, options, type Issues } from "./design-fields";
 
 const SIZES = options(CONDUCTOR_SIZES, (s) => sizeLabel(s as (typeof CONDUCTOR_SIZES)[number]));
-const MATERIALS = [
-  { value: "Cu", label: "Copper" },
-  { value: "Al", label: "Aluminum" },
-];
-const YES_NO = [
-  { value: "yes", label: "Yes" },
-  { value: "no", label: "No" },
-];
 
 function Section({ title, children, hint }: { title: string; hint?: string; children: React.ReactNode }) {
   return (
