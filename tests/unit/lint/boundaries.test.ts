@@ -14,7 +14,8 @@ async function rulesBroken(filePath: string, code: string): Promise<string[]> {
 const RESTRICTED = "@typescript-eslint/no-restricted-imports";
 const CLIENT = "ohmstead/client-boundary";
 
-describe("boundaries between the rooms", () => {
+// The first case loads the whole lint configuration (the type-aware parser included): seconds on a busy machine.
+describe("boundaries between the rooms", { timeout: 60_000 }, () => {
   it.each([
     ["a page reads a model", "app/(app)/example/page.tsx", `import { Project } from "@/models";\nexport const x = Project;\n`, RESTRICTED],
     [
