@@ -3,7 +3,7 @@
 // battery inverter and its output circuit to a breaker on the service panel's busbar (AC coupling);
 // the backup loads panel on the stand-alone output with its transfer note; and the point-of-connection
 // note with the power control setting beside the service panel.
-import { sizeLabel, totalUnits, type NecEdition, type StorageCircuit, type StoredDesign } from "@/lib/engineering";
+import { clause, sizeLabel, totalUnits, type NecEdition, type StorageCircuit, type StoredDesign } from "@/lib/engineering";
 import type { ServicePlace } from "./layout-service";
 import { textWidthPt } from "./scene";
 import type { SceneBuilder } from "./scene-builder";
@@ -38,7 +38,7 @@ export function layoutStorage(b: SceneBuilder, design: StoredDesign, at: Storage
   const tags = new Map(s.circuits?.map((c, i) => [c, `B${i + 1}`]) ?? []);
   const circuits = (kind: StorageCircuit["kind"]) => (s.circuits ?? []).filter((c) => c.kind === kind);
 
-  const pieces: Piece[] = [batteryBox(design), essDisconnect(design)];
+  const pieces: Piece[] = [batteryBox(design), essDisconnect(design, at.necEdition)];
   for (const c of circuits("battery-dc")) pieces.push(circuitLabel(c, tags.get(c)!));
   if (s.coupling === "dc" && circuits("battery-dc").length === 0) pieces.push(noCircuit("battery circuit"));
   let inverterRight: number | null = null;
@@ -138,12 +138,13 @@ function batterySymbol(b: SceneBuilder, x: number, y: number): void {
   }
 }
 
-function essDisconnect(design: StoredDesign): Piece {
+function essDisconnect(design: StoredDesign, edition: NecEdition | undefined): Piece {
   const d = design.storage.disconnect;
+  const ref = edition ? clause("essDisconnect", edition) : "Article 706";
   const title = "ESS DISCONNECT";
   const lines = [
     d ? (d.kind === "integral" ? "Integral to the ESS" : "Separate switch") : "Not entered yet",
-    d?.lockable ? "Lockable open (706.15)" : "706.15",
+    d?.lockable ? `Lockable open (${ref})` : ref,
     ...(d?.location ? wrapWords(d.location, 28) : []),
   ];
   const width = Math.max(90, boxWidth(title, lines)) + 8;
