@@ -107,5 +107,12 @@ export { tableAmpacityA } from "./tables/ampacity";
 export { vocCorrectionFactor } from "./tables/voc-correction";
 export * from "./commissioning";
 export { DEFAULT_ESS_SITING } from "./checks/ess-siting";
-export { countedSourceCurrent, type CountedSourceCurrent } from "./storage";
+export {
+  countedSourceCurrent,
+  hasStorage,
+  powerControlSettingA,
+  totalUnits,
+  type CountedSourceCurrent,
+  type StoredDesign,
+} from "./storage";
 export type { StorageCircuitFigure, StorageFigures, StorageLocationFigure, StorageSummary } from "./storage-review";

@@ -25,7 +25,33 @@ export type CommissioningFacts = {
   moduleMonitoring: boolean;
   modulesInstalled: number;
   acRatingW: number;
+  /** The design's batteries as the storage part reads them; null (or absent, in records made before storage) without batteries. */
+  storage?: StorageFacts | null;
 };
+
+/** What the storage part of a record is checked against, from the design. */
+export type StorageFacts = {
+  hasBackupPanel: boolean;
+  transferTimeS: number | null;
+  pcsSettingA: number | null;
+  exportLimitKw: number | null;
+  /** For the crew: what the batteries are and where they stand. */
+  summary: string;
+};
+
+function storageFacts(design: Design): StorageFacts | null {
+  const s = design.storage;
+  if (!s) return null;
+  const units = s.banks.map((b) => `${b.quantity} × ${b.unit.maker} ${b.unit.model}`).join(", ");
+  return {
+    hasBackupPanel: s.backupPanel !== undefined,
+    transferTimeS: s.backupOutput?.transferTimeS ?? null,
+    pcsSettingA: s.pcs?.listed && s.pcs.currentSettingA !== undefined ? s.pcs.currentSettingA : null,
+    // Non-export is a limit of zero, whether or not the design also states one.
+    exportLimitKw: s.exportLimitKw ?? (s.operatingMode === "non-export" ? 0 : null),
+    summary: `${units}, ${s.coupling === "dc" ? "DC-coupled through the hybrid inverter" : "AC-coupled through the battery inverter"}`,
+  };
+}
 
 export type CommissioningFactsInput = {
   design: Design;
@@ -106,6 +132,7 @@ export function commissioningFacts({
     moduleMonitoring,
     modulesInstalled: moduleCount,
     acRatingW: Math.round(acKw * 1000),
+    storage: storageFacts(design),
   };
 }
 
@@ -157,5 +184,21 @@ export function toCommissioningRecord(facts: CommissioningFacts, readings: Commi
       measuredV: readings.rapidShutdown.measuredV,
       seconds: readings.rapidShutdown.seconds,
     },
+    storage: facts.storage
+      ? {
+          hasBackupPanel: facts.storage.hasBackupPanel,
+          transferTimeS: facts.storage.transferTimeS,
+          pcsSettingA: facts.storage.pcsSettingA,
+          exportLimitKw: facts.storage.exportLimitKw,
+          stateOfChargePct: readings.storage.stateOfChargePct,
+          backupTest: {
+            gridOpened: readings.storage.gridOpened,
+            panelCarried: readings.storage.panelCarried,
+            transferSeconds: readings.storage.transferSeconds,
+          },
+          pcsSettingReadA: readings.storage.pcsSettingA,
+          exportLimitReadKw: readings.storage.exportLimitKw,
+        }
+      : null,
   };
 }

@@ -56,6 +56,30 @@ const InverterReadings = z.object({
   activated: z.boolean().default(false),
 });
 
+/** A yes or no seen on site; not answered yet is null. */
+const seen = z
+  .boolean()
+  .nullish()
+  .transform((v) => v ?? null);
+
+/** With batteries: the charge the system shows, the backup test, and the settings read back from the inverter. */
+const StorageReadings = z.object({
+  stateOfChargePct: reading,
+  gridOpened: seen,
+  panelCarried: seen,
+  transferSeconds: reading,
+  pcsSettingA: reading,
+  exportLimitKw: reading,
+});
+export const EMPTY_STORAGE_READINGS = {
+  stateOfChargePct: null,
+  gridOpened: null,
+  panelCarried: null,
+  transferSeconds: null,
+  pcsSettingA: null,
+  exportLimitKw: null,
+} as const;
+
 /** What the installer records on site, in the order of the work; the facts they are checked against come from the design. */
 export const CommissioningReadings = z.object({
   vocTemperature: z
@@ -80,6 +104,7 @@ export const CommissioningReadings = z.object({
       seconds: reading,
     })
     .default({ boundary: "outside", measuredV: null, seconds: null }),
+  storage: StorageReadings.default(EMPTY_STORAGE_READINGS),
 });
 export type CommissioningReadingsInput = z.input<typeof CommissioningReadings>;
 export type CommissioningReadings = z.output<typeof CommissioningReadings>;

@@ -2,7 +2,7 @@
 // pass every check, worked out from each project's own design. Invented; for the demo only.
 import { INSULATION_ROWS, shutdownWindow, stringVocWindow } from "@/lib/engineering/commissioning";
 import type { CommissioningFacts, MonitoringItems } from "@/lib/field/commissioning-facts";
-import type { CommissioningReadings } from "@/lib/schemas/commissioning";
+import { EMPTY_STORAGE_READINGS, type CommissioningReadings } from "@/lib/schemas/commissioning";
 import type { DesignFormValues } from "@/lib/schemas/design";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 
@@ -58,5 +58,15 @@ export function passingDemoReadings(facts: CommissioningFacts, seed: number): Co
     firstPowerW: Math.round(facts.acRatingW * (0.58 + jitter / 10)),
     firstPowerTime: `11:${String(10 + ((seed * 7) % 45)).padStart(2, "0")}`,
     rapidShutdown: { boundary: "outside", measuredV: 11 + (seed % 7), seconds: 8 + (seed % 9) },
+    storage: facts.storage
+      ? {
+          stateOfChargePct: 64 + (seed % 30),
+          gridOpened: facts.storage.hasBackupPanel ? true : null,
+          panelCarried: facts.storage.hasBackupPanel ? true : null,
+          transferSeconds: facts.storage.hasBackupPanel ? 0 : null,
+          pcsSettingA: facts.storage.pcsSettingA,
+          exportLimitKw: facts.storage.exportLimitKw,
+        }
+      : EMPTY_STORAGE_READINGS,
   };
 }

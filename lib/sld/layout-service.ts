@@ -39,7 +39,16 @@ const BUS_DX = 96;
 /** Service conductors run this far above the AC output line. */
 export const SERVICE_RISE = 138;
 
-export function layoutService(b: SceneBuilder, input: ServiceInput): void {
+/** Where the service panel was drawn: a battery inverter's output and the point-of-connection note join it here. */
+export interface ServicePlace {
+  panelX: number;
+  panelRight: number;
+  busX: number;
+  /** The AC output line's y; the panel spans y − 118 to y + 36. */
+  y: number;
+}
+
+export function layoutService(b: SceneBuilder, input: ServiceInput): ServicePlace {
   const { design, from } = input;
   const y = from.y;
   const runs = input.homeRuns;
@@ -67,6 +76,7 @@ export function layoutService(b: SceneBuilder, input: ServiceInput): void {
   }
   const busX = servicePanel(b, design, panelX, y, serviceY);
   meterAndGrid(b, design, busX, panelX + PANEL_W, serviceY);
+  return { panelX, panelRight: panelX + PANEL_W, busX, y };
 }
 
 function lineTo(b: SceneBuilder, x1: number, x2: number, y: number): number {

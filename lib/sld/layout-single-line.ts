@@ -1,10 +1,11 @@
 // Lays out a single-line diagram from the review engine's design: the array
 // and inverters on the left, the service on the right, a heading above and
 // the reviewer's notes below. Everything is in points (1/72 in).
-import { systemRatings, type Design, type NecEdition } from "@/lib/engineering";
+import { hasStorage, systemRatings, totalUnits, type Design, type NecEdition } from "@/lib/engineering";
 import { readCircuits, type CircuitModel } from "./circuit-model";
-import { layoutService } from "./layout-service";
+import { layoutService, type ServicePlace } from "./layout-service";
 import { layoutSources } from "./layout-sources";
+import { layoutStorage } from "./layout-storage";
 import { diagramNotes } from "./notes";
 import { drawUnplacedRuns } from "./unplaced-runs";
 import { itemsBounds, type SldScene } from "./scene";
@@ -25,6 +26,7 @@ const HEADING_H = 40;
 const NOTES_GAP = 28;
 const MIN_NOTES_W = 560;
 const TWO_COLUMNS_FROM_W = 900;
+const STORAGE_GAP = 36;
 
 export function layoutSingleLine(design: Design, options: SingleLineOptions = {}): SldScene {
   const model = readCircuits(design);
@@ -32,8 +34,9 @@ export function layoutSingleLine(design: Design, options: SingleLineOptions = {}
   const boxes = { next: 1 };
   const sources = layoutSources(diagram, design, model, boxes);
   const microOnly = model.groups.every((g) => g.kind === "micro");
+  let service: ServicePlace | null = null;
   if (sources.output) {
-    layoutService(diagram, {
+    service = layoutService(diagram, {
       design,
       homeRuns: model.homeRuns,
       from: sources.output,
@@ -44,6 +47,15 @@ export function layoutSingleLine(design: Design, options: SingleLineOptions = {}
     });
   }
   drawUnplacedRuns(diagram, design, model);
+  if (hasStorage(design)) {
+    const hybridId = design.storage.coupling === "dc" ? design.storage.multimodeInverterId : undefined;
+    layoutStorage(diagram, design, {
+      top: itemsBounds(diagram.build()).maxY + STORAGE_GAP,
+      hybrid: (hybridId !== undefined && sources.inverterBodies.get(hybridId)) || null,
+      service,
+      necEdition: options.necEdition,
+    });
+  }
   const drawn = itemsBounds(diagram.build());
   const withNotes = options.notes !== false;
   const headingH = options.heading === false ? 0 : HEADING_H;
@@ -118,5 +130,8 @@ function describe(design: Design, model: CircuitModel): string {
     s.connection === "supply-side"
       ? `a supply-side connection with ${s.pvBreakerA} A fuses`
       : `a ${s.pvBreakerA} A PV breaker on a ${s.busbarA} A busbar`;
-  return `Single-line diagram: ${parts.join(", ") || "no PV sources yet"}, to ${connection}.`;
+  const storage = hasStorage(design)
+    ? ` Energy storage: ${totalUnits(design.storage)} battery unit${totalUnits(design.storage) === 1 ? "" : "s"}, ${design.storage.coupling === "dc" ? "DC-coupled through the hybrid inverter" : "AC-coupled through a battery inverter"}${design.storage.backupPanel ? ", with a backup loads panel" : ""}.`
+    : "";
+  return `Single-line diagram: ${parts.join(", ") || "no PV sources yet"}, to ${connection}.${storage}`;
 }

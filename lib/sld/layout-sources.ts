@@ -48,6 +48,8 @@ export interface SourcesLayout {
   nextX: number;
   /** The last collector's body, for the rapid shutdown control line. */
   collector: Span & { right: number };
+  /** Each string inverter's body by inverter id, where a battery or a backup output joins a hybrid inverter. */
+  inverterBodies: Map<string, Span & { left: number; right: number }>;
 }
 
 const GROUP_GAP = 30;
@@ -83,7 +85,8 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
     y = bottom + GROUP_GAP + ROW_ABOVE;
   }
   const rows = model.groups.flatMap((g) => g.rows as Row[]);
-  if (rows.length === 0 && stringGroups.length === 0) return { output: null, nextX: 0, collector: { top: 0, bottom: 0, right: 0 } };
+  if (rows.length === 0 && stringGroups.length === 0)
+    return { output: null, nextX: 0, collector: { top: 0, bottom: 0, right: 0 }, inverterBodies: new Map() };
 
   // Columns, left to right: the array, the runs along the rows, the inverters.
   const arrayInner = Math.max(
@@ -140,8 +143,10 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
   );
 
   const inverterOut = new Map<SourceGroup, { x: number; y: number }>();
+  const inverterBodies: SourcesLayout["inverterBodies"] = new Map();
   for (const group of stringGroups) {
     const body = bodies.get(group)!;
+    inverterBodies.set(group.inverter.id, { ...body, left: invX, right: invX + INVERTER_BOX_W });
     inverterOut.set(
       group,
       drawInverter(
@@ -158,7 +163,7 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
   if (!model.hasCombiner) {
     const group = stringGroups[0];
     const body = bodies.get(group)!;
-    return { output: inverterOut.get(group)!, nextX: invRight, collector: { ...body, right: invX + INVERTER_BOX_W } };
+    return { output: inverterOut.get(group)!, nextX: invRight, collector: { ...body, right: invX + INVERTER_BOX_W }, inverterBodies };
   }
 
   // Feeds into the combiner: each string inverter's output, each microinverter branch.
@@ -190,5 +195,10 @@ export function layoutSources(b: SceneBuilder, design: Design, model: CircuitMod
   const microW = branches.reduce((sum, r) => sum + r.units * (r.inverter?.acPowerW ?? 0), 0);
   const caption = combinerCaption(feeds.length, microUnits, microW);
   drawCaption(b, combX, body.bottom, caption);
-  return { output, nextX: combX + Math.max(COMBINER_W, captionWidth(caption)) + 20, collector: { ...body, right: output.x } };
+  return {
+    output,
+    nextX: combX + Math.max(COMBINER_W, captionWidth(caption)) + 20,
+    collector: { ...body, right: output.x },
+    inverterBodies,
+  };
 }

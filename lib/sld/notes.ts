@@ -1,6 +1,6 @@
 // The short notes a plan reviewer looks for beside the diagram, in our own
 // words, filled with the design's own numbers.
-import type { Design, NecEdition } from "@/lib/engineering";
+import { clause, hasStorage, type Design, type NecEdition, type StoredDesign } from "@/lib/engineering";
 
 export function diagramNotes(design: Design, necEdition?: NecEdition): string[] {
   const s = design.service;
@@ -22,6 +22,26 @@ export function diagramNotes(design: Design, necEdition?: NecEdition): string[] 
     "PV source circuits are energized whenever light reaches the modules, and the inverter holds a charge after it stops. Work on them only as local codes and licensed practice allow.",
     "Circled numbers are the run numbers of the conductor schedule. JB1, JB2, …: junction boxes where one run meets the next. A slim outline around several wires: separate circuits in one raceway.",
     "Not to scale. Conductor counts exclude the equipment grounding conductor.",
+    ...(hasStorage(design) ? storageNotes(design, necEdition) : []),
+  ];
+}
+
+function storageNotes(design: StoredDesign, edition: NecEdition | undefined): string[] {
+  const s = design.storage;
+  const disconnect = edition ? ` (${clause("essDisconnect", edition)})` : "";
+  return [
+    `Energy storage system per Article 706: the ESS disconnect opens every ungrounded conductor to the batteries${disconnect}. Battery circuits B1, B2, … are sized at 125 % of the maximum continuous current; the values are on the calculation sheet.`,
+    ...(s.backupPanel
+      ? [
+          "Backup loads panel: fed by the inverter's stand-alone output (710.15) and checked as a second busbar under 705.12. The inverter separates from the grid before it carries the panel.",
+        ]
+      : []),
+    ...(s.pcs?.listed && s.pcs.currentSettingA !== undefined
+      ? [
+          "Power control system: its current setting, shown at the point of connection, limits the current the sources put on the busbar (705.13).",
+        ]
+      : []),
+    "A battery stays energized when the array and the grid are off. Open the ESS disconnect and follow the manufacturer's instructions and licensed practice before working on battery circuits.",
   ];
 }
 

@@ -58,7 +58,18 @@ const KIND_TITLES: Record<CommissioningKind, string> = {
   "first-power": "First power reading",
   "rapid-shutdown-voltage": "Rapid shutdown test: voltage reached",
   "rapid-shutdown-time": "Rapid shutdown test: time to reach it",
+  "storage-charge": "Battery state of charge",
+  "storage-backup": "Backup test: grid opened, backup panel carried",
+  "storage-transfer-time": "Backup test: time to transfer",
+  "storage-power-control": "Power control setting read from the inverter",
+  "storage-export-limit": "Export limit read from the inverter",
 };
+
+/** The cautions of stored energy, printed for a record with batteries. */
+export const STORAGE_CAUTIONS: readonly string[] = [
+  "A battery stays energized when the array and the grid are off: opening the PV disconnect, the PV breaker or the grid supply does not de-energize the battery, its circuits or the backup loads panel. Open the energy storage system disconnect (NEC Article 706) before working on them.",
+  "Follow the energy storage system manufacturer's instructions for commissioning, the backup test and any service, and licensed practice; battery faults can deliver large currents.",
+];
 
 function titleOf(input: CommissioningDocumentInput, id: string): string {
   return input.results.find((r) => r.id === id)?.title ?? KIND_TITLES[id as CommissioningKind] ?? id;
@@ -189,6 +200,11 @@ function readingText(check: CommissioningCheck, record: CommissioningRecord): st
     case "modules-reporting":
       if (check.reading !== "recorded") return check.reading === "missing" ? NOT_RECORDED : notValid(record.modulesReporting, "");
       return `${formatQuantity(check.value, "")} of ${record.modulesInstalled}`;
+    case "storage-backup": {
+      const t = record.storage?.backupTest;
+      if (check.reading === "missing") return NOT_RECORDED;
+      return `Grid ${t?.gridOpened ? "opened" : "not opened"}; backup panel ${t?.panelCarried ? "carried" : "not carried"}`;
+    }
     case "string-voc": {
       const v = stringTestOf(record, check)?.vocV;
       if (typeof v !== "number" || !Number.isFinite(v)) return v === null || v === undefined ? NOT_RECORDED : "Not valid";
@@ -208,11 +224,28 @@ function readingText(check: CommissioningCheck, record: CommissioningRecord): st
                   ? record.rapidShutdownTest?.measuredV
                   : check.kind === "rapid-shutdown-time"
                     ? record.rapidShutdownTest?.seconds
-                    : null;
+                    : storageRaw(check, record);
         return notValid(raw, unit);
       }
       return formatQuantity(check.value, unit);
     }
+  }
+}
+
+/** The storage reading behind a result, for printing one that is not valid. */
+function storageRaw(check: CommissioningCheck, record: CommissioningRecord): unknown {
+  const r = record.storage;
+  switch (check.kind) {
+    case "storage-charge":
+      return r?.stateOfChargePct;
+    case "storage-transfer-time":
+      return r?.backupTest?.transferSeconds;
+    case "storage-power-control":
+      return r?.pcsSettingReadA;
+    case "storage-export-limit":
+      return r?.exportLimitReadKw;
+    default:
+      return null;
   }
 }
 
@@ -274,6 +307,20 @@ function expectedText(check: CommissioningCheck, record: CommissioningRecord): s
       case "rapid-shutdown-voltage":
       case "rapid-shutdown-time":
         return check.limit === null ? fallback : `${formatQuantity(check.limit, check.unit)} at most`;
+      case "storage-charge":
+        return "As the system shows it, 0–100 %";
+      case "storage-backup":
+        return "Grid opened and the backup panel carried";
+      case "storage-transfer-time": {
+        const t = record.storage?.transferTimeS;
+        return t === null || t === undefined
+          ? "The inverter's stated transfer time (not in the design)"
+          : `${formatQuantity(t, "s")} stated, read by hand: ${formatQuantity(check.limit, "s")} at most`;
+      }
+      case "storage-power-control":
+        return `${formatQuantity(check.limit, "A")} as designed`;
+      case "storage-export-limit":
+        return `${formatQuantity(check.limit, "kW")} as designed`;
     }
   } catch {
     return fallback;
@@ -327,6 +374,20 @@ export function certificateReadings(input: CommissioningDocumentInput): { label:
     const passing = ids.filter((r) => r.status === "pass").length;
     lines.push({ label: "String tests", value: `${count(tests.length, "string")}: ${passing} of ${ids.length} results pass` });
   }
+  const storage = record.storage;
+  if (storage) {
+    const soc = storage.stateOfChargePct;
+    const backup = result("storage-backup");
+    lines.push({
+      label: "Energy storage",
+      value: [
+        typeof soc === "number" ? `${formatNumber(soc)} % charged` : "charge not recorded",
+        ...(storage.hasBackupPanel
+          ? [backup?.status === "pass" ? "backup panel carried with the grid open" : "backup test not passed"]
+          : []),
+      ].join(", "),
+    });
+  }
   lines.push({
     label: "Modules reporting",
     value: record.moduleMonitoring
@@ -378,7 +439,7 @@ export function commissioningFacts(input: CommissioningDocumentInput): Commissio
     title: COMMISSIONING_TITLES[input.kind],
     projectLabel: commissioningProjectLabel(input),
     printedDate: documentDate(input.generatedAt, zone),
-    cautions: COMMISSIONING_CAUTIONS,
+    cautions: input.record.storage ? [...COMMISSIONING_CAUTIONS, ...STORAGE_CAUTIONS] : COMMISSIONING_CAUTIONS,
     bandCaution: COMMISSIONING_BAND_CAUTION,
     summary,
     ratings: systemRatingText(input),

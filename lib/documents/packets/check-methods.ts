@@ -16,6 +16,7 @@ import {
 import { reviewFigures } from "@/lib/engineering/figures";
 import { totalInverterOutputA } from "@/lib/engineering/design-lookup";
 import { formatNumber } from "../text";
+import { STORAGE_METHODS, countedSourceInput } from "./storage-methods";
 
 // How each check was worked out, for the calculation sheet: the inputs it read from the
 // design and the method in our own notation. Keyed by the check id's prefix
@@ -232,7 +233,7 @@ const DESCRIBE: Record<string, Describe> = {
     const inputs = [
       `busbar ${s.busbarA} A`,
       `main ${s.mainBreakerA === null ? "none (main lugs)" : `${s.mainBreakerA} A`}`,
-      `inverter output ${num(outputA)} A`,
+      countedSourceInput(figures) ?? `inverter output ${num(outputA)} A`,
       `PV breaker ${s.pvBreakerA} A${s.pvBreakerAtOppositeEnd ? " at the end away from the main" : ""}`,
     ];
     const governing = figures.pointOfConnection.rule;
@@ -397,6 +398,7 @@ const DESCRIBE: Record<string, Describe> = {
     method: "Sum of the combiner's breakers, other than the one feeding out, at most the busbar rating",
   }),
   input: () => ({ inputs: [], method: "Could not be computed from the entries; see the finding" }),
+  ...STORAGE_METHODS,
 };
 
 /**

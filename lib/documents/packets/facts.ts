@@ -3,6 +3,7 @@ import { totalInverterOutputA } from "@/lib/engineering/design-lookup";
 import { type ConductorRow, conductorSchedule as scheduleOf } from "@/lib/design/conductor-schedule";
 import { formatNumber, formatQuantity } from "../text";
 import type { PacketInput } from "./input";
+import { storageFacts } from "./storage-facts";
 
 // The words and figures the packet sheets print, computed once from the packet input so
 // the templates only lay them out and the tests can check the same strings.
@@ -68,7 +69,10 @@ export function scopeOfWork(input: PacketInput): string[] {
   } else if (input.equipment.inverters.every((l) => l.item.specs.inverterKind === "micro")) {
     lines.push("Rapid shutdown (NEC 690.12) by the microinverters: no DC wiring leaves the array.");
   }
-  lines.push("No energy storage. The system exports surplus energy to the utility under its interconnection agreement.");
+  lines.push(
+    storageFacts(input)?.scope ??
+      "No energy storage. The system exports surplus energy to the utility under its interconnection agreement.",
+  );
   return lines;
 }
 
@@ -166,6 +170,7 @@ export function equipmentSchedule(input: PacketInput): EquipmentRow[] {
       listing: listingText(device.listing),
     });
   }
+  rows.push(...(storageFacts(input)?.equipmentRows ?? []));
   return rows;
 }
 
@@ -188,6 +193,11 @@ const LABEL_VALUE_NAMES: Record<string, { name: string; unit: string }> = {
   acVoltageV: { name: "Nominal AC voltage", unit: "V" },
   pvBreakerA: { name: "PV breaker", unit: "A" },
   busbarA: { name: "Busbar rating", unit: "A" },
+  essVoltageV: { name: "Nominal ESS voltage", unit: "V DC" },
+  faultCurrentA: { name: "Available fault current", unit: "A" },
+  powerControlSettingA: { name: "Power control setting", unit: "A" },
+  sourceA: { name: "Backup source current", unit: "A" },
+  inverterBreakerA: { name: "Inverter breaker", unit: "A" },
 };
 
 /** Each computed value of a label with its name and unit, e.g. "Highest DC voltage: 463.34 V". */

@@ -26,6 +26,7 @@ import {
   type StructuralRow,
 } from "./facts";
 import { PACKET_TITLES, type PacketInput } from "./input";
+import { storageFacts, type StorageFacts } from "./storage-facts";
 
 // A packet's printed facts gathered once, from the (printable) input, for the sheet layouts in
 // templates/pdf/packets: every string and figure as it prints, the check methods and the diagram.
@@ -68,6 +69,8 @@ export type PacketFacts = {
   /** By check id. */
   checks: Record<string, PrintedCheck>;
   singleLine: PaintedScene;
+  /** The batteries' facts; null for a PV-only design. */
+  storage: StorageFacts | null;
 };
 
 /** A packet's input with its printed facts: what the sheet layouts receive. */
@@ -81,6 +84,7 @@ export function packetFacts(input: PacketInput): PacketFacts {
   const m = input.equipment.module;
   const figures = figuresOfReview(input);
   const label = projectLabel(input);
+  const storage = storageFacts(input);
   return {
     documentTitle: PACKET_TITLES[input.kind],
     documentInfo: {
@@ -111,12 +115,15 @@ export function packetFacts(input: PacketInput): PacketFacts {
       moduleWidth: formatNumber(m.specs.widthIn),
       expeditedDeadLoadPsf: EXPEDITED_DEAD_LOAD_PSF,
     },
-    inverterLines: inverterCounts(input).map(({ item, quantity }) => ({
-      quantity: String(quantity),
-      makerModel: `${item.maker} ${item.model}`,
-      ratedOutput: `${formatNumber(item.specs.acPowerW)} W, ${item.specs.acOutputCurrentA} A at ${item.specs.acVoltageV} V`,
-      certification: listingText(item.specs.certification, item.listing),
-    })),
+    inverterLines: [
+      ...inverterCounts(input).map(({ item, quantity }) => ({
+        quantity: String(quantity),
+        makerModel: `${item.maker} ${item.model}`,
+        ratedOutput: `${formatNumber(item.specs.acPowerW)} W, ${item.specs.acOutputCurrentA} A at ${item.specs.acVoltageV} V`,
+        certification: listingText(item.specs.certification, item.listing),
+      })),
+      ...(storage?.inverterLines ?? []),
+    ],
     ratings: {
       dcKw: formatQuantity(summary.ratings.dcKw, "kW"),
       acKw: formatQuantity(summary.ratings.acKw, "kW"),
@@ -139,5 +146,6 @@ export function packetFacts(input: PacketInput): PacketFacts {
       DIAGRAM_BOX.widthPt,
       DIAGRAM_BOX.heightPt,
     ),
+    storage,
   };
 }

@@ -11,6 +11,7 @@ import { checkModulesReporting } from "./modules-reporting";
 import { checkRapidShutdownTest } from "./rapid-shutdown-test";
 import { checkShutdownString } from "./shutdown-string";
 import { checkPolarity } from "./string-polarity";
+import { checkStorageCommissioning } from "./storage-tests";
 import { checkStringVoc } from "./string-voc";
 import type { CommissioningCheck, CommissioningRecord } from "./types";
 
@@ -18,7 +19,8 @@ import type { CommissioningCheck, CommissioningRecord } from "./types";
  * Every check of a record, in the order the crew works: the strings tested before anything is
  * energized, then at the inverter its serial against the activation card, activation, the grid
  * profile, the devices found, the strings with the array shut down; then the AC side, first power,
- * modules reporting (with module-level monitoring only) and the rapid shutdown test.
+ * modules reporting (with module-level monitoring only) and the rapid shutdown test; last, with
+ * batteries, their charge, the backup test and the settings read from the inverter.
  */
 export function checkCommissioning(record: CommissioningRecord): CommissioningCheck[] {
   const { edition } = record;
@@ -36,5 +38,6 @@ export function checkCommissioning(record: CommissioningRecord): CommissioningCh
     checkFirstPower(record),
     ...(record.moduleMonitoring ? [checkModulesReporting(record)] : []),
     ...checkRapidShutdownTest(record.rapidShutdownTest, edition),
+    ...(record.storage ? checkStorageCommissioning(record.storage, edition) : []),
   ];
 }

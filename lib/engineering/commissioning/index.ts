@@ -17,6 +17,8 @@ export * from "./ac-voltage";
 export * from "./first-power";
 export * from "./modules-reporting";
 export * from "./rapid-shutdown-test";
+// With batteries
+export * from "./storage-tests";
 // The whole record
 export * from "./check-record";
 export * from "./completion";

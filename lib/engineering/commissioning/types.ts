@@ -14,7 +14,12 @@ export type CommissioningKind =
   | "first-power"
   | "modules-reporting"
   | "rapid-shutdown-voltage"
-  | "rapid-shutdown-time";
+  | "rapid-shutdown-time"
+  | "storage-charge"
+  | "storage-backup"
+  | "storage-transfer-time"
+  | "storage-power-control"
+  | "storage-export-limit";
 
 /**
  * Whether the installer's reading behind a result is in the record: "missing" readings can be
@@ -88,6 +93,18 @@ export interface RapidShutdownTestReading {
   seconds?: number | null; // from pressing the shutdown switch to reaching measuredV
 }
 
+/** The storage part of a record: the design's facts (backup panel, transfer time, settings) and what the crew read. */
+export interface StorageCommissioningReading {
+  hasBackupPanel: boolean; // the design feeds a backup loads panel: the backup test applies
+  transferTimeS?: number | null; // the inverter's stated transfer time, where the design has it
+  pcsSettingA?: number | null; // a listed power control system's designed current setting
+  exportLimitKw?: number | null; // the designed export limit (0 for non-export)
+  stateOfChargePct?: number | null;
+  backupTest?: { gridOpened?: boolean | null; panelCarried?: boolean | null; transferSeconds?: number | null };
+  pcsSettingReadA?: number | null;
+  exportLimitReadKw?: number | null;
+}
+
 /** What the installer records in the field, beside the facts it is checked against, in the order of the work. */
 export interface CommissioningRecord {
   edition: NecEdition;
@@ -108,4 +125,5 @@ export interface CommissioningRecord {
   firstPowerW?: number | null;
   firstPowerTime?: string | null; // local time of day, "HH:MM" (24-hour)
   rapidShutdownTest?: RapidShutdownTestReading;
+  storage?: StorageCommissioningReading | null; // only for a design with batteries
 }

@@ -5,6 +5,7 @@ import { CalculationSheet } from "./sheets/calculation-sheet";
 import { CoverSheet } from "./sheets/cover-sheet";
 import { LabelSheet } from "./sheets/label-sheet";
 import { SingleLineSheet } from "./sheets/single-line-sheet";
+import { StorageDataSheet } from "./sheets/storage-data-sheet";
 import { StructuralSheet } from "./sheets/structural-sheet";
 import { SystemSummarySheet } from "./sheets/system-summary-sheet";
 
@@ -40,8 +41,10 @@ function permitSheetPage(
       // Calculation rows are numbered on across sheets, so a sheet starts where the last one ended.
       return <CalculationSheet key={sheet.number} input={input} sheet={sheet} checks={sheet.checks} firstIndex={nextCheckIndex()} />;
     case "labels":
-      return <LabelSheet key={sheet.number} input={input} sheet={sheet} />;
+      return <LabelSheet key={sheet.number} input={input} sheet={sheet} range={sheet.labels} />;
     case "structural":
       return <StructuralSheet key={sheet.number} input={input} sheet={sheet} />;
+    case "storage-data":
+      return <StorageDataSheet key={sheet.number} input={input} sheet={sheet} />;
   }
 }

@@ -101,3 +101,19 @@ export function Table<Row>({ columns, rows, fontSize = 7.5 }: { columns: Column<
     </View>
   );
 }
+
+type NameValue = { name: string; value: string };
+
+/** Two columns, an item's name and its value (measured, in the monospace face). */
+export function NameValueTable({ rows, valueWidth = 2.4 }: { rows: NameValue[]; valueWidth?: number }) {
+  return (
+    <Table
+      columns={[
+        { header: "Item", width: 3, render: (r: NameValue) => r.name },
+        { header: "Value", width: valueWidth, render: (r: NameValue) => r.value, mono: true },
+      ]}
+      rows={rows}
+      fontSize={8}
+    />
+  );
+}

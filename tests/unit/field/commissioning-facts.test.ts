@@ -2,7 +2,8 @@ import { describe, expect, it, test } from "vitest";
 import { checkCommissioning, commissioningComplete } from "@/lib/engineering/commissioning";
 import type { Design } from "@/lib/engineering";
 import { commissioningFacts, emptyReadings, moduleMonitoringOf, toCommissioningRecord } from "@/lib/field/commissioning-facts";
-import { CommissioningReadings } from "@/lib/schemas/commissioning";
+import { CommissioningReadings, EMPTY_STORAGE_READINGS } from "@/lib/schemas/commissioning";
+import { dcStorage } from "../engineering/storage/fixtures";
 
 // Invented demo design: two strings (15 and 12 modules) behind module-level shutdown devices, one string inverter.
 const design = {
@@ -50,6 +51,7 @@ describe("commissioning facts from the design", () => {
       moduleMonitoring: false,
       modulesInstalled: 27,
       acRatingW: 7600,
+      storage: null, // no batteries: no storage part
     });
   });
 
@@ -202,6 +204,14 @@ describe("commissioning readings as typed on a phone", () => {
       firstPowerW: null,
       firstPowerTime: null,
       rapidShutdown: { boundary: "outside", measuredV: null, seconds: null },
+      storage: {
+        stateOfChargePct: null,
+        gridOpened: null,
+        panelCarried: null,
+        transferSeconds: null,
+        pcsSettingA: null,
+        exportLimitKw: null,
+      },
     });
   });
 
@@ -226,5 +236,53 @@ describe("commissioning readings as typed on a phone", () => {
   it("devices found must be whole; polarity is correct or reversed", () => {
     expect(CommissioningReadings.safeParse({ devicesFound: "26.5" }).success).toBe(false);
     expect(CommissioningReadings.safeParse({ strings: [{ id: "A", polarity: "sideways" }] }).success).toBe(false);
+  });
+});
+
+describe("the storage part from the design's batteries", () => {
+  const withStorage = (storage: Partial<NonNullable<Design["storage"]>>) =>
+    commissioningFacts({
+      design: { ...design, storage: { ...dcStorage({ multimodeInverterId: "inv" }), ...storage } } as Design,
+      edition: 2023,
+      acceptedGridProfiles: [],
+      moduleCount: 27,
+      acKw: 7.6,
+      moduleMonitoring: false,
+    });
+
+  test.each([
+    // [storage entries, hasBackupPanel, transferTimeS, pcsSettingA, exportLimitKw]
+    [{}, true, 0.02, null, null],
+    [{ backupPanel: undefined, backupOutput: undefined }, false, null, null, null],
+    [{ pcs: { listed: true, currentSettingA: 40 } }, true, 0.02, 40, null],
+    [{ pcs: { listed: false, currentSettingA: 40 } }, true, 0.02, null, null], // an unlisted control is not a PCS setting to hold
+    [{ operatingMode: "non-export" as const }, true, 0.02, null, 0], // non-export is a limit of zero
+    [{ exportLimitKw: 5 }, true, 0.02, null, 5],
+  ])("%j", (entries, hasBackupPanel, transferTimeS, pcsSettingA, exportLimitKw) => {
+    expect(withStorage(entries).storage).toMatchObject({ hasBackupPanel, transferTimeS, pcsSettingA, exportLimitKw });
+  });
+
+  test("a storage project's empty record cannot complete until the storage part is filled in and passes", () => {
+    const f = withStorage({ pcs: { listed: true, currentSettingA: 40 } });
+    const empty = toCommissioningRecord(f, emptyReadings(f));
+    expect(commissioningComplete(checkCommissioning(empty)).missing).toEqual(
+      expect.arrayContaining(["storage-charge", "storage-backup", "storage-transfer-time", "storage-power-control"]),
+    );
+    const readings = CommissioningReadings.parse({
+      ...emptyReadings(f),
+      storage: { stateOfChargePct: "76", gridOpened: true, panelCarried: true, transferSeconds: "0", pcsSettingA: "40" },
+    });
+    const storageResults = checkCommissioning(toCommissioningRecord(f, readings)).filter((c) => c.kind.startsWith("storage-"));
+    expect(storageResults.map((c) => [c.kind, c.status])).toEqual([
+      ["storage-charge", "pass"],
+      ["storage-backup", "pass"],
+      ["storage-transfer-time", "pass"],
+      ["storage-power-control", "pass"],
+    ]);
+  });
+
+  test("readings saved before storage existed parse with an empty storage part", () => {
+    const { storage: _none, ...old } = emptyReadings(facts);
+    expect(CommissioningReadings.parse(old).storage).toEqual({ ...EMPTY_STORAGE_READINGS });
   });
 });

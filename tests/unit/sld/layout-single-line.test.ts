@@ -3,6 +3,8 @@ import type { Design } from "@/lib/engineering";
 import { layoutSingleLine, type SldScene, type SldText } from "@/lib/sld";
 import { runTitle } from "@/lib/sld/conductor-label";
 import {
+  acStorageFixture,
+  dcStorageFixture,
   manyRuns,
   manyStrings,
   microBranches,
@@ -225,6 +227,11 @@ describe("single-line layout: readable at every size", () => {
     ["supply-side connection", supplySideFixture()],
     ["the microinverter fixture", microFixture()],
     ...MULTI_RUN,
+    ...[1, 2, 3, 4, 5, 6].map((n): [string, Design] => [
+      `${n} string(s) on a hybrid inverter with batteries and a backup panel`,
+      dcStorageFixture(n),
+    ]),
+    ["microinverters with an AC-coupled battery and a power control system", acStorageFixture()],
   ];
 
   test.each(cases)("%s: no text overlaps another, all inside the scene", (_, design) => {
@@ -246,5 +253,87 @@ describe("single-line layout: readable at every size", () => {
     const six = layoutSingleLine(manyStrings(stringFixture(), 6));
     expect(six.height).toBeGreaterThan(one.height + 200);
     expect(six.width).toBeLessThan(one.width * 1.1);
+  });
+});
+
+describe("single-line layout: energy storage", () => {
+  const noEdition = (d: Design) => layoutSingleLine(d);
+
+  test("DC-coupled: the batteries, the ESS disconnect, the numbered battery circuit, the backup panel and its transfer", () => {
+    const all = texts(layoutSingleLine(dcStorageFixture(), { necEdition: 2023 }));
+    expect(all).toEqual(
+      expect.arrayContaining([
+        "ENERGY STORAGE SYSTEM",
+        "2 × Brindle BX-13",
+        "13.5 kWh each (12.6 usable)",
+        "400 V DC · garage",
+        "Listed UL 9540, UL 9540A",
+        "ESS DISCONNECT",
+        "Integral to the ESS",
+        "B1",
+        "Batteries to inverter, 125 A OCPD",
+        "1/0 AWG Cu THWN-2",
+        "Backup output (710.15)",
+        "32 A at 240 V, 7.6 kW",
+        "TRANSFER",
+        "Transfer time 0.02 s (data sheet)",
+        "BACKUP LOADS PANEL",
+        "125 A busbar, 100 A main",
+        "40 A inverter breaker, far end",
+        "well pump: 10 A at 240 V",
+        "POINT OF CONNECTION",
+        "Operating mode: self-consumption",
+      ]),
+    );
+    expect(all).not.toContain("BATTERY INVERTER");
+  });
+
+  test("AC-coupled: the battery inverter, its output circuit on its own breaker, and the PCS setting counted where 705.13 exists", () => {
+    const scene = layoutSingleLine(acStorageFixture(), { necEdition: 2023 });
+    const all = texts(scene);
+    expect(all).toEqual(
+      expect.arrayContaining([
+        "BATTERY INVERTER",
+        "Brindle BI-5",
+        "5.76 kW, 240 V, 24 A out",
+        "B1",
+        "Battery inverter to service panel, 30 A OCPD",
+        "30 A ESS",
+        "Power control system set to 40 A",
+        "counted at the busbar (705.13, NEC 2023)",
+        "Operating mode: non-export",
+        "Export limited to 0 kW by the PCS",
+      ]),
+    );
+    expect(all).not.toContain("BACKUP LOADS PANEL");
+    expect(scene.description).toContain("AC-coupled through a battery inverter");
+  });
+
+  // 705.13 (power control systems) first appears in NEC 2020; NFPA 70-2017 has no such section (issue 17's reference, checked in clauses.ts).
+  test("NEC 2017: the PCS setting is shown but not counted, and every inverter output is", () => {
+    const d = acStorageFixture();
+    const all = texts(layoutSingleLine(d, { necEdition: 2017 }));
+    expect(all).toContain("not counted: NEC 2017 has no 705.13");
+    // 705.12(B) counts every source's continuous output: the microinverters' and the battery inverter's 24 A.
+    const pvA = d.inverters.reduce((t, i) => t + i.quantity * i.acOutputCurrentA, 0);
+    expect(all).toContain(`Sources counted: ${Math.round((pvA + 24) * 100) / 100} A of inverter output`);
+  });
+
+  test("battery circuits are tagged B1, B2, … in the design's order, and a missing one is said so", () => {
+    const d = dcStorageFixture();
+    const storage = d.storage!;
+    const second = { ...storage.circuits![0], id: "c2", label: "Second bank to inverter" };
+    expect(texts(noEdition({ ...d, storage: { ...storage, circuits: [storage.circuits![0], second] } }))).toEqual(
+      expect.arrayContaining(["B1", "B2", "Second bank to inverter, 125 A OCPD"]),
+    );
+    expect(texts(noEdition({ ...d, storage: { ...storage, circuits: [] } }))).toContain("No battery circuit entered");
+  });
+
+  test("the notes carry the storage cautions; a PV-only diagram has no storage at all", () => {
+    const notes = texts(layoutSingleLine(dcStorageFixture(), { necEdition: 2023 })).join(" ");
+    expect(notes).toContain("A battery stays energized when the array and the grid are off.");
+    expect(notes).toContain("706.15");
+    const pvOnly = texts(layoutSingleLine(stringFixture(), { necEdition: 2023 })).join(" ");
+    for (const word of ["ENERGY STORAGE", "ESS", "BACKUP", "POINT OF CONNECTION", "battery"]) expect(pvOnly).not.toContain(word);
   });
 });

@@ -2,6 +2,7 @@
 // branches, two inverters, a supply-side connection. Demo (invented) equipment only.
 import type { ConductorRun, Design } from "@/lib/engineering";
 import { packetFixture } from "@/tests/support/packet-fixture";
+import { acStorage, dcStorage } from "../engineering/storage/fixtures";
 
 export const stringFixture = () => packetFixture({ variant: 0 }).design;
 export const optimizerFixture = () => packetFixture({ variant: 1 }).design;
@@ -158,4 +159,32 @@ export function microThroughBoxes(): Design {
 export function strayRun(): Design {
   const base = stringFixture();
   return { ...base, runs: [...base.runs, { ...dcRun("dc-9", ["S9"], 20), label: "String S9 to inverter" }] };
+}
+
+/** The string fixture's inverter as a hybrid with two batteries in the garage and a backup loads panel. */
+export function dcStorageFixture(n = 2): Design {
+  const base = manyStrings(stringFixture(), n, 14);
+  return { ...base, storage: dcStorage({ multimodeInverterId: base.inverters[0].id }) };
+}
+
+/** Microinverters with an AC-coupled battery on its own breaker, limited by a listed power control system. */
+export function acStorageFixture(): Design {
+  const base = microFixture();
+  return {
+    ...base,
+    storage: acStorage({
+      operatingMode: "non-export",
+      exportLimitKw: 0,
+      pcs: { listed: true, currentSettingA: 40 },
+      circuits: [
+        {
+          id: "c1",
+          label: "Battery inverter to service panel",
+          kind: "battery-inverter-output",
+          conductor: { size: "10", material: "Cu", insulationTempC: 90, insulation: "THWN-2" },
+          ocpdA: 30,
+        },
+      ],
+    }),
+  };
 }

@@ -55,13 +55,13 @@ export function ApplicationSheet({ input, sheet }: Sheet) {
       </Section>
       <Section title="3  Request in brief">
         <View style={s.row}>
-          <Field label="Generator type" value="Photovoltaic, inverter-based" style={s.cell} />
+          <Field label="Generator type" value={input.facts.storage?.brief.generatorType ?? "Photovoltaic, inverter-based"} style={s.cell} />
           <Field label="DC rating (STC)" value={input.facts.ratings.dcKw} mono style={s.cell} />
           <Field label="AC rating" value={input.facts.ratings.acKw} mono style={s.cell} />
         </View>
         <View style={s.row}>
-          <Field label="Energy storage" value="None" style={s.cell} />
-          <Field label="Export to the grid" value="Yes, net of on-site use" style={s.cell} />
+          <Field label="Energy storage" value={input.facts.storage?.brief.storage ?? "None"} style={s.cell} />
+          <Field label="Export to the grid" value={input.facts.storage?.brief.export ?? "Yes, net of on-site use"} style={s.cell} />
           <Field label="Project reference" value={`Project ${p.number}, ${input.jurisdiction.name}`} style={s.cell} />
         </View>
       </Section>
@@ -154,17 +154,45 @@ export function FacilitySheet({ input, sheet, singleLineSheet }: Sheet & { singl
         </View>
       </Section>
       <Section title="9  Storage and export">
-        <View style={s.row}>
-          <Field label="Energy storage" value="None" style={s.cell} />
-          <Field label="Export" value="Yes: surplus energy flows to the grid (net)" style={s.cell} />
-        </View>
+        {input.facts.storage ? (
+          <StorageFields fields={input.facts.storage.utilityFields} />
+        ) : (
+          <View style={s.row}>
+            <Field label="Energy storage" value="None" style={s.cell} />
+            <Field label="Export" value="Yes: surplus energy flows to the grid (net)" style={s.cell} />
+          </View>
+        )}
       </Section>
-      <Notice title="Attached">
-        <Text style={s.note}>
-          Single-line diagram on sheet {singleLineSheet}. Equipment data sheets and the site plan on request or as the utility's process
-          asks.
+      {input.facts.storage ? (
+        // Storage fills the page: the attachments take one plain line instead of a box.
+        <Text style={[s.note, base.soft]}>
+          Attached: the single-line diagram on sheet {singleLineSheet}. Equipment and battery data sheets and the site plan on request.
         </Text>
-      </Notice>
+      ) : (
+        <Notice title="Attached">
+          <Text style={s.note}>
+            Single-line diagram on sheet {singleLineSheet}. Equipment data sheets and the site plan on request or as the utility's process
+            asks.
+          </Text>
+        </Notice>
+      )}
     </FormSheet>
+  );
+}
+
+/** The storage fields a utility asks for, four to a row. */
+function StorageFields({ fields }: { fields: { name: string; value: string }[] }) {
+  const rows = Array.from({ length: Math.ceil(fields.length / 4) }, (_, i) => fields.slice(i * 4, i * 4 + 4));
+  return (
+    <>
+      {rows.map((row) => (
+        <View key={row[0]!.name} style={s.row}>
+          {row.map((f) => (
+            <Field key={f.name} label={f.name} value={f.value} style={s.cell} />
+          ))}
+          {row.length < 4 ? <View style={{ flex: 4 - row.length, marginHorizontal: 5 }} /> : null}
+        </View>
+      ))}
+    </>
   );
 }

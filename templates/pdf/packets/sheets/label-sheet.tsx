@@ -67,7 +67,8 @@ function LabelCard({ label, values, index }: { label: WarningLabel; values: { na
 }
 
 /** Every label the review requires, drawn with its computed values and its place. */
-export function LabelSheet({ input, sheet }: { input: PrintedPacket; sheet: SheetInfo }) {
+export function LabelSheet({ input, sheet, range }: { input: PrintedPacket; sheet: SheetInfo; range?: [number, number] }) {
+  const [first, end] = range ?? [0, input.review.labels.length];
   return (
     <PlanSheet
       input={input}
@@ -81,8 +82,8 @@ export function LabelSheet({ input, sheet }: { input: PrintedPacket; sheet: Shee
         require. Where the AHJ prescribes its own text, use that text with these values.
       </Text>
       <View style={s.grid}>
-        {input.review.labels.map((label, i) => (
-          <LabelCard key={label.id} label={label} values={input.facts.labelValues[i]!} index={i + 1} />
+        {input.review.labels.slice(first, end).map((label, i) => (
+          <LabelCard key={label.id} label={label} values={input.facts.labelValues[first + i]!} index={first + i + 1} />
         ))}
       </View>
     </PlanSheet>

@@ -1,7 +1,8 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { ConductorRow, EquipmentRow, RatingLine } from "@/lib/documents/packets/facts";
 import type { PrintedPacket } from "@/lib/documents/packets/printed";
-import { Section, StatusMark, Table } from "../../shared/blocks";
+import type { BatteryCircuitRow } from "@/lib/documents/packets/storage-facts";
+import { NameValueTable, Section, StatusMark, Table } from "../../shared/blocks";
 import { PlanSheet } from "../../shared/sheet-page";
 import { base } from "../../shared/styles";
 import type { SheetInfo } from "../../shared/title-block";
@@ -24,16 +25,7 @@ export function SystemSummarySheet({ input, sheet }: { input: PrintedPacket; she
     { name: "Building", value: input.site.isDwelling ? "One- or two-family dwelling" : "Other building" },
     { name: "Code edition of the review", value: `NEC ${input.review.edition}` },
   ];
-  const valueTable = (rows: RatingLine[]) => (
-    <Table
-      columns={[
-        { header: "Item", width: 3, render: (r: RatingLine) => r.name },
-        { header: "Value", width: 2.4, render: (r: RatingLine) => r.value, mono: true },
-      ]}
-      rows={rows}
-      fontSize={8}
-    />
-  );
+  const valueTable = (rows: RatingLine[]) => <NameValueTable rows={rows} />;
   return (
     <PlanSheet input={input} sheet={sheet} subtitle="Figures from the design review of this revision">
       <View style={s.columns}>
@@ -81,6 +73,27 @@ export function SystemSummarySheet({ input, sheet }: { input: PrintedPacket; she
               fontSize={8}
             />
           </Section>
+          {input.facts.storage ? (
+            <View style={s.columns}>
+              <View style={[s.left, { width: 330 }]}>
+                <Section title="Energy storage">{valueTable(input.facts.storage.summaryLines)}</Section>
+              </View>
+              <View style={s.right}>
+                <Section title="Battery circuits">
+                  <Table
+                    columns={[
+                      { header: "No.", width: 0.4, render: (r: BatteryCircuitRow) => r.tag, mono: true },
+                      { header: "Circuit", width: 2, render: (r: BatteryCircuitRow) => r.label },
+                      { header: "Conductors", width: 2, render: (r: BatteryCircuitRow) => r.conductors },
+                      { header: "Protection", width: 0.9, render: (r: BatteryCircuitRow) => r.ocpd },
+                    ]}
+                    rows={input.facts.storage.circuits}
+                    fontSize={8}
+                  />
+                </Section>
+              </View>
+            </View>
+          ) : null}
         </View>
       </View>
     </PlanSheet>

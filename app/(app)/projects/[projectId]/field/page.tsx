@@ -40,7 +40,7 @@ export default async function FieldPage({ params }: { params: Promise<{ projectI
       <ProjectSubpageHeader project={project} title="Field record">
         Commissioning readings checked against the approved design as you type, the certificate of completion to sign, and photos from site.
       </ProjectSubpageHeader>
-      <FieldCautions />
+      <FieldCautions storage={commissioning.ok && Boolean(commissioning.data.facts.storage)} />
       <FieldInspections filings={filings} />
       {commissioning.ok ? (
         <>

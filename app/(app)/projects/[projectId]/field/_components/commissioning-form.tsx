@@ -18,6 +18,7 @@ import { InverterStep } from "./inverter-step";
 import { PairingStep } from "./pairing-step";
 import { LabelledInput, Reading, ResultLine, Step } from "./reading-parts";
 import { fmtV, type StepProps } from "./step-props";
+import { StorageStep } from "./storage-step";
 
 type SaveState = { kind: "idle" | "saving" | "saved" | "error" | "refused"; text: string };
 const AUTOSAVE_MS = 1500;
@@ -259,6 +260,8 @@ export function CommissioningForm(props: {
           <ResultLine result={byId("rapid-shutdown-voltage")} />
           <ResultLine result={byId("rapid-shutdown-time")} />
         </Step>
+
+        {facts.storage ? <StorageStep {...props_()} /> : null}
       </fieldset>
 
       {readOnly ? (

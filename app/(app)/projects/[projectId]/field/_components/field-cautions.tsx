@@ -1,5 +1,5 @@
 /** The cautions the installer reads before taking readings; they defer to the maker's instructions and licensed practice. */
-export function FieldCautions() {
+export function FieldCautions({ storage = false }: { storage?: boolean }) {
   return (
     <aside
       className="rounded border border-result-warn/50 bg-result-warn/10 p-3 text-sm text-ink"
@@ -15,6 +15,9 @@ export function FieldCautions() {
           Inverter capacitors hold a charge after shutdown. Keep clear of DC terminals until the inverter reports a safe DC voltage, and
           confirm with a meter rated for the circuit.
         </li>
+        {storage ? (
+          <li>This system has batteries: they stay energized when the array and the grid are off, and keep the backup loads panel live.</li>
+        ) : null}
         <li>
           Wear the protective equipment the task calls for and follow the equipment maker&apos;s instructions, the NEC edition and local
           amendments the AHJ enforces, and your licensed practice. These checks support that judgement; they do not replace it.

@@ -24,7 +24,20 @@ export type FormValues = {
   firstPowerW: string;
   firstPowerTime: string;
   rapidShutdown: { boundary: "outside" | "inside"; measuredV: string; seconds: string };
+  storage: {
+    stateOfChargePct: string;
+    gridOpened: YesNo;
+    panelCarried: YesNo;
+    transferSeconds: string;
+    pcsSettingA: string;
+    exportLimitKw: string;
+  };
 };
+
+/** A yes-or-no seen on site, as a radio group holds it. */
+export type YesNo = "" | "yes" | "no";
+const yesNo = (v: boolean | null): YesNo => (v === null ? "" : v ? "yes" : "no");
+const fromYesNo = (v: YesNo): boolean | null => (v === "" ? null : v === "yes");
 
 const text = (v: number | string | null) => (v === null ? "" : String(v));
 
@@ -54,14 +67,23 @@ export function toFormValues(r: CommissioningReadings, acceptedGridProfiles: rea
       measuredV: text(r.rapidShutdown.measuredV),
       seconds: text(r.rapidShutdown.seconds),
     },
+    storage: {
+      stateOfChargePct: text(r.storage.stateOfChargePct),
+      gridOpened: yesNo(r.storage.gridOpened),
+      panelCarried: yesNo(r.storage.panelCarried),
+      transferSeconds: text(r.storage.transferSeconds),
+      pcsSettingA: text(r.storage.pcsSettingA),
+      exportLimitKw: text(r.storage.exportLimitKw),
+    },
   };
 }
 
 /** What the form sends: the chosen profile or the typed one, a polarity not chosen as none. */
 export function toReadingsInput(v: FormValues): CommissioningReadingsInput {
-  const { gridProfileChoice, gridProfileOther, strings, ...rest } = v;
+  const { gridProfileChoice, gridProfileOther, strings, storage, ...rest } = v;
   return {
     ...rest,
+    storage: { ...storage, gridOpened: fromYesNo(storage.gridOpened), panelCarried: fromYesNo(storage.panelCarried) },
     strings: strings.map((s) => ({ ...s, polarity: s.polarity === "" ? null : s.polarity })),
     gridProfileSet: gridProfileChoice === OTHER_PROFILE ? gridProfileOther : gridProfileChoice,
   };
