@@ -562,17 +562,3 @@ async function queueAnswerMail(
     );
   }
 }
-
-/** Whether a packet revision's interconnection application carries a completed customer signature. */
-export async function hasCustomerSignature(
-  { organizationId, packetId }: { organizationId: string; packetId: string },
-  transaction?: Transaction,
-) {
-  const found = await SignatureSigner.findOne({
-    where: { organizationId, role: "customer", status: "signed" },
-    include: [{ model: SignatureRequest, as: "request", where: { packetId, documentKind: "interconnection-application" }, attributes: [] }],
-    attributes: ["id"],
-    transaction,
-  });
-  return Boolean(found);
-}

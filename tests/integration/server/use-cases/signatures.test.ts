@@ -7,13 +7,8 @@ import { AppError } from "@/lib/errors";
 import { renderAgentAuthorizationPdf } from "@/lib/documents/agent-authorization/render";
 import { findSignatureBlocks } from "@/lib/documents/signing/blocks";
 import { TOKEN_GUESS_THROTTLE } from "@/lib/server/data/token-guesses";
-import {
-  getLinkSigner,
-  hasCustomerSignature,
-  listSignatureRequests,
-  remindSigner,
-  revokeSigner,
-} from "@/lib/server/data/signature-requests";
+import { hasCustomerSignature } from "@/lib/server/data/customer-signatures";
+import { getLinkSigner, listSignatureRequests, remindSigner, revokeSigner } from "@/lib/server/data/signature-requests";
 import { getObjectBytes, putObject } from "@/lib/server/services/storage";
 import { hashToken } from "@/lib/server/tokens";
 import { declineByLink, openSigningLink, requestSignatures, signByLink, signingPagePng } from "@/lib/server/use-cases/signatures";
