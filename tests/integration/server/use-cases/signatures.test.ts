@@ -6,6 +6,7 @@ import { AuditEvent, OutboxMessage, Packet, SignatureLinkAccess, SignatureReques
 import { AppError } from "@/lib/errors";
 import { renderAgentAuthorizationPdf } from "@/lib/documents/agent-authorization/render";
 import { findSignatureBlocks } from "@/lib/documents/signing/blocks";
+import { getDesk } from "@/lib/server/data/desk";
 import { TOKEN_GUESS_THROTTLE } from "@/lib/server/data/token-guesses";
 import { hasCustomerSignature } from "@/lib/server/data/customer-signatures";
 import { getLinkSigner, listSignatureRequests, remindSigner, revokeSigner } from "@/lib/server/data/signature-requests";
@@ -24,6 +25,7 @@ const code = async (promise: Promise<unknown>) =>
     () => "resolved",
     (e: unknown) => (e instanceof AppError ? `${e.code}: ${e.message}` : String(e)),
   );
+const DAY = 24 * 60 * 60_000;
 const client = (address: string) => ({ address, userAgent: "fixture-phone/2.0" });
 // A 2 × 1 px opaque PNG; the server checks the PNG signature and a plausible length, so it is padded with a text chunk.
 const PNG =
@@ -244,6 +246,30 @@ describe("signature requests", () => {
     expect(await code(remindSigner({ viewer: rival.viewers.coordinator, signerId, expiresInDays: 7 }))).toMatch(/^NOT_FOUND/);
     expect(await code(revokeSigner({ viewer: rival.viewers.admin, signerId }))).toMatch(/^NOT_FOUND/);
     expect(await code(revokeSigner({ viewer: org.viewers.installer, signerId }))).toMatch(/^(NOT_FOUND|FORBIDDEN)/);
+  });
+
+  it("lists unanswered links on the coordinator's desk until they are answered, withdrawn or expired", async () => {
+    const project = await makeProject(org);
+    const request = await requestSignatures({
+      viewer: org.viewers.coordinator,
+      projectId: project.id,
+      input: {
+        document: "agent-authorization",
+        expiresInDays: 14,
+        signers: [{ role: "customer", name: project.customerName, email: "desk@mail.example" }],
+      },
+    });
+    const onDesk = async () =>
+      (await getDesk({ viewer: org.viewers.coordinator })).desk.signatures.filter((r) => r.projectId === project.id).map((r) => r.what);
+    expect(await onDesk()).toEqual([`Agent authorization letter: not signed by ${project.customerName} yet`]);
+    await SignatureSigner.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id: request.signers[0]!.id } });
+    expect(await onDesk()).toEqual([]);
+    await SignatureSigner.update({ expiresAt: new Date(Date.now() + DAY) }, { where: { id: request.signers[0]!.id } });
+    expect(await onDesk()).toHaveLength(1);
+    await revokeSigner({ viewer: org.viewers.coordinator, signerId: request.signers[0]!.id });
+    expect(await onDesk()).toEqual([]);
+    // Another company's desk never lists it.
+    expect((await getDesk({ viewer: rival.viewers.admin })).desk.signatures.filter((r) => r.projectId === project.id)).toEqual([]);
   });
 
   it("refuses an address that guessed too many tokens, even with a good one (shared count with inspector links)", async () => {
