@@ -11,6 +11,11 @@ import type { SignatureMarkInput } from "@/lib/schemas/signature-request";
 function DrawPad({ label, onChange }: { label: string; onChange: (png: string | null) => void }) {
   const canvas = useRef<HTMLCanvasElement>(null);
   const pad = useRef<SignaturePad | null>(null);
+  // The pad is made once: a new one (or a resized canvas) would wipe the drawing. It reports through the latest callback.
+  const report = useRef(onChange);
+  useEffect(() => {
+    report.current = onChange;
+  });
   useEffect(() => {
     const el = canvas.current!;
     // Sized in device pixels so the ink is sharp on phones; drawn in dark ink on a transparent background.
@@ -19,14 +24,14 @@ function DrawPad({ label, onChange }: { label: string; onChange: (png: string | 
     el.height = el.offsetHeight * ratio;
     el.getContext("2d")!.scale(ratio, ratio);
     const p = new SignaturePad(el, { penColor: "#1f1c17", minWidth: 0.8, maxWidth: 2.6 });
-    const done = () => onChange(p.isEmpty() ? null : p.toDataURL("image/png"));
+    const done = () => report.current(p.isEmpty() ? null : p.toDataURL("image/png"));
     p.addEventListener("endStroke", done);
     pad.current = p;
     return () => {
       p.removeEventListener("endStroke", done);
       p.off();
     };
-  }, [onChange]);
+  }, []);
   return (
     <div className="space-y-2">
       <canvas
@@ -40,7 +45,7 @@ function DrawPad({ label, onChange }: { label: string; onChange: (png: string | 
         variant="secondary"
         onClick={() => {
           pad.current?.clear();
-          onChange(null);
+          report.current(null);
         }}
       >
         Clear

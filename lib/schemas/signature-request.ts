@@ -58,3 +58,25 @@ export type SignDocumentInput = z.input<typeof SignDocumentInput>;
 export const DeclineSigningInput = z.object({
   reason: safeString().trim().min(1, "Say why you decline").max(1000, "At most 1000 characters"),
 });
+
+/** One person signing on the installer's phone: their name, their agreement and their signature. */
+const InPersonSignerInput = z.object({
+  name: personName,
+  agreed: z.literal(true, { error: "Each signer agrees to sign electronically" }),
+  consentedAt: z.iso.datetime().optional(),
+  mark: SignatureMarkInput,
+});
+
+/** The installer and the customer sign the certificate of completion together on the installer's phone. */
+export const SignCertificateInPersonInput = z.object({
+  installer: InPersonSignerInput,
+  customer: InPersonSignerInput.extend({
+    email: safeString()
+      .trim()
+      .toLowerCase()
+      .max(254)
+      .refine((v) => v === "" || z.email().safeParse(v).success, "Enter an e-mail address, or leave it empty")
+      .default(""),
+  }),
+});
+export type SignCertificateInPersonInput = z.input<typeof SignCertificateInPersonInput>;

@@ -562,3 +562,50 @@ async function queueAnswerMail(
     );
   }
 }
+
+/**
+ * Records a document signed in person on a signed-in phone (the certificate of completion in the field):
+ * the request and its signers, without links. Call inside the transaction that then signs it.
+ */
+export async function createInPersonRequest(
+  {
+    viewer,
+    projectId,
+    document,
+    signers,
+  }: {
+    viewer: Viewer;
+    projectId: string;
+    document: { kind: SignedDocumentKind; title: string; originalKey: string; originalSha256: string };
+    signers: NewSigner[];
+  },
+  transaction: Transaction,
+): Promise<{ requestId: string; signerIds: string[] }> {
+  const request = await SignatureRequest.create(
+    {
+      organizationId: viewer.organizationId,
+      projectId,
+      documentKind: document.kind,
+      packetId: null,
+      title: document.title,
+      originalKey: document.originalKey,
+      originalSha256: document.originalSha256,
+      createdById: viewer.id,
+    },
+    { transaction },
+  );
+  const rows = await SignatureSigner.bulkCreate(
+    signers.map((s) => ({
+      organizationId: viewer.organizationId,
+      signatureRequestId: request.id,
+      role: s.role,
+      channel: "in-person" as const,
+      name: s.name,
+      email: s.email,
+      tokenHash: null,
+      expiresAt: null,
+    })),
+    { transaction, returning: true },
+  );
+  return { requestId: request.id, signerIds: rows.map((r) => r.id) };
+}

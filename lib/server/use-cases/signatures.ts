@@ -13,12 +13,16 @@ import type { SignatureMark, SignerEvidence } from "@/lib/documents/signing/inpu
 import { signPdf } from "@/lib/documents/signing/sign";
 import type { SignatureRequestDto, SigningView } from "@/lib/dto/signature-requests";
 import { AppError } from "@/lib/errors";
-import type { RequestSignaturesInput, SignatureMarkInput } from "@/lib/schemas/signature-request";
+import type { RequestSignaturesInput, SignatureMarkInput, SignCertificateInPersonInput } from "@/lib/schemas/signature-request";
 import { SIGNATURE_FIELDS } from "@/templates/pdf/shared/signature-line";
+import { can } from "@/lib/domain/permissions";
 import { db } from "../db";
+import { getOrganization } from "../data/organizations";
+import { getProjectById } from "../data/projects";
 import { buildAgentAuthorizationInput } from "../data/agent-authorization";
 import { buildCommissioningDocumentInput } from "../data/commissioning";
 import {
+  createInPersonRequest,
   createSignatureRequest,
   getLinkSigner,
   getSignablePacket,
@@ -320,4 +324,85 @@ export async function declineByLink(token: string, reason: string, client: Clien
   assertOpen(signer);
   await recordDecline({ signerId: signer.signerId, reason, client });
   await logSigningAccess(signer, "decline", client);
+}
+
+/**
+ * The installer and the customer sign the certificate of completion on the installer's phone: the
+ * certificate is generated from the saved field record, stored as the original, and signed by both in one
+ * go, with the same signing record as a link signature. The signed copy stays with the project's documents.
+ */
+export async function signCertificateInPerson({
+  viewer,
+  projectId,
+  input,
+  client,
+}: {
+  viewer: Viewer;
+  projectId: string;
+  input: Omit<SignCertificateInPersonInput, "customer"> & { customer: SignCertificateInPersonInput["customer"] & { email: string } };
+  client: ClientInfo;
+}): Promise<{ requestId: string }> {
+  const project = await getProjectById({ viewer, projectId });
+  if (!can(viewer, "field:record", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null }))
+    throw new AppError("FORBIDDEN", "Only the project's installer and the office record the field work.");
+  const [organization, certificate] = await Promise.all([
+    getOrganization({ viewer }),
+    buildCommissioningDocumentInput({ viewer, projectId, kind: "certificate" }),
+  ]);
+  const bytes = await renderCommissioningPdf(certificate);
+  await assertBlocksFor(bytes, ["installer", "customer"]);
+  const original = await storePdf(projectId, "completion-certificate", bytes);
+  const now = new Date();
+  const consented = (iso?: string) => (iso && new Date(iso) <= now ? new Date(iso) : now);
+  try {
+    return await db().transaction(async (transaction) => {
+      const { requestId, signerIds } = await createInPersonRequest(
+        {
+          viewer,
+          projectId,
+          document: {
+            kind: "completion-certificate",
+            title: SIGNED_DOCUMENT_LABELS["completion-certificate"],
+            originalKey: original.key,
+            originalSha256: original.sha256,
+          },
+          signers: [
+            { role: "installer", name: input.installer.name, email: viewer.email },
+            { role: "customer", name: input.customer.name, email: input.customer.email },
+          ],
+        },
+        transaction,
+      );
+      const locked = await lockSignatureRequest(requestId, transaction);
+      await signLocked(
+        locked,
+        organization,
+        [
+          {
+            signerId: signerIds[0]!,
+            role: "installer",
+            name: input.installer.name,
+            email: viewer.email,
+            mark: input.installer.mark,
+            client,
+            consentedAt: consented(input.installer.consentedAt),
+          },
+          {
+            signerId: signerIds[1]!,
+            role: "customer",
+            name: input.customer.name,
+            email: input.customer.email,
+            mark: input.customer.mark,
+            client,
+            consentedAt: consented(input.customer.consentedAt),
+          },
+        ],
+        transaction,
+      );
+      return { requestId };
+    });
+  } catch (error) {
+    await deleteObject(original.key).catch(() => undefined);
+    throw error;
+  }
 }

@@ -1,13 +1,7 @@
-import { spawnSync } from "node:child_process";
 import { createHash } from "node:crypto";
-import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
-import { expect, test, type Browser, type Page } from "@playwright/test";
-import { PDFArray, PDFDict, PDFDocument, PDFName, PDFNumber, PDFString, PDFHexString } from "pdf-lib";
-import { PDFParse } from "pdf-parse";
-import sharp from "sharp";
+import { expect, test, type Browser } from "@playwright/test";
 import { generatePacket } from "../support/packets";
+import { drawSignature, inkIn, pdfText, signatureBlock } from "../support/signing";
 import { DEMO, listProjectsAs, mailboxFor, signIn } from "../support/session";
 
 const sha256 = (bytes: Uint8Array) => createHash("sha256").update(bytes).digest("hex");
@@ -26,63 +20,6 @@ async function mailedLink(browser: Browser, to: string): Promise<string> {
     .getAttribute("href");
   await inbox.context().close();
   return new URL(href!).pathname;
-}
-
-/** Where the customer's signature block is in a generated PDF: its page and box in points (from the form field the template puts there). */
-async function customerBlock(bytes: Uint8Array) {
-  const doc = await PDFDocument.load(bytes);
-  for (const [pageIndex, page] of doc.getPages().entries()) {
-    const annots = page.node.lookupMaybe(PDFName.of("Annots"), PDFArray);
-    for (let i = 0; i < (annots?.size() ?? 0); i++) {
-      const widget = annots!.lookup(i, PDFDict);
-      const t = widget.lookup(PDFName.of("T"));
-      if (!(t instanceof PDFString || t instanceof PDFHexString) || t.decodeText() !== "signature.customer") continue;
-      const rect = widget.lookup(PDFName.of("Rect"), PDFArray);
-      const [x1, y1, x2, y2] = [0, 1, 2, 3].map((k) => rect.lookup(k, PDFNumber).asNumber());
-      return {
-        pageIndex,
-        pageHeight: page.getHeight(),
-        x: Math.min(x1!, x2!),
-        y: Math.min(y1!, y2!),
-        width: Math.abs(x2! - x1!),
-        height: Math.abs(y2! - y1!),
-      };
-    }
-  }
-  throw new Error("no customer signature block");
-}
-
-/** Dark pixels inside a box of one page, rendered at 72 dpi (one pixel per point) with poppler's pdftoppm. */
-async function inkIn(pdf: Uint8Array, box: Awaited<ReturnType<typeof customerBlock>>) {
-  const dir = mkdtempSync(path.join(tmpdir(), "ohmstead-ink-"));
-  writeFileSync(path.join(dir, "in.pdf"), pdf);
-  const page = String(box.pageIndex + 1);
-  const run = spawnSync("pdftoppm", ["-png", "-r", "72", "-f", page, "-l", page, "-singlefile", "in.pdf", "page"], { cwd: dir });
-  expect(run.status, String(run.stderr)).toBe(0);
-  const { data, info } = await sharp(readFileSync(path.join(dir, "page.png")))
-    .extract({
-      left: Math.round(box.x),
-      top: Math.round(box.pageHeight - box.y - box.height),
-      width: Math.round(box.width),
-      height: Math.round(box.height),
-    })
-    .greyscale()
-    .raw()
-    .toBuffer({ resolveWithObject: true });
-  let dark = 0;
-  for (let i = 0; i < info.width * info.height; i++) if (data[i]! < 128) dark++;
-  return dark;
-}
-
-/** Draws a looping stroke across the canvas with the mouse. */
-async function drawSignature(page: Page) {
-  const canvas = page.getByTestId("signature-canvas");
-  const box = (await canvas.boundingBox())!;
-  await page.mouse.move(box.x + box.width * 0.1, box.y + box.height * 0.6);
-  await page.mouse.down();
-  for (let i = 1; i <= 24; i++)
-    await page.mouse.move(box.x + box.width * (0.1 + 0.03 * i), box.y + box.height * (0.5 + 0.25 * Math.sin(i / 2)), { steps: 2 });
-  await page.mouse.up();
 }
 
 test("coordinator asks the customer to sign Rev 1's interconnection application; the customer signs by link without an account", async ({
@@ -140,15 +77,13 @@ test("coordinator asks the customer to sign Rev 1's interconnection application;
   await page.reload();
   const requestId = (await request.getByRole("link", { name: "As generated (PDF)" }).getAttribute("href"))!.split("/")[4];
   const original = new Uint8Array(await (await page.request.get(`/api/v1/signature-requests/${requestId}/original`)).body());
-  const parser = new PDFParse({ data: signed.slice() });
-  const text = (await parser.getText()).text.replace(/\s+/g, " ");
-  await parser.destroy();
+  const text = await pdfText(signed);
   expect(text).toContain("Signing record");
   expect(text).toContain(`Customer: ${project.customerName}`);
   expect(text).toContain(sha256(original));
   const fingerprints = [...new Set(text.match(/\b[0-9a-f]{64}\b/g))];
   expect(fingerprints).toHaveLength(2);
-  const block = await customerBlock(original);
+  const block = await signatureBlock(original, "signature.customer");
   expect(await inkIn(original, block)).toBe(0);
   expect(await inkIn(signed, block)).toBeGreaterThan(20);
 

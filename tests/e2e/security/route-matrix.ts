@@ -300,6 +300,18 @@ export const ACTIONS: Record<string, Entry> = {
     page: (t) => `/projects/${t.projectId}/documents`,
     args: (t) => [{ signerId: t.signerId }],
   },
+  [`${A}/projects/[projectId]/field/signing-actions.ts#signCertificateInPersonAction`]: {
+    scope: "project",
+    roles: ALL,
+    page: (t) => `/projects/${t.projectId}/field`,
+    args: (t) => [
+      {
+        projectId: t.projectId,
+        installer: { name: "Stolen Crew", agreed: true, mark: { kind: "typed", name: "Stolen Crew" } },
+        customer: { name: "Stolen Owner", agreed: true, mark: { kind: "typed", name: "Stolen Owner" } },
+      },
+    ],
+  },
   [`${A}/projects/[projectId]/fees/actions.ts#payFeesAction`]: {
     scope: "project",
     roles: OFFICE,
