@@ -15,7 +15,8 @@ const s = StyleSheet.create({
   lead: { fontSize: 9.5, lineHeight: 1.4, marginBottom: 4 },
   item: { fontSize: 9.5, lineHeight: 1.4, marginBottom: 3, marginLeft: 12 },
   caution: { fontSize: 8, lineHeight: 1.35, marginBottom: 2 },
-  block: { marginTop: 6, padding: 8, borderWidth: 0.8, borderColor: COLORS.rule },
+  blocks: { flexDirection: "row", marginHorizontal: -4 },
+  block: { flex: 1, marginHorizontal: 4, marginTop: 4, padding: 8, borderWidth: 0.8, borderColor: COLORS.rule },
   blockTitle: { fontSize: 9.5, fontWeight: 700 },
   footer: { fontSize: 7, color: COLORS.inkFaint },
 });
@@ -84,14 +85,19 @@ export function AgentAuthorizationLetter({ facts }: { facts: AgentAuthorizationF
           ))}
         </Notice>
         <Section title="4  Signatures">
-          <OwnerBlock title={facts.ownerBlock.title} printedName={facts.ownerBlock.printedName} field={SIGNATURE_FIELDS.customer} />
-          {facts.secondOwnerBlock ? (
-            <OwnerBlock
-              title={facts.secondOwnerBlock.title}
-              printedName={facts.secondOwnerBlock.printedName}
-              field={SIGNATURE_FIELDS.secondOwner}
-            />
-          ) : null}
+          {/* Side by side: with a second owner the letter still fits one page. */}
+          <View style={s.blocks} wrap={false}>
+            <OwnerBlock title={facts.ownerBlock.title} printedName={facts.ownerBlock.printedName} field={SIGNATURE_FIELDS.customer} />
+            {facts.secondOwnerBlock ? (
+              <OwnerBlock
+                title={facts.secondOwnerBlock.title}
+                printedName={facts.secondOwnerBlock.printedName}
+                field={SIGNATURE_FIELDS.secondOwner}
+              />
+            ) : (
+              <View style={{ flex: 1, marginHorizontal: 4 }} />
+            )}
+          </View>
         </Section>
       </LetterPage>
     </Document>

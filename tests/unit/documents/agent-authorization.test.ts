@@ -44,8 +44,12 @@ describe("agent authorization letter", () => {
     { secondOwnerName: null, roles: ["customer"] },
     { secondOwnerName: "Oskar Farrow-Lake", roles: ["customer", "secondOwner"] },
   ])("has a signature block for each owner (second owner: $secondOwnerName)", async ({ secondOwnerName, roles }) => {
-    const blocks = await findSignatureBlocks(await renderAgentAuthorizationPdf(input({ secondOwnerName })));
+    const bytes = await renderAgentAuthorizationPdf(input({ secondOwnerName }));
+    if (process.env.KEEP_PDF && secondOwnerName) writeFileSync(process.env.KEEP_PDF.replace(".pdf", "-two.pdf"), bytes);
+    const blocks = await findSignatureBlocks(bytes);
     expect(Object.keys(blocks).sort()).toEqual([...roles].sort());
+    // One page, however many owners sign.
+    expect((await pageTexts(bytes)).length).toBe(1);
     for (const box of Object.values(blocks)) expect(box!.width).toBeGreaterThan(100);
   });
 
