@@ -58,6 +58,8 @@ export async function inkIn(pdf: Uint8Array, box: Awaited<ReturnType<typeof sign
 /** Draws a looping stroke across a signature canvas with the mouse. */
 export async function drawSignature(page: Page, within: Page | Locator = page) {
   const canvas = within.getByTestId("signature-canvas");
+  // The mouse moves in viewport coordinates: the whole pad must be on screen first.
+  await canvas.scrollIntoViewIfNeeded();
   const box = (await canvas.boundingBox())!;
   await page.mouse.move(box.x + box.width * 0.1, box.y + box.height * 0.6);
   await page.mouse.down();
