@@ -5,8 +5,8 @@ const root = path.dirname(fileURLToPath(import.meta.url));
 
 /** @type {import('next').NextConfig} */
 const nextConfig = {
-  // Sequelize loads its dialect with a dynamic require that bundlers cannot follow.
-  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "pg-boss"],
+  // Sequelize loads its dialect with a dynamic require that bundlers cannot follow; pdf-parse loads pdf.js and a native canvas.
+  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "pg-boss", "pdf-parse"],
   // A lockfile in a parent folder would otherwise make Turbopack guess the workspace root.
   turbopack: { root },
   // A second build folder lets a second test run build beside the first (see OHMSTEAD_PORT_OFFSET).
@@ -29,8 +29,8 @@ const nextConfig = {
         source: "/projects/:projectId/field",
         headers: [{ key: "Permissions-Policy", value: "camera=(self), microphone=(), geolocation=(), payment=(), usb=()" }],
       },
-      // Inspector links and calendar feeds are private by their token: keep them out of search indexes and out of Referer headers.
-      ...["/share/:path*", "/calendar/:path*"].map((source) => ({
+      // Inspector links, calendar feeds and signing links are private by their token: keep them out of search indexes and out of Referer headers.
+      ...["/share/:path*", "/calendar/:path*", "/sign/:path*"].map((source) => ({
         source,
         headers: [
           { key: "X-Robots-Tag", value: "noindex, nofollow" },

@@ -26,6 +26,9 @@ import { ShareLinkAccess } from "./share-link-access";
 import { ShareLinkMiss } from "./share-link-miss";
 import { ShareLinkPacket } from "./share-link-packet";
 import { SignInAttempt } from "./sign-in-attempt";
+import { SignatureLinkAccess } from "./signature-link-access";
+import { SignatureRequest } from "./signature-request";
+import { SignatureSigner } from "./signature-signer";
 import { StageChange } from "./stage-change";
 import { StorageRemoval } from "./storage-removal";
 import { User } from "./user";
@@ -52,6 +55,7 @@ export { CommissioningRecord, ProjectFile, StorageRemoval };
 export { FeeSchedule, Payment, PaymentLine, ProcessorEvent, Refund };
 export { CorrectionRound, Filing, FilingItem, Inspection };
 export { DeskDigest };
+export { SignatureLinkAccess, SignatureRequest, SignatureSigner };
 
 let initialized: Sequelize | null = null;
 
@@ -108,4 +112,8 @@ export function initModels(sequelize: Sequelize) {
   CorrectionRound.hasMany(FilingItem, { as: "items", foreignKey: "roundId" });
   Inspection.hasMany(FilingItem, { as: "items", foreignKey: "inspectionId" });
   Project.hasMany(Filing, { as: "filings", foreignKey: "projectId" });
+  for (const model of [SignatureRequest, SignatureSigner, SignatureLinkAccess]) model.initModel(sequelize);
+  SignatureRequest.hasMany(SignatureSigner, { as: "signers", foreignKey: "signatureRequestId" });
+  SignatureSigner.belongsTo(SignatureRequest, { as: "request", foreignKey: "signatureRequestId" });
+  SignatureRequest.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
 }

@@ -21,7 +21,7 @@ export const DESK_ROWS_SHOWN = 8;
 /** Rows a section lists in the morning digest; the rest are counted and the e-mail links to the desk. */
 export const DIGEST_ROWS_SHOWN = 15;
 
-export const DESK_SECTIONS = ["followUps", "corrections", "inspections", "lapsing", "pastUsual"] as const;
+export const DESK_SECTIONS = ["followUps", "corrections", "inspections", "lapsing", "pastUsual", "signatures"] as const;
 export type DeskSection = (typeof DESK_SECTIONS)[number];
 
 export const DESK_SECTION_TITLES: Record<DeskSection, string> = {
@@ -30,6 +30,7 @@ export const DESK_SECTION_TITLES: Record<DeskSection, string> = {
   inspections: "Inspections in the next seven days",
   lapsing: "Permits about to lapse",
   pastUsual: "Past the authority's usual time",
+  signatures: "Signatures not given yet",
 };
 
 /** One filing as the desk reads it. Days are the organization's calendar days (YYYY-MM-DD). */
@@ -52,11 +53,29 @@ export type DeskFiling = {
   inspections: { id: string; kind: InspectionKind; scheduledFor: string | null; timeWindow: string; result: InspectionResult | null }[];
 };
 
+/** A signing link still waiting for its signer (sent or opened, not expired), as the desk reads it. */
+export type DeskSignature = {
+  signerId: string;
+  projectId: string;
+  projectNumber: number;
+  customerName: string;
+  documentTitle: string;
+  signerName: string;
+  roleLabel: string;
+  /** The day the link was sent (or last sent again), and the day it expires, in the organization's zone. */
+  sentDay: string;
+  expiresDay: string;
+  opened: boolean;
+};
+
 export type DeskRow = {
   section: DeskSection;
   /** Stable key of the row: the digest and the page list the same keys for the same day. */
   key: string;
-  filingId: string;
+  /** The filing the row is about; null for a row about a signature. */
+  filingId: string | null;
+  /** Where in the app the row's matter is handled (a path, no host). */
+  path: string;
   projectId: string;
   projectNumber: number;
   customerName: string;
@@ -102,6 +121,7 @@ function rowOf(
     section,
     key: `${section}:${part.key ?? filing.filingId}`,
     filingId: filing.filingId,
+    path: `/projects/${filing.projectId}/filings#filing-${filing.filingId}`,
     projectId: filing.projectId,
     projectNumber: filing.projectNumber,
     customerName: filing.customerName,
@@ -119,9 +139,10 @@ const filingName = (f: DeskFiling) => FILING_KIND_LABELS[f.kind].toLowerCase();
  * the office has not answered (oldest first, with their open items); inspections booked from today through
  * the next six days (soonest first); permits that lapse within a month without a passed final inspection,
  * or have lapsed (soonest first); filings in an authority's hands longer than its usual review time
- * (furthest past it first). Withdrawn filings are never listed.
+ * (furthest past it first); signing links still waiting for their signer (oldest first). Withdrawn filings
+ * are never listed.
  */
-export function deskFor(filings: readonly DeskFiling[], today: string): Desk {
+export function deskFor(filings: readonly DeskFiling[], today: string, signatures: readonly DeskSignature[] = []): Desk {
   const live = filings.filter((f) => f.status !== "withdrawn");
   const lastInspectionDay = addCalendarDays(today, INSPECTION_LOOKAHEAD_DAYS - 1);
   const lapseHorizon = addCalendarDays(today, PERMIT_LAPSE_NOTICE_DAYS);
@@ -190,6 +211,22 @@ export function deskFor(filings: readonly DeskFiling[], today: string): Desk {
       }),
     );
 
+  const unsigned = signatures
+    .filter((x) => x.expiresDay >= today)
+    .map((x): DeskRow => ({
+      section: "signatures",
+      key: `signatures:${x.signerId}`,
+      filingId: null,
+      path: `/projects/${x.projectId}/documents`,
+      projectId: x.projectId,
+      projectNumber: x.projectNumber,
+      customerName: x.customerName,
+      what: `${x.documentTitle}: not signed by ${x.signerName} yet${x.opened ? " (opened)" : ""}`,
+      toWhom: `${x.roleLabel}, link until ${x.expiresDay}`,
+      since: x.sentDay,
+      days: daysBetween(x.sentDay, today),
+    }));
+
   const oldestFirst = (a: DeskRow, b: DeskRow) => a.since.localeCompare(b.since) || a.projectNumber - b.projectNumber;
   return {
     followUps: followUps.sort(oldestFirst),
@@ -197,6 +234,7 @@ export function deskFor(filings: readonly DeskFiling[], today: string): Desk {
     inspections: inspections.sort(oldestFirst),
     lapsing: lapsing.sort(oldestFirst),
     pastUsual,
+    signatures: unsigned.sort(oldestFirst),
   };
 }
 

@@ -31,7 +31,8 @@ export type Permission =
   | "profile:edit"
   | "organization:edit"
   | "reports:view"
-  | "projects:import";
+  | "projects:import"
+  | "signatures:request";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
   admin: [
@@ -56,6 +57,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "organization:edit",
     "reports:view",
     "projects:import",
+    "signatures:request",
   ],
   coordinator: [
     "project:view",
@@ -72,6 +74,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "profile:edit",
     "reports:view",
     "projects:import",
+    "signatures:request",
   ],
   installer: ["project:view", "design:review", "field:record", "profile:edit"],
 };

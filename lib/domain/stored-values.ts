@@ -45,3 +45,22 @@ export type { FilingKind, FilingStatus, SubmissionChannel, InspectionKind, Inspe
 export type HoldState = "on_hold" | "cancelled";
 /** Whether a stage change came from the office's hand or from the facts of the filings. */
 export type StageChangeCause = "hand" | "facts";
+
+/** What a signature request asks to be signed: a packet revision's application, the agent letter, or the certificate. */
+export const SIGNED_DOCUMENT_KINDS = ["interconnection-application", "agent-authorization", "completion-certificate"] as const;
+export type SignedDocumentKind = (typeof SIGNED_DOCUMENT_KINDS)[number];
+
+/** Whose signature a signer gives, and so which block of the document they sign. */
+export const SIGNER_ROLES = ["customer", "second-owner", "installer"] as const;
+export type SignerRole = (typeof SIGNER_ROLES)[number];
+
+/** A signer's stored state; "expired" is not stored, it follows from the expiry of a link not yet answered. */
+export const SIGNER_STATUSES = ["sent", "opened", "signed", "declined", "revoked"] as const;
+export type SignerStatus = (typeof SIGNER_STATUSES)[number];
+
+/** How the signer was reached: their own link, or in person on a signed-in phone. */
+export type SignerChannel = "link" | "in-person";
+
+export type SignatureMarkKind = "drawn" | "typed";
+
+export type SigningAccessKind = "view" | "page" | "download" | "sign" | "decline";

@@ -21,6 +21,8 @@ export const ChangeFilingStatusInput = z.object({
   channel: z.preprocess(blankToUndefined, z.enum(SUBMISSION_CHANNELS, { error: "Choose how it was sent" }).optional()),
   sentTo: optionalText(200),
   note: optionalText(1000),
+  /** Why an interconnection application goes without the customer's completed signature (audited). */
+  unsignedReason: safeString().trim().max(1000, "At most 1000 characters").optional(),
 });
 export type ChangeFilingStatusInput = z.infer<typeof ChangeFilingStatusInput>;
 

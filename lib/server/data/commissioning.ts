@@ -17,7 +17,7 @@ import { CommissioningReadings, SaveCommissioningInput } from "@/lib/schemas/com
 import type { CommissioningStatus } from "@/lib/domain/stored-values";
 import { db } from "../db";
 import { recordAudit } from "./audit";
-import { getOrganization } from "./organizations";
+import { documentOrganization, getOrganization } from "./organizations";
 import { getReviewedDesign } from "./reviewed-design";
 import { getProjectById } from "./projects";
 import { refreshProjectFacts } from "./project-facts";
@@ -174,12 +174,7 @@ export async function buildCommissioningDocumentInput({
   return {
     kind,
     generatedAt: new Date().toISOString(),
-    organization: {
-      name: organization.name,
-      licenseNumber: organization.licenseNumber,
-      phone: organization.phone,
-      timeZone: organization.timeZone,
-    },
+    organization: documentOrganization(organization),
     project: {
       number: input.project.number,
       customerName: input.project.customerName,

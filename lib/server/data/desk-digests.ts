@@ -3,12 +3,12 @@ import { QueryTypes } from "sequelize";
 import { DeskDigest, Organization, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { AppError } from "@/lib/errors";
-import { DIGEST_ROWS_SHOWN, DESK_SECTIONS, DESK_SECTION_TITLES, deskDayText, deskFor, type Desk, type DeskRow } from "@/lib/domain/desk";
+import { DIGEST_ROWS_SHOWN, DESK_SECTIONS, DESK_SECTION_TITLES, deskDayText, type Desk, type DeskRow } from "@/lib/domain/desk";
 import { calendarDayText } from "@/lib/domain/time-zones";
 import { deskDigestEmail } from "@/templates/email/desk-digest";
 import { db } from "../db";
 import { env } from "../env";
-import { listDeskFilings } from "./desk";
+import { deskOf } from "./desk";
 import { enqueueMail } from "./outbox";
 
 export type DigestRecipient = { viewer: Viewer; timeZone: string };
@@ -36,8 +36,7 @@ export async function listDigestRecipients({ organizationIds }: { organizationId
 }
 
 /** The link a desk row opens: the filings page, at the filing's card. */
-export const filingUrl = (row: Pick<DeskRow, "projectId" | "filingId">) =>
-  `${env().APP_URL}/projects/${row.projectId}/filings#filing-${row.filingId}`;
+export const filingUrl = (row: Pick<DeskRow, "path">) => `${env().APP_URL}${row.path}`;
 
 /** One line of the digest: the project, what is owed, to whom, since when. */
 export function digestLine(row: DeskRow): string {
@@ -66,7 +65,7 @@ function digestMail(desk: Desk, today: string) {
 export async function sendDeskDigest({ recipient, today }: { recipient: DigestRecipient; today: string }): Promise<DigestOutcome> {
   const sequelize = db();
   const { viewer, timeZone } = recipient;
-  const desk = deskFor(await listDeskFilings({ viewer, timeZone, today }), today);
+  const desk = await deskOf({ viewer, timeZone, today });
   const count = DESK_SECTIONS.reduce((n, s) => n + desk[s].length, 0);
   return sequelize.transaction(async (transaction) => {
     const claimed = await sequelize.query<{ id: string }>(

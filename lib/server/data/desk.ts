@@ -2,7 +2,16 @@ import "server-only";
 import { QueryTypes } from "sequelize";
 import { Jurisdiction, Utility } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
-import { INSPECTION_LOOKAHEAD_DAYS, PERMIT_LAPSE_NOTICE_DAYS, deskFor, type Desk, type DeskFiling } from "@/lib/domain/desk";
+import {
+  INSPECTION_LOOKAHEAD_DAYS,
+  PERMIT_LAPSE_NOTICE_DAYS,
+  deskFor,
+  type Desk,
+  type DeskFiling,
+  type DeskSignature,
+} from "@/lib/domain/desk";
+import { SIGNED_DOCUMENT_LABELS, SIGNER_ROLE_LABELS } from "@/lib/domain/signature-requests";
+import type { SignedDocumentKind, SignerRole } from "@/lib/domain/stored-values";
 import { WITH_THE_AUTHORITY } from "@/lib/domain/filings";
 import { addCalendarDays, localIsoDate } from "@/lib/domain/time-zones";
 import { AppError } from "@/lib/errors";
@@ -91,5 +100,58 @@ export async function getDesk({
   if (!can(viewer, "desk:view")) throw new AppError("FORBIDDEN", "The desk lists the office's work.");
   const { timeZone } = await getOrganization({ viewer });
   const day = today ?? localIsoDate(now.toISOString(), timeZone);
-  return { today: day, desk: deskFor(await listDeskFilings({ viewer, timeZone, today: day }), day) };
+  return { today: day, desk: await deskOf({ viewer, timeZone, today: day }) };
+}
+
+/** The desk rules applied to the viewer's filings and unsigned links of one day (the page and the digest agree). */
+export async function deskOf({ viewer, timeZone, today }: { viewer: Viewer; timeZone: string; today: string }): Promise<Desk> {
+  const [filings, signatures] = await Promise.all([listDeskFilings({ viewer, timeZone, today }), listUnsignedLinks({ viewer, timeZone })]);
+  return deskFor(filings, today, signatures);
+}
+
+/** How many unsigned links the desk lists at most: the oldest, which need chasing first. */
+export const DESK_SIGNATURE_LIMIT = 50;
+
+/**
+ * Signing links of the viewer's projects that still wait for their signer (sent or opened, not expired),
+ * oldest first: one indexed query with a limit.
+ */
+export async function listUnsignedLinks({ viewer, timeZone }: { viewer: Viewer; timeZone: string }): Promise<DeskSignature[]> {
+  const sequelize = db();
+  const own = viewer.role === "admin" ? "" : "and p.coordinator_id = :viewerId";
+  const rows = await sequelize.query<{
+    signer_id: string;
+    project_id: string;
+    number: number;
+    customer_name: string;
+    document_kind: SignedDocumentKind;
+    name: string;
+    role: SignerRole;
+    sent_at: Date;
+    expires_at: Date;
+    status: string;
+  }>(
+    `select s.id as signer_id, p.id as project_id, p.number, p.customer_name, r.document_kind, s.name, s.role,
+            coalesce(s.reminded_at, s.created_at) as sent_at, s.expires_at, s.status
+       from signature_signers s
+       join signature_requests r on r.id = s.signature_request_id
+       join projects p on p.id = r.project_id
+      where s.organization_id = :organizationId and s.status in ('sent','opened') and s.expires_at > now()
+        and p.hold_state is null ${own}
+      order by sent_at asc
+      limit ${DESK_SIGNATURE_LIMIT}`,
+    { type: QueryTypes.SELECT, replacements: { organizationId: viewer.organizationId, viewerId: viewer.id } },
+  );
+  return rows.map((r) => ({
+    signerId: r.signer_id,
+    projectId: r.project_id,
+    projectNumber: r.number,
+    customerName: r.customer_name,
+    documentTitle: SIGNED_DOCUMENT_LABELS[r.document_kind],
+    signerName: r.name,
+    roleLabel: SIGNER_ROLE_LABELS[r.role],
+    sentDay: localIsoDate(new Date(r.sent_at).toISOString(), timeZone),
+    expiresDay: localIsoDate(new Date(r.expires_at).toISOString(), timeZone),
+    opened: r.status === "opened",
+  }));
 }

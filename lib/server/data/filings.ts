@@ -42,6 +42,7 @@ import type { AnsweredComment } from "@/lib/documents/packets/changes";
 import type { CorrectionRoundDto, FilingDto, FilingItemDto, InspectionDto, ProjectFilingsDto } from "@/lib/dto/filings";
 import { db } from "../db";
 import { recordAudit } from "./audit";
+import { hasCustomerSignature } from "./customer-signatures";
 import { isUuid } from "./ids";
 import { getOrganization } from "./organizations";
 import { refreshProjectFacts } from "./project-facts";
@@ -383,6 +384,17 @@ export async function changeFilingStatus({
       revisionAtLatestRound: round?.revisionAtReceipt ?? null,
     });
     if (problem) throw invalid(problem.field, problem.message);
+    // The utility asks for the account holder's signature on the application: going without it takes a reason.
+    const sentPacketId = packet?.id ?? filing.packetId;
+    const unsigned =
+      to === "submitted" && filing.kind === "interconnection" && sentPacketId
+        ? !(await hasCustomerSignature({ organizationId: filing.organizationId, packetId: sentPacketId }, transaction))
+        : false;
+    if (unsigned && !input.unsignedReason)
+      throw invalid(
+        "unsignedReason",
+        "The customer has not signed this revision's interconnection application here. Ask for the signature on the Documents page, or say why it goes without.",
+      );
 
     const on = input.on ?? today;
     const { reviewDays, permitValidDays } = await reviewDaysOf(filing, transaction);
@@ -426,6 +438,7 @@ export async function changeFilingStatus({
             : {}),
           ...(filing.packetId !== before.packetId ? { packetId: { before: before.packetId, after: filing.packetId } } : {}),
           ...(input.note ? { note: { before: null, after: input.note } } : {}),
+          ...(unsigned ? { filedWithoutCustomerSignature: { before: null, after: input.unsignedReason } } : {}),
         },
       },
       { transaction },

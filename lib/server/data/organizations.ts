@@ -24,6 +24,14 @@ const loadOrganization = cache(async (organizationId: string): Promise<Organizat
   return toDto(row);
 });
 
+/** What a generated document prints of the company: its name, license, phone and the zone its times are in. */
+export const documentOrganization = ({ name, licenseNumber, phone, timeZone }: OrganizationDto) => ({
+  name,
+  licenseNumber,
+  phone,
+  timeZone,
+});
+
 /** The viewer's own organization. */
 export function getOrganization({ viewer }: { viewer: Viewer }): Promise<OrganizationDto> {
   return loadOrganization(viewer.organizationId);

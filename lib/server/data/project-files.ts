@@ -146,7 +146,11 @@ export async function uploadProjectFile({
 }
 
 /** The project's coordinator, or else the organization's longest-standing active admin, so a notice always has someone to go to. */
-async function coordinatorAddress(viewer: Viewer, coordinatorId: string | null, transaction: Transaction): Promise<string | null> {
+export async function coordinatorAddress(
+  viewer: Pick<Viewer, "organizationId">,
+  coordinatorId: string | null,
+  transaction: Transaction,
+): Promise<string | null> {
   const active = { organizationId: viewer.organizationId, isActive: true };
   const coordinator = coordinatorId ? await User.findOne({ where: { ...active, id: coordinatorId }, transaction }) : null;
   const admin = coordinator

@@ -8,6 +8,7 @@ import { COLORS, base } from "./styles";
 /** The names of the signature fields over the signature lines; signing (lib/documents/signing) finds them by name. */
 export const SIGNATURE_FIELDS = {
   customer: "signature.customer",
+  secondOwner: "signature.second-owner",
   installer: "signature.installer",
 } as const;
 

@@ -99,9 +99,11 @@ test("a permit and an interconnection application run side by side, and the stag
     await form.getByLabel("Packet revision sent").selectOption({ label: "Rev 1" });
     await form.getByLabel("Sent to").fill("Plan review counter");
   });
-  await changeStatus(interconnection, "Submitted", async (form) =>
-    form.getByLabel("Packet revision sent").selectOption({ label: "Rev 1" }),
-  );
+  await changeStatus(interconnection, "Submitted", async (form) => {
+    await form.getByLabel("Packet revision sent").selectOption({ label: "Rev 1" });
+    // Nobody signed Rev 1's application by link here: the coordinator says why it goes anyway.
+    await form.getByLabel("If the customer has not signed it here: why it goes anyway").fill("Signed on the utility's paper form");
+  });
   await expect(page.getByTestId("waiting-on")).toContainText("Waiting on AHJ");
 
   // Approving without the number is refused, and nothing moves.

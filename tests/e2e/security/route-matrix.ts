@@ -62,6 +62,26 @@ export const ROUTES: Record<string, Entry> = {
     roles: ALL,
     exempt: "the link's token is the credential (tests/integration/server/data/share-links)",
   },
+  "GET /sign/:token/gone": {
+    scope: "org",
+    roles: ALL,
+    exempt: "the signing link's token is the credential (tests/integration/server/use-cases/signatures)",
+  },
+  "GET /sign/:token/pages/:pageNumber": {
+    scope: "org",
+    roles: ALL,
+    exempt: "the signing link's token is the credential (tests/integration/server/use-cases/signatures)",
+  },
+  "GET /sign/:token/document": {
+    scope: "org",
+    roles: ALL,
+    exempt: "the signing link's token is the credential (tests/integration/server/use-cases/signatures)",
+  },
+  "GET /api/v1/signature-requests/:requestId/:file": {
+    scope: "project",
+    roles: ALL,
+    url: (t) => `/api/v1/signature-requests/${t.signatureRequestId}/original`,
+  },
   "GET /calendar/:token": {
     scope: "org",
     roles: ALL,
@@ -257,6 +277,41 @@ export const ACTIONS: Record<string, Entry> = {
     page: (t) => `/projects/${t.projectId}/documents`,
     args: (t) => [{ shareLinkId: t.shareLinkId }],
   },
+  [`${A}/projects/[projectId]/documents/signature-actions.ts#requestSignaturesAction`]: {
+    scope: "project",
+    roles: OFFICE,
+    page: (t) => `/projects/${t.projectId}/documents`,
+    args: (t) => [
+      {
+        projectId: t.projectId,
+        request: { document: "agent-authorization", signers: [{ role: "customer", name: "Stolen Name", email: "stolen@mail.example" }] },
+      },
+    ],
+  },
+  [`${A}/projects/[projectId]/documents/signature-actions.ts#remindSignerAction`]: {
+    scope: "project",
+    roles: OFFICE,
+    page: (t) => `/projects/${t.projectId}/documents`,
+    args: (t) => [{ signerId: t.signerId }],
+  },
+  [`${A}/projects/[projectId]/documents/signature-actions.ts#revokeSignerAction`]: {
+    scope: "project",
+    roles: OFFICE,
+    page: (t) => `/projects/${t.projectId}/documents`,
+    args: (t) => [{ signerId: t.signerId }],
+  },
+  [`${A}/projects/[projectId]/field/signing-actions.ts#signCertificateInPersonAction`]: {
+    scope: "project",
+    roles: ALL,
+    page: (t) => `/projects/${t.projectId}/field`,
+    args: (t) => [
+      {
+        projectId: t.projectId,
+        installer: { name: "Stolen Crew", agreed: true, mark: { kind: "typed", name: "Stolen Crew" } },
+        customer: { name: "Stolen Owner", agreed: true, mark: { kind: "typed", name: "Stolen Owner" } },
+      },
+    ],
+  },
   [`${A}/projects/[projectId]/fees/actions.ts#payFeesAction`]: {
     scope: "project",
     roles: OFFICE,
@@ -410,6 +465,16 @@ export const ACTIONS: Record<string, Entry> = {
     page: () => "/settings/users",
     args: (t) => [{ userId: t.userId }],
   },
+  ["app/(sign)/sign/[token]/actions.ts#signDocumentAction"]: {
+    scope: "org",
+    roles: ALL,
+    exempt: "the signing link's token is the credential (tests/integration/server/use-cases/signatures)",
+  },
+  ["app/(sign)/sign/[token]/actions.ts#declineSigningAction"]: {
+    scope: "org",
+    roles: ALL,
+    exempt: "the signing link's token is the credential (tests/integration/server/use-cases/signatures)",
+  },
   ["app/(auth)/invitation/[token]/actions.ts#acceptInvitationAction"]: {
     scope: "org",
     roles: ALL,
@@ -423,6 +488,7 @@ export const PAGES: Record<string, Entry> = {
   "/sign-out": { scope: "org", roles: ALL, exempt: "public sign-out confirmation" },
   "/invitation/:token": { scope: "org", roles: ALL, exempt: "the invitation token is the credential" },
   "/share/:token": { scope: "org", roles: ALL, exempt: "the link's token is the credential" },
+  "/sign/:token": { scope: "org", roles: ALL, exempt: "the signing link's token is the credential" },
   "/dashboard": { scope: "org", roles: ALL, url: () => "/dashboard" },
   "/mailbox": { scope: "org", roles: ADMIN, url: () => "/mailbox" },
   "/profile": { scope: "org", roles: ALL, url: () => "/profile" },

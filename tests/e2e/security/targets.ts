@@ -12,6 +12,9 @@ export type Targets = {
   projectId: string;
   packetId: string;
   shareLinkId: string;
+  /** A signature request on the project's agent authorization letter, and its one signer. */
+  signatureRequestId: string;
+  signerId: string;
   fileId: string;
   /** The project's permit filing (items and inspections are tried with this id too: any id of the company's rows will do). */
   filingId: string;
@@ -96,6 +99,26 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
   expect(shared.result?.ok, shared.text.slice(0, 300)).toBe(true);
   const [{ id: shareLinkId }] = await query<{ id: string }>("select id from share_links where note = $1", [linkNote]);
 
+  // A request for the customer's signature on the agent authorization letter.
+  const asked = await callAction(coordinator, {
+    id: ids.get("app/(app)/projects/[projectId]/documents/signature-actions.ts#requestSignaturesAction")!,
+    page: `/projects/${projectId}/documents`,
+    args: [
+      {
+        projectId,
+        request: {
+          document: "agent-authorization",
+          signers: [{ role: "customer", name: project.customerName, email: project.customerEmail }],
+        },
+      },
+    ],
+  });
+  expect(asked.result?.ok, asked.text.slice(0, 300)).toBe(true);
+  const [{ id: signatureRequestId, signer_id: signerId }] = await query<{ id: string; signer_id: string }>(
+    "select r.id, s.id as signer_id from signature_requests r join signature_signers s on s.signature_request_id = r.id where r.project_id = $1",
+    [projectId],
+  );
+
   // A site photo uploaded by the assigned installer.
   const png = Buffer.from(
     "89504e470d0a1a0a0000000d4948445200000001000000010806000000" +
@@ -165,6 +188,8 @@ export async function makeTargets(browser: Browser): Promise<Targets> {
     projectId,
     packetId,
     shareLinkId,
+    signatureRequestId,
+    signerId,
     fileId,
     filingId: filing!.id,
     inspectionId: inspection!.id,

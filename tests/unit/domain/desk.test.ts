@@ -11,6 +11,7 @@ import {
   deskSectionOf,
   digestDayAt,
   type DeskFiling,
+  type DeskSignature,
 } from "@/lib/domain/desk";
 import { deskDigestEmail } from "@/templates/email/desk-digest";
 
@@ -35,7 +36,7 @@ const filing = (over: Partial<DeskFiling> = {}): DeskFiling => {
     ...over,
   };
 };
-const keys = (rows: { filingId: string }[]) => rows.map((r) => r.filingId);
+const keys = (rows: { filingId: string | null }[]) => rows.map((r) => r.filingId);
 
 describe("calendar days", () => {
   it.each([
@@ -215,5 +216,40 @@ describe("the morning digest's long sections", () => {
     const mail = deskDigestEmail({ dayText: "Dec 7, 2026", deskUrl: "https://portal.example/dashboard", sections: [section(3, 3)] });
     expect(mail.text).not.toContain("more on your desk");
     expect(mail.html).not.toContain("more on your desk");
+  });
+});
+
+describe("signatures not given yet", () => {
+  const link = (over: Partial<DeskSignature> = {}): DeskSignature => ({
+    signerId: "s1",
+    projectId: "p-sign",
+    projectNumber: 40,
+    customerName: "Ottilie Brand-Vane",
+    documentTitle: "Interconnection application",
+    signerName: "Ottilie Brand-Vane",
+    roleLabel: "Customer",
+    sentDay: "2026-12-02",
+    expiresDay: "2026-12-16",
+    opened: false,
+    ...over,
+  });
+
+  it("lists waiting links oldest first, each pointing at the project's documents, until their last day", () => {
+    const desk = deskFor([], TODAY, [
+      link({ signerId: "newer", sentDay: "2026-12-06", opened: true }),
+      link({ signerId: "older" }),
+      link({ signerId: "last-day", sentDay: "2026-12-01", expiresDay: TODAY }),
+      link({ signerId: "expired", sentDay: "2026-11-20", expiresDay: "2026-12-06" }),
+    ]);
+    expect(desk.signatures.map((r) => r.key)).toEqual(["signatures:last-day", "signatures:older", "signatures:newer"]);
+    expect(desk.signatures[0]).toMatchObject({ filingId: null, path: "/projects/p-sign/documents", days: 6 });
+    expect(desk.signatures[2]!.what).toBe("Interconnection application: not signed by Ottilie Brand-Vane yet (opened)");
+    expect(deskIsEmpty(desk)).toBe(false);
+  });
+
+  it("leaves the filing sections as they were", () => {
+    const desk = deskFor([filing({ nextFollowUpOn: TODAY })], TODAY, [link()]);
+    expect(desk.followUps).toHaveLength(1);
+    expect(desk.followUps[0]!.path).toBe(`/projects/${desk.followUps[0]!.projectId}/filings#filing-${desk.followUps[0]!.filingId}`);
   });
 });

@@ -17,6 +17,7 @@ const EMPTY: Record<DeskSection, string> = {
   inspections: "No inspection is booked this week.",
   lapsing: "No permit lapses within a month.",
   pastUsual: "Every authority is within its usual time.",
+  signatures: "No signing link waits for its signer.",
 };
 
 const SINCE: Record<DeskSection, string> = {
@@ -25,10 +26,11 @@ const SINCE: Record<DeskSection, string> = {
   inspections: "Booked for",
   lapsing: "Expires",
   pastUsual: "With them since",
+  signatures: "Sent",
 };
 
 function Row({ row }: { row: DeskRow }) {
-  const href = `/projects/${row.projectId}/filings#filing-${row.filingId}`;
+  const href = row.path;
   return (
     <li
       className="flex flex-wrap items-baseline gap-x-3 gap-y-0.5 border-t border-paper-edge py-2 text-sm first:border-t-0"

@@ -108,7 +108,7 @@ afterAll(async () => {
   await closeDb();
 });
 
-const summary = (rows: { filingId: string; since: string; days: number }[]) => rows.map((r) => [r.filingId, r.since, r.days]);
+const summary = (rows: { filingId: string | null; since: string; days: number }[]) => rows.map((r) => [r.filingId, r.since, r.days]);
 
 describe("the desk", () => {
   it("lists a coordinator's own projects, section by section, for the organization's day", async () => {

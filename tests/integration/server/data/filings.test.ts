@@ -108,9 +108,28 @@ describe("filings", () => {
 
   it("moves a filing nobody sent yet to the project's new AHJ, and leaves one that went in with its authority", async () => {
     const { project, packets, interconnection } = await filedProject();
+    // The customer has not signed Rev 1's application here: filing it is refused until the coordinator says why.
+    const unsigned = {
+      filingId: interconnection.id,
+      status: "submitted" as const,
+      packetId: packets.interconnection1.id,
+      sentTo: "",
+      note: "",
+    };
+    const refused = await changeFilingStatus({ viewer: coordinator(), input: unsigned }).catch((e: AppError) => e);
+    expect(refused).toMatchObject({ code: "INVALID_INPUT", fieldErrors: { unsignedReason: [expect.stringContaining("has not signed")] } });
+    expect((await Filing.findByPk(interconnection.id))!.status).toBe("preparing");
     await changeFilingStatus({
       viewer: coordinator(),
-      input: { filingId: interconnection.id, status: "submitted", packetId: packets.interconnection1.id, sentTo: "", note: "" },
+      input: { ...unsigned, unsignedReason: "Signed on the utility's paper form at the kitchen table" },
+    });
+    const audit = await AuditEvent.findOne({
+      where: { entityId: interconnection.id, action: "filing.status-changed" },
+      order: [["createdAt", "DESC"]],
+    });
+    expect(audit!.changes.filedWithoutCustomerSignature).toEqual({
+      before: null,
+      after: "Signed on the utility's paper form at the kitchen table",
     });
     const ahj = await Jurisdiction.create({
       organizationId: org.organization.id,
@@ -196,6 +215,7 @@ describe("filings", () => {
         channel: "email",
         sentTo: "",
         note: "",
+        unsignedReason: "Customer signed the paper application",
       },
     });
     expect((await stageOf(project.id)).stage).toBe("permit_filed");
@@ -535,7 +555,14 @@ describe("filings", () => {
     expect((await stageOf(project.id)).waitingOn).toBe("ahj"); // the interconnection application still being prepared does not hold it
     await changeFilingStatus({
       viewer: coordinator(),
-      input: { filingId: interconnection.id, status: "submitted", packetId: packets.interconnection1.id, sentTo: "", note: "" },
+      input: {
+        filingId: interconnection.id,
+        status: "submitted",
+        packetId: packets.interconnection1.id,
+        sentTo: "",
+        note: "",
+        unsignedReason: "Customer signed the paper application",
+      },
     });
     expect((await stageOf(project.id)).waitingOn).toBe("ahj");
     await db().transaction(async (transaction) => {

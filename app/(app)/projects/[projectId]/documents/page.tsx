@@ -7,11 +7,16 @@ import { layoutSingleLine } from "@/lib/sld";
 import { getDesignStatus, getEngineDesign } from "@/lib/server/data/designs";
 import { listPackets } from "@/lib/server/data/packets";
 import { listShareLinks, revisionLabel } from "@/lib/server/data/share-links";
+import { listSignatureRequests } from "@/lib/server/data/signature-requests";
+import { SIGNED_DOCUMENT_LABELS } from "@/lib/domain/signature-requests";
 import { loadProjectOr404 } from "@/lib/server/pages";
 import { PacketBoard } from "./_components/packet-board";
 import { SharePanel } from "./_components/share-panel";
+import { SignaturePanel } from "./_components/signature-panel";
+import type { SignableDocument } from "./_components/signature-request-form";
 import { requestPacketAction, retryPacketAction } from "./actions";
 import { createShareLinkAction, revokeShareLinkAction } from "./share-actions";
+import { remindSignerAction, requestSignaturesAction, revokeSignerAction } from "./signature-actions";
 
 export const metadata: Metadata = { title: "Documents" };
 
@@ -25,6 +30,28 @@ export default async function DocumentsPage({ params }: { params: Promise<{ proj
   ]);
   const canShare = can(viewer, "project:edit");
   const shareLinks = canShare ? await listShareLinks({ viewer, projectId: project.id }) : [];
+  const canAskSignatures = can(viewer, "signatures:request");
+  const signatureRequests = canAskSignatures ? await listSignatureRequests({ viewer, projectId: project.id }) : [];
+  const signable: SignableDocument[] = [
+    ...packets
+      .filter((p) => p.kind === "interconnection" && p.status === "ready")
+      .map((p) => ({
+        value: `packet:${p.id}`,
+        kind: "interconnection-application" as const,
+        packetId: p.id,
+        label: `${SIGNED_DOCUMENT_LABELS["interconnection-application"]} (${revisionLabel(p)})`,
+      })),
+    { value: "agent-authorization", kind: "agent-authorization", label: SIGNED_DOCUMENT_LABELS["agent-authorization"] },
+    ...(engine
+      ? [
+          {
+            value: "completion-certificate",
+            kind: "completion-certificate" as const,
+            label: SIGNED_DOCUMENT_LABELS["completion-certificate"],
+          },
+        ]
+      : []),
+  ];
   const shareable = packets.filter((p) => p.status === "ready").map((p) => ({ packetId: p.id, label: revisionLabel(p) }));
   return (
     <div className="space-y-4">
@@ -48,6 +75,15 @@ export default async function DocumentsPage({ params }: { params: Promise<{ proj
         designRevision={design?.revision ?? null}
         actions={{ request: requestPacketAction, retry: retryPacketAction }}
       />
+      {canAskSignatures ? (
+        <SignaturePanel
+          projectId={project.id}
+          documents={signable}
+          customer={{ name: project.customerName, email: project.customerEmail ?? "" }}
+          requests={signatureRequests}
+          actions={{ request: requestSignaturesAction, remind: remindSignerAction, revoke: revokeSignerAction }}
+        />
+      ) : null}
       {canShare ? (
         <SharePanel
           projectId={project.id}

@@ -14,6 +14,10 @@ import { FieldCautions } from "./_components/field-cautions";
 import { FieldInspections } from "./_components/field-inspections";
 import { FieldUploads } from "./_components/field-uploads";
 import { saveCommissioningAction } from "./actions";
+import { CertificateSigning } from "./_components/certificate-signing";
+import { signCertificateInPersonAction } from "./signing-actions";
+import { ELECTRONIC_SIGNATURE_CONSENT } from "@/lib/documents/signing/consent";
+import { listSignatureRequests } from "@/lib/server/data/signature-requests";
 
 export const metadata: Metadata = { title: "Field record" };
 
@@ -29,10 +33,11 @@ async function loadCommissioning(...args: Parameters<typeof getCommissioning>) {
 export default async function FieldPage({ params }: { params: Promise<{ projectId: string }> }) {
   const viewer = await requireUser();
   const project = await loadProjectOr404(viewer, (await params).projectId);
-  const [commissioning, files, filings] = await Promise.all([
+  const [commissioning, files, filings, signatures] = await Promise.all([
     loadCommissioning({ viewer, projectId: project.id }),
     listProjectFiles({ viewer, projectId: project.id }),
     listProjectFilings({ viewer, projectId: project.id }),
+    listSignatureRequests({ viewer, projectId: project.id }),
   ]);
   const mayRecord = can(viewer, "field:record", { organizationId: viewer.organizationId, installerId: project.installer?.id ?? null });
   return (
@@ -56,7 +61,7 @@ export default async function FieldPage({ params }: { params: Promise<{ projectI
           <section className="panel space-y-3" aria-labelledby="documents-heading">
             <h2 id="documents-heading">Certificate and report</h2>
             <p className="text-sm text-ink-soft">
-              Both print the readings as last saved. Sign the certificate on site, then upload it below.
+              Both print the readings as last saved. Sign the certificate on this phone below, or print it, sign it on site and upload it.
             </p>
             <div className="flex flex-wrap gap-2">
               <a
@@ -75,6 +80,25 @@ export default async function FieldPage({ params }: { params: Promise<{ projectI
               </a>
             </div>
           </section>
+          {mayRecord ? (
+            <CertificateSigning
+              projectId={project.id}
+              installerName={project.installer?.name ?? viewer.name}
+              customerName={project.customerName}
+              consent={ELECTRONIC_SIGNATURE_CONSENT}
+              signed={signatures
+                .filter((r) => r.documentKind === "completion-certificate" && r.signedAt)
+                .map((r) => ({
+                  requestId: r.id,
+                  signedAt: r.signedAt!,
+                  signers: r.signers
+                    .filter((s) => s.state === "signed")
+                    .map((s) => s.name)
+                    .join(" and "),
+                }))}
+              sign={signCertificateInPersonAction}
+            />
+          ) : null}
         </>
       ) : (
         <p className="panel text-sm text-ink-soft" data-testid="no-design">

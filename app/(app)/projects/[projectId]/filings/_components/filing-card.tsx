@@ -229,6 +229,7 @@ export function FilingCard(props: Props) {
                 revisions={props.revisions}
                 today={today}
                 change={actions.change}
+                asksCustomerSignature={filing.kind === "interconnection"}
               />
             </Task>
           ) : null}

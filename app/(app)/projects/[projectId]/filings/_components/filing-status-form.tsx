@@ -18,6 +18,7 @@ type Values = {
   channel: string;
   sentTo: string;
   note: string;
+  unsignedReason: string;
 };
 
 /**
@@ -31,6 +32,8 @@ export function FilingStatusForm(props: {
   revisions: { id: string; label: string }[];
   today: string;
   change: typeof changeFilingStatusAction;
+  /** The interconnection application carries the customer's signature: filing it unsigned needs a reason. */
+  asksCustomerSignature?: boolean;
 }) {
   const { filingId, nextStatuses, today } = props;
   const first = nextStatuses[0] ?? "";
@@ -45,6 +48,7 @@ export function FilingStatusForm(props: {
       channel: "portal",
       sentTo: "",
       note: "",
+      unsignedReason: "",
     },
     (raw) => props.change(raw as never),
     (saved) => saved.reset({ ...saved.getValues(), note: "" }),
@@ -114,6 +118,16 @@ export function FilingStatusForm(props: {
             </>
           ) : null}
         </div>
+      ) : null}
+      {status === "submitted" && props.asksCustomerSignature ? (
+        <Field
+          label="If the customer has not signed it here: why it goes anyway"
+          htmlFor={id("unsigned")}
+          error={errors.unsignedReason?.message}
+          hint="Leave empty when the customer signed this revision's application by link"
+        >
+          <input id={id("unsigned")} className="input" {...form.register("unsignedReason")} />
+        </Field>
       ) : null}
       <Field label="Note (optional)" htmlFor={id("note")} error={errors.note?.message}>
         <input id={id("note")} className="input" {...form.register("note")} />
