@@ -1,4 +1,5 @@
 import "server-only";
+import { countSignedCertificates } from "./customer-signatures";
 import { CommissioningRecord, Project, ProjectFile, User } from "@/models";
 import { can, type Viewer } from "@/lib/domain/permissions";
 import { checkCommissioning, commissioningComplete, type CommissioningCompletion } from "@/lib/engineering/commissioning";
@@ -210,10 +211,16 @@ export async function getFieldSummary({ viewer, projectId }: { viewer: Viewer; p
   db();
   await getProjectById({ viewer, projectId });
   const where = { projectId, organizationId: viewer.organizationId };
-  const [record, signedForms, photos] = await Promise.all([
+  const [record, uploadedForms, signedHere, photos] = await Promise.all([
     CommissioningRecord.findOne({ where, attributes: ["status", "completedAt"] }),
     ProjectFile.count({ where: { ...where, kind: "signed-completion" } }),
+    countSignedCertificates(projectId),
     ProjectFile.count({ where: { ...where, kind: "site-photo" } }),
   ]);
-  return { status: record?.status ?? "not-started", completedAt: record?.completedAt?.toISOString() ?? null, signedForms, photos };
+  return {
+    status: record?.status ?? "not-started",
+    completedAt: record?.completedAt?.toISOString() ?? null,
+    signedForms: uploadedForms + signedHere,
+    photos,
+  };
 }

@@ -17,3 +17,17 @@ export async function hasCustomerSignature(
   });
   return Boolean(found);
 }
+
+/**
+ * Certificates of completion of a project that every signer has signed through Ohmstead (on the phone or by
+ * link): each counts as a signed form received, as an uploaded scan of a signed paper form does.
+ */
+export async function countSignedCertificates(projectId: string, transaction?: Transaction): Promise<number> {
+  const requests = await SignatureRequest.findAll({
+    where: { projectId, documentKind: "completion-certificate" },
+    include: [{ model: SignatureSigner, as: "signers", attributes: ["status"] }],
+    attributes: ["id", "signedKey"],
+    transaction,
+  });
+  return requests.filter((r) => r.signedKey && (r.signers ?? []).length > 0 && r.signers!.every((s) => s.status === "signed")).length;
+}

@@ -15,6 +15,7 @@ import { holdOrMergeMail } from "./outbox";
 import { isUuid } from "./ids";
 import { diffFields, recordAudit } from "./audit";
 import { ensureDefaultFilings } from "./filings";
+import { countSignedCertificates } from "./customer-signatures";
 import { readProjectFacts, refreshProjectFacts } from "./project-facts";
 import type { ProjectDto, StageChangeDto } from "@/lib/dto/projects";
 
@@ -312,8 +313,11 @@ export async function updateProject({
 async function fieldWorkMissing(projectId: string, transaction: Transaction): Promise<string | null> {
   const record = await CommissioningRecord.findOne({ where: { projectId }, attributes: ["status"], transaction });
   if (record?.status !== "complete") return "The commissioning record is not complete.";
-  const signed = await ProjectFile.count({ where: { projectId, kind: "signed-completion" }, transaction });
-  return signed ? null : "No signed certificate of completion has been uploaded.";
+  const [uploaded, signedHere] = await Promise.all([
+    ProjectFile.count({ where: { projectId, kind: "signed-completion" }, transaction }),
+    countSignedCertificates(projectId, transaction),
+  ]);
+  return uploaded + signedHere ? null : "No signed certificate of completion has been uploaded or signed.";
 }
 
 /** How long a stage-change e-mail waits for further moves of the same project to join it. */

@@ -9,6 +9,7 @@ import { findSignatureBlocks } from "@/lib/documents/signing/blocks";
 import { getDesk } from "@/lib/server/data/desk";
 import { TOKEN_GUESS_THROTTLE } from "@/lib/server/data/token-guesses";
 import { hasCustomerSignature } from "@/lib/server/data/customer-signatures";
+import { getFieldSummary } from "@/lib/server/data/commissioning";
 import { getLinkSigner, listSignatureRequests, remindSigner, revokeSigner } from "@/lib/server/data/signature-requests";
 import { getObjectBytes, putObject } from "@/lib/server/services/storage";
 import { hashToken } from "@/lib/server/tokens";
@@ -288,5 +289,43 @@ describe("signature requests", () => {
     for (let i = 0; i < TOKEN_GUESS_THROTTLE.maxMisses; i++) await code(getLinkSigner(`guess-${i}-abcdefghijklmnop`, guesser));
     expect(await code(getLinkSigner(token!, guesser))).toMatch(/^LIMIT_EXCEEDED/);
     expect(await code(getLinkSigner(token!, client("192.0.2.100")))).toBe("resolved");
+  });
+});
+
+describe("a certificate signed here counts as the signed form", () => {
+  async function certificate(project: Project, statuses: ("signed" | "sent")[]) {
+    const request = await SignatureRequest.create({
+      organizationId: project.organizationId,
+      projectId: project.id,
+      documentKind: "completion-certificate",
+      packetId: null,
+      title: "Certificate of completion",
+      originalKey: `projects/${project.id}/completion-certificate.pdf`,
+      originalSha256: "0".repeat(64),
+      signedKey: `projects/${project.id}/completion-certificate-signed.pdf`,
+      signedSha256: "1".repeat(64),
+      createdById: null,
+    });
+    const roles = ["installer", "customer"] as const;
+    for (const [i, status] of statuses.entries())
+      await SignatureSigner.create({
+        organizationId: project.organizationId,
+        signatureRequestId: request.id,
+        role: roles[i]!,
+        channel: "in-person",
+        name: `Signer ${i + 1}`,
+        status,
+        signedAt: status === "signed" ? new Date() : null,
+      });
+  }
+
+  it("counts a certificate every signer signed, and not one a signer has still to sign", async () => {
+    const half = await makeProject(org);
+    await certificate(half, ["signed", "sent"]);
+    expect((await getFieldSummary({ viewer: org.viewers.coordinator, projectId: half.id })).signedForms).toBe(0);
+
+    const whole = await makeProject(org);
+    await certificate(whole, ["signed", "signed"]);
+    expect((await getFieldSummary({ viewer: org.viewers.coordinator, projectId: whole.id })).signedForms).toBe(1);
   });
 });
