@@ -1,7 +1,23 @@
-import { expect, test } from "@playwright/test";
+import { expect, test, type Locator, type Page } from "@playwright/test";
+import { byId, enter } from "../support/field-record";
+import { generatePacket } from "../support/packets";
+import { pdfText } from "../support/signing";
 import { DEMO, listProjectsAs, signIn } from "../support/session";
 
-test("coordinator adds DC-coupled batteries with a backup loads panel and sees the storage checks on the Review step", async ({ page }) => {
+/** The text of a packet revision's PDF, fetched through its download link as the browser would. */
+async function packetText(page: Page, card: Locator, revision: number) {
+  const href = await card
+    .getByTestId("packet-revision")
+    .filter({ hasText: `Rev ${revision}` })
+    .getByRole("link", { name: "Download PDF" })
+    .getAttribute("href");
+  return pdfText(new Uint8Array(await (await page.request.get(href!)).body()));
+}
+
+test("coordinator adds DC-coupled batteries with a backup loads panel, sees the storage checks, draws both packets with the storage in them and records the storage part of the field record", async ({
+  page,
+}) => {
+  test.setTimeout(300_000);
   await signIn(page, DEMO.coordinator);
   // A new project in Quillan Springs (NEC 2020) with a demo PV design on a multimode inverter and no battery yet.
   const [source] = await listProjectsAs(page, { q: "Desmond Achterberg" });
@@ -88,4 +104,36 @@ test("coordinator adds DC-coupled batteries with a backup loads panel and sees t
   await expect(page.getByLabel("Units")).toHaveValue("2");
   const saved = await (await page.request.get(`/api/v1/projects/${projectId}/review`)).json();
   expect(saved.storage).toMatchObject({ coupling: "dc", totalUsableKwh: 25.6, pointOfConnectionA: 32 });
+
+  // Both packets carry the storage: the permit's summary and labels, the utility's storage fields.
+  await page.goto(`/projects/${projectId}/documents`);
+  for (const kind of ["permit", "interconnection"] as const) await generatePacket(page, kind, 1);
+  const permit = await packetText(page, page.getByTestId("packet-permit"), 1);
+  expect(permit).toContain("Tarnwick TW-135");
+  expect(permit).toMatch(/25\.6 kWh/);
+  expect(permit).toContain("ENERGY STORAGE SYSTEM DISCONNECT");
+  expect(permit).toContain("Energy storage");
+  expect(permit).not.toContain("No energy storage.");
+  const interconnection = await packetText(page, page.getByTestId("packet-interconnection"), 1);
+  expect(interconnection).toContain("Photovoltaic with energy storage, inverter-based");
+  expect(interconnection).toMatch(/25\.6 kWh, [\d.]+ kW, DC-coupled/);
+
+  // The field record on a phone: the stored-energy cautions above the storage readings, then the readings.
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.goto(`/projects/${projectId}/field`);
+  const step = page.getByTestId("step-storage");
+  await expect(step.getByTestId("storage-cautions")).toContainText("A battery stays energized when the array and the grid are off");
+  await enter(byId(page, "storage.stateOfChargePct"), "76");
+  await expect(page.getByTestId("result-storage-charge")).toHaveAttribute("data-status", "pass");
+  await step.getByRole("group", { name: "Grid supply opened" }).getByLabel("Yes").check();
+  await step.getByRole("group", { name: "Backup loads panel stayed on" }).getByLabel("Yes").check();
+  await expect(page.getByTestId("result-storage-backup")).toHaveAttribute("data-status", "pass");
+  await enter(byId(page, "storage.transferSeconds"), "0");
+  await expect(page.getByTestId("result-storage-transfer-time")).toHaveAttribute("data-status", "pass");
+  await page.getByRole("button", { name: "Save readings" }).click();
+  await expect(page.getByTestId("save-state")).toContainText("Saved");
+  await page.reload();
+  await expect(byId(page, "storage.stateOfChargePct")).toHaveValue("76");
+  await expect(page.getByTestId("result-storage-backup")).toHaveAttribute("data-status", "pass");
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
 });
