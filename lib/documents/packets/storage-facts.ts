@@ -4,6 +4,9 @@ import { formatNumber, formatQuantity } from "../text";
 import type { EquipmentRow, RatingLine } from "./facts";
 import type { PacketInput } from "./input";
 
+/** Words written mid-sentence elsewhere, standing alone in a value cell. */
+const asValue = (words: string) => words.charAt(0).toUpperCase() + words.slice(1);
+
 // What the packets print about a design's batteries: the summary sheet's storage lines, the
 // interconnection application's storage fields, the equipment rows and the battery data sheet.
 // Null for a PV-only design, whose packets print exactly what they printed before storage existed.
@@ -181,7 +184,7 @@ export function storageFacts(input: Pick<PacketInput, "design" | "review">): Sto
       { name: "Nameplate energy", value: kwh(summary.totalNameplateKwh) },
       { name: "Discharge power", value: discharge },
       { name: "Coupling", value: coupled },
-      { name: "Operating mode", value: MODE_WORDS[s.operatingMode] },
+      { name: "Operating mode", value: asValue(MODE_WORDS[s.operatingMode]) },
       { name: "Location", value: locationWords(design) },
       { name: "Backup loads panel", value: backupWords(design) },
       { name: "Export", value: exportLimit },
@@ -199,7 +202,7 @@ export function storageFacts(input: Pick<PacketInput, "design" | "review">): Sto
       { name: "Storage usable energy", value: usable },
       { name: "Storage discharge power", value: discharge },
       { name: "Coupling", value: COUPLING_WORDS[s.coupling] },
-      { name: "Operating mode", value: MODE_WORDS[s.operatingMode] },
+      { name: "Operating mode", value: asValue(MODE_WORDS[s.operatingMode]) },
       { name: "Export", value: exportLimit },
       { name: "Export limit control method", value: shortControlMethod(design, summary) },
       ...(s.importLimitKw !== undefined ? [{ name: "Import limit", value: formatQuantity(s.importLimitKw, "kW") }] : []),

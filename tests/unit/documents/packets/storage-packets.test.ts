@@ -36,7 +36,7 @@ describe("permit packet with DC-coupled storage and a backup loads panel", () =>
       "27 kWh", // 2 × 13.5 kWh nameplate
       "7.6 kW", // 2 × 6 kW, limited by the 7.6 kW hybrid inverter
       "DC-coupled through the hybrid (multimode) inverter",
-      "self-consumption",
+      "Self-consumption",
       "garage: 2 × 13.5 kWh",
       "125 A busbar, fed by the 32 A stand-alone output",
       "Limited to 5 kW",
@@ -97,7 +97,7 @@ describe("interconnection packet with storage", () => {
         "25.2 kWh",
         "7.6 kW",
         "DC-coupled",
-        "self-consumption",
+        "Self-consumption",
         "Limited to 5 kW",
         "Listed PCS, 24 A (705.13)",
         "Yes, 125 A panel",
