@@ -2,10 +2,11 @@ import { createHash } from "node:crypto";
 import { createElement } from "react";
 import { PDFDocument, type PDFPage } from "pdf-lib";
 import { SigningRecord } from "@/templates/pdf/signing/signing-record";
-import { TypedSignature } from "@/templates/pdf/signing/typed-signature";
+import { FilledLine, TypedSignature } from "@/templates/pdf/signing/typed-signature";
+import { signedDateField, signedNameField } from "@/templates/pdf/shared/signature-line";
 import { renderPdf } from "../render";
 import { printable, printableDeep } from "../text";
-import { removeSignatureFields } from "./blocks";
+import { fieldBoxes, removeSignatureFields } from "./blocks";
 import { signingRecordFacts } from "./facts";
 import type { SignatureBox, SignedDocument, SigningInput } from "./input";
 
@@ -26,6 +27,17 @@ async function drawSignature(doc: PDFDocument, page: PDFPage, signer: SigningInp
   }
   const typed = await renderPdf(createElement(TypedSignature, { name: printable(mark.name), width: box.width, height: box.height }));
   const [embedded] = await doc.embedPdf(typed);
+  page.drawPage(embedded!, { x: box.x, y: box.y, width: box.width, height: box.height });
+}
+
+/** The calendar day of an instant in the organization's zone, as a US form's date line takes it: 12/05/2026. */
+function signedDay(iso: string, timeZone: string) {
+  return new Intl.DateTimeFormat("en-US", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(iso));
+}
+
+async function fillLine(doc: PDFDocument, page: PDFPage, box: SignatureBox, text: string) {
+  const drawn = await renderPdf(createElement(FilledLine, { text: printable(text), width: box.width, height: box.height }));
+  const [embedded] = await doc.embedPdf(drawn);
   page.drawPage(embedded!, { x: box.x, y: box.y, width: box.width, height: box.height });
 }
 
@@ -52,10 +64,24 @@ export async function signPdf(original: Uint8Array, input: SigningInput): Promis
       throw new RangeError(`The signature block of ${signer.role} lies outside the document.`);
     await drawSignature(doc, page, signer);
   }
-  removeSignatureFields(
-    doc,
-    input.signers.flatMap((s) => (s.field ? [s.field] : [])),
+  // The lines beside each signature the document left to fill: the day signed, and a blank printed name.
+  const companions = input.signers.flatMap((s) =>
+    s.field
+      ? [
+          { field: signedDateField(s.field), text: signedDay(s.signedAt, input.timeZone) },
+          { field: signedNameField(s.field), text: s.name },
+        ]
+      : [],
   );
+  const boxes = fieldBoxes(
+    doc,
+    companions.map((c) => c.field),
+  );
+  for (const { field, text } of companions) {
+    const box = boxes.get(field);
+    if (box) await fillLine(doc, pages[box.pageIndex]!, box, text);
+  }
+  removeSignatureFields(doc, [...input.signers.flatMap((s) => (s.field ? [s.field] : [])), ...boxes.keys()]);
   const signedPages = await doc.save({ useObjectStreams: false });
   const sha256Signed = sha256(signedPages);
   // Names, addresses and browsers are typed by people: characters the fonts cannot draw are spelled out.

@@ -2,7 +2,7 @@ import { Document, StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { AgentAuthorizationFacts } from "@/lib/documents/agent-authorization/facts";
 import { Field, Notice, Section } from "../shared/blocks";
 import { LetterPage } from "../shared/letter-page";
-import { SIGNATURE_FIELDS, SignatureLine, SignatureRow } from "../shared/signature-line";
+import { SIGNATURE_FIELDS, SignatureLine, SignatureRow, signedDateField } from "../shared/signature-line";
 import { COLORS } from "../shared/styles";
 
 // The letter by which the owner lets the installer act as their agent with the AHJ and the utility:
@@ -27,7 +27,7 @@ function OwnerBlock({ title, printedName, field }: { title: string; printedName:
       <Text style={s.blockTitle}>{title}</Text>
       <SignatureRow>
         <SignatureLine caption="Printed name" prefill={printedName} />
-        <SignatureLine caption="Date" flex={0.5} />
+        <SignatureLine caption="Date" flex={0.5} field={signedDateField(field)} />
       </SignatureRow>
       <SignatureRow>
         <SignatureLine caption="Signature" field={field} />

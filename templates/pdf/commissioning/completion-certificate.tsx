@@ -2,7 +2,7 @@ import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { PrintedCommissioning } from "@/lib/documents/commissioning/facts";
 import { Field, Section } from "../shared/blocks";
 import { CautionNotice, CommissioningDocument, CompletionPanel, EquipmentRow } from "./commissioning-parts";
-import { SIGNATURE_FIELDS, SignatureLine, SignatureRow } from "../shared/signature-line";
+import { SIGNATURE_FIELDS, SignatureLine, SignatureRow, signedDateField, signedNameField } from "../shared/signature-line";
 import { COLORS } from "../shared/styles";
 
 // The certificate of completion: the project and system filled in from the commissioning
@@ -86,23 +86,23 @@ export function CompletionCertificate({ input }: { input: PrintedCommissioning }
             <Text style={s.blockTitle}>Installer</Text>
             <Text style={s.blockText}>{`For ${org.name}${org.licenseNumber ? `, contractor license ${org.licenseNumber}` : ""}`}</Text>
             <SignatureRow spacePt={LINE_SPACE_PT}>
-              <SignatureLine caption="Printed name" flex={1.6} />
+              <SignatureLine caption="Printed name" flex={1.6} field={signedNameField(SIGNATURE_FIELDS.installer)} />
               <SignatureLine caption="License no." />
             </SignatureRow>
             <SignatureRow spacePt={LINE_SPACE_PT}>
               <SignatureLine caption="Signature" flex={1.6} field={SIGNATURE_FIELDS.installer} />
-              <SignatureLine caption="Date" />
+              <SignatureLine caption="Date" field={signedDateField(SIGNATURE_FIELDS.installer)} />
             </SignatureRow>
           </View>
           <View style={s.block}>
             <Text style={s.blockTitle}>Customer's acknowledgement</Text>
             <Text style={s.blockText}>{CUSTOMER_ACKNOWLEDGEMENT}</Text>
             <SignatureRow spacePt={LINE_SPACE_PT}>
-              <SignatureLine caption="Printed name" />
+              <SignatureLine caption="Printed name" field={signedNameField(SIGNATURE_FIELDS.customer)} />
             </SignatureRow>
             <SignatureRow spacePt={LINE_SPACE_PT}>
               <SignatureLine caption="Signature" flex={1.6} field={SIGNATURE_FIELDS.customer} />
-              <SignatureLine caption="Date" />
+              <SignatureLine caption="Date" field={signedDateField(SIGNATURE_FIELDS.customer)} />
             </SignatureRow>
           </View>
         </View>

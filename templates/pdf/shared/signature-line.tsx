@@ -12,6 +12,10 @@ export const SIGNATURE_FIELDS = {
   installer: "signature.installer",
 } as const;
 
+/** The lines signing fills in beside a signature: the day it was signed, and the printed name where the document left it blank. */
+export const signedDateField = (signatureField: string) => `${signatureField}.date`;
+export const signedNameField = (signatureField: string) => `${signatureField}.name`;
+
 /** Height of the space a signature takes over its line, in points. */
 export const SIGNATURE_FIELD_HEIGHT_PT = 30;
 

@@ -6,7 +6,7 @@ import { PDFDocument, StandardFonts } from "pdf-lib";
 import { describe, expect, test } from "vitest";
 import { renderCommissioningPdf } from "@/lib/documents/commissioning/render";
 import { renderPacketPdf } from "@/lib/documents/packets/render";
-import { findSignatureBlocks } from "@/lib/documents/signing/blocks";
+import { fieldBoxes, findSignatureBlocks } from "@/lib/documents/signing/blocks";
 import { ELECTRONIC_SIGNATURE_CONSENT } from "@/lib/documents/signing/consent";
 import { signingRecordFacts } from "@/lib/documents/signing/facts";
 import type { SignerEvidence, SigningInput } from "@/lib/documents/signing/input";
@@ -154,6 +154,25 @@ describe("the documents' signature blocks", () => {
     expect(pages[0]).toContain("Rafe Quill");
     expect(pages[0]).toContain("Imogen Farrow-Lake");
     expect(pages[1]).toContain("Installer: Rafe Quill");
+    // Each date line carries the day signed in the organization's zone (17:04 UTC is 10:04 in Denver, Dec 5), and the
+    // blank printed-name lines the signer's name beside the signature: the name shows twice, typed and printed.
+    expect(pages[0]!.split("12/05/2026").length - 1).toBe(2);
+    expect(pages[0]!.split("Rafe Quill").length - 1).toBe(2);
+    const companions = await PDFDocument.load(signed.bytes);
+    expect(fieldBoxes(companions, ["signature.customer.date", "signature.installer.name"]).size).toBe(0);
+  }, 60_000);
+
+  test("the day on the date line is the organization's calendar day, not the server's", async () => {
+    const certificate = await renderCommissioningPdf(commissioningFixture({ kind: "certificate", scenario: "complete" }));
+    const blocks = await findSignatureBlocks(certificate);
+    // 05:30 UTC on Dec 6 is still Dec 5 in Denver (UTC-7).
+    const signed = await signPdf(
+      certificate,
+      input([signer({ box: blocks.customer!, field: "signature.customer", signedAt: "2026-12-06T05:30:00.000Z" })]),
+    );
+    const [page] = await pageTexts(signed.bytes);
+    expect(page).toContain("12/05/2026");
+    expect(page).not.toContain("12/06/2026");
   }, 60_000);
 });
 

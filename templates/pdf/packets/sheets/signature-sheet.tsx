@@ -2,7 +2,7 @@ import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { PrintedPacket } from "@/lib/documents/packets/printed";
 import { NumberedList, Section } from "../../shared/blocks";
 import { FormSheet } from "../../shared/sheet-page";
-import { SIGNATURE_FIELDS, SignatureLine, SignatureRow } from "../../shared/signature-line";
+import { SIGNATURE_FIELDS, SignatureLine, SignatureRow, signedDateField } from "../../shared/signature-line";
 import { COLORS, base } from "../../shared/styles";
 import type { SheetInfo } from "../../shared/title-block";
 
@@ -18,7 +18,7 @@ function SignatureBlock({ title, who, name, field }: { title: string; who: strin
       <Text style={[base.soft, { fontSize: 8 }]}>{who}</Text>
       <SignatureRow>
         <SignatureLine caption="Signature" flex={2} field={field} />
-        <SignatureLine caption="Date" />
+        <SignatureLine caption="Date" field={signedDateField(field)} />
       </SignatureRow>
       <SignatureRow>
         <SignatureLine caption="Printed name" flex={2} prefill={name} />
