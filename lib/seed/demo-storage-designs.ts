@@ -20,7 +20,7 @@ export type StorageScenario = (typeof STORAGE_SCENARIOS)[number];
 
 /** The demo customers whose projects carry batteries; each one's service suits its scenario (see seed-demo.ts). */
 export const DEMO_STORAGE_CUSTOMERS: Readonly<Record<string, StorageScenario>> = {
-  "Noor Haddadin": "dc-backup",
+  "Tobias Wrenhall": "dc-backup",
   "Desmond Achterberg": "dc-backup-full-garage",
   "Clementine Ashdown": "ac-added",
   "Florian Devereaux": "non-export",

@@ -1,7 +1,7 @@
 import { expect, test, type Page } from "@playwright/test";
 import { BarcodeFormat, QRCodeWriter } from "@zxing/library";
 import { PDFDocument } from "pdf-lib";
-import { acSideAndRapidShutdown, enter, shutDownStrings, testStringsBeforeEnergizing } from "../support/field-record";
+import { acSideAndRapidShutdown, enter, recordStorageIfAny, shutDownStrings, testStringsBeforeEnergizing } from "../support/field-record";
 import { DEMO, listProjectsAs, mailboxFor, pageFor } from "../support/session";
 
 // A phone held upright: the field record is laid out for this first.
@@ -183,6 +183,8 @@ test("installer on a phone with optimizers that report: devices found short of i
   test.setTimeout(180_000);
   const phone = await pageFor(browser, DEMO.installer);
   await fieldProject(phone, { stages: ON_SITE, pairing: true });
+  // The demo's project with reporting optimizers may also have batteries: their step then comes last.
+  const withStorage = (await phone.getByTestId("step-storage").count()) > 0;
   await expect(phone.locator("[data-testid^=step-] h3")).toHaveText([
     /Before energizing: string tests/,
     /At the inverter/,
@@ -193,6 +195,7 @@ test("installer on a phone with optimizers that report: devices found short of i
     /First power/,
     /Modules reporting/,
     /Rapid shutdown test/,
+    ...(withStorage ? [/Energy storage/] : []),
   ]);
   // Optimizer strings show no Voc before the inverter runs: polarity and insulation only.
   await expect(phone.getByTestId("step-before-energizing").locator("input[id$='.vocV']")).toHaveCount(0);
@@ -226,6 +229,7 @@ test("installer on a phone with optimizers that report: devices found short of i
   );
 
   await acSideAndRapidShutdown(phone);
+  await recordStorageIfAny(phone);
   const modules = phone.locator("#modulesReporting");
   await enter(modules, (await modules.getAttribute("data-installed"))!);
   await expect(phone.getByTestId("completion-counts")).toHaveText("0 failing · 0 to record · 1 waiting");

@@ -7,12 +7,14 @@ import { DEMO, listProjectsAs, signIn } from "../support/session";
 // corrections with a design change and a new revision, and the stage follows the facts: issued with its number,
 // a failed final inspection re-inspected, the utility's approval, the field record completed, PTO.
 
-/** A demo project whose field record has string tests and no module-level devices to find: its design is copied. */
+/** A PV-only demo project whose field record has string tests and no module-level devices to find: its design is copied. */
 async function sourceProject(page: Page) {
   for (const project of (await listProjectsAs(page)).filter((p) => p.stage === "permit_filed" || p.stage === "permit_issued")) {
     await page.goto(`/projects/${project.id}/field`);
     await expect(page.getByTestId("commissioning-status")).toBeVisible();
-    if ((await page.getByTestId("step-pairing").count()) === 0 && (await page.getByTestId("step-before-energizing").count()) > 0)
+    // PV only: batteries add a storage step the walk does not fill.
+    const pvOnly = (await page.getByTestId("step-storage").count()) === 0;
+    if (pvOnly && (await page.getByTestId("step-pairing").count()) === 0 && (await page.getByTestId("step-before-energizing").count()) > 0)
       return project.id;
   }
   throw new Error("No demo project with string tests and no module-level devices that report");

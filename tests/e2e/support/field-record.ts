@@ -46,6 +46,30 @@ export async function acSideAndRapidShutdown(phone: Page) {
   await enter(byId(phone, "rapidShutdown.seconds"), "8");
 }
 
+/**
+ * The storage part of a record whose design has batteries, as the design says it was built: the charge shown,
+ * the backup test passed, and the power control setting and export limit read back as designed. Nothing
+ * happens on a PV-only record.
+ */
+export async function recordStorageIfAny(phone: Page) {
+  const step = phone.getByTestId("step-storage");
+  if ((await step.count()) === 0) return;
+  await enter(byId(phone, "storage.stateOfChargePct"), "80");
+  if ((await step.getByRole("group", { name: "Grid supply opened" }).count()) > 0) {
+    await step.getByRole("group", { name: "Grid supply opened" }).getByLabel("Yes").check();
+    await step.getByRole("group", { name: "Backup loads panel stayed on" }).getByLabel("Yes").check();
+    await enter(byId(phone, "storage.transferSeconds"), "0");
+  }
+  for (const [id, unit] of [
+    ["storage.pcsSettingA", "A"],
+    ["storage.exportLimitKw", "kW"],
+  ] as const) {
+    if ((await byId(phone, id).count()) === 0) continue;
+    const hint = (await step.getByText(/^Designed: /).allTextContents()).find((t) => t.includes(` ${unit}`))!;
+    await enter(byId(phone, id), hint.match(/Designed: ([\d.]+)/)![1]!);
+  }
+}
+
 /** Every step of a record with string tests and no module-level devices that report, then "Mark complete". */
 export async function completeFieldRecord(page: Page) {
   await testStringsBeforeEnergizing(page);
