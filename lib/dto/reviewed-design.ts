@@ -27,6 +27,8 @@ export type ReviewedDesign = {
     module: Item<"module">;
     inverters: { lineId: string; quantity: number; item: Item<"inverter"> }[];
     device: Item<"device"> | null;
+    /** The batteries and battery inverter of a design with storage, each once; empty without. */
+    storage: EquipmentDto[];
   };
 };
 

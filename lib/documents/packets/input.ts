@@ -41,6 +41,8 @@ export type PacketInput = {
     module: Extract<EquipmentDto, { kind: "module" }>;
     inverters: { lineId: string; quantity: number; item: Extract<EquipmentDto, { kind: "inverter" }> }[];
     device: Extract<EquipmentDto, { kind: "device" }> | null;
+    /** The batteries and battery inverter of a design with storage, for their data sheets; absent or empty without. */
+    storage?: readonly EquipmentDto[];
   };
   review: ReviewResult;
   /** Set when a coordinator generated the packet despite failing checks; printed on the cover. */

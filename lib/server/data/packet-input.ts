@@ -29,7 +29,7 @@ export async function buildPacketInput({
   // Each data sheet once, in the order of the equipment schedule.
   const withSheets = [
     ...new Map(
-      [equipment.module, ...equipment.inverters.map((l) => l.item), equipment.device]
+      [equipment.module, ...equipment.inverters.map((l) => l.item), equipment.device, ...(equipment.storage ?? [])]
         .filter((e): e is NonNullable<typeof e> => Boolean(e?.datasheet))
         .map((e) => [e.id, e]),
     ).values(),

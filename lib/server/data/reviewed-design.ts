@@ -59,7 +59,16 @@ export async function getReviewedDesign({
         item: item<"inverter">(line.equipmentId)!,
       })),
       device: item<"device">(designInput.equipment.deviceId),
+      storage: storageItems(designInput, (id) => byId.get(id)),
     },
   };
   return { status: "reviewed", reviewed };
+}
+
+/** The catalog items of a design's storage, each once: its batteries, then an AC-coupled system's battery inverter. */
+function storageItems(input: DesignInput, find: (id: string) => EquipmentDto | undefined): EquipmentDto[] {
+  const storage = input.storage;
+  if (!storage || storage.coupling === "none") return [];
+  const ids = [...storage.banks.map((b) => b.equipmentId), ...(storage.coupling === "ac" ? [storage.batteryInverterId] : [])];
+  return [...new Set(ids)].flatMap((id) => find(id) ?? []);
 }

@@ -71,3 +71,27 @@ describe("a design with batteries under its AHJ's adopted ESS limits", () => {
     expect(published.review.checks.find((c) => c.id === "ess-location:garage")).toMatchObject({ status: "pass", limit: 80 });
   });
 });
+
+describe("the packets' equipment of a design with batteries", () => {
+  it.each([
+    ["dc-backup", ["battery"]],
+    ["ac-added", ["battery", "inverter"]],
+  ] as const)("a %s design hands its batteries (and battery inverter) to the packets, for their data sheets", async (scenario, kinds) => {
+    const project = await makeProject(org, { busbarA: 225, mainBreakerA: 200 });
+    const draft = demoStorageDesign(ids, storageIds, { busbarA: 225, mainBreakerA: 200 }, scenario, 0);
+    await saveDesignDraft({ viewer: org.viewers.coordinator, projectId: project.id, draft });
+    const snapshot = await getReviewedDesign({ viewer: org.viewers.coordinator, projectId: project.id });
+    if (snapshot.status !== "reviewed") throw new Error("not reviewed");
+    expect(snapshot.reviewed.equipment.storage.map((e) => e.kind)).toEqual(kinds);
+    const banks = draft.storage && draft.storage.coupling !== "none" ? draft.storage.banks : [];
+    expect(snapshot.reviewed.equipment.storage[0]!.id).toBe(banks[0]!.equipmentId);
+  });
+
+  it("hands none for a PV-only design", async () => {
+    const project = await makeProject(org, { busbarA: 200, mainBreakerA: 200 });
+    const draft = demoStorageDesign(ids, storageIds, { busbarA: 200, mainBreakerA: 200 }, "dc-backup", 0);
+    await saveDesignDraft({ viewer: org.viewers.coordinator, projectId: project.id, draft: { ...draft, storage: { coupling: "none" } } });
+    const snapshot = await getReviewedDesign({ viewer: org.viewers.coordinator, projectId: project.id });
+    expect(snapshot.status === "reviewed" && snapshot.reviewed.equipment.storage).toEqual([]);
+  });
+});
