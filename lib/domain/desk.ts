@@ -13,10 +13,10 @@ import { addCalendarDays, localIsoDate } from "./time-zones";
 
 /** How far ahead the desk looks for booked inspections: today and the six days after it. */
 export const INSPECTION_LOOKAHEAD_DAYS = 7;
-/** How early a permit about to lapse is raised: a month gives time to book an inspection (common practice). */
+// How early a permit about to lapse is raised: a month gives time to book an inspection (common practice).
 export const PERMIT_LAPSE_NOTICE_DAYS = 30;
 
-/** Rows a section shows on the start page before "Show all": a long section would bury the others (common practice). */
+// Rows a section shows on the start page before "Show all": a long section would bury the others (common practice).
 export const DESK_ROWS_SHOWN = 8;
 /** Rows a section lists in the morning digest; the rest are counted and the e-mail links to the desk. */
 export const DIGEST_ROWS_SHOWN = 15;

@@ -11,16 +11,16 @@ type Band = { min: number; max: number };
 export const VOC_COEFF_TYPICAL_PCT: Band = { min: -0.5, max: -0.2 };
 // Outside this the figure cannot be a crystalline module's Voc coefficient in the stated unit (common practice).
 export const VOC_COEFF_PLAUSIBLE_PCT: Band = { min: -0.7, max: -0.1 };
-/** Pmax temperature coefficients, %/°C (common practice). */
+// Pmax temperature coefficients, %/°C (common practice).
 export const PMAX_COEFF_PLAUSIBLE_PCT: Band = { min: -0.7, max: -0.15 };
-/** Vmp / Voc and Imp / Isc of crystalline modules at STC (common practice). */
+// Vmp / Voc and Imp / Isc of crystalline modules at STC (common practice).
 export const VMP_TO_VOC: Band = { min: 0.7, max: 0.95 };
 export const IMP_TO_ISC: Band = { min: 0.85, max: 0.995 };
-/** Pmax within 5 % of Vmp × Imp (common practice; data sheets round each figure). */
+// Pmax within 5 % of Vmp × Imp (common practice; data sheets round each figure).
 export const PMAX_PRODUCT_TOLERANCE = 0.05;
-/** Voltage a module-level device holds while shut down: about 1 V is common practice; 0.1–3 V covers the devices sold. */
+// Voltage a module-level device holds while shut down: about 1 V is common practice; 0.1–3 V covers the devices sold.
 export const SHUTDOWN_HOLD_V: Band = { min: 0.1, max: 3 };
-/** Rated output current at least 95 % of the rated power over the nominal voltage (common practice). */
+// Rated output current at least 95 % of the rated power over the nominal voltage (common practice).
 export const INVERTER_CURRENT_TOLERANCE = 0.05;
 
 const within = (v: number, b: Band) => v >= b.min - 1e-9 && v <= b.max + 1e-9;
