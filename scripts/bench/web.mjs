@@ -1,11 +1,12 @@
-// `npm run bench:web [-- --url http://127.0.0.1:3300 --only "dashboard" --details]`: Lighthouse (the npm package, on Debian's
+// `npm run bench:web [-- --url http://127.0.0.1:3300 --only "dashboard" --details --js-only]`: Lighthouse (the npm package, on Debian's
 // Chromium through chrome-launcher; CHROME_PATH overrides /usr/bin/chromium) on the sign-in page, the
 // dashboard, a project page and its design editor at desktop size, and the field page at phone size,
 // signed in as the demo coordinator. Prints each page's performance and accessibility scores, then
 // each route's first-load JavaScript from the build's manifests, gzip-compressed. Starts the
 // production build on the scale profile (fill it first with `npm run seed:scale`) unless --url names a
 // server already running; --only measures the pages whose name contains it, --details prints the
-// elements each failed accessibility audit names. Prints figures; asserts nothing.
+// elements each failed accessibility audit names, --js-only prints the first-load JavaScript of the
+// last build alone (no server, no browser). Prints figures; asserts nothing.
 import { readdirSync, readFileSync, existsSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -66,6 +67,16 @@ function firstLoadJs() {
     .sort((a, b) => a.route.localeCompare(b.route));
 }
 
+function printFirstLoadJs() {
+  console.log("\n| route | first-load JS (gzip) | files |\n|---|---|---|");
+  for (const r of firstLoadJs()) console.log(`| ${r.route} | ${(r.bytes / 1024).toFixed(1)} kB | ${r.files} |`);
+}
+
+if (args.includes("--js-only")) {
+  printFirstLoadJs();
+  process.exit(0);
+}
+
 let app = null;
 if (!base) {
   app = await startScaleApp(root);
@@ -124,8 +135,7 @@ try {
       }
     }
   }
-  console.log("\n| route | first-load JS (gzip) | files |\n|---|---|---|");
-  for (const r of firstLoadJs()) console.log(`| ${r.route} | ${(r.bytes / 1024).toFixed(1)} kB | ${r.files} |`);
+  printFirstLoadJs();
 } finally {
   await chrome.kill();
   await app?.stop();
