@@ -1,6 +1,7 @@
 import type { FeeLine } from "@/lib/fees";
 import type { FeeAuthorityKind } from "@/lib/fees/types";
-import { FeeScheduleEditor, type SaveFeeSchedule } from "./fee-schedule-editor";
+import type { SaveFeeSchedule } from "./fee-schedule-editor";
+import { FeeScheduleEditor } from "./fee-schedule-editor-lazy";
 
 const WHAT_IT_CHARGES: Record<FeeAuthorityKind, string> = {
   jurisdiction: "The permit fees this AHJ charges",

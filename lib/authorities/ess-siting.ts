@@ -1,4 +1,4 @@
-import { DEFAULT_ESS_SITING } from "@/lib/engineering/checks/ess-siting";
+import { DEFAULT_ESS_SITING } from "@/lib/engineering/tables/ess-siting-limits";
 import type { EssSitingLimits } from "@/lib/engineering/storage-types";
 
 /** An AHJ's adopted residential ESS figures as it stores them; null keeps the published figure. */

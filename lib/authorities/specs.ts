@@ -1,6 +1,6 @@
 import type { AuthorityKind } from "@/lib/domain/authorities";
 import { INSPECTION_KIND_LABELS, INSPECTION_KINDS_BY_FILING } from "@/lib/domain/filings";
-import { DEFAULT_ESS_SITING } from "@/lib/engineering/checks/ess-siting";
+import { DEFAULT_ESS_SITING } from "@/lib/engineering/tables/ess-siting-limits";
 import { NEC_EDITIONS } from "@/lib/engineering/types";
 import { JurisdictionInput, UtilityInput } from "@/lib/schemas/reference-data";
 

@@ -5,7 +5,7 @@ import { AGE_BUCKETS } from "@/lib/dto/reports";
 import { requirePermission } from "@/lib/server/auth";
 import { getReportsOverview } from "@/lib/server/data/reports";
 import { DateRangeQuery } from "@/lib/schemas/reports";
-import { DaysToDecisionChart, MonthlyApprovalsChart, StageAgingChart } from "./_components/report-charts";
+import { DaysToDecisionChart, MonthlyApprovalsChart, StageAgingChart } from "./_components/lazy-report-charts";
 import { CycleTimesTable, MonthlyApprovalsTable, StageTables, WaitingTable } from "./_components/report-tables";
 
 export const metadata: Metadata = { title: "Reports" };

@@ -1,6 +1,7 @@
 "use client";
 
 import { Bar, BarChart, CartesianGrid, LabelList, Legend, ResponsiveContainer, XAxis, YAxis } from "recharts";
+import { AGING_CHART_HEIGHT, MONTHLY_CHART_HEIGHT, daysChartHeight, decidedRows, type DaysRow } from "./report-chart-sizes";
 
 // Series are told apart by fill pattern and by the words on and beside the bars, never by colour alone,
 // so a chart reads the same printed in black and white.
@@ -24,15 +25,13 @@ const DOTTED = { fill: "url(#report-dots)", stroke: INK, strokeWidth: 1 };
 const AXIS = { fontSize: 12, fill: INK };
 const label = (v: unknown) => (v === null || v === undefined ? "" : String(v));
 
-type DaysRow = { name: string; medianDays: number | null; p90Days: number | null };
-
 /** Days from submitted to decided per authority: the median as a solid bar, the 90th percentile hatched. */
 export function DaysToDecisionChart({ rows, title }: { rows: DaysRow[]; title: string }) {
-  const shown = rows.filter((r) => r.medianDays !== null);
-  if (shown.length === 0) return <p className="text-sm text-ink-soft">No decided filings in this range.</p>;
+  const shown = decidedRows(rows);
+  if (shown.length === 0) return null; // the page says so in words (lazy-report-charts)
   return (
     <figure aria-label={title} className="break-inside-avoid">
-      <ResponsiveContainer width="100%" height={70 + shown.length * 56}>
+      <ResponsiveContainer width="100%" height={daysChartHeight(shown.length)}>
         <BarChart data={shown} layout="vertical" margin={{ left: 8, right: 40, top: 4, bottom: 4 }} barGap={2}>
           {PATTERNS}
           <CartesianGrid horizontal={false} stroke="#ddd3bf" />
@@ -88,7 +87,7 @@ export function MonthlyApprovalsChart({ rows }: { rows: { month: string; permits
       label="Approvals by month"
       data={rows}
       category="month"
-      height={260}
+      height={MONTHLY_CHART_HEIGHT}
       series={[
         { key: "permits", name: "Permits (solid)", style: SOLID },
         { key: "interconnections", name: "Interconnections (dotted)", style: DOTTED },
@@ -104,7 +103,7 @@ export function StageAgingChart({ buckets }: { buckets: { band: string; projects
       label="Active projects by days in their current stage"
       data={buckets}
       category="band"
-      height={220}
+      height={AGING_CHART_HEIGHT}
       series={[{ key: "projects", name: "Active projects", style: HATCHED }]}
     />
   );

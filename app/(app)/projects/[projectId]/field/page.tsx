@@ -13,8 +13,10 @@ import { CommissioningForm } from "./_components/commissioning-form";
 import { FieldCautions } from "./_components/field-cautions";
 import { FieldInspections } from "./_components/field-inspections";
 import { FieldUploads } from "./_components/field-uploads";
+import { toFormValues } from "./_components/form-values";
+import { checkLiveRecord } from "./_components/live-record";
 import { saveCommissioningAction } from "./actions";
-import { CertificateSigning } from "./_components/certificate-signing";
+import { CertificateSigning } from "./_components/certificate-signing-lazy";
 import { signCertificateInPersonAction } from "./signing-actions";
 import { ELECTRONIC_SIGNATURE_CONSENT } from "@/lib/documents/signing/consent";
 import { listSignatureRequests } from "@/lib/server/data/signature-requests";
@@ -54,6 +56,10 @@ export default async function FieldPage({ params }: { params: Promise<{ projectI
             projectId={project.id}
             facts={commissioning.data.facts}
             initialReadings={commissioning.data.readings}
+            initialCheck={checkLiveRecord(
+              toFormValues(commissioning.data.readings, commissioning.data.facts.acceptedGridProfiles),
+              commissioning.data.facts,
+            )}
             initialStatus={commissioning.data.status}
             initialUpdatedAt={commissioning.data.updatedAt}
             readOnly={!mayRecord}

@@ -6,13 +6,14 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import { useForm, useWatch, type Path, type UseFormRegisterReturn } from "react-hook-form";
 import { useTimeZone } from "@/components/time/local-time";
 import { Button } from "@/components/ui/button";
-import { checkCommissioning, commissioningComplete, shutdownWindow } from "@/lib/engineering/commissioning";
-import { toCommissioningRecord, type CommissioningFacts } from "@/lib/field/commissioning-facts";
+import { shutdownWindow } from "@/lib/engineering/commissioning";
+import type { CommissioningFacts } from "@/lib/field/commissioning-facts";
 import { formatInZone } from "@/lib/domain/time-zones";
 import type { CommissioningReadings } from "@/lib/schemas/commissioning";
 import type { saveCommissioningAction } from "../actions";
 import { BeforeEnergizingStep } from "./before-energizing-step";
-import { liveReadings, toFormValues, toReadingsInput, type FormValues } from "./form-values";
+import { toFormValues, toReadingsInput, type FormValues } from "./form-values";
+import type { LiveRecord, checkLiveRecord } from "./live-record";
 import { GridProfileStep } from "./grid-profile-step";
 import { InverterStep } from "./inverter-step";
 import { PairingStep } from "./pairing-step";
@@ -31,6 +32,8 @@ export function CommissioningForm(props: {
   projectId: string;
   facts: CommissioningFacts;
   initialReadings: CommissioningReadings;
+  /** The saved readings' checks, worked out by the page, shown until the form's own checker has loaded. */
+  initialCheck: LiveRecord;
   initialStatus: "open" | "complete";
   initialUpdatedAt: string | null;
   readOnly: boolean;
@@ -46,11 +49,21 @@ export function CommissioningForm(props: {
   const autosave = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
   const latest = useRef(0); // only the newest save's answer is shown
 
-  const { errors, results, completion } = useMemo(() => {
-    const live = liveReadings(values);
-    const checks = checkCommissioning(toCommissioningRecord(facts, live.readings));
-    return { errors: live.errors, results: checks, completion: commissioningComplete(checks) };
-  }, [values, facts]);
+  // The checker (the readings' schema and the checks) loads after the form is on screen; until then, and
+  // while nothing was changed, the page's checks of the saved readings stand.
+  const [checker, setChecker] = useState<typeof checkLiveRecord | null>(null);
+  useEffect(() => {
+    let live = true;
+    void import("./live-record").then((m) => live && setChecker(() => m.checkLiveRecord));
+    return () => {
+      live = false;
+    };
+  }, []);
+  const { isDirty } = form.formState;
+  const { errors, results, completion } = useMemo(
+    () => (checker && isDirty ? checker(values, facts) : props.initialCheck),
+    [checker, isDirty, values, facts, props.initialCheck],
+  );
   const byId = (id: string) => results.find((r) => r.id === id);
 
   async function saveNow(complete = false) {

@@ -1,4 +1,4 @@
-import { CommissioningReadings, type CommissioningReadingsInput } from "@/lib/schemas/commissioning";
+import type { CommissioningReadings, CommissioningReadingsInput } from "@/lib/schemas/commissioning";
 
 // The field record as the form holds it (every input a string) and back to readings.
 
@@ -87,26 +87,4 @@ export function toReadingsInput(v: FormValues): CommissioningReadingsInput {
     strings: strings.map((s) => ({ ...s, polarity: s.polarity === "" ? null : s.polarity })),
     gridProfileSet: gridProfileChoice === OTHER_PROFILE ? gridProfileOther : gridProfileChoice,
   };
-}
-
-// Form paths whose reading lives under another name.
-const FORM_PATH: Record<string, string> = { gridProfileSet: "gridProfileOther" };
-
-/** The typed values as readings; a field that is not a number is left out of the checks and its problem shown beside it. */
-export function liveReadings(values: FormValues): { readings: CommissioningReadings; errors: Record<string, string> } {
-  const errors: Record<string, string> = {};
-  const copy = structuredClone(toReadingsInput(values)) as Record<string, unknown>;
-  let parsed = CommissioningReadings.safeParse(copy);
-  for (let i = 0; i < 3 && !parsed.success; i++) {
-    for (const issue of parsed.error.issues) {
-      const path = issue.path.map(String);
-      const key = path.join(".");
-      errors[FORM_PATH[key] ?? key] ??= issue.message;
-      let node = copy as Record<string, unknown>;
-      for (const part of path.slice(0, -1)) node = node[part] as Record<string, unknown>;
-      node[path[path.length - 1]] = "";
-    }
-    parsed = CommissioningReadings.safeParse(copy);
-  }
-  return { readings: parsed.success ? parsed.data : CommissioningReadings.parse({}), errors };
 }
