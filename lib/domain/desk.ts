@@ -9,7 +9,7 @@ import {
   type InspectionKind,
   type InspectionResult,
 } from "./filings";
-import { addCalendarDays, localIsoDate } from "./time-zones";
+import { addCalendarDays, dateTimeFormat, localIsoDate } from "./time-zones";
 
 /** How far ahead the desk looks for booked inspections: today and the six days after it. */
 export const INSPECTION_LOOKAHEAD_DAYS = 7;
@@ -264,9 +264,7 @@ export const DIGEST_HOURS = { from: 7, until: 12 } as const;
  * morning in its zone. A morning missed altogether (no worker running) is not made up in the afternoon.
  */
 export function digestDayAt(iso: string, timeZone: string): string | null {
-  const parts = new Intl.DateTimeFormat("en-US", { timeZone, weekday: "short", hour: "numeric", hourCycle: "h23" }).formatToParts(
-    new Date(iso),
-  );
+  const parts = dateTimeFormat("en-US", { timeZone, weekday: "short", hour: "numeric", hourCycle: "h23" }).formatToParts(new Date(iso));
   const weekday = parts.find((p) => p.type === "weekday")?.value;
   const hour = Number(parts.find((p) => p.type === "hour")?.value);
   if (weekday === "Sat" || weekday === "Sun") return null;

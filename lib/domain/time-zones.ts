@@ -13,10 +13,27 @@ export const US_TIME_ZONES = [
 export type UsTimeZone = (typeof US_TIME_ZONES)[number]["id"];
 export const DEFAULT_TIME_ZONE: UsTimeZone = "America/New_York";
 
+// Making an Intl.DateTimeFormat costs far more than formatting with one (a page of fifty rows made
+// hundreds), and a company has one zone and a handful of styles: each locale, zone and style is made once.
+const formatters = new Map<string, Intl.DateTimeFormat>();
+
+/** The formatter for these options, made on first use and kept (a few dozen at most: zones × styles). */
+export function dateTimeFormat(locale: "en-US" | "en-CA", options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
+  const key = `${locale}|${JSON.stringify(options)}`;
+  let formatter = formatters.get(key);
+  if (!formatter) {
+    formatter = new Intl.DateTimeFormat(locale, options);
+    // An unbounded set of zones cannot reach here (zones are validated), but a long-running process stays bounded anyway.
+    if (formatters.size >= 500) formatters.clear();
+    formatters.set(key, formatter);
+  }
+  return formatter;
+}
+
 /** "2026-11-20 09:30 MST": a calendar date and 24-hour time in the zone, with its abbreviation. */
 export function localDateTime(iso: string, timeZone: string): string {
   const parts = Object.fromEntries(
-    new Intl.DateTimeFormat("en-US", {
+    dateTimeFormat("en-US", {
       timeZone,
       year: "numeric",
       month: "2-digit",
@@ -34,12 +51,12 @@ export function localDateTime(iso: string, timeZone: string): string {
 
 /** "December 3, 2026" in the zone. */
 export function localLongDate(iso: string, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone }).format(new Date(iso));
+  return dateTimeFormat("en-US", { dateStyle: "long", timeZone }).format(new Date(iso));
 }
 
 /** The calendar day (YYYY-MM-DD) it is in the zone at that instant: fee schedules take effect by local day. */
 export function localIsoDate(iso: string, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(iso));
+  return dateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(iso));
 }
 
 const STYLES = {
@@ -51,7 +68,7 @@ export type TimeStyle = keyof typeof STYLES;
 
 /** "Nov 15, 2026, 5:11 PM" in the zone: the same on the server and in any browser, so pages hydrate cleanly. */
 export function formatInZone(iso: string, timeZone: string, style: TimeStyle = "datetime"): string {
-  return new Intl.DateTimeFormat("en-US", { ...STYLES[style], timeZone }).format(new Date(iso));
+  return dateTimeFormat("en-US", { ...STYLES[style], timeZone }).format(new Date(iso));
 }
 
 /** The calendar day (YYYY-MM-DD) so many days after another: arithmetic on days, no instant and no zone. */
@@ -63,5 +80,5 @@ export function addCalendarDays(day: string, days: number): string {
 
 /** "Mar 2, 2026" for a calendar day (YYYY-MM-DD) that is already the organization's own: no zone to apply. */
 export function calendarDayText(day: string): string {
-  return new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeZone: "UTC" }).format(new Date(`${day}T12:00:00Z`));
+  return dateTimeFormat("en-US", { dateStyle: "medium", timeZone: "UTC" }).format(new Date(`${day}T12:00:00Z`));
 }

@@ -2,6 +2,7 @@
 // behind each read the benchmarks drive, on the scale profile: how many statements each call sends,
 // and PostgreSQL's EXPLAIN ANALYZE of each (its plan's top line and time), so a sequential scan, a
 // count over the whole table or a repeated read shows before any load is put on the server.
+// `-- --plan "desk"` prints the whole plan of each statement of the reads so named.
 import { QueryTypes } from "sequelize";
 import { getActiveViewer } from "@/lib/server/data/users";
 import { getProjectById, listProjects, listStageChanges } from "@/lib/server/data/projects";
@@ -39,18 +40,6 @@ const [{ id: userId }] = await db().query<{ id: string }>("select id from users 
 const viewer = (await getActiveViewer(userId))!;
 const list = (q: Record<string, string>) => () => listProjects({ viewer, query: ProjectListQuery.parse({ pageSize: "50", ...q }) });
 const first = (await list({ stage: "permit_filed" })()).items[0]!;
-if (process.argv.includes("--plans")) {
-  for (const s of await sqlOf(list({ sort: "customerName", direction: "asc", page: "3" }))) {
-    const rows = await db().query<{ "QUERY PLAN": string }>(
-      `EXPLAIN ANALYZE ${s.replace(/^Executing \(default\): /, "").replace(/;$/, "")}`,
-      {
-        type: QueryTypes.SELECT,
-      },
-    );
-    console.log(s.slice(0, 2000));
-    console.log(rows.map((r) => r["QUERY PLAN"]).join("\n"));
-  }
-}
 const calls: [string, () => Promise<unknown>][] = [
   ["session's viewer", () => getActiveViewer(userId)],
   ["organization (layout)", () => getOrganization({ viewer })],
@@ -69,9 +58,17 @@ const calls: [string, () => Promise<unknown>][] = [
   ["project page's field summary", () => getFieldSummary({ viewer, projectId: first.id })],
   ["dashboard's desk (coordinator)", () => getDesk({ viewer })],
 ];
+// --plan <text>: the whole EXPLAIN ANALYZE of each statement of the reads whose name contains the text.
+const planOf = process.argv.includes("--plan") ? process.argv[process.argv.indexOf("--plan") + 1] : null;
 for (const [name, call] of calls) {
   const statements = await sqlOf(call);
   console.log(`\n${name}: ${statements.length} statement${statements.length === 1 ? "" : "s"}`);
-  for (const s of statements) console.log(`  ${(await explain(s.replace(/;$/, ""))).padEnd(70)} ${s.slice(0, 110)}`);
+  for (const s of statements) {
+    console.log(`  ${(await explain(s.replace(/;$/, ""))).padEnd(70)} ${s.slice(0, 110)}`);
+    if (planOf && name.includes(planOf)) {
+      const rows = await db().query<{ "QUERY PLAN": string }>(`EXPLAIN ANALYZE ${s.replace(/;$/, "")}`, { type: QueryTypes.SELECT });
+      console.log(`\n${s}\n${rows.map((r) => r["QUERY PLAN"]).join("\n")}\n`);
+    }
+  }
 }
 await db().close();

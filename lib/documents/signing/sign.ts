@@ -5,6 +5,7 @@ import { SigningRecord } from "@/templates/pdf/signing/signing-record";
 import { FilledLine, TypedSignature } from "@/templates/pdf/signing/typed-signature";
 import { signedDateField, signedNameField } from "@/templates/pdf/shared/signature-line";
 import { renderPdf } from "../render";
+import { dateTimeFormat } from "@/lib/domain/time-zones";
 import { printable, printableDeep } from "../text";
 import { fieldBoxes, removeSignatureFields } from "./blocks";
 import { signingRecordFacts } from "./facts";
@@ -32,7 +33,7 @@ async function drawSignature(doc: PDFDocument, page: PDFPage, signer: SigningInp
 
 /** The calendar day of an instant in the organization's zone, as a US form's date line takes it: 12/05/2026. */
 function signedDay(iso: string, timeZone: string) {
-  return new Intl.DateTimeFormat("en-US", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(iso));
+  return dateTimeFormat("en-US", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(iso));
 }
 
 async function fillLine(doc: PDFDocument, page: PDFPage, box: SignatureBox, text: string) {

@@ -3,6 +3,7 @@ import {
   US_TIME_ZONES,
   addCalendarDays,
   calendarDayText,
+  dateTimeFormat,
   formatInZone,
   localDateTime,
   localIsoDate,
@@ -61,5 +62,16 @@ describe("calendar days", () => {
   it("writes a calendar day as it is, whatever zone the machine runs in", () => {
     expect(calendarDayText("2026-03-02")).toBe("Mar 2, 2026");
     expect(calendarDayText("2026-12-31")).toBe("Dec 31, 2026");
+  });
+});
+
+describe("dateTimeFormat", () => {
+  test("keeps one formatter per locale and options, and formats as a fresh one would", () => {
+    const options = { timeZone: "America/Denver", dateStyle: "medium" } as const;
+    expect(dateTimeFormat("en-US", options)).toBe(dateTimeFormat("en-US", { ...options }));
+    expect(dateTimeFormat("en-US", options)).not.toBe(dateTimeFormat("en-CA", options));
+    const at = new Date("2026-11-20T16:30:00Z");
+    // Intl itself is the reference: the kept formatter answers exactly as a new one does.
+    expect(dateTimeFormat("en-US", options).format(at)).toBe(new Intl.DateTimeFormat("en-US", options).format(at));
   });
 });
