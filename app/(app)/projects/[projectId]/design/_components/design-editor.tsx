@@ -22,6 +22,8 @@ import type { Issues } from "./design-fields";
 
 type SaveState = { kind: "idle" | "saving" | "saved" | "error"; text: string };
 const AUTOSAVE_MS = 1200;
+// A chunk that never arrives does not always reject the import: after this long the editor says so.
+const LIVE_CHECKS_GIVE_UP_MS = 15_000;
 
 // The diagram and the conductor schedule load when the Review step opens; the placeholder holds the step's room meanwhile.
 const ReviewStep = dynamic(() => import("./review-step").then((m) => m.ReviewStep), {
@@ -70,12 +72,15 @@ export function DesignEditor(props: {
   const [liveCheck, setLiveCheck] = useState<{ run: typeof checkEditorValues } | "loading" | "failed">("loading");
   useEffect(() => {
     let current = true;
+    // A late arrival still takes over from "failed".
     import("@/lib/design/editor-checks").then(
       (m) => current && setLiveCheck({ run: m.checkEditorValues }),
       () => current && setLiveCheck("failed"),
     );
+    const giveUp = setTimeout(() => current && setLiveCheck((s) => (s === "loading" ? "failed" : s)), LIVE_CHECKS_GIVE_UP_MS);
     return () => {
       current = false;
+      clearTimeout(giveUp);
     };
   }, []);
   const checks = useMemo(
@@ -198,8 +203,9 @@ export function DesignEditor(props: {
         {step < DESIGN_STEPS.length - 1 ? (
           <aside className="panel h-fit lg:sticky lg:top-4" aria-label="Live review" aria-busy={stale}>
             <h2 className="mb-2">Live review</h2>
-            {liveCheck === "failed" && changed ? (
-              <p className="mb-2 text-sm text-result-fail" role="alert">
+            {stale && liveCheck === "loading" ? <p className="mb-2 text-xs text-ink-faint">Checking your changes…</p> : null}
+            {stale && liveCheck === "failed" ? (
+              <p className="mb-2 text-sm font-medium text-ink" role="alert">
                 The live checks could not load, so these are the checks of the design as it opened. Your input is still saved; reload the
                 page to check it.
               </p>
