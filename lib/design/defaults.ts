@@ -1,4 +1,4 @@
-import type { DesignFormValues } from "@/lib/schemas/design";
+import type { DesignDraft, DesignFormValues } from "@/lib/schemas/design";
 
 type ServiceFacts = { serviceVoltageV: number | null; servicePhases: number | null; busbarA: number | null; mainBreakerA: number | null };
 
@@ -118,4 +118,12 @@ export function newDesignDraft(project: ServiceFacts): DesignFormValues {
     site: { isDwelling: true, peakSunHours: "" },
     storage: { coupling: "none" },
   };
+}
+
+/**
+ * The editor's starting values from a saved draft. A design saved before storage existed has no battery:
+ * the storage step opens on "No battery". The page checks these same values on the server for the first paint.
+ */
+export function editorValues(draft: DesignDraft): DesignFormValues {
+  return { ...draft, storage: draft.storage ?? { coupling: "none" } } as DesignFormValues;
 }

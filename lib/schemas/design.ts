@@ -3,13 +3,19 @@ import { safeString } from "./fields";
 import { withArticle } from "@/lib/engineering/check-result";
 import { CONDUCTOR_SIZES } from "@/lib/engineering/tables/conductor-sizes";
 import { ESS_LOCATIONS } from "@/lib/engineering/storage-types";
+import { BATTERY_CIRCUIT_KINDS, INSULATIONS, OPERATING_MODES, RACEWAY_TYPES, SERVICE_VOLTAGES_V, TRADE_SIZES } from "./design-options";
 
-export const TRADE_SIZES = ["1/2", "3/4", "1", "1-1/4", "1-1/2", "2"] as const;
-/** How a run is enclosed: no raceway (cable or free air), a conduit, or Type MC cable (metal armor). */
-export const RACEWAY_TYPES = ["none", "EMT", "PVC-40", "MC"] as const;
-export const SERVICE_VOLTAGES_V = ["120", "208", "240", "277", "480"] as const;
-/** Conductor insulations the review knows: Table 5 holds THWN-2, XHHW-2 and RHW-2; PV wire and USE-2 need the maker's area in a raceway. */
-export const INSULATIONS = ["PV wire", "USE-2", "THWN-2", "XHHW-2", "RHW-2"] as const;
+// The plain choices live in a zod-free module the editor's steps import; importers of this module keep finding them here.
+export {
+  BATTERY_CIRCUIT_KINDS,
+  DESIGN_STEPS,
+  INSULATIONS,
+  OPERATING_MODES,
+  RACEWAY_TYPES,
+  SERVICE_VOLTAGES_V,
+  TRADE_SIZES,
+} from "./design-options";
+
 const YES_NO = ["", "yes", "no"] as const;
 
 const blankToUndefined = (v: unknown) => (v === "" || v === null ? undefined : v);
@@ -57,9 +63,6 @@ const breakerList = safeString()
     }
     return parts;
   });
-
-export const OPERATING_MODES = ["backup-only", "self-consumption", "export", "non-export"] as const;
-export const BATTERY_CIRCUIT_KINDS = ["battery-dc", "battery-inverter-output"] as const;
 
 /** What storage shares whichever way it couples: the batteries, how they run, the backup loads panel, the disconnect and circuits. */
 const storageParts = {
@@ -320,13 +323,3 @@ function loosen(schema: z.ZodType): z.ZodType {
 export const DesignDraft = loosen(DesignInput) as z.ZodType<DeepLoose<DesignFormValues>>;
 type DeepLoose<T> = T extends Leaf ? Leaf : T extends (infer U)[] ? DeepLoose<U>[] | undefined : { [K in keyof T]?: DeepLoose<T[K]> };
 export type DesignDraft = DeepLoose<DesignFormValues>;
-
-/** The editor's steps; each but the last edits one top-level part of the design. */
-export const DESIGN_STEPS = [
-  { key: "equipment", title: "Equipment" },
-  { key: "array", title: "Arrays and strings" },
-  { key: "service", title: "Service and connection" },
-  { key: "runs", title: "Conductor runs" },
-  { key: "storage", title: "Storage" },
-  { key: "review", title: "Review" },
-] as const;

@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
 import { ProjectSubpageHeader } from "@/components/projects/project-subpage-header";
+import { editorValues } from "@/lib/design/defaults";
+import { checkEditorValues } from "@/lib/design/editor-checks";
 import { can } from "@/lib/domain/permissions";
 import { requireUser } from "@/lib/server/auth";
 import { getDesignWithContext } from "@/lib/server/data/designs";
@@ -24,6 +26,8 @@ export default async function DesignPage({ params }: { params: Promise<{ project
   // Items the design already uses stay choosable even when archived since.
   const known = new Set(catalog.map((c) => c.id));
   const choices = [...catalog, ...context.catalog.filter((c) => !known.has(c.id))];
+  // The first paint already shows the checks the editor would run on the draft as it opens.
+  const initialChecks = checkEditorValues(editorValues(design.draft), choices, context.conditions);
   return (
     <div className="space-y-4">
       <ProjectSubpageHeader project={project} title="Design">
@@ -38,6 +42,7 @@ export default async function DesignPage({ params }: { params: Promise<{ project
         projectId={project.id}
         initialDraft={design.draft}
         initialRevision={design.revision}
+        initialChecks={initialChecks}
         catalog={choices}
         conditions={context.conditions}
         readOnly={!can(viewer, "project:edit")}

@@ -1,18 +1,20 @@
 "use client";
 
 import { clsx } from "clsx";
+import dynamic from "next/dynamic";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
-import { runDesignReview } from "@/lib/design/run-review";
+import { editorValues } from "@/lib/design/defaults";
+import type { EditorChecks, checkEditorValues } from "@/lib/design/editor-checks";
 import type { SiteConditions } from "@/lib/design/to-engine";
-import { DESIGN_STEPS, DesignInput, type DesignDraft, type DesignFormValues } from "@/lib/schemas/design";
+import type { DesignDraft, DesignFormValues } from "@/lib/schemas/design";
+import { DESIGN_STEPS } from "@/lib/schemas/design-options";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 import type { saveDesignAction } from "../actions";
 import { ArrayStep } from "./array-step";
 import { EquipmentStep } from "./equipment-step";
 import { ReviewPanel } from "./review-panel";
-import { ReviewStep } from "./review-step";
 import { RunsStep } from "./runs-step";
 import { ServiceStep } from "./service-step";
 import { StorageStep } from "./storage-step";
@@ -20,6 +22,17 @@ import type { Issues } from "./design-fields";
 
 type SaveState = { kind: "idle" | "saving" | "saved" | "error"; text: string };
 const AUTOSAVE_MS = 1200;
+// A chunk that never arrives does not always reject the import: after this long the editor says so.
+const LIVE_CHECKS_GIVE_UP_MS = 15_000;
+
+// The diagram and the conductor schedule load when the Review step opens; the placeholder holds the step's room meanwhile.
+const ReviewStep = dynamic(() => import("./review-step").then((m) => m.ReviewStep), {
+  loading: () => (
+    <p className="min-h-[36rem] text-sm text-ink-faint" role="status" data-testid="review-step-loading">
+      Loading the review…
+    </p>
+  ),
+});
 
 /** Whether a field path is marked dirty in react-hook-form's nested dirtyFields. */
 function isDirty(dirty: unknown, path: string): boolean {
@@ -36,16 +49,15 @@ export function DesignEditor(props: {
   projectId: string;
   initialDraft: DesignDraft;
   initialRevision: number;
+  /** The checks of the initial draft, worked out on the server: shown until the live checks have loaded. */
+  initialChecks: EditorChecks;
   catalog: EquipmentDto[];
   conditions: SiteConditions | null;
   readOnly: boolean;
   save: typeof saveDesignAction;
 }) {
   const { projectId, catalog, conditions, readOnly } = props;
-  // A design saved before storage existed has no battery: the storage step opens on "No battery".
-  const form = useForm<DesignFormValues>({
-    defaultValues: { ...props.initialDraft, storage: props.initialDraft.storage ?? { coupling: "none" } } as DesignFormValues,
-  });
+  const form = useForm<DesignFormValues>({ defaultValues: editorValues(props.initialDraft) });
   const values = useWatch({ control: form.control });
   const [step, setStep] = useState(0);
   const [visited, setVisited] = useState<Set<number>>(() => new Set(props.initialRevision > 0 ? [0, 1, 2, 3, 4] : []));
@@ -55,19 +67,38 @@ export function DesignEditor(props: {
   });
   const pending = useRef(false);
 
-  const outcome = useMemo(() => runDesignReview(values, catalog, conditions), [values, catalog, conditions]);
-  const { dirtyFields } = form.formState;
+  // The engine and the schema load after hydration, off the first-load path; until then the server's checks
+  // of the initial draft stand, which are what they would compute for an untouched form.
+  const [liveCheck, setLiveCheck] = useState<{ run: typeof checkEditorValues } | "loading" | "failed">("loading");
+  useEffect(() => {
+    let current = true;
+    // A late arrival still takes over from "failed".
+    import("@/lib/design/editor-checks").then(
+      (m) => current && setLiveCheck({ run: m.checkEditorValues }),
+      () => current && setLiveCheck("failed"),
+    );
+    const giveUp = setTimeout(() => current && setLiveCheck((s) => (s === "loading" ? "failed" : s)), LIVE_CHECKS_GIVE_UP_MS);
+    return () => {
+      current = false;
+      clearTimeout(giveUp);
+    };
+  }, []);
+  const checks = useMemo(
+    () => (typeof liveCheck === "object" ? liveCheck.run(values, catalog, conditions) : props.initialChecks),
+    [liveCheck, values, catalog, conditions, props.initialChecks],
+  );
+  const { outcome } = checks;
+  const { dirtyFields, isDirty: changed } = form.formState;
+  const stale = typeof liveCheck !== "object" && changed;
   const issues: Issues = useMemo(() => {
-    const parsed = DesignInput.safeParse(values);
     const out: Issues = {};
-    for (const issue of parsed.success ? [] : parsed.error.issues) {
-      const path = issue.path.join(".");
+    for (const { path, message } of checks.issues) {
       const stepIndex = DESIGN_STEPS.findIndex((s) => path.startsWith(s.key));
       // A fresh form is not a list of errors: show a field's problem once it was typed in or its step was left.
-      if (!(path in out) && (visited.has(stepIndex) || isDirty(dirtyFields, path))) out[path] = issue.message;
+      if (!(path in out) && (visited.has(stepIndex) || isDirty(dirtyFields, path))) out[path] = message;
     }
     return out;
-  }, [values, visited, dirtyFields]);
+  }, [checks, visited, dirtyFields]);
 
   async function saveNow() {
     if (readOnly) return;
@@ -139,7 +170,7 @@ export function DesignEditor(props: {
               {step === 0 ? <EquipmentStep catalog={catalog} issues={issues} /> : null}
               {step === 1 ? <ArrayStep issues={issues} /> : null}
               {step === 2 ? <ServiceStep issues={issues} /> : null}
-              {step === 3 ? <RunsStep issues={issues} outcome={outcome} /> : null}
+              {step === 3 ? <RunsStep issues={issues} countedConductors={checks.countedConductors} /> : null}
               {step === 4 ? <StorageStep catalog={catalog} issues={issues} /> : null}
               {step === 5 ? <ReviewStep outcome={outcome} onGoToStep={goTo} /> : null}
             </fieldset>
@@ -170,8 +201,15 @@ export function DesignEditor(props: {
           </div>
         </div>
         {step < DESIGN_STEPS.length - 1 ? (
-          <aside className="panel h-fit lg:sticky lg:top-4" aria-label="Live review">
+          <aside className="panel h-fit lg:sticky lg:top-4" aria-label="Live review" aria-busy={stale}>
             <h2 className="mb-2">Live review</h2>
+            {stale && liveCheck === "loading" ? <p className="mb-2 text-xs text-ink-faint">Checking your changes…</p> : null}
+            {stale && liveCheck === "failed" ? (
+              <p className="mb-2 text-sm font-medium text-ink" role="alert">
+                The live checks could not load, so these are the checks of the design as it opened. Your input is still saved; reload the
+                page to check it.
+              </p>
+            ) : null}
             <ReviewPanel outcome={outcome} onGoToStep={goTo} />
           </aside>
         ) : null}

@@ -4,7 +4,7 @@ import { CheckItem } from "@/components/review/check-item";
 import { CheckStatusChip } from "@/components/review/check-status";
 import type { DesignReviewOutcome } from "@/lib/design/run-review";
 import type { CheckResult } from "@/lib/engineering";
-import { DESIGN_STEPS } from "@/lib/schemas/design";
+import { DESIGN_STEPS } from "@/lib/schemas/design-options";
 
 const ORDER = { fail: 0, warn: 1, pass: 2 } as const;
 const stepOf = (path: string) =>

@@ -2,24 +2,17 @@
 
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
-import type { DesignReviewOutcome } from "@/lib/design/run-review";
-import { circuitConductorCount, unlessInputError } from "@/lib/engineering";
 import { CONDUCTOR_SIZES, sizeLabel } from "@/lib/engineering/tables/conductor-sizes";
-import { INSULATIONS, RACEWAY_TYPES, TRADE_SIZES, type DesignFormValues } from "@/lib/schemas/design";
+import type { DesignFormValues } from "@/lib/schemas/design";
+import { INSULATIONS, RACEWAY_TYPES, TRADE_SIZES } from "@/lib/schemas/design-options";
 import { CheckboxInput, SelectInput, TextInput, options, type Issues } from "./design-fields";
 import { nextLineId } from "./line-ids";
 
 const SIZES = options(CONDUCTOR_SIZES, (s) => sizeLabel(s as (typeof CONDUCTOR_SIZES)[number]));
 const RACEWAY_NAMES: Record<string, string> = { none: "None", EMT: "EMT", "PVC-40": "PVC Sch 40", MC: "MC cable" };
 
-/** The current-carrying conductors the review counts for a run from its circuits, once the design reviews. */
-function countedConductors(outcome: DesignReviewOutcome, lineId: string): number | null {
-  if (outcome.status !== "reviewed") return null;
-  const run = outcome.design.runs.find((r) => r.id === lineId);
-  return run ? unlessInputError(() => circuitConductorCount(outcome.design, run)) : null;
-}
-
-export function RunsStep({ issues, outcome }: { issues: Issues; outcome: DesignReviewOutcome }) {
+/** `countedConductors`: the current-carrying conductors the review counts for each run from its circuits, once the design reviews. */
+export function RunsStep({ issues, countedConductors }: { issues: Issues; countedConductors: Record<string, number | null> }) {
   const { control } = useFormContext<DesignFormValues>();
   const runs = useFieldArray({ control, name: "runs" });
   const strings = useWatch({ control, name: "array.strings" }) ?? [];
@@ -45,7 +38,7 @@ export function RunsStep({ issues, outcome }: { issues: Issues; outcome: DesignR
       </p>
       {issues.runs ? <p className="text-xs text-result-fail">{issues.runs}</p> : null}
       {runs.fields.map((field, i) => {
-        const counted = countedConductors(outcome, field.lineId);
+        const counted = Object.hasOwn(countedConductors, field.lineId) ? (countedConductors[field.lineId] ?? null) : null;
         return (
           <fieldset key={field.id} className="space-y-3 rounded border border-paper-edge p-3" data-testid="conductor-run">
             <div className="grid gap-3 sm:grid-cols-3">

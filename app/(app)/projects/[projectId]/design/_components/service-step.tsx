@@ -2,7 +2,8 @@
 
 import { useFormContext, useWatch } from "react-hook-form";
 import { CONDUCTOR_SIZES, sizeLabel } from "@/lib/engineering/tables/conductor-sizes";
-import { SERVICE_VOLTAGES_V, type DesignFormValues } from "@/lib/schemas/design";
+import type { DesignFormValues } from "@/lib/schemas/design";
+import { SERVICE_VOLTAGES_V } from "@/lib/schemas/design-options";
 import { CheckboxInput, MATERIALS, SelectInput, TextInput, YES_NO, options, type Issues } from "./design-fields";
 
 const SIZES = options(CONDUCTOR_SIZES, (s) => sizeLabel(s as (typeof CONDUCTOR_SIZES)[number]));

@@ -3,7 +3,8 @@
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { CONDUCTOR_SIZES, sizeLabel } from "@/lib/engineering/tables/conductor-sizes";
-import { BATTERY_CIRCUIT_KINDS, INSULATIONS, OPERATING_MODES, type DesignFormValues } from "@/lib/schemas/design";
+import type { DesignFormValues } from "@/lib/schemas/design";
+import { BATTERY_CIRCUIT_KINDS, INSULATIONS, OPERATING_MODES } from "@/lib/schemas/design-options";
 import type { EquipmentDto } from "@/lib/schemas/equipment";
 import { CheckboxInput, MATERIALS, SelectInput, TextInput, YES_NO, options, type Issues } from "./design-fields";
 import { nextLineId } from "./line-ids";
