@@ -20,6 +20,9 @@ import { getOrganization } from "./organizations";
 
 type DeskFilingRow = Omit<DeskFiling, "usualReviewDays"> & { authorityId: string | null };
 
+// A permit that lapses within the notice period: on the desk unless a final inspection passed.
+const LAPSE_CANDIDATE = "(f.kind = 'permit' AND f.status = 'approved' AND f.expires_on <= :lapseHorizon)";
+
 /**
  * The filings on the viewer's desk on `today` as the desk rules read them, with days in the organization's zone.
  * One statement reads only the filings that could be on the desk today (a follow-up due, with the authority,
@@ -39,23 +42,33 @@ export async function listDeskFilings({
 }): Promise<DeskFiling[]> {
   const [rows, reviewDays] = await Promise.all([
     db().query<DeskFilingRow>(
-      `SELECT f.id AS "filingId", p.id AS "projectId", p.number AS "projectNumber", p.customer_name AS "customerName",
+      // Visits booked from today through the look-ahead: one small read the filter and the rows share.
+      // A filing's latest round matters only while corrections are requested, its visits only when one
+      // is booked or its permit nears expiry, so only those rows pay for reading them.
+      `WITH booked AS (SELECT DISTINCT filing_id FROM inspections
+                        WHERE organization_id = :org AND result IS NULL AND scheduled_for BETWEEN :today AND :lastVisit)
+       SELECT f.id AS "filingId", p.id AS "projectId", p.number AS "projectNumber", p.customer_name AS "customerName",
               f.kind, f.authority_name AS "authorityName", f.authority_id AS "authorityId", f.status,
               to_char(f.status_since AT TIME ZONE :zone, 'YYYY-MM-DD') AS "statusSinceDay",
               f.expires_on::text AS "expiresOn", f.next_follow_up_on::text AS "nextFollowUpOn",
-              (SELECT json_build_object('number', r.number, 'receivedOn', r.received_on::text, 'answered', r.answered_at IS NOT NULL,
-                        'openItems', (SELECT count(*)::int FROM filing_items i WHERE i.round_id = r.id AND NOT i.resolved))
-                 FROM correction_rounds r WHERE r.filing_id = f.id ORDER BY r.number DESC LIMIT 1) AS "latestRound",
-              COALESCE((SELECT json_agg(json_build_object('id', v.id, 'kind', v.kind, 'scheduledFor', v.scheduled_for::text,
-                        'timeWindow', v.time_window, 'result', v.result))
-                 FROM inspections v WHERE v.filing_id = f.id), '[]'::json) AS inspections
+              CASE WHEN f.status = 'corrections_requested' THEN
+                (SELECT json_build_object('number', r.number, 'receivedOn', r.received_on::text, 'answered', r.answered_at IS NOT NULL,
+                          'openItems', (SELECT count(*)::int FROM filing_items i WHERE i.round_id = r.id AND NOT i.resolved))
+                   FROM correction_rounds r WHERE r.filing_id = f.id ORDER BY r.number DESC LIMIT 1)
+              END AS "latestRound",
+              CASE WHEN f.id IN (SELECT filing_id FROM booked) OR ${LAPSE_CANDIDATE} THEN
+                COALESCE((SELECT json_agg(json_build_object('id', v.id, 'kind', v.kind, 'scheduledFor', v.scheduled_for::text,
+                          'timeWindow', v.time_window, 'result', v.result))
+                   FROM inspections v WHERE v.filing_id = f.id), '[]'::json)
+              ELSE '[]'::json END AS inspections
          FROM filings f JOIN projects p ON p.id = f.project_id
-        WHERE p.organization_id = :org AND p.hold_state IS NULL AND (:everyone OR p.coordinator_id = :viewerId)
+        WHERE f.organization_id = :org AND p.organization_id = :org
+          AND p.hold_state IS NULL AND (:everyone OR p.coordinator_id = :viewerId)
           AND f.status <> 'withdrawn'
           AND (f.next_follow_up_on <= :today
                OR f.status IN (:withTheAuthority)
-               OR (f.kind = 'permit' AND f.status = 'approved' AND f.expires_on <= :lapseHorizon)
-               OR f.id IN (SELECT filing_id FROM inspections WHERE result IS NULL AND scheduled_for BETWEEN :today AND :lastVisit))`,
+               OR ${LAPSE_CANDIDATE}
+               OR f.id = ANY(ARRAY(SELECT filing_id FROM booked)))`,
       {
         type: QueryTypes.SELECT,
         replacements: {
