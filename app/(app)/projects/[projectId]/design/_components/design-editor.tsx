@@ -4,9 +4,11 @@ import { clsx } from "clsx";
 import dynamic from "next/dynamic";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, useWatch } from "react-hook-form";
+import { LateChecksNotice } from "@/components/forms/late-checks-notice";
+import { useModuleAfterHydration } from "@/components/forms/use-module-after-hydration";
 import { Button } from "@/components/ui/button";
 import { editorValues } from "@/lib/design/defaults";
-import type { EditorChecks, checkEditorValues } from "@/lib/design/editor-checks";
+import type { EditorChecks } from "@/lib/design/editor-checks";
 import type { SiteConditions } from "@/lib/design/to-engine";
 import type { DesignDraft, DesignFormValues } from "@/lib/schemas/design";
 import { DESIGN_STEPS } from "@/lib/schemas/design-options";
@@ -22,8 +24,6 @@ import type { Issues } from "./design-fields";
 
 type SaveState = { kind: "idle" | "saving" | "saved" | "error"; text: string };
 const AUTOSAVE_MS = 1200;
-// A chunk that never arrives does not always reject the import: after this long the editor says so.
-const LIVE_CHECKS_GIVE_UP_MS = 15_000;
 
 // The diagram and the conductor schedule load when the Review step opens; the placeholder holds the step's room meanwhile.
 const ReviewStep = dynamic(() => import("./review-step").then((m) => m.ReviewStep), {
@@ -69,22 +69,9 @@ export function DesignEditor(props: {
 
   // The engine and the schema load after hydration, off the first-load path; until then the server's checks
   // of the initial draft stand, which are what they would compute for an untouched form.
-  const [liveCheck, setLiveCheck] = useState<{ run: typeof checkEditorValues } | "loading" | "failed">("loading");
-  useEffect(() => {
-    let current = true;
-    // A late arrival still takes over from "failed".
-    import("@/lib/design/editor-checks").then(
-      (m) => current && setLiveCheck({ run: m.checkEditorValues }),
-      () => current && setLiveCheck("failed"),
-    );
-    const giveUp = setTimeout(() => current && setLiveCheck((s) => (s === "loading" ? "failed" : s)), LIVE_CHECKS_GIVE_UP_MS);
-    return () => {
-      current = false;
-      clearTimeout(giveUp);
-    };
-  }, []);
+  const liveCheck = useModuleAfterHydration(() => import("@/lib/design/editor-checks"));
   const checks = useMemo(
-    () => (typeof liveCheck === "object" ? liveCheck.run(values, catalog, conditions) : props.initialChecks),
+    () => (typeof liveCheck === "object" ? liveCheck.module.checkEditorValues(values, catalog, conditions) : props.initialChecks),
     [liveCheck, values, catalog, conditions, props.initialChecks],
   );
   const { outcome } = checks;
@@ -203,13 +190,7 @@ export function DesignEditor(props: {
         {step < DESIGN_STEPS.length - 1 ? (
           <aside className="panel h-fit lg:sticky lg:top-4" aria-label="Live review" aria-busy={stale}>
             <h2 className="mb-2">Live review</h2>
-            {stale && liveCheck === "loading" ? <p className="mb-2 text-xs text-ink-faint">Checking your changes…</p> : null}
-            {stale && liveCheck === "failed" ? (
-              <p className="mb-2 text-sm font-medium text-ink" role="alert">
-                The live checks could not load, so these are the checks of the design as it opened. Your input is still saved; reload the
-                page to check it.
-              </p>
-            ) : null}
+            <LateChecksNotice state={liveCheck} changed={changed} shown="the design as it opened" />
             <ReviewPanel outcome={outcome} onGoToStep={goTo} />
           </aside>
         ) : null}

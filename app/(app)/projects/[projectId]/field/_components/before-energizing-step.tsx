@@ -1,4 +1,5 @@
-import { insulationRequirement, stringVocWindow } from "@/lib/engineering/commissioning";
+import { insulationRequirement } from "@/lib/engineering/commissioning/insulation-resistance";
+import { stringVocWindow } from "@/lib/engineering/commissioning/string-voc";
 import { LabelledInput, ResultLine, Step } from "./reading-parts";
 import { fmtV, type StepProps } from "./step-props";
 

@@ -4,16 +4,18 @@
 import { clsx } from "clsx";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { useForm, useWatch, type Path, type UseFormRegisterReturn } from "react-hook-form";
+import { LateChecksNotice } from "@/components/forms/late-checks-notice";
+import { useModuleAfterHydration } from "@/components/forms/use-module-after-hydration";
 import { useTimeZone } from "@/components/time/local-time";
 import { Button } from "@/components/ui/button";
-import { shutdownWindow } from "@/lib/engineering/commissioning";
+import { shutdownWindow } from "@/lib/engineering/commissioning/shutdown-string";
 import type { CommissioningFacts } from "@/lib/field/commissioning-facts";
 import { formatInZone } from "@/lib/domain/time-zones";
 import type { CommissioningReadings } from "@/lib/schemas/commissioning";
 import type { saveCommissioningAction } from "../actions";
 import { BeforeEnergizingStep } from "./before-energizing-step";
 import { toFormValues, toReadingsInput, type FormValues } from "./form-values";
-import type { LiveRecord, checkLiveRecord } from "./live-record";
+import type { LiveRecord } from "./live-record";
 import { GridProfileStep } from "./grid-profile-step";
 import { InverterStep } from "./inverter-step";
 import { PairingStep } from "./pairing-step";
@@ -51,17 +53,10 @@ export function CommissioningForm(props: {
 
   // The checker (the readings' schema and the checks) loads after the form is on screen; until then, and
   // while nothing was changed, the page's checks of the saved readings stand.
-  const [checker, setChecker] = useState<typeof checkLiveRecord | null>(null);
-  useEffect(() => {
-    let live = true;
-    void import("./live-record").then((m) => live && setChecker(() => m.checkLiveRecord));
-    return () => {
-      live = false;
-    };
-  }, []);
+  const checker = useModuleAfterHydration(() => import("./live-record"));
   const { isDirty } = form.formState;
   const { errors, results, completion } = useMemo(
-    () => (checker && isDirty ? checker(values, facts) : props.initialCheck),
+    () => (typeof checker === "object" && isDirty ? checker.module.checkLiveRecord(values, facts) : props.initialCheck),
     [checker, isDirty, values, facts, props.initialCheck],
   );
   const byId = (id: string) => results.find((r) => r.id === id);
@@ -124,6 +119,7 @@ export function CommissioningForm(props: {
           {completion.waiting.length ? ` · ${completion.waiting.length} waiting` : ""}
         </span>
       </div>
+      <LateChecksNotice state={checker} changed={isDirty} shown="the readings as last saved" />
 
       <fieldset disabled={readOnly} className="space-y-4">
         {facts.stringTests.length ? <BeforeEnergizingStep {...props_()} /> : null}

@@ -1,7 +1,8 @@
-// The design editor ships to the browser with its first load kept small: the review engine and zod
-// arrive after hydration (lib/design/editor-checks.ts) or with the Review step (review-step.tsx). This
-// walks the editor's static imports (type-only ones and import() left out, as the bundler does) and
-// fails when one of them pulls the engine or zod back into the first load.
+// The heaviest pages ship to the browser with their first load kept small: the design editor's review
+// engine and zod arrive after hydration (lib/design/editor-checks.ts) or with the Review step
+// (review-step.tsx), the field record's readings schema and checks after its form (live-record.ts),
+// the reports' chart library after the page. This walks each entry's static imports (type-only ones
+// and import() left out, as the bundler does) and fails when one pulls them back into the first load.
 import { existsSync, readFileSync } from "node:fs";
 import path from "node:path";
 import ts from "typescript";
@@ -9,6 +10,8 @@ import { describe, expect, it } from "vitest";
 
 const root = process.cwd();
 const EDITOR = "app/(app)/projects/[projectId]/design/_components/design-editor.tsx";
+const FIELD_FORM = "app/(app)/projects/[projectId]/field/_components/commissioning-form.tsx";
+const REPORT_CHARTS = "app/(app)/reports/_components/lazy-report-charts.tsx";
 
 function resolve(from: string, spec: string): string | null {
   const base = spec.startsWith("@/")
@@ -90,5 +93,38 @@ describe("the design editor's first load", () => {
     const checks = reach("lib/design/editor-checks.ts");
     expect(checks.packages).toContain("zod");
     expect(checks.files).toContain("lib/engineering/index.ts");
+  });
+});
+
+describe("the field record's first load", () => {
+  const { files, packages } = reach(FIELD_FORM);
+
+  it("reaches the form's steps and the form library", () => {
+    expect(files).toContain("app/(app)/projects/[projectId]/field/_components/form-values.ts");
+    expect(packages).toContain("react-hook-form");
+  });
+
+  it("carries neither zod nor the readings' schema nor the whole set of checks", () => {
+    expect(packages).not.toContain("zod");
+    for (const heavy of [
+      "lib/schemas/commissioning.ts",
+      "lib/field/commissioning-facts.ts",
+      "lib/engineering/commissioning/check-record.ts",
+      "app/(app)/projects/[projectId]/field/_components/live-record.ts",
+    ])
+      expect(files).not.toContain(heavy);
+  });
+
+  it("would see them if the form imported its checker directly", () => {
+    const live = reach("app/(app)/projects/[projectId]/field/_components/live-record.ts");
+    expect(live.packages).toContain("zod");
+    expect(live.files).toContain("lib/engineering/commissioning/check-record.ts");
+  });
+});
+
+describe("the reports page's first load", () => {
+  it("leaves the chart library to the charts loaded after the page", () => {
+    expect(reach(REPORT_CHARTS).packages).not.toContain("recharts");
+    expect(reach("app/(app)/reports/_components/report-charts.tsx").packages).toContain("recharts");
   });
 });
